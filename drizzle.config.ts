@@ -1,0 +1,9 @@
+import { defineConfig } from 'drizzle-kit';
+
+export default defineConfig({
+  dialect: 'sqlite',
+  schema: './server/db/schema/*.ts',
+  out: './drizzle',
+  casing: 'snake_case',
+  dbCredentials: { url: process.env.DATABASE_PATH ?? 'data/gripline.db' },
+});

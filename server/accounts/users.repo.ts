@@ -1,0 +1,44 @@
+import { asc, eq, sql } from 'drizzle-orm';
+import type { Role } from '@shared/roles';
+import type { Executor } from '../db/client';
+import { users, type UserRow } from '../db/schema/users';
+
+export function findUserByEmail(db: Executor, email: string): UserRow | undefined {
+  return db.select().from(users).where(eq(sql`lower(${users.email})`, email.toLowerCase())).get();
+}
+
+export function findUserById(db: Executor, id: number): UserRow | undefined {
+  return db.select().from(users).where(eq(users.id, id)).get();
+}
+
+export function listUsers(db: Executor): UserRow[] {
+  return db.select().from(users).orderBy(asc(users.name)).all();
+}
+
+export function insertUser(
+  db: Executor,
+  values: { email: string; name: string; role: Role; passwordHash: string; phone?: string | null },
+): UserRow {
+  return db.insert(users).values(values).returning().get();
+}
+
+export function updateUser(
+  db: Executor,
+  id: number,
+  values: Partial<Pick<UserRow, 'role' | 'passwordHash' | 'deactivatedAt' | 'name'>>,
+): UserRow | undefined {
+  return db.update(users).set(values).where(eq(users.id, id)).returning().get();
+}
+
+export function countActiveLeads(db: Executor): number {
+  const row = db
+    .select({ n: sql<number>`count(*)` })
+    .from(users)
+    .where(sql`${users.role} = 'lead' and ${users.deactivatedAt} is null`)
+    .get();
+  return row?.n ?? 0;
+}
+
+export function countUsers(db: Executor): number {
+  return db.select({ n: sql<number>`count(*)` }).from(users).get()?.n ?? 0;
+}

@@ -1,0 +1,90 @@
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import express from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { AppConfig } from './config';
+import type { ServiceContext } from './context';
+import { authRouter } from './features/auth/auth.router';
+import { healthRouter } from './features/health/health.router';
+import { invitationsRouter } from './features/invitations/invitations.router';
+import { mailRouter } from './features/mail/mail.router';
+import { passwordResetRouter } from './features/password-reset/password-reset.router';
+import { peopleRouter } from './features/people/people.router';
+import { loadUser } from './middleware/auth';
+import { csrf } from './middleware/csrf';
+import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { signInLimiters } from './middleware/rate-limit';
+import { sessionMiddleware } from './middleware/session';
+
+/** Link tokens never reach the logs. */
+const hideTokens = (url: string) => url.replace(/[A-Za-z0-9_-]{43}/g, '[token]');
+
+/** Builds the whole app from a config; it does not listen (server/index.ts does). */
+export function createApp(config: AppConfig) {
+  const app = express();
+  if (config.trustProxyHops > 0) app.set('trust proxy', config.trustProxyHops);
+  app.disable('x-powered-by');
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'media-src': ["'self'", 'blob:'],
+          'upgrade-insecure-requests': config.secureCookies ? [] : null,
+        },
+      },
+      strictTransportSecurity: config.secureCookies,
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger: config.logger,
+      serializers: {
+        req: (req: { method: string; url: string }) => ({ method: req.method, url: hideTokens(req.url) }),
+      },
+    }),
+  );
+
+  const ctx: ServiceContext = {
+    db: config.db,
+    mailer: config.mailer,
+    publicUrl: config.publicUrl,
+    now: config.now ?? (() => new Date()),
+  };
+  const { middleware: session, store } = sessionMiddleware(config);
+
+  const api = express.Router();
+  api.use((req, _res, next) => {
+    req.ctx = ctx;
+    next();
+  });
+  api.use('/health', healthRouter());
+  api.use(express.json({ limit: '100kb' }));
+  api.use(session);
+  api.use(loadUser(config.db));
+  api.use(csrf.csrfSynchronisedProtection);
+  api.use('/auth', authRouter(signInLimiters(config.rateLimit)));
+  api.use('/auth/password-reset', passwordResetRouter());
+  api.use('/invitations', invitationsRouter());
+  api.use('/users', peopleRouter());
+  api.use('/mail', mailRouter(config.catchingMail));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  if (config.clientDir && existsSync(join(config.clientDir, 'index.html'))) {
+    const indexHtml = join(config.clientDir, 'index.html');
+    app.use('/assets', express.static(join(config.clientDir, 'assets'), { immutable: true, maxAge: '1y' }));
+    app.use(express.static(config.clientDir, { index: false }));
+    app.use((req, res, next) => {
+      if (req.method !== 'GET' && req.method !== 'HEAD') return next();
+      res.sendFile(indexHtml);
+    });
+  }
+
+  app.use(errorHandler);
+  return Object.assign(app, { sessionStore: store });
+}
+
+export type App = ReturnType<typeof createApp>;

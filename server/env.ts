@@ -1,0 +1,29 @@
+import { z } from 'zod';
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  HOST: z.string().default('0.0.0.0'),
+  DATABASE_PATH: z.string().min(1).default('data/gripline.db'),
+  SESSION_SECRET: z.string().min(32, { error: 'SESSION_SECRET must be at least 32 characters.' }).optional(),
+  SESSION_IDLE_MINUTES: z.coerce.number().int().positive().default(480),
+  SECURE_COOKIES: z.stringbool().default(false),
+  PUBLIC_URL: z.url().optional(),
+  SMTP_URL: z.url().optional(),
+  MAIL_FROM: z.string().default('Gripline <gripline@example.org>'),
+  TRUST_PROXY_HOPS: z.coerce.number().int().min(0).default(0),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  SEED_DEMO: z.stringbool().default(true),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+/** Reads the environment once; a bad value stops the start with a message that names it. */
+export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const result = envSchema.safeParse(source);
+  if (!result.success) {
+    const lines = result.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
+    throw new Error(`Gripline cannot start; fix these settings:\n${lines.join('\n')}`);
+  }
+  return result.data;
+}

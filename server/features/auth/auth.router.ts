@@ -1,0 +1,37 @@
+import { Router } from 'express';
+import type { RequestHandler } from 'express';
+import { loginBodySchema } from '@shared/schemas/auth';
+import { toUser } from '../../accounts/public-user';
+import { requireUser } from '../../middleware/auth';
+import { csrf } from '../../middleware/csrf';
+import { SESSION_COOKIE } from '../../middleware/session';
+import { endSession, signInSession } from '../../lib/session-helpers';
+import { parseInput } from '../../lib/validate';
+import { authenticate } from './auth.service';
+
+export function authRouter(loginLimiters: RequestHandler[]) {
+  const router = Router();
+
+  router.get('/csrf', (req, res) => {
+    res.json({ token: csrf.generateToken(req) });
+  });
+
+  router.post('/login', ...loginLimiters, async (req, res) => {
+    const body = parseInput(loginBodySchema, req.body);
+    const user = await authenticate(req.ctx, body.email, body.password);
+    const csrfToken = await signInSession(req, user.id);
+    res.json({ user: toUser(user), csrfToken });
+  });
+
+  router.get('/me', (req, res) => {
+    res.json({ user: toUser(requireUser(req)) });
+  });
+
+  router.post('/logout', async (req, res) => {
+    await endSession(req);
+    res.clearCookie(SESSION_COOKIE, { path: '/' });
+    res.status(204).end();
+  });
+
+  return router;
+}

@@ -1,0 +1,70 @@
+import { createServer } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { dirname, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { createApp } from './app';
+import { migrateDatabase, openDatabase } from './db/client';
+import type { Env } from './env';
+import { createLogger } from './lib/logger';
+import { startMailCatcher, type MailCatcher } from './mail/mail-catcher';
+import { createSmtpMailer } from './mail/mailer';
+import { seedDemoChapter } from './seed/demo-chapter';
+import { resolveSessionSecret } from './session-secret';
+
+export const CLIENT_DIR = resolve(dirname(fileURLToPath(import.meta.url)), '../dist');
+
+export interface RunningGripline {
+  url: string;
+  port: number;
+  close(): Promise<void>;
+}
+
+/** Opens and migrates the database, seeds the demo chapter when empty, starts mail, listens. */
+export async function startGripline(env: Env): Promise<RunningGripline> {
+  const logger = createLogger(env.LOG_LEVEL);
+  const db = openDatabase(env.DATABASE_PATH);
+  migrateDatabase(db);
+  if (env.SEED_DEMO && (await seedDemoChapter(db))) logger.info('seeded the demo chapter into an empty database');
+
+  let catcher: MailCatcher | undefined;
+  if (!env.SMTP_URL) catcher = await startMailCatcher(db);
+  const mailer = createSmtpMailer(env.SMTP_URL ?? catcher!.url, env.MAIL_FROM);
+
+  const server = createServer();
+  await new Promise<void>((ok, fail) => {
+    server.once('error', fail);
+    server.listen(env.PORT, env.HOST, () => ok());
+  });
+  const { port } = server.address() as AddressInfo;
+  const url = `http://localhost:${port}`;
+  const app = createApp({
+    db,
+    sessionSecret: resolveSessionSecret(env.SESSION_SECRET, env.DATABASE_PATH),
+    secureCookies: env.SECURE_COOKIES,
+    sessionIdleMs: env.SESSION_IDLE_MINUTES * 60_000,
+    publicUrl: env.PUBLIC_URL ?? url,
+    mailer,
+    catchingMail: catcher !== undefined,
+    logger,
+    rateLimit: { windowMs: 15 * 60_000, perIp: 50, perAccount: 10 },
+    trustProxyHops: env.TRUST_PROXY_HOPS,
+    clientDir: CLIENT_DIR,
+  });
+  server.on('request', app);
+  logger.info({ url, mail: catcher ? 'caught locally' : 'SMTP_URL' }, 'Gripline is listening');
+
+  return {
+    url,
+    port,
+    async close() {
+      await new Promise<void>((ok) => {
+        server.close(() => ok());
+        server.closeAllConnections();
+      });
+      app.sessionStore.close();
+      mailer.close();
+      await catcher?.close();
+      db.$client.close();
+    },
+  };
+}

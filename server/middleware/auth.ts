@@ -1,0 +1,43 @@
+import type { NextFunction, Request, Response } from 'express';
+import { hasRole, type Role } from '@shared/roles';
+import { findUserById } from '../accounts/users.repo';
+import type { Database } from '../db/client';
+import type { UserRow } from '../db/schema/users';
+import { HttpError } from '../lib/http-error';
+
+declare module 'express-serve-static-core' {
+  interface Request {
+    user?: UserRow;
+  }
+}
+
+/** Loads the signed-in person on every request; a deactivated person's session ends at once. */
+export function loadUser(db: Database) {
+  return (req: Request, _res: Response, next: NextFunction) => {
+    const id = req.session?.userId;
+    if (id === undefined) return next();
+    const user = findUserById(db, id);
+    if (!user || user.deactivatedAt) {
+      req.session.destroy(() => next());
+      return;
+    }
+    req.user = user;
+    next();
+  };
+}
+
+export function requireUser(req: Request): UserRow {
+  if (!req.user) throw new HttpError(401, 'NOT_SIGNED_IN', 'Sign in to continue.');
+  return req.user;
+}
+
+/** Guard for a router: 401 when signed out, 403 when the role is below `role`. */
+export function requireRole(role: Role) {
+  return (req: Request, _res: Response, next: NextFunction) => {
+    const user = requireUser(req);
+    if (!hasRole(user.role, role)) {
+      throw new HttpError(403, 'FORBIDDEN', `Only a ${role === 'lead' ? 'chapter lead' : role} can do this.`);
+    }
+    next();
+  };
+}

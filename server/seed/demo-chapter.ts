@@ -1,0 +1,27 @@
+import type { Role } from '@shared/roles';
+import { hashPassword } from '../accounts/passwords';
+import { countUsers, insertUser } from '../accounts/users.repo';
+import type { Database } from '../db/client';
+
+export const DEMO_PASSWORD = 'gripline-demo';
+export const DEMO_CHAPTER = 'Larkspur Field Builders, Chapter 417 (invented)';
+
+/** An invented chapter: every person here is made up. */
+export const DEMO_PEOPLE: { email: string; name: string; role: Role; phone: string }[] = [
+  { email: 'lead@example.org', name: 'Dana Okafor', role: 'lead', phone: '555-0140' },
+  { email: 'quartermaster@example.org', name: 'Ruth Lindqvist', role: 'quartermaster', phone: '555-0141' },
+  { email: 'member@example.org', name: 'Marco Bellweather', role: 'member', phone: '555-0142' },
+  { email: 'ines.parra@example.org', name: 'Ines Parra', role: 'member', phone: '555-0143' },
+  { email: 'tomasz.wren@example.org', name: 'Tomasz Wren', role: 'member', phone: '555-0144' },
+  { email: 'kelechi.obi@example.org', name: 'Kelechi Obi', role: 'member', phone: '555-0145' },
+];
+
+/** Seeds the demo chapter into an empty database; returns false (and does nothing) otherwise. */
+export async function seedDemoChapter(db: Database): Promise<boolean> {
+  if (countUsers(db) > 0) return false;
+  const hashes = await Promise.all(DEMO_PEOPLE.map(() => hashPassword(DEMO_PASSWORD)));
+  db.transaction((tx) => {
+    DEMO_PEOPLE.forEach((p, i) => insertUser(tx, { ...p, passwordHash: hashes[i]! }));
+  });
+  return true;
+}

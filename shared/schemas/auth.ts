@@ -1,0 +1,45 @@
+import { z } from 'zod';
+import { ROLES } from '../roles';
+import { emailField, linkTokenField, newPasswordField, personNameField } from './fields';
+
+export const userSchema = z.object({
+  id: z.number(),
+  email: z.string(),
+  name: z.string(),
+  role: z.enum(ROLES),
+});
+export type User = z.infer<typeof userSchema>;
+
+export const loginBodySchema = z.object({
+  email: emailField,
+  password: z.string({ error: 'Enter your password.' }).min(1, { error: 'Enter your password.' }).max(200),
+});
+export type LoginBody = z.infer<typeof loginBodySchema>;
+
+export const loginResponseSchema = z.object({ user: userSchema, csrfToken: z.string() });
+export const meResponseSchema = z.object({ user: userSchema });
+export const csrfResponseSchema = z.object({ token: z.string() });
+
+export const resetRequestBodySchema = z.object({ email: emailField });
+export type ResetRequestBody = z.infer<typeof resetRequestBodySchema>;
+
+export const resetConfirmBodySchema = z.object({
+  token: linkTokenField,
+  password: newPasswordField,
+});
+export type ResetConfirmBody = z.infer<typeof resetConfirmBodySchema>;
+
+export const acceptInvitationBodySchema = z.object({
+  token: linkTokenField,
+  name: personNameField,
+  password: newPasswordField,
+});
+export type AcceptInvitationBody = z.infer<typeof acceptInvitationBodySchema>;
+
+export const invitationPreviewSchema = z.object({
+  email: z.string(),
+  role: z.enum(ROLES),
+  invitedBy: z.string(),
+  expiresAt: z.string(),
+});
+export type InvitationPreview = z.infer<typeof invitationPreviewSchema>;

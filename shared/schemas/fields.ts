@@ -1,0 +1,35 @@
+import { z } from 'zod';
+import { ROLES } from '../roles';
+
+export const emailField = z
+  .string({ error: 'Enter an e-mail address.' })
+  .trim()
+  .toLowerCase()
+  .pipe(z.email({ error: 'Enter a valid e-mail address, like name@example.org.' }));
+
+/** OWASP asks for at least 8 characters; 10 costs a hangar little and buys a lot. */
+export const PASSWORD_MIN = 10;
+export const PASSWORD_MAX = 200;
+
+export const newPasswordField = z
+  .string({ error: 'Enter a password.' })
+  .min(PASSWORD_MIN, { error: `Use at least ${PASSWORD_MIN} characters.` })
+  .max(PASSWORD_MAX, { error: `Use at most ${PASSWORD_MAX} characters.` });
+
+export const personNameField = z
+  .string({ error: 'Enter a name.' })
+  .trim()
+  .min(1, { error: 'Enter a name.' })
+  .max(80, { error: 'Keep the name under 80 characters.' });
+
+export const roleField = z.enum(ROLES, { error: 'Choose member, quartermaster or lead.' });
+
+/** Tokens in e-mailed links: 32 random bytes, base64url. */
+export const linkTokenField = z
+  .string({ error: 'The link is missing its code.' })
+  .regex(/^[A-Za-z0-9_-]{43}$/, { error: 'This link is not complete; open it again from the e-mail.' });
+
+export const idParam = z.coerce
+  .number({ error: 'The id must be a number.' })
+  .int({ error: 'The id must be a whole number.' })
+  .positive({ error: 'The id must be a positive number.' });

@@ -1,0 +1,14 @@
+import { z } from 'zod';
+
+export const caughtMailSchema = z.object({
+  id: z.number(),
+  from: z.string(),
+  to: z.array(z.string()),
+  subject: z.string(),
+  text: z.string(),
+  links: z.array(z.string()),
+  receivedAt: z.string(),
+});
+export type CaughtMail = z.infer<typeof caughtMailSchema>;
+export const caughtMailListSchema = z.object({ data: z.array(caughtMailSchema), catching: z.boolean() });
+export type CaughtMailList = z.infer<typeof caughtMailListSchema>;

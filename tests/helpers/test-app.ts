@@ -1,0 +1,96 @@
+import { desc } from 'drizzle-orm';
+import { pino } from 'pino';
+import request from 'supertest';
+import type { Role } from '@shared/roles';
+import { createApp, type App } from '../../server/app';
+import { hashPassword } from '../../server/accounts/passwords';
+import { insertUser } from '../../server/accounts/users.repo';
+import type { AppConfig } from '../../server/config';
+import { migrateDatabase, openDatabase, type Database } from '../../server/db/client';
+import { caughtMail } from '../../server/db/schema/mail';
+import type { UserRow } from '../../server/db/schema/users';
+import { startMailCatcher, type MailCatcher } from '../../server/mail/mail-catcher';
+import { createSmtpMailer } from '../../server/mail/mailer';
+
+export const PASSWORD = 'correct horse battery';
+let passwordHash: Promise<string> | undefined;
+
+export interface TestApp {
+  app: App;
+  db: Database;
+  catcher: MailCatcher;
+  clock: { now: Date };
+  addUser(values: { email: string; name?: string; role?: Role; password?: string }): Promise<UserRow>;
+  signIn(email: string, password?: string): Promise<SignedInAgent>;
+  anonymous(): Promise<SignedInAgent>;
+  lastMailTo(address: string): { subject: string; text: string; links: string[] } | undefined;
+  close(): Promise<void>;
+}
+
+export interface SignedInAgent {
+  agent: ReturnType<typeof request.agent>;
+  csrf: string;
+}
+
+/** A fresh app on a fresh in-memory database with the real migrations and the real mail catcher. */
+export async function buildTestApp(overrides: Partial<AppConfig> = {}): Promise<TestApp> {
+  const db = openDatabase(':memory:');
+  migrateDatabase(db);
+  const catcher = await startMailCatcher(db);
+  const mailer = createSmtpMailer(catcher.url, 'Gripline test <test@example.org>');
+  const clock = { now: new Date('2026-12-01T12:00:00Z') };
+  const app = createApp({
+    db,
+    sessionSecret: 'test-secret-that-is-long-enough-for-the-check',
+    secureCookies: false,
+    sessionIdleMs: 30 * 60_000,
+    publicUrl: 'http://gripline.test',
+    mailer,
+    catchingMail: true,
+    logger: pino({ level: 'silent' }),
+    rateLimit: { windowMs: 60_000, perIp: 100, perAccount: 100 },
+    trustProxyHops: 0,
+    now: () => clock.now,
+    ...overrides,
+  });
+
+  const anonymous = async (): Promise<SignedInAgent> => {
+    const agent = request.agent(app);
+    const res = await agent.get('/api/auth/csrf').expect(200);
+    return { agent, csrf: (res.body as { token: string }).token };
+  };
+
+  return {
+    app,
+    db,
+    catcher,
+    clock,
+    async addUser({ email, name = email.split('@')[0]!, role = 'member', password }) {
+      const hash = password ? await hashPassword(password) : await (passwordHash ??= hashPassword(PASSWORD));
+      return insertUser(db, { email, name, role, passwordHash: hash });
+    },
+    anonymous,
+    async signIn(email, password = PASSWORD) {
+      const { agent, csrf } = await anonymous();
+      const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email, password });
+      if (res.status !== 200) throw new Error(`sign-in failed for ${email}: ${res.status} ${JSON.stringify(res.body)}`);
+      return { agent, csrf: (res.body as { csrfToken: string }).csrfToken };
+    },
+    lastMailTo(address) {
+      const rows = db.select().from(caughtMail).orderBy(desc(caughtMail.id)).all();
+      const row = rows.find((r) => (JSON.parse(r.toAddresses) as string[]).includes(address));
+      return row && { subject: row.subject, text: row.textBody, links: JSON.parse(row.links) as string[] };
+    },
+    async close() {
+      app.sessionStore.close();
+      mailer.close();
+      await catcher.close();
+      db.$client.close();
+    },
+  };
+}
+
+/** The token at the end of an e-mailed link such as http://gripline.test/invite/<token>. */
+export function tokenFromLink(link: string): string {
+  return link.split('/').pop()!;
+}

@@ -1,0 +1,157 @@
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { buildTestApp, PASSWORD, type TestApp } from '../helpers/test-app';
+
+let t: TestApp;
+beforeEach(async () => {
+  t = await buildTestApp();
+  await t.addUser({ email: 'lead@example.org', name: 'Lee Lead', role: 'lead' });
+  await t.addUser({ email: 'member@example.org', name: 'Mia Member', role: 'member' });
+});
+afterEach(() => t.close());
+
+describe('GET /api/health', () => {
+  it('answers 200 { ok: true } without a session', async () => {
+    const res = await (await t.anonymous()).agent.get('/api/health');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toMatch(/json/);
+    expect(res.body).toEqual({ ok: true });
+  });
+});
+
+describe('POST /api/auth/login', () => {
+  it('signs in with the right password and returns the user and a fresh CSRF token', async () => {
+    const { agent, csrf } = await t.anonymous();
+    const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'Lead@Example.org', password: PASSWORD });
+    expect(res.status).toBe(200);
+    expect(res.body.user).toEqual({ id: expect.any(Number), email: 'lead@example.org', name: 'Lee Lead', role: 'lead' });
+    expect(res.body.csrfToken).toEqual(expect.any(String));
+    expect(res.body.csrfToken).not.toBe(csrf);
+    const cookie = String(res.headers['set-cookie']);
+    expect(cookie).toMatch(/gripline\.sid=/);
+    expect(cookie).toMatch(/HttpOnly/i);
+    expect(cookie).toMatch(/SameSite=Lax/i);
+    const me = await agent.get('/api/auth/me');
+    expect(me.status).toBe(200);
+    expect(me.body.user.email).toBe('lead@example.org');
+  });
+
+  it('gives a new session id at sign-in', async () => {
+    const { agent, csrf } = await t.anonymous();
+    const before = (await agent.get('/api/auth/csrf')).headers['set-cookie'];
+    const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'lead@example.org', password: PASSWORD });
+    const after = res.headers['set-cookie'];
+    const sid = (c: unknown) => String(c).match(/gripline\.sid=([^;]+)/)?.[1];
+    expect(sid(after)).toBeDefined();
+    expect(sid(after)).not.toBe(sid(before) ?? 'none');
+  });
+
+  it('answers 401 with the same message for a wrong password and an unknown e-mail', async () => {
+    const { agent, csrf } = await t.anonymous();
+    const wrong = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'lead@example.org', password: 'not the password' });
+    const unknown = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'nobody@example.org', password: 'not the password' });
+    expect(wrong.status).toBe(401);
+    expect(unknown.status).toBe(401);
+    expect(wrong.body.error.code).toBe('BAD_CREDENTIALS');
+    expect(unknown.body.error).toEqual(wrong.body.error);
+  });
+
+  it('refuses a request without the CSRF token with 403', async () => {
+    const { agent } = await t.anonymous();
+    const res = await agent.post('/api/auth/login').send({ email: 'lead@example.org', password: PASSWORD });
+    expect(res.status).toBe(403);
+    expect(res.body.error.code).toBe('CSRF_TOKEN_INVALID');
+  });
+
+  it('refuses a wrong CSRF token with 403', async () => {
+    const { agent } = await t.anonymous();
+    const res = await agent.post('/api/auth/login').set('X-CSRF-Token', 'made-up').send({ email: 'lead@example.org', password: PASSWORD });
+    expect(res.status).toBe(403);
+    expect(res.body.error.code).toBe('CSRF_TOKEN_INVALID');
+  });
+
+  it('rejects the token from before sign-in once signed in', async () => {
+    const { agent, csrf } = await t.anonymous();
+    await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'lead@example.org', password: PASSWORD }).expect(200);
+    const res = await agent.post('/api/auth/logout').set('X-CSRF-Token', csrf);
+    expect(res.status).toBe(403);
+  });
+
+  it('answers 400 with the fields at fault for a malformed body', async () => {
+    const { agent, csrf } = await t.anonymous();
+    const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'not-an-email' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('VALIDATION_FAILED');
+    expect(res.body.error.message).toMatch(/e-mail/);
+    expect(res.body.error.issues.map((i: { path: string }) => i.path).sort()).toEqual(['email', 'password']);
+  });
+
+  it('answers 400 INVALID_JSON for a body that is not JSON', async () => {
+    const { agent, csrf } = await t.anonymous();
+    const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).set('Content-Type', 'application/json').send('{"email":');
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('INVALID_JSON');
+  });
+
+  it('refuses a deactivated person with 403 even with the right password', async () => {
+    const lead = await t.signIn('lead@example.org');
+    const people = await lead.agent.get('/api/users');
+    const member = people.body.data.find((p: { email: string }) => p.email === 'member@example.org');
+    await lead.agent.patch(`/api/users/${member.id}`).set('X-CSRF-Token', lead.csrf).send({ active: false }).expect(200);
+    const { agent, csrf } = await t.anonymous();
+    const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'member@example.org', password: PASSWORD });
+    expect(res.status).toBe(403);
+    expect(res.body.error.code).toBe('ACCOUNT_DEACTIVATED');
+  });
+});
+
+describe('GET /api/auth/me and POST /api/auth/logout', () => {
+  it('answers 401 when signed out', async () => {
+    const res = await (await t.anonymous()).agent.get('/api/auth/me');
+    expect(res.status).toBe(401);
+    expect(res.body.error.code).toBe('NOT_SIGNED_IN');
+  });
+
+  it('signs out with 204 and the session no longer works', async () => {
+    const { agent, csrf } = await t.signIn('member@example.org');
+    const res = await agent.post('/api/auth/logout').set('X-CSRF-Token', csrf);
+    expect(res.status).toBe(204);
+    expect((await agent.get('/api/auth/me')).status).toBe(401);
+  });
+});
+
+describe('sign-in rate limiting', () => {
+  it('answers 429 with Retry-After after too many failures for one account, and a success is not counted', async () => {
+    await t.close();
+    t = await buildTestApp({ rateLimit: { windowMs: 60_000, perIp: 100, perAccount: 3 } });
+    await t.addUser({ email: 'member@example.org' });
+    const { agent, csrf } = await t.anonymous();
+    const login = (password: string) =>
+      agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'member@example.org', password });
+    // Successful sign-ins are not throttled.
+    for (let i = 0; i < 4; i++) {
+      const ok = await t.signIn('member@example.org');
+      expect(ok.csrf).toBeTruthy();
+    }
+    for (let i = 0; i < 3; i++) expect((await login('wrong password')).status).toBe(401);
+    const blocked = await login('wrong password');
+    expect(blocked.status).toBe(429);
+    expect(blocked.body.error.code).toBe('TOO_MANY_ATTEMPTS');
+    expect(Number(blocked.headers['retry-after'])).toBeGreaterThan(0);
+    // Another account from the same address is not blocked by this account's failures.
+    const other = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'other@example.org', password: 'x' });
+    expect(other.status).toBe(401);
+  });
+
+  it('answers 429 after too many failures from one address across accounts', async () => {
+    await t.close();
+    t = await buildTestApp({ rateLimit: { windowMs: 60_000, perIp: 3, perAccount: 100 } });
+    const { agent, csrf } = await t.anonymous();
+    for (let i = 0; i < 3; i++) {
+      const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: `u${i}@example.org`, password: 'nope' });
+      expect(res.status).toBe(401);
+    }
+    const blocked = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'u9@example.org', password: 'nope' });
+    expect(blocked.status).toBe(429);
+    expect(blocked.headers['retry-after']).toBeDefined();
+  });
+});

@@ -1,0 +1,52 @@
+import { fileURLToPath } from 'node:url';
+import tailwindcss from '@tailwindcss/vite';
+import react from '@vitejs/plugin-react';
+import { defineConfig } from 'vitest/config';
+
+const alias = {
+  '@': fileURLToPath(new URL('./src', import.meta.url)),
+  '@shared': fileURLToPath(new URL('./shared', import.meta.url)),
+};
+const apiPort = process.env.PORT ?? '3000';
+
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  resolve: { alias },
+  server: {
+    port: 5173,
+    proxy: { '/api': `http://localhost:${apiPort}` },
+  },
+  build: { outDir: 'dist', emptyOutDir: true },
+  test: {
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: 'server',
+          environment: 'node',
+          include: ['tests/server/**/*.test.ts', 'tests/shared/**/*.test.ts'],
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'client',
+          environment: 'happy-dom',
+          include: ['tests/client/**/*.test.tsx'],
+          setupFiles: ['tests/helpers/client-setup.ts'],
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'browser',
+          environment: 'node',
+          include: ['tests/browser/**/*.test.ts'],
+          testTimeout: 60_000,
+          hookTimeout: 60_000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});

@@ -32,7 +32,7 @@ export default defineConfig({
         test: {
           name: 'client',
           environment: 'happy-dom',
-          include: ['tests/client/**/*.test.tsx'],
+          include: ['tests/client/**/*.test.{ts,tsx}'],
           setupFiles: ['tests/helpers/client-setup.ts'],
         },
       },

@@ -25,7 +25,7 @@ export function openDatabase(path: string): Database {
   sqlite.pragma('synchronous = NORMAL');
   sqlite.pragma('busy_timeout = 5000');
   sqlite.pragma('foreign_keys = ON');
-  return drizzle(sqlite, { schema, casing: 'snake_case' }) as Database;
+  return drizzle(sqlite, { schema, casing: 'snake_case' });
 }
 
 /**

@@ -1,0 +1,88 @@
+import { readdirSync } from 'node:fs';
+import reactHooks from 'eslint-plugin-react-hooks';
+import { defineConfig } from 'eslint/config';
+import tseslint from 'typescript-eslint';
+import type { Linter } from 'eslint';
+
+/** One block per feature folder: a feature may not import another feature (compose them in routes). */
+function featureBoundaries(root: 'src' | 'server', importPrefix: (feature: string) => string[]) {
+  const features = readdirSync(`${root}/features`, { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name);
+  return features.map((feature): Linter.Config => {
+    const others = features.filter((f) => f !== feature);
+    return {
+      files: [`${root}/features/${feature}/**/*.{ts,tsx}`],
+      rules: {
+        'no-restricted-imports': [
+          'error',
+          {
+            patterns: [
+              ...sideRules[root],
+              ...(others.length > 0
+                ? [{ group: others.flatMap(importPrefix), message: 'Features do not import each other; compose them in a route or move the shared part down.' }]
+                : []),
+            ],
+          },
+        ],
+      },
+    };
+  });
+}
+
+const CLIENT_ONLY = { group: ['**/server/**', '../server/*', '../../server/*'], message: 'src/ never imports server/; share code through shared/.' };
+const SERVER_ONLY = { group: ['@/*', '**/src/**', 'react', 'react-dom', 'react-router'], message: 'server/ never imports the client; share code through shared/.' };
+const sideRules = { src: [CLIENT_ONLY], server: [SERVER_ONLY] };
+
+export default defineConfig(
+  { ignores: ['dist/**', 'node_modules/**', 'drizzle/**', 'coverage/**'] },
+  tseslint.configs.recommendedTypeChecked,
+  {
+    languageOptions: {
+      parserOptions: { projectService: true, tsconfigRootDir: import.meta.dirname },
+    },
+    rules: {
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/consistent-type-imports': ['error', { fixStyle: 'inline-type-imports' }],
+      '@typescript-eslint/no-misused-promises': ['error', { checksVoidReturn: { attributes: false } }],
+      // React Router loaders throw redirect() and data() responses by design.
+      '@typescript-eslint/only-throw-error': [
+        'error',
+        { allow: [{ from: 'lib', name: 'Response' }, { from: 'package', package: 'react-router', name: 'DataWithResponseInit' }] },
+      ],
+    },
+  },
+  {
+    files: ['src/**/*.{ts,tsx}'],
+    extends: [reactHooks.configs.flat.recommended],
+    rules: { 'no-restricted-imports': ['error', { patterns: [CLIENT_ONLY] }] },
+  },
+  { files: ['server/**/*.ts'], rules: { 'no-restricted-imports': ['error', { patterns: [SERVER_ONLY] }] } },
+  {
+    files: ['shared/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              group: ['express', 'express-*', 'drizzle-orm', 'drizzle-orm/*', 'better-sqlite3', 'react', 'react-*', '@/*', '**/src/**', '**/server/**'],
+              message: 'shared/ is pure TypeScript + zod, used by both sides.',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  ...featureBoundaries('src', (f) => [`@/features/${f}`, `@/features/${f}/**`]),
+  ...featureBoundaries('server', (f) => [`../${f}/*`, `../../features/${f}/*`, `**/features/${f}/**`]),
+  {
+    files: ['tests/**/*.{ts,tsx}'],
+    rules: {
+      '@typescript-eslint/no-unsafe-member-access': 'off',
+      '@typescript-eslint/no-unsafe-assignment': 'off',
+      '@typescript-eslint/no-unsafe-argument': 'off',
+      '@typescript-eslint/no-unsafe-call': 'off',
+      '@typescript-eslint/no-non-null-assertion': 'off',
+      '@typescript-eslint/prefer-promise-reject-errors': 'off',
+    },
+  },
+);

@@ -1,0 +1,28 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
+import { Toaster } from 'sonner';
+import { ApiError } from '@/lib/api-client';
+
+/** Retries only what a flaky hangar network can explain: no connection or a server hiccup. */
+function shouldRetry(failureCount: number, error: unknown): boolean {
+  if (error instanceof ApiError && error.status > 0 && error.status < 500) return false;
+  return failureCount < 3;
+}
+
+export function createQueryClient(): QueryClient {
+  return new QueryClient({
+    defaultOptions: {
+      queries: { retry: shouldRetry, staleTime: 15_000, refetchOnWindowFocus: true },
+      mutations: { retry: false },
+    },
+  });
+}
+
+export function AppProvider({ queryClient, children }: { queryClient: QueryClient; children: ReactNode }) {
+  return (
+    <QueryClientProvider client={queryClient}>
+      {children}
+      <Toaster position="top-center" richColors closeButton toastOptions={{ className: 'text-base' }} />
+    </QueryClientProvider>
+  );
+}

@@ -1,0 +1,78 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { NavLink, Outlet, useNavigate, type LoaderFunctionArgs } from 'react-router';
+import { toast } from 'sonner';
+import { hasRole, ROLE_LABELS, type Role } from '@shared/roles';
+import { meQueryOptions } from '@/features/auth/api/get-me';
+import { useLogout } from '@/features/auth/api/logout';
+import { messageOf } from '@/lib/errors';
+import { requireSignedIn } from './guards';
+
+export const appShellLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  await requireSignedIn(queryClient, request);
+  return null;
+};
+
+const LINK =
+  'flex min-h-14 flex-1 flex-col items-center justify-center px-3 text-sm font-semibold sm:flex-none sm:min-h-12 sm:text-base aria-[current=page]:text-ink aria-[current=page]:shadow-[inset_0_-4px_0_var(--color-brass)] text-ink-soft';
+
+/** The sections of the app, each shown to the roles that may open it. */
+const NAV_LINKS: { to: string; label: string; role: Role }[] = [
+  { to: '/', label: 'Home', role: 'member' },
+  { to: '/people', label: 'People', role: 'lead' },
+  { to: '/mail', label: 'Sent mail', role: 'lead' },
+];
+
+export function AppShell() {
+  const { data: me } = useSuspenseQuery(meQueryOptions());
+  const logout = useLogout();
+  const navigate = useNavigate();
+  if (!me) return null;
+  const links = NAV_LINKS.filter((link) => hasRole(me.role, link.role));
+
+  const signOut = () =>
+    logout.mutate(undefined, {
+      onSuccess: () => void navigate('/sign-in', { replace: true }),
+      onError: (err) => toast.error(messageOf(err)),
+    });
+
+  return (
+    <div className={`min-h-dvh sm:pb-0 ${links.length > 1 ? 'pb-20' : ''}`}>
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:p-3">
+        Skip to content
+      </a>
+      <header className="border-b border-rule bg-ink text-card">
+        <div className="mx-auto flex max-w-5xl items-center justify-between gap-3 px-4 py-2">
+          <div>
+            <p className="font-mono text-sm font-medium tracking-widest text-brass uppercase">Gripline</p>
+            <p className="text-sm text-card/80">
+              {me.name} · {ROLE_LABELS[me.role]}
+            </p>
+          </div>
+          <button
+            type="button"
+            onClick={signOut}
+            disabled={logout.isPending}
+            className="min-h-12 rounded-lg border-2 border-card/60 px-4 font-semibold hover:bg-ink-soft"
+          >
+            Sign out
+          </button>
+        </div>
+      </header>
+      {links.length > 1 && (
+        <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-10 border-t border-rule bg-card sm:static sm:border-t-0 sm:border-b">
+          <div className="mx-auto flex max-w-5xl sm:gap-2 sm:px-4">
+            {links.map((link) => (
+              <NavLink key={link.to} to={link.to} end={link.to === '/'} className={LINK}>
+                {link.label}
+              </NavLink>
+            ))}
+          </div>
+        </nav>
+      )}
+      <main id="main" className="mx-auto max-w-5xl px-4 py-5">
+        <Outlet />
+      </main>
+    </div>
+  );
+}

@@ -1,0 +1,37 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router';
+import { meQueryOptions } from '@/features/auth/api/get-me';
+import { invitationsQueryOptions } from '@/features/people/api/get-invitations';
+import { peopleQueryOptions } from '@/features/people/api/get-people';
+import { InviteForm } from '@/features/people/components/invite-form';
+import { PendingInvitations } from '@/features/people/components/pending-invitations';
+import { PeopleTable } from '@/features/people/components/people-table';
+import { Card, PageHeader } from '@/components/ui/page';
+import { requireRole } from './guards';
+
+export const peopleLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  await requireRole(queryClient, request, 'lead');
+  await Promise.all([queryClient.ensureQueryData(peopleQueryOptions()), queryClient.ensureQueryData(invitationsQueryOptions())]);
+  return null;
+};
+
+export function PeopleRoute() {
+  const { data: me } = useSuspenseQuery(meQueryOptions());
+  const { data: people } = useSuspenseQuery(peopleQueryOptions());
+  const { data: invitations } = useSuspenseQuery(invitationsQueryOptions());
+  return (
+    <>
+      <PageHeader title="People" lead="Who belongs to the chapter, their role, and who may sign in." />
+      <div className="flex flex-col gap-4">
+        <Card title="Invite someone">
+          <InviteForm />
+        </Card>
+        <Card title="Waiting invitations">
+          <PendingInvitations invitations={invitations} />
+        </Card>
+        <PeopleTable people={people} selfId={me?.id ?? 0} />
+      </div>
+    </>
+  );
+}

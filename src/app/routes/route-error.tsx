@@ -1,0 +1,34 @@
+import { isRouteErrorResponse, Link, useRouteError } from 'react-router';
+import { messageOf } from '@/lib/errors';
+
+export function RouteError() {
+  const error = useRouteError();
+  let title = 'Something went wrong';
+  let message = messageOf(error);
+  if (isRouteErrorResponse(error)) {
+    title = error.status === 404 ? 'Page not found' : error.status === 403 ? 'Not for your role' : `Error ${error.status}`;
+    const body = error.data as { message?: string } | string | undefined;
+    message = typeof body === 'string' ? body : (body?.message ?? 'There is nothing at this address.');
+  }
+  return (
+    <main className="mx-auto flex max-w-md flex-col gap-4 px-4 py-10">
+      <h1 className="text-2xl font-bold">{title}</h1>
+      <p role="alert">{message}</p>
+      <Link to="/" className="inline-flex min-h-12 items-center self-start rounded-lg bg-ink px-5 font-semibold text-card">
+        Go to home
+      </Link>
+    </main>
+  );
+}
+
+export function NotFoundRoute() {
+  return (
+    <main className="mx-auto flex max-w-md flex-col gap-4 px-4 py-10">
+      <h1 className="text-2xl font-bold">Page not found</h1>
+      <p>There is nothing at this address.</p>
+      <Link to="/" className="inline-flex min-h-12 items-center self-start rounded-lg bg-ink px-5 font-semibold text-card">
+        Go to home
+      </Link>
+    </main>
+  );
+}

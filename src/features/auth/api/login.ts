@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { LoginBody, User } from '@shared/schemas/auth';
+import { api, setCsrfToken } from '@/lib/api-client';
+import { authKeys } from './keys';
+
+export async function login(body: LoginBody): Promise<User> {
+  const res = await api.post<{ user: User; csrfToken: string }>('/api/auth/login', body);
+  setCsrfToken(res.csrfToken);
+  return res.user;
+}
+
+export function useLogin() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: login,
+    onSuccess: (user) => {
+      queryClient.clear();
+      queryClient.setQueryData(authKeys.me(), user);
+    },
+  });
+}

@@ -1,0 +1,56 @@
+import { createColumnHelper } from '@tanstack/react-table';
+import { ROLE_LABELS } from '@shared/roles';
+import type { Person } from '@shared/schemas/people';
+import type { ListFeatures } from '@/components/ui/data-table';
+import { Code } from '@/components/ui/page';
+import { PersonActions } from './person-actions';
+
+const helper = createColumnHelper<ListFeatures, Person>();
+const dateFormat = new Intl.DateTimeFormat(undefined, { year: 'numeric', month: 'short', day: 'numeric' });
+
+export function peopleColumns(selfId: number) {
+  return helper.columns([
+    helper.accessor((p) => `${p.name} ${p.email}`, {
+      id: 'name',
+      header: 'Name',
+      sortFn: (a, b) => a.original.name.localeCompare(b.original.name),
+      cell: ({ row }) => (
+        <div className="min-w-40">
+          <div className="font-medium">{row.original.name}</div>
+          <div className="text-sm text-steel">
+            <Code>{row.original.email}</Code>
+          </div>
+        </div>
+      ),
+    }),
+    helper.accessor('role', {
+      header: 'Role',
+      filterFn: 'equalsString',
+      enableGlobalFilter: false,
+      cell: ({ getValue }) => ROLE_LABELS[getValue()],
+    }),
+    helper.accessor((p) => (p.active ? 'active' : 'deactivated'), {
+      id: 'status',
+      header: 'Status',
+      filterFn: 'equalsString',
+      enableGlobalFilter: false,
+      cell: ({ getValue }) =>
+        getValue() === 'active' ? (
+          <span className="rounded bg-ok-soft px-2 py-0.5 text-sm font-medium text-ok">Active</span>
+        ) : (
+          <span className="rounded bg-bad-soft px-2 py-0.5 text-sm font-medium text-bad">Deactivated</span>
+        ),
+    }),
+    helper.accessor('createdAt', {
+      header: 'Joined',
+      sortFn: 'datetime',
+      enableGlobalFilter: false,
+      cell: ({ getValue }) => <span className="whitespace-nowrap">{dateFormat.format(new Date(getValue()))}</span>,
+    }),
+    helper.display({
+      id: 'actions',
+      header: 'Change',
+      cell: ({ row }) => <PersonActions person={row.original} isSelf={row.original.id === selfId} />,
+    }),
+  ]);
+}

@@ -1,0 +1,49 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { render } from '@testing-library/react';
+import type { ReactElement } from 'react';
+import { createMemoryRouter, RouterProvider } from 'react-router';
+import { vi } from 'vitest';
+
+/** Renders a component inside a fresh QueryClient and a memory router. */
+export function renderWithProviders(ui: ReactElement, path = '/') {
+  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+  const router = createMemoryRouter([{ path: '*', element: ui }], { initialEntries: [path] });
+  return {
+    queryClient,
+    ...render(
+      <QueryClientProvider client={queryClient}>
+        <RouterProvider router={router} />
+      </QueryClientProvider>,
+    ),
+  };
+}
+
+export interface FakeCall {
+  method: string;
+  path: string;
+  headers: Record<string, string>;
+  body: unknown;
+}
+
+type Responder = (call: FakeCall) => { status: number; body?: unknown } | undefined;
+
+/** Replaces fetch with a fake server; records every call. */
+export function fakeFetch(responder: Responder) {
+  const calls: FakeCall[] = [];
+  const fn = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
+    const call: FakeCall = {
+      method: init.method ?? 'GET',
+      path: String(input),
+      headers: (init.headers ?? {}) as Record<string, string>,
+      body: typeof init.body === 'string' ? JSON.parse(init.body) : undefined,
+    };
+    calls.push(call);
+    const answer = responder(call) ?? { status: 404, body: { error: { code: 'NOT_FOUND', message: 'not faked' } } };
+    return new Response(answer.status === 204 ? null : JSON.stringify(answer.body), {
+      status: answer.status,
+      headers: { 'Content-Type': 'application/json' },
+    });
+  });
+  vi.stubGlobal('fetch', fn);
+  return calls;
+}

@@ -43,6 +43,7 @@ export function createApp(config: AppConfig) {
       logger: config.logger,
       serializers: {
         req: (req: { method: string; url: string }) => ({ method: req.method, url: hideTokens(req.url) }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
       },
     }),
   );

@@ -31,7 +31,7 @@ const names = () =>
 describe('PeopleTable', () => {
   it('lists everyone sorted by name', () => {
     renderWithProviders(<PeopleTable people={PEOPLE} selfId={1} />);
-    expect(names().map((n) => n.replace(/\S+@example\.org$/, ''))).toEqual(['Dana Okafor', 'Ines Parra', 'Marco Bellweather', 'Ruth Lindqvist']);
+    expect(names().map((n) => PEOPLE.find((p) => n.startsWith(p.name))?.name)).toEqual(['Dana Okafor', 'Ines Parra', 'Marco Bellweather', 'Ruth Lindqvist']);
     expect(screen.getByText('Showing 4 of 4 people')).toBeTruthy();
   });
 

@@ -30,19 +30,21 @@ type Responder = (call: FakeCall) => { status: number; body?: unknown } | undefi
 /** Replaces fetch with a fake server; records every call. */
 export function fakeFetch(responder: Responder) {
   const calls: FakeCall[] = [];
-  const fn = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
+  const fn = vi.fn((input: string, init: RequestInit = {}) => {
     const call: FakeCall = {
       method: init.method ?? 'GET',
-      path: String(input),
+      path: input,
       headers: (init.headers ?? {}) as Record<string, string>,
       body: typeof init.body === 'string' ? JSON.parse(init.body) : undefined,
     };
     calls.push(call);
     const answer = responder(call) ?? { status: 404, body: { error: { code: 'NOT_FOUND', message: 'not faked' } } };
-    return new Response(answer.status === 204 ? null : JSON.stringify(answer.body), {
-      status: answer.status,
-      headers: { 'Content-Type': 'application/json' },
-    });
+    return Promise.resolve(
+      new Response(answer.status === 204 ? null : JSON.stringify(answer.body), {
+        status: answer.status,
+        headers: { 'Content-Type': 'application/json' },
+      }),
+    );
   });
   vi.stubGlobal('fetch', fn);
   return calls;

@@ -36,6 +36,7 @@ export async function invite(ctx: ServiceContext, lead: UserRow, email: string, 
       email,
       role,
       createdById: lead.id,
+      createdAt: now,
       expiresAt: new Date(now.getTime() + INVITATION_LIFETIME_MS),
     });
   });

@@ -23,6 +23,7 @@ export async function requestPasswordReset(ctx: ServiceContext, email: string): 
       tokenHash: hashLinkToken(token),
       email: user.email,
       userId: user.id,
+      createdAt: now,
       expiresAt: new Date(now.getTime() + RESET_LIFETIME_MS),
     });
   });

@@ -1,0 +1,186 @@
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { caughtMail } from '../../server/db/schema/mail';
+import { buildTestApp, PASSWORD, tokenFromLink, type TestApp } from '../helpers/test-app';
+
+const NEW_PASSWORD = 'fresh bucking bar 42';
+const HOUR_MS = 60 * 60 * 1000;
+
+let t: TestApp;
+beforeEach(async () => {
+  t = await buildTestApp();
+  await t.addUser({ email: 'lead@example.org', name: 'Lee Lead', role: 'lead' });
+  await t.addUser({ email: 'member@example.org', name: 'Mia Member', role: 'member' });
+});
+afterEach(() => t.close());
+
+async function requestReset(email: string) {
+  const { agent, csrf } = await t.anonymous();
+  return agent.post('/api/auth/password-reset').set('X-CSRF-Token', csrf).send({ email });
+}
+
+/** Asks for a reset and returns the token from the link in the e-mail. */
+async function resetToken(email: string): Promise<string> {
+  expect((await requestReset(email)).status).toBe(202);
+  const link = t.lastMailTo(email)?.links.find((l) => l.startsWith('http://gripline.test/reset-password/'));
+  expect(link).toBeDefined();
+  return tokenFromLink(link!);
+}
+
+async function confirm(token: string, password = NEW_PASSWORD) {
+  const { agent, csrf } = await t.anonymous();
+  return agent.post('/api/auth/password-reset/confirm').set('X-CSRF-Token', csrf).send({ token, password });
+}
+
+async function login(email: string, password: string) {
+  const { agent, csrf } = await t.anonymous();
+  return agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email, password });
+}
+
+const mailCount = () => t.db.select().from(caughtMail).all().length;
+
+describe('POST /api/auth/password-reset', () => {
+  it('answers 202 with the same body for a known and an unknown address', async () => {
+    const known = await requestReset('member@example.org');
+    const unknown = await requestReset('nobody@example.org');
+    expect(known.status).toBe(202);
+    expect(unknown.status).toBe(202);
+    expect(known.headers['content-type']).toMatch(/json/);
+    expect(known.body).toEqual({ ok: true, message: expect.stringMatching(/1 hour/) });
+    expect(unknown.body).toEqual(known.body);
+  });
+
+  it('e-mails a one-hour link only to the known address', async () => {
+    await requestReset('Member@Example.org');
+    await requestReset('nobody@example.org');
+    expect(mailCount()).toBe(1);
+    expect(t.lastMailTo('nobody@example.org')).toBeUndefined();
+    const mail = t.lastMailTo('member@example.org');
+    expect(mail?.subject).toMatch(/reset/i);
+    expect(mail?.text).toMatch(/Mia Member/);
+    expect(mail?.links).toEqual([expect.stringMatching(/^http:\/\/gripline\.test\/reset-password\/[A-Za-z0-9_-]{43}$/)]);
+  });
+
+  it('sends no mail to a deactivated account, with the same 202', async () => {
+    const lead = await t.signIn('lead@example.org');
+    const people = (await lead.agent.get('/api/users')).body.data as { id: number; email: string }[];
+    const member = people.find((p) => p.email === 'member@example.org')!;
+    await lead.agent.patch(`/api/users/${member.id}`).set('X-CSRF-Token', lead.csrf).send({ active: false }).expect(200);
+    const res = await requestReset('member@example.org');
+    expect(res.status).toBe(202);
+    expect(res.body).toEqual((await requestReset('nobody@example.org')).body);
+    expect(mailCount()).toBe(0);
+  });
+
+  it('answers 400 VALIDATION_FAILED for an address that is not one', async () => {
+    const res = await requestReset('not an address');
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('VALIDATION_FAILED');
+    expect(res.body.error.issues.map((i: { path: string }) => i.path)).toEqual(['email']);
+    expect(mailCount()).toBe(0);
+  });
+});
+
+describe('POST /api/auth/password-reset/confirm', () => {
+  it('answers 200 and changes the password: the old one fails with 401, the new one works', async () => {
+    const token = await resetToken('member@example.org');
+    const res = await confirm(token);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toMatch(/json/);
+    expect(res.body).toEqual({ ok: true, message: expect.any(String) });
+    const old = await login('member@example.org', PASSWORD);
+    expect(old.status).toBe(401);
+    expect(old.body.error.code).toBe('BAD_CREDENTIALS');
+    const fresh = await login('member@example.org', NEW_PASSWORD);
+    expect(fresh.status).toBe(200);
+    expect(fresh.body.user.email).toBe('member@example.org');
+  });
+
+  it('leaves the person signed out: confirming does not start a session', async () => {
+    const token = await resetToken('member@example.org');
+    const { agent, csrf } = await t.anonymous();
+    await agent.post('/api/auth/password-reset/confirm').set('X-CSRF-Token', csrf).send({ token, password: NEW_PASSWORD }).expect(200);
+    expect((await agent.get('/api/auth/me')).status).toBe(401);
+  });
+
+  it('works once: a second confirm answers 410 LINK_USED and the first password stands', async () => {
+    const token = await resetToken('member@example.org');
+    expect((await confirm(token)).status).toBe(200);
+    const again = await confirm(token, 'a different long password');
+    expect(again.status).toBe(410);
+    expect(again.headers['content-type']).toMatch(/json/);
+    expect(again.body.error.code).toBe('LINK_USED');
+    expect((await login('member@example.org', 'a different long password')).status).toBe(401);
+    expect((await login('member@example.org', NEW_PASSWORD)).status).toBe(200);
+  });
+
+  it('still works just before an hour has passed', async () => {
+    const token = await resetToken('member@example.org');
+    t.clock.now = new Date(t.clock.now.getTime() + HOUR_MS - 60_000);
+    expect((await confirm(token)).status).toBe(200);
+  });
+
+  it('answers 410 LINK_EXPIRED after an hour and keeps the old password', async () => {
+    const token = await resetToken('member@example.org');
+    t.clock.now = new Date(t.clock.now.getTime() + HOUR_MS + 60_000);
+    const res = await confirm(token);
+    expect(res.status).toBe(410);
+    expect(res.body.error.code).toBe('LINK_EXPIRED');
+    expect((await login('member@example.org', PASSWORD)).status).toBe(200);
+  });
+
+  it('answers 410 LINK_REVOKED for an older link once a newer one was sent', async () => {
+    const first = await resetToken('member@example.org');
+    const second = await resetToken('member@example.org');
+    expect(second).not.toBe(first);
+    const old = await confirm(first);
+    expect(old.status).toBe(410);
+    expect(old.body.error.code).toBe('LINK_REVOKED');
+    expect((await confirm(second)).status).toBe(200);
+  });
+
+  it('ends the person’s other sessions, but not other people’s', async () => {
+    const memberBefore = await t.signIn('member@example.org');
+    const lead = await t.signIn('lead@example.org');
+    expect((await memberBefore.agent.get('/api/auth/me')).status).toBe(200);
+    const token = await resetToken('member@example.org');
+    expect((await confirm(token)).status).toBe(200);
+    const me = await memberBefore.agent.get('/api/auth/me');
+    expect(me.status).toBe(401);
+    expect(me.body.error.code).toBe('NOT_SIGNED_IN');
+    expect((await lead.agent.get('/api/auth/me')).status).toBe(200);
+  });
+
+  it('does not accept an invitation token as a reset token', async () => {
+    const lead = await t.signIn('lead@example.org');
+    await lead.agent.post('/api/invitations').set('X-CSRF-Token', lead.csrf).send({ email: 'new@example.org', role: 'member' }).expect(201);
+    const inviteToken = tokenFromLink(t.lastMailTo('new@example.org')!.links[0]!);
+    const res = await confirm(inviteToken);
+    expect(res.status).toBe(404);
+    expect(res.body.error.code).toBe('LINK_NOT_FOUND');
+  });
+
+  it('answers 404 LINK_NOT_FOUND for a well-formed token nobody was sent', async () => {
+    const res = await confirm('Z'.repeat(43));
+    expect(res.status).toBe(404);
+    expect(res.body.error.code).toBe('LINK_NOT_FOUND');
+  });
+
+  it('answers 400 VALIDATION_FAILED naming the password when it is too short, and changes nothing', async () => {
+    const token = await resetToken('member@example.org');
+    const res = await confirm(token, 'short');
+    expect(res.status).toBe(400);
+    expect(res.headers['content-type']).toMatch(/json/);
+    expect(res.body.error.code).toBe('VALIDATION_FAILED');
+    expect(res.body.error.message).toMatch(/password/);
+    expect(res.body.error.issues).toEqual([{ path: 'password', message: expect.stringMatching(/at least 10/) }]);
+    // The link is still good for a valid password.
+    expect((await confirm(token)).status).toBe(200);
+  });
+
+  it('answers 400 VALIDATION_FAILED naming the token when it has the wrong shape', async () => {
+    const res = await confirm('not-a-token');
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('VALIDATION_FAILED');
+    expect(res.body.error.issues.map((i: { path: string }) => i.path)).toEqual(['token']);
+  });
+});

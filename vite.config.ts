@@ -33,6 +33,7 @@ export default defineConfig({
     },
   },
   test: {
+    reporters: ['default', './tests/helpers/summary-reporter.ts'],
     projects: [
       {
         extends: true,

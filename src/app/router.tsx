@@ -5,7 +5,7 @@ import { HomeRoute } from './routes/app/home';
 import { AcceptInvitationRoute } from './routes/auth/accept-invitation';
 import { ResetPasswordConfirmRoute, ResetPasswordRequestRoute } from './routes/auth/reset-password';
 import { SignInRoute, signInLoader } from './routes/auth/sign-in';
-import { NotFoundRoute, RouteError } from './routes/route-error';
+import { LoadingRoute, NotFoundRoute, RouteError } from './routes/route-error';
 
 /**
  * A data router: loaders fill the query cache, components read the same queries. The lead's pages
@@ -13,7 +13,7 @@ import { NotFoundRoute, RouteError } from './routes/route-error';
  */
 export function createAppRouter(queryClient: QueryClient) {
   return createBrowserRouter([
-    { path: '/sign-in', loader: signInLoader(queryClient), Component: SignInRoute, ErrorBoundary: RouteError },
+    { path: '/sign-in', loader: signInLoader(queryClient), Component: SignInRoute, ErrorBoundary: RouteError, HydrateFallback: LoadingRoute },
     { path: '/reset-password', Component: ResetPasswordRequestRoute },
     { path: '/reset-password/:token', Component: ResetPasswordConfirmRoute },
     { path: '/invite/:token', Component: AcceptInvitationRoute },
@@ -22,6 +22,7 @@ export function createAppRouter(queryClient: QueryClient) {
       loader: appShellLoader(queryClient),
       Component: AppShell,
       ErrorBoundary: RouteError,
+      HydrateFallback: LoadingRoute,
       children: [
         { index: true, Component: HomeRoute },
         {

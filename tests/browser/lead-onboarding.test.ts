@@ -50,7 +50,7 @@ describe('the demo lead on a phone', () => {
 
     await page.getByRole('link', { name: 'Sent mail' }).click();
     await page.getByText(/invited you to the chapter's tool crib/).waitFor();
-    const link = await page.getByRole('link', { name: /Open link: invite/ }).getAttribute('href');
+    const link = await page.getByRole('link', { name: 'Open the invitation link' }).getAttribute('href');
     expect(link).toMatch(/\/invite\/[A-Za-z0-9_-]{43}$/);
 
     await page.getByRole('button', { name: 'Sign out' }).click();

@@ -21,10 +21,18 @@ export interface TestApp {
   catcher: MailCatcher;
   clock: { now: Date };
   addUser(values: { email: string; name?: string; role?: Role; password?: string }): Promise<UserRow>;
+  /** One person per role: lead@, member@ and qm@example.org, all with PASSWORD. */
+  addCrew(): Promise<Crew>;
   signIn(email: string, password?: string): Promise<SignedInAgent>;
   anonymous(): Promise<SignedInAgent>;
   lastMailTo(address: string): { subject: string; text: string; links: string[] } | undefined;
   close(): Promise<void>;
+}
+
+export interface Crew {
+  lead: UserRow;
+  member: UserRow;
+  quartermaster: UserRow;
 }
 
 export interface SignedInAgent {
@@ -60,14 +68,23 @@ export async function buildTestApp(overrides: Partial<AppConfig> = {}): Promise<
     return { agent, csrf: (res.body as { token: string }).token };
   };
 
+  const addUser: TestApp['addUser'] = async ({ email, name = email.split('@')[0]!, role = 'member', password }) => {
+    const hash = password ? await hashPassword(password) : await (passwordHash ??= hashPassword(PASSWORD));
+    return insertUser(db, { email, name, role, passwordHash: hash });
+  };
+
   return {
     app,
     db,
     catcher,
     clock,
-    async addUser({ email, name = email.split('@')[0]!, role = 'member', password }) {
-      const hash = password ? await hashPassword(password) : await (passwordHash ??= hashPassword(PASSWORD));
-      return insertUser(db, { email, name, role, passwordHash: hash });
+    addUser,
+    async addCrew() {
+      return {
+        lead: await addUser({ email: 'lead@example.org', name: 'Lee Lead', role: 'lead' }),
+        member: await addUser({ email: 'member@example.org', name: 'Mia Member', role: 'member' }),
+        quartermaster: await addUser({ email: 'qm@example.org', name: 'Quinn Quartermaster', role: 'quartermaster' }),
+      };
     },
     anonymous,
     async signIn(email, password = PASSWORD) {

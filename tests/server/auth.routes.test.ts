@@ -4,8 +4,7 @@ import { buildTestApp, PASSWORD, type TestApp } from '../helpers/test-app';
 let t: TestApp;
 beforeEach(async () => {
   t = await buildTestApp();
-  await t.addUser({ email: 'lead@example.org', name: 'Lee Lead', role: 'lead' });
-  await t.addUser({ email: 'member@example.org', name: 'Mia Member', role: 'member' });
+  await t.addCrew();
 });
 afterEach(() => t.close());
 

@@ -5,8 +5,7 @@ let t: TestApp;
 let memberId: number;
 beforeEach(async () => {
   t = await buildTestApp();
-  await t.addUser({ email: 'lead@example.org', name: 'Lee Lead', role: 'lead' });
-  memberId = (await t.addUser({ email: 'member@example.org', name: 'Mia Member', role: 'member' })).id;
+  memberId = (await t.addCrew()).member.id;
 });
 afterEach(() => t.close());
 

@@ -5,9 +5,7 @@ let t: TestApp;
 let lead: SignedInAgent;
 beforeEach(async () => {
   t = await buildTestApp();
-  await t.addUser({ email: 'lead@example.org', name: 'Lee Lead', role: 'lead' });
-  await t.addUser({ email: 'member@example.org', name: 'Mia Member', role: 'member' });
-  await t.addUser({ email: 'qm@example.org', name: 'Quinn Quartermaster', role: 'quartermaster' });
+  await t.addCrew();
   lead = await t.signIn('lead@example.org');
 });
 afterEach(() => t.close());

@@ -8,8 +8,7 @@ const HOUR_MS = 60 * 60 * 1000;
 let t: TestApp;
 beforeEach(async () => {
   t = await buildTestApp();
-  await t.addUser({ email: 'lead@example.org', name: 'Lee Lead', role: 'lead' });
-  await t.addUser({ email: 'member@example.org', name: 'Mia Member', role: 'member' });
+  await t.addCrew();
 });
 afterEach(() => t.close());
 

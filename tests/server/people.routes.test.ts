@@ -9,9 +9,7 @@ let qmRow: UserRow;
 let lead: SignedInAgent;
 beforeEach(async () => {
   t = await buildTestApp();
-  leadRow = await t.addUser({ email: 'lead@example.org', name: 'Lee Lead', role: 'lead' });
-  memberRow = await t.addUser({ email: 'member@example.org', name: 'Mia Member', role: 'member' });
-  qmRow = await t.addUser({ email: 'qm@example.org', name: 'Quinn Quartermaster', role: 'quartermaster' });
+  ({ lead: leadRow, member: memberRow, quartermaster: qmRow } = await t.addCrew());
   lead = await t.signIn('lead@example.org');
 });
 afterEach(() => t.close());

@@ -21,6 +21,18 @@ export function RouteError() {
   );
 }
 
+/** Shown while the first loaders run (a slow hangar network can take a while). */
+export function LoadingRoute() {
+  return (
+    <main className="mx-auto flex min-h-dvh max-w-md flex-col justify-center gap-2 px-4" aria-busy="true">
+      <p className="font-mono text-sm font-medium tracking-widest text-brass-deep uppercase">Gripline</p>
+      <p role="status" className="text-steel">
+        Loading…
+      </p>
+    </main>
+  );
+}
+
 export function NotFoundRoute() {
   return (
     <main className="mx-auto flex max-w-md flex-col gap-4 px-4 py-10">

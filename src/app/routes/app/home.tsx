@@ -16,7 +16,7 @@ function ChapterAtAGlance() {
   const active = people.data.filter((p) => p.active);
   return (
     <Card title="The chapter at a glance">
-      <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+      <dl className="grid grid-cols-2 gap-3">
         {ROLES.map((role) => (
           <div key={role} className="rounded-lg bg-paper p-3">
             <dt className="text-sm text-steel">{ROLE_LABELS[role]}s</dt>

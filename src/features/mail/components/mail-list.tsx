@@ -3,6 +3,15 @@ import { Code } from '@/components/ui/page';
 
 const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
+const LINK_WORDS: Record<string, string> = {
+  invite: 'Open the invitation link',
+  'reset-password': 'Open the password reset link',
+};
+
+function linkLabel(link: string): string {
+  return LINK_WORDS[new URL(link).pathname.split('/')[1] ?? ''] ?? `Open ${link}`;
+}
+
 /** Sent messages, newest first, each with its links ready to open. */
 export function MailList({ messages }: { messages: CaughtMail[] }) {
   if (messages.length === 0) return <p className="text-steel">No mail has been sent yet. Invite someone and it shows up here.</p>;
@@ -16,6 +25,7 @@ export function MailList({ messages }: { messages: CaughtMail[] }) {
               <span className="text-sm text-steel">
                 to <Code>{m.to.join(', ')}</Code> · {dateFormat.format(new Date(m.receivedAt))}
               </span>
+              <span className="text-sm font-medium underline underline-offset-4">Show the whole message</span>
             </summary>
             <pre className="mt-3 font-mono text-sm whitespace-pre-wrap">{m.text}</pre>
           </details>
@@ -24,7 +34,7 @@ export function MailList({ messages }: { messages: CaughtMail[] }) {
               {m.links.map((link) => (
                 <li key={link}>
                   <a href={link} className="inline-flex min-h-11 items-center font-medium break-all underline underline-offset-4">
-                    Open link: {new URL(link).pathname.split('/')[1] ?? 'link'}
+                    {linkLabel(link)}
                   </a>
                 </li>
               ))}

@@ -1,4 +1,3 @@
-import type { Request } from 'express';
 import type { Database } from './db/client';
 import type { Mailer } from './mail/mailer';
 
@@ -14,8 +13,4 @@ declare module 'express-serve-static-core' {
   interface Request {
     ctx: ServiceContext;
   }
-}
-
-export function contextOf(req: Request): ServiceContext {
-  return req.ctx;
 }

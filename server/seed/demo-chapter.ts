@@ -4,9 +4,7 @@ import { countUsers, insertUser } from '../accounts/users.repo';
 import type { Database } from '../db/client';
 
 export const DEMO_PASSWORD = 'gripline-demo';
-export const DEMO_CHAPTER = 'Larkspur Field Builders, Chapter 417 (invented)';
-
-/** An invented chapter: every person here is made up. */
+/** An invented chapter ("Larkspur Field Builders, Chapter 417"): every person here is made up. */
 export const DEMO_PEOPLE: { email: string; name: string; role: Role; phone: string }[] = [
   { email: 'lead@example.org', name: 'Dana Okafor', role: 'lead', phone: '555-0140' },
   { email: 'quartermaster@example.org', name: 'Ruth Lindqvist', role: 'quartermaster', phone: '555-0141' },

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { ROLES } from '../roles';
 import { emailField, linkTokenField, newPasswordField, personNameField } from './fields';
 
-export const userSchema = z.object({
+export const userSchema = z.strictObject({
   id: z.number(),
   email: z.string(),
   name: z.string(),
@@ -16,9 +16,9 @@ export const loginBodySchema = z.object({
 });
 export type LoginBody = z.infer<typeof loginBodySchema>;
 
-export const loginResponseSchema = z.object({ user: userSchema, csrfToken: z.string() });
-export const meResponseSchema = z.object({ user: userSchema });
-export const csrfResponseSchema = z.object({ token: z.string() });
+export const loginResponseSchema = z.strictObject({ user: userSchema, csrfToken: z.string() });
+export const meResponseSchema = z.strictObject({ user: userSchema });
+export const csrfResponseSchema = z.strictObject({ token: z.string() });
 
 export const resetRequestBodySchema = z.object({ email: emailField });
 export type ResetRequestBody = z.infer<typeof resetRequestBodySchema>;
@@ -36,7 +36,7 @@ export const acceptInvitationBodySchema = z.object({
 });
 export type AcceptInvitationBody = z.infer<typeof acceptInvitationBodySchema>;
 
-export const invitationPreviewSchema = z.object({
+export const invitationPreviewSchema = z.strictObject({
   email: z.string(),
   role: z.enum(ROLES),
   invitedBy: z.string(),

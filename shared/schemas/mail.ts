@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-export const caughtMailSchema = z.object({
+export const caughtMailSchema = z.strictObject({
   id: z.number(),
   from: z.string(),
   to: z.array(z.string()),
@@ -10,5 +10,5 @@ export const caughtMailSchema = z.object({
   receivedAt: z.string(),
 });
 export type CaughtMail = z.infer<typeof caughtMailSchema>;
-export const caughtMailListSchema = z.object({ data: z.array(caughtMailSchema), catching: z.boolean() });
+export const caughtMailListSchema = z.strictObject({ data: z.array(caughtMailSchema), catching: z.boolean() });
 export type CaughtMailList = z.infer<typeof caughtMailListSchema>;

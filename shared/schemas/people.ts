@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { ROLES } from '../roles';
 import { emailField, roleField } from './fields';
 
-export const personSchema = z.object({
+export const personSchema = z.strictObject({
   id: z.number(),
   email: z.string(),
   name: z.string(),
@@ -13,12 +13,12 @@ export const personSchema = z.object({
 });
 export type Person = z.infer<typeof personSchema>;
 
-export const peopleListSchema = z.object({ data: z.array(personSchema) });
+export const peopleListSchema = z.strictObject({ data: z.array(personSchema) });
 
 export const inviteBodySchema = z.object({ email: emailField, role: roleField });
 export type InviteBody = z.infer<typeof inviteBodySchema>;
 
-export const pendingInvitationSchema = z.object({
+export const pendingInvitationSchema = z.strictObject({
   id: z.number(),
   email: z.string(),
   role: z.enum(ROLES),
@@ -27,7 +27,7 @@ export const pendingInvitationSchema = z.object({
   expiresAt: z.string(),
 });
 export type PendingInvitation = z.infer<typeof pendingInvitationSchema>;
-export const pendingInvitationListSchema = z.object({ data: z.array(pendingInvitationSchema) });
+export const pendingInvitationListSchema = z.strictObject({ data: z.array(pendingInvitationSchema) });
 
 export const updatePersonBodySchema = z
   .object({

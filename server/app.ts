@@ -11,6 +11,9 @@ import { invitationsRouter } from './features/invitations/invitations.router';
 import { mailRouter } from './features/mail/mail.router';
 import { passwordResetRouter } from './features/password-reset/password-reset.router';
 import { peopleRouter } from './features/people/people.router';
+import { referenceRouter } from './features/reference/reference.router';
+import { loansRouter } from './features/tools/loans.router';
+import { toolsRouter } from './features/tools/tools.router';
 import { loadUser } from './middleware/auth';
 import { csrf } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
@@ -71,6 +74,9 @@ export function createApp(config: AppConfig) {
   api.use('/invitations', invitationsRouter());
   api.use('/users', peopleRouter());
   api.use('/mail', mailRouter(config.catchingMail));
+  api.use('/reference', referenceRouter());
+  api.use('/tools', toolsRouter());
+  api.use('/loans', loansRouter());
   api.use(apiNotFound);
   app.use('/api', api);
 

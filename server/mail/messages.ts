@@ -35,3 +35,22 @@ export function passwordResetMail(to: string, name: string, link: string): Outgo
     ].join('\n'),
   };
 }
+
+export function holdOfferedMail(to: string, name: string, tool: { code: string; name: string; location: string }, until: Date, link: string): OutgoingMail {
+  return {
+    to,
+    subject: `${tool.code} ${tool.name} is back and held for you`,
+    text: [
+      `Hello ${name},`,
+      ``,
+      `${tool.name} (${tool.code}) has come back to the crib and is held for you until`,
+      `${until.toISOString().slice(0, 16).replace('T', ' ')} UTC. After that it goes to the next person waiting.`,
+      tool.location ? `It lives at: ${tool.location}.` : '',
+      ``,
+      `Scan its label or open it here to check it out:`,
+      link,
+    ]
+      .filter((line, i, all) => line !== '' || all[i - 1] !== '')
+      .join('\n'),
+  };
+}

@@ -1,0 +1,33 @@
+import { and, asc, desc, eq, isNull, type SQL } from 'drizzle-orm';
+import type { Loan } from '@shared/schemas/tools';
+import type { Executor } from '../../db/client';
+import { loans, tools } from '../../db/schema/tools';
+import { users } from '../../db/schema/users';
+
+/** Loans with their tool and holder: open ones soonest due first, returned ones newest first. */
+export function listLoans(db: Executor, filter: { userId?: number; open?: boolean }, limit = 500): Loan[] {
+  const parts: SQL[] = [];
+  if (filter.userId !== undefined) parts.push(eq(loans.userId, filter.userId));
+  if (filter.open) parts.push(isNull(loans.returnedAt));
+  return db
+    .select({ loan: loans, tool: { id: tools.id, code: tools.code, name: tools.name, category: tools.category, accessories: tools.accessories }, holderName: users.name })
+    .from(loans)
+    .innerJoin(tools, eq(tools.id, loans.toolId))
+    .innerJoin(users, eq(users.id, loans.userId))
+    .where(and(...parts))
+    .orderBy(desc(isNull(loans.returnedAt)), asc(loans.dueAt), desc(loans.returnedAt))
+    .limit(limit)
+    .all()
+    .map(({ loan, tool, holderName }) => ({
+      id: loan.id,
+      tool: { ...tool, accessories: JSON.parse(tool.accessories) as string[] },
+      holder: { id: loan.userId, name: holderName },
+      checkedOutAt: loan.checkedOutAt.toISOString(),
+      dueAt: loan.dueAt.toISOString(),
+      returnedAt: loan.returnedAt?.toISOString() ?? null,
+      returnCondition: loan.returnCondition,
+      returnNote: loan.returnNote,
+      returnedCount: loan.returnedCount,
+      shortfall: loan.shortfall,
+    }));
+}

@@ -1,0 +1,86 @@
+import { and, eq, isNull, sql } from 'drizzle-orm';
+import type { Database } from '../../db/client';
+import { memberSignoffs, signoffs } from '../../db/schema/signoffs';
+import { holds, loans, toolEvents, tools } from '../../db/schema/tools';
+import { users } from '../../db/schema/users';
+
+const p = sql.placeholder;
+
+/**
+ * The checkout and return statements, prepared once per database: Drizzle's query builder would
+ * rebuild the SQL on every call, and these run on every scan at the bench.
+ */
+function prepareLoanStatements(db: Database) {
+  return {
+    toolByCode: db.select().from(tools).where(eq(tools.code, p('code'))).prepare(),
+    openLoan: db
+      .select({ id: loans.id, userId: loans.userId, holderName: users.name, checkedOutAt: loans.checkedOutAt, dueAt: loans.dueAt })
+      .from(loans)
+      .innerJoin(users, eq(users.id, loans.userId))
+      .where(and(eq(loans.toolId, p('toolId')), isNull(loans.returnedAt)))
+      .prepare(),
+    hasSignoff: db
+      .select({ id: memberSignoffs.id })
+      .from(memberSignoffs)
+      .where(and(eq(memberSignoffs.signoffId, p('signoffId')), eq(memberSignoffs.userId, p('userId')), isNull(memberSignoffs.revokedAt)))
+      .prepare(),
+    signoffName: db.select({ name: signoffs.name }).from(signoffs).where(eq(signoffs.id, p('id'))).prepare(),
+    offeredHold: db
+      .select({ id: holds.id, userId: holds.userId, offerExpiresAt: holds.offerExpiresAt, name: users.name })
+      .from(holds)
+      .innerJoin(users, eq(users.id, holds.userId))
+      .where(and(eq(holds.toolId, p('toolId')), eq(holds.status, 'offered')))
+      .prepare(),
+    insertLoan: db
+      .insert(loans)
+      .values({ toolId: p('toolId'), userId: p('userId'), checkedOutAt: p('checkedOutAt'), dueAt: p('dueAt') })
+      .returning({ id: loans.id })
+      .prepare(),
+    setToolStatus: db
+      .update(tools)
+      .set({ status: sql`${p('status')}`, statusNote: sql`${p('statusNote')}`, updatedAt: sql`${p('updatedAt')}` })
+      .where(eq(tools.id, p('toolId')))
+      .prepare(),
+    fulfilHold: db
+      .update(holds)
+      .set({ status: 'fulfilled', closedAt: sql`${p('at')}` })
+      .where(eq(holds.id, p('holdId')))
+      .prepare(),
+    closeLoan: db
+      .update(loans)
+      .set({
+        returnedAt: sql`${p('returnedAt')}`,
+        returnedById: sql`${p('returnedById')}`,
+        returnCondition: sql`${p('condition')}`,
+        returnNote: sql`${p('note')}`,
+        returnedCount: sql`${p('returnedCount')}`,
+        shortfall: sql`${p('shortfall')}`,
+      })
+      .where(and(eq(loans.id, p('loanId')), isNull(loans.returnedAt)))
+      .prepare(),
+    insertEvent: db
+      .insert(toolEvents)
+      .values({
+        toolId: p('toolId'),
+        actorId: p('actorId'),
+        at: p('at'),
+        action: p('action'),
+        fromStatus: p('fromStatus'),
+        toStatus: p('toStatus'),
+        detail: p('detail'),
+      })
+      .prepare(),
+  };
+}
+
+export type LoanStatements = ReturnType<typeof prepareLoanStatements>;
+const cache = new WeakMap<Database, LoanStatements>();
+
+export function loanStatements(db: Database): LoanStatements {
+  let s = cache.get(db);
+  if (!s) {
+    s = prepareLoanStatements(db);
+    cache.set(db, s);
+  }
+  return s;
+}

@@ -1,0 +1,24 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { requireRole, requireUser } from '../../middleware/auth';
+import { parseInput } from '../../lib/validate';
+import { listLoans } from './loan-history.repo';
+
+const mineQuery = z.object({ state: z.enum(['open', 'all'], { error: 'state is open or all.' }).default('all') });
+
+export function loansRouter() {
+  const router = Router();
+
+  /** The signed-in person's loans: open ones first, then history. */
+  router.get('/mine', requireRole('member'), (req, res) => {
+    const { state } = parseInput(mineQuery, req.query, 'query');
+    res.json({ data: listLoans(req.ctx.db, { userId: requireUser(req).id, open: state === 'open' }) });
+  });
+
+  /** Who holds what: every open loan (quartermaster and lead). */
+  router.get('/open', requireRole('quartermaster'), (req, res) => {
+    res.json({ data: listLoans(req.ctx.db, { open: true }) });
+  });
+
+  return router;
+}

@@ -1,0 +1,85 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import {
+  checkoutBodySchema,
+  createToolBodySchema,
+  returnBodySchema,
+  statusChangeBodySchema,
+  toolCodeParams,
+  toolListQuerySchema,
+  updateToolBodySchema,
+} from '@shared/schemas/tools';
+import { requireRole, requireUser } from '../../middleware/auth';
+import { parseInput } from '../../lib/validate';
+import { cancelHold, placeHold } from './holds.service';
+import { checkOut, returnTool } from './loans.service';
+import { listToolEvents } from './tool-events.repo';
+import { changeToolStatus, type StatusCommand } from './tool-status.service';
+import { createTool, editTool, getToolForYou, getToolRow, listToolPage } from './tools.service';
+
+const STATUS_PATHS: Record<string, StatusCommand> = {
+  'out-of-service': 'out_of_service',
+  'back-in-service': 'back_in_service',
+  lost: 'lost',
+  found: 'found',
+  retire: 'retire',
+};
+const backInServiceBody = statusChangeBodySchema.extend({ serviced: z.boolean().default(false) });
+
+export function toolsRouter() {
+  const router = Router();
+  const signedIn = requireRole('member');
+  const quartermaster = requireRole('quartermaster');
+  const code = (params: unknown) => parseInput(toolCodeParams, params, 'path').code;
+  router.use(signedIn);
+
+  router.get('/', (req, res) => {
+    res.json(listToolPage(req.ctx, parseInput(toolListQuerySchema, req.query, 'query')));
+  });
+
+  router.post('/', quartermaster, (req, res) => {
+    res.status(201).json(createTool(req.ctx, requireUser(req), parseInput(createToolBodySchema, req.body)));
+  });
+
+  router.get('/:code', (req, res) => {
+    res.json(getToolForYou(req.ctx, requireUser(req), code(req.params)));
+  });
+
+  router.patch('/:code', quartermaster, (req, res) => {
+    res.json(editTool(req.ctx, requireUser(req), code(req.params), parseInput(updateToolBodySchema, req.body)));
+  });
+
+  router.get('/:code/events', (req, res) => {
+    res.json({ data: listToolEvents(req.ctx.db, getToolRow(req.ctx, code(req.params)).id) });
+  });
+
+  router.post('/:code/checkout', (req, res) => {
+    const toolCode = code(req.params);
+    res.status(201).json(checkOut(req.ctx, requireUser(req), toolCode, parseInput(checkoutBodySchema, req.body)));
+  });
+
+  router.post('/:code/return', async (req, res) => {
+    const toolCode = code(req.params);
+    res.json(await returnTool(req.ctx, requireUser(req), toolCode, parseInput(returnBodySchema, req.body)));
+  });
+
+  router.post('/:code/holds', (req, res) => {
+    res.status(201).json(placeHold(req.ctx, requireUser(req), code(req.params)));
+  });
+
+  router.delete('/:code/holds/mine', async (req, res) => {
+    await cancelHold(req.ctx, requireUser(req), code(req.params));
+    res.status(204).end();
+  });
+
+  router.post('/:code/:command', quartermaster, async (req, res, next) => {
+    const command = STATUS_PATHS[String(req.params.command)];
+    if (!command) return next();
+    const toolCode = code({ code: req.params.code });
+    const body = parseInput(command === 'back_in_service' ? backInServiceBody : statusChangeBodySchema, req.body);
+    const serviced = 'serviced' in body && body.serviced === true;
+    res.json(await changeToolStatus(req.ctx, requireUser(req), toolCode, command, body.note, serviced));
+  });
+
+  return router;
+}

@@ -1,0 +1,167 @@
+import { z } from 'zod';
+import { findDrill } from '../drills/drill-sizes';
+import { TEMPORARY_FASTENER_SIZES, TOOL_CATEGORIES, TOOL_STATUSES } from '../tools/categories';
+
+export const TOOL_CODE_PATTERN = /^T-\d{4,6}$/;
+
+export const toolCodeField = z
+  .string({ error: 'Enter the code on the label, like T-0042.' })
+  .trim()
+  .toUpperCase()
+  .regex(TOOL_CODE_PATTERN, { error: 'A tool code looks like T-0042: T, a dash and four to six digits.' });
+
+const drillSizeField = z
+  .string()
+  .trim()
+  .refine((s) => findDrill(s) !== undefined, { error: 'Use a drill size from the table: #1 to #80, A to Z, or a fraction like 1/8.' })
+  .transform((s) => findDrill(s)!.name);
+
+const isoDate = z.iso.datetime({ offset: true, error: 'Use a date and time like 2026-12-24T17:00:00Z.' });
+
+/** What a quartermaster or lead types to add a tool. Kind-specific rules are checked by refine below. */
+const toolFieldsSchema = z.object({
+  name: z.string({ error: 'Enter a name.' }).trim().min(1, { error: 'Enter a name.' }).max(120, { error: 'Keep the name under 120 characters.' }),
+  category: z.enum(TOOL_CATEGORIES, { error: 'Choose a category from the list.' }),
+  location: z.string().trim().max(80, { error: 'Keep the location under 80 characters.' }).default(''),
+  replacementValueCents: z.number({ error: 'Enter the replacement value in cents.' }).int().min(0).max(100_000_000).default(0),
+  loanDays: z.number().int().min(1, { error: 'A loan lasts at least 1 day.' }).max(365, { error: 'A loan lasts at most 365 days.' }).nullable().default(null),
+  requiredSignoffId: z.number().int().positive().nullable().default(null),
+  serviceIntervalDays: z.number().int().min(1).max(3650).nullable().default(null),
+  lastServiceAt: isoDate.nullable().default(null),
+  drillSize: drillSizeField.nullable().default(null),
+  traySize: z.enum(TEMPORARY_FASTENER_SIZES, { error: 'Choose a temporary fastener size: 1/16, 3/32, 1/8, 5/32, 3/16, 1/4 or 3/8.' }).nullable().default(null),
+  trayCapacity: z.number().int().min(1, { error: 'A full tray holds at least 1.' }).max(10_000).nullable().default(null),
+  accessories: z.array(z.string().trim().min(1).max(80)).max(30).default([]),
+  notes: z.string().max(2000).default(''),
+});
+
+type ToolFields = z.infer<typeof toolFieldsSchema>;
+
+function kindRules(t: Partial<ToolFields>, ctx: z.RefinementCtx) {
+  if (t.category === 'drill_bit' && !t.drillSize) {
+    ctx.addIssue({ code: 'custom', path: ['drillSize'], message: 'A drill bit needs its size, like #40 or 1/8.' });
+  }
+  if (t.category === 'temporary_fastener_tray') {
+    if (!t.traySize) ctx.addIssue({ code: 'custom', path: ['traySize'], message: 'A temporary fastener tray needs the fastener size.' });
+    if (!t.trayCapacity) ctx.addIssue({ code: 'custom', path: ['trayCapacity'], message: 'Say how many fasteners a full tray holds.' });
+  }
+}
+
+export const createToolBodySchema = toolFieldsSchema.extend({ code: toolCodeField.optional() }).superRefine(kindRules);
+export type CreateToolBody = z.input<typeof createToolBodySchema>;
+export type CreateToolInput = z.output<typeof createToolBodySchema>;
+
+export const updateToolBodySchema = toolFieldsSchema
+  .partial()
+  .strict()
+  .refine((b) => Object.keys(b).length > 0, { error: 'Send at least one field to change.' });
+export type UpdateToolBody = z.infer<typeof updateToolBodySchema>;
+
+export const toolListQuerySchema = z.object({
+  status: z.enum(TOOL_STATUSES, { error: `status is one of ${TOOL_STATUSES.join(', ')}.` }).optional(),
+  category: z.enum(TOOL_CATEGORIES, { error: 'category is not one of the tool categories.' }).optional(),
+  location: z.string().trim().max(80).optional(),
+  q: z.string().trim().max(80).optional(),
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(500).default(100),
+});
+export type ToolListQuery = z.infer<typeof toolListQuerySchema>;
+
+export const toolCodeParams = z.object({ code: toolCodeField });
+
+export const checkoutBodySchema = z.object({ dueAt: isoDate.optional() }).strict();
+export type CheckoutBody = z.infer<typeof checkoutBodySchema>;
+
+export const returnBodySchema = z
+  .object({
+    condition: z.enum(['ok', 'needs_attention'], { error: 'Say whether the tool came back ok or needs attention.' }),
+    note: z.string().trim().max(1000).optional(),
+    returnedCount: z.number({ error: 'Count the temporary fasteners that came back.' }).int().min(0).optional(),
+  })
+  .strict()
+  .refine((b) => b.condition === 'ok' || (b.note ?? '').length > 0, {
+    path: ['note'],
+    error: 'Say what needs attention, so the quartermaster knows what to look at.',
+  });
+export type ReturnBody = z.infer<typeof returnBodySchema>;
+
+export const statusChangeBodySchema = z.object({
+  note: z.string({ error: 'Give the reason.' }).trim().min(1, { error: 'Give the reason.' }).max(500),
+});
+export type StatusChangeBody = z.infer<typeof statusChangeBodySchema>;
+
+export const TOOL_ACTIONS = ['check_out', 'return', 'place_hold', 'cancel_hold'] as const;
+export type ToolAction = (typeof TOOL_ACTIONS)[number];
+
+const person = z.object({ id: z.number(), name: z.string() });
+
+export const toolSchema = z.object({
+  id: z.number(),
+  code: z.string(),
+  name: z.string(),
+  category: z.enum(TOOL_CATEGORIES),
+  location: z.string(),
+  replacementValueCents: z.number(),
+  /** The loan period that applies: the tool's own or its category's default. */
+  loanDays: z.number(),
+  loanDaysOverride: z.number().nullable(),
+  requiredSignoff: z.object({ id: z.number(), name: z.string() }).nullable(),
+  serviceIntervalDays: z.number().nullable(),
+  lastServiceAt: z.string().nullable(),
+  serviceDueAt: z.string().nullable(),
+  status: z.enum(TOOL_STATUSES),
+  statusNote: z.string().nullable(),
+  drillSize: z.object({ name: z.string(), inch: z.number(), mm: z.number() }).nullable(),
+  traySize: z.enum(TEMPORARY_FASTENER_SIZES).nullable(),
+  trayCapacity: z.number().nullable(),
+  accessories: z.array(z.string()),
+  notes: z.string(),
+  loan: z.object({ id: z.number(), holder: person, checkedOutAt: z.string(), dueAt: z.string() }).nullable(),
+  holds: z.object({ waiting: z.number(), offeredTo: person.nullable(), offerExpiresAt: z.string().nullable() }),
+  photoIds: z.array(z.number()),
+});
+export type Tool = z.infer<typeof toolSchema>;
+
+/** The tool as the signed-in person sees it: what they may do now, or why not. */
+export const toolForYouSchema = toolSchema.extend({
+  forYou: z.object({
+    actions: z.array(z.enum(TOOL_ACTIONS)),
+    reason: z.string().nullable(),
+    defaultDueAt: z.string(),
+    yourHold: z.object({ status: z.enum(['waiting', 'offered']), position: z.number(), offerExpiresAt: z.string().nullable() }).nullable(),
+  }),
+});
+export type ToolForYou = z.infer<typeof toolForYouSchema>;
+
+export const toolListSchema = z.object({
+  data: z.array(toolSchema),
+  meta: z.object({ total: z.number(), page: z.number(), pageSize: z.number() }),
+});
+export type ToolList = z.infer<typeof toolListSchema>;
+
+export const loanSchema = z.object({
+  id: z.number(),
+  tool: z.object({ id: z.number(), code: z.string(), name: z.string(), category: z.enum(TOOL_CATEGORIES), accessories: z.array(z.string()) }),
+  holder: person,
+  checkedOutAt: z.string(),
+  dueAt: z.string(),
+  returnedAt: z.string().nullable(),
+  returnCondition: z.enum(['ok', 'needs_attention']).nullable(),
+  returnNote: z.string().nullable(),
+  returnedCount: z.number().nullable(),
+  shortfall: z.number().nullable(),
+});
+export type Loan = z.infer<typeof loanSchema>;
+
+export const toolEventSchema = z.object({
+  id: z.number(),
+  at: z.string(),
+  actor: person.nullable(),
+  action: z.string(),
+  fromStatus: z.string().nullable(),
+  toStatus: z.string().nullable(),
+  detail: z.string(),
+});
+export type ToolEvent = z.infer<typeof toolEventSchema>;
+
+export const drillReferenceSchema = z.array(z.object({ name: z.string(), inch: z.number(), mm: z.number() }));

@@ -1,0 +1,186 @@
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { memberSignoffs, signoffs } from '../../server/db/schema/signoffs';
+import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+
+let t: TestApp;
+let qm: SignedInAgent;
+let member: SignedInAgent;
+const DAY_MS = 24 * 60 * 60 * 1000;
+
+beforeEach(async () => {
+  t = await buildTestApp();
+  await t.addCrew();
+  qm = await t.signIn('qm@example.org');
+  member = await t.signIn('member@example.org');
+});
+afterEach(() => t.close());
+
+async function addTool(body: Record<string, unknown>) {
+  const res = await qm.agent.post('/api/tools').set('X-CSRF-Token', qm.csrf).send(body);
+  if (res.status !== 201) throw new Error(`could not add tool: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body as { id: number; code: string; status: string };
+}
+
+const post = (who: SignedInAgent, path: string, body: unknown = {}) => who.agent.post(path).set('X-CSRF-Token', who.csrf).send(body as object);
+
+describe('POST /api/tools', () => {
+  it('adds a tool with the next free code and the category default loan period', async () => {
+    const tool = await addTool({ name: 'Hand rivet puller, long handle', category: 'hand_rivet_puller', accessories: ['Nosepiece 3/32', 'Nosepiece 1/8'] });
+    expect(tool.code).toBe('T-0001');
+    const res = await member.agent.get('/api/tools/T-0001');
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ code: 'T-0001', status: 'available', loanDays: 14, accessories: ['Nosepiece 3/32', 'Nosepiece 1/8'] });
+    expect(res.body.forYou.actions).toEqual(['check_out']);
+  });
+
+  it('answers 403 to a member', async () => {
+    const res = await post(member, '/api/tools', { name: 'x', category: 'other' });
+    expect(res.status).toBe(403);
+    expect(res.body.error.code).toBe('FORBIDDEN');
+  });
+
+  it('needs a drill size for a drill bit and a size and capacity for a tray', async () => {
+    const bit = await post(qm, '/api/tools', { name: 'Bit', category: 'drill_bit' });
+    expect(bit.status).toBe(400);
+    expect(bit.body.error.issues.map((i: { path: string }) => i.path)).toEqual(['drillSize']);
+    const tray = await post(qm, '/api/tools', { name: 'Tray', category: 'temporary_fastener_tray' });
+    expect(tray.body.error.issues.map((i: { path: string }) => i.path).sort()).toEqual(['trayCapacity', 'traySize']);
+    const badSize = await post(qm, '/api/tools', { name: 'Bit', category: 'drill_bit', drillSize: '#81' });
+    expect(badSize.status).toBe(400);
+  });
+
+  it('stores a drill bit with its size from the drill table', async () => {
+    await addTool({ name: 'Drill bit, 12 in long', category: 'drill_bit', drillSize: '40' });
+    const res = await member.agent.get('/api/tools/T-0001');
+    // ASME B94.11M: #40 = 0.0980 in.
+    expect(res.body.drillSize).toEqual({ name: '#40', inch: 0.098, mm: 2.489 });
+  });
+});
+
+describe('POST /api/tools/:code/checkout and /return', () => {
+  it('checks out with a due date from the loan period, then refuses a second checkout with the holder and date', async () => {
+    await addTool({ name: 'Pneumatic rivet puller', category: 'pneumatic_rivet_puller' });
+    const out = await post(member, '/api/tools/T-0001/checkout');
+    expect(out.status).toBe(201);
+    expect(out.body.dueAt).toBe(new Date(t.clock.now.getTime() + 7 * DAY_MS).toISOString());
+    const again = await post(qm, '/api/tools/T-0001/checkout');
+    expect(again.status).toBe(409);
+    expect(again.body.error.code).toBe('TOOL_ON_LOAN');
+    expect(again.body.error.message).toMatch(/held by Mia Member until 2026-12-08/);
+  });
+
+  it('lets exactly one of many simultaneous checkouts win', async () => {
+    await addTool({ name: 'Air drill', category: 'air_drill' });
+    const agents = await Promise.all(['a', 'b', 'c', 'd', 'e', 'f', 'g', 'h'].map(async (n) => {
+      await t.addUser({ email: `${n}@example.org` });
+      return t.signIn(`${n}@example.org`);
+    }));
+    const results = await Promise.all(agents.flatMap((a) => [post(a, '/api/tools/T-0001/checkout'), post(a, '/api/tools/T-0001/checkout')]));
+    expect(results.filter((r) => r.status === 201)).toHaveLength(1);
+    expect(results.filter((r) => r.status === 409)).toHaveLength(15);
+    const open = t.db.$client.prepare('select count(*) as n from loans where returned_at is null').get() as { n: number };
+    expect(open.n).toBe(1);
+  });
+
+  it('returns a tool: ok makes it available, needs attention takes it out of service with the note', async () => {
+    await addTool({ name: 'Rivet gun 3X', category: 'rivet_gun' });
+    await post(member, '/api/tools/T-0001/checkout').expect(201);
+    const back = await post(member, '/api/tools/T-0001/return', { condition: 'ok' });
+    expect(back.status).toBe(200);
+    expect(back.body.status).toBe('available');
+    await post(member, '/api/tools/T-0001/checkout').expect(201);
+    const noNote = await post(member, '/api/tools/T-0001/return', { condition: 'needs_attention' });
+    expect(noNote.status).toBe(400);
+    const hurt = await post(member, '/api/tools/T-0001/return', { condition: 'needs_attention', note: 'Trigger sticks' });
+    expect(hurt.body.status).toBe('out_of_service');
+    const refused = await post(member, '/api/tools/T-0001/checkout');
+    expect(refused.status).toBe(403);
+    expect(refused.body.error.code).toBe('TOOL_OUT_OF_SERVICE');
+    expect(refused.body.error.message).toMatch(/Trigger sticks/);
+  });
+
+  it('records the shortfall when a temporary fastener tray comes back short', async () => {
+    await addTool({ name: 'Temporary fasteners 1/8, tray', category: 'temporary_fastener_tray', traySize: '1/8', trayCapacity: 50 });
+    await post(member, '/api/tools/T-0001/checkout').expect(201);
+    const noCount = await post(member, '/api/tools/T-0001/return', { condition: 'ok' });
+    expect(noCount.status).toBe(400);
+    expect(noCount.body.error.code).toBe('COUNT_REQUIRED');
+    const back = await post(member, '/api/tools/T-0001/return', { condition: 'ok', returnedCount: 46 });
+    expect(back.body.shortfall).toBe(4);
+    const mine = await member.agent.get('/api/loans/mine');
+    expect(mine.body.data[0]).toMatchObject({ returnedCount: 46, shortfall: 4 });
+  });
+
+  it('refuses a member returning someone else’s tool, but lets the quartermaster do it', async () => {
+    await addTool({ name: 'Bucking bar', category: 'bucking_bar' });
+    await post(member, '/api/tools/T-0001/checkout').expect(201);
+    await t.addUser({ email: 'other@example.org' });
+    const other = await t.signIn('other@example.org');
+    expect((await post(other, '/api/tools/T-0001/return', { condition: 'ok' })).body.error.code).toBe('NOT_YOUR_LOAN');
+    expect((await post(qm, '/api/tools/T-0001/return', { condition: 'ok' })).status).toBe(200);
+  });
+
+  it('refuses a tool that needs a sign-off the member lacks, and allows it once signed off', async () => {
+    const lead = await t.signIn('lead@example.org');
+    const signoff = t.db.insert(signoffs).values({ name: 'Air tools' }).returning().get();
+    await addTool({ name: 'Air drill', category: 'air_drill', requiredSignoffId: signoff.id });
+    const refused = await post(member, '/api/tools/T-0001/checkout');
+    expect(refused.status).toBe(403);
+    expect(refused.body.error.code).toBe('SIGNOFF_REQUIRED');
+    expect(refused.body.error.message).toMatch(/"Air tools"/);
+    const view = await member.agent.get('/api/tools/T-0001');
+    expect(view.body.forYou.actions).toEqual([]);
+    expect(view.body.forYou.reason).toMatch(/Air tools/);
+    const memberId = (await lead.agent.get('/api/users')).body.data.find((p: { email: string }) => p.email === 'member@example.org').id;
+    t.db.insert(memberSignoffs).values({ signoffId: signoff.id, userId: memberId, grantedAt: t.clock.now, grantedById: memberId }).run();
+    expect((await post(member, '/api/tools/T-0001/checkout')).status).toBe(201);
+  });
+
+  it('answers 404 for an unknown code and 400 for a malformed one', async () => {
+    expect((await post(member, '/api/tools/T-9999/checkout')).body.error.code).toBe('TOOL_NOT_FOUND');
+    const bad = await post(member, '/api/tools/hammer/checkout');
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.code).toBe('VALIDATION_FAILED');
+  });
+
+  it('refuses a due date in the past', async () => {
+    await addTool({ name: 'Deburring tool', category: 'deburring_tool' });
+    const res = await post(member, '/api/tools/T-0001/checkout', { dueAt: '2026-11-01T00:00:00Z' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('DUE_DATE_PAST');
+  });
+});
+
+describe('holds', () => {
+  it('queues people and holds the returned tool for the first, who is e-mailed; others are refused until the hold ends', async () => {
+    await addTool({ name: 'Torque wrench', category: 'torque_wrench', location: 'Cabinet B, shelf 2' });
+    await post(member, '/api/tools/T-0001/checkout').expect(201);
+    const hold = await post(qm, '/api/tools/T-0001/holds');
+    expect(hold.status).toBe(201);
+    expect(hold.body.position).toBe(1);
+    const back = await post(member, '/api/tools/T-0001/return', { condition: 'ok' });
+    expect(back.body).toMatchObject({ status: 'held', offeredTo: { name: 'Quinn Quartermaster' } });
+    const mail = t.lastMailTo('qm@example.org');
+    expect(mail?.subject).toMatch(/T-0001 Torque wrench is back and held for you/);
+    expect(mail?.links[0]).toBe('http://gripline.test/tools/T-0001');
+    const refused = await post(member, '/api/tools/T-0001/checkout');
+    expect(refused.body.error.code).toBe('TOOL_HELD');
+    expect((await post(qm, '/api/tools/T-0001/checkout')).status).toBe(201);
+  });
+
+  it('refuses a hold on an available tool', async () => {
+    await addTool({ name: 'Spacing fan', category: 'spacing_fan' });
+    expect((await post(member, '/api/tools/T-0001/holds')).body.error.code).toBe('TOOL_AVAILABLE');
+  });
+});
+
+describe('GET /api/reference/drills', () => {
+  it('lists numbered and letter drills with inch and mm', async () => {
+    const res = await (await t.anonymous()).agent.get('/api/reference/drills');
+    expect(res.status).toBe(200);
+    expect(res.body).toHaveLength(106);
+    // ASME B94.11M: #40 = 0.0980 in; letter F = 0.2570 in.
+    expect(res.body).toContainEqual({ name: '#40', inch: 0.098, mm: 2.489 });
+    expect(res.body).toContainEqual({ name: 'F', inch: 0.257, mm: 6.528 });
+  });
+});

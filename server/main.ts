@@ -5,6 +5,7 @@ import { fileURLToPath } from 'node:url';
 import { createApp } from './app';
 import { migrateDatabase, openDatabase } from './db/client';
 import type { Env } from './env';
+import { startCribScheduler } from './features/tools/crib-scheduler';
 import { createLogger } from './lib/logger';
 import { startMailCatcher, type MailCatcher } from './mail/mail-catcher';
 import { createSmtpMailer } from './mail/mailer';
@@ -51,6 +52,7 @@ export async function startGripline(env: Env): Promise<RunningGripline> {
     clientDir: CLIENT_DIR,
   });
   server.on('request', app);
+  const scheduler = startCribScheduler({ db, mailer, publicUrl: env.PUBLIC_URL ?? url, now: () => new Date() }, logger);
   logger.info({ url, mail: catcher ? 'caught locally' : 'SMTP_URL' }, 'Gripline is listening');
 
   return {
@@ -61,6 +63,7 @@ export async function startGripline(env: Env): Promise<RunningGripline> {
         server.close(() => ok());
         server.closeAllConnections();
       });
+      scheduler.stop();
       app.sessionStore.close();
       mailer.close();
       await catcher?.close();

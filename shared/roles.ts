@@ -18,18 +18,21 @@ export const ROLE_LABELS: Record<Role, string> = {
 export const ROLE_ABILITIES: Record<Role, readonly string[]> = {
   member: [
     'Sign in and keep your own password',
-    'Borrow and return crib tools (when the tool crib opens)',
+    'Borrow and return crib tools by scanning their labels',
+    'Join the queue for a tool someone else has',
     'Draw fasteners for the assembly you are building (when stock opens)',
   ],
   quartermaster: [
     'Everything a member can do',
-    'Keep the bins stocked, count them and print labels (when stock opens)',
-    'Add, service and retire crib tools (when the tool crib opens)',
+    'Add, edit, service and retire crib tools, and print their labels',
+    'See who holds what',
+    'Keep the bins stocked and count them (when stock opens)',
   ],
   lead: [
     'Everything a quartermaster can do',
     'Invite people by e-mail, change their role, deactivate them',
     'Read the mail Gripline has sent',
-    'Decide who may use which powered tools (when sign-offs open)',
+    'Decide who may use which powered tools (sign-offs)',
+    'See what is overdue and send reminders',
   ],
 };

@@ -54,3 +54,58 @@ export function holdOfferedMail(to: string, name: string, tool: { code: string; 
       .join('\n'),
   };
 }
+
+export interface OverdueMailLine {
+  tool: { code: string; name: string; location: string; replacementValueCents: number };
+  holder: { name: string; email: string; phone: string | null };
+  dueAt: Date;
+  daysLate: number;
+}
+
+const dayWords = (d: Date) => d.toISOString().slice(0, 10);
+const lateWords = (n: number) => `${n} ${n === 1 ? 'day' : 'days'} late`;
+const valueWords = (cents: number) => `$${(cents / 100).toFixed(2)}`;
+const toolLink = (publicUrl: string, code: string) => `${publicUrl.replace(/\/$/, '')}/tools/${code}`;
+
+export function overdueReminderMail(line: OverdueMailLine, publicUrl: string): OutgoingMail {
+  const { tool, holder } = line;
+  return {
+    to: holder.email,
+    subject: `Reminder: ${tool.code} ${tool.name} was due back on ${dayWords(line.dueAt)}`,
+    text: [
+      `Hello ${holder.name},`,
+      ``,
+      `A friendly reminder from the chapter's tool crib: you have ${tool.name} (${tool.code}) on loan.`,
+      `It was due back on ${dayWords(line.dueAt)} and is now ${lateWords(line.daysLate)}.`,
+      tool.location ? `It lives at: ${tool.location}.` : `Please bring it back to the tool crib.`,
+      ``,
+      `Others may be waiting for it. If you still need it, please talk to the quartermaster.`,
+      `Scan its label or open it here to return it:`,
+      toolLink(publicUrl, tool.code),
+      ``,
+      `Thank you.`,
+    ].join('\n'),
+  };
+}
+
+export function overdueDigestMail(to: string, name: string, lines: OverdueMailLine[], publicUrl: string): OutgoingMail {
+  const total = lines.reduce((sum, l) => sum + l.tool.replacementValueCents, 0);
+  return {
+    to,
+    subject: `Overdue tools: ${lines.length} ${lines.length === 1 ? 'tool is' : 'tools are'} late back`,
+    text: [
+      `Hello ${name},`,
+      ``,
+      `These tools are overdue at the tool crib, the latest first (replacement value ${valueWords(total)} in all):`,
+      ``,
+      ...lines.map(
+        (l) =>
+          `- ${l.tool.code} ${l.tool.name}: ${l.holder.name} (${l.holder.email}${l.holder.phone ? `, ${l.holder.phone}` : ''}), ` +
+          `due ${dayWords(l.dueAt)}, ${lateWords(l.daysLate)}, value ${valueWords(l.tool.replacementValueCents)}\n  ${toolLink(publicUrl, l.tool.code)}`,
+      ),
+      ``,
+      `Each holder gets at most one reminder a day. The full list is on the Overdue page:`,
+      `${publicUrl.replace(/\/$/, '')}/overdue`,
+    ].join('\n'),
+  };
+}

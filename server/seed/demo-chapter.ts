@@ -2,6 +2,7 @@ import type { Role } from '@shared/roles';
 import { hashPassword } from '../accounts/passwords';
 import { countUsers, insertUser } from '../accounts/users.repo';
 import type { Database } from '../db/client';
+import { seedDemoCrib } from './demo-crib';
 
 export const DEMO_PASSWORD = 'gripline-demo';
 /** An invented chapter ("Larkspur Field Builders, Chapter 417"): every person here is made up. */
@@ -21,5 +22,6 @@ export async function seedDemoChapter(db: Database): Promise<boolean> {
   db.transaction((tx) => {
     DEMO_PEOPLE.forEach((p, i) => insertUser(tx, { ...p, passwordHash: hashes[i]! }));
   });
+  await seedDemoCrib(db);
   return true;
 }

@@ -77,6 +77,7 @@ export const returnBodySchema = z
     condition: z.enum(['ok', 'needs_attention'], { error: 'Say whether the tool came back ok or needs attention.' }),
     note: z.string().trim().max(1000).optional(),
     returnedCount: z.number({ error: 'Count the temporary fasteners that came back.' }).int().min(0).optional(),
+    photoId: z.number({ error: 'A photo id is a whole number.' }).int({ error: 'A photo id is a whole number.' }).positive({ error: 'A photo id is a whole number.' }).optional(),
   })
   .strict()
   .refine((b) => b.condition === 'ok' || (b.note ?? '').length > 0, {
@@ -150,6 +151,7 @@ export const loanSchema = z.object({
   returnNote: z.string().nullable(),
   returnedCount: z.number().nullable(),
   shortfall: z.number().nullable(),
+  returnPhotoId: z.number().nullable(),
 });
 export type Loan = z.infer<typeof loanSchema>;
 

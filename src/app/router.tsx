@@ -2,14 +2,18 @@ import type { QueryClient } from '@tanstack/react-query';
 import { createBrowserRouter } from 'react-router';
 import { AppShell, appShellLoader } from './routes/app/app-shell';
 import { HomeRoute } from './routes/app/home';
+import { LoansRoute, loansLoader } from './routes/app/loans';
+import { ScanRoute } from './routes/app/scan';
+import { ToolDetailRoute, toolDetailLoader } from './routes/app/tool-detail';
+import { ToolsRoute, toolsLoader } from './routes/app/tools';
 import { AcceptInvitationRoute } from './routes/auth/accept-invitation';
 import { ResetPasswordConfirmRoute, ResetPasswordRequestRoute } from './routes/auth/reset-password';
 import { SignInRoute, signInLoader } from './routes/auth/sign-in';
 import { LoadingRoute, NotFoundRoute, RouteError } from './routes/route-error';
 
 /**
- * A data router: loaders fill the query cache, components read the same queries. The lead's pages
- * load lazily, so a member's phone downloads only what a member uses.
+ * A data router: loaders fill the query cache, components read the same queries. Pages members
+ * rarely or never open load lazily, so a phone downloads first what a member uses.
  */
 export function createAppRouter(queryClient: QueryClient) {
   return createBrowserRouter([
@@ -25,6 +29,26 @@ export function createAppRouter(queryClient: QueryClient) {
       HydrateFallback: LoadingRoute,
       children: [
         { index: true, Component: HomeRoute },
+        { path: 'scan', Component: ScanRoute },
+        { path: 'tools', loader: toolsLoader(queryClient), Component: ToolsRoute, ErrorBoundary: RouteError },
+        {
+          path: 'tools/new',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { ToolNewRoute, toolNewLoader } = await import('./routes/app/tool-edit');
+            return { loader: toolNewLoader(queryClient), Component: ToolNewRoute };
+          },
+        },
+        { path: 'tools/:code', loader: toolDetailLoader(queryClient), Component: ToolDetailRoute, ErrorBoundary: RouteError },
+        {
+          path: 'tools/:code/edit',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { ToolEditRoute, toolEditLoader } = await import('./routes/app/tool-edit');
+            return { loader: toolEditLoader(queryClient), Component: ToolEditRoute };
+          },
+        },
+        { path: 'loans', loader: loansLoader(queryClient), Component: LoansRoute, ErrorBoundary: RouteError },
         {
           path: 'people',
           ErrorBoundary: RouteError,
@@ -39,6 +63,38 @@ export function createAppRouter(queryClient: QueryClient) {
           lazy: async () => {
             const { SentMailRoute, sentMailLoader } = await import('./routes/app/sent-mail');
             return { loader: sentMailLoader(queryClient), Component: SentMailRoute };
+          },
+        },
+        {
+          path: 'overdue',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { OverdueRoute, overdueLoader } = await import('./routes/app/overdue');
+            return { loader: overdueLoader(queryClient), Component: OverdueRoute };
+          },
+        },
+        {
+          path: 'service',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { ServiceRoute, serviceLoader } = await import('./routes/app/service');
+            return { loader: serviceLoader(queryClient), Component: ServiceRoute };
+          },
+        },
+        {
+          path: 'signoffs',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { SignoffsRoute, signoffsLoader } = await import('./routes/app/signoffs');
+            return { loader: signoffsLoader(queryClient), Component: SignoffsRoute };
+          },
+        },
+        {
+          path: 'labels',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { LabelsRoute, labelsLoader } = await import('./routes/app/labels');
+            return { loader: labelsLoader(queryClient), Component: LabelsRoute };
           },
         },
       ],

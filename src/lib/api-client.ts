@@ -29,7 +29,9 @@ async function fetchCsrfToken(): Promise<string> {
 
 async function send<T>(method: string, path: string, body?: unknown, token?: string): Promise<T> {
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  // A FormData body sets its own multipart Content-Type, boundary included.
+  const isForm = body instanceof FormData;
+  if (body !== undefined && !isForm) headers['Content-Type'] = 'application/json';
   if (token) headers['X-CSRF-Token'] = token;
   let res: Response;
   try {
@@ -37,7 +39,7 @@ async function send<T>(method: string, path: string, body?: unknown, token?: str
       method,
       headers,
       credentials: 'same-origin',
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : isForm ? body : JSON.stringify(body),
     });
   } catch {
     throw new ApiError(0, 'NETWORK', 'No connection to Gripline. Check the Wi-Fi and try again.');
@@ -72,4 +74,37 @@ export const api = {
   post: <T>(path: string, body?: unknown) => mutate<T>('POST', path, body ?? {}),
   patch: <T>(path: string, body: unknown) => mutate<T>('PATCH', path, body),
   delete: <T = void>(path: string) => mutate<T>('DELETE', path),
+  /** multipart/form-data (photo uploads), with the same CSRF token and error handling. */
+  postForm: <T>(path: string, form: FormData) => mutate<T>('POST', path, form),
 };
+
+/**
+ * A POST whose answer is a file (a label sheet PDF) rather than JSON: the same CSRF token, one retry
+ * with a fresh token, and the same ApiError from the error envelope as `api.post`.
+ */
+export async function postForBlob(path: string, body: unknown): Promise<Blob> {
+  const attempt = async (token: string): Promise<Blob> => {
+    let res: Response;
+    try {
+      res = await fetch(path, {
+        method: 'POST',
+        headers: { Accept: 'application/pdf, application/json', 'Content-Type': 'application/json', 'X-CSRF-Token': token },
+        credentials: 'same-origin',
+        body: JSON.stringify(body),
+      });
+    } catch {
+      throw new ApiError(0, 'NETWORK', 'No connection to Gripline. Check the Wi-Fi and try again.');
+    }
+    if (res.ok) return res.blob();
+    const parsed = errorEnvelopeSchema.safeParse(await res.json().catch(() => undefined));
+    if (!parsed.success) throw new ApiError(res.status, 'HTTP_' + res.status, `The server answered ${res.status}. Try again in a moment.`);
+    const e = parsed.data.error;
+    throw new ApiError(res.status, e.code, e.message, e.issues);
+  };
+  try {
+    return await attempt(csrfToken ?? (await fetchCsrfToken()));
+  } catch (err) {
+    if (err instanceof ApiError && err.code === 'CSRF_TOKEN_INVALID') return attempt(await fetchCsrfToken());
+    throw err;
+  }
+}

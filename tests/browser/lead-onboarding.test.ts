@@ -23,6 +23,12 @@ async function phonePage(): Promise<Page> {
   return context.newPage();
 }
 
+/** On a phone the lead's pages sit in the Menu at the top. */
+async function openFromMenu(page: Page, name: string) {
+  await page.getByText('Menu', { exact: true }).click();
+  await page.getByRole('link', { name }).click();
+}
+
 async function signIn(page: Page, email: string, password: string) {
   await page.goto(`${app.url}/`);
   await page.waitForURL(/\/sign-in/);
@@ -38,7 +44,7 @@ describe('the demo lead on a phone', () => {
     await page.getByRole('heading', { name: 'Hello, Dana' }).waitFor();
     expect(await page.getByText('Chapter lead').first().isVisible()).toBe(true);
 
-    await page.getByRole('link', { name: 'People' }).click();
+    await openFromMenu(page, 'People');
     await page.getByRole('heading', { name: 'People', exact: true }).waitFor();
     expect(await page.getByRole('cell', { name: /Ruth Lindqvist quartermaster@example.org/ }).isVisible()).toBe(true);
     expect(await page.getByText('Showing 6 of 6 people').isVisible()).toBe(true);
@@ -48,7 +54,7 @@ describe('the demo lead on a phone', () => {
     await page.getByText('new.builder@example.org').first().waitFor();
     await page.screenshot({ path: `${SHOTS}/people-phone.png`, fullPage: true });
 
-    await page.getByRole('link', { name: 'Sent mail' }).click();
+    await openFromMenu(page, 'Sent mail');
     await page.getByText(/invited you to the chapter's tool crib/).waitFor();
     const link = await page.getByRole('link', { name: 'Open the invitation link' }).getAttribute('href');
     expect(link).toMatch(/\/invite\/[A-Za-z0-9_-]{43}$/);
@@ -66,7 +72,8 @@ describe('the demo lead on a phone', () => {
     await invitee.getByLabel('Choose a password').fill('rivet lines all day');
     await invitee.getByRole('button', { name: 'Join and sign in' }).click();
     await invitee.getByRole('heading', { name: 'Hello, Noor' }).waitFor();
-    expect(await invitee.getByRole('link', { name: 'People' }).count()).toBe(0);
+    expect(await invitee.getByText('Menu', { exact: true }).count()).toBe(0);
+    expect(await invitee.getByRole('link', { name: 'Scan' }).isVisible()).toBe(true);
     await invitee.screenshot({ path: `${SHOTS}/member-home-phone.png`, fullPage: true });
     await invitee.context().close();
   });

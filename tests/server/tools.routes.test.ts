@@ -82,6 +82,17 @@ describe('POST /api/tools/:code/checkout and /return', () => {
     expect(open.n).toBe(1);
   });
 
+  it('falls back on the database: an open loan written by another process makes the checkout answer 409', async () => {
+    const tool = await addTool({ name: 'Air drill', category: 'air_drill' });
+    const qmId = (t.db.$client.prepare("select id from users where email = 'qm@example.org'").get() as { id: number }).id;
+    // Another process wrote a loan but the tool row still says available.
+    t.db.$client.prepare('insert into loans (tool_id, user_id, checked_out_at, due_at) values (?, ?, ?, ?)').run(tool.id, qmId, 1, 2);
+    const res = await post(member, '/api/tools/T-0001/checkout');
+    expect(res.status).toBe(409);
+    expect(res.body.error.code).toBe('TOOL_ON_LOAN');
+    expect(res.body.error.message).toMatch(/just checked out by someone else/);
+  });
+
   it('returns a tool: ok makes it available, needs attention takes it out of service with the note', async () => {
     await addTool({ name: 'Rivet gun 3X', category: 'rivet_gun' });
     await post(member, '/api/tools/T-0001/checkout').expect(201);

@@ -29,5 +29,6 @@ export function listLoans(db: Executor, filter: { userId?: number; open?: boolea
       returnNote: loan.returnNote,
       returnedCount: loan.returnedCount,
       shortfall: loan.shortfall,
+      returnPhotoId: loan.returnPhotoId,
     }));
 }

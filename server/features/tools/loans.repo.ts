@@ -31,6 +31,13 @@ function prepareLoanStatements(db: Database) {
       .innerJoin(users, eq(users.id, holds.userId))
       .where(and(eq(holds.toolId, p('toolId')), eq(holds.status, 'offered')))
       .prepare(),
+    /** Every return asks whether anyone waits; the queue is usually empty, so the offer's own query runs only when someone does. */
+    anyoneWaiting: db
+      .select({ id: holds.id })
+      .from(holds)
+      .where(and(eq(holds.toolId, p('toolId')), eq(holds.status, 'waiting')))
+      .limit(1)
+      .prepare(),
     insertLoan: db
       .insert(loans)
       .values({ toolId: p('toolId'), userId: p('userId'), checkedOutAt: p('checkedOutAt'), dueAt: p('dueAt') })
@@ -55,6 +62,7 @@ function prepareLoanStatements(db: Database) {
         returnNote: sql`${p('note')}`,
         returnedCount: sql`${p('returnedCount')}`,
         shortfall: sql`${p('shortfall')}`,
+        returnPhotoId: sql`${p('returnPhotoId')}`,
       })
       .where(and(eq(loans.id, p('loanId')), isNull(loans.returnedAt)))
       .prepare(),

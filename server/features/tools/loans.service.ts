@@ -3,8 +3,11 @@ import { hasRole } from '@shared/roles';
 import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
+import { isUniqueViolation } from '../../lib/sqlite-errors';
 import { offerToNextInQueue } from './holds.service';
 import { loanStatements } from './loans.repo';
+import { checkReturnPhoto } from './photos.service';
+import { signOffAdvice } from './signoffs.service';
 import { effectiveLoanDays } from './tool-dto';
 import type { ToolRow } from './tools.repo';
 
@@ -69,7 +72,7 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
       throw new HttpError(
         403,
         'SIGNOFF_REQUIRED',
-        `${tool.code} needs the "${name}" sign-off, which you do not have yet. The chapter lead can sign you off.`,
+        `${tool.code} needs the "${name}" sign-off, which you do not have yet. ${signOffAdvice(ctx.db)}`,
       );
     }
     const due = dueDate(tool, body, now);
@@ -77,7 +80,7 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
     try {
       loanId = s.insertLoan.get({ toolId: tool.id, userId: user.id, checkedOutAt: now, dueAt: due }).id;
     } catch (err) {
-      if ((err as { code?: string }).code === 'SQLITE_CONSTRAINT_UNIQUE') {
+      if (isUniqueViolation(err)) {
         throw new HttpError(409, 'TOOL_ON_LOAN', `${tool.code} was just checked out by someone else.`);
       }
       throw err;
@@ -138,6 +141,7 @@ export async function returnTool(ctx: ServiceContext, user: UserRow, code: strin
       }
       shortfall = tool.trayCapacity !== null ? tool.trayCapacity - body.returnedCount : null;
     }
+    if (body.photoId !== undefined) checkReturnPhoto(ctx, tool, body.photoId);
     s.closeLoan.run({
       loanId: loan.id,
       returnedAt: now.getTime(),
@@ -146,6 +150,7 @@ export async function returnTool(ctx: ServiceContext, user: UserRow, code: strin
       note: body.note ?? null,
       returnedCount: body.returnedCount ?? null,
       shortfall,
+      returnPhotoId: body.photoId ?? null,
     });
     const detail = [
       body.condition === 'ok' ? 'Came back ok' : `Needs attention: ${body.note}`,
@@ -161,7 +166,7 @@ export async function returnTool(ctx: ServiceContext, user: UserRow, code: strin
       status = 'out_of_service';
       s.setToolStatus.run({ toolId: tool.id, status, statusNote: body.note ?? 'Needs attention', updatedAt: now.getTime() });
     } else {
-      const offer = offerToNextInQueue(ctx, tool, now);
+      const offer = s.anyoneWaiting.get({ toolId: tool.id }) ? offerToNextInQueue(ctx, tool, now) : undefined;
       status = offer ? 'held' : 'available';
       offeredTo = offer ? { id: offer.userId, name: offer.name } : null;
       notify = offer?.notify;

@@ -5,6 +5,7 @@ import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { loanStatements } from './loans.repo';
+import { signOffAdvice } from './signoffs.service';
 import { recordToolEvent } from './tool-events.repo';
 import { toTool } from './tool-dto';
 import {
@@ -79,7 +80,7 @@ export function getToolForYou(ctx: ServiceContext, user: UserRow, code: string):
   if (actions.includes('check_out') && tool.requiredSignoff) {
     if (!loanStatements(ctx.db).hasSignoff.get({ signoffId: tool.requiredSignoff.id, userId: user.id })) {
       actions.splice(actions.indexOf('check_out'), 1);
-      reason = `Needs the "${tool.requiredSignoff.name}" sign-off, which you do not have yet. The chapter lead can sign you off.`;
+      reason = `Needs the "${tool.requiredSignoff.name}" sign-off, which you do not have yet. ${signOffAdvice(ctx.db)}`;
     }
   }
   return {

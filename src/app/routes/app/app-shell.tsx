@@ -16,11 +16,21 @@ export const appShellLoader = (queryClient: QueryClient) => async ({ request }: 
 const LINK =
   'flex min-h-14 flex-1 flex-col items-center justify-center px-3 text-sm font-semibold sm:flex-none sm:min-h-12 sm:text-base aria-[current=page]:text-ink aria-[current=page]:shadow-[inset_0_-4px_0_var(--color-brass)] text-ink-soft';
 
-/** The sections of the app, each shown to the roles that may open it. */
-const NAV_LINKS: { to: string; label: string; role: Role }[] = [
-  { to: '/', label: 'Home', role: 'member' },
+/**
+ * The sections of the app, each shown to the roles that may open it. On a phone the primary ones
+ * sit in the bottom bar under the thumb; the rest are in the Menu at the top.
+ */
+const NAV_LINKS: { to: string; label: string; role: Role; primary?: boolean }[] = [
+  { to: '/', label: 'Home', role: 'member', primary: true },
+  { to: '/scan', label: 'Scan', role: 'member', primary: true },
+  { to: '/tools', label: 'Tools', role: 'member', primary: true },
+  { to: '/loans', label: 'My loans', role: 'member', primary: true },
   { to: '/people', label: 'People', role: 'lead' },
   { to: '/mail', label: 'Sent mail', role: 'lead' },
+  { to: '/overdue', label: 'Overdue', role: 'lead' },
+  { to: '/service', label: 'Service', role: 'quartermaster' },
+  { to: '/labels', label: 'Labels', role: 'quartermaster' },
+  { to: '/signoffs', label: 'Sign-offs', role: 'lead' },
 ];
 
 export function AppShell() {
@@ -29,6 +39,7 @@ export function AppShell() {
   const navigate = useNavigate();
   if (!me) return null;
   const links = NAV_LINKS.filter((link) => hasRole(me.role, link.role));
+  const more = links.filter((link) => !link.primary);
 
   const signOut = () =>
     logout.mutate(undefined, {
@@ -37,7 +48,7 @@ export function AppShell() {
     });
 
   return (
-    <div className={`min-h-dvh sm:pb-0 ${links.length > 1 ? 'pb-20' : ''}`}>
+    <div className="min-h-dvh pb-20 sm:pb-0">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:p-3">
         Skip to content
       </a>
@@ -49,6 +60,23 @@ export function AppShell() {
               {me.name} · {ROLE_LABELS[me.role]}
             </p>
           </div>
+          {more.length > 0 && (
+            <details className="relative sm:hidden">
+              <summary className="flex min-h-12 cursor-pointer list-none items-center rounded-lg border-2 border-card/60 px-4 font-semibold">Menu</summary>
+              <ul className="absolute right-0 z-20 mt-2 w-56 rounded-xl border border-rule bg-card p-2 text-ink shadow-lg">
+                {more.map((link) => (
+                  <li key={link.to}>
+                    <NavLink
+                      to={link.to}
+                      onClick={(e) => e.currentTarget.closest('details')?.removeAttribute('open')}
+                      className="flex min-h-12 items-center rounded-lg px-3 font-semibold hover:bg-paper aria-[current=page]:bg-paper">
+                      {link.label}
+                    </NavLink>
+                  </li>
+                ))}
+              </ul>
+            </details>
+          )}
           <button
             type="button"
             onClick={signOut}
@@ -59,17 +87,15 @@ export function AppShell() {
           </button>
         </div>
       </header>
-      {links.length > 1 && (
-        <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-10 border-t border-rule bg-card sm:static sm:border-t-0 sm:border-b">
-          <div className="mx-auto flex max-w-5xl sm:gap-2 sm:px-4">
-            {links.map((link) => (
-              <NavLink key={link.to} to={link.to} end={link.to === '/'} className={LINK}>
-                {link.label}
-              </NavLink>
-            ))}
-          </div>
-        </nav>
-      )}
+      <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-10 border-t border-rule bg-card sm:static sm:border-t-0 sm:border-b">
+        <div className="mx-auto flex max-w-5xl sm:flex-wrap sm:gap-1 sm:px-4">
+          {links.map((link) => (
+            <NavLink key={link.to} to={link.to} end={link.to === '/'} className={`${LINK} ${link.primary ? '' : 'max-sm:hidden'}`}>
+              {link.label}
+            </NavLink>
+          ))}
+        </div>
+      </nav>
       <main id="main" className="mx-auto max-w-5xl px-4 py-5">
         <Outlet />
       </main>

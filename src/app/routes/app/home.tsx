@@ -4,6 +4,7 @@ import { hasRole, ROLE_LABELS, ROLES } from '@shared/roles';
 import type { User } from '@shared/schemas/auth';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { RoleSummary } from '@/features/auth/components/role-summary';
+import { MySignoffs } from '@/features/signoffs/components/my-signoffs';
 import { invitationsQueryOptions } from '@/features/people/api/get-invitations';
 import { peopleQueryOptions } from '@/features/people/api/get-people';
 import { Notice } from '@/components/ui/notice';
@@ -63,6 +64,7 @@ export function HomeRoute() {
         <RoleSummary user={me} />
         {hasRole(me.role, 'lead') ? <ChapterAtAGlance /> : null}
         <SafetyNotes user={me} />
+        <MySignoffs />
       </div>
     </>
   );

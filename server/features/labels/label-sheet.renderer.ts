@@ -1,0 +1,76 @@
+import PDFDocument from 'pdfkit';
+import { arrangeLabel } from '../../../labels/label-template';
+import type { SheetLayout } from '../../../labels/layouts';
+import { pageSizeInPoints, placeLabels, type Box } from '../../../labels/sheet-geometry';
+import { fitLines, toWinAnsi } from './fit-text';
+import { darkRuns, qrMatrix } from './qr-matrix';
+
+/** One label: the code the QR carries and prints large, and a title (a tool's or a bin's name). */
+export interface LabelItem {
+  code: string;
+  title: string;
+}
+
+export interface RenderOptions {
+  /** Positions already used on the first page. */
+  skip?: number;
+  /** Off in tests, so the page content can be read as text. */
+  compress?: boolean;
+  createdAt?: Date;
+}
+
+const CODE_FONT = 'Courier-Bold';
+const TITLE_FONT = 'Helvetica';
+
+/** A PDF with one label per item, laid out on the layout's pages; resolves with the file's bytes. */
+export function renderLabelSheet(layout: SheetLayout, items: readonly LabelItem[], options: RenderOptions = {}): Promise<Buffer> {
+  const page = pageSizeInPoints(layout);
+  const doc = new PDFDocument({
+    size: [page.width, page.height],
+    margin: 0,
+    autoFirstPage: false,
+    compress: options.compress ?? true,
+    info: { Title: `Gripline labels (${layout.name})`, Creator: 'Gripline', CreationDate: options.createdAt ?? new Date() },
+  });
+  const chunks: Buffer[] = [];
+  const done = new Promise<Buffer>((resolve, reject) => {
+    doc.on('data', (chunk: Buffer) => chunks.push(chunk));
+    doc.on('end', () => resolve(Buffer.concat(chunks)));
+    doc.on('error', reject);
+  });
+
+  let currentPage = -1;
+  placeLabels(layout, items.length, options.skip ?? 0).forEach(({ page: pageIndex, box }, i) => {
+    while (currentPage < pageIndex) {
+      doc.addPage({ size: [page.width, page.height], margin: 0 });
+      currentPage++;
+    }
+    drawLabel(doc, box, items[i]!);
+  });
+  doc.end();
+  return done;
+}
+
+function drawLabel(doc: PDFKit.PDFDocument, box: Box, item: LabelItem): void {
+  const t = arrangeLabel(box, item.code.length);
+  drawQr(doc, t.qr, item.code);
+
+  doc.fillColor('black').font(CODE_FONT).fontSize(t.code.fontSize);
+  doc.text(item.code, t.code.x, t.code.y, { lineBreak: false });
+
+  doc.font(TITLE_FONT).fontSize(t.title.fontSize);
+  const lines = fitLines(toWinAnsi(item.title), t.title.width, t.title.maxLines, (s) => doc.widthOfString(s));
+  lines.forEach((line, i) => {
+    doc.text(line, t.title.x, t.title.y + i * t.title.fontSize * 1.2, { lineBreak: false });
+  });
+}
+
+/** Vector modules (no bitmap to blur when printed), quiet zone included in the square. */
+function drawQr(doc: PDFKit.PDFDocument, square: Box, code: string): void {
+  const matrix = qrMatrix(code);
+  const module = square.width / matrix.size;
+  for (const run of darkRuns(matrix)) {
+    doc.rect(square.x + run.column * module, square.y + run.row * module, run.length * module, module);
+  }
+  doc.fill('black');
+}

@@ -1,0 +1,25 @@
+import { Router } from 'express';
+import { labelSheetBodySchema } from '@shared/schemas/labels';
+import { requireRole } from '../../middleware/auth';
+import { parseInput } from '../../lib/validate';
+import { buildToolLabelSheet, listLayouts } from './labels.service';
+
+/** Label sheets for the quartermaster (and the lead): the layouts, and a PDF of labels for tools. */
+export function labelsRouter() {
+  const router = Router();
+  router.use(requireRole('quartermaster'));
+
+  router.get('/layouts', (_req, res) => {
+    res.json({ data: listLayouts() });
+  });
+
+  router.post('/sheet', async (req, res) => {
+    const { filename, pdf } = await buildToolLabelSheet(req.ctx, parseInput(labelSheetBodySchema, req.body));
+    res.setHeader('Content-Type', 'application/pdf');
+    res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
+    res.setHeader('Cache-Control', 'no-store');
+    res.send(pdf);
+  });
+
+  return router;
+}

@@ -1,0 +1,56 @@
+import type { LabelSheetInput } from '@shared/schemas/labels';
+import { findSheetLayout, labelsPerPage, SHEET_LAYOUTS, type SheetLayout } from '../../../labels/layouts';
+import type { ServiceContext } from '../../context';
+import { HttpError } from '../../lib/http-error';
+import { renderLabelSheet, type LabelItem } from './label-sheet.renderer';
+import { findToolNames } from './labels.repo';
+
+export function listLayouts(): readonly SheetLayout[] {
+  return SHEET_LAYOUTS;
+}
+
+export interface LabelSheetFile {
+  filename: string;
+  pdf: Buffer;
+}
+
+/** A PDF of tool labels, one per code in the order given (a code may repeat for a second label). */
+export async function buildToolLabelSheet(ctx: ServiceContext, input: LabelSheetInput): Promise<LabelSheetFile> {
+  const layout = layoutFor(input.layoutId, input.skip);
+  const names = findToolNames(ctx.db, input.codes);
+  const unknown = [...new Set(input.codes.filter((code) => !names.has(code)))];
+  if (unknown.length > 0) {
+    throw new HttpError(
+      400,
+      'UNKNOWN_CODES',
+      `No tool has the code${unknown.length > 1 ? 's' : ''} ${listed(unknown)}. Take ${unknown.length > 1 ? 'them' : 'it'} off the list or check the code.`,
+      input.codes.flatMap((code, i) => (names.has(code) ? [] : [{ path: `codes.${i}`, message: `No tool has the code ${code}.` }])),
+    );
+  }
+  const items: LabelItem[] = input.codes.map((code) => ({ code, title: names.get(code)! }));
+  const pdf = await renderLabelSheet(layout, items, { skip: input.skip, createdAt: ctx.now() });
+  return { filename: `gripline-labels-${layout.id}.pdf`, pdf };
+}
+
+function layoutFor(layoutId: string, skip: number): SheetLayout {
+  const layout = findSheetLayout(layoutId);
+  if (!layout) {
+    const known = SHEET_LAYOUTS.map((l) => l.id).join(', ');
+    throw new HttpError(400, 'VALIDATION_FAILED', `The request body is not valid. layoutId: use one of ${known}.`, [
+      { path: 'layoutId', message: `There is no sheet layout "${layoutId}". Use one of ${known}.` },
+    ]);
+  }
+  const perPage = labelsPerPage(layout);
+  if (skip >= perPage) {
+    const message = `A page of this layout has ${perPage} label${perPage > 1 ? 's' : ''}, so at most ${perPage - 1} can be already used.`;
+    throw new HttpError(400, 'VALIDATION_FAILED', `The request body is not valid. skip: ${message}`, [{ path: 'skip', message }]);
+  }
+  return layout;
+}
+
+function listed(codes: string[]): string {
+  const shown = codes.slice(0, 10);
+  const rest = codes.length - shown.length;
+  const text = shown.length > 1 ? `${shown.slice(0, -1).join(', ')} and ${shown.at(-1)}` : shown[0]!;
+  return rest > 0 ? `${shown.join(', ')} and ${rest} more` : text;
+}

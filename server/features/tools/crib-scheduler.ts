@@ -1,0 +1,35 @@
+import { Cron } from 'croner';
+import type { ServiceContext } from '../../context';
+import type { Logger } from '../../lib/logger';
+import { expireHoldOffers } from './holds.service';
+import { runOverdueReminders } from './reminder-job';
+
+/** Daily at 07:00 server local time: before the hangar opens, after the night. */
+const OVERDUE_SCHEDULE = '0 7 * * *';
+/** Every 5 minutes, so a held tool goes to the next person soon after its offer runs out. */
+const HOLD_OFFER_SCHEDULE = '*/5 * * * *';
+
+/**
+ * Starts the tool crib's timed jobs. A failing run is logged and the schedule goes on; `protect`
+ * skips a tick while the previous run of the same job is still going.
+ */
+export function startCribScheduler(ctx: ServiceContext, logger: Logger): { stop(): void } {
+  const guarded = (name: string, run: () => Promise<unknown>) => async () => {
+    try {
+      const result = await run();
+      // Hold offers are checked every few minutes; log only when something moved.
+      if (result) logger.info({ job: name, result }, 'scheduled job finished');
+    } catch (err) {
+      logger.error({ job: name, err }, 'scheduled job failed');
+    }
+  };
+  const jobs = [
+    new Cron(OVERDUE_SCHEDULE, { name: 'overdue-reminders', protect: true, unref: true }, guarded('overdue-reminders', () => runOverdueReminders(ctx))),
+    new Cron(HOLD_OFFER_SCHEDULE, { name: 'expire-hold-offers', protect: true, unref: true }, guarded('expire-hold-offers', () => expireHoldOffers(ctx))),
+  ];
+  return {
+    stop() {
+      for (const job of jobs) job.stop();
+    },
+  };
+}

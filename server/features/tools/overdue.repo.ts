@@ -1,0 +1,92 @@
+import { and, asc, desc, eq, isNull, lt, max } from 'drizzle-orm';
+import type { Executor } from '../../db/client';
+import { jobRuns, loanReminders } from '../../db/schema/crib-jobs';
+import { loans, tools } from '../../db/schema/tools';
+import { users } from '../../db/schema/users';
+
+export interface OverdueLoanRow {
+  loanId: number;
+  dueAt: Date;
+  returnedAt: Date | null;
+  tool: { code: string; name: string; location: string; replacementValueCents: number };
+  holder: { id: number; name: string; email: string; phone: string | null };
+  lastReminderAt: Date | null;
+}
+
+const lastReminder = max(loanReminders.sentAt);
+
+function loanWithPeopleQuery(db: Executor) {
+  return db
+    .select({
+      loanId: loans.id,
+      dueAt: loans.dueAt,
+      returnedAt: loans.returnedAt,
+      tool: { code: tools.code, name: tools.name, location: tools.location, replacementValueCents: tools.replacementValueCents },
+      holder: { id: users.id, name: users.name, email: users.email, phone: users.phone },
+      lastReminderAt: lastReminder,
+    })
+    .from(loans)
+    .innerJoin(tools, eq(tools.id, loans.toolId))
+    .innerJoin(users, eq(users.id, loans.userId))
+    .leftJoin(loanReminders, eq(loanReminders.loanId, loans.id));
+}
+
+/** Open loans whose due date has passed, the longest overdue first. */
+export function listOverdueLoans(db: Executor, now: Date): OverdueLoanRow[] {
+  return loanWithPeopleQuery(db)
+    .where(and(isNull(loans.returnedAt), lt(loans.dueAt, now)))
+    .groupBy(loans.id)
+    .orderBy(asc(loans.dueAt), asc(loans.id))
+    .all();
+}
+
+export function findLoanForReminder(db: Executor, loanId: number): OverdueLoanRow | undefined {
+  return loanWithPeopleQuery(db).where(eq(loans.id, loanId)).groupBy(loans.id).get();
+}
+
+/** Loans reminded on a given calendar day. */
+export function loansRemindedOn(db: Executor, day: string): Set<number> {
+  const rows = db.select({ loanId: loanReminders.loanId }).from(loanReminders).where(eq(loanReminders.day, day)).all();
+  return new Set(rows.map((r) => r.loanId));
+}
+
+/**
+ * Claims the day's reminder for a loan. The unique (loanId, day) index decides: true when this
+ * call inserted the row (and so must send the mail), false when one was already sent that day.
+ */
+export function claimReminder(db: Executor, r: { loanId: number; day: string; sentAt: Date; sentById: number | null }): boolean {
+  const inserted = db.insert(loanReminders).values(r).onConflictDoNothing().returning({ id: loanReminders.id }).all();
+  return inserted.length > 0;
+}
+
+/** A reminder whose mail could not go out is given back, so a later attempt the same day can send it. */
+export function releaseReminder(db: Executor, loanId: number, day: string): void {
+  db.delete(loanReminders).where(and(eq(loanReminders.loanId, loanId), eq(loanReminders.day, day))).run();
+}
+
+export function activeLeads(db: Executor): { name: string; email: string }[] {
+  return db
+    .select({ name: users.name, email: users.email })
+    .from(users)
+    .where(and(eq(users.role, 'lead'), isNull(users.deactivatedAt)))
+    .orderBy(asc(users.id))
+    .all();
+}
+
+export function startJobRun(db: Executor, job: string, startedAt: Date): number {
+  return db.insert(jobRuns).values({ job, startedAt }).returning({ id: jobRuns.id }).get().id;
+}
+
+export function finishJobRun(db: Executor, id: number, values: { finishedAt: Date; summary: string; error: string | null }): void {
+  db.update(jobRuns).set(values).where(eq(jobRuns.id, id)).run();
+}
+
+export function lastJobRun(db: Executor, job: string) {
+  return db
+    .select()
+    .from(jobRuns)
+    .where(eq(jobRuns.job, job))
+    .orderBy(desc(jobRuns.startedAt), desc(jobRuns.id))
+    .limit(1)
+    .get();
+}

@@ -1,0 +1,47 @@
+import { Router, type Response } from 'express';
+import { photoIdParams } from '@shared/schemas/photos';
+import { toolCodeParams } from '@shared/schemas/tools';
+import { parseInput } from '../../lib/validate';
+import { requireRole, requireUser } from '../../middleware/auth';
+import { addPhoto, photoUploadTarget, readPhoto, removePhoto } from './photos.service';
+import { receivePhoto } from './receive-photo';
+
+/** POST /api/tools/:code/photos; mounted before the tools router, whose /:code/:command route is for quartermasters. */
+export function toolPhotosRouter() {
+  const router = Router();
+  router.post(
+    '/:code/photos',
+    requireRole('member'),
+    (req, _res, next) => {
+      photoUploadTarget(req.ctx, requireUser(req), parseInput(toolCodeParams, req.params, 'path').code);
+      next();
+    },
+    receivePhoto,
+    async (req, res) => {
+      const { code } = parseInput(toolCodeParams, req.params, 'path');
+      res.status(201).json(await addPhoto(req.ctx, requireUser(req), code, req.file!.buffer));
+    },
+  );
+  return router;
+}
+
+/** Photos never change once stored (a new photo gets a new id), so browsers may keep them. */
+function sendJpeg(res: Response, bytes: Buffer) {
+  res.set('Cache-Control', 'private, max-age=31536000, immutable').type('image/jpeg').send(bytes);
+}
+
+/** GET and DELETE /api/photos/:id. */
+export function photosRouter() {
+  const router = Router();
+  router.use(requireRole('member'));
+  const photoId = (params: unknown) => parseInput(photoIdParams, params, 'path').id;
+
+  router.get('/:id', (req, res) => sendJpeg(res, readPhoto(req.ctx, photoId(req.params), 'image')));
+  router.get('/:id/thumbnail', (req, res) => sendJpeg(res, readPhoto(req.ctx, photoId(req.params), 'thumbnail')));
+
+  router.delete('/:id', requireRole('quartermaster'), (req, res) => {
+    removePhoto(req.ctx, requireUser(req), photoId(req.params));
+    res.status(204).end();
+  });
+  return router;
+}

@@ -1,0 +1,70 @@
+import {
+  SERVICE_DUE_WITHIN_DAYS,
+  SERVICE_URGENCIES,
+  serviceDueWords,
+  serviceKindOf,
+  type ServiceDueItem,
+  type ServiceDueList,
+  type ServiceUrgency,
+} from '@shared/schemas/overdue';
+import type { ServiceContext } from '../../context';
+import { listServiceCandidates } from './service-due.repo';
+import { serviceDueAt } from './tool-dto';
+import type { ToolRow } from './tools.repo';
+
+const DAY_MS = 24 * 60 * 60 * 1000;
+
+/** Whole days left, counted down; once the date has passed, whole days overdue as a negative, at least 1. */
+function wholeDaysUntil(dueAt: Date, now: Date): number {
+  const ms = dueAt.getTime() - now.getTime();
+  return ms > 0 ? Math.floor(ms / DAY_MS) : -Math.max(1, Math.floor(-ms / DAY_MS));
+}
+
+function urgencyOf(row: ToolRow, daysUntilDue: number | null): ServiceUrgency | undefined {
+  if (daysUntilDue !== null && daysUntilDue < 0) return 'overdue';
+  if (row.status === 'out_of_service') return 'out_of_service';
+  if (daysUntilDue !== null && daysUntilDue <= SERVICE_DUE_WITHIN_DAYS) return 'due_soon';
+  return undefined;
+}
+
+function toItem(row: ToolRow, now: Date): ServiceDueItem | undefined {
+  const dueAt = serviceDueAt(row);
+  const daysUntilDue = dueAt ? wholeDaysUntil(dueAt, now) : null;
+  const urgency = urgencyOf(row, daysUntilDue);
+  if (!urgency) return undefined;
+  const kind = serviceKindOf(row.category);
+  const outOfService = row.status === 'out_of_service';
+  const words = [
+    outOfService ? `Out of service: ${row.statusNote ?? 'no reason given'}` : undefined,
+    daysUntilDue !== null && daysUntilDue <= SERVICE_DUE_WITHIN_DAYS ? serviceDueWords(kind, daysUntilDue) : undefined,
+  ].filter(Boolean);
+  return {
+    code: row.code,
+    name: row.name,
+    category: row.category,
+    location: row.location,
+    status: row.status,
+    outOfServiceReason: outOfService ? row.statusNote : null,
+    serviceKind: kind,
+    serviceIntervalDays: row.serviceIntervalDays,
+    lastServiceAt: row.lastServiceAt?.toISOString() ?? null,
+    serviceDueAt: dueAt?.toISOString() ?? null,
+    daysUntilDue,
+    urgency,
+    words: words.join('; '),
+  };
+}
+
+/**
+ * The quartermaster's service list, most urgent first: tools past their service or calibration
+ * date (they may still be lent out), then tools out of service, then those due within 14 days.
+ */
+export function listServiceDue(ctx: ServiceContext): ServiceDueList {
+  const now = ctx.now();
+  const rank = (u: ServiceUrgency) => SERVICE_URGENCIES.indexOf(u);
+  const data = listServiceCandidates(ctx.db)
+    .map((row) => toItem(row, now))
+    .filter((item): item is ServiceDueItem => item !== undefined)
+    .sort((a, b) => rank(a.urgency) - rank(b.urgency) || (a.daysUntilDue ?? Infinity) - (b.daysUntilDue ?? Infinity) || a.code.localeCompare(b.code));
+  return { data, meta: { dueWithinDays: SERVICE_DUE_WITHIN_DAYS } };
+}

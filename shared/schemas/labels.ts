@@ -1,0 +1,42 @@
+import { z } from 'zod';
+import { toolCodeField } from './tools';
+
+export const MAX_LABELS_PER_REQUEST = 300;
+
+/** A label sheet to print: which layout, which codes (one label each, in order), how many positions are used. */
+export const labelSheetBodySchema = z
+  .object({
+    layoutId: z.string({ error: 'Choose a sheet layout.' }).trim().min(1, { error: 'Choose a sheet layout.' }),
+    codes: z
+      .array(toolCodeField, { error: 'Send the tool codes as a list, like ["T-0042"].' })
+      .min(1, { error: 'Pick at least one tool to label.' })
+      .max(MAX_LABELS_PER_REQUEST, { error: `Print at most ${MAX_LABELS_PER_REQUEST} labels at a time.` }),
+    skip: z
+      .number({ error: 'Enter how many labels on the first sheet are already used, or 0.' })
+      .int({ error: 'Enter a whole number of used labels.' })
+      .min(0, { error: 'Used labels cannot be fewer than 0.' })
+      .max(MAX_LABELS_PER_REQUEST - 1, { error: 'That is more used labels than any sheet has.' })
+      .default(0),
+  })
+  .strict();
+export type LabelSheetBody = z.input<typeof labelSheetBodySchema>;
+export type LabelSheetInput = z.output<typeof labelSheetBodySchema>;
+
+const size = z.strictObject({ width: z.number(), height: z.number() });
+
+/** A sheet layout as the API sends it: lengths in the layout's own unit. */
+export const sheetLayoutSchema = z.strictObject({
+  id: z.string(),
+  name: z.string(),
+  media: z.enum(['sheet', 'thermal-roll']),
+  unit: z.enum(['in', 'mm']),
+  page: size,
+  label: size,
+  columns: z.number().int().positive(),
+  rows: z.number().int().positive(),
+  margin: z.strictObject({ top: z.number(), left: z.number() }),
+  gap: z.strictObject({ horizontal: z.number(), vertical: z.number() }),
+});
+export type SheetLayoutDto = z.infer<typeof sheetLayoutSchema>;
+
+export const sheetLayoutListSchema = z.strictObject({ data: z.array(sheetLayoutSchema) });

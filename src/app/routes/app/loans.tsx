@@ -1,0 +1,45 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router';
+import { hasRole } from '@shared/roles';
+import { meQueryOptions } from '@/features/auth/api/get-me';
+import { myLoansQueryOptions, openLoansQueryOptions } from '@/features/tools/api/get-loans';
+import { LoanHistoryList, OpenLoanList } from '@/features/tools/components/loan-list';
+import { Card, PageHeader } from '@/components/ui/page';
+import { requireSignedIn } from './guards';
+
+export const loansLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  await requireSignedIn(queryClient, request);
+  await queryClient.ensureQueryData(myLoansQueryOptions());
+  return null;
+};
+
+function EveryonesLoans() {
+  const loans = useQuery(openLoansQueryOptions());
+  return (
+    <Card title="Who holds what">
+      {loans.data ? <OpenLoanList loans={loans.data} showHolder empty="No tool is out right now." /> : <p>Loading…</p>}
+    </Card>
+  );
+}
+
+export function LoansRoute() {
+  const { data: me } = useSuspenseQuery(meQueryOptions());
+  const { data: loans } = useSuspenseQuery(myLoansQueryOptions());
+  const open = loans.filter((l) => !l.returnedAt);
+  const past = loans.filter((l) => l.returnedAt);
+  return (
+    <>
+      <PageHeader title="My loans" lead="What you have from the crib, and when it goes back." />
+      <div className="grid gap-4 lg:grid-cols-2">
+        <Card title={`Out with you (${open.length})`}>
+          <OpenLoanList loans={open} empty="You have nothing from the crib. Scan a label to borrow a tool." />
+        </Card>
+        {me && hasRole(me.role, 'quartermaster') && <EveryonesLoans />}
+        <Card title="Returned">
+          <LoanHistoryList loans={past} />
+        </Card>
+      </div>
+    </>
+  );
+}

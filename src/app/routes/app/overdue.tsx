@@ -1,0 +1,27 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router';
+import { overdueQueryOptions } from '@/features/overdue/api/get-overdue';
+import { LastRunNote } from '@/features/overdue/components/last-run-note';
+import { OverdueTable } from '@/features/overdue/components/overdue-table';
+import { PageHeader } from '@/components/ui/page';
+import { requireRole } from './guards';
+
+export const overdueLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  await requireRole(queryClient, request, 'lead');
+  await queryClient.ensureQueryData(overdueQueryOptions());
+  return null;
+};
+
+export function OverdueRoute() {
+  const { data } = useSuspenseQuery(overdueQueryOptions());
+  return (
+    <>
+      <PageHeader title="Overdue" lead="Tools past their due date, the latest back first, with who has them and how to reach them." />
+      <div className="flex flex-col gap-4">
+        <LastRunNote run={data.lastRun} />
+        <OverdueTable loans={data.data} />
+      </div>
+    </>
+  );
+}

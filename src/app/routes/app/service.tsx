@@ -1,0 +1,33 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router';
+import { serviceDueQueryOptions } from '@/features/service/api/get-service-due';
+import { ServiceDueTable } from '@/features/service/components/service-due-table';
+import { Notice } from '@/components/ui/notice';
+import { PageHeader } from '@/components/ui/page';
+import { requireRole } from './guards';
+
+export const serviceLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  await requireRole(queryClient, request, 'quartermaster');
+  await queryClient.ensureQueryData(serviceDueQueryOptions());
+  return null;
+};
+
+export function ServiceRoute() {
+  const { data } = useSuspenseQuery(serviceDueQueryOptions());
+  return (
+    <>
+      <PageHeader
+        title="Service"
+        lead={`Tools out of service, and tools whose service or calibration is overdue or due within ${data.meta.dueWithinDays} days.`}
+      />
+      <div className="flex flex-col gap-4">
+        <Notice tone="warn" title="Service to the maker's instructions">
+          Service and calibrate each tool as its maker's instructions say. Wear eye and hearing protection when you test a powered tool, and
+          keep a tool that is not safe out of service.
+        </Notice>
+        <ServiceDueTable items={data.data} withinDays={data.meta.dueWithinDays} />
+      </div>
+    </>
+  );
+}

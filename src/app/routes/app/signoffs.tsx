@@ -1,0 +1,42 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router';
+import { peopleQueryOptions } from '@/features/people/api/get-people';
+import { cribSettingsQueryOptions } from '@/features/signoffs/api/get-crib-settings';
+import { signoffsQueryOptions } from '@/features/signoffs/api/get-signoffs';
+import { HoldTimeCard } from '@/features/signoffs/components/hold-time-card';
+import { SignoffCaution } from '@/features/signoffs/components/signoff-caution';
+import { SignoffForm } from '@/features/signoffs/components/signoff-form';
+import { SignoffList } from '@/features/signoffs/components/signoff-list';
+import { Card, PageHeader } from '@/components/ui/page';
+import { requireRole } from './guards';
+
+export const signoffsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  await requireRole(queryClient, request, 'lead');
+  await Promise.all([
+    queryClient.ensureQueryData(signoffsQueryOptions()),
+    queryClient.ensureQueryData(peopleQueryOptions()),
+    queryClient.ensureQueryData(cribSettingsQueryOptions()),
+  ]);
+  return null;
+};
+
+export function SignoffsRoute() {
+  const { data: signoffs } = useSuspenseQuery(signoffsQueryOptions());
+  const { data: people } = useSuspenseQuery(peopleQueryOptions());
+  const { data: settings } = useSuspenseQuery(cribSettingsQueryOptions());
+  const active = people.filter((p) => p.active).map((p) => ({ id: p.id, name: p.name }));
+  return (
+    <>
+      <PageHeader title="Sign-offs" lead="Who may use which powered tools, and how long a returned tool is held for the next person." />
+      <div className="flex flex-col gap-4">
+        <SignoffCaution />
+        <Card title="Define a sign-off">
+          <SignoffForm />
+        </Card>
+        <SignoffList signoffs={signoffs} people={active} />
+        <HoldTimeCard holdHours={settings.holdHours} />
+      </div>
+    </>
+  );
+}

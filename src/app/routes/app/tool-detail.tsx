@@ -1,0 +1,74 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
+import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
+import { hasRole } from '@shared/roles';
+import { meQueryOptions } from '@/features/auth/api/get-me';
+import { ReturnPhotoPicker } from '@/features/photos/components/return-photo-picker';
+import { ToolPhotos } from '@/features/photos/components/tool-photos';
+import { toolQueryOptions } from '@/features/tools/api/get-tool';
+import { toolKeys } from '@/features/tools/api/keys';
+import { QuartermasterCommands } from '@/features/tools/components/quartermaster-commands';
+import { ToolActionsPanel } from '@/features/tools/components/tool-actions-panel';
+import { ToolHistory } from '@/features/tools/components/tool-history';
+import { ToolSummary } from '@/features/tools/components/tool-summary';
+import { Card } from '@/components/ui/page';
+import { requireSignedIn } from './guards';
+
+const codeOf = (params: { code?: string }) => (params.code ?? '').toUpperCase();
+
+export const toolDetailLoader = (queryClient: QueryClient) => async ({ request, params }: LoaderFunctionArgs) => {
+  await requireSignedIn(queryClient, request);
+  await queryClient.ensureQueryData(toolQueryOptions(codeOf(params)));
+  return null;
+};
+
+/** A tool's page: what it is, what you can do with it, and (for the quartermaster) its upkeep. */
+export function ToolDetailRoute() {
+  const code = codeOf(useParams());
+  const navigate = useNavigate();
+  const { data: me } = useSuspenseQuery(meQueryOptions());
+  const { data: tool } = useSuspenseQuery(toolQueryOptions(code));
+  const queryClient = useQueryClient();
+  const isQuartermaster = !!me && hasRole(me.role, 'quartermaster');
+  const holdsIt = tool.loan?.holder.id === me?.id;
+  return (
+    <div className="grid gap-4 lg:grid-cols-[3fr_2fr]">
+      <div className="flex flex-col gap-4">
+        <Card>
+          <ToolSummary tool={tool} />
+        </Card>
+        {tool.notes && <Card title="Notes">{tool.notes}</Card>}
+        {(tool.photoIds.length > 0 || isQuartermaster) && (
+          <Card title="Photos">
+            <ToolPhotos
+              code={tool.code}
+              photoIds={tool.photoIds}
+              canUpload={isQuartermaster}
+              canDelete={isQuartermaster}
+              onChange={() => void queryClient.invalidateQueries({ queryKey: toolKeys.all })}
+            />
+          </Card>
+        )}
+      </div>
+      <div className="flex flex-col gap-4 max-lg:order-first">
+        <ToolActionsPanel
+          tool={tool}
+          photoSlot={holdsIt || isQuartermaster ? (onUploaded) => <ReturnPhotoPicker code={tool.code} onUploaded={onUploaded} /> : undefined}
+          onDone={() => void navigate(`/tools/${tool.code}`, { replace: true })}
+        />
+        <Link to="/scan" className="inline-flex min-h-12 items-center justify-center rounded-lg border-2 border-ink bg-card px-5 font-semibold">
+          Scan another label
+        </Link>
+        {isQuartermaster && <QuartermasterCommands tool={tool} />}
+        {isQuartermaster && (
+          <Link to={`/tools/${tool.code}/edit`} className="inline-flex min-h-12 items-center font-semibold underline underline-offset-4">
+            Edit {tool.code}
+          </Link>
+        )}
+      </div>
+      <div className="lg:col-span-2">
+        <ToolHistory code={tool.code} />
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,5 @@
+export const labelKeys = {
+  all: ['labels'] as const,
+  layouts: () => ['labels', 'layouts'] as const,
+  tools: () => ['labels', 'tools'] as const,
+};

@@ -1,0 +1,92 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm, useWatch } from 'react-hook-form';
+import { toast } from 'sonner';
+import type { z } from 'zod';
+import { labelSheetBodySchema, MAX_LABELS_PER_REQUEST, type SheetLayoutDto } from '@shared/schemas/labels';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import { applyServerErrors } from '@/lib/errors';
+import { useDownloadLabelSheet } from '../api/download-label-sheet';
+import { describeSheet } from '../utils/sheet-summary';
+
+const sheetOptionsSchema = labelSheetBodySchema.pick({ layoutId: true, skip: true });
+type Input = z.input<typeof sheetOptionsSchema>;
+type Output = z.output<typeof sheetOptionsSchema>;
+
+const perPageOf = (layout: SheetLayoutDto | undefined) => (layout ? layout.columns * layout.rows : 1);
+
+/** The sheet layout, the labels already used on the first sheet, and the download. */
+export function LabelSheetForm({ layouts, codes }: { layouts: readonly SheetLayoutDto[]; codes: readonly string[] }) {
+  const download = useDownloadLabelSheet();
+  const form = useForm<Input, unknown, Output>({
+    resolver: zodResolver(sheetOptionsSchema),
+    defaultValues: { layoutId: layouts[0]?.id ?? '', skip: 0 },
+  });
+  const { errors } = form.formState;
+  const [layoutId, skipValue] = useWatch({ control: form.control, name: ['layoutId', 'skip'] });
+  const layout = layouts.find((l) => l.id === layoutId);
+  const perPage = perPageOf(layout);
+  const skipShown = perPage > 1 && Number.isInteger(skipValue) && skipValue! >= 0 && skipValue! < perPage ? skipValue! : 0;
+  const tooMany = codes.length > MAX_LABELS_PER_REQUEST;
+
+  const submit = form.handleSubmit(async (options) => {
+    const skip = perPage > 1 ? options.skip : 0;
+    if (codes.length === 0) return form.setError('root', { message: 'Pick at least one tool to label.' });
+    if (skip >= perPage) {
+      return form.setError('skip', { message: `A page of this layout has ${perPage} labels, so at most ${perPage - 1} can be already used.` });
+    }
+    try {
+      await download.mutateAsync({ layoutId: options.layoutId, codes: [...codes], skip });
+      toast.success(`Label sheet downloaded: ${describeSheet(codes.length, skip, perPage)}`);
+    } catch (err) {
+      form.setError('root', { message: applyServerErrors(err, form.setError, ['layoutId', 'skip']) });
+    }
+  });
+
+  return (
+    <form onSubmit={submit} noValidate className="flex flex-col gap-4">
+      {errors.root?.message && <Notice tone="bad">{errors.root.message}</Notice>}
+      <div className="grid gap-3 sm:grid-cols-[2fr_1fr]">
+        <SelectField
+          label="Sheet layout"
+          options={layouts.map((l) => ({ value: l.id, label: l.name }))}
+          error={errors.layoutId?.message}
+          {...form.register('layoutId', {
+            // One label per page: nothing can be used already, whatever the field said before.
+            onChange: (e: { target: { value: string } }) => {
+              if (perPageOf(layouts.find((l) => l.id === e.target.value)) === 1) form.setValue('skip', 0);
+            },
+          })}
+        />
+        {perPage > 1 && (
+          <TextField
+            label="Labels already used on the first sheet"
+            type="number"
+            inputMode="numeric"
+            min={0}
+            max={perPage - 1}
+            hint={`0 for a new sheet; at most ${perPage - 1}. Used labels are counted row by row from the top left.`}
+            error={errors.skip?.message}
+            {...form.register('skip', { valueAsNumber: true })}
+          />
+        )}
+      </div>
+      <p className="font-medium" aria-live="polite">
+        {describeSheet(codes.length, skipShown, perPage)}
+      </p>
+      {tooMany && (
+        <Notice tone="warn">
+          Print at most {MAX_LABELS_PER_REQUEST} labels at a time: take {codes.length - MAX_LABELS_PER_REQUEST} tools off the list.
+        </Notice>
+      )}
+      <Notice title="Print at actual size">
+        Print the PDF at 100 % (not “fit to page”), or the labels drift off the sheet. Try a first page on plain paper and hold it
+        against a label sheet to the light.
+      </Notice>
+      <Button type="submit" busy={download.isPending} disabled={codes.length === 0 || tooMany} className="self-start">
+        Download label sheet (PDF)
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,4 @@
+export const overdueKeys = {
+  all: ['overdue'] as const,
+  list: () => ['overdue', 'list'] as const,
+};

@@ -1,0 +1,38 @@
+import { toast } from 'sonner';
+import type { OverdueLoan } from '@shared/schemas/overdue';
+import { Button } from '@/components/ui/button';
+import { messageOf } from '@/lib/errors';
+import { useSendReminder } from '../api/send-reminder';
+import { dateTime } from './formats';
+
+/** One reminder a day per loan: once sent, the button stays disabled and says why. */
+export function ReminderButton({ loan }: { loan: OverdueLoan }) {
+  const send = useSendReminder();
+  const reasonId = `reminder-reason-${loan.loanId}`;
+  const remind = () =>
+    send.mutate(loan.loanId, {
+      onSuccess: (r) => toast.success(`Reminder sent to ${loan.holder.name} (${r.sentTo}).`),
+      onError: (err) => toast.error(messageOf(err)),
+    });
+  return (
+    <div className="flex flex-col items-start gap-1">
+      <Button
+        variant="secondary"
+        className="disabled:border-steel disabled:bg-paper disabled:text-steel"
+        onClick={remind}
+        busy={send.isPending}
+        disabled={loan.remindedToday}
+        aria-describedby={reasonId}
+      >
+        Send reminder
+      </Button>
+      <p id={reasonId} className="text-sm text-steel">
+        {loan.remindedToday
+          ? 'Already reminded today; the next one can go tomorrow.'
+          : loan.lastReminderAt
+            ? `Last reminded ${dateTime.format(new Date(loan.lastReminderAt))}.`
+            : 'Not reminded yet.'}
+      </p>
+    </div>
+  );
+}

@@ -1,0 +1,4 @@
+export const serviceKeys = {
+  all: ['service'] as const,
+  due: () => ['service', 'due'] as const,
+};

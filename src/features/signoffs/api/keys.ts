@@ -1,0 +1,9 @@
+export const signoffKeys = {
+  all: ['signoffs'] as const,
+  list: () => ['signoffs', 'list'] as const,
+  mine: () => ['signoffs', 'mine'] as const,
+};
+
+export const cribSettingsKeys = {
+  all: ['crib-settings'] as const,
+};

@@ -1,0 +1,41 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { CheckoutBody, ReturnBody } from '@shared/schemas/tools';
+import { api } from '@/lib/api-client';
+import { toolKeys } from './keys';
+
+const path = (code: string, rest: string) => `/api/tools/${encodeURIComponent(code)}/${rest}`;
+
+/** Every action on a tool changes its state, its audit trail and someone's loans: refresh the tool family. */
+function useToolMutation<V, R>(run: (vars: V) => Promise<R>) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: run,
+    onSettled: () => queryClient.invalidateQueries({ queryKey: toolKeys.all }),
+  });
+}
+
+export interface CheckoutResult {
+  id: number;
+  code: string;
+  dueAt: string;
+  accessories: string[];
+}
+
+export const useCheckOut = () =>
+  useToolMutation(({ code, body }: { code: string; body: CheckoutBody }) => api.post<CheckoutResult>(path(code, 'checkout'), body));
+
+export const useReturnTool = () =>
+  useToolMutation(({ code, body }: { code: string; body: ReturnBody }) =>
+    api.post<{ status: string; shortfall: number | null; offeredTo: { name: string } | null }>(path(code, 'return'), body),
+  );
+
+export const usePlaceHold = () => useToolMutation((code: string) => api.post<{ position: number }>(path(code, 'holds')));
+
+export const useCancelHold = () => useToolMutation((code: string) => api.delete(path(code, 'holds/mine')));
+
+export type StatusCommandPath = 'out-of-service' | 'back-in-service' | 'lost' | 'found' | 'retire';
+
+export const useStatusCommand = () =>
+  useToolMutation(({ code, command, note, serviced }: { code: string; command: StatusCommandPath; note: string; serviced?: boolean }) =>
+    api.post<{ status: string }>(path(code, command), command === 'back-in-service' ? { note, serviced: serviced ?? false } : { note }),
+  );

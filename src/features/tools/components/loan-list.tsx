@@ -1,0 +1,47 @@
+import { Link } from 'react-router';
+import type { Loan } from '@shared/schemas/tools';
+import { dateTime, shortDate } from '../due-words';
+import { DueBadge } from './due-badge';
+
+/** Open loans, soonest due first, each with due words (and colour) and the accessories to bring back. */
+export function OpenLoanList({ loans, showHolder = false, empty }: { loans: Loan[]; showHolder?: boolean; empty: string }) {
+  if (loans.length === 0) return <p className="text-steel">{empty}</p>;
+  return (
+    <ul className="flex flex-col gap-2">
+      {loans.map((l) => (
+        <li key={l.id} className="rounded-lg border border-rule bg-card p-3">
+          <Link to={`/tools/${l.tool.code}`} className="flex min-h-11 flex-col">
+            <span className="font-mono text-sm font-medium text-brass-deep">{l.tool.code}</span>
+            <span className="font-semibold underline-offset-4 hover:underline">{l.tool.name}</span>
+          </Link>
+          <div className="mt-1 flex flex-wrap items-center gap-2 text-sm">
+            {showHolder && <span className="font-medium">{l.holder.name}</span>}
+            <span>back by {shortDate.format(new Date(l.dueAt))}</span>
+            <DueBadge dueAt={l.dueAt} />
+          </div>
+          {l.tool.accessories.length > 0 && <p className="mt-1 text-sm text-steel">With: {l.tool.accessories.join(', ')}</p>}
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+export function LoanHistoryList({ loans }: { loans: Loan[] }) {
+  if (loans.length === 0) return <p className="text-steel">No returned tools yet.</p>;
+  return (
+    <ul className="divide-y divide-rule">
+      {loans.map((l) => (
+        <li key={l.id} className="py-2">
+          <Link to={`/tools/${l.tool.code}`} className="font-medium underline-offset-4 hover:underline">
+            <span className="font-mono">{l.tool.code}</span> {l.tool.name}
+          </Link>
+          <p className="text-sm text-steel">
+            {shortDate.format(new Date(l.checkedOutAt))} – {l.returnedAt ? dateTime.format(new Date(l.returnedAt)) : ''}
+            {l.returnCondition === 'needs_attention' ? ' · reported: needs attention' : ''}
+            {l.shortfall ? ` · ${l.shortfall} temporary fasteners short` : ''}
+          </p>
+        </li>
+      ))}
+    </ul>
+  );
+}

@@ -1,0 +1,168 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm, useWatch } from 'react-hook-form';
+import { z } from 'zod';
+import { ALL_DRILLS } from '@shared/drills/drill-sizes';
+import type { CreateToolBody, Tool } from '@shared/schemas/tools';
+import { CATEGORY_LABELS, DEFAULT_LOAN_DAYS, TEMPORARY_FASTENER_SIZES, TOOL_CATEGORIES } from '@shared/tools/categories';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import { applyServerErrors } from '@/lib/errors';
+
+const optionalWhole = (label: string) =>
+  z
+    .string()
+    .trim()
+    .refine((s) => s === '' || /^\d+$/.test(s), { error: `${label} is a whole number, or leave it empty.` });
+
+/** The form's own shape (text fields as typed); turned into the shared create/update body on submit. */
+const formSchema = z.object({
+  name: z.string().trim().min(1, { error: 'Enter a name.' }).max(120),
+  category: z.enum(TOOL_CATEGORIES),
+  location: z.string().trim().max(80),
+  replacementValue: z
+    .string()
+    .trim()
+    .refine((s) => s === '' || /^\d+(\.\d{1,2})?$/.test(s), { error: 'Enter an amount like 129.50, or leave it empty.' }),
+  loanDays: optionalWhole('The loan period'),
+  requiredSignoffId: z.string(),
+  serviceIntervalDays: optionalWhole('The service interval'),
+  lastServiceAt: z.string(),
+  drillSize: z.string().trim(),
+  traySize: z.string(),
+  trayCapacity: optionalWhole('The tray capacity'),
+  accessories: z.string(),
+  notes: z.string().max(2000),
+});
+type FormValues = z.infer<typeof formSchema>;
+
+const toNumber = (s: string) => (s.trim() === '' ? null : Number(s));
+
+function toBody(v: FormValues): CreateToolBody {
+  return {
+    name: v.name,
+    category: v.category,
+    location: v.location,
+    replacementValueCents: v.replacementValue ? Math.round(Number(v.replacementValue) * 100) : 0,
+    loanDays: toNumber(v.loanDays),
+    requiredSignoffId: v.requiredSignoffId ? Number(v.requiredSignoffId) : null,
+    serviceIntervalDays: toNumber(v.serviceIntervalDays),
+    lastServiceAt: v.lastServiceAt ? new Date(`${v.lastServiceAt}T12:00:00`).toISOString() : null,
+    drillSize: v.category === 'drill_bit' && v.drillSize ? v.drillSize : null,
+    traySize: v.category === 'temporary_fastener_tray' && v.traySize ? (v.traySize as CreateToolBody['traySize']) : null,
+    trayCapacity: v.category === 'temporary_fastener_tray' ? toNumber(v.trayCapacity) : null,
+    accessories: v.accessories
+      .split('\n')
+      .map((a) => a.trim())
+      .filter(Boolean),
+    notes: v.notes,
+  };
+}
+
+function toForm(tool?: Tool): FormValues {
+  return {
+    name: tool?.name ?? '',
+    category: tool?.category ?? 'hand_rivet_puller',
+    location: tool?.location ?? '',
+    replacementValue: tool ? (tool.replacementValueCents / 100).toFixed(2) : '',
+    loanDays: tool?.loanDaysOverride?.toString() ?? '',
+    requiredSignoffId: tool?.requiredSignoff?.id.toString() ?? '',
+    serviceIntervalDays: tool?.serviceIntervalDays?.toString() ?? '',
+    lastServiceAt: tool?.lastServiceAt?.slice(0, 10) ?? '',
+    drillSize: tool?.drillSize?.name ?? '',
+    traySize: tool?.traySize ?? '',
+    trayCapacity: tool?.trayCapacity?.toString() ?? '',
+    accessories: tool?.accessories.join('\n') ?? '',
+    notes: tool?.notes ?? '',
+  };
+}
+
+const FIELD_OF: Record<string, keyof FormValues> = { replacementValueCents: 'replacementValue' };
+
+export function ToolForm({
+  tool,
+  signoffs,
+  submitLabel,
+  onSubmit,
+}: {
+  tool?: Tool;
+  signoffs: { id: number; name: string }[];
+  submitLabel: string;
+  onSubmit: (body: CreateToolBody) => Promise<unknown>;
+}) {
+  const form = useForm<FormValues>({ resolver: zodResolver(formSchema), defaultValues: toForm(tool) });
+  const { errors, isSubmitting } = form.formState;
+  const category = useWatch({ control: form.control, name: 'category' });
+
+  const submit = form.handleSubmit(async (values) => {
+    try {
+      await onSubmit(toBody(values));
+    } catch (err) {
+      const fields = Object.keys(toForm());
+      const message = applyServerErrors(
+        err,
+        (path, error) => form.setError(FIELD_OF[path] ?? (path as keyof FormValues), error),
+        fields.concat(Object.keys(FIELD_OF)),
+      );
+      form.setError('root', { message });
+    }
+  });
+
+  return (
+    <form onSubmit={submit} noValidate className="flex flex-col gap-4">
+      {errors.root?.message && <Notice tone="bad">{errors.root.message}</Notice>}
+      <div className="grid gap-4 sm:grid-cols-2">
+        <TextField label="Name" error={errors.name?.message} {...form.register('name')} />
+        <SelectField label="Kind" options={TOOL_CATEGORIES.map((c) => ({ value: c, label: CATEGORY_LABELS[c] }))} {...form.register('category')} />
+        <TextField label="Lives at (cabinet, shelf)" error={errors.location?.message} {...form.register('location')} />
+        <TextField label="Replacement value" inputMode="decimal" hint="In dollars, for the lead's overdue list." error={errors.replacementValue?.message} {...form.register('replacementValue')} />
+        <TextField
+          label="Loan period in days"
+          inputMode="numeric"
+          hint={`Empty: the kind's default, ${DEFAULT_LOAN_DAYS[category]} days.`}
+          error={errors.loanDays?.message}
+          {...form.register('loanDays')}
+        />
+        <SelectField
+          label="Sign-off needed to borrow it"
+          options={[{ value: '', label: 'None' }, ...signoffs.map((s) => ({ value: String(s.id), label: s.name }))]}
+          {...form.register('requiredSignoffId')}
+        />
+        <TextField label="Service or calibration every (days)" inputMode="numeric" error={errors.serviceIntervalDays?.message} {...form.register('serviceIntervalDays')} />
+        <TextField label="Last serviced on" type="date" {...form.register('lastServiceAt')} />
+        {category === 'drill_bit' && (
+          <>
+            <TextField label="Drill size" list="drill-sizes" placeholder="#40" hint="Number (#1–#80), letter (A–Z) or fraction (1/8)." error={errors.drillSize?.message} {...form.register('drillSize')} />
+            <datalist id="drill-sizes">
+              {ALL_DRILLS.map((d) => (
+                <option key={d.name} value={d.name}>{`${d.inch.toFixed(4)} in`}</option>
+              ))}
+            </datalist>
+          </>
+        )}
+        {category === 'temporary_fastener_tray' && (
+          <>
+            <SelectField
+              label="Temporary fastener size"
+              options={[{ value: '', label: 'Choose a size' }, ...TEMPORARY_FASTENER_SIZES.map((s) => ({ value: s, label: `${s} in` }))]}
+              error={errors.traySize?.message}
+              {...form.register('traySize')}
+            />
+            <TextField label="A full tray holds" inputMode="numeric" error={errors.trayCapacity?.message} {...form.register('trayCapacity')} />
+          </>
+        )}
+      </div>
+      <label className="flex flex-col gap-1.5">
+        <span className="text-sm font-semibold">Travels with it (one per line)</span>
+        <textarea rows={3} className="rounded-lg border-2 border-rule bg-card p-3" placeholder={'Nosepiece 1/8\nNosepiece 5/32'} {...form.register('accessories')} />
+      </label>
+      <label className="flex flex-col gap-1.5">
+        <span className="text-sm font-semibold">Notes</span>
+        <textarea rows={3} className="rounded-lg border-2 border-rule bg-card p-3" {...form.register('notes')} />
+      </label>
+      <Button type="submit" busy={isSubmitting} className="self-start">
+        {submitLabel}
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,138 @@
+import { screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { beforeEach, describe, expect, it, vi } from 'vitest';
+import type { SheetLayoutDto } from '@shared/schemas/labels';
+import { LabelSheetBuilder } from '@/features/labels/components/label-sheet-builder';
+import { describeSheet } from '@/features/labels/utils/sheet-summary';
+import { filterTools, NO_FILTER, selectAll, unselectAll, type PickableTool } from '@/features/labels/utils/tool-selection';
+import { setCsrfToken } from '@/lib/api-client';
+import { renderWithProviders } from '../helpers/render';
+
+const tool = (code: string, name: string, category: PickableTool['category'], status: PickableTool['status'] = 'available', location = ''): PickableTool => ({
+  code,
+  name,
+  category,
+  status,
+  location,
+});
+
+const TOOLS = [
+  tool('T-0001', 'Hand rivet puller, long handle', 'hand_rivet_puller', 'available', 'Wall board A'),
+  tool('T-0002', 'Pneumatic rivet puller', 'pneumatic_rivet_puller', 'on_loan'),
+  tool('T-0003', 'Air drill, 90 degree', 'air_drill', 'available', 'Cabinet 2'),
+  tool('T-0004', 'Hand rivet puller, short', 'hand_rivet_puller', 'out_of_service'),
+];
+
+const LAYOUTS: SheetLayoutDto[] = [
+  {
+    id: 'letter-3x10-2.625x1in',
+    name: 'US Letter, 30 labels 2⅝ × 1 in',
+    media: 'sheet',
+    unit: 'in',
+    page: { width: 8.5, height: 11 },
+    label: { width: 2.625, height: 1 },
+    columns: 3,
+    rows: 10,
+    margin: { top: 0.5, left: 0.1875 },
+    gap: { horizontal: 0.125, vertical: 0 },
+  },
+  {
+    id: 'thermal-1x1-2x1in',
+    name: 'Thermal roll, one label 2 × 1 in per page',
+    media: 'thermal-roll',
+    unit: 'in',
+    page: { width: 2, height: 1 },
+    label: { width: 2, height: 1 },
+    columns: 1,
+    rows: 1,
+    margin: { top: 0, left: 0 },
+    gap: { horizontal: 0, vertical: 0 },
+  },
+];
+
+const codesIn = (tools: PickableTool[]) => tools.map((t) => t.code);
+
+describe('tool selection', () => {
+  it('filters by words in code, name or place, and by category and status', () => {
+    expect(codesIn(filterTools(TOOLS, { ...NO_FILTER, search: 'rivet HAND' }))).toEqual(['T-0001', 'T-0004']);
+    expect(codesIn(filterTools(TOOLS, { ...NO_FILTER, search: 'cabinet' }))).toEqual(['T-0003']);
+    expect(codesIn(filterTools(TOOLS, { ...NO_FILTER, search: 't-0002' }))).toEqual(['T-0002']);
+    expect(codesIn(filterTools(TOOLS, { ...NO_FILTER, category: 'hand_rivet_puller', status: 'available' }))).toEqual(['T-0001']);
+  });
+
+  it('selects and clears only the shown tools, keeping picks hidden by the filters', () => {
+    const picked = selectAll(new Set(['T-0003']), filterTools(TOOLS, { ...NO_FILTER, category: 'hand_rivet_puller' }));
+    expect([...picked].sort()).toEqual(['T-0001', 'T-0003', 'T-0004']);
+    expect([...unselectAll(picked, [TOOLS[0]!])].sort()).toEqual(['T-0003', 'T-0004']);
+  });
+
+  it('describes the labels and pages in words', () => {
+    expect(describeSheet(0, 0, 30)).toBe('No tools picked yet.');
+    expect(describeSheet(1, 0, 30)).toBe('1 label on 1 page.');
+    expect(describeSheet(26, 5, 30)).toBe('26 labels on 2 pages, starting at label 6 of the first page (the first 5 labels stay blank).');
+    expect(describeSheet(3, 0, 1)).toBe('3 labels on 3 pages.');
+  });
+});
+
+describe('LabelSheetBuilder', () => {
+  beforeEach(() => setCsrfToken('token-1'));
+
+  it('picks tools by category, counts labels and pages, and downloads the PDF', async () => {
+    const requests: { path: string; body: unknown; token: string | undefined }[] = [];
+    vi.stubGlobal(
+      'fetch',
+      vi.fn((path: string, init: RequestInit) => {
+        const headers = init.headers as Record<string, string>;
+        requests.push({ path, body: JSON.parse(init.body as string), token: headers['X-CSRF-Token'] });
+        return Promise.resolve(new Response(new Blob(['%PDF-1.3 fake']), { status: 200, headers: { 'Content-Type': 'application/pdf' } }));
+      }),
+    );
+    const createObjectURL = vi.spyOn(URL, 'createObjectURL').mockReturnValue('blob:labels');
+    vi.spyOn(URL, 'revokeObjectURL').mockImplementation(() => undefined);
+    const clicked: string[] = [];
+    vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (this: HTMLAnchorElement) {
+      clicked.push(this.download);
+    });
+
+    renderWithProviders(<LabelSheetBuilder tools={TOOLS} layouts={LAYOUTS} />);
+    expect(screen.getByText('No tools picked yet.')).toBeTruthy();
+    expect(screen.getByRole<HTMLButtonElement>('button', { name: 'Download label sheet (PDF)' }).disabled).toBe(true);
+
+    await userEvent.selectOptions(screen.getByLabelText('Category'), 'hand_rivet_puller');
+    await userEvent.click(screen.getByRole('button', { name: 'Select all 2 shown' }));
+    expect(screen.getByText(/Showing 2 of 4 tools · 2 selected/)).toBeTruthy();
+    await userEvent.selectOptions(screen.getByLabelText('Category'), '');
+    await userEvent.click(within(screen.getByRole('list', { name: 'Tools' })).getByRole('checkbox', { name: /T-0003/ }));
+
+    const skip = screen.getByLabelText('Labels already used on the first sheet');
+    await userEvent.clear(skip);
+    await userEvent.type(skip, '28');
+    expect(screen.getByText('3 labels on 2 pages, starting at label 29 of the first page (the first 28 labels stay blank).')).toBeTruthy();
+
+    await userEvent.click(screen.getByRole('button', { name: 'Download label sheet (PDF)' }));
+    await waitFor(() => expect(clicked).toEqual(['gripline-labels-letter-3x10-2.625x1in.pdf']));
+    expect(requests).toEqual([
+      { path: '/api/labels/sheet', body: { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001', 'T-0003', 'T-0004'], skip: 28 }, token: 'token-1' },
+    ]);
+    expect(createObjectURL).toHaveBeenCalledTimes(1);
+  });
+
+  it('shows the server’s words when a code is unknown, and asks for no used labels on a thermal roll', async () => {
+    const bodies: unknown[] = [];
+    vi.stubGlobal(
+      'fetch',
+      vi.fn((_path: string, init: RequestInit) => {
+        bodies.push(JSON.parse(init.body as string));
+        const error = { error: { code: 'UNKNOWN_CODES', message: 'No tool has the code T-0002. Take it off the list or check the code.' } };
+        return Promise.resolve(new Response(JSON.stringify(error), { status: 400, headers: { 'Content-Type': 'application/json' } }));
+      }),
+    );
+    renderWithProviders(<LabelSheetBuilder tools={TOOLS} layouts={LAYOUTS} />);
+    await userEvent.click(screen.getByRole('checkbox', { name: /T-0002/ }));
+    await userEvent.selectOptions(screen.getByLabelText('Sheet layout'), 'thermal-1x1-2x1in');
+    expect(screen.queryByLabelText('Labels already used on the first sheet')).toBeNull();
+    await userEvent.click(screen.getByRole('button', { name: 'Download label sheet (PDF)' }));
+    expect((await screen.findByRole('alert')).textContent).toContain('No tool has the code T-0002.');
+    expect(bodies).toEqual([{ layoutId: 'thermal-1x1-2x1in', codes: ['T-0002'], skip: 0 }]);
+  });
+});

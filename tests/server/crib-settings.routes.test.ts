@@ -1,0 +1,83 @@
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { cribSettingsSchema } from '@shared/schemas/signoffs';
+import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+
+let t: TestApp;
+let lead: SignedInAgent;
+let qm: SignedInAgent;
+let member: SignedInAgent;
+const HOUR_MS = 60 * 60 * 1000;
+
+beforeEach(async () => {
+  t = await buildTestApp();
+  await t.addCrew();
+  lead = await t.signIn('lead@example.org');
+  qm = await t.signIn('qm@example.org');
+  member = await t.signIn('member@example.org');
+});
+afterEach(() => t.close());
+
+const post = (who: SignedInAgent, path: string, body: unknown = {}) => who.agent.post(path).set('X-CSRF-Token', who.csrf).send(body as object);
+const patch = (who: SignedInAgent, body: unknown) => who.agent.patch('/api/settings/crib').set('X-CSRF-Token', who.csrf).send(body as object);
+
+describe('GET /api/settings/crib', () => {
+  it('gives everyone signed in the hold time, 48 hours until the lead changes it', async () => {
+    const res = await member.agent.get('/api/settings/crib');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toMatch(/application\/json/);
+    expect(cribSettingsSchema.parse(res.body)).toEqual({ holdHours: 48 });
+  });
+
+  it('answers 401 when signed out', async () => {
+    const res = await (await t.anonymous()).agent.get('/api/settings/crib');
+    expect(res.status).toBe(401);
+    expect(res.body.error.code).toBe('NOT_SIGNED_IN');
+  });
+});
+
+describe('PATCH /api/settings/crib', () => {
+  it('lets the lead change the hold time, which everyone then reads', async () => {
+    const res = await patch(lead, { holdHours: 24 });
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ holdHours: 24 });
+    expect((await qm.agent.get('/api/settings/crib')).body).toEqual({ holdHours: 24 });
+  });
+
+  it('accepts 1 and 336 hours and refuses 0, 337, a fraction, text or a missing value with 400', async () => {
+    expect((await patch(lead, { holdHours: 1 })).status).toBe(200);
+    expect((await patch(lead, { holdHours: 336 })).status).toBe(200);
+    for (const body of [{ holdHours: 0 }, { holdHours: 337 }, { holdHours: 2.5 }, { holdHours: 'two days' }, {}]) {
+      const res = await patch(lead, body);
+      expect(res.status).toBe(400);
+      expect(res.body.error.code).toBe('VALIDATION_FAILED');
+      expect(res.body.error.issues[0].path).toBe('holdHours');
+    }
+    expect((await patch(lead, { holdHours: 12, loanDays: 3 })).status).toBe(400);
+    expect((await member.agent.get('/api/settings/crib')).body).toEqual({ holdHours: 336 });
+  });
+
+  it('answers 403 to a member and a quartermaster, 401 when signed out', async () => {
+    for (const who of [member, qm]) {
+      const res = await patch(who, { holdHours: 2 });
+      expect(res.status).toBe(403);
+      expect(res.body.error.code).toBe('FORBIDDEN');
+    }
+    const anon = await patch(await t.anonymous(), { holdHours: 2 });
+    expect(anon.status).toBe(401);
+    expect((await member.agent.get('/api/settings/crib')).body).toEqual({ holdHours: 48 });
+  });
+
+  it('uses the new hold time for the next hold offer', async () => {
+    await post(qm, '/api/tools', { name: 'Torque wrench', category: 'torque_wrench' }).expect(201);
+    await post(member, '/api/tools/T-0001/checkout').expect(201);
+    await post(qm, '/api/tools/T-0001/holds').expect(201);
+    await patch(lead, { holdHours: 6 }).expect(200);
+
+    t.clock.now = new Date('2026-12-03T08:15:00Z');
+    const back = await post(member, '/api/tools/T-0001/return', { condition: 'ok' });
+    expect(back.body).toMatchObject({ status: 'held', offeredTo: { name: 'Quinn Quartermaster' } });
+    const tool = await qm.agent.get('/api/tools/T-0001');
+    expect(tool.body.holds.offerExpiresAt).toBe(new Date(t.clock.now.getTime() + 6 * HOUR_MS).toISOString());
+    expect(tool.body.forYou.yourHold).toMatchObject({ status: 'offered', offerExpiresAt: '2026-12-03T14:15:00.000Z' });
+  });
+});

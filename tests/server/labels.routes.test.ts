@@ -1,0 +1,171 @@
+import type { Response } from 'superagent';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { sheetLayoutListSchema } from '@shared/schemas/labels';
+import { tools } from '../../server/db/schema/tools';
+import { pdfPageCount, pdfStreams, shownText } from '../helpers/pdf-read';
+import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+
+let t: TestApp;
+let qm: SignedInAgent;
+let lead: SignedInAgent;
+let member: SignedInAgent;
+
+beforeEach(async () => {
+  t = await buildTestApp();
+  await t.addCrew();
+  [qm, lead, member] = await Promise.all([t.signIn('qm@example.org'), t.signIn('lead@example.org'), t.signIn('member@example.org')]);
+});
+afterEach(() => t.close());
+
+const code = (n: number) => `T-${String(n).padStart(4, '0')}`;
+
+function addTools(count: number, name = (n: number) => `Hand rivet puller ${n}`) {
+  t.db
+    .insert(tools)
+    .values(Array.from({ length: count }, (_, i) => ({ code: code(i + 1), name: name(i + 1), category: 'hand_rivet_puller' as const })))
+    .run();
+}
+
+/** Collects a PDF answer as bytes; a JSON answer (an error) is parsed as usual. */
+function bytesOrJson(res: Response, done: (err: Error | null, body: unknown) => void) {
+  const chunks: Buffer[] = [];
+  res.on('data', (c: Buffer) => chunks.push(c));
+  res.on('end', () => {
+    const body = Buffer.concat(chunks);
+    done(null, String(res.headers['content-type']).startsWith('application/json') ? JSON.parse(body.toString('utf8')) : body);
+  });
+}
+
+const postSheet = (who: SignedInAgent, body: unknown) =>
+  who.agent.post('/api/labels/sheet').set('X-CSRF-Token', who.csrf).send(body as object).buffer(true).parse(bytesOrJson);
+
+const textOf = (pdf: Buffer) => pdfStreams(pdf).flatMap(shownText);
+
+describe('GET /api/labels/layouts', () => {
+  it('lists the sheet layouts to a quartermaster and to a lead', async () => {
+    for (const who of [qm, lead]) {
+      const res = await who.agent.get('/api/labels/layouts');
+      expect(res.status).toBe(200);
+      const { data } = sheetLayoutListSchema.parse(res.body);
+      expect(data.map((l) => l.id)).toEqual(['letter-3x10-2.625x1in', 'a4-3x8-70x37mm', 'thermal-1x1-2x1in']);
+    }
+  });
+
+  it('answers 403 FORBIDDEN to a member', async () => {
+    const res = await member.agent.get('/api/labels/layouts');
+    expect(res.status).toBe(403);
+    expect(res.body.error.code).toBe('FORBIDDEN');
+  });
+
+  it('answers 401 NOT_SIGNED_IN when signed out', async () => {
+    const { agent } = await t.anonymous();
+    const res = await agent.get('/api/labels/layouts');
+    expect(res.status).toBe(401);
+    expect(res.body.error.code).toBe('NOT_SIGNED_IN');
+  });
+});
+
+describe('POST /api/labels/sheet', () => {
+  it('answers a PDF download with every requested code and tool name', async () => {
+    addTools(3, (n) => ['Pneumatic rivet puller', 'Air drill, 90 degree', 'Bucking bar, 1 lb'][n - 1]!);
+    const res = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001', 'T-0002', 'T-0003'] });
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    expect(res.headers['content-disposition']).toBe('attachment; filename="gripline-labels-letter-3x10-2.625x1in.pdf"');
+    const pdf = res.body as Buffer;
+    expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    expect(pdfPageCount(pdf)).toBe(1);
+    expect(textOf(pdf)).toEqual(['T-0001', 'Pneumatic rivet puller', 'T-0002', 'Air drill, 90 degree', 'T-0003', 'Bucking bar, 1 lb']);
+  });
+
+  it('lets a lead print labels too', async () => {
+    addTools(1);
+    const res = await postSheet(lead, { layoutId: 'a4-3x8-70x37mm', codes: ['T-0001'] });
+    expect(res.status).toBe(200);
+    expect(res.headers['content-disposition']).toBe('attachment; filename="gripline-labels-a4-3x8-70x37mm.pdf"');
+  });
+
+  it.each([
+    ['30 labels fill one Letter page', 'letter-3x10-2.625x1in', 30, 0, 1],
+    ['31 labels need a second page', 'letter-3x10-2.625x1in', 31, 0, 2],
+    ['25 labels after 5 used ones still fit one page', 'letter-3x10-2.625x1in', 25, 5, 1],
+    ['26 labels after 5 used ones spill onto a second page', 'letter-3x10-2.625x1in', 26, 5, 2],
+    ['24 labels after 23 used ones take two A4 pages', 'a4-3x8-70x37mm', 24, 23, 2],
+    ['a thermal roll prints one label per page', 'thermal-1x1-2x1in', 4, 0, 4],
+  ])('pages: %s', async (_name, layoutId, count, skip, pages) => {
+    addTools(count);
+    const codes = Array.from({ length: count }, (_, i) => code(i + 1));
+    const res = await postSheet(qm, { layoutId, codes, skip });
+    expect(res.status).toBe(200);
+    const pdf = res.body as Buffer;
+    expect(pdfPageCount(pdf)).toBe(pages);
+    const text = textOf(pdf);
+    for (const c of codes) expect(text).toContain(c);
+  });
+
+  it('prints a label for each time a code is listed, and reads codes in any case', async () => {
+    addTools(2);
+    const res = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: ['t-0001', ' T-0002 ', 'T-0001'] });
+    expect(res.status).toBe(200);
+    expect(textOf(res.body as Buffer).filter((s) => s.startsWith('T-'))).toEqual(['T-0001', 'T-0002', 'T-0001']);
+  });
+
+  it('answers 400 UNKNOWN_CODES naming every code no tool has', async () => {
+    addTools(1);
+    const res = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001', 'T-0404', 'T-0500', 'T-0404'] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('UNKNOWN_CODES');
+    expect(res.body.error.message).toBe('No tool has the codes T-0404 and T-0500. Take them off the list or check the code.');
+    expect(res.body.error.issues.map((i: { path: string }) => i.path)).toEqual(['codes.1', 'codes.2', 'codes.3']);
+  });
+
+  it('answers 400 for a layout that does not exist', async () => {
+    addTools(1);
+    const res = await postSheet(qm, { layoutId: 'letter-99x99', codes: ['T-0001'] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('VALIDATION_FAILED');
+    expect(res.body.error.issues[0].path).toBe('layoutId');
+    expect(res.body.error.message).toMatch(/letter-3x10-2\.625x1in/);
+  });
+
+  it('answers 400 when more labels are said to be used than a page has', async () => {
+    addTools(1);
+    const thermal = await postSheet(qm, { layoutId: 'thermal-1x1-2x1in', codes: ['T-0001'], skip: 1 });
+    expect(thermal.status).toBe(400);
+    expect(thermal.body.error.code).toBe('VALIDATION_FAILED');
+    expect(thermal.body.error.issues).toEqual([{ path: 'skip', message: 'A page of this layout has 1 label, so at most 0 can be already used.' }]);
+    const letter = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'], skip: 30 });
+    expect(letter.status).toBe(400);
+    expect(letter.body.error.issues[0].path).toBe('skip');
+    expect((await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'], skip: 29 })).status).toBe(200);
+  });
+
+  it.each([
+    ['no codes', { layoutId: 'letter-3x10-2.625x1in', codes: [] }, 'codes'],
+    ['more than 300 codes', { layoutId: 'letter-3x10-2.625x1in', codes: Array.from({ length: 301 }, (_, i) => code(i + 1)) }, 'codes'],
+    ['a code that is not a tool code', { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001', 'drill'] }, 'codes.1'],
+    ['codes that are not a list', { layoutId: 'letter-3x10-2.625x1in', codes: 'T-0001' }, 'codes'],
+    ['no layout', { codes: ['T-0001'] }, 'layoutId'],
+    ['a negative skip', { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'], skip: -1 }, 'skip'],
+    ['a fractional skip', { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'], skip: 1.5 }, 'skip'],
+    ['an unknown field', { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'], copies: 2 }, ''],
+  ])('answers 400 VALIDATION_FAILED for %s', async (_name, body, path) => {
+    addTools(1);
+    const res = await postSheet(qm, body);
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('VALIDATION_FAILED');
+    expect(res.body.error.issues.map((i: { path: string }) => i.path)).toContain(path);
+    expect(res.body.error.message.length).toBeGreaterThan(10);
+  });
+
+  it('answers 403 FORBIDDEN to a member and 401 NOT_SIGNED_IN when signed out', async () => {
+    addTools(1);
+    const body = { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'] };
+    const refused = await postSheet(member, body);
+    expect(refused.status).toBe(403);
+    expect(refused.body.error.code).toBe('FORBIDDEN');
+    const anonymous = await postSheet(await t.anonymous(), body);
+    expect(anonymous.status).toBe(401);
+    expect(anonymous.body.error.code).toBe('NOT_SIGNED_IN');
+  });
+});

@@ -1,0 +1,180 @@
+import { eq } from 'drizzle-orm';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { overdueListSchema, reminderSentSchema } from '@shared/schemas/overdue';
+import { users } from '../../server/db/schema/users';
+import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+
+let t: TestApp;
+let lead: SignedInAgent;
+let qm: SignedInAgent;
+let member: SignedInAgent;
+const DAY_MS = 24 * 60 * 60 * 1000;
+const HOUR_MS = 60 * 60 * 1000;
+
+beforeEach(async () => {
+  t = await buildTestApp();
+  const crew = await t.addCrew();
+  t.db.update(users).set({ phone: '555-0100' }).where(eq(users.id, crew.member.id)).run();
+  lead = await t.signIn('lead@example.org');
+  qm = await t.signIn('qm@example.org');
+  member = await t.signIn('member@example.org');
+});
+afterEach(() => t.close());
+
+const post = (who: SignedInAgent, path: string, body: unknown = {}) => who.agent.post(path).set('X-CSRF-Token', who.csrf).send(body as object);
+const later = (ms: number) => {
+  t.clock.now = new Date(t.clock.now.getTime() + ms);
+};
+
+async function addTool(body: Record<string, unknown>): Promise<string> {
+  const res = await post(qm, '/api/tools', body);
+  if (res.status !== 201) throw new Error(`could not add tool: ${res.status} ${JSON.stringify(res.body)}`);
+  return (res.body as { code: string }).code;
+}
+
+/** Checks a tool out to `who`, due back after `dueInMs`; returns the loan id. */
+async function lend(who: SignedInAgent, code: string, dueInMs: number): Promise<number> {
+  const res = await post(who, `/api/tools/${code}/checkout`, { dueAt: new Date(t.clock.now.getTime() + dueInMs).toISOString() });
+  if (res.status !== 201) throw new Error(`could not check out: ${res.status} ${JSON.stringify(res.body)}`);
+  return (res.body as { id: number }).id;
+}
+
+describe('GET /api/overdue', () => {
+  it('lists open loans past due with the holder’s contact, most days late first', async () => {
+    const wrench = await addTool({ name: 'Torque wrench', category: 'torque_wrench', location: 'Cabinet B', replacementValueCents: 25_000 });
+    const drill = await addTool({ name: 'Air drill', category: 'air_drill', replacementValueCents: 18_000 });
+    const puller = await addTool({ name: 'Hand rivet puller', category: 'hand_rivet_puller' });
+    const fan = await addTool({ name: 'Spacing fan', category: 'spacing_fan' });
+    // Lent first but due later: the list must follow days late, not the order of the loans.
+    const drillLoan = await lend(qm, drill, 4 * DAY_MS);
+    const wrenchLoan = await lend(member, wrench, 1 * DAY_MS);
+    await lend(member, puller, 30 * DAY_MS);
+    await lend(member, fan, 1 * DAY_MS);
+    await post(member, `/api/tools/${fan}/return`, { condition: 'ok' }).expect(200);
+    later(10 * DAY_MS);
+
+    const res = await lead.agent.get('/api/overdue');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toMatch(/application\/json/);
+    expect(overdueListSchema.parse(res.body).lastRun).toBeNull();
+    expect(res.body.data).toEqual([
+      {
+        loanId: wrenchLoan,
+        tool: { code: wrench, name: 'Torque wrench', location: 'Cabinet B', replacementValueCents: 25_000 },
+        holder: { id: expect.any(Number), name: 'Mia Member', email: 'member@example.org', phone: '555-0100' },
+        dueAt: '2026-12-02T12:00:00.000Z',
+        daysLate: 9,
+        lastReminderAt: null,
+        remindedToday: false,
+      },
+      expect.objectContaining({ loanId: drillLoan, daysLate: 6, holder: expect.objectContaining({ name: 'Quinn Quartermaster', phone: null }) }),
+    ]);
+  });
+
+  it('counts whole days late, and a loan less than a day late as 1 day late', async () => {
+    const code = await addTool({ name: 'Deburring tool', category: 'deburring_tool' });
+    await lend(member, code, 1 * DAY_MS);
+    const daysLate = async () => ((await lead.agent.get('/api/overdue')).body.data as { daysLate: number }[]).map((l) => l.daysLate);
+    expect(await daysLate()).toEqual([]);
+    later(DAY_MS + 3 * HOUR_MS);
+    expect(await daysLate()).toEqual([1]);
+    later(DAY_MS);
+    expect(await daysLate()).toEqual([1]);
+    later(21 * HOUR_MS);
+    expect(await daysLate()).toEqual([2]);
+  });
+
+  it('answers 403 to a member and a quartermaster, and 401 when signed out', async () => {
+    for (const who of [member, qm]) {
+      const res = await who.agent.get('/api/overdue');
+      expect(res.status).toBe(403);
+      expect(res.body.error.code).toBe('FORBIDDEN');
+    }
+    const anonymous = await t.anonymous();
+    const res = await anonymous.agent.get('/api/overdue');
+    expect(res.status).toBe(401);
+    expect(res.body.error.code).toBe('NOT_SIGNED_IN');
+  });
+});
+
+describe('POST /api/overdue/:loanId/remind', () => {
+  it('e-mails the holder a reminder with the tool, due date, days late, where it lives and a link', async () => {
+    const code = await addTool({ name: 'Torque wrench', category: 'torque_wrench', location: 'Cabinet B, shelf 2' });
+    const loanId = await lend(member, code, 1 * DAY_MS);
+    later(6 * DAY_MS);
+
+    const res = await post(lead, `/api/overdue/${loanId}/remind`);
+    expect(res.status).toBe(201);
+    expect(res.headers['content-type']).toMatch(/application\/json/);
+    expect(reminderSentSchema.parse(res.body)).toEqual({ loanId, sentTo: 'member@example.org', sentAt: t.clock.now.toISOString(), day: '2026-12-07' });
+    const mail = t.lastMailTo('member@example.org');
+    expect(mail?.subject).toBe(`Reminder: ${code} Torque wrench was due back on 2026-12-02`);
+    expect(mail?.text).toContain('Hello Mia Member,');
+    expect(mail?.text).toContain('is now 5 days late');
+    expect(mail?.text).toContain('It lives at: Cabinet B, shelf 2.');
+    expect(mail?.links).toEqual([`http://gripline.test/tools/${code}`]);
+
+    const list = await lead.agent.get('/api/overdue');
+    expect(list.body.data[0]).toMatchObject({ loanId, lastReminderAt: t.clock.now.toISOString(), remindedToday: true });
+  });
+
+  it('sends at most one reminder per loan per day: a second the same day answers 409 REMINDER_ALREADY_SENT, the next day works', async () => {
+    const code = await addTool({ name: 'Air drill', category: 'air_drill' });
+    const loanId = await lend(member, code, 1 * DAY_MS);
+    later(3 * DAY_MS);
+    await post(lead, `/api/overdue/${loanId}/remind`).expect(201);
+    later(5 * HOUR_MS);
+    const again = await post(lead, `/api/overdue/${loanId}/remind`);
+    expect(again.status).toBe(409);
+    expect(again.body.error.code).toBe('REMINDER_ALREADY_SENT');
+    expect(again.body.error.message).toMatch(/already been reminded.*today/);
+    const sent = t.db.$client.prepare('select count(*) as n from loan_reminders where loan_id = ?').get(loanId) as { n: number };
+    expect(sent.n).toBe(1);
+
+    later(DAY_MS);
+    expect((await post(lead, `/api/overdue/${loanId}/remind`)).status).toBe(201);
+    const list = await lead.agent.get('/api/overdue');
+    expect(list.body.data[0]).toMatchObject({ remindedToday: true, lastReminderAt: t.clock.now.toISOString() });
+  });
+
+  it('answers 409 LOAN_NOT_OVERDUE for a loan not yet due and 409 LOAN_RETURNED for one that came back', async () => {
+    const code = await addTool({ name: 'Rivet gun', category: 'rivet_gun' });
+    const loanId = await lend(member, code, 2 * DAY_MS);
+    const early = await post(lead, `/api/overdue/${loanId}/remind`);
+    expect(early.status).toBe(409);
+    expect(early.body.error.code).toBe('LOAN_NOT_OVERDUE');
+    expect(early.body.error.message).toMatch(/not due back until 2026-12-03/);
+
+    later(5 * DAY_MS);
+    await post(member, `/api/tools/${code}/return`, { condition: 'ok' }).expect(200);
+    const returned = await post(lead, `/api/overdue/${loanId}/remind`);
+    expect(returned.status).toBe(409);
+    expect(returned.body.error.code).toBe('LOAN_RETURNED');
+    expect(t.lastMailTo('member@example.org')).toBeUndefined();
+  });
+
+  it('answers 404 LOAN_NOT_FOUND for an unknown loan and 400 VALIDATION_FAILED for a malformed id', async () => {
+    const unknown = await post(lead, '/api/overdue/9999/remind');
+    expect(unknown.status).toBe(404);
+    expect(unknown.body.error.code).toBe('LOAN_NOT_FOUND');
+    for (const bad of ['abc', '0', '-3', '1.5']) {
+      const res = await post(lead, `/api/overdue/${bad}/remind`);
+      expect(res.status).toBe(400);
+      expect(res.body.error.code).toBe('VALIDATION_FAILED');
+      expect(res.body.error.issues[0].path).toBe('loanId');
+      expect(res.body.error.message).toMatch(/The path is not valid/);
+    }
+  });
+
+  it('answers 403 to a member and a quartermaster', async () => {
+    const code = await addTool({ name: 'Bucking bar', category: 'bucking_bar' });
+    const loanId = await lend(member, code, 1 * DAY_MS);
+    later(2 * DAY_MS);
+    for (const who of [member, qm]) {
+      const res = await post(who, `/api/overdue/${loanId}/remind`);
+      expect(res.status).toBe(403);
+      expect(res.body.error.code).toBe('FORBIDDEN');
+    }
+    expect(t.lastMailTo('member@example.org')).toBeUndefined();
+  });
+});

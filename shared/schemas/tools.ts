@@ -18,21 +18,37 @@ const drillSizeField = z
 
 const isoDate = z.iso.datetime({ offset: true, error: 'Use a date and time like 2026-12-24T17:00:00Z.' });
 
-/** What a quartermaster or lead types to add a tool. Kind-specific rules are checked by refine below. */
-const toolFieldsSchema = z.object({
+/** The fields a quartermaster or lead types about a tool, without defaults (edits send only what changes). */
+const toolFields = {
   name: z.string({ error: 'Enter a name.' }).trim().min(1, { error: 'Enter a name.' }).max(120, { error: 'Keep the name under 120 characters.' }),
   category: z.enum(TOOL_CATEGORIES, { error: 'Choose a category from the list.' }),
-  location: z.string().trim().max(80, { error: 'Keep the location under 80 characters.' }).default(''),
-  replacementValueCents: z.number({ error: 'Enter the replacement value in cents.' }).int().min(0).max(100_000_000).default(0),
-  loanDays: z.number().int().min(1, { error: 'A loan lasts at least 1 day.' }).max(365, { error: 'A loan lasts at most 365 days.' }).nullable().default(null),
-  requiredSignoffId: z.number().int().positive().nullable().default(null),
-  serviceIntervalDays: z.number().int().min(1).max(3650).nullable().default(null),
-  lastServiceAt: isoDate.nullable().default(null),
-  drillSize: drillSizeField.nullable().default(null),
-  traySize: z.enum(TEMPORARY_FASTENER_SIZES, { error: 'Choose a temporary fastener size: 1/16, 3/32, 1/8, 5/32, 3/16, 1/4 or 3/8.' }).nullable().default(null),
-  trayCapacity: z.number().int().min(1, { error: 'A full tray holds at least 1.' }).max(10_000).nullable().default(null),
-  accessories: z.array(z.string().trim().min(1).max(80)).max(30).default([]),
-  notes: z.string().max(2000).default(''),
+  location: z.string().trim().max(80, { error: 'Keep the location under 80 characters.' }),
+  replacementValueCents: z.number({ error: 'Enter the replacement value in cents.' }).int().min(0).max(100_000_000),
+  loanDays: z.number().int().min(1, { error: 'A loan lasts at least 1 day.' }).max(365, { error: 'A loan lasts at most 365 days.' }).nullable(),
+  requiredSignoffId: z.number().int().positive().nullable(),
+  serviceIntervalDays: z.number().int().min(1).max(3650).nullable(),
+  lastServiceAt: isoDate.nullable(),
+  drillSize: drillSizeField.nullable(),
+  traySize: z.enum(TEMPORARY_FASTENER_SIZES, { error: 'Choose a temporary fastener size: 1/16, 3/32, 1/8, 5/32, 3/16, 1/4 or 3/8.' }).nullable(),
+  trayCapacity: z.number().int().min(1, { error: 'A full tray holds at least 1.' }).max(10_000).nullable(),
+  accessories: z.array(z.string().trim().min(1).max(80)).max(30),
+  notes: z.string().max(2000),
+};
+
+/** A new tool: what is not given takes its default. */
+const toolFieldsSchema = z.object({
+  ...toolFields,
+  location: toolFields.location.default(''),
+  replacementValueCents: toolFields.replacementValueCents.default(0),
+  loanDays: toolFields.loanDays.default(null),
+  requiredSignoffId: toolFields.requiredSignoffId.default(null),
+  serviceIntervalDays: toolFields.serviceIntervalDays.default(null),
+  lastServiceAt: toolFields.lastServiceAt.default(null),
+  drillSize: toolFields.drillSize.default(null),
+  traySize: toolFields.traySize.default(null),
+  trayCapacity: toolFields.trayCapacity.default(null),
+  accessories: toolFields.accessories.default([]),
+  notes: toolFields.notes.default(''),
 });
 
 type ToolFields = z.infer<typeof toolFieldsSchema>;
@@ -51,7 +67,8 @@ export const createToolBodySchema = toolFieldsSchema.extend({ code: toolCodeFiel
 export type CreateToolBody = z.input<typeof createToolBodySchema>;
 export type CreateToolInput = z.output<typeof createToolBodySchema>;
 
-export const updateToolBodySchema = toolFieldsSchema
+export const updateToolBodySchema = z
+  .object(toolFields)
   .partial()
   .strict()
   .refine((b) => Object.keys(b).length > 0, { error: 'Send at least one field to change.' });

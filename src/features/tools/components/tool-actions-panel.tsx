@@ -17,7 +17,11 @@ export function ToolActionsPanel({ tool, photoSlot, onDone }: { tool: ToolForYou
   return (
     <Card title="What you can do">
       <div className="flex flex-col gap-4">
-        {reason && <Notice tone={actions.length > 0 ? 'info' : 'warn'} title="Not available to you now">{reason}</Notice>}
+        {reason && (
+          <Notice tone={actions.length > 0 ? 'info' : 'warn'} title={actions.length > 0 ? 'Good to know' : 'Not available to you now'}>
+            {reason}
+          </Notice>
+        )}
         {yourHold && (
           <p>
             {yourHold.status === 'offered'

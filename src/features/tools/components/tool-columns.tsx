@@ -12,7 +12,7 @@ export const toolColumns = helper.columns([
   helper.accessor('code', {
     header: 'Code',
     cell: ({ getValue }) => (
-      <Link to={`/tools/${getValue()}`} className="inline-flex min-h-11 items-center font-mono font-medium underline underline-offset-4">
+      <Link to={`/tools/${getValue()}`} className="inline-flex min-h-11 items-center font-mono font-medium whitespace-nowrap underline underline-offset-4">
         {getValue()}
       </Link>
     ),

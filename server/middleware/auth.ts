@@ -1,6 +1,6 @@
 import type { NextFunction, Request, Response } from 'express';
 import { hasRole, type Role } from '@shared/roles';
-import { findUserById } from '../accounts/users.repo';
+import { loadUserById } from '../accounts/users.repo';
 import type { Database } from '../db/client';
 import type { UserRow } from '../db/schema/users';
 import { HttpError } from '../lib/http-error';
@@ -16,7 +16,7 @@ export function loadUser(db: Database) {
   return (req: Request, _res: Response, next: NextFunction) => {
     const id = req.session?.userId;
     if (id === undefined) return next();
-    const user = findUserById(db, id);
+    const user = loadUserById(db, id);
     if (!user || user.deactivatedAt) {
       req.session.destroy(() => next());
       return;

@@ -11,12 +11,15 @@ type Callback<T = void> = (err?: unknown, value?: T) => void;
 export class SqliteSessionStore extends session.Store {
   private readonly statements;
   private readonly sweepTimer: NodeJS.Timeout;
+  /** The expiry last written per session id, so touch can skip writes that change little. */
+  private readonly touchedAt = new Map<string, number>();
 
   constructor(
     sqlite: BetterSqlite3.Database,
     private readonly defaultTtlMs: number,
     sweepEveryMs = 15 * 60 * 1000,
     private readonly now: () => number = Date.now,
+    private readonly touchEveryMs = 60_000,
   ) {
     super();
     this.statements = {
@@ -54,16 +57,27 @@ export class SqliteSessionStore extends session.Store {
 
   set(sid: string, sess: session.SessionData, cb?: Callback): void {
     try {
-      this.statements.set.run(sid, JSON.stringify(sess), this.expiryOf(sess));
+      const expiry = this.expiryOf(sess);
+      this.statements.set.run(sid, JSON.stringify(sess), expiry);
+      this.touchedAt.set(sid, expiry);
       cb?.();
     } catch (err) {
       cb?.(err);
     }
   }
 
+  /**
+   * Extends a session's life. Every request touches its session; writing the row each time would
+   * cost a write per scan, so the expiry is written only when it moves by more than touchEveryMs.
+   */
   touch(sid: string, sess: session.SessionData, cb?: Callback): void {
     try {
-      this.statements.touch.run(this.expiryOf(sess), sid);
+      const expiry = this.expiryOf(sess);
+      const written = this.touchedAt.get(sid);
+      if (written === undefined || expiry - written >= this.touchEveryMs) {
+        this.statements.touch.run(expiry, sid);
+        this.touchedAt.set(sid, expiry);
+      }
       cb?.();
     } catch (err) {
       cb?.(err);
@@ -72,6 +86,7 @@ export class SqliteSessionStore extends session.Store {
 
   destroy(sid: string, cb?: Callback): void {
     try {
+      this.touchedAt.delete(sid);
       this.statements.destroy.run(sid);
       cb?.();
     } catch (err) {
@@ -81,6 +96,7 @@ export class SqliteSessionStore extends session.Store {
 
   clear(cb?: Callback): void {
     try {
+      this.touchedAt.clear();
       this.statements.clear.run();
       cb?.();
     } catch (err) {
@@ -98,7 +114,9 @@ export class SqliteSessionStore extends session.Store {
 
   /** Deletes expired sessions; returns how many. */
   sweep(): number {
-    return this.statements.sweep.run(this.now()).changes;
+    const now = this.now();
+    for (const [sid, expiry] of this.touchedAt) if (expiry <= now) this.touchedAt.delete(sid);
+    return this.statements.sweep.run(now).changes;
   }
 
   close(): void {

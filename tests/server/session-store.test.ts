@@ -12,7 +12,7 @@ beforeEach(() => {
   db = openDatabase(':memory:');
   migrateDatabase(db);
   clock = { now: Date.UTC(2026, 11, 1, 12) };
-  store = new SqliteSessionStore(db.$client, TTL, 60_000, () => clock.now);
+  store = new SqliteSessionStore(db.$client, TTL, 60_000, () => clock.now, 0);
 });
 afterEach(() => {
   // Real timers first, so close() clears the store's real interval rather than a fake one.
@@ -94,6 +94,21 @@ describe('SqliteSessionStore', () => {
     clock.now += 500;
     // Past the first expiry, within the extended one.
     expect((await get('sid-a'))?.userId).toBe(7);
+  });
+
+  it('writes a touch only when the expiry moves by the set step, so busy sessions cost no write per request', async () => {
+    const throttled = new SqliteSessionStore(db.$client, TTL, 60_000, () => clock.now, 60_000);
+    const touchThrottled = (sid: string, data: ReturnType<typeof sess>) =>
+      new Promise<void>((resolve, reject) => throttled.touch(sid, data, (err) => (err ? reject(err) : resolve())));
+    await new Promise<void>((resolve) => throttled.set('sid-t', sess(7, clock.now + 600_000), () => resolve()));
+    const first = expiryRow('sid-t');
+    clock.now += 30_000;
+    await touchThrottled('sid-t', sess(7, clock.now + 600_000));
+    expect(expiryRow('sid-t')).toBe(first);
+    clock.now += 31_000;
+    await touchThrottled('sid-t', sess(7, clock.now + 600_000));
+    expect(expiryRow('sid-t')).toBe(clock.now + 600_000);
+    throttled.close();
   });
 
   it('does not create a session on touch', async () => {

@@ -27,8 +27,10 @@ async function fetchCsrfToken(): Promise<string> {
   return token;
 }
 
-async function send<T>(method: string, path: string, body?: unknown, token?: string): Promise<T> {
-  const headers: Record<string, string> = { Accept: 'application/json' };
+type Answer = 'json' | 'blob';
+
+async function send<T>(method: string, path: string, body?: unknown, token?: string, answer: Answer = 'json'): Promise<T> {
+  const headers: Record<string, string> = { Accept: answer === 'json' ? 'application/json' : '*/*' };
   // A FormData body sets its own multipart Content-Type, boundary included.
   const isForm = body instanceof FormData;
   if (body !== undefined && !isForm) headers['Content-Type'] = 'application/json';
@@ -45,6 +47,7 @@ async function send<T>(method: string, path: string, body?: unknown, token?: str
     throw new ApiError(0, 'NETWORK', 'No connection to Gripline. Check the Wi-Fi and try again.');
   }
   if (res.status === 204) return undefined as T;
+  if (res.ok && answer === 'blob') return (await res.blob()) as T;
   const json: unknown = await res.json().catch(() => undefined);
   if (res.ok) return json as T;
   const parsed = errorEnvelopeSchema.safeParse(json);
@@ -55,14 +58,14 @@ async function send<T>(method: string, path: string, body?: unknown, token?: str
   throw new ApiError(res.status, 'HTTP_' + res.status, `The server answered ${res.status}. Try again in a moment.`);
 }
 
-async function mutate<T>(method: string, path: string, body?: unknown): Promise<T> {
+async function mutate<T>(method: string, path: string, body?: unknown, answer: Answer = 'json'): Promise<T> {
   const token = csrfToken ?? (await fetchCsrfToken());
   try {
-    return await send<T>(method, path, body, token);
+    return await send<T>(method, path, body, token, answer);
   } catch (err) {
     // The session may have changed under us (expired, signed in elsewhere): get a fresh token once.
     if (err instanceof ApiError && err.code === 'CSRF_TOKEN_INVALID') {
-      return send<T>(method, path, body, await fetchCsrfToken());
+      return send<T>(method, path, body, await fetchCsrfToken(), answer);
     }
     throw err;
   }
@@ -78,33 +81,7 @@ export const api = {
   postForm: <T>(path: string, form: FormData) => mutate<T>('POST', path, form),
 };
 
-/**
- * A POST whose answer is a file (a label sheet PDF) rather than JSON: the same CSRF token, one retry
- * with a fresh token, and the same ApiError from the error envelope as `api.post`.
- */
-export async function postForBlob(path: string, body: unknown): Promise<Blob> {
-  const attempt = async (token: string): Promise<Blob> => {
-    let res: Response;
-    try {
-      res = await fetch(path, {
-        method: 'POST',
-        headers: { Accept: 'application/pdf, application/json', 'Content-Type': 'application/json', 'X-CSRF-Token': token },
-        credentials: 'same-origin',
-        body: JSON.stringify(body),
-      });
-    } catch {
-      throw new ApiError(0, 'NETWORK', 'No connection to Gripline. Check the Wi-Fi and try again.');
-    }
-    if (res.ok) return res.blob();
-    const parsed = errorEnvelopeSchema.safeParse(await res.json().catch(() => undefined));
-    if (!parsed.success) throw new ApiError(res.status, 'HTTP_' + res.status, `The server answered ${res.status}. Try again in a moment.`);
-    const e = parsed.data.error;
-    throw new ApiError(res.status, e.code, e.message, e.issues);
-  };
-  try {
-    return await attempt(csrfToken ?? (await fetchCsrfToken()));
-  } catch (err) {
-    if (err instanceof ApiError && err.code === 'CSRF_TOKEN_INVALID') return attempt(await fetchCsrfToken());
-    throw err;
-  }
+/** A POST whose answer is a file (a label sheet PDF) rather than JSON; errors as for `api.post`. */
+export function postForBlob(path: string, body: unknown): Promise<Blob> {
+  return mutate<Blob>('POST', path, body, 'blob');
 }

@@ -2,6 +2,7 @@ import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { beforeEach, describe, expect, it, vi } from 'vitest';
 import type { SheetLayoutDto } from '@shared/schemas/labels';
+import { SHEET_LAYOUTS } from '../../labels/layouts';
 import { LabelSheetBuilder } from '@/features/labels/components/label-sheet-builder';
 import { describeSheet } from '@/features/labels/utils/sheet-summary';
 import { filterTools, NO_FILTER, selectAll, unselectAll, type PickableTool } from '@/features/labels/utils/tool-selection';
@@ -23,32 +24,8 @@ const TOOLS = [
   tool('T-0004', 'Hand rivet puller, short', 'hand_rivet_puller', 'out_of_service'),
 ];
 
-const LAYOUTS: SheetLayoutDto[] = [
-  {
-    id: 'letter-3x10-2.625x1in',
-    name: 'US Letter, 30 labels 2⅝ × 1 in',
-    media: 'sheet',
-    unit: 'in',
-    page: { width: 8.5, height: 11 },
-    label: { width: 2.625, height: 1 },
-    columns: 3,
-    rows: 10,
-    margin: { top: 0.5, left: 0.1875 },
-    gap: { horizontal: 0.125, vertical: 0 },
-  },
-  {
-    id: 'thermal-1x1-2x1in',
-    name: 'Thermal roll, one label 2 × 1 in per page',
-    media: 'thermal-roll',
-    unit: 'in',
-    page: { width: 2, height: 1 },
-    label: { width: 2, height: 1 },
-    columns: 1,
-    rows: 1,
-    margin: { top: 0, left: 0 },
-    gap: { horizontal: 0, vertical: 0 },
-  },
-];
+/** The layouts as the server lists them (the same data in labels/layouts.ts). */
+const LAYOUTS: SheetLayoutDto[] = SHEET_LAYOUTS.filter((l) => l.id !== 'a4-3x8-70x37mm').map((l) => ({ ...l }));
 
 const codesIn = (tools: PickableTool[]) => tools.map((t) => t.code);
 

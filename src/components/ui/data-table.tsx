@@ -117,3 +117,12 @@ export function DataTable<T extends RowData>({ table, caption, empty }: { table:
     </div>
   );
 }
+
+/** Read and set a column's filter from a select box: '' means no filter. */
+export function columnFilter<T extends RowData>(table: ReactTable<ListFeatures, T>, id: string) {
+  const column = table.getColumn(id);
+  return {
+    value: (column?.getFilterValue() as string | undefined) ?? '',
+    set: (value: string) => column?.setFilterValue(value || undefined),
+  };
+}

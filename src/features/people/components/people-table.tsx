@@ -2,7 +2,7 @@ import { useMemo } from 'react';
 import { useTable } from '@tanstack/react-table';
 import { ROLE_LABELS, ROLES } from '@shared/roles';
 import type { Person } from '@shared/schemas/people';
-import { DataTable, listFeatures } from '@/components/ui/data-table';
+import { columnFilter, DataTable, listFeatures } from '@/components/ui/data-table';
 import { SelectField, TextField } from '@/components/ui/field';
 import { peopleColumns } from './people-columns';
 
@@ -22,8 +22,8 @@ export function PeopleTable({ people, selfId }: { people: Person[]; selfId: numb
     globalFilterFn: 'includesString',
     initialState: { sorting: [{ id: 'name', desc: false }], pagination: { pageIndex: 0, pageSize: 25 } },
   });
-  const filterValue = (id: string) => (table.getColumn(id)?.getFilterValue() as string | undefined) ?? '';
-  const setFilter = (id: string, value: string) => table.getColumn(id)?.setFilterValue(value || undefined);
+  const filterValue = (id: string) => columnFilter(table, id).value;
+  const setFilter = (id: string, value: string) => columnFilter(table, id).set(value);
 
   return (
     <div className="flex flex-col gap-3">

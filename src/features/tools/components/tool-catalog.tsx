@@ -2,7 +2,7 @@ import { useMemo } from 'react';
 import { useTable } from '@tanstack/react-table';
 import { CATEGORY_LABELS, STATUS_LABELS, TOOL_CATEGORIES, TOOL_STATUSES } from '@shared/tools/categories';
 import type { Tool } from '@shared/schemas/tools';
-import { DataTable, listFeatures } from '@/components/ui/data-table';
+import { columnFilter, DataTable, listFeatures } from '@/components/ui/data-table';
 import { SelectField, TextField } from '@/components/ui/field';
 import { toolColumns } from './tool-columns';
 
@@ -22,8 +22,8 @@ export function ToolCatalog({ tools }: { tools: Tool[] }) {
     () => [{ value: '', label: 'Anywhere' }, ...[...new Set(tools.map((t) => t.location).filter(Boolean))].sort().map((l) => ({ value: l, label: l }))],
     [tools],
   );
-  const filterValue = (id: string) => (table.getColumn(id)?.getFilterValue() as string | undefined) ?? '';
-  const setFilter = (id: string, value: string) => table.getColumn(id)?.setFilterValue(value || undefined);
+  const filterValue = (id: string) => columnFilter(table, id).value;
+  const setFilter = (id: string, value: string) => columnFilter(table, id).set(value);
   const activeFilters = ['category', 'status', 'location'].filter((id) => filterValue(id) !== '').length;
 
   return (

@@ -1,6 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { cribSettingsSchema } from '@shared/schemas/signoffs';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { post } from '../helpers/crib';
 
 let t: TestApp;
 let lead: SignedInAgent;
@@ -17,7 +18,6 @@ beforeEach(async () => {
 });
 afterEach(() => t.close());
 
-const post = (who: SignedInAgent, path: string, body: unknown = {}) => who.agent.post(path).set('X-CSRF-Token', who.csrf).send(body as object);
 const patch = (who: SignedInAgent, body: unknown) => who.agent.patch('/api/settings/crib').set('X-CSRF-Token', who.csrf).send(body as object);
 
 describe('GET /api/settings/crib', () => {

@@ -3,6 +3,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { overdueListSchema, reminderSentSchema } from '@shared/schemas/overdue';
 import { users } from '../../server/db/schema/users';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { addToolAs, lend, post } from '../helpers/crib';
 
 let t: TestApp;
 let lead: SignedInAgent;
@@ -21,23 +22,12 @@ beforeEach(async () => {
 });
 afterEach(() => t.close());
 
-const post = (who: SignedInAgent, path: string, body: unknown = {}) => who.agent.post(path).set('X-CSRF-Token', who.csrf).send(body as object);
 const later = (ms: number) => {
   t.clock.now = new Date(t.clock.now.getTime() + ms);
 };
 
-async function addTool(body: Record<string, unknown>): Promise<string> {
-  const res = await post(qm, '/api/tools', body);
-  if (res.status !== 201) throw new Error(`could not add tool: ${res.status} ${JSON.stringify(res.body)}`);
-  return (res.body as { code: string }).code;
-}
+const addTool = async (body: Record<string, unknown>) => (await addToolAs(qm, body)).code;
 
-/** Checks a tool out to `who`, due back after `dueInMs`; returns the loan id. */
-async function lend(who: SignedInAgent, code: string, dueInMs: number): Promise<number> {
-  const res = await post(who, `/api/tools/${code}/checkout`, { dueAt: new Date(t.clock.now.getTime() + dueInMs).toISOString() });
-  if (res.status !== 201) throw new Error(`could not check out: ${res.status} ${JSON.stringify(res.body)}`);
-  return (res.body as { id: number }).id;
-}
 
 describe('GET /api/overdue', () => {
   it('lists open loans past due with the holder’s contact, most days late first', async () => {
@@ -46,10 +36,10 @@ describe('GET /api/overdue', () => {
     const puller = await addTool({ name: 'Hand rivet puller', category: 'hand_rivet_puller' });
     const fan = await addTool({ name: 'Spacing fan', category: 'spacing_fan' });
     // Lent first but due later: the list must follow days late, not the order of the loans.
-    const drillLoan = await lend(qm, drill, 4 * DAY_MS);
-    const wrenchLoan = await lend(member, wrench, 1 * DAY_MS);
-    await lend(member, puller, 30 * DAY_MS);
-    await lend(member, fan, 1 * DAY_MS);
+    const drillLoan = await lend(t, qm, drill, 4 * DAY_MS);
+    const wrenchLoan = await lend(t, member, wrench, 1 * DAY_MS);
+    await lend(t, member, puller, 30 * DAY_MS);
+    await lend(t, member, fan, 1 * DAY_MS);
     await post(member, `/api/tools/${fan}/return`, { condition: 'ok' }).expect(200);
     later(10 * DAY_MS);
 
@@ -73,7 +63,7 @@ describe('GET /api/overdue', () => {
 
   it('counts whole days late, and a loan less than a day late as 1 day late', async () => {
     const code = await addTool({ name: 'Deburring tool', category: 'deburring_tool' });
-    await lend(member, code, 1 * DAY_MS);
+    await lend(t, member, code, 1 * DAY_MS);
     const daysLate = async () => ((await lead.agent.get('/api/overdue')).body.data as { daysLate: number }[]).map((l) => l.daysLate);
     expect(await daysLate()).toEqual([]);
     later(DAY_MS + 3 * HOUR_MS);
@@ -100,7 +90,7 @@ describe('GET /api/overdue', () => {
 describe('POST /api/overdue/:loanId/remind', () => {
   it('e-mails the holder a reminder with the tool, due date, days late, where it lives and a link', async () => {
     const code = await addTool({ name: 'Torque wrench', category: 'torque_wrench', location: 'Cabinet B, shelf 2' });
-    const loanId = await lend(member, code, 1 * DAY_MS);
+    const loanId = await lend(t, member, code, 1 * DAY_MS);
     later(6 * DAY_MS);
 
     const res = await post(lead, `/api/overdue/${loanId}/remind`);
@@ -120,7 +110,7 @@ describe('POST /api/overdue/:loanId/remind', () => {
 
   it('sends at most one reminder per loan per day: a second the same day answers 409 REMINDER_ALREADY_SENT, the next day works', async () => {
     const code = await addTool({ name: 'Air drill', category: 'air_drill' });
-    const loanId = await lend(member, code, 1 * DAY_MS);
+    const loanId = await lend(t, member, code, 1 * DAY_MS);
     later(3 * DAY_MS);
     await post(lead, `/api/overdue/${loanId}/remind`).expect(201);
     later(5 * HOUR_MS);
@@ -139,7 +129,7 @@ describe('POST /api/overdue/:loanId/remind', () => {
 
   it('answers 409 LOAN_NOT_OVERDUE for a loan not yet due and 409 LOAN_RETURNED for one that came back', async () => {
     const code = await addTool({ name: 'Rivet gun', category: 'rivet_gun' });
-    const loanId = await lend(member, code, 2 * DAY_MS);
+    const loanId = await lend(t, member, code, 2 * DAY_MS);
     const early = await post(lead, `/api/overdue/${loanId}/remind`);
     expect(early.status).toBe(409);
     expect(early.body.error.code).toBe('LOAN_NOT_OVERDUE');
@@ -168,7 +158,7 @@ describe('POST /api/overdue/:loanId/remind', () => {
 
   it('answers 403 to a member and a quartermaster', async () => {
     const code = await addTool({ name: 'Bucking bar', category: 'bucking_bar' });
-    const loanId = await lend(member, code, 1 * DAY_MS);
+    const loanId = await lend(t, member, code, 1 * DAY_MS);
     later(2 * DAY_MS);
     for (const who of [member, qm]) {
       const res = await post(who, `/api/overdue/${loanId}/remind`);

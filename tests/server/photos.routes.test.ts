@@ -3,6 +3,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { photoSchema } from '@shared/schemas/photos';
 import { loanSchema } from '@shared/schemas/tools';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { addToolAs, post } from '../helpers/crib';
 
 let t: TestApp;
 let qm: SignedInAgent;
@@ -20,10 +21,7 @@ beforeEach(async () => {
 });
 afterEach(() => t.close());
 
-async function addTool(name: string) {
-  const res = await qm.agent.post('/api/tools').set('X-CSRF-Token', qm.csrf).send({ name, category: 'other' });
-  if (res.status !== 201) throw new Error(`could not add tool: ${res.status} ${JSON.stringify(res.body)}`);
-}
+const addTool = (name: string) => addToolAs(qm, { name, category: 'other' });
 
 /** A real picture made by sharp: a gradient, so the encoders have something to compress. */
 function picture(width: number, height: number) {
@@ -40,7 +38,6 @@ function picture(width: number, height: number) {
 const upload = (who: SignedInAgent, code: string, bytes: Buffer, filename = 'photo.jpg', contentType = 'image/jpeg') =>
   who.agent.post(`/api/tools/${code}/photos`).set('X-CSRF-Token', who.csrf).attach('photo', bytes, { filename, contentType });
 
-const post = (who: SignedInAgent, path: string, body: object = {}) => who.agent.post(path).set('X-CSRF-Token', who.csrf).send(body);
 
 /** The stored bytes, fetched through the API. */
 async function stored(url: string) {

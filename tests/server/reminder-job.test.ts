@@ -8,6 +8,7 @@ import { users } from '../../server/db/schema/users';
 import { runOverdueReminders } from '../../server/features/tools/reminder-job';
 import { createSmtpMailer, type Mailer } from '../../server/mail/mailer';
 import { buildTestApp, type Crew, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { addToolAs, lend, post } from '../helpers/crib';
 
 let t: TestApp;
 let crew: Crew;
@@ -35,7 +36,6 @@ afterEach(async () => {
   await t.close();
 });
 
-const post = (who: SignedInAgent, path: string, body: unknown = {}) => who.agent.post(path).set('X-CSRF-Token', who.csrf).send(body as object);
 const later = (ms: number) => {
   t.clock.now = new Date(t.clock.now.getTime() + ms);
 };
@@ -46,26 +46,17 @@ const mailsTo = (address: string) =>
     .all()
     .filter((m) => (JSON.parse(m.toAddresses) as string[]).includes(address));
 
-async function addTool(body: Record<string, unknown>): Promise<string> {
-  const res = await post(qm, '/api/tools', body);
-  if (res.status !== 201) throw new Error(`could not add tool: ${res.status} ${JSON.stringify(res.body)}`);
-  return (res.body as { code: string }).code;
-}
+const addTool = async (body: Record<string, unknown>) => (await addToolAs(qm, body)).code;
 
-async function lend(who: SignedInAgent, code: string, dueInMs: number): Promise<number> {
-  const res = await post(who, `/api/tools/${code}/checkout`, { dueAt: new Date(t.clock.now.getTime() + dueInMs).toISOString() });
-  if (res.status !== 201) throw new Error(`could not check out: ${res.status} ${JSON.stringify(res.body)}`);
-  return (res.body as { id: number }).id;
-}
 
 /** Two overdue loans (the member's wrench 9 days late, the quartermaster's drill 6) and one not yet due. */
 async function twoOverdueLoans() {
   const wrench = await addTool({ name: 'Torque wrench', category: 'torque_wrench', location: 'Cabinet B', replacementValueCents: 25_000 });
   const drill = await addTool({ name: 'Air drill', category: 'air_drill', replacementValueCents: 18_050 });
   const puller = await addTool({ name: 'Hand rivet puller', category: 'hand_rivet_puller' });
-  const wrenchLoan = await lend(member, wrench, 1 * DAY_MS);
-  const drillLoan = await lend(qm, drill, 4 * DAY_MS);
-  await lend(member, puller, 30 * DAY_MS);
+  const wrenchLoan = await lend(t, member, wrench, 1 * DAY_MS);
+  const drillLoan = await lend(t, qm, drill, 4 * DAY_MS);
+  await lend(t, member, puller, 30 * DAY_MS);
   later(10 * DAY_MS);
   return { wrench, drill, wrenchLoan, drillLoan };
 }
@@ -135,7 +126,7 @@ describe('runOverdueReminders', () => {
 
   it('sends no digest when nothing is overdue', async () => {
     const code = await addTool({ name: 'Spacing fan', category: 'spacing_fan' });
-    await lend(member, code, 3 * DAY_MS);
+    await lend(t, member, code, 3 * DAY_MS);
     const result = await runOverdueReminders(ctx);
     expect(result.summary).toBe('0 reminders, nothing overdue, no digest');
     expect(t.lastMailTo('lead@example.org')).toBeUndefined();
@@ -143,7 +134,7 @@ describe('runOverdueReminders', () => {
 
   it('moves expired hold offers on: the next person in the queue is offered the tool', async () => {
     const code = await addTool({ name: 'Pneumatic rivet puller', category: 'pneumatic_rivet_puller' });
-    await lend(member, code, 2 * DAY_MS);
+    await lend(t, member, code, 2 * DAY_MS);
     await post(qm, `/api/tools/${code}/holds`).expect(201);
     await post(lead, `/api/tools/${code}/holds`).expect(201);
     await post(member, `/api/tools/${code}/return`, { condition: 'ok' }).expect(200);

@@ -1,6 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { serviceDueListSchema } from '@shared/schemas/overdue';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { addToolAs, post } from '../helpers/crib';
 
 let t: TestApp;
 let lead: SignedInAgent;
@@ -17,14 +18,9 @@ beforeEach(async () => {
 });
 afterEach(() => t.close());
 
-const post = (who: SignedInAgent, path: string, body: unknown = {}) => who.agent.post(path).set('X-CSRF-Token', who.csrf).send(body as object);
 const daysAgo = (n: number) => new Date(t.clock.now.getTime() - n * DAY_MS).toISOString();
 
-async function addTool(body: Record<string, unknown>): Promise<string> {
-  const res = await post(qm, '/api/tools', body);
-  if (res.status !== 201) throw new Error(`could not add tool: ${res.status} ${JSON.stringify(res.body)}`);
-  return (res.body as { code: string }).code;
-}
+const addTool = async (body: Record<string, unknown>) => (await addToolAs(qm, body)).code;
 
 /** Yearly calibration of a torque wrench: common practice; the wrench's maker may say otherwise. */
 const wrench = (name: string, lastServiceAt: string) => ({ name, category: 'torque_wrench', serviceIntervalDays: 365, lastServiceAt });

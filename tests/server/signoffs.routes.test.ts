@@ -3,6 +3,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { mySignoffListSchema, signoffGrantSchema, signoffListSchema, signoffSchema } from '@shared/schemas/signoffs';
 import { memberSignoffs } from '../../server/db/schema/signoffs';
 import { buildTestApp, type Crew, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { del, patch, post } from '../helpers/crib';
 
 let t: TestApp;
 let crew: Crew;
@@ -19,9 +20,6 @@ beforeEach(async () => {
 });
 afterEach(() => t.close());
 
-const post = (who: SignedInAgent, path: string, body: unknown = {}) => who.agent.post(path).set('X-CSRF-Token', who.csrf).send(body as object);
-const patch = (who: SignedInAgent, path: string, body: unknown) => who.agent.patch(path).set('X-CSRF-Token', who.csrf).send(body as object);
-const del = (who: SignedInAgent, path: string) => who.agent.delete(path).set('X-CSRF-Token', who.csrf);
 
 async function define(name: string, description?: string): Promise<number> {
   const res = await post(lead, '/api/signoffs', { name, description });

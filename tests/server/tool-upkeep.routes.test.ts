@@ -1,5 +1,6 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { post } from '../helpers/crib';
 
 let t: TestApp;
 let qm: SignedInAgent;
@@ -15,7 +16,6 @@ beforeEach(async () => {
 });
 afterEach(() => t.close());
 
-const post = (who: SignedInAgent, path: string, body: unknown = {}) => who.agent.post(path).set('X-CSRF-Token', who.csrf).send(body as object);
 const events = async () => (await member.agent.get('/api/tools/T-0001/events')).body.data as { action: string; fromStatus: string | null; toStatus: string | null; detail: string; actor: { name: string } | null }[];
 
 describe('PATCH /api/tools/:code', () => {

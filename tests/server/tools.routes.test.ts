@@ -1,6 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { memberSignoffs, signoffs } from '../../server/db/schema/signoffs';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { addToolAs, post } from '../helpers/crib';
 
 let t: TestApp;
 let qm: SignedInAgent;
@@ -15,13 +16,8 @@ beforeEach(async () => {
 });
 afterEach(() => t.close());
 
-async function addTool(body: Record<string, unknown>) {
-  const res = await qm.agent.post('/api/tools').set('X-CSRF-Token', qm.csrf).send(body);
-  if (res.status !== 201) throw new Error(`could not add tool: ${res.status} ${JSON.stringify(res.body)}`);
-  return res.body as { id: number; code: string; status: string };
-}
+const addTool = (body: Record<string, unknown>) => addToolAs(qm, body);
 
-const post = (who: SignedInAgent, path: string, body: unknown = {}) => who.agent.post(path).set('X-CSRF-Token', who.csrf).send(body as object);
 
 describe('POST /api/tools', () => {
   it('adds a tool with the next free code and the category default loan period', async () => {

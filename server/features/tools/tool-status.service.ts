@@ -1,4 +1,5 @@
 import { and, eq, isNull } from 'drizzle-orm';
+import { STATUS_LABELS } from '@shared/tools/categories';
 import type { ServiceContext } from '../../context';
 import { loans, tools } from '../../db/schema/tools';
 import type { UserRow } from '../../db/schema/users';
@@ -18,14 +19,6 @@ const COMMANDS: Record<StatusCommand, { from: ToolRow['status'][]; to: ToolRow['
   retire: { from: ['available', 'out_of_service', 'lost'], to: 'retired', action: 'retired' },
 };
 
-const WORDS: Record<ToolRow['status'], string> = {
-  available: 'available',
-  on_loan: 'on loan',
-  held: 'held for someone',
-  out_of_service: 'out of service',
-  lost: 'marked lost',
-  retired: 'retired',
-};
 
 /**
  * Quartermaster commands that move a tool between states, each with a reason in the audit trail.
@@ -39,7 +32,7 @@ export async function changeToolStatus(ctx: ServiceContext, actor: UserRow, code
     const tool = findToolByCode(ctx.db, code);
     if (!tool) throw new HttpError(404, 'TOOL_NOT_FOUND', `No tool has the code ${code}.`);
     if (!rule.from.includes(tool.status)) {
-      throw new HttpError(409, 'WRONG_STATE', `${tool.code} is ${WORDS[tool.status]}, so it cannot be ${command.replaceAll('_', ' ')} now.`);
+      throw new HttpError(409, 'WRONG_STATE', `${tool.code} is ${STATUS_LABELS[tool.status].toLowerCase()}, so it cannot be ${command.replaceAll('_', ' ')} now.`);
     }
     if (command === 'lost' && tool.status === 'on_loan') {
       ctx.db

@@ -54,15 +54,15 @@ export function AppShell() {
       </a>
       <header className="border-b border-rule bg-ink text-card">
         <div className="mx-auto flex max-w-5xl items-center justify-between gap-3 px-4 py-2">
-          <div>
+          <div className="min-w-0 flex-1">
             <p className="font-mono text-sm font-medium tracking-widest text-brass uppercase">Gripline</p>
-            <p className="text-sm text-card/80">
+            <p className="truncate text-sm text-card/80">
               {me.name} · {ROLE_LABELS[me.role]}
             </p>
           </div>
           {more.length > 0 && (
             <details className="relative sm:hidden">
-              <summary className="flex min-h-12 cursor-pointer list-none items-center rounded-lg border-2 border-card/60 px-4 font-semibold">Menu</summary>
+              <summary className="flex min-h-12 cursor-pointer list-none items-center rounded-lg border-2 border-card/60 px-3 font-semibold whitespace-nowrap">Menu</summary>
               <ul className="absolute right-0 z-20 mt-2 w-56 rounded-xl border border-rule bg-card p-2 text-ink shadow-lg">
                 {more.map((link) => (
                   <li key={link.to}>
@@ -81,7 +81,7 @@ export function AppShell() {
             type="button"
             onClick={signOut}
             disabled={logout.isPending}
-            className="min-h-12 rounded-lg border-2 border-card/60 px-4 font-semibold hover:bg-ink-soft"
+            className="min-h-12 shrink-0 rounded-lg border-2 border-card/60 px-3 font-semibold whitespace-nowrap hover:bg-ink-soft"
           >
             Sign out
           </button>

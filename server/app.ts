@@ -9,6 +9,7 @@ import { authRouter } from './features/auth/auth.router';
 import { healthRouter } from './features/health/health.router';
 import { invitationsRouter } from './features/invitations/invitations.router';
 import { labelsRouter } from './features/labels/labels.router';
+import { binsRouter } from './features/stock/bins.router';
 import { mailRouter } from './features/mail/mail.router';
 import { passwordResetRouter } from './features/password-reset/password-reset.router';
 import { peopleRouter } from './features/people/people.router';
@@ -90,6 +91,7 @@ export function createApp(config: AppConfig) {
   api.use('/signoffs', signoffsRouter());
   api.use('/settings', cribSettingsRouter());
   api.use('/labels', labelsRouter());
+  api.use('/bins', binsRouter());
   api.use(apiNotFound);
   app.use('/api', api);
 

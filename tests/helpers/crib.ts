@@ -18,3 +18,30 @@ export async function lend(t: TestApp, who: SignedInAgent, code: string, dueInMs
   if (res.status !== 201) throw new Error(`could not check out: ${res.status} ${JSON.stringify(res.body)}`);
   return (res.body as { id: number }).id;
 }
+
+/** A blind structural rivet bin body: 1/8 in dome 5056, grip -2, with opening stock. */
+export const blindRivetBin = (over: Record<string, unknown> = {}) => ({
+  kind: 'blind_structural',
+  head: 'dome',
+  material: '5056',
+  stemMaterial: 'steel',
+  diameter32: 4,
+  grip16: 2,
+  unit: 'each',
+  packSize: 100,
+  unitCost: 0.12,
+  supplier: 'Cedar Valley Fastener Supply',
+  leadTimeDays: 10,
+  reorderPoint: 200,
+  reorderQty: 450,
+  location: 'Shelf A2',
+  initialQuantity: 500,
+  ...over,
+});
+
+/** Adds a bin as `who` (a quartermaster or lead); fails the test setup loudly otherwise. */
+export async function addBinAs(who: SignedInAgent, body: Record<string, unknown>): Promise<{ id: number; code: string; onHand: number }> {
+  const res = await post(who, '/api/bins', body);
+  if (res.status !== 201) throw new Error(`could not add bin: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body as { id: number; code: string; onHand: number };
+}

@@ -1,0 +1,100 @@
+import { and, asc, count, eq, like, lte, max, ne, or, sql, type SQL } from 'drizzle-orm';
+import type { BinListQuery } from '@shared/schemas/bins';
+import type { Executor } from '../../db/client';
+import type { SQLiteColumn } from 'drizzle-orm/sqlite-core';
+import { bins, stockMovements, type BinRow } from '../../db/schema/stock';
+
+export type NewBinRow = typeof bins.$inferInsert;
+
+export function findBinByCode(db: Executor, code: string): BinRow | undefined {
+  return db.select().from(bins).where(eq(bins.code, code)).get();
+}
+
+export function findBinById(db: Executor, id: number): BinRow | undefined {
+  return db.select().from(bins).where(eq(bins.id, id)).get();
+}
+
+export function insertBin(db: Executor, values: NewBinRow): BinRow {
+  return db.insert(bins).values(values).returning().get();
+}
+
+export function updateBin(db: Executor, id: number, values: Partial<NewBinRow>): BinRow {
+  return db.update(bins).set(values).where(eq(bins.id, id)).returning().get();
+}
+
+/** The next free bin code: one more than the highest B-number in use, four digits at least. */
+export function nextBinCode(db: Executor): string {
+  const row = db.select({ n: sql<number | null>`max(cast(substr(${bins.code}, 3) as integer))` }).from(bins).get();
+  return `B-${String((row?.n ?? 0) + 1).padStart(4, '0')}`;
+}
+
+function listFilter(q: BinListQuery): SQL | undefined {
+  const text = q.q ? `%${q.q}%` : undefined;
+  return and(
+    q.kind ? eq(bins.kind, q.kind) : undefined,
+    q.low ? lte(bins.onHand, bins.reorderPoint) : undefined,
+    q.diameter32 ? eq(bins.diameter32, q.diameter32) : undefined,
+    q.grip16 ? eq(bins.grip16, q.grip16) : undefined,
+    q.material ? eq(bins.material, q.material) : undefined,
+    q.location ? eq(bins.location, q.location) : undefined,
+    text
+      ? or(like(bins.code, text), like(bins.name, text), like(bins.location, text), like(bins.supplier, text), like(bins.supplierPart, text), like(bins.material, text), like(bins.notes, text))
+      : undefined,
+  );
+}
+
+export function listBins(db: Executor, q: BinListQuery): { rows: BinRow[]; total: number } {
+  const where = listFilter(q);
+  const total = db.select({ n: count() }).from(bins).where(where).get()?.n ?? 0;
+  const rows = db
+    .select()
+    .from(bins)
+    .where(where)
+    .orderBy(asc(bins.code))
+    .limit(q.pageSize)
+    .offset((q.page - 1) * q.pageSize)
+    .all();
+  return { rows, total };
+}
+
+/** Bins at or below their reorder point. */
+export function listLowBins(db: Executor): BinRow[] {
+  return db.select().from(bins).where(lte(bins.onHand, bins.reorderPoint)).orderBy(asc(bins.supplier), asc(bins.code)).all();
+}
+
+/** When each bin was last counted. */
+export function lastCountedAt(db: Executor, binIds: readonly number[]): Map<number, Date> {
+  if (binIds.length === 0) return new Map();
+  const rows = db
+    .select({ binId: stockMovements.binId, at: max(stockMovements.at) })
+    .from(stockMovements)
+    .where(and(eq(stockMovements.kind, 'count'), sql`${stockMovements.binId} in ${binIds}`))
+    .groupBy(stockMovements.binId)
+    .all();
+  return new Map(rows.flatMap((r) => (r.at ? [[r.binId, r.at] as const] : [])));
+}
+
+/** Other bins holding exactly the same thing (kind, spec and, for non-rivets, name): where stock may move. */
+export function sameSpecBins(db: Executor, bin: BinRow): BinRow[] {
+  const same = <T>(column: SQLiteColumn, value: T | null) =>
+    value === null ? sql`${column} is null` : sql`${column} = ${value}`;
+  return db
+    .select()
+    .from(bins)
+    .where(
+      and(
+        ne(bins.id, bin.id),
+        eq(bins.kind, bin.kind),
+        same(bins.head, bin.head),
+        same(bins.material, bin.material),
+        same(bins.stemMaterial, bin.stemMaterial),
+        same(bins.diameter32, bin.diameter32),
+        same(bins.grip16, bin.grip16),
+        same(bins.length16, bin.length16),
+        same(bins.drillSize, bin.drillSize),
+        bin.diameter32 === null ? sql`lower(${bins.name}) = lower(${bin.name})` : undefined,
+      ),
+    )
+    .orderBy(asc(bins.code))
+    .all();
+}

@@ -1,0 +1,102 @@
+import { Router } from 'express';
+import {
+  binCodeParams,
+  binListQuerySchema,
+  countBodySchema,
+  createBinBodySchema,
+  drawBodySchema,
+  ledgerQuerySchema,
+  moveBodySchema,
+  movementParams,
+  receiveBodySchema,
+  returnUnusedBodySchema,
+  reverseBodySchema,
+  updateBinBodySchema,
+  writeOffBodySchema,
+} from '@shared/schemas/bins';
+import { idParam } from '@shared/schemas/fields';
+import { z } from 'zod';
+import { requireRole, requireUser } from '../../middleware/auth';
+import { parseInput } from '../../lib/validate';
+import { createBin, editBin, getBinForYou, listBinPage, restockList } from './bins.service';
+import { count, draw, ledgerFor, move, receive, returnUnused, reverse, writeOff } from './ledger.service';
+import { readSlip, receiveSlipUpload, storeSlip } from './slips.service';
+
+const DAY_MS = 24 * 60 * 60 * 1000;
+const dayStart = (day: string) => new Date(`${day}T00:00:00Z`);
+
+/** /api/bins: the bins, their ledger, and the movements members and the quartermaster make by scan. */
+export function binsRouter() {
+  const router = Router();
+  const quartermaster = requireRole('quartermaster');
+  const code = (params: unknown) => parseInput(binCodeParams, params, 'path').code;
+  router.use(requireRole('member'));
+
+  router.get('/', (req, res) => {
+    res.json(listBinPage(req.ctx, parseInput(binListQuerySchema, req.query, 'query')));
+  });
+
+  router.post('/', quartermaster, (req, res) => {
+    res.status(201).json(createBin(req.ctx, requireUser(req), parseInput(createBinBodySchema, req.body)));
+  });
+
+  router.get('/restock', quartermaster, (req, res) => {
+    res.json({ data: restockList(req.ctx) });
+  });
+
+  router.post('/slips', quartermaster, receiveSlipUpload, async (req, res) => {
+    res.status(201).json(await storeSlip(req.ctx, requireUser(req), req.file!));
+  });
+
+  router.get('/slips/:id', quartermaster, (req, res) => {
+    const slip = readSlip(req.ctx, parseInput(z.object({ id: idParam }), req.params, 'path').id);
+    res.set('Cache-Control', 'private, max-age=31536000, immutable').type(slip.contentType);
+    res.setHeader('Content-Disposition', `inline; filename="${slip.filename}"`);
+    res.send(slip.bytes);
+  });
+
+  router.get('/:code', (req, res) => {
+    res.json(getBinForYou(req.ctx, requireUser(req), code(req.params)));
+  });
+
+  router.patch('/:code', quartermaster, (req, res) => {
+    res.json(editBin(req.ctx, code(req.params), parseInput(updateBinBodySchema, req.body)));
+  });
+
+  router.get('/:code/ledger', (req, res) => {
+    const q = parseInput(ledgerQuerySchema, req.query, 'query');
+    const to = q.to ? new Date(dayStart(q.to).getTime() + DAY_MS) : undefined;
+    res.json({ data: ledgerFor(req.ctx, code(req.params), q.from ? dayStart(q.from) : undefined, to, q.limit) });
+  });
+
+  router.post('/:code/draw', (req, res) => {
+    res.status(201).json(draw(req.ctx, requireUser(req), code(req.params), parseInput(drawBodySchema, req.body)));
+  });
+
+  router.post('/:code/return', (req, res) => {
+    res.status(201).json(returnUnused(req.ctx, requireUser(req), code(req.params), parseInput(returnUnusedBodySchema, req.body)));
+  });
+
+  router.post('/:code/receive', quartermaster, (req, res) => {
+    res.status(201).json(receive(req.ctx, requireUser(req), code(req.params), parseInput(receiveBodySchema, req.body)));
+  });
+
+  router.post('/:code/count', quartermaster, (req, res) => {
+    res.status(201).json(count(req.ctx, requireUser(req), code(req.params), parseInput(countBodySchema, req.body)));
+  });
+
+  router.post('/:code/move', quartermaster, (req, res) => {
+    res.status(201).json(move(req.ctx, requireUser(req), code(req.params), parseInput(moveBodySchema, req.body)));
+  });
+
+  router.post('/:code/write-off', quartermaster, (req, res) => {
+    res.status(201).json(writeOff(req.ctx, requireUser(req), code(req.params), parseInput(writeOffBodySchema, req.body)));
+  });
+
+  router.post('/:code/ledger/:id/reverse', quartermaster, (req, res) => {
+    const { code: binCode, id } = parseInput(movementParams, req.params, 'path');
+    res.status(201).json(reverse(req.ctx, requireUser(req), binCode, id, parseInput(reverseBodySchema, req.body)));
+  });
+
+  return router;
+}

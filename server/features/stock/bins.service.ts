@@ -1,0 +1,93 @@
+import type { BinForYou, BinList, BinListQuery, CreateBinInput, RestockItem, UpdateBinBody, Bin, BinAction } from '@shared/schemas/bins';
+import { hasRole } from '@shared/roles';
+import { z } from 'zod';
+import { binKindRules } from '@shared/schemas/bins';
+import type { ServiceContext } from '../../context';
+import type { BinRow } from '../../db/schema/stock';
+import type { UserRow } from '../../db/schema/users';
+import { HttpError } from '../../lib/http-error';
+import { parseInput } from '../../lib/validate';
+import { orderQuantity, toBinDto } from './bin-dto';
+import { findBinByCode, insertBin, lastCountedAt, listBins, listLowBins, nextBinCode, sameSpecBins, updateBin, type NewBinRow } from './bins.repo';
+import { binOrThrow } from './ledger.service';
+import { insertMovement, netDrawnBy } from './ledger.repo';
+import { dollarsToE4, valueCents } from './money';
+
+function withCounts(ctx: ServiceContext, rows: BinRow[]): Bin[] {
+  const counted = lastCountedAt(ctx.db, rows.map((r) => r.id));
+  return rows.map((r) => toBinDto(r, counted.get(r.id)));
+}
+
+export function listBinPage(ctx: ServiceContext, query: BinListQuery): BinList {
+  const { rows, total } = listBins(ctx.db, query);
+  return { data: withCounts(ctx, rows), meta: { total, page: query.page, pageSize: query.pageSize } };
+}
+
+export function getBin(ctx: ServiceContext, code: string): Bin {
+  return withCounts(ctx, [binOrThrow(ctx.db, code)])[0]!;
+}
+
+export function getBinForYou(ctx: ServiceContext, user: UserRow, code: string): BinForYou {
+  const bin = binOrThrow(ctx.db, code);
+  const yourNetDrawn = netDrawnBy(ctx.db, bin.id, user.id);
+  const quartermaster = hasRole(user.role, 'quartermaster');
+  const actions: BinAction[] = [];
+  if (bin.onHand > 0) actions.push('draw');
+  if (yourNetDrawn > 0) actions.push('return_unused');
+  if (quartermaster) actions.push('receive', 'count');
+  const others = quartermaster ? sameSpecBins(ctx.db, bin) : [];
+  if (quartermaster && bin.onHand > 0 && others.length > 0) actions.push('move');
+  if (quartermaster && bin.onHand > 0) actions.push('write_off');
+  return {
+    ...withCounts(ctx, [bin])[0]!,
+    forYou: { actions, yourNetDrawn, sameSpecBins: others.map((b) => ({ code: b.code, location: b.location, onHand: b.onHand })) },
+  };
+}
+
+function rowValues(input: Partial<CreateBinInput>): Partial<NewBinRow> {
+  const { unitCost, ...rest } = input;
+  const values: Partial<NewBinRow> & { code?: string; initialQuantity?: number } = { ...rest };
+  delete values.initialQuantity;
+  if (unitCost !== undefined) values.unitCostE4 = dollarsToE4(unitCost);
+  return values;
+}
+
+const codeTaken = (code: string) =>
+  new HttpError(409, 'BIN_CODE_TAKEN', `The code ${code} is already on another bin. Leave the code empty to get the next free one.`, [{ path: 'code', message: `${code} is taken.` }]);
+
+/** A new bin; opening stock becomes its first ledger entry, so on hand is the ledger's sum from the start. */
+export function createBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): Bin {
+  const at = ctx.now();
+  const row = ctx.db.$client
+    .transaction(() => {
+      const code = input.code ?? nextBinCode(ctx.db);
+      if (findBinByCode(ctx.db, code)) throw codeTaken(code);
+      const bin = insertBin(ctx.db, { ...(rowValues(input) as NewBinRow), code, name: input.name, createdAt: at, updatedAt: at, onHand: input.initialQuantity });
+      if (input.initialQuantity > 0) {
+        insertMovement(ctx.db, { binId: bin.id, kind: 'receive', quantity: input.initialQuantity, balanceAfter: input.initialQuantity, unitCostE4: bin.unitCostE4, at, actorId: actor.id, note: 'Opening stock' });
+      }
+      return bin;
+    })
+    .immediate();
+  return getBin(ctx, row.code);
+}
+
+/** Changes the fields sent; on hand changes only through the ledger. The result must still be a valid bin of its kind. */
+export function editBin(ctx: ServiceContext, code: string, change: UpdateBinBody): Bin {
+  const bin = binOrThrow(ctx.db, code);
+  const values = rowValues(change);
+  parseInput(wholeBin, { ...bin, ...values });
+  updateBin(ctx.db, bin.id, { ...values, updatedAt: ctx.now() });
+  return getBin(ctx, code);
+}
+
+/** An edited bin must still be a valid bin of its kind (a rivet keeps its spec, a screw its name). */
+const wholeBin = z.looseObject({}).superRefine((b, ctx) => binKindRules(b, ctx));
+
+/** The quartermaster's Restock list: low bins with whole packs to order, by supplier. */
+export function restockList(ctx: ServiceContext): RestockItem[] {
+  return withCounts(ctx, listLowBins(ctx.db)).map((bin) => {
+    const quantity = orderQuantity(bin);
+    return { ...bin, toOrder: quantity, packsToOrder: quantity / bin.packSize, orderCostCents: valueCents(quantity, dollarsToE4(bin.unitCost)) };
+  });
+}

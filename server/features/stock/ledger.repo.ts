@@ -1,0 +1,93 @@
+import { and, desc, eq, gte, lt, sql } from 'drizzle-orm';
+import { alias } from 'drizzle-orm/sqlite-core';
+import type { Executor } from '../../db/client';
+import { bins, stockMovements, type MovementRow } from '../../db/schema/stock';
+import { users } from '../../db/schema/users';
+
+export type NewMovementRow = typeof stockMovements.$inferInsert;
+
+export function insertMovement(db: Executor, values: NewMovementRow): MovementRow {
+  return db.insert(stockMovements).values(values).returning().get();
+}
+
+export function findMovement(db: Executor, id: number): MovementRow | undefined {
+  return db.select().from(stockMovements).where(eq(stockMovements.id, id)).get();
+}
+
+/** The inward leg of a transfer, found from its outward leg. */
+export function findPairedWith(db: Executor, id: number): MovementRow | undefined {
+  return db.select().from(stockMovements).where(eq(stockMovements.pairedId, id)).get();
+}
+
+export function findReversalOf(db: Executor, id: number): MovementRow | undefined {
+  return db.select().from(stockMovements).where(eq(stockMovements.reversesId, id)).get();
+}
+
+/** Sets the bin's balance; the caller has already checked it stays at or above zero. */
+export function setOnHand(db: Executor, binId: number, onHand: number, at: Date): void {
+  db.update(bins).set({ onHand, updatedAt: at }).where(eq(bins.id, binId)).run();
+}
+
+/** The sum of a bin's movements: what on hand must always equal. */
+export function ledgerSum(db: Executor, binId: number): number {
+  return db.select({ n: sql<number>`coalesce(sum(${stockMovements.quantity}), 0)` }).from(stockMovements).where(eq(stockMovements.binId, binId)).get()?.n ?? 0;
+}
+
+/**
+ * What a member has drawn from a bin, less what they returned and less reversals of either:
+ * the most they may return to it.
+ */
+export function netDrawnBy(db: Executor, binId: number, memberId: number): number {
+  const row = db
+    .select({ n: sql<number>`coalesce(sum(-${stockMovements.quantity}), 0)` })
+    .from(stockMovements)
+    .where(and(eq(stockMovements.binId, binId), eq(stockMovements.memberId, memberId)))
+    .get();
+  return Math.max(0, row?.n ?? 0);
+}
+
+const actor = alias(users, 'actor');
+const member = alias(users, 'member');
+/** The entry that reverses this one, if any. */
+const reversedById = sql<number | null>`(select r.id from stock_movements r where r.reverses_id = ${stockMovements.id})`;
+/** Transfers: the bin on the other side (the inward leg names the outward one). */
+const otherBinCode = sql<string | null>`(select b.code from stock_movements p join bins b on b.id = p.bin_id
+  where ${stockMovements.kind} in ('transfer_out', 'transfer_in') and (p.id = ${stockMovements.pairedId} or p.paired_id = ${stockMovements.id}))`;
+
+export interface LedgerFilter {
+  id?: number;
+  binId?: number;
+  from?: Date;
+  to?: Date;
+  limit?: number;
+}
+
+/** Ledger entries with the names around them, newest first. */
+export function listMovements(db: Executor, f: LedgerFilter) {
+  return db
+    .select({
+      m: stockMovements,
+      binCode: bins.code,
+      binKind: bins.kind,
+      actorName: actor.name,
+      memberName: member.name,
+      reversedById,
+      otherBinCode,
+    })
+    .from(stockMovements)
+    .innerJoin(bins, eq(bins.id, stockMovements.binId))
+    .innerJoin(actor, eq(actor.id, stockMovements.actorId))
+    .leftJoin(member, eq(member.id, stockMovements.memberId))
+    .where(
+      and(
+        f.id !== undefined ? eq(stockMovements.id, f.id) : undefined,
+        f.binId !== undefined ? eq(stockMovements.binId, f.binId) : undefined,
+        f.from ? gte(stockMovements.at, f.from) : undefined,
+        f.to ? lt(stockMovements.at, f.to) : undefined,
+      ),
+    )
+    .orderBy(desc(stockMovements.at), desc(stockMovements.id))
+    .limit(f.limit ?? 500)
+    .all();
+}
+export type LedgerRow = ReturnType<typeof listMovements>[number];

@@ -1,0 +1,229 @@
+import type { CountBody, CountResult, DrawBody, MoveBody, Movement, ReceiveBody, ReturnUnusedBody, ReverseBody, WriteOffBody } from '@shared/schemas/bins';
+import type { MovementKind } from '@shared/stock/kinds';
+import type { ServiceContext } from '../../context';
+import type { Executor } from '../../db/client';
+import type { BinRow, MovementRow } from '../../db/schema/stock';
+import type { UserRow } from '../../db/schema/users';
+import { HttpError } from '../../lib/http-error';
+import { isUniqueViolation } from '../../lib/sqlite-errors';
+import { findBinByCode, findBinById, sameSpecBins, updateBin } from './bins.repo';
+import { findMovement, findPairedWith, findReversalOf, insertMovement, listMovements, netDrawnBy, setOnHand, type LedgerRow } from './ledger.repo';
+import { dollarsToE4, e4ToDollars, valueCents } from './money';
+import { slipExists } from './slips.repo';
+
+export function binOrThrow(db: Executor, code: string): BinRow {
+  const bin = findBinByCode(db, code);
+  if (!bin) throw new HttpError(404, 'BIN_NOT_FOUND', `No bin has the code ${code}. Check the label, or type the code.`);
+  return bin;
+}
+
+const insufficient = (bin: BinRow, wanted: number, what: string) =>
+  new HttpError(409, 'INSUFFICIENT_STOCK', `Cannot ${what} ${wanted} from ${bin.code}: only ${bin.onHand} on hand.`);
+
+interface Entry {
+  kind: MovementKind;
+  quantity: number;
+  actor: UserRow;
+  at: Date;
+  unitCostE4?: number;
+  memberId?: number | null;
+  assemblyId?: number | null;
+  note?: string;
+  reversesId?: number;
+  pairedId?: number;
+  slipId?: number;
+}
+
+/**
+ * The one way stock changes: appends an entry and moves the bin's balance with it, in the caller's
+ * transaction. A change that would leave the bin below zero is refused before anything is written.
+ */
+function post(db: Executor, bin: BinRow, e: Entry, refusal: string): MovementRow {
+  const balanceAfter = bin.onHand + e.quantity;
+  if (balanceAfter < 0) throw insufficient(bin, -e.quantity, refusal);
+  const row = insertMovement(db, {
+    binId: bin.id,
+    kind: e.kind,
+    quantity: e.quantity,
+    balanceAfter,
+    unitCostE4: e.unitCostE4 ?? bin.unitCostE4,
+    at: e.at,
+    actorId: e.actor.id,
+    memberId: e.memberId ?? null,
+    assemblyId: e.assemblyId ?? null,
+    note: e.note ?? '',
+    reversesId: e.reversesId ?? null,
+    pairedId: e.pairedId ?? null,
+    slipId: e.slipId ?? null,
+  });
+  setOnHand(db, bin.id, balanceAfter, e.at);
+  bin.onHand = balanceAfter;
+  return row;
+}
+
+/** Runs a ledger change as one immediate transaction: the balance read and the write cannot interleave. */
+function inTransaction<T>(ctx: ServiceContext, work: () => T): T {
+  return ctx.db.$client.transaction(work).immediate();
+}
+
+export function movementDto(r: LedgerRow): Movement {
+  const m = r.m;
+  return {
+    id: m.id,
+    binCode: r.binCode,
+    at: m.at.toISOString(),
+    kind: m.kind,
+    quantity: m.quantity,
+    balanceAfter: m.balanceAfter,
+    unitCost: e4ToDollars(m.unitCostE4),
+    valueCents: valueCents(m.quantity, m.unitCostE4),
+    actor: { id: m.actorId, name: r.actorName },
+    member: m.memberId !== null ? { id: m.memberId, name: r.memberName ?? '' } : null,
+    assemblyId: m.assemblyId,
+    note: m.note,
+    reversesId: m.reversesId,
+    reversedById: r.reversedById,
+    otherBinCode: r.otherBinCode,
+    slipId: m.slipId,
+  };
+}
+
+function loadMovement(ctx: ServiceContext, id: number): Movement {
+  const row = listMovements(ctx.db, { id })[0];
+  if (!row) throw new HttpError(404, 'ENTRY_NOT_FOUND', `There is no ledger entry ${id}.`);
+  return movementDto(row);
+}
+
+/** A member takes stock for their work; it goes on their tab at today's unit cost. */
+export function draw(ctx: ServiceContext, actor: UserRow, code: string, body: DrawBody): Movement {
+  const id = inTransaction(ctx, () => {
+    const bin = binOrThrow(ctx.db, code);
+    return post(ctx.db, bin, { kind: 'draw', quantity: -body.quantity, actor, at: ctx.now(), memberId: actor.id, assemblyId: body.assemblyId, note: body.note }, 'draw').id;
+  });
+  return loadMovement(ctx, id);
+}
+
+/** Unused stock goes back in the bin and off the member's tab; at most what they drew from it. */
+export function returnUnused(ctx: ServiceContext, actor: UserRow, code: string, body: ReturnUnusedBody): Movement {
+  const id = inTransaction(ctx, () => {
+    const bin = binOrThrow(ctx.db, code);
+    const drawn = netDrawnBy(ctx.db, bin.id, actor.id);
+    if (body.quantity > drawn) {
+      throw new HttpError(409, 'RETURN_EXCEEDS_DRAWN', `You can return at most ${drawn} to ${bin.code}: that is what you drew from it and have not returned.`);
+    }
+    return post(ctx.db, bin, { kind: 'return_unused', quantity: body.quantity, actor, at: ctx.now(), memberId: actor.id, assemblyId: body.assemblyId, note: body.note }, 'return').id;
+  });
+  return loadMovement(ctx, id);
+}
+
+/** The quartermaster books an order in; a new unit cost becomes the bin's cost from now on. */
+export function receive(ctx: ServiceContext, actor: UserRow, code: string, body: ReceiveBody): Movement {
+  const id = inTransaction(ctx, () => {
+    const bin = binOrThrow(ctx.db, code);
+    if (body.slipId !== undefined && !slipExists(ctx.db, body.slipId)) {
+      throw new HttpError(400, 'SLIP_NOT_FOUND', `There is no packing slip ${body.slipId}. Upload it again.`, [{ path: 'slipId', message: 'Upload the packing slip again.' }]);
+    }
+    const at = ctx.now();
+    const unitCostE4 = body.unitCost !== undefined ? dollarsToE4(body.unitCost) : bin.unitCostE4;
+    if (unitCostE4 !== bin.unitCostE4) Object.assign(bin, updateBin(ctx.db, bin.id, { unitCostE4, updatedAt: at }));
+    return post(ctx.db, bin, { kind: 'receive', quantity: body.quantity, actor, at, unitCostE4, note: body.note, slipId: body.slipId }, 'receive').id;
+  });
+  return loadMovement(ctx, id);
+}
+
+/** A count sets the bin to what is really there; the entry records the adjustment (possibly 0). */
+export function count(ctx: ServiceContext, actor: UserRow, code: string, body: CountBody): CountResult {
+  const result = inTransaction(ctx, () => {
+    const bin = binOrThrow(ctx.db, code);
+    const before = bin.onHand;
+    const variance = body.counted - before;
+    const row = post(ctx.db, bin, { kind: 'count', quantity: variance, actor, at: ctx.now(), note: body.note }, 'count');
+    return { id: row.id, before, variance, unitCostE4: row.unitCostE4 };
+  });
+  return {
+    ...loadMovement(ctx, result.id),
+    counted: body.counted,
+    onHandBefore: result.before,
+    variance: result.variance,
+    varianceValueCents: valueCents(result.variance, result.unitCostE4),
+  };
+}
+
+/** Moves stock to another bin of the same spec: one entry out, one in, at the source's unit cost. */
+export function move(ctx: ServiceContext, actor: UserRow, code: string, body: MoveBody): Movement {
+  const id = inTransaction(ctx, () => {
+    const from = binOrThrow(ctx.db, code);
+    if (body.to === from.code) throw new HttpError(400, 'SAME_BIN', 'Choose another bin to move the stock to.', [{ path: 'to', message: 'Choose another bin.' }]);
+    const to = binOrThrow(ctx.db, body.to);
+    if (!sameSpecBins(ctx.db, from).some((b) => b.id === to.id)) {
+      throw new HttpError(409, 'NOT_SAME_SPEC', `${to.code} does not hold the same thing as ${from.code}: stock moves only between bins of the same spec.`);
+    }
+    const at = ctx.now();
+    const note = body.note ?? '';
+    const out = post(ctx.db, from, { kind: 'transfer_out', quantity: -body.quantity, actor, at, note }, 'move');
+    post(ctx.db, to, { kind: 'transfer_in', quantity: body.quantity, actor, at, note, unitCostE4: from.unitCostE4, pairedId: out.id }, 'move');
+    return out.id;
+  });
+  return loadMovement(ctx, id);
+}
+
+/** Damaged, spilt, out of date: stock leaves the bin with a reason. */
+export function writeOff(ctx: ServiceContext, actor: UserRow, code: string, body: WriteOffBody): Movement {
+  const id = inTransaction(ctx, () => {
+    const bin = binOrThrow(ctx.db, code);
+    return post(ctx.db, bin, { kind: 'write_off', quantity: -body.quantity, actor, at: ctx.now(), note: body.note }, 'write off').id;
+  });
+  return loadMovement(ctx, id);
+}
+
+/**
+ * Undoes an entry by appending its opposite, which names it; an entry is reversed at most once,
+ * and a reversal is itself not reversed (enter the movement again instead). A transfer is
+ * reversed on both bins together.
+ */
+export function reverse(ctx: ServiceContext, actor: UserRow, code: string, entryId: number, body: ReverseBody): Movement {
+  const id = inTransaction(ctx, () => {
+    const bin = binOrThrow(ctx.db, code);
+    const entry = findMovement(ctx.db, entryId);
+    if (!entry || entry.binId !== bin.id) throw new HttpError(404, 'ENTRY_NOT_FOUND', `${bin.code} has no ledger entry ${entryId}.`);
+    if (entry.kind === 'reversal') throw new HttpError(409, 'CANNOT_REVERSE_REVERSAL', 'This entry is itself a reversal. Enter the movement again instead.');
+    if (entry.kind === 'count' && entry.quantity === 0) throw new HttpError(409, 'NOTHING_TO_REVERSE', 'This count changed nothing, so there is nothing to reverse.');
+    const at = ctx.now();
+    const undo = (target: MovementRow, targetBin: BinRow) => {
+      if (findReversalOf(ctx.db, target.id)) throw new HttpError(409, 'ALREADY_REVERSED', `Entry ${target.id} has already been reversed.`);
+      return post(
+        ctx.db,
+        targetBin,
+        { kind: 'reversal', quantity: -target.quantity, actor, at, unitCostE4: target.unitCostE4, memberId: target.memberId, assemblyId: target.assemblyId, note: body.note, reversesId: target.id },
+        'reverse',
+      );
+    };
+    try {
+      const first = undo(entry, bin);
+      const partner = pairedEntry(ctx.db, entry);
+      if (partner) undo(partner, binById(ctx.db, partner.binId));
+      return first.id;
+    } catch (err) {
+      if (isUniqueViolation(err)) throw new HttpError(409, 'ALREADY_REVERSED', `Entry ${entryId} has already been reversed.`);
+      throw err;
+    }
+  });
+  return loadMovement(ctx, id);
+}
+
+function pairedEntry(db: Executor, entry: MovementRow): MovementRow | undefined {
+  if (entry.kind === 'transfer_in' && entry.pairedId !== null) return findMovement(db, entry.pairedId);
+  if (entry.kind === 'transfer_out') return findPairedWith(db, entry.id);
+  return undefined;
+}
+
+function binById(db: Executor, id: number): BinRow {
+  const bin = findBinById(db, id);
+  if (!bin) throw new HttpError(404, 'BIN_NOT_FOUND', `Bin ${id} no longer exists.`);
+  return bin;
+}
+
+export function ledgerFor(ctx: ServiceContext, code: string, from?: Date, to?: Date, limit?: number): Movement[] {
+  const bin = binOrThrow(ctx.db, code);
+  return listMovements(ctx.db, { binId: bin.id, from, to, limit }).map(movementDto);
+}

@@ -1,0 +1,321 @@
+import { z } from 'zod';
+import { findDrill } from '../drills/drill-sizes';
+import { blindGripRange } from '../stock/fasteners';
+import {
+  BIN_CODE_PATTERN,
+  BIN_KINDS,
+  isBlindKind,
+  isRivetKind,
+  MOVEMENT_KINDS,
+  RIVET_HEADS,
+  RIVET_MATERIALS,
+  STEM_MATERIALS,
+  type BinKind,
+} from '../stock/kinds';
+import { idParam } from './fields';
+
+export const binCodeField = z
+  .string({ error: 'Enter the code on the bin label, like B-0107.' })
+  .trim()
+  .toUpperCase()
+  .regex(BIN_CODE_PATTERN, { error: 'A bin code looks like B-0107: B, a dash and four to six digits.' });
+
+export const binCodeParams = z.object({ code: binCodeField });
+export const movementParams = z.object({ code: binCodeField, id: idParam });
+
+/** Money per unit in dollars, to a hundredth of a cent (rivets cost fractions of a cent). */
+export const unitCostField = z
+  .number({ error: 'Enter the unit cost in dollars, like 0.085.' })
+  .min(0, { error: 'A unit cost cannot be negative.' })
+  .max(100_000, { error: 'That unit cost is too large.' })
+  .refine((v) => Math.abs(Math.round(v * 10_000) - v * 10_000) < 1e-6, { error: 'Give the unit cost to at most 4 decimals (a hundredth of a cent).' });
+
+const quantityField = (what: string) =>
+  z
+    .number({ error: `Enter how many to ${what}.` })
+    .int({ error: `Enter a whole number to ${what}.` })
+    .positive({ error: `Enter how many to ${what}: at least 1.` })
+    .max(1_000_000, { error: 'That is more than a bin can hold.' });
+
+const noteField = z.string().trim().max(500, { error: 'Keep the note under 500 characters.' });
+const requiredNote = (why: string) => z.string({ error: why }).trim().min(1, { error: why }).max(500, { error: 'Keep the note under 500 characters.' });
+
+const drillSizeField = z
+  .string()
+  .trim()
+  .refine((s) => findDrill(s) !== undefined, { error: 'Use a drill size from the table: #1 to #80, A to Z, or a fraction like 1/8.' })
+  .transform((s) => findDrill(s)!.name);
+
+const binFields = {
+  kind: z.enum(BIN_KINDS, { error: 'Choose what the bin holds from the list.' }),
+  name: z.string().trim().max(120, { error: 'Keep the name under 120 characters.' }),
+  unit: z.string().trim().min(1, { error: 'Say what one unit is, like "each" or "tube".' }).max(20),
+  packSize: z.number({ error: 'Enter the pack size.' }).int({ error: 'A pack holds a whole number of units.' }).min(1, { error: 'A pack holds at least 1.' }).max(1_000_000),
+  unitCost: unitCostField,
+  supplier: z.string().trim().max(80),
+  supplierPart: z.string().trim().max(60),
+  leadTimeDays: z.number({ error: 'Enter the lead time in days.' }).int({ error: 'Enter the lead time in whole days.' }).min(0).max(365, { error: 'A lead time is at most 365 days.' }),
+  reorderPoint: z.number({ error: 'Enter the reorder point.' }).int({ error: 'The reorder point is a whole number.' }).min(0, { error: 'The reorder point cannot be negative.' }).max(1_000_000),
+  reorderQty: z.number({ error: 'Enter the reorder quantity.' }).int({ error: 'The reorder quantity is a whole number.' }).min(0, { error: 'The reorder quantity cannot be negative.' }).max(1_000_000),
+  location: z.string().trim().max(80, { error: 'Keep the location under 80 characters.' }),
+  notes: z.string().max(2000),
+  head: z.enum(RIVET_HEADS, { error: 'Choose the head: dome, countersunk or flange.' }).nullable(),
+  material: z.enum(RIVET_MATERIALS, { error: `Choose the material: ${RIVET_MATERIALS.join(', ')}.` }).nullable(),
+  stemMaterial: z.enum(STEM_MATERIALS, { error: `Choose the stem: ${STEM_MATERIALS.join(', ')}.` }).nullable(),
+  diameter32: z.number({ error: 'Enter the diameter in 32nds of an inch, like 4 for 1/8 in.' }).int({ error: 'The diameter dash is a whole number of 32nds.' }).min(1).max(16, { error: 'The diameter dash is at most 16 (1/2 in).' }).nullable(),
+  grip16: z.number({ error: 'Enter the grip dash, like 2.' }).int({ error: 'The grip dash is a whole number.' }).refine((d) => blindGripRange(d) !== undefined, { error: 'Use a grip dash from the table: 1 to 6, or 8.' }).nullable(),
+  length16: z
+    .number({ error: 'Enter the length in 16ths of an inch, like 6 for 3/8 in.' })
+    .min(1, { error: 'A rivet is at least 1/16 in long.' })
+    .max(64)
+    .refine((v) => Number.isInteger(v * 2), { error: 'The length dash is in 16ths; half lengths are written 3.5.' })
+    .nullable(),
+  drillSize: drillSizeField.nullable(),
+  /** Blind rivets: the hole drill when the maker's differs from the usual one. */
+  holeDrill: drillSizeField.nullable(),
+};
+
+const binDefaults = z.object({
+  ...binFields,
+  name: binFields.name.default(''),
+  unit: binFields.unit.default('each'),
+  packSize: binFields.packSize.default(1),
+  unitCost: binFields.unitCost.default(0),
+  supplier: binFields.supplier.default(''),
+  supplierPart: binFields.supplierPart.default(''),
+  leadTimeDays: binFields.leadTimeDays.default(14),
+  reorderPoint: binFields.reorderPoint.default(0),
+  reorderQty: binFields.reorderQty.default(0),
+  location: binFields.location.default(''),
+  notes: binFields.notes.default(''),
+  head: binFields.head.default(null),
+  material: binFields.material.default(null),
+  stemMaterial: binFields.stemMaterial.default(null),
+  diameter32: binFields.diameter32.default(null),
+  grip16: binFields.grip16.default(null),
+  length16: binFields.length16.default(null),
+  drillSize: binFields.drillSize.default(null),
+  holeDrill: binFields.holeDrill.default(null),
+});
+type BinFieldValues = z.output<typeof binDefaults>;
+
+/** What each kind of bin needs: rivets their spec, drill bits their size, everything else a name. */
+export function binKindRules(b: Partial<BinFieldValues> & { kind?: BinKind }, ctx: z.RefinementCtx): void {
+  const issue = (path: string, message: string) => ctx.addIssue({ code: 'custom', path: [path], message });
+  if (!b.kind) return;
+  if (isRivetKind(b.kind)) {
+    if (!b.head) issue('head', 'A rivet bin needs its head: dome, countersunk or flange.');
+    if (!b.material) issue('material', 'A rivet bin needs its body material, like 5056 or 2117-T4.');
+    if (!b.diameter32) issue('diameter32', 'A rivet bin needs its diameter in 32nds of an inch, like 4 for 1/8 in.');
+    if (isBlindKind(b.kind)) {
+      if (!b.grip16) issue('grip16', 'A blind rivet bin needs its grip dash, like 2 for 0.063–0.125 in.');
+      if (b.length16 !== null && b.length16 !== undefined) issue('length16', 'Blind rivets are sized by grip, not length: leave the length empty.');
+    } else {
+      if (!b.length16) issue('length16', 'A solid rivet bin needs its length in 16ths of an inch, like 6 for 3/8 in.');
+      if (b.grip16 !== null && b.grip16 !== undefined) issue('grip16', 'Solid rivets are sized by length, not grip dash: leave the grip empty.');
+      if (b.stemMaterial) issue('stemMaterial', 'Solid rivets have no stem.');
+    }
+  } else {
+    if (!b.name) issue('name', 'Give the bin a name, like "Screw #8-32 × 1/2 pan head".');
+    for (const field of ['head', 'material', 'stemMaterial', 'diameter32', 'grip16', 'length16'] as const) {
+      if (b[field] !== null && b[field] !== undefined) issue(field, 'Only rivet bins carry a fastener spec; leave it empty or choose a rivet kind.');
+    }
+  }
+  if (b.kind === 'drill_bit' && !b.drillSize) issue('drillSize', 'A drill bit bin needs its size, like #40.');
+}
+
+export const createBinBodySchema = binDefaults
+  .extend({
+    code: binCodeField.optional(),
+    /** Opening stock, written to the ledger as the bin's first receipt. */
+    initialQuantity: z.number().int().min(0).max(1_000_000).default(0),
+  })
+  .strict()
+  .superRefine(binKindRules);
+export type CreateBinBody = z.input<typeof createBinBodySchema>;
+export type CreateBinInput = z.output<typeof createBinBodySchema>;
+
+export const updateBinBodySchema = z
+  .object(binFields)
+  .partial()
+  .strict()
+  .refine((b) => Object.keys(b).length > 0, { error: 'Send at least one field to change.' });
+export type UpdateBinBody = z.infer<typeof updateBinBodySchema>;
+
+const booleanQuery = z
+  .enum(['true', 'false', '1', '0'], { error: 'low is true or false.' })
+  .transform((v) => v === 'true' || v === '1');
+
+export const binListQuerySchema = z.object({
+  q: z.string().trim().max(80).optional(),
+  kind: z.enum(BIN_KINDS, { error: `kind is one of ${BIN_KINDS.join(', ')}.` }).optional(),
+  low: booleanQuery.optional(),
+  diameter32: z.coerce.number().int().min(1).max(16).optional(),
+  grip16: z.coerce.number().int().min(1).max(16).optional(),
+  material: z.string().trim().max(40).optional(),
+  location: z.string().trim().max(80).optional(),
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(500).default(200),
+});
+export type BinListQuery = z.infer<typeof binListQuerySchema>;
+
+// ---- Movements (requests) ----
+
+export const drawBodySchema = z
+  .object({
+    quantity: quantityField('draw'),
+    assemblyId: z.number().int().positive().nullable().optional(),
+    note: noteField.optional(),
+  })
+  .strict();
+export type DrawBody = z.infer<typeof drawBodySchema>;
+
+export const returnUnusedBodySchema = drawBodySchema.extend({ quantity: quantityField('return') });
+export type ReturnUnusedBody = z.infer<typeof returnUnusedBodySchema>;
+
+export const receiveBodySchema = z
+  .object({
+    quantity: quantityField('receive'),
+    unitCost: unitCostField.optional(),
+    note: noteField.optional(),
+    /** A packing slip uploaded first to POST /api/bins/slips. */
+    slipId: z.number().int().positive().optional(),
+  })
+  .strict();
+export type ReceiveBody = z.infer<typeof receiveBodySchema>;
+
+export const countBodySchema = z
+  .object({
+    counted: z
+      .number({ error: 'Enter how many you counted.' })
+      .int({ error: 'Enter a whole number counted.' })
+      .min(0, { error: 'A count cannot be below 0.' })
+      .max(10_000_000),
+    note: noteField.optional(),
+  })
+  .strict();
+export type CountBody = z.infer<typeof countBodySchema>;
+
+export const moveBodySchema = z
+  .object({ to: binCodeField, quantity: quantityField('move'), note: noteField.optional() })
+  .strict();
+export type MoveBody = z.infer<typeof moveBodySchema>;
+
+export const writeOffBodySchema = z
+  .object({ quantity: quantityField('write off'), note: requiredNote('Say why the stock is written off (damaged, lost, out of date).') })
+  .strict();
+export type WriteOffBody = z.infer<typeof writeOffBodySchema>;
+
+export const reverseBodySchema = z.object({ note: requiredNote('Say why this entry is reversed.') }).strict();
+export type ReverseBody = z.infer<typeof reverseBodySchema>;
+
+const isoDay = z.iso.date({ error: 'Use a date like 2026-11-30.' });
+export const ledgerQuerySchema = z.object({
+  from: isoDay.optional(),
+  to: isoDay.optional(),
+  limit: z.coerce.number().int().min(1).max(5000).default(500),
+});
+export type LedgerQuery = z.infer<typeof ledgerQuerySchema>;
+
+// ---- Responses ----
+
+const person = z.object({ id: z.number(), name: z.string() });
+
+export const BIN_ACTIONS = ['draw', 'return_unused', 'receive', 'count', 'move', 'write_off'] as const;
+export type BinAction = (typeof BIN_ACTIONS)[number];
+
+export const binSchema = z.object({
+  id: z.number(),
+  code: z.string(),
+  kind: z.enum(BIN_KINDS),
+  /** The name as typed; rivet bins may leave it empty. */
+  name: z.string(),
+  /** The open-standard number or our readable form for rivets; the name for everything else. */
+  designation: z.string(),
+  /** For a blind rivet: its grip dash range in inches, shown beside the dash. */
+  gripRange: z.object({ min: z.number(), max: z.number() }).nullable(),
+  head: z.enum(RIVET_HEADS).nullable(),
+  material: z.string().nullable(),
+  stemMaterial: z.string().nullable(),
+  diameter32: z.number().nullable(),
+  grip16: z.number().nullable(),
+  length16: z.number().nullable(),
+  drillSize: z.string().nullable(),
+  holeDrill: z.string().nullable(),
+  unit: z.string(),
+  packSize: z.number(),
+  unitCost: z.number(),
+  supplier: z.string(),
+  supplierPart: z.string(),
+  leadTimeDays: z.number(),
+  reorderPoint: z.number(),
+  reorderQty: z.number(),
+  location: z.string(),
+  notes: z.string(),
+  onHand: z.number(),
+  /** On hand at or below the reorder point. */
+  low: z.boolean(),
+  /** What to order when low: the reorder quantity rounded up to whole packs (0 when not low). */
+  toOrder: z.number(),
+  stockValueCents: z.number(),
+  lastCountedAt: z.string().nullable(),
+});
+export type Bin = z.infer<typeof binSchema>;
+
+export const binListSchema = z.object({
+  data: z.array(binSchema),
+  meta: z.object({ total: z.number(), page: z.number(), pageSize: z.number() }),
+});
+export type BinList = z.infer<typeof binListSchema>;
+
+/** A bin as the signed-in person sees it: what they may do, and bins it may move to. */
+export const binForYouSchema = binSchema.extend({
+  forYou: z.object({
+    actions: z.array(z.enum(BIN_ACTIONS)),
+    /** What this person has drawn from the bin, less what they returned: the most they may return. */
+    yourNetDrawn: z.number(),
+    sameSpecBins: z.array(z.object({ code: z.string(), location: z.string(), onHand: z.number() })),
+  }),
+});
+export type BinForYou = z.infer<typeof binForYouSchema>;
+
+export const movementSchema = z.object({
+  id: z.number(),
+  binCode: z.string(),
+  at: z.string(),
+  kind: z.enum(MOVEMENT_KINDS),
+  /** Signed: receipts add, draws take away. */
+  quantity: z.number(),
+  balanceAfter: z.number(),
+  unitCost: z.number(),
+  valueCents: z.number(),
+  actor: person,
+  /** Draws and returns: whose tab it goes on. */
+  member: person.nullable(),
+  assemblyId: z.number().nullable(),
+  note: z.string(),
+  reversesId: z.number().nullable(),
+  reversedById: z.number().nullable(),
+  /** Transfers: the bin on the other side. */
+  otherBinCode: z.string().nullable(),
+  slipId: z.number().nullable(),
+});
+export type Movement = z.infer<typeof movementSchema>;
+
+export const ledgerSchema = z.object({ data: z.array(movementSchema) });
+
+export const countResultSchema = movementSchema.extend({
+  counted: z.number(),
+  onHandBefore: z.number(),
+  /** counted − on hand before: the adjustment made. */
+  variance: z.number(),
+  varianceValueCents: z.number(),
+});
+export type CountResult = z.infer<typeof countResultSchema>;
+
+export const slipSchema = z.object({ id: z.number(), contentType: z.string(), filename: z.string(), size: z.number() });
+export type Slip = z.infer<typeof slipSchema>;
+
+export const restockItemSchema = binSchema.extend({ packsToOrder: z.number(), orderCostCents: z.number() });
+export const restockListSchema = z.object({ data: z.array(restockItemSchema) });
+export type RestockItem = z.infer<typeof restockItemSchema>;

@@ -1,0 +1,66 @@
+/** What a bin holds. The first three are rivets and carry a fastener spec. */
+export const BIN_KINDS = [
+  'blind_structural',
+  'blind_general',
+  'solid_rivet',
+  'screw',
+  'nut',
+  'washer',
+  'drill_bit',
+  'deburring_blade',
+  'sealant_primer',
+  'other',
+] as const;
+export type BinKind = (typeof BIN_KINDS)[number];
+
+export const BIN_KIND_LABELS: Record<BinKind, string> = {
+  blind_structural: 'Blind rivet – structural',
+  blind_general: 'Blind rivet – general purpose',
+  solid_rivet: 'Solid rivet',
+  screw: 'Screw',
+  nut: 'Nut',
+  washer: 'Washer',
+  drill_bit: 'Drill bit',
+  deburring_blade: 'Deburring blade',
+  sealant_primer: 'Sealant or primer',
+  other: 'Other',
+};
+
+export const RIVET_KINDS = ['blind_structural', 'blind_general', 'solid_rivet'] as const satisfies readonly BinKind[];
+export type RivetKind = (typeof RIVET_KINDS)[number];
+export const isRivetKind = (kind: BinKind): kind is RivetKind => (RIVET_KINDS as readonly string[]).includes(kind);
+export const isBlindKind = (kind: BinKind) => kind === 'blind_structural' || kind === 'blind_general';
+
+/** Head styles: dome (universal on solid rivets), 100° countersunk, large flange. */
+export const RIVET_HEADS = ['dome', 'countersunk', 'flange'] as const;
+export type RivetHead = (typeof RIVET_HEADS)[number];
+export const RIVET_HEAD_LABELS: Record<RivetHead, string> = {
+  dome: 'dome',
+  countersunk: '100° countersunk',
+  flange: 'large flange',
+};
+
+/** Body materials and grades as the trade names them. */
+export const RIVET_MATERIALS = ['5056', '2117-T4', '2024-T4', '2017-T4', '1100', 'aluminium', 'monel', 'stainless', 'steel', 'copper'] as const;
+export type RivetMaterial = (typeof RIVET_MATERIALS)[number];
+
+/** Mandrel (stem) materials of blind rivets. */
+export const STEM_MATERIALS = ['steel', 'stainless', 'aluminium'] as const;
+export type StemMaterial = (typeof STEM_MATERIALS)[number];
+
+/** Kinds of ledger entry. A transfer writes one entry on each bin; a reversal names the entry it undoes. */
+export const MOVEMENT_KINDS = ['receive', 'draw', 'return_unused', 'count', 'transfer_out', 'transfer_in', 'write_off', 'reversal'] as const;
+export type MovementKind = (typeof MOVEMENT_KINDS)[number];
+
+export const MOVEMENT_LABELS: Record<MovementKind, string> = {
+  receive: 'Received',
+  draw: 'Drawn',
+  return_unused: 'Returned unused',
+  count: 'Count adjustment',
+  transfer_out: 'Moved out',
+  transfer_in: 'Moved in',
+  write_off: 'Written off',
+  reversal: 'Reversal',
+};
+
+export const BIN_CODE_PATTERN = /^B-\d{4,6}$/;

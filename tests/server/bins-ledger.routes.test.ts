@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { addBinAs, blindRivetBin, post } from '../helpers/crib';
+import { addBinAs, blindRivetBin, patch, post } from '../helpers/crib';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
@@ -70,5 +70,130 @@ describe('bins and their ledger', () => {
     expect(undo.status).toBe(201);
     expect((await qm.agent.get(`/api/bins/${a.code}`)).body.onHand).toBe(500);
     expect((await qm.agent.get(`/api/bins/${b.code}`)).body.onHand).toBe(0);
+  });
+});
+
+describe('parallel draws against one bin', () => {
+  it('never oversell: of 40 draws of 7 from 100, exactly 14 succeed and the ledger sums to 2', async () => {
+    const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));
+    const members = await Promise.all(
+      [1, 2, 3, 4].map(async (i) => {
+        await t.addUser({ email: `builder${i}@example.org`, name: `Builder ${i}` });
+        return t.signIn(`builder${i}@example.org`);
+      }),
+    );
+    const answers = await Promise.all(Array.from({ length: 40 }, (_, i) => post(members[i % 4]!, `/api/bins/${bin.code}/draw`, { quantity: 7 })));
+    const statuses = answers.map((a) => a.status);
+    expect(statuses.filter((s) => s === 201)).toHaveLength(14);
+    expect(statuses.filter((s) => s === 409)).toHaveLength(26);
+    expect(answers.filter((a) => a.status === 409).every((a) => a.body.error.code === 'INSUFFICIENT_STOCK')).toBe(true);
+    const after = await qm.agent.get(`/api/bins/${bin.code}`);
+    expect(after.body.onHand).toBe(2);
+    const ledger = await qm.agent.get(`/api/bins/${bin.code}/ledger`);
+    expect(ledger.body.data.reduce((s: number, m: { quantity: number }) => s + m.quantity, 0)).toBe(2);
+    expect(ledger.body.data.every((m: { balanceAfter: number }) => m.balanceAfter >= 0)).toBe(true);
+  });
+});
+
+describe('refusals', () => {
+  it('keeps receive, count, move, write-off and reverse to the quartermaster', async () => {
+    const bin = await addBinAs(qm, blindRivetBin());
+    for (const [path, body] of [
+      ['receive', { quantity: 10 }],
+      ['count', { counted: 10 }],
+      ['move', { to: 'B-0009', quantity: 1 }],
+      ['write-off', { quantity: 1, note: 'bent' }],
+    ] as const) {
+      const res = await post(member, `/api/bins/${bin.code}/${path}`, body);
+      expect(res.status, path).toBe(403);
+    }
+    expect((await post(member, '/api/bins', blindRivetBin())).status).toBe(403);
+    expect((await patch(member, `/api/bins/${bin.code}`, { location: 'Floor' })).status).toBe(403);
+  });
+
+  it('answers bad input with 400 and words, unknown bins with 404', async () => {
+    const bin = await addBinAs(qm, blindRivetBin());
+    const zero = await post(member, `/api/bins/${bin.code}/draw`, { quantity: 0 });
+    expect(zero.status).toBe(400);
+    expect(zero.body.error.issues[0]).toMatchObject({ path: 'quantity' });
+    const half = await post(member, `/api/bins/${bin.code}/draw`, { quantity: 2.5 });
+    expect(half.status).toBe(400);
+    const badCode = await member.agent.get('/api/bins/X-12');
+    expect(badCode.status).toBe(400);
+    const unknown = await post(member, '/api/bins/B-9999/draw', { quantity: 1 });
+    expect(unknown.status).toBe(404);
+    expect(unknown.body.error.code).toBe('BIN_NOT_FOUND');
+    const cost = await post(qm, `/api/bins/${bin.code}/receive`, { quantity: 5, unitCost: 0.123456 });
+    expect(cost.status).toBe(400);
+    const noReason = await post(qm, `/api/bins/${bin.code}/write-off`, { quantity: 5 });
+    expect(noReason.status).toBe(400);
+    expect(noReason.body.error.issues[0].path).toBe('note');
+    expect((await member.agent.get(`/api/bins/${bin.code}/ledger`)).body.data).toHaveLength(1);
+  });
+
+  it('refuses a write-off below zero, a return beyond what was drawn, and a move to a different spec', async () => {
+    const a = await addBinAs(qm, blindRivetBin({ initialQuantity: 20 }));
+    const other = await addBinAs(qm, blindRivetBin({ grip16: 3 }));
+    const off = await post(qm, `/api/bins/${a.code}/write-off`, { quantity: 21, note: 'dropped' });
+    expect(off.status).toBe(409);
+    expect(off.body.error).toMatchObject({ code: 'INSUFFICIENT_STOCK', message: expect.stringContaining('only 20 on hand') });
+
+    await post(member, `/api/bins/${a.code}/draw`, { quantity: 5 });
+    const tooMany = await post(member, `/api/bins/${a.code}/return`, { quantity: 6 });
+    expect(tooMany.status).toBe(409);
+    expect(tooMany.body.error.code).toBe('RETURN_EXCEEDS_DRAWN');
+    const back = await post(member, `/api/bins/${a.code}/return`, { quantity: 5 });
+    expect(back.status).toBe(201);
+    expect(back.body).toMatchObject({ kind: 'return_unused', quantity: 5, balanceAfter: 20 });
+
+    const move = await post(qm, `/api/bins/${a.code}/move`, { to: other.code, quantity: 1 });
+    expect(move.status).toBe(409);
+    expect(move.body.error.code).toBe('NOT_SAME_SPEC');
+  });
+
+  it('does not reverse a receipt whose stock has already gone', async () => {
+    const a = await addBinAs(qm, blindRivetBin({ initialQuantity: 0 }));
+    const got = await post(qm, `/api/bins/${a.code}/receive`, { quantity: 100 });
+    await post(member, `/api/bins/${a.code}/draw`, { quantity: 60 });
+    const undo = await post(qm, `/api/bins/${a.code}/ledger/${got.body.id}/reverse`, { note: 'wrong delivery' });
+    expect(undo.status).toBe(409);
+    expect(undo.body.error).toMatchObject({ code: 'INSUFFICIENT_STOCK', message: expect.stringContaining('only 40 on hand') });
+  });
+});
+
+describe('what a scan offers', () => {
+  it('offers a member Draw, and a quartermaster Receive, Count, Move and Write off', async () => {
+    const bin = await addBinAs(qm, blindRivetBin());
+    await addBinAs(qm, blindRivetBin({ initialQuantity: 0, location: 'Overflow shelf' }));
+    const forMember = await member.agent.get(`/api/bins/${bin.code}`);
+    expect(forMember.body.forYou.actions).toEqual(['draw']);
+    await post(member, `/api/bins/${bin.code}/draw`, { quantity: 3 });
+    expect((await member.agent.get(`/api/bins/${bin.code}`)).body.forYou).toMatchObject({ actions: ['draw', 'return_unused'], yourNetDrawn: 3 });
+    const forQm = await qm.agent.get(`/api/bins/${bin.code}`);
+    expect(forQm.body.forYou.actions).toEqual(['draw', 'receive', 'count', 'move', 'write_off']);
+    expect(forQm.body.forYou.sameSpecBins).toEqual([{ code: 'B-0002', location: 'Overflow shelf', onHand: 0 }]);
+  });
+
+  it('lists low bins on the Restock list with whole packs to order', async () => {
+    await addBinAs(qm, blindRivetBin({ initialQuantity: 150, reorderPoint: 200, reorderQty: 450, packSize: 100 }));
+    await addBinAs(qm, blindRivetBin({ initialQuantity: 900 }));
+    const list = await qm.agent.get('/api/bins/restock');
+    expect(list.body.data).toHaveLength(1);
+    expect(list.body.data[0]).toMatchObject({ code: 'B-0001', onHand: 150, toOrder: 500, packsToOrder: 5, orderCostCents: 6000 });
+    const low = await member.agent.get('/api/bins?low=true');
+    expect(low.body.data.map((b: { code: string }) => b.code)).toEqual(['B-0001']);
+    expect(low.body.meta.total).toBe(1);
+  });
+
+  it('keeps an edited bin valid for its kind and never edits on hand', async () => {
+    const bin = await addBinAs(qm, blindRivetBin());
+    const dropGrip = await patch(qm, `/api/bins/${bin.code}`, { grip16: null });
+    expect(dropGrip.status).toBe(400);
+    expect(dropGrip.body.error.issues[0].path).toBe('grip16');
+    const onHand = await patch(qm, `/api/bins/${bin.code}`, { onHand: 5 });
+    expect(onHand.status).toBe(400);
+    const moved = await patch(qm, `/api/bins/${bin.code}`, { location: 'Rivet cabinet, drawer 3', reorderPoint: 250 });
+    expect(moved.status).toBe(200);
+    expect(moved.body).toMatchObject({ location: 'Rivet cabinet, drawer 3', reorderPoint: 250, onHand: 500 });
   });
 });

@@ -66,6 +66,16 @@ export type ServiceDueList = z.infer<typeof serviceDueListSchema>;
 
 const days = (n: number) => `${n} ${n === 1 ? 'day' : 'days'}`;
 
+const DAY_MS = 24 * 60 * 60 * 1000;
+
+/**
+ * How late a loan is: whole days elapsed since the due moment, at least 1 once it is past due.
+ * The one rule for the Overdue page, the reminder e-mails and the badges members see.
+ */
+export function daysLate(dueAt: Date, now: Date): number {
+  return Math.max(1, Math.floor((now.getTime() - dueAt.getTime()) / DAY_MS));
+}
+
 /** "1 day late", "5 days late". */
 export function daysLateWords(daysLate: number): string {
   return `${days(daysLate)} late`;

@@ -12,8 +12,10 @@ describe('dueState', () => {
   });
 
   it('says how late an overdue loan is, in words', () => {
-    expect(dueState(new Date(2026, 10, 28, 18, 0), now)).toEqual({ words: '3 days late', overdue: true, soon: false });
+    // Whole days elapsed, at least 1: the count the lead's Overdue page and the reminder e-mails use.
+    expect(dueState(new Date(2026, 10, 28, 18, 0), now)).toEqual({ words: '2 days late', overdue: true, soon: false });
+    expect(dueState(new Date(2026, 10, 28, 10, 0), now).words).toBe('3 days late');
     expect(dueState(new Date(2026, 10, 30, 18, 0), now).words).toBe('1 day late');
-    expect(dueState(new Date(2026, 11, 1, 8, 0), now)).toEqual({ words: 'due earlier today: late', overdue: true, soon: false });
+    expect(dueState(new Date(2026, 11, 1, 8, 0), now)).toEqual({ words: '1 day late', overdue: true, soon: false });
   });
 });

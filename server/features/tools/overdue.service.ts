@@ -1,11 +1,10 @@
-import type { JobRun, OverdueList, OverdueLoan, ReminderSent } from '@shared/schemas/overdue';
+import { daysLate, type JobRun, type OverdueList, type OverdueLoan, type ReminderSent } from '@shared/schemas/overdue';
 import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { overdueReminderMail, type OverdueMailLine } from '../../mail/messages';
 import { claimReminder, findLoanForReminder, lastJobRun, listOverdueLoans, loansRemindedOn, releaseReminder, type OverdueLoanRow } from './overdue.repo';
 
-const DAY_MS = 24 * 60 * 60 * 1000;
 export const OVERDUE_JOB = 'overdue-reminders';
 
 /** The chapter's calendar day in server local time (the daily job runs at 07:00 local), YYYY-MM-DD. */
@@ -15,10 +14,6 @@ export function calendarDay(at: Date): string {
 }
 
 /** Whole days past due, counted down; a loan less than a day late is 1 day late, never 0. */
-export function daysLate(dueAt: Date, now: Date): number {
-  return Math.max(1, Math.floor((now.getTime() - dueAt.getTime()) / DAY_MS));
-}
-
 export function toMailLine(row: OverdueLoanRow, now: Date): OverdueMailLine {
   return { tool: row.tool, holder: row.holder, dueAt: row.dueAt, daysLate: daysLate(row.dueAt, now) };
 }

@@ -1,15 +1,25 @@
 import { z } from 'zod';
-import { toolCodeField } from './tools';
+import { BIN_CODE_PATTERN } from '../stock/kinds';
+import { TOOL_CODE_PATTERN } from './tools';
 
 export const MAX_LABELS_PER_REQUEST = 300;
 
-/** A label sheet to print: which layout, which codes (one label each, in order), how many positions are used. */
+/** A code a label can carry: a tool's (T-0042) or a bin's (B-0107). */
+export const labelCodeField = z
+  .string({ error: 'Enter the code on the label, like T-0042 or B-0107.' })
+  .trim()
+  .toUpperCase()
+  .refine((code) => TOOL_CODE_PATTERN.test(code) || BIN_CODE_PATTERN.test(code), {
+    error: 'A label code looks like T-0042 for a tool or B-0107 for a bin: the letter, a dash and four to six digits.',
+  });
+
+/** A label sheet to print: which layout, which tool and bin codes (one label each, in order), how many positions are used. */
 export const labelSheetBodySchema = z
   .object({
     layoutId: z.string({ error: 'Choose a sheet layout.' }).trim().min(1, { error: 'Choose a sheet layout.' }),
     codes: z
-      .array(toolCodeField, { error: 'Send the tool codes as a list, like ["T-0042"].' })
-      .min(1, { error: 'Pick at least one tool to label.' })
+      .array(labelCodeField, { error: 'Send the codes as a list, like ["T-0042", "B-0107"].' })
+      .min(1, { error: 'Pick at least one tool or bin to label.' })
       .max(MAX_LABELS_PER_REQUEST, { error: `Print at most ${MAX_LABELS_PER_REQUEST} labels at a time.` }),
     skip: z
       .number({ error: 'Enter how many labels on the first sheet are already used, or 0.' })

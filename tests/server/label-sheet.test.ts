@@ -85,5 +85,6 @@ describe('toWinAnsi', () => {
     expect(toWinAnsi('Drill 2⅝ in, ½ in')).toBe('Drill 2 5/8 in, 1/2 in');
     expect(toWinAnsi('Bucking bar – 1 lb “tungsten”')).toBe('Bucking bar – 1 lb “tungsten”');
     expect(toWinAnsi('Rivet gun 🔧 Δ')).toBe('Rivet gun ? ?');
+    expect(toWinAnsi('Blind, structural, dome · 1/8 in · grip −2')).toBe('Blind, structural, dome · 1/8 in · grip -2');
   });
 });

@@ -1,8 +1,12 @@
 import type { Response } from 'superagent';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { sheetLayoutListSchema } from '@shared/schemas/labels';
+import { findSheetLayout } from '../../labels/layouts';
+import { pageSizeInPoints } from '../../labels/sheet-geometry';
 import { tools } from '../../server/db/schema/tools';
-import { pdfPageCount, pdfStreams, shownText } from '../helpers/pdf-read';
+import { addBinAs, blindRivetBin } from '../helpers/crib';
+import { pdfPageCount, pdfRects, pdfStreams, shownText } from '../helpers/pdf-read';
+import { decodeQrPng, rectsToPng } from '../helpers/qr-raster';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
@@ -167,5 +171,81 @@ describe('POST /api/labels/sheet', () => {
     const anonymous = await postSheet(await t.anonymous(), body);
     expect(anonymous.status).toBe(401);
     expect(anonymous.body.error.code).toBe('NOT_SIGNED_IN');
+  });
+});
+
+describe('POST /api/labels/sheet with bin codes', () => {
+  /** MS20470AD4-6: universal head, 2117-T4, 1/8 in, 3/8 in long (AC 43.13-1B para 4-57a decoding example). */
+  const solidRivetBin = { kind: 'solid_rivet', head: 'dome', material: '2117-T4', diameter32: 4, length16: 6, packSize: 1000, unitCost: 0.021 };
+  const screwBin = { kind: 'screw', name: 'Screw #8-32 × 1/2 pan head, stainless', packSize: 100, unitCost: 0.18 };
+
+  it('prints a bin label with its code and designation, and its QR reads back as the bin code', async () => {
+    const bin = await addBinAs(qm, solidRivetBin);
+    const res = await postSheet(qm, { layoutId: 'thermal-1x1-2x1in', codes: [bin.code] });
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    const pdf = res.body as Buffer;
+    expect(textOf(pdf)).toEqual([bin.code, 'MS20470AD4-6']);
+    const page = pageSizeInPoints(findSheetLayout('thermal-1x1-2x1in')!);
+    const [content] = pdfStreams(pdf).filter((s) => pdfRects(s).length > 0);
+    expect(decodeQrPng(rectsToPng(page.width, page.height, pdfRects(content!), 8))).toBe(bin.code);
+  });
+
+  it('titles a blind rivet bin with its readable designation and grip range, and other bins with their name', async () => {
+    const blind = await addBinAs(qm, blindRivetBin());
+    const screw = await addBinAs(qm, screwBin);
+    const res = await postSheet(qm, { layoutId: 'a4-3x8-70x37mm', codes: [blind.code, screw.code] });
+    expect(res.status).toBe(200);
+    const text = textOf(res.body as Buffer);
+    const at = (code: string) => text.indexOf(code);
+    // Grip dash -2 covers 0.063–0.125 in (TM 10-5410-221-14/1 Table 4-3); the minus prints as a hyphen.
+    expect(text.slice(at(blind.code) + 1, at(screw.code)).join(' ')).toBe('Blind, structural, dome, 5056, steel stem · 1/8 in · grip -2 (0.063–0.125 in)');
+    expect(text.slice(at(screw.code) + 1).join(' ')).toBe('Screw #8-32 × 1/2 pan head, stainless');
+  });
+
+  it('prints tool and bin labels together, in the order given, each QR reading back as its code', async () => {
+    addTools(2, (n) => ['Rivet gun', 'Air drill'][n - 1]!);
+    const bin = await addBinAs(qm, solidRivetBin);
+    const codes = ['T-0002', bin.code, 'T-0001'];
+    const res = await postSheet(qm, { layoutId: 'thermal-1x1-2x1in', codes: codes.map((c) => c.toLowerCase()) });
+    expect(res.status).toBe(200);
+    const pdf = res.body as Buffer;
+    expect(pdfPageCount(pdf)).toBe(3);
+    expect(textOf(pdf)).toEqual(['T-0002', 'Air drill', bin.code, 'MS20470AD4-6', 'T-0001', 'Rivet gun']);
+    const page = pageSizeInPoints(findSheetLayout('thermal-1x1-2x1in')!);
+    const pages = pdfStreams(pdf).filter((s) => pdfRects(s).length > 0);
+    expect(pages.map((content) => decodeQrPng(rectsToPng(page.width, page.height, pdfRects(content), 8)))).toEqual(codes);
+  });
+
+  it('answers 400 UNKNOWN_CODES for a bin code no bin has', async () => {
+    const bin = await addBinAs(qm, solidRivetBin);
+    const res = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: [bin.code, 'B-0404'] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('UNKNOWN_CODES');
+    expect(res.body.error.message).toBe('No bin has the code B-0404. Take it off the list or check the code.');
+    expect(res.body.error.issues).toEqual([{ path: 'codes.1', message: 'No bin has the code B-0404.' }]);
+  });
+
+  it('names tools and bins together when both kinds of code are unknown', async () => {
+    addTools(1);
+    const res = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001', 'B-0404', 'T-0404'] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('UNKNOWN_CODES');
+    expect(res.body.error.message).toBe('No tool or bin has the codes B-0404 and T-0404. Take them off the list or check the code.');
+    expect(res.body.error.issues).toEqual([
+      { path: 'codes.1', message: 'No bin has the code B-0404.' },
+      { path: 'codes.2', message: 'No tool has the code T-0404.' },
+    ]);
+  });
+
+  it.each([
+    ['a code of neither kind', 'X-0001'],
+    ['a bin code with too few digits', 'B-107'],
+  ])('answers 400 VALIDATION_FAILED for %s', async (_name, bad) => {
+    addTools(1);
+    const res = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001', bad] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('VALIDATION_FAILED');
+    expect(res.body.error.issues.map((i: { path: string }) => i.path)).toContain('codes.1');
   });
 });

@@ -37,12 +37,15 @@ function longestPrefix(word: string, maxWidth: number, measure: (s: string) => n
 
 /**
  * The PDF's built-in fonts know only the WinAnsi characters: fraction characters become
- * "5/8" ("2⅝" becomes "2 5/8"), other characters outside the set become "?", so a label never shows a wrong glyph.
+ * "5/8" ("2⅝" becomes "2 5/8"), a minus sign a hyphen, other characters outside the set become "?", so a label
+ * never shows a wrong glyph.
  */
 export function toWinAnsi(text: string): string {
   return text
     .replace(/(\d)([\u00bc-\u00be\u2150-\u215e])/g, '$1 $2')
     .normalize('NFKC')
     .replace(/\u2044/g, '/')
+    // The minus sign of grip dashes (grip −2) is not in WinAnsi; a hyphen reads the same.
+    .replace(/\u2212/g, '-')
     .replace(/[^\x20-\x7e\xa0-\xff\u2013\u2014\u2018\u2019\u201c\u201d\u2022\u2026\u2122\u20ac]/gu, '?');
 }

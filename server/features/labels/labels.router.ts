@@ -2,9 +2,9 @@ import { Router } from 'express';
 import { labelSheetBodySchema } from '@shared/schemas/labels';
 import { requireRole } from '../../middleware/auth';
 import { parseInput } from '../../lib/validate';
-import { buildToolLabelSheet, listLayouts } from './labels.service';
+import { buildLabelSheet, listLayouts } from './labels.service';
 
-/** Label sheets for the quartermaster (and the lead): the layouts, and a PDF of labels for tools. */
+/** Label sheets for the quartermaster (and the lead): the layouts, and a PDF of labels for tools and bins. */
 export function labelsRouter() {
   const router = Router();
   router.use(requireRole('quartermaster'));
@@ -14,7 +14,7 @@ export function labelsRouter() {
   });
 
   router.post('/sheet', async (req, res) => {
-    const { filename, pdf } = await buildToolLabelSheet(req.ctx, parseInput(labelSheetBodySchema, req.body));
+    const { filename, pdf } = await buildLabelSheet(req.ctx, parseInput(labelSheetBodySchema, req.body));
     res.setHeader('Content-Type', 'application/pdf');
     res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
     res.setHeader('Cache-Control', 'no-store');

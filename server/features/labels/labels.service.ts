@@ -1,9 +1,11 @@
 import type { LabelSheetInput } from '@shared/schemas/labels';
+import { TOOL_CODE_PATTERN } from '@shared/schemas/tools';
+import { BIN_CODE_PATTERN } from '@shared/stock/kinds';
 import { findSheetLayout, labelsPerPage, SHEET_LAYOUTS, type SheetLayout } from '../../../labels/layouts';
 import type { ServiceContext } from '../../context';
 import { HttpError } from '../../lib/http-error';
 import { renderLabelSheet, type LabelItem } from './label-sheet.renderer';
-import { findToolNames } from './labels.repo';
+import { findBinTitles, findToolNames } from './labels.repo';
 
 export function listLayouts(): readonly SheetLayout[] {
   return SHEET_LAYOUTS;
@@ -14,22 +16,32 @@ export interface LabelSheetFile {
   pdf: Buffer;
 }
 
-/** A PDF of tool labels, one per code in the order given (a code may repeat for a second label). */
-export async function buildToolLabelSheet(ctx: ServiceContext, input: LabelSheetInput): Promise<LabelSheetFile> {
+/** A PDF of tool and bin labels, one per code in the order given (a code may repeat for a second label). */
+export async function buildLabelSheet(ctx: ServiceContext, input: LabelSheetInput): Promise<LabelSheetFile> {
   const layout = layoutFor(input.layoutId, input.skip);
-  const names = findToolNames(ctx.db, input.codes);
-  const unknown = [...new Set(input.codes.filter((code) => !names.has(code)))];
+  const titles = new Map([...findToolNames(ctx.db, input.codes.filter(isToolCode)), ...findBinTitles(ctx.db, input.codes.filter(isBinCode))]);
+  const unknown = [...new Set(input.codes.filter((code) => !titles.has(code)))];
   if (unknown.length > 0) {
     throw new HttpError(
       400,
       'UNKNOWN_CODES',
-      `No tool has the code${unknown.length > 1 ? 's' : ''} ${listed(unknown)}. Take ${unknown.length > 1 ? 'them' : 'it'} off the list or check the code.`,
-      input.codes.flatMap((code, i) => (names.has(code) ? [] : [{ path: `codes.${i}`, message: `No tool has the code ${code}.` }])),
+      `${noOneHas(unknown)} the code${unknown.length > 1 ? 's' : ''} ${listed(unknown)}. Take ${unknown.length > 1 ? 'them' : 'it'} off the list or check the code.`,
+      input.codes.flatMap((code, i) => (titles.has(code) ? [] : [{ path: `codes.${i}`, message: `${noOneHas([code])} the code ${code}.` }])),
     );
   }
-  const items: LabelItem[] = input.codes.map((code) => ({ code, title: names.get(code)! }));
+  const items: LabelItem[] = input.codes.map((code) => ({ code, title: titles.get(code)! }));
   const pdf = await renderLabelSheet(layout, items, { skip: input.skip, createdAt: ctx.now() });
   return { filename: `gripline-labels-${layout.id}.pdf`, pdf };
+}
+
+const isToolCode = (code: string) => TOOL_CODE_PATTERN.test(code);
+const isBinCode = (code: string) => BIN_CODE_PATTERN.test(code);
+
+/** Names what the unknown codes were meant to be: a tool, a bin, or either. */
+function noOneHas(codes: readonly string[]): string {
+  if (codes.every(isToolCode)) return 'No tool has';
+  if (codes.every(isBinCode)) return 'No bin has';
+  return 'No tool or bin has';
 }
 
 function layoutFor(layoutId: string, skip: number): SheetLayout {

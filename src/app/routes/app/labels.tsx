@@ -1,6 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
+import { labelBinsQueryOptions } from '@/features/labels/api/get-label-bins';
 import { labelToolsQueryOptions } from '@/features/labels/api/get-label-tools';
 import { sheetLayoutsQueryOptions } from '@/features/labels/api/get-layouts';
 import { LabelSheetBuilder } from '@/features/labels/components/label-sheet-builder';
@@ -9,17 +10,25 @@ import { requireRole } from './guards';
 
 export const labelsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
   await requireRole(queryClient, request, 'quartermaster');
-  await Promise.all([queryClient.ensureQueryData(sheetLayoutsQueryOptions()), queryClient.ensureQueryData(labelToolsQueryOptions())]);
+  await Promise.all([
+    queryClient.ensureQueryData(sheetLayoutsQueryOptions()),
+    queryClient.ensureQueryData(labelToolsQueryOptions()),
+    queryClient.ensureQueryData(labelBinsQueryOptions()),
+  ]);
   return null;
 };
 
 export function LabelsRoute() {
   const { data: layouts } = useSuspenseQuery(sheetLayoutsQueryOptions());
   const { data: tools } = useSuspenseQuery(labelToolsQueryOptions());
+  const { data: bins } = useSuspenseQuery(labelBinsQueryOptions());
   return (
     <>
-      <PageHeader title="Labels" lead="Print QR labels for crib tools: each label carries the tool's code, large, and its name." />
-      <LabelSheetBuilder tools={tools} layouts={layouts} />
+      <PageHeader
+        title="Labels"
+        lead="Print QR labels for crib tools and stock bins: each label carries the code, large, and the tool's name or the bin's designation."
+      />
+      <LabelSheetBuilder tools={tools} bins={bins} layouts={layouts} />
     </>
   );
 }

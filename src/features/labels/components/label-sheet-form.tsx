@@ -16,8 +16,15 @@ type Output = z.output<typeof sheetOptionsSchema>;
 
 const perPageOf = (layout: SheetLayoutDto | undefined) => (layout ? layout.columns * layout.rows : 1);
 
+interface LabelSheetFormProps {
+  layouts: readonly SheetLayoutDto[];
+  codes: readonly string[];
+  /** What the summary says before anything is picked. */
+  nothingPicked?: string;
+}
+
 /** The sheet layout, the labels already used on the first sheet, and the download. */
-export function LabelSheetForm({ layouts, codes }: { layouts: readonly SheetLayoutDto[]; codes: readonly string[] }) {
+export function LabelSheetForm({ layouts, codes, nothingPicked }: LabelSheetFormProps) {
   const download = useDownloadLabelSheet();
   const form = useForm<Input, unknown, Output>({
     resolver: zodResolver(sheetOptionsSchema),
@@ -32,7 +39,7 @@ export function LabelSheetForm({ layouts, codes }: { layouts: readonly SheetLayo
 
   const submit = form.handleSubmit(async (options) => {
     const skip = perPage > 1 ? options.skip : 0;
-    if (codes.length === 0) return form.setError('root', { message: 'Pick at least one tool to label.' });
+    if (codes.length === 0) return form.setError('root', { message: 'Pick at least one tool or bin to label.' });
     if (skip >= perPage) {
       return form.setError('skip', { message: `A page of this layout has ${perPage} labels, so at most ${perPage - 1} can be already used.` });
     }
@@ -73,11 +80,11 @@ export function LabelSheetForm({ layouts, codes }: { layouts: readonly SheetLayo
         )}
       </div>
       <p className="font-medium" aria-live="polite">
-        {describeSheet(codes.length, skipShown, perPage)}
+        {describeSheet(codes.length, skipShown, perPage, nothingPicked)}
       </p>
       {tooMany && (
         <Notice tone="warn">
-          Print at most {MAX_LABELS_PER_REQUEST} labels at a time: take {codes.length - MAX_LABELS_PER_REQUEST} tools off the list.
+          Print at most {MAX_LABELS_PER_REQUEST} labels at a time: take {codes.length - MAX_LABELS_PER_REQUEST} off the list.
         </Notice>
       )}
       <Notice title="Print at actual size">

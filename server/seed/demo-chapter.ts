@@ -3,6 +3,7 @@ import { hashPassword } from '../accounts/passwords';
 import { countUsers, insertUser } from '../accounts/users.repo';
 import type { Database } from '../db/client';
 import { seedDemoCrib } from './demo-crib';
+import { seedDemoStock } from './demo-stock';
 
 export const DEMO_PASSWORD = 'gripline-demo';
 /** An invented chapter ("Larkspur Field Builders, Chapter 417"): every person here is made up. */
@@ -23,5 +24,6 @@ export async function seedDemoChapter(db: Database): Promise<boolean> {
     DEMO_PEOPLE.forEach((p, i) => insertUser(tx, { ...p, passwordHash: hashes[i]! }));
   });
   await seedDemoCrib(db);
+  seedDemoStock(db);
   return true;
 }

@@ -2,6 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { migrateDatabase, openDatabase } from '../../server/db/client';
 import { seedDemoChapter } from '../../server/seed/demo-chapter';
 
+/** Six password hashes, the crib and the stock ledger: slow on a busy test machine. */
+const SEEDING_MS = 30_000;
+
 describe('the demo chapter', () => {
   it('seeds people, about sixty tools, loans with two overdue, a hold and a tool due for calibration', async () => {
     const db = openDatabase(':memory:');
@@ -25,5 +28,5 @@ describe('the demo chapter', () => {
     expect(dueForCalibration).toBe(1);
     expect(await seedDemoChapter(db)).toBe(false);
     db.$client.close();
-  });
+  }, SEEDING_MS);
 });

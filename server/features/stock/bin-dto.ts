@@ -2,7 +2,7 @@ import type { Bin } from '@shared/schemas/bins';
 import { blindGripRange, fastenerDesignation } from '@shared/stock/fasteners';
 import { isBlindKind } from '@shared/stock/kinds';
 import type { BinRow } from '../../db/schema/stock';
-import { e4ToDollars, valueCents } from './money';
+import { e4ToDollars, valueCents } from '@shared/stock/money';
 
 /** The reorder quantity rounded up to whole packs; a bin with no reorder quantity set orders one pack. */
 export function orderQuantity(bin: Pick<BinRow, 'reorderQty' | 'packSize'>): number {

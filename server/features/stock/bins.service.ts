@@ -11,7 +11,7 @@ import { orderQuantity, toBinDto } from './bin-dto';
 import { findBinByCode, insertBin, lastCountedAt, listBins, listLowBins, nextBinCode, sameSpecBins, updateBin, type NewBinRow } from './bins.repo';
 import { binOrThrow } from './ledger.service';
 import { insertMovement, netDrawnBy } from './ledger.repo';
-import { dollarsToE4, valueCents } from './money';
+import { dollarsToE4, valueCents } from '@shared/stock/money';
 
 function withCounts(ctx: ServiceContext, rows: BinRow[]): Bin[] {
   const counted = lastCountedAt(ctx.db, rows.map((r) => r.id));

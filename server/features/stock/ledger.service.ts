@@ -8,7 +8,7 @@ import { HttpError } from '../../lib/http-error';
 import { isUniqueViolation } from '../../lib/sqlite-errors';
 import { findBinByCode, findBinById, sameSpecBins, updateBin } from './bins.repo';
 import { findMovement, findPairedWith, findReversalOf, insertMovement, listMovements, netDrawnBy, setOnHand, type LedgerRow } from './ledger.repo';
-import { dollarsToE4, e4ToDollars, valueCents } from './money';
+import { dollarsToE4, e4ToDollars, valueCents } from '@shared/stock/money';
 import { slipExists } from './slips.repo';
 
 export function binOrThrow(db: Executor, code: string): BinRow {

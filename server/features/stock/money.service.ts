@@ -1,0 +1,156 @@
+import { hasRole } from '@shared/roles';
+import type { Payment, RecordPaymentBody, Spend, SpendMonth, Tab, TabEntry, TabSummary } from '@shared/schemas/stock-money';
+import { BIN_KINDS, type BinKind } from '@shared/stock/kinds';
+import { findUserById } from '../../accounts/users.repo';
+import type { ServiceContext } from '../../context';
+import type { MovementRow } from '../../db/schema/stock';
+import type { UserRow } from '../../db/schema/users';
+import { HttpError } from '../../lib/http-error';
+import { binDesignation } from './bin-dto';
+import { e4ToDollars, valueCents } from '@shared/stock/money';
+import { insertPayment, namesOf, paidByPerson, paymentById, paymentsOf, spendEntries, tabEntries, type PaymentRow, type TabEntryRow } from './money.repo';
+
+const RECENT_ENTRIES = 25;
+
+/** A UTC calendar month, like 2026-11. */
+const monthOf = (at: number | Date) => new Date(at).toISOString().slice(0, 7);
+
+/**
+ * What an entry adds to a member's tab, valued entry by entry at the unit cost it was taken at:
+ * a draw (stock out) is a charge, a return or a reversed draw takes its value off again.
+ */
+const chargeOf = (m: Pick<MovementRow, 'quantity' | 'unitCostE4'>) => -valueCents(m.quantity, m.unitCostE4);
+
+function userOrThrow(ctx: ServiceContext, userId: number, status: 400 | 404): UserRow {
+  const user = findUserById(ctx.db, userId);
+  if (user) return user;
+  const message = `There is no person with id ${userId} in the chapter. Choose someone from the list.`;
+  throw new HttpError(status, 'USER_NOT_FOUND', message, status === 400 ? [{ path: 'userId', message: 'Choose someone from the list.' }] : undefined);
+}
+
+function paymentDto(r: PaymentRow): Payment {
+  return { id: r.p.id, userId: r.p.userId, amountCents: r.p.amountCents, at: r.p.at.toISOString(), note: r.p.note, recordedBy: { id: r.p.recordedById, name: r.recordedByName } };
+}
+
+function entryDto(r: TabEntryRow): TabEntry {
+  return {
+    id: r.m.id,
+    at: r.m.at.toISOString(),
+    kind: r.m.kind,
+    binCode: r.bin.code,
+    designation: binDesignation(r.bin),
+    quantity: r.m.quantity,
+    unitCost: e4ToDollars(r.m.unitCostE4),
+    chargeCents: chargeOf(r.m),
+    assemblyId: r.m.assemblyId,
+    note: r.m.note,
+  };
+}
+
+/** A member reads their own tab; the quartermaster and the lead read anyone's. */
+export function readTab(ctx: ServiceContext, viewer: UserRow, userId: number): Tab {
+  if (viewer.id !== userId && !hasRole(viewer.role, 'quartermaster')) {
+    throw new HttpError(403, 'FORBIDDEN', 'You can read your own tab only. The quartermaster or the chapter lead can read anyone’s.');
+  }
+  const member = viewer.id === userId ? viewer : userOrThrow(ctx, userId, 404);
+  const entries = tabEntries(ctx.db, member.id);
+  const payments = paymentsOf(ctx.db, member.id);
+
+  const months = new Map<string, { chargedCents: number; paidCents: number }>();
+  const monthRow = (month: string) => months.get(month) ?? months.set(month, { chargedCents: 0, paidCents: 0 }).get(month)!;
+  const assemblies = new Map<number | null, { quantity: number; chargedCents: number }>();
+  let chargedCents = 0;
+  for (const e of entries) {
+    const charge = chargeOf(e.m);
+    chargedCents += charge;
+    monthRow(monthOf(e.countsAt)).chargedCents += charge;
+    const a = assemblies.get(e.m.assemblyId) ?? assemblies.set(e.m.assemblyId, { quantity: 0, chargedCents: 0 }).get(e.m.assemblyId)!;
+    a.quantity -= e.m.quantity;
+    a.chargedCents += charge;
+  }
+  let paidCents = 0;
+  for (const p of payments) {
+    paidCents += p.p.amountCents;
+    monthRow(monthOf(p.p.at)).paidCents += p.p.amountCents;
+  }
+
+  return {
+    member: { id: member.id, name: member.name },
+    chargedCents,
+    paidCents,
+    balanceCents: chargedCents - paidCents,
+    byMonth: [...months].sort(([a], [b]) => b.localeCompare(a)).map(([month, v]) => ({ month, ...v })),
+    // Assemblies in id order; stock not tied to one comes last.
+    byAssembly: [...assemblies]
+      .filter(([, v]) => v.quantity !== 0 || v.chargedCents !== 0)
+      .sort(([a], [b]) => (a ?? Infinity) - (b ?? Infinity))
+      .map(([assemblyId, v]) => ({ assemblyId, ...v })),
+    recent: entries.slice(-RECENT_ENTRIES).reverse().map(entryDto),
+    payments: payments.map(paymentDto),
+  };
+}
+
+/** Everyone with something charged or paid, the largest balance owed first. */
+export function listTabs(ctx: ServiceContext): TabSummary[] {
+  const charged = new Map<number, number>();
+  for (const e of tabEntries(ctx.db)) charged.set(e.m.memberId!, (charged.get(e.m.memberId!) ?? 0) + chargeOf(e.m));
+  const paid = paidByPerson(ctx.db);
+  const ids = [...new Set([...charged.keys(), ...paid.keys()])];
+  const names = namesOf(ctx.db, ids);
+  return ids
+    .map((id) => {
+      const chargedCents = charged.get(id) ?? 0;
+      const paidCents = paid.get(id) ?? 0;
+      return { member: { id, name: names.get(id) ?? '' }, chargedCents, paidCents, balanceCents: chargedCents - paidCents };
+    })
+    .filter((t) => t.chargedCents !== 0 || t.paidCents !== 0)
+    .sort((a, b) => b.balanceCents - a.balanceCents || a.member.name.localeCompare(b.member.name));
+}
+
+/** The lead or quartermaster records money a member handed over; it comes off their balance. */
+export function recordPayment(ctx: ServiceContext, actor: UserRow, body: RecordPaymentBody): Payment {
+  const member = userOrThrow(ctx, body.userId, 400);
+  const row = insertPayment(ctx.db, { userId: member.id, amountCents: body.amountCents, at: ctx.now(), note: body.note ?? '', recordedById: actor.id });
+  return paymentDto(paymentById(ctx.db, row.id)!);
+}
+
+/** The first instant of each of the last `count` UTC months, up to and including the month of `now`. */
+function lastMonths(now: Date, count: number): Date[] {
+  const y = now.getUTCFullYear();
+  const m = now.getUTCMonth();
+  return Array.from({ length: count }, (_, i) => new Date(Date.UTC(y, m - (count - 1) + i, 1)));
+}
+
+const noKinds = () => Object.fromEntries(BIN_KINDS.map((k) => [k, 0])) as Record<BinKind, number>;
+
+/**
+ * The chapter's consumables by month: what was used up (draws and write-offs, less returns) by
+ * bin kind, what was bought in, and count adjustments apart (shrinkage is a loss, not spend).
+ * Every month in the window is present, empty ones included, oldest first.
+ */
+export function chapterSpend(ctx: ServiceContext, monthCount: number): Spend {
+  const starts = lastMonths(ctx.now(), monthCount);
+  const months = new Map<string, SpendMonth>(
+    starts.map((d) => [monthOf(d), { month: monthOf(d), consumedCents: 0, byKind: noKinds(), purchasedCents: 0, countAdjustmentCents: 0 }]),
+  );
+  for (const e of spendEntries(ctx.db, starts[0]!)) {
+    const row = months.get(monthOf(e.countsAt));
+    if (!row) continue;
+    const value = valueCents(e.quantity, e.unitCostE4);
+    switch (e.countsAs) {
+      case 'draw':
+      case 'return_unused':
+      case 'write_off':
+        row.consumedCents -= value;
+        row.byKind[e.binKind] -= value;
+        break;
+      case 'receive':
+        row.purchasedCents += value;
+        break;
+      case 'count':
+        row.countAdjustmentCents += value;
+        break;
+    }
+  }
+  return { months: [...months.values()] };
+}

@@ -1,0 +1,210 @@
+import Papa from 'papaparse';
+import { MAX_IMPORT_ROWS, type ImportProblem } from '@shared/schemas/bin-import';
+import { createBinBodySchema, type CreateBinInput } from '@shared/schemas/bins';
+import { BIN_KIND_LABELS, BIN_KINDS, RIVET_HEAD_LABELS, RIVET_HEADS, RIVET_MATERIALS, STEM_MATERIALS } from '@shared/stock/kinds';
+
+type Field = keyof CreateBinInput;
+/** How a cell's text becomes a value for the bin schema. Numeric columns are never formula-escaped on export. */
+type CellType = 'text' | 'number' | 'money' | 'dash' | 'diameter' | 'kind' | 'head' | 'material' | 'stem';
+
+export interface BinColumn {
+  name: string;
+  field: Field;
+  type: CellType;
+}
+
+const col = (name: string, field: Field, type: CellType = 'text'): BinColumn => ({ name, field, type });
+
+/** The columns of a bins CSV, in file order: import reads them, export writes them. */
+export const BIN_COLUMNS: readonly BinColumn[] = [
+  col('code', 'code'),
+  col('kind', 'kind', 'kind'),
+  col('name', 'name'),
+  col('head', 'head', 'head'),
+  col('material', 'material', 'material'),
+  col('stem_material', 'stemMaterial', 'stem'),
+  col('diameter_32nds', 'diameter32', 'diameter'),
+  col('grip_dash', 'grip16', 'dash'),
+  col('length_16ths', 'length16', 'dash'),
+  col('drill_size', 'drillSize'),
+  col('hole_drill', 'holeDrill'),
+  col('unit', 'unit'),
+  col('pack_size', 'packSize', 'number'),
+  col('unit_cost', 'unitCost', 'money'),
+  col('supplier', 'supplier'),
+  col('supplier_part', 'supplierPart'),
+  col('lead_time_days', 'leadTimeDays', 'number'),
+  col('reorder_point', 'reorderPoint', 'number'),
+  col('reorder_qty', 'reorderQty', 'number'),
+  col('location', 'location'),
+  col('notes', 'notes'),
+  col('opening_stock', 'initialQuantity', 'number'),
+];
+export const REQUIRED_COLUMNS = ['kind'] as const;
+/** Columns an export adds; an import reads past them. */
+export const EXPORT_ONLY_COLUMNS = ['designation', 'on_hand'] as const;
+export const isNumericColumn = (c: BinColumn) => ['number', 'money', 'dash', 'diameter'].includes(c.type);
+
+const COLUMN_BY_NAME = new Map(BIN_COLUMNS.map((c) => [c.name, c]));
+const COLUMN_BY_FIELD = new Map(BIN_COLUMNS.map((c) => [c.field as string, c.name]));
+
+/** Header names as people type them: "Grip dash", "grip-dash" and "grip_dash" are one column. */
+export const normalizeHeader = (h: string) => h.trim().toLowerCase().replace(/[\s-]+/g, '_');
+const words = (s: string) => s.trim().toLowerCase().replace(/[–—−]/g, '-').replace(/_/g, ' ').replace(/\s+/g, ' ');
+
+function matchWord<T extends string>(cell: string, values: readonly T[], labels: Partial<Record<T, string>> = {}, aliases: Record<string, T> = {}): T | undefined {
+  const w = words(cell);
+  return values.find((v) => words(v) === w || (labels[v] !== undefined && words(labels[v]) === w)) ?? aliases[w];
+}
+
+const KIND_HINT = `Use one of: ${BIN_KINDS.map((k) => BIN_KIND_LABELS[k]).join(', ')} (or its key, like blind_structural).`;
+
+function toNumber(cell: string): number | undefined {
+  const s = cell.replace(/\s/g, '');
+  if (/^[+-]?\d{1,3}(,\d{3})+(\.\d+)?$/.test(s)) return Number(s.replace(/,/g, ''));
+  return /^[+-]?(\d+\.?\d*|\.\d+)$/.test(s) ? Number(s) : undefined;
+}
+
+type Converted = { value: unknown } | { error: string };
+const notANumber = (cell: string): Converted => ({ error: `enter a number, not "${cell}".` });
+
+/** A dash number may be written with the trade's leading dash: "-4" is dash 4. */
+const dash = (cell: string) => cell.replace(/^[-−]\s*/, '');
+
+function convert(type: CellType, cell: string): Converted {
+  switch (type) {
+    case 'text':
+      // An export guards formulas with a leading apostrophe; take it off again.
+      return { value: /^'[=+\-@\t\r]/.test(cell) ? cell.slice(1) : cell };
+    case 'number':
+    case 'money':
+    case 'dash': {
+      const text = type === 'money' ? cell.replace(/^\$\s*/, '') : type === 'dash' ? dash(cell) : cell;
+      const n = toNumber(text);
+      return n === undefined ? notANumber(cell) : { value: n };
+    }
+    case 'diameter': {
+      const text = dash(cell).replace(/\s*(in|inch|")$/i, '');
+      const fraction = /^(\d+)\s*\/\s*(\d+)$/.exec(text);
+      if (!fraction) return toNumber(text) === undefined ? { error: `enter the diameter in 32nds (4) or as a fraction of an inch (1/8), not "${cell}".` } : { value: toNumber(text) };
+      const in32nds = (Number(fraction[1]) / Number(fraction[2])) * 32;
+      return Number.isInteger(in32nds) ? { value: in32nds } : { error: `${text} in is not a whole number of 32nds of an inch; use a size like 1/8 or 5/32.` };
+    }
+    case 'kind': {
+      const kind = matchWord(cell, BIN_KINDS, BIN_KIND_LABELS);
+      return kind ? { value: kind } : { error: `"${cell}" is not a kind of bin. ${KIND_HINT}` };
+    }
+    case 'head':
+      return { value: matchWord(cell, RIVET_HEADS, RIVET_HEAD_LABELS, { universal: 'dome', csk: 'countersunk' }) ?? cell };
+    case 'material':
+      return { value: matchWord(cell, RIVET_MATERIALS, {}, { aluminum: 'aluminium' }) ?? cell };
+    case 'stem':
+      return { value: matchWord(cell, STEM_MATERIALS, {}, { aluminum: 'aluminium' }) ?? cell };
+  }
+}
+
+/** "Line 7, grip_dash: use a grip dash from the table: 1 to 6, or 8." */
+export function problem(line: number, column: string, message: string): ImportProblem {
+  const said = /^[A-Z][a-z\s]/.test(message) ? message[0]!.toLowerCase() + message.slice(1) : message;
+  return { column, message: column ? `Line ${line}, ${column}: ${said}` : `Line ${line}: ${message}` };
+}
+
+export interface CheckedRow {
+  line: number;
+  /** The code cell as written (upper-cased), or '' when empty. */
+  code: string;
+  name: string;
+  errors: ImportProblem[];
+  /** The bin to create, when the row is valid on its own. */
+  input?: CreateBinInput;
+}
+
+/** Turns one data row (cells by header name) into a bin to create, or into problems in words. */
+export function checkBinRow(line: number, cells: ReadonlyMap<string, string>): CheckedRow {
+  const values: Record<string, unknown> = {};
+  const errors: ImportProblem[] = [];
+  for (const [name, raw] of cells) {
+    const column = COLUMN_BY_NAME.get(name);
+    const cell = raw.trim();
+    if (!column || cell === '') continue;
+    const converted = convert(column.type, cell);
+    if ('error' in converted) errors.push(problem(line, name, converted.error));
+    else values[column.field] = converted.value;
+  }
+  const result = createBinBodySchema.safeParse(values);
+  const code = (cells.get('code') ?? '').trim().toUpperCase();
+  const name = (cells.get('name') ?? '').trim();
+  if (result.success) return { line, code, name, errors, input: errors.length === 0 ? result.data : undefined };
+  const badColumns = new Set(errors.map((e) => e.column));
+  for (const issue of result.error.issues) {
+    const column = COLUMN_BY_FIELD.get(String(issue.path[0] ?? '')) ?? '';
+    // A cell that could not be read already has its problem; the schema's "missing" would repeat it.
+    if (!badColumns.has(column)) errors.push(problem(line, column, issue.message));
+  }
+  return { line, code, name, errors };
+}
+
+export interface ParsedCsv {
+  columns: string[];
+  fileErrors: ImportProblem[];
+  rows: CheckedRow[];
+}
+
+const fileProblem = (message: string, column = ''): ImportProblem => ({ column, message });
+
+/** The header's delimiter: a comma, or the semicolon or tab some spreadsheets write instead. */
+function delimiterOf(text: string): string {
+  const header = text.slice(0, text.search(/\r?\n|$/));
+  return [',', ';', '\t'].reduce((best, d) => (header.split(d).length > header.split(best).length ? d : best), ',');
+}
+
+/** Reads a bins CSV: the first non-blank line is the header, every other non-blank line a bin. */
+export function parseBinCsv(csv: string): ParsedCsv {
+  const text = csv.replace(/^\uFEFF/, '');
+  const empty = { columns: [], rows: [] };
+  if (text.trim() === '') return { ...empty, fileErrors: [fileProblem('The file is empty: it needs a header line of column names and one line per bin.')] };
+
+  const records: { line: number; cells: string[]; damage?: string }[] = [];
+  let pos = 0;
+  let line = 1;
+  let tooMany = false;
+  Papa.parse<string[]>(text, {
+    delimiter: delimiterOf(text),
+    step: (step, parser) => {
+      const start = line;
+      line += text.slice(pos, step.meta.cursor).split('\n').length - 1;
+      pos = step.meta.cursor;
+      if (step.data.every((c) => c.trim() === '')) return;
+      if (records.length > MAX_IMPORT_ROWS) {
+        tooMany = true;
+        return parser.abort();
+      }
+      records.push({ line: start, cells: step.data, damage: step.errors[0]?.message });
+    },
+  });
+  if (tooMany) return { ...empty, fileErrors: [fileProblem(`The file has more than ${MAX_IMPORT_ROWS} bins. Split it into smaller files.`)] };
+
+  const [header, ...data] = records;
+  const columns = header!.cells.map(normalizeHeader);
+  const fileErrors = checkHeader(columns);
+  if (data.length === 0) fileErrors.push(fileProblem('The file has a header line but no bins below it.'));
+  const rows = data.map(({ line: at, cells, damage }) => {
+    const row = checkBinRow(at, new Map(columns.flatMap((c, i) => (c ? [[c, cells[i] ?? ''] as const] : []))));
+    const stray = cells.findIndex((c, i) => c.trim() !== '' && !columns[i]);
+    if (stray >= 0) row.errors.push(problem(at, '', `cell ${stray + 1} has no column name in the header line. Name the column or clear the cell.`));
+    if (damage) row.errors.push(problem(at, '', `the CSV is damaged here (${damage}). Check the quotes on this line.`));
+    return row;
+  });
+  return { columns, fileErrors, rows };
+}
+
+function checkHeader(columns: readonly string[]): ImportProblem[] {
+  const known = new Set<string>([...COLUMN_BY_NAME.keys(), ...EXPORT_ONLY_COLUMNS]);
+  const errors: ImportProblem[] = [];
+  columns.forEach((c, i) => {
+    if (c && !known.has(c)) errors.push(fileProblem(`Line 1, column "${c}" is not one Gripline knows. Rename it to a column of the template, or delete it.`, c));
+    if (c && columns.indexOf(c) !== i) errors.push(fileProblem(`Line 1, column "${c}" appears twice. Keep one.`, c));
+  });
+  for (const c of REQUIRED_COLUMNS) if (!columns.includes(c)) errors.push(fileProblem(`Line 1: the header has no "${c}" column; every bin needs one.`, c));
+  return errors;
+}

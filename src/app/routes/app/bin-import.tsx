@@ -1,0 +1,29 @@
+import { useQueryClient, type QueryClient } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router';
+import { binKeys } from '@/features/stock/api/keys';
+import { BinImportPanel } from '@/features/stock-import/components/bin-import-panel';
+import { StockExportPanel } from '@/features/stock-import/components/stock-export-panel';
+import { Card, PageHeader } from '@/components/ui/page';
+import { requireRole } from './guards';
+
+export const binImportLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  await requireRole(queryClient, request, 'quartermaster');
+  return null;
+};
+
+export function BinImportRoute() {
+  const queryClient = useQueryClient();
+  return (
+    <>
+      <PageHeader title="Import and export bins" lead="Bring a list of bins in from a spreadsheet, or take the bins and the ledger out to one." />
+      <div className="flex flex-col gap-5">
+        <Card title="Import bins from a CSV file">
+          <BinImportPanel onImported={() => queryClient.invalidateQueries({ queryKey: binKeys.all })} />
+        </Card>
+        <Card title="Export">
+          <StockExportPanel />
+        </Card>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,133 @@
+import { useId, useState, type ChangeEvent } from 'react';
+import { Link } from 'react-router';
+import { MAX_IMPORT_CSV_CHARS, type ImportResult } from '@shared/schemas/bin-import';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { ApiError } from '@/lib/api-client';
+import { messageOf } from '@/lib/errors';
+import { useCommitImport } from '../api/commit-import';
+import { usePreviewImport } from '../api/preview-import';
+import { TEMPLATE_CSV_URL } from '../utils/csv-links';
+import { ImportPreviewTable } from './import-preview-table';
+
+const MAX_PROBLEMS_LISTED = 10;
+
+const listCodes = (codes: readonly string[]) =>
+  codes.length <= 6 ? `Codes ${codes.join(', ')}` : `Codes ${codes.slice(0, 5).join(', ')} and ${codes.length - 5} more`;
+
+function ImportRefused({ error }: { error: unknown }) {
+  const issues = error instanceof ApiError ? error.issues : [];
+  return (
+    <Notice tone="bad" title="Nothing was imported">
+      <p>{messageOf(error)}</p>
+      {issues.length > 0 && (
+        <ul className="mt-2 list-disc pl-5">
+          {issues.slice(0, MAX_PROBLEMS_LISTED).map((i) => (
+            <li key={i.path + i.message}>{i.message}</li>
+          ))}
+        </ul>
+      )}
+    </Notice>
+  );
+}
+
+/**
+ * Choose or paste a bins CSV, check it row by row, then import all of it in one go. Import is
+ * offered only for the text that was checked, and only when every row is ready.
+ */
+export function BinImportPanel({ onImported }: { onImported?: (result: ImportResult) => unknown }) {
+  const ids = useId();
+  const [csv, setCsv] = useState('');
+  const [readProblem, setReadProblem] = useState<string>();
+  const check = usePreviewImport();
+  const commit = useCommitImport(onImported);
+  const preview = check.data && check.variables?.csv === csv ? check.data : undefined;
+
+  const edit = (text: string) => {
+    setCsv(text);
+    setReadProblem(undefined);
+    commit.reset();
+  };
+
+  const chooseFile = async (e: ChangeEvent<HTMLInputElement>) => {
+    const file = e.target.files?.[0];
+    e.target.value = '';
+    if (!file) return;
+    if (file.size > MAX_IMPORT_CSV_CHARS) return setReadProblem(`${file.name} is larger than 2 MB. Split it into smaller files.`);
+    edit(await file.text());
+  };
+
+  const runImport = () =>
+    commit.mutate(
+      { csv },
+      {
+        onSuccess: () => {
+          setCsv('');
+          check.reset();
+        },
+      },
+    );
+
+  return (
+    <div className="flex flex-col gap-4">
+      <p>
+        One line per bin, with a header line of column names.{' '}
+        <a href={TEMPLATE_CSV_URL} download className="font-semibold underline underline-offset-4">
+          Download a template
+        </a>{' '}
+        with every column and two example bins. Leave the code empty to give a bin the next free code.
+      </p>
+      <div className="flex flex-col gap-1.5">
+        <label htmlFor={`${ids}-file`} className="text-sm font-semibold">
+          CSV file
+        </label>
+        <input id={`${ids}-file`} type="file" accept=".csv,text/csv" onChange={(e) => void chooseFile(e)} className="min-h-12 text-base file:mr-3 file:min-h-12 file:rounded-lg file:border-2 file:border-ink file:bg-card file:px-4 file:font-semibold" />
+      </div>
+      <div className="flex flex-col gap-1.5">
+        <label htmlFor={`${ids}-text`} className="text-sm font-semibold">
+          Or paste the CSV here
+        </label>
+        <textarea
+          id={`${ids}-text`}
+          value={csv}
+          onChange={(e) => edit(e.target.value)}
+          rows={6}
+          spellCheck={false}
+          className="w-full rounded-lg border-2 border-rule bg-card p-3 font-mono text-sm focus:border-ink"
+        />
+      </div>
+      {readProblem && <Notice tone="bad">{readProblem}</Notice>}
+      {check.error && <Notice tone="bad">{messageOf(check.error)}</Notice>}
+      <div className="flex flex-wrap gap-3">
+        <Button variant="secondary" busy={check.isPending} disabled={csv.trim() === ''} onClick={() => check.mutate({ csv })}>
+          Check file
+        </Button>
+        <Button busy={commit.isPending} disabled={!preview?.canImport} onClick={runImport}>
+          {preview?.canImport ? `Import ${preview.valid} ${preview.valid === 1 ? 'bin' : 'bins'}` : 'Import bins'}
+        </Button>
+      </div>
+      {!preview?.canImport && csv.trim() !== '' && <p className="text-sm text-steel">Import opens once the file is checked and every row is ready.</p>}
+      {commit.error && <ImportRefused error={commit.error} />}
+      {commit.data && (
+        <Notice tone="ok" title={`Imported ${commit.data.created} ${commit.data.created === 1 ? 'bin' : 'bins'}`}>
+          <p>
+            {listCodes(commit.data.codes)}.{' '}
+            <Link to="/bins" className="font-semibold underline underline-offset-4">
+              Open the bins
+            </Link>
+          </p>
+        </Notice>
+      )}
+      {preview && preview.fileErrors.length > 0 && (
+        <Notice tone="bad" title="Problems with the file">
+          <ul className="list-disc pl-5">
+            {preview.fileErrors.map((e) => (
+              <li key={e.message}>{e.message}</li>
+            ))}
+          </ul>
+        </Notice>
+      )}
+      {preview && preview.rows.length > 0 && <ImportPreviewTable key={check.submittedAt} preview={preview} />}
+    </div>
+  );
+}

@@ -1,0 +1,129 @@
+import { screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { beforeEach, describe, expect, it, vi } from 'vitest';
+import type { ImportPreview } from '@shared/schemas/bin-import';
+import { BinImportPanel } from '@/features/stock-import/components/bin-import-panel';
+import { StockExportPanel } from '@/features/stock-import/components/stock-export-panel';
+import { defaultLedgerRange } from '@/features/stock-import/utils/csv-links';
+import { setCsrfToken } from '@/lib/api-client';
+import { fakeFetch, renderWithProviders } from '../helpers/render';
+
+beforeEach(() => setCsrfToken('token-1'));
+
+const CSV = 'kind,head,material,diameter_32nds,grip_dash\nblind_structural,dome,5056,4,2\nblind_structural,dome,5056,4,7\n';
+const BLIND = 'Blind, structural, dome, 5056 · 1/8 in · grip −2 (0.063–0.125 in)';
+
+/** What the server answers for CSV above: line 2 ready, line 3 with grip dash 7, which the table lacks. */
+const MIXED: ImportPreview = {
+  rows: [
+    { line: 2, code: 'B-0004', designation: BLIND, ok: true, errors: [] },
+    { line: 3, code: 'B-0005', designation: '', ok: false, errors: [{ column: 'grip_dash', message: 'Line 3, grip_dash: use a grip dash from the table: 1 to 6, or 8.' }] },
+  ],
+  valid: 1,
+  invalid: 1,
+  columns: ['kind', 'head', 'material', 'diameter_32nds', 'grip_dash'],
+  fileErrors: [],
+  canImport: false,
+};
+const ALL_READY: ImportPreview = { ...MIXED, rows: [MIXED.rows[0]!, { ...MIXED.rows[0]!, line: 3, code: 'B-0005' }], valid: 2, invalid: 0, canImport: true };
+
+const importButton = () => screen.getByRole<HTMLButtonElement>('button', { name: /^Import/ });
+const pasteCsv = async (text: string) => {
+  await userEvent.click(screen.getByLabelText('Or paste the CSV here'));
+  await userEvent.paste(text);
+};
+
+describe('BinImportPanel', () => {
+  it('shows each row ready or with its problems in words, and keeps Import closed while any row is bad', async () => {
+    const calls = fakeFetch((call) => (call.path === '/api/bins/import/preview' ? { status: 200, body: MIXED } : undefined));
+    renderWithProviders(<BinImportPanel />);
+    expect(importButton().disabled).toBe(true);
+    expect(screen.getByRole<HTMLButtonElement>('button', { name: 'Check file' }).disabled).toBe(true);
+
+    await pasteCsv(CSV);
+    await userEvent.click(screen.getByRole('button', { name: 'Check file' }));
+    expect(await screen.findByText('2 rows: 1 ready, 1 with problems.')).toBeTruthy();
+    expect(calls).toEqual([expect.objectContaining({ method: 'POST', path: '/api/bins/import/preview', body: { csv: CSV } })]);
+
+    // Only the row with problems shows at first; the whole file on request.
+    const table = screen.getByRole('table', { name: 'Rows of the file' });
+    expect(within(table).getByText('Line 3, grip_dash: use a grip dash from the table: 1 to 6, or 8.')).toBeTruthy();
+    expect(within(table).queryByText(BLIND)).toBeNull();
+    await userEvent.click(screen.getByRole('checkbox', { name: 'Show only rows with problems' }));
+    expect(within(table).getByText(BLIND)).toBeTruthy();
+    expect(within(table).getByText('Ready')).toBeTruthy();
+
+    expect(importButton().textContent).toBe('Import bins');
+    expect(importButton().disabled).toBe(true);
+    expect(calls.some((c) => c.path === '/api/bins/import')).toBe(false);
+  });
+
+  it('reads a chosen file, imports the checked text only, and links to the bins afterwards', async () => {
+    const calls = fakeFetch((call) => {
+      if (call.path === '/api/bins/import/preview') return { status: 200, body: ALL_READY };
+      if (call.path === '/api/bins/import') return { status: 201, body: { created: 2, codes: ['B-0004', 'B-0005'] } };
+      return undefined;
+    });
+    const onImported = vi.fn();
+    renderWithProviders(<BinImportPanel onImported={onImported} />);
+    await userEvent.upload(screen.getByLabelText('CSV file'), new File([CSV], 'bins.csv', { type: 'text/csv' }));
+    await waitFor(() => expect(screen.getByLabelText<HTMLTextAreaElement>('Or paste the CSV here').value).toBe(CSV));
+
+    await userEvent.click(screen.getByRole('button', { name: 'Check file' }));
+    await waitFor(() => expect(importButton().disabled).toBe(false));
+    expect(importButton().textContent).toBe('Import 2 bins');
+
+    // A change after the check closes Import until the file is checked again.
+    await pasteCsv('x');
+    expect(importButton().disabled).toBe(true);
+    await userEvent.keyboard('{Backspace}');
+    expect(importButton().disabled).toBe(false);
+
+    await userEvent.click(importButton());
+    expect(await screen.findByText('Imported 2 bins')).toBeTruthy();
+    expect(screen.getByText(/Codes B-0004, B-0005/)).toBeTruthy();
+    expect(screen.getByRole('link', { name: 'Open the bins' }).getAttribute('href')).toBe('/bins');
+    expect(onImported).toHaveBeenCalledWith({ created: 2, codes: ['B-0004', 'B-0005'] });
+    expect(calls.filter((c) => c.path === '/api/bins/import')).toEqual([expect.objectContaining({ body: { csv: CSV }, headers: expect.objectContaining({ 'X-CSRF-Token': 'token-1' }) })]);
+    expect(screen.getByLabelText<HTMLTextAreaElement>('Or paste the CSV here').value).toBe('');
+  });
+
+  it('says nothing was imported, and why, when the server refuses the file', async () => {
+    fakeFetch((call) => {
+      if (call.path === '/api/bins/import/preview') return { status: 200, body: ALL_READY };
+      const issues = [{ path: 'line 2.code', message: 'Line 2, code: B-0004 is already on a bin in the crib. Leave the code empty to get the next free one.' }];
+      return { status: 400, body: { error: { code: 'IMPORT_INVALID', message: 'Nothing was imported: 1 of 2 rows have problems. Fix them and check the file again.', issues } } };
+    });
+    renderWithProviders(<BinImportPanel />);
+    await pasteCsv(CSV);
+    await userEvent.click(screen.getByRole('button', { name: 'Check file' }));
+    await waitFor(() => expect(importButton().disabled).toBe(false));
+    await userEvent.click(importButton());
+    const alert = await screen.findByRole('alert');
+    expect(alert.textContent).toContain('Nothing was imported: 1 of 2 rows have problems.');
+    expect(alert.textContent).toContain('Line 2, code: B-0004 is already on a bin in the crib.');
+  });
+
+  it('offers the template as a download', () => {
+    renderWithProviders(<BinImportPanel />);
+    const link = screen.getByRole('link', { name: 'Download a template' });
+    expect(link.getAttribute('href')).toBe('/api/bins/import/template.csv');
+    expect(link.hasAttribute('download')).toBe(true);
+  });
+});
+
+describe('StockExportPanel', () => {
+  it('links the bins and the ledger for the chosen days, and refuses an end before the start', async () => {
+    renderWithProviders(<StockExportPanel now={new Date(2026, 11, 14, 9, 30)} />);
+    expect(defaultLedgerRange(new Date(2026, 11, 14, 9, 30))).toEqual({ from: '2026-12-01', to: '2026-12-14' });
+    expect(screen.getByRole('link', { name: 'Export bins (CSV)' }).getAttribute('href')).toBe('/api/bins/export.csv');
+    expect(screen.getByRole('link', { name: 'Export ledger (CSV)' }).getAttribute('href')).toBe('/api/bins/ledger.csv?from=2026-12-01&to=2026-12-14');
+
+    const from = screen.getByLabelText('From');
+    await userEvent.clear(from);
+    await userEvent.type(from, '2026-12-20');
+    expect(screen.queryByRole('link', { name: 'Export ledger (CSV)' })).toBeNull();
+    expect(screen.getByRole<HTMLButtonElement>('button', { name: 'Export ledger (CSV)' }).disabled).toBe(true);
+    expect(screen.getByRole('alert').textContent).toBe('The end date is before the start date: swap them.');
+  });
+});

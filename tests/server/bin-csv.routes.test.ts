@@ -1,0 +1,266 @@
+import Papa from 'papaparse';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { importPreviewSchema, importResultSchema } from '@shared/schemas/bin-import';
+import { errorEnvelopeSchema } from '@shared/schemas/errors';
+import { addBinAs, blindRivetBin, post } from '../helpers/crib';
+import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+
+let t: TestApp;
+let qm: SignedInAgent;
+let member: SignedInAgent;
+
+beforeEach(async () => {
+  t = await buildTestApp();
+  await t.addCrew();
+  qm = await t.signIn('qm@example.org');
+  member = await t.signIn('member@example.org');
+});
+afterEach(() => t.close());
+
+const HEADER = 'code,kind,name,head,material,stem_material,diameter_32nds,grip_dash,length_16ths,unit,pack_size,unit_cost,notes,opening_stock';
+const csvOf = (...rows: string[]) => [HEADER, ...rows].join('\r\n');
+const binCount = async (who: SignedInAgent = qm) => ((await who.agent.get('/api/bins')).body as { meta: { total: number } }).meta.total;
+
+/** Reads a CSV answer as records by column name (the byte-order mark off). */
+function records(text: string): Record<string, string>[] {
+  return Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: true }).data;
+}
+
+const GOOD_BLIND = ',blind_structural,,dome,5056,steel,1/8,2,,each,100,0.12,,500';
+const GOOD_SCREW = ',Screw,Screw #8-32 × 1/2 pan head,,,,,,,each,50,0.09,,120';
+
+describe('POST /api/bins/import/preview', () => {
+  it('checks each row, naming the line and column of every problem, and creates nothing', async () => {
+    await addBinAs(qm, blindRivetBin());
+    const csv = csvOf(
+      GOOD_BLIND, // line 2
+      ',Solid rivet,,universal,2117-t4,,4,,6,each,100,0.03,"Top shelf,\nleft bin",200', // lines 3-4: a quoted note over two lines
+      ',rivet,,dome,5056,,4,2,,each,1,0.1,,0', // line 5
+      ',blind_general,,dome,5056,aluminium,4,,,each,1,0.1,,0', // line 6
+      ',blind_structural,,dome,5056,steel,5/32,7,,each,1,0.1,,0', // line 7
+      ',Screw,Screw #8-32 × 1/2,,,,,,,each,50,0.12345,,0', // line 8
+      'B-0001,nut,Nut #10-32 nylon insert,,,,,,,each,100,0.05,,0', // line 9
+      'B-0100,washer,Washer #10 flat,,,,,,,each,100,0.02,,300', // line 10
+      'b-0100,washer,Washer #10 flat,,,,,,,each,100,0.02,,300', // line 11
+    );
+    const res = await post(qm, '/api/bins/import/preview', { csv });
+    expect(res.status).toBe(200);
+    const preview = importPreviewSchema.strict().parse(res.body);
+    expect(preview).toMatchObject({ valid: 3, invalid: 6, canImport: false, fileErrors: [] });
+    expect(preview.columns).toEqual(HEADER.split(','));
+
+    const byLine = new Map(preview.rows.map((r) => [r.line, r]));
+    expect([...byLine.keys()]).toEqual([2, 3, 5, 6, 7, 8, 9, 10, 11]);
+    // Grip -2 covers 0.063–0.125 in: TM 10-5410-221-14/1 Table 4-3 (the IFI 114 convention).
+    expect(byLine.get(2)).toEqual({ line: 2, code: 'B-0002', ok: true, errors: [], designation: 'Blind, structural, dome, 5056, steel stem · 1/8 in · grip −2 (0.063–0.125 in)' });
+    // MS20470AD4-6: universal head, 2117-T4, 1/8 in, 3/8 in long (AC 43.13-1B para 4-57a).
+    expect(byLine.get(3)).toMatchObject({ code: 'B-0003', ok: true, designation: 'MS20470AD4-6' });
+    expect(byLine.get(10)).toMatchObject({ code: 'B-0100', ok: true, designation: 'Washer #10 flat' });
+
+    const errorsOn = (line: number) => byLine.get(line)!.errors;
+    expect(errorsOn(5)).toEqual([{ column: 'kind', message: expect.stringMatching(/^Line 5, kind: "rivet" is not a kind of bin\. Use one of: Blind rivet – structural, /) }]);
+    expect(errorsOn(6)).toEqual([{ column: 'grip_dash', message: 'Line 6, grip_dash: a blind rivet bin needs its grip dash, like 2 for 0.063–0.125 in.' }]);
+    expect(errorsOn(7)).toEqual([{ column: 'grip_dash', message: 'Line 7, grip_dash: use a grip dash from the table: 1 to 6, or 8.' }]);
+    expect(errorsOn(8)).toEqual([{ column: 'unit_cost', message: 'Line 8, unit_cost: give the unit cost to at most 4 decimals (a hundredth of a cent).' }]);
+    expect(errorsOn(9)).toEqual([{ column: 'code', message: 'Line 9, code: B-0001 is already on a bin in the crib. Leave the code empty to get the next free one.' }]);
+    expect(errorsOn(11)).toEqual([{ column: 'code', message: 'Line 11, code: B-0100 is also on line 10; each bin needs its own code.' }]);
+    expect(preview.rows.filter((r) => !r.ok).every((r) => r.errors.length > 0)).toBe(true);
+
+    expect(await binCount()).toBe(1);
+  });
+
+  it('reads kinds by label in any case, diameters as fractions, dashes with the trade’s leading dash, and a text/csv body', async () => {
+    const csv = csvOf(',BLIND RIVET - STRUCTURAL,,Dome,5056,Steel,-5,-3,,each,100,$0.14,,0', ',blind rivet – general purpose,,large flange,aluminum,aluminium,3/32 in,1,,each,100,0.05,,0');
+    const res = await qm.agent.post('/api/bins/import/preview').set('X-CSRF-Token', qm.csrf).type('text/csv').send(csv);
+    expect(res.status).toBe(200);
+    const preview = importPreviewSchema.parse(res.body);
+    expect(preview.rows.map((r) => r.errors)).toEqual([[], []]);
+    // Grip -3 covers 0.126–0.187 in, -1 covers 0.020–0.062 in: TM 10-5410-221-14/1 Table 4-3.
+    expect(preview.rows.map((r) => r.designation)).toEqual([
+      'Blind, structural, dome, 5056, steel stem · 5/32 in · grip −3 (0.126–0.187 in)',
+      'Blind, general purpose, large flange, aluminium, aluminium stem · 3/32 in · grip −1 (0.020–0.062 in)',
+    ]);
+  });
+
+  it('flags an empty file, a header without bins, unknown and missing columns, and cells that are not numbers', async () => {
+    const empty = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: ' \r\n' })).body);
+    expect(empty).toMatchObject({ rows: [], canImport: false, fileErrors: [{ column: '', message: expect.stringContaining('The file is empty') }] });
+
+    const headerOnly = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: HEADER })).body);
+    expect(headerOnly.fileErrors.map((e) => e.message)).toEqual(['The file has a header line but no bins below it.']);
+
+    const odd = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: 'Name,Colour,Pack size\nRivet tray,red,ten\n' })).body);
+    expect(odd.columns).toEqual(['name', 'colour', 'pack_size']);
+    expect(odd.fileErrors).toEqual([
+      { column: 'colour', message: 'Line 1, column "colour" is not one Gripline knows. Rename it to a column of the template, or delete it.' },
+      { column: 'kind', message: 'Line 1: the header has no "kind" column; every bin needs one.' },
+    ]);
+    expect(odd.rows[0]!.errors).toContainEqual({ column: 'pack_size', message: 'Line 2, pack_size: enter a number, not "ten".' });
+    expect(odd.canImport).toBe(false);
+  });
+
+  it('takes a file larger than the API’s usual body limit, refuses one over 2 MB, and is for the quartermaster only', async () => {
+    const many = csvOf(...Array.from({ length: 1500 }, (_, i) => `,screw,Screw #8-32 × ${i + 1}/16 pan head stainless,,,,,,,each,50,0.09,,10`));
+    expect(many.length).toBeGreaterThan(100_000);
+    const big = await post(qm, '/api/bins/import/preview', { csv: many });
+    expect(big.status).toBe(200);
+    expect(importPreviewSchema.parse(big.body)).toMatchObject({ valid: 1500, invalid: 0, canImport: true });
+    expect(big.body.rows[1499]).toMatchObject({ line: 1501, code: 'B-1500' });
+
+    const tooBig = await post(qm, '/api/bins/import/preview', { csv: 'x'.repeat(2_000_001) });
+    expect(tooBig.status).toBe(400);
+    expect(errorEnvelopeSchema.parse(tooBig.body).error.code).toBe('VALIDATION_FAILED');
+
+    const refused = await post(member, '/api/bins/import/preview', { csv: csvOf(GOOD_BLIND) });
+    expect(refused.status).toBe(403);
+    expect(refused.body.error.code).toBe('FORBIDDEN');
+    const lead = await t.signIn('lead@example.org');
+    expect((await post(lead, '/api/bins/import/preview', { csv: csvOf(GOOD_BLIND) })).status).toBe(200);
+    // Paths the CSV router does not know still reach the bins router, for members too.
+    expect((await member.agent.get('/api/bins')).status).toBe(200);
+  });
+});
+
+describe('POST /api/bins/import', () => {
+  it('refuses the whole file when one row is bad, and writes nothing', async () => {
+    await addBinAs(qm, blindRivetBin());
+    const before = await binCount();
+    const res = await post(qm, '/api/bins/import', { csv: csvOf(GOOD_BLIND, GOOD_SCREW, ',blind_structural,,dome,5056,steel,4,7,,each,1,0.1,,10') });
+    expect(res.status).toBe(400);
+    const { error } = errorEnvelopeSchema.parse(res.body);
+    expect(error.code).toBe('IMPORT_INVALID');
+    expect(error.message).toBe('Nothing was imported: 1 of 3 rows have problems. Fix them and check the file again.');
+    expect(error.issues).toEqual([{ path: 'line 4.grip_dash', message: 'Line 4, grip_dash: use a grip dash from the table: 1 to 6, or 8.' }]);
+    expect(await binCount()).toBe(before);
+    expect((await qm.agent.get('/api/bins/B-0002')).status).toBe(404);
+
+    const empty = await post(qm, '/api/bins/import', { csv: '' });
+    expect(empty.status).toBe(400);
+    expect(empty.body.error.issues[0].path).toBe('file');
+  });
+
+  it('creates every bin in one go, with its opening stock as the first ledger entry', async () => {
+    await addBinAs(qm, blindRivetBin());
+    const res = await post(qm, '/api/bins/import', { csv: csvOf(GOOD_BLIND, 'B-0050' + GOOD_SCREW) });
+    expect(res.status).toBe(201);
+    expect(importResultSchema.strict().parse(res.body)).toEqual({ created: 2, codes: ['B-0002', 'B-0050'] });
+
+    const blind = await qm.agent.get('/api/bins/B-0002');
+    expect(blind.body).toMatchObject({ onHand: 500, unitCost: 0.12, packSize: 100, designation: 'Blind, structural, dome, 5056, steel stem · 1/8 in · grip −2 (0.063–0.125 in)' });
+    const ledger = await qm.agent.get('/api/bins/B-0050/ledger');
+    expect(ledger.body.data).toEqual([expect.objectContaining({ kind: 'receive', quantity: 120, balanceAfter: 120, note: 'Opening stock', actor: expect.objectContaining({ name: 'Quinn Quartermaster' }) })]);
+    expect(await binCount()).toBe(3);
+
+    // The same file again: its named code is now taken, so nothing more is created.
+    const again = await post(qm, '/api/bins/import', { csv: csvOf(GOOD_BLIND, 'B-0050' + GOOD_SCREW) });
+    expect(again.status).toBe(400);
+    expect(again.body.error.issues).toEqual([{ path: 'line 3.code', message: expect.stringContaining('B-0050 is already on a bin') }]);
+    expect(await binCount()).toBe(3);
+  });
+});
+
+describe('GET /api/bins/export.csv', () => {
+  it('exports every bin so that the file imports into an empty crib with the same designations and stock', async () => {
+    await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
+    await addBinAs(qm, { kind: 'solid_rivet', head: 'countersunk', material: '2117-T4', diameter32: 4, length16: 3.5, unitCost: 0.0275, initialQuantity: 300, location: 'Drawer D1' });
+    await addBinAs(qm, { kind: 'drill_bit', name: 'Drill #40 jobber, cobalt', drillSize: '#40', unit: 'each', unitCost: 2.5, initialQuantity: 12, notes: 'Keep dry.\nOne box "spare", opened' });
+    await addBinAs(qm, { code: 'B-0200', kind: 'sealant_primer', name: '-Sealant, two-part, 6 oz', supplierPart: '+SP-6', unit: 'tube', initialQuantity: 4 });
+    expect((await post(member, '/api/bins/B-0001/draw', { quantity: 120 })).status).toBe(201);
+
+    const res = await qm.agent.get('/api/bins/export.csv');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
+    expect(res.headers['content-disposition']).toBe('attachment; filename="gripline-bins-2026-12-01.csv"');
+    const rows = records(res.text);
+    expect(rows.map((r) => r.code)).toEqual(['B-0001', 'B-0002', 'B-0003', 'B-0200']);
+    // MS20426AD4-3.5: 100° countersunk, 2117-T4, 1/8 in, half length written .5 (AC 43.13-1B para 4-57a).
+    expect(rows[1]).toMatchObject({ designation: 'MS20426AD4-3.5', length_16ths: '3.5', unit_cost: '0.0275', on_hand: '300', opening_stock: '300' });
+    expect(rows[0]).toMatchObject({ on_hand: '380', opening_stock: '380', grip_dash: '2', diameter_32nds: '4' });
+    expect(rows[3]).toMatchObject({ name: "'-Sealant, two-part, 6 oz", supplier_part: "'+SP-6" });
+
+    const before = (await qm.agent.get('/api/bins')).body.data as Record<string, unknown>[];
+    const fresh = await buildTestApp();
+    try {
+      await fresh.addCrew();
+      const freshQm = await fresh.signIn('qm@example.org');
+      const imported = await post(freshQm, '/api/bins/import', { csv: res.text });
+      expect(imported.status).toBe(201);
+      expect(imported.body.codes).toEqual(['B-0001', 'B-0002', 'B-0003', 'B-0200']);
+      const after = (await freshQm.agent.get('/api/bins')).body.data as Record<string, unknown>[];
+      const same = (bins: Record<string, unknown>[]) => bins.map(({ id: _id, lastCountedAt: _counted, ...rest }) => rest);
+      expect(same(after)).toEqual(same(before));
+      expect(after.map((b) => b.designation)).toEqual(before.map((b) => b.designation));
+    } finally {
+      await fresh.close();
+    }
+  });
+
+  it('is for the quartermaster and the lead only, as are the import and its template', async () => {
+    expect((await member.agent.get('/api/bins/export.csv')).status).toBe(403);
+    expect((await member.agent.get('/api/bins/import/template.csv')).status).toBe(403);
+    expect((await post(member, '/api/bins/import', { csv: csvOf(GOOD_BLIND) })).status).toBe(403);
+    expect((await (await t.anonymous()).agent.get('/api/bins/export.csv')).status).toBe(401);
+    expect(await binCount()).toBe(0);
+    const lead = await t.signIn('lead@example.org');
+    expect((await lead.agent.get('/api/bins/export.csv')).status).toBe(200);
+  });
+});
+
+describe('GET /api/bins/ledger.csv', () => {
+  const at = (iso: string) => {
+    t.clock.now = new Date(iso);
+  };
+
+  it('lists every entry of the days asked for, both ends included, oldest first', async () => {
+    at('2026-11-28T23:59:59.999Z');
+    await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
+    at('2026-11-29T00:00:00.000Z');
+    await post(member, '/api/bins/B-0001/draw', { quantity: 20, note: 'left flap' });
+    at('2026-11-30T13:30:00.000Z');
+    await post(qm, '/api/bins/B-0001/receive', { quantity: 100, unitCost: 0.13 });
+    at('2026-11-30T23:59:59.999Z');
+    await post(member, '/api/bins/B-0001/draw', { quantity: 5, assemblyId: 7, note: '=cmd|" /C calc"!A0' });
+    at('2026-12-01T00:00:00.000Z');
+    await post(member, '/api/bins/B-0001/draw', { quantity: 1 });
+
+    const res = await qm.agent.get('/api/bins/ledger.csv?from=2026-11-29&to=2026-11-30');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
+    expect(res.headers['content-disposition']).toBe('attachment; filename="gripline-ledger-2026-11-29-to-2026-11-30.csv"');
+    const rows = records(res.text);
+    expect(rows.map((r) => [r.at, r.kind, r.quantity, r.balance_after])).toEqual([
+      ['2026-11-29T00:00:00.000Z', 'draw', '-20', '480'],
+      ['2026-11-30T13:30:00.000Z', 'receive', '100', '580'],
+      ['2026-11-30T23:59:59.999Z', 'draw', '-5', '575'],
+    ]);
+    expect(rows[0]).toMatchObject({ bin_code: 'B-0001', designation: 'Blind, structural, dome, 5056, steel stem · 1/8 in · grip −2 (0.063–0.125 in)', unit_cost: '0.12', value: '-2.40', by: 'Mia Member', for_member: 'Mia Member', note: 'left flap', reverses_id: '' });
+    // A note that a spreadsheet would run as a formula stays text.
+    expect(rows[2]).toMatchObject({ note: `'=cmd|" /C calc"!A0`, assembly_id: '7', value: '-0.65', unit_cost: '0.13' });
+
+    const day = records((await qm.agent.get('/api/bins/ledger.csv?from=2026-11-28&to=2026-11-28')).text);
+    expect(day.map((r) => r.note)).toEqual(['Opening stock']);
+  });
+
+  it('answers 400 when the start is after the end or a date is malformed', async () => {
+    const reversed = await qm.agent.get('/api/bins/ledger.csv?from=2026-12-01&to=2026-11-01');
+    expect(reversed.status).toBe(400);
+    expect(reversed.body.error).toMatchObject({ code: 'VALIDATION_FAILED', issues: [{ path: 'to', message: 'The end date is before the start date: swap them.' }] });
+    for (const query of ['from=2026-13-01&to=2026-12-01', 'from=yesterday&to=2026-12-01', 'from=2026-11-01']) {
+      const res = await qm.agent.get(`/api/bins/ledger.csv?${query}`);
+      expect(res.status, query).toBe(400);
+      expect(res.body.error.code).toBe('VALIDATION_FAILED');
+    }
+    expect((await member.agent.get('/api/bins/ledger.csv?from=2026-11-01&to=2026-11-30')).status).toBe(403);
+  });
+});
+
+describe('GET /api/bins/import/template.csv', () => {
+  it('serves a header and two example rows that preview as valid', async () => {
+    const res = await qm.agent.get('/api/bins/import/template.csv');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
+    const preview = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: res.text })).body);
+    expect(preview).toMatchObject({ valid: 2, invalid: 0, canImport: true });
+    expect(preview.rows.map((r) => r.designation)).toEqual(['Blind, structural, dome, 5056, steel stem · 1/8 in · grip −2 (0.063–0.125 in)', 'Screw #8-32 × 1/2 pan head, stainless']);
+  });
+});

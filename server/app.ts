@@ -10,6 +10,8 @@ import { healthRouter } from './features/health/health.router';
 import { invitationsRouter } from './features/invitations/invitations.router';
 import { labelsRouter } from './features/labels/labels.router';
 import { binsRouter } from './features/stock/bins.router';
+import { binCsvRouter, binImportBodyParsers } from './features/stock/stock-csv.router';
+import { stockMoneyRouter } from './features/stock/money.router';
 import { mailRouter } from './features/mail/mail.router';
 import { passwordResetRouter } from './features/password-reset/password-reset.router';
 import { peopleRouter } from './features/people/people.router';
@@ -21,7 +23,7 @@ import { serviceDueRouter } from './features/tools/service-due.router';
 import { photosRouter, toolPhotosRouter } from './features/tools/photos.router';
 import { signoffsRouter } from './features/tools/signoffs.router';
 import { toolsRouter } from './features/tools/tools.router';
-import { loadUser } from './middleware/auth';
+import { loadUser, requireRole } from './middleware/auth';
 import { csrf } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { signInLimiters } from './middleware/rate-limit';
@@ -72,9 +74,11 @@ export function createApp(config: AppConfig) {
     next();
   });
   api.use('/health', healthRouter());
-  api.use(express.json({ limit: '100kb' }));
   api.use(session);
   api.use(loadUser(config.db));
+  // CSV imports may be large: only a signed-in quartermaster's body is read past the usual limit.
+  api.use('/bins/import', requireRole('quartermaster'), binImportBodyParsers());
+  api.use(express.json({ limit: '100kb' }));
   api.use(csrf.csrfSynchronisedProtection);
   api.use('/auth', authRouter(signInLimiters(config.rateLimit)));
   api.use('/auth/password-reset', passwordResetRouter());
@@ -91,7 +95,9 @@ export function createApp(config: AppConfig) {
   api.use('/signoffs', signoffsRouter());
   api.use('/settings', cribSettingsRouter());
   api.use('/labels', labelsRouter());
+  api.use('/bins', binCsvRouter());
   api.use('/bins', binsRouter());
+  api.use('/stock', stockMoneyRouter());
   api.use(apiNotFound);
   app.use('/api', api);
 

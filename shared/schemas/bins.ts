@@ -128,7 +128,12 @@ export const createBinBodySchema = binDefaults
   .extend({
     code: binCodeField.optional(),
     /** Opening stock, written to the ledger as the bin's first receipt. */
-    initialQuantity: z.number().int().min(0).max(1_000_000).default(0),
+    initialQuantity: z
+      .number({ error: 'Enter the opening stock, or 0 for an empty bin.' })
+      .int({ error: 'The opening stock is a whole number.' })
+      .min(0, { error: 'The opening stock cannot be negative.' })
+      .max(1_000_000, { error: 'That is more than a bin can hold.' })
+      .default(0),
   })
   .strict()
   .superRefine(binKindRules);

@@ -1,6 +1,8 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { createBrowserRouter } from 'react-router';
 import { AppShell, appShellLoader } from './routes/app/app-shell';
+import { BinDetailRoute, binDetailLoader } from './routes/app/bin-detail';
+import { BinsRoute, binsLoader } from './routes/app/bins';
 import { HomeRoute } from './routes/app/home';
 import { LoansRoute, loansLoader } from './routes/app/loans';
 import { ScanRoute } from './routes/app/scan';
@@ -49,6 +51,56 @@ export function createAppRouter(queryClient: QueryClient) {
           },
         },
         { path: 'loans', loader: loansLoader(queryClient), Component: LoansRoute, ErrorBoundary: RouteError },
+        { path: 'bins', loader: binsLoader(queryClient), Component: BinsRoute, ErrorBoundary: RouteError },
+        {
+          path: 'bins/import',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { BinImportRoute, binImportLoader } = await import('./routes/app/bin-import');
+            return { loader: binImportLoader(queryClient), Component: BinImportRoute };
+          },
+        },
+        {
+          path: 'bins/new',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { BinNewRoute, binNewLoader } = await import('./routes/app/bin-edit');
+            return { loader: binNewLoader(queryClient), Component: BinNewRoute };
+          },
+        },
+        { path: 'bins/:code', loader: binDetailLoader(queryClient), Component: BinDetailRoute, ErrorBoundary: RouteError },
+        {
+          path: 'bins/:code/edit',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { BinEditRoute, binEditLoader } = await import('./routes/app/bin-edit');
+            return { loader: binEditLoader(queryClient), Component: BinEditRoute };
+          },
+        },
+        {
+          path: 'restock',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { RestockRoute, restockLoader } = await import('./routes/app/restock');
+            return { loader: restockLoader(queryClient), Component: RestockRoute };
+          },
+        },
+        {
+          path: 'tab',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { TabRoute, tabLoader } = await import('./routes/app/tab');
+            return { loader: tabLoader(queryClient), Component: TabRoute };
+          },
+        },
+        {
+          path: 'spend',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { SpendRoute, spendLoader } = await import('./routes/app/spend');
+            return { loader: spendLoader(queryClient), Component: SpendRoute };
+          },
+        },
         {
           path: 'people',
           ErrorBoundary: RouteError,

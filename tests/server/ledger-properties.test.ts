@@ -18,10 +18,10 @@ type Op =
   | { op: 'reverse'; who: number; pick: number };
 
 const opArb: fc.Arbitrary<Op> = fc.oneof(
-  fc.record({ op: fc.constantFrom('draw', 'receive', 'writeOff', 'return'), who: fc.nat(2), n: fc.integer({ min: 1, max: 80 }) }),
-  fc.record({ op: fc.constant('count'), who: fc.nat(2), n: fc.nat(150) }),
-  fc.record({ op: fc.constant('reverse'), who: fc.nat(2), pick: fc.nat(1000) }),
-) as fc.Arbitrary<Op>;
+  fc.record({ op: fc.constantFrom<'draw' | 'receive' | 'writeOff' | 'return'>('draw', 'receive', 'writeOff', 'return'), who: fc.nat(2), n: fc.integer({ min: 1, max: 80 }) }),
+  fc.record({ op: fc.constant<'count'>('count'), who: fc.nat(2), n: fc.nat(150) }),
+  fc.record({ op: fc.constant<'reverse'>('reverse'), who: fc.nat(2), pick: fc.nat(1000) }),
+);
 
 function freshChapter() {
   const db = openDatabase(':memory:');

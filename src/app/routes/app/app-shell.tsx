@@ -25,11 +25,15 @@ const NAV_LINKS: { to: string; label: string; role: Role; primary?: boolean }[] 
   { to: '/scan', label: 'Scan', role: 'member', primary: true },
   { to: '/tools', label: 'Tools', role: 'member', primary: true },
   { to: '/loans', label: 'My loans', role: 'member', primary: true },
+  { to: '/bins', label: 'Bins', role: 'member' },
   { to: '/people', label: 'People', role: 'lead' },
   { to: '/mail', label: 'Sent mail', role: 'lead' },
   { to: '/overdue', label: 'Overdue', role: 'lead' },
   { to: '/service', label: 'Service', role: 'quartermaster' },
   { to: '/labels', label: 'Labels', role: 'quartermaster' },
+  { to: '/restock', label: 'Restock', role: 'quartermaster' },
+  { to: '/tab', label: 'My tab', role: 'member' },
+  { to: '/spend', label: 'Consumables', role: 'lead' },
   { to: '/signoffs', label: 'Sign-offs', role: 'lead' },
 ];
 

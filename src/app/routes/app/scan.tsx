@@ -1,27 +1,36 @@
 import { useState } from 'react';
 import { useNavigate } from 'react-router';
 import { TOOL_CODE_PATTERN } from '@shared/schemas/tools';
+import { BIN_CODE_PATTERN } from '@shared/stock/kinds';
 import { CameraScanner } from '@/features/tools/components/camera-scanner';
 import { CodeEntry } from '@/features/tools/components/code-entry';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page';
 
-/** Scan a label with the camera, a USB scanner or by typing: a tool code opens that tool. */
+/** Where a scanned label leads: a tool code opens the tool, a bin code the bin; anything else is not ours. */
+export function labelPath(raw: string): string | undefined {
+  const code = raw.trim().toUpperCase();
+  if (TOOL_CODE_PATTERN.test(code)) return `/tools/${code}`;
+  if (BIN_CODE_PATTERN.test(code)) return `/bins/${code}`;
+  return undefined;
+}
+
+/** Scan a label with the camera, a USB scanner or by typing: it opens that tool or bin. */
 export function ScanRoute() {
   const navigate = useNavigate();
   const [problem, setProblem] = useState<string>();
   const open = (raw: string) => {
-    const code = raw.trim().toUpperCase();
-    if (TOOL_CODE_PATTERN.test(code)) {
+    const path = labelPath(raw);
+    if (path) {
       setProblem(undefined);
-      void navigate(`/tools/${code}`);
+      void navigate(path);
     } else {
-      setProblem(`"${raw.slice(0, 40)}" is not a Gripline label. Tool codes look like T-0042.`);
+      setProblem(`"${raw.slice(0, 40)}" is not a Gripline label. Tool codes look like T-0042, bin codes like B-0107.`);
     }
   };
   return (
     <>
-      <PageHeader title="Scan" lead="Hold the label inside the frame. A USB scanner works too." />
+      <PageHeader title="Scan" lead="Hold a tool or bin label inside the frame. A USB scanner works too." />
       <div className="mx-auto flex max-w-lg flex-col gap-4">
         {problem && <Notice tone="warn">{problem}</Notice>}
         <CameraScanner onCode={open} />

@@ -27,7 +27,7 @@ export function CodeEntry({ onCode, autoFocus = false }: { onCode: (code: string
           autoCapitalize="characters"
           autoComplete="off"
           spellCheck={false}
-          placeholder="T-0042"
+          placeholder="T-0042 or B-0107"
           className="font-mono"
         />
       </div>

@@ -1,0 +1,50 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
+import { hasRole } from '@shared/roles';
+import { meQueryOptions } from '@/features/auth/api/get-me';
+import { binQueryOptions } from '@/features/stock/api/get-bins';
+import { ledgerQueryOptions } from '@/features/stock/api/get-ledger';
+import { BinActionsPanel } from '@/features/stock/components/bin-actions-panel';
+import { BinDetails, BinSummary } from '@/features/stock/components/bin-summary';
+import { LedgerList } from '@/features/stock/components/ledger-list';
+import { Card } from '@/components/ui/page';
+import { requireSignedIn } from './guards';
+
+const codeOf = (params: { code?: string }) => (params.code ?? '').toUpperCase();
+
+export const binDetailLoader = (queryClient: QueryClient) => async ({ request, params }: LoaderFunctionArgs) => {
+  await requireSignedIn(queryClient, request);
+  const code = codeOf(params);
+  void queryClient.prefetchQuery(ledgerQueryOptions(code));
+  await queryClient.ensureQueryData(binQueryOptions(code));
+  return null;
+};
+
+/** A bin's page, opened by scanning its label: what it holds, what you may do with it, its ledger. */
+export function BinDetailRoute() {
+  const code = codeOf(useParams());
+  const { data: me } = useSuspenseQuery(meQueryOptions());
+  const { data: bin } = useSuspenseQuery(binQueryOptions(code));
+  const isQuartermaster = !!me && hasRole(me.role, 'quartermaster');
+  return (
+    // On a phone: what it is and how many, then the actions, then the details; side by side on a wide screen.
+    <div className="grid items-start gap-4 lg:grid-cols-[3fr_2fr]">
+      <Card className="lg:col-start-1">
+        <BinSummary bin={bin} isQuartermaster={isQuartermaster} />
+      </Card>
+      <div className="flex flex-col gap-4 lg:col-start-2 lg:row-span-2 lg:row-start-1">
+        <BinActionsPanel bin={bin} />
+        <Link to="/scan" className="inline-flex min-h-12 items-center justify-center rounded-lg border-2 border-ink bg-card px-5 font-semibold">
+          Scan another label
+        </Link>
+      </div>
+      <Card className="lg:col-start-1">
+        <BinDetails bin={bin} isQuartermaster={isQuartermaster} />
+      </Card>
+      <div className="lg:col-span-2">
+        <LedgerList code={bin.code} isQuartermaster={isQuartermaster} />
+      </div>
+    </div>
+  );
+}

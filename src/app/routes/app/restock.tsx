@@ -1,0 +1,23 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router';
+import { restockQueryOptions } from '@/features/stock/api/get-restock';
+import { RestockList } from '@/features/stock/components/restock-list';
+import { PageHeader } from '@/components/ui/page';
+import { requireRole } from './guards';
+
+export const restockLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  await requireRole(queryClient, request, 'quartermaster');
+  await queryClient.ensureQueryData(restockQueryOptions());
+  return null;
+};
+
+export function RestockRoute() {
+  const { data } = useSuspenseQuery(restockQueryOptions());
+  return (
+    <>
+      <PageHeader title="Restock" lead="Bins at or below their reorder point, with the reorder quantity rounded up to whole packs." />
+      <RestockList items={data} />
+    </>
+  );
+}

@@ -1,0 +1,38 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { CountBody, CountResult, DrawBody, MoveBody, Movement, ReceiveBody, ReturnUnusedBody, ReverseBody, WriteOffBody } from '@shared/schemas/bins';
+import { api } from '@/lib/api-client';
+import { binKeys } from './keys';
+
+const path = (code: string, rest: string) => `/api/bins/${encodeURIComponent(code)}/${rest}`;
+
+/** An empty note is no note: leave it out of the body rather than write "" to the ledger. */
+function withoutEmptyNote<T extends { note?: string }>(body: T): T {
+  return body.note?.trim() ? body : { ...body, note: undefined };
+}
+
+/**
+ * A movement changes the bin's on-hand, its ledger, the bins list and the Restock list (a move
+ * changes two bins): refresh the whole stock family so every figure on screen agrees at once.
+ */
+function useStockMutation<B extends { note?: string }, R>(rest: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ code, body }: { code: string; body: B }) => api.post<R>(path(code, rest), withoutEmptyNote(body)),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: binKeys.all }),
+  });
+}
+
+export const useDraw = () => useStockMutation<DrawBody, Movement>('draw');
+export const useReturnUnused = () => useStockMutation<ReturnUnusedBody, Movement>('return');
+export const useReceive = () => useStockMutation<ReceiveBody, Movement>('receive');
+export const useCount = () => useStockMutation<CountBody, CountResult>('count');
+export const useMove = () => useStockMutation<MoveBody, Movement>('move');
+export const useWriteOff = () => useStockMutation<WriteOffBody, Movement>('write-off');
+
+export function useReverse() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ code, id, body }: { code: string; id: number; body: ReverseBody }) => api.post<Movement>(path(code, `ledger/${id}/reverse`), body),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: binKeys.all }),
+  });
+}

@@ -1,0 +1,109 @@
+import type { Bin } from '@shared/schemas/bins';
+import { BIN_KIND_LABELS, isRivetKind } from '@shared/stock/kinds';
+import { Notice } from '@/components/ui/notice';
+import { Code } from '@/components/ui/page';
+import { formatCents, formatCount, formatDate, formatQuantity, formatUnitCost, gripRangeText } from '../utils/format';
+
+function lowStockWords(bin: Bin, isQuartermaster: boolean): string {
+  const level = bin.onHand === 0 ? `${bin.code} is empty` : `Only ${formatQuantity(bin.onHand, bin.unit)} left`;
+  const point = `, at or below the reorder point of ${formatCount(bin.reorderPoint)}.`;
+  if (!isQuartermaster) return `${level}${point} The quartermaster has it on the Restock list.`;
+  const packs = bin.toOrder / bin.packSize;
+  const order = bin.packSize > 1 ? `${formatQuantity(bin.toOrder, bin.unit)} (${formatCount(packs)} pack${packs === 1 ? '' : 's'} of ${formatCount(bin.packSize)})` : formatQuantity(bin.toOrder, bin.unit);
+  return `${level}${point} Order ${order}${bin.supplier ? ` from ${bin.supplier}` : ''}.`;
+}
+
+/** The top of a scanned bin's screen: what it holds, how many, and whether it runs low. */
+export function BinSummary({ bin, isQuartermaster }: { bin: Bin; isQuartermaster: boolean }) {
+  return (
+    <section aria-labelledby="bin-designation" className="flex flex-col gap-3">
+      <div>
+        <p className="font-mono text-lg font-medium text-brass-deep">{bin.code}</p>
+        <h1 id="bin-designation" className="text-2xl font-bold leading-tight">
+          {bin.designation}
+        </h1>
+        <p className="text-steel">{BIN_KIND_LABELS[bin.kind]}</p>
+      </div>
+      <div className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
+        <p>
+          <span className="font-mono text-5xl font-bold tabular-nums" data-testid="bin-on-hand">
+            {formatCount(bin.onHand)}
+          </span>{' '}
+          <span className="text-lg">
+            {bin.unit} on hand
+          </span>
+        </p>
+        {bin.packSize > 1 && <p className="text-steel">packs of {formatCount(bin.packSize)}</p>}
+      </div>
+      {bin.low && (
+        <Notice tone="warn" title={bin.onHand === 0 ? 'Empty' : 'Low stock'}>
+          {lowStockWords(bin, isQuartermaster)}
+        </Notice>
+      )}
+    </section>
+  );
+}
+
+/** Where the bin lives, its spec details, cost and (for the quartermaster) its supplier, with the usual caution for rivets. */
+export function BinDetails({ bin, isQuartermaster }: { bin: Bin; isQuartermaster: boolean }) {
+  return (
+    <section aria-label={`About ${bin.code}`} className="flex flex-col gap-3">
+      <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1.5">
+        <dt className="text-steel">Location</dt>
+        <dd className="font-medium">{bin.location || 'not set'}</dd>
+        {bin.gripRange && bin.grip16 !== null && (
+          <>
+            <dt className="text-steel">Grip</dt>
+            <dd>
+              <Code>−{bin.grip16}</Code>: sheet stack <Code>{gripRangeText(bin.gripRange)}</Code>
+            </dd>
+          </>
+        )}
+        {(bin.holeDrill ?? bin.drillSize) && (
+          <>
+            <dt className="text-steel">{bin.kind === 'drill_bit' ? 'Drill size' : 'Hole drill'}</dt>
+            <dd>
+              <Code>{bin.holeDrill ?? bin.drillSize}</Code>
+            </dd>
+          </>
+        )}
+        <dt className="text-steel">Reorder point</dt>
+        <dd>{formatCount(bin.reorderPoint)}</dd>
+        <dt className="text-steel">Unit cost</dt>
+        <dd>
+          <Code>{formatUnitCost(bin.unitCost)}</Code> per {bin.unit === 'each' ? 'piece' : bin.unit}
+        </dd>
+        {isQuartermaster && (
+          <>
+            <dt className="text-steel">Stock value</dt>
+            <dd>{formatCents(bin.stockValueCents)}</dd>
+            <dt className="text-steel">Supplier</dt>
+            <dd>
+              {bin.supplier || 'not set'}
+              {bin.supplierPart && (
+                <>
+                  {' '}
+                  · part <Code>{bin.supplierPart}</Code>
+                </>
+              )}
+            </dd>
+            <dt className="text-steel">Lead time</dt>
+            <dd>
+              {bin.leadTimeDays} day{bin.leadTimeDays === 1 ? '' : 's'}
+            </dd>
+            <dt className="text-steel">Last counted</dt>
+            <dd>{bin.lastCountedAt ? formatDate(bin.lastCountedAt) : 'never'}</dd>
+          </>
+        )}
+      </dl>
+      {bin.notes && <p className="whitespace-pre-line">{bin.notes}</p>}
+      {isRivetKind(bin.kind) && (
+        <Notice tone="warn" title="Right rivet, right place">
+          {bin.kind === 'blind_general' ? 'General-purpose blind rivets are not for structural joints. ' : ''}
+          Use the rivet the kit’s plans call for (material, head, diameter and grip) and check the grip against the sheet stack. The plans,
+          the rivet maker’s instructions and, for certificated aircraft, approved data and a licensed mechanic govern.
+        </Notice>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,70 @@
+import { useMemo } from 'react';
+import { useTable } from '@tanstack/react-table';
+import type { Bin } from '@shared/schemas/bins';
+import { BLIND_GRIP_RANGES } from '@shared/stock/fasteners';
+import { BIN_KIND_LABELS, BIN_KINDS } from '@shared/stock/kinds';
+import { columnFilter, DataTable, listFeatures } from '@/components/ui/data-table';
+import { SelectField, TextField } from '@/components/ui/field';
+import { diameterText, gripDashText } from '../utils/format';
+import { binColumns, type SpecFilter } from './bin-columns';
+
+/** The rivet diameters a chapter shop stocks, as dashes in 32nds: 3/32 to 1/4 in. */
+const SHOP_DIAMETERS = [3, 4, 5, 6, 8];
+
+const KIND_FILTER = [{ value: '', label: 'All kinds' }, ...BIN_KINDS.map((k) => ({ value: k, label: BIN_KIND_LABELS[k] }))];
+const DIAMETER_FILTER = [{ value: '', label: 'Any diameter' }, ...SHOP_DIAMETERS.map((d) => ({ value: String(d), label: diameterText(d) }))];
+const GRIP_FILTER = [{ value: '', label: 'Any grip' }, ...BLIND_GRIP_RANGES.map((g) => ({ value: String(g.dash), label: gripDashText(g.dash, g) }))];
+
+const choices = (values: string[], any: string) => [{ value: '', label: any }, ...[...new Set(values.filter(Boolean))].sort().map((v) => ({ value: v, label: v }))];
+
+/** Every bin on the shelves: search, filter by kind, spec, shelf and low stock, sort, page. */
+export function BinTable({ bins }: { bins: Bin[] }) {
+  const table = useTable({
+    features: listFeatures,
+    columns: binColumns,
+    data: bins,
+    globalFilterFn: 'includesString',
+    initialState: { sorting: [{ id: 'code', desc: false }], pagination: { pageIndex: 0, pageSize: 25 } },
+  });
+  const materials = useMemo(() => choices(bins.map((b) => b.material ?? ''), 'Any material'), [bins]);
+  const locations = useMemo(() => choices(bins.map((b) => b.location), 'Any shelf'), [bins]);
+
+  const filterValue = (id: string) => columnFilter(table, id).value;
+  const setFilter = (id: string, value: string) => columnFilter(table, id).set(value);
+  const designation = table.getColumn('designation');
+  const spec = (designation?.getFilterValue() as SpecFilter | undefined) ?? {};
+  const setSpec = (part: keyof SpecFilter, value: string) => designation?.setFilterValue({ ...spec, [part]: value });
+  const lowOnly = filterValue('onHand') === 'low';
+  const activeFilters = ['kind', 'location'].filter((id) => filterValue(id) !== '').length + Object.values(spec).filter(Boolean).length;
+
+  return (
+    <div className="flex flex-col gap-3">
+      <TextField
+        label="Search code, designation or shelf"
+        type="search"
+        value={String(table.state.globalFilter ?? '')}
+        onChange={(e) => table.setGlobalFilter(e.target.value)}
+      />
+      <label className="flex min-h-12 cursor-pointer items-center gap-3 self-start rounded-lg border-2 border-rule bg-card px-3 font-semibold">
+        <input type="checkbox" className="size-5 accent-ink" checked={lowOnly} onChange={(e) => setFilter('onHand', e.target.checked ? 'low' : '')} />
+        Low stock only
+      </label>
+      <details className="rounded-lg border border-rule bg-card px-3" open={activeFilters > 0 || undefined}>
+        <summary className="flex min-h-12 cursor-pointer items-center font-semibold">
+          Filter by kind, size, material or shelf{activeFilters > 0 ? ` (${activeFilters} on)` : ''}
+        </summary>
+        <div className="grid gap-3 pb-3 sm:grid-cols-3">
+          <SelectField label="Kind" options={KIND_FILTER} value={filterValue('kind')} onChange={(e) => setFilter('kind', e.target.value)} />
+          <SelectField label="Diameter" options={DIAMETER_FILTER} value={spec.diameter32 ?? ''} onChange={(e) => setSpec('diameter32', e.target.value)} />
+          <SelectField label="Grip dash" hint="Blind rivets only." options={GRIP_FILTER} value={spec.grip16 ?? ''} onChange={(e) => setSpec('grip16', e.target.value)} />
+          <SelectField label="Material" options={materials} value={spec.material ?? ''} onChange={(e) => setSpec('material', e.target.value)} />
+          <SelectField label="Shelf" options={locations} value={filterValue('location')} onChange={(e) => setFilter('location', e.target.value)} />
+        </div>
+      </details>
+      <p className="text-sm text-steel" aria-live="polite">
+        Showing {table.getFilteredRowModel().rows.length} of {bins.length} bins
+      </p>
+      <DataTable table={table} caption="Bins on the shelves" empty="No bin matches these filters." />
+    </div>
+  );
+}

@@ -1,0 +1,50 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm, useWatch } from 'react-hook-form';
+import { toast } from 'sonner';
+import type { z } from 'zod';
+import { drawBodySchema, type BinForYou, type DrawBody } from '@shared/schemas/bins';
+import { TextField } from '@/components/ui/field';
+import { applyServerErrors } from '@/lib/errors';
+import { useDraw } from '../api/bin-actions';
+import { formatCents, formatQuantity, formatUnitCost } from '../utils/format';
+import { valueAtCost } from '../utils/value';
+import { ActionForm, Preview, QuantityInput } from './action-form';
+
+/**
+ * A member takes stock for their work; it goes on their tab at today's unit cost. Which assembly
+ * it is for stays optional (assemblies come later): a note says it for now.
+ */
+export function DrawForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void }) {
+  const draw = useDraw();
+  const form = useForm<z.input<typeof drawBodySchema>, unknown, DrawBody>({ resolver: zodResolver(drawBodySchema), defaultValues: { note: '' } });
+  const quantity = useWatch({ control: form.control, name: 'quantity' });
+  const wanted = Number.isInteger(quantity) && quantity > 0 ? quantity : undefined;
+
+  const submit = form.handleSubmit(async (body) => {
+    try {
+      const entry = await draw.mutateAsync({ code: bin.code, body });
+      toast.success(`You drew ${formatQuantity(-entry.quantity, bin.unit)} from ${bin.code}: ${formatCents(-entry.valueCents)} on your tab.`);
+      form.reset({ note: '' });
+      onDone?.();
+    } catch (err) {
+      form.setError('root', { message: applyServerErrors(err, form.setError, ['quantity', 'note']) });
+    }
+  });
+
+  return (
+    <ActionForm label="Draw" onSubmit={submit} problem={form.formState.errors.root?.message} submitLabel={`Draw from ${bin.code}`} busy={draw.isPending}>
+      <QuantityInput control={form.control} name="quantity" label="Quantity to draw" max={bin.onHand} hint={`${formatQuantity(bin.onHand, bin.unit)} on hand.`} />
+      {wanted !== undefined && (
+        <Preview>
+          Goes on your tab: <strong>{formatCents(valueAtCost(wanted, bin.unitCost))}</strong> ({formatQuantity(wanted, bin.unit)} at {formatUnitCost(bin.unitCost)})
+        </Preview>
+      )}
+      <TextField
+        label="Note (optional)"
+        hint="Which assembly or part it is for, like “left flap skin”."
+        error={form.formState.errors.note?.message}
+        {...form.register('note')}
+      />
+    </ActionForm>
+  );
+}

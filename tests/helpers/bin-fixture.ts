@@ -1,0 +1,49 @@
+import type { Bin, RestockItem } from '@shared/schemas/bins';
+import { blindGripRange, fastenerDesignation } from '@shared/stock/fasteners';
+import { isBlindKind } from '@shared/stock/kinds';
+
+let nextId = 1;
+
+/** A bin as GET /api/bins sends it; designation, grip range and low are derived the way the server derives them. */
+export function binFixture(code: string, over: Partial<Bin> = {}): Bin {
+  const base: Bin = {
+    id: nextId++,
+    code,
+    kind: 'screw',
+    name: '',
+    designation: '',
+    gripRange: null,
+    head: null,
+    material: null,
+    stemMaterial: null,
+    diameter32: null,
+    grip16: null,
+    length16: null,
+    drillSize: null,
+    holeDrill: null,
+    unit: 'each',
+    packSize: 100,
+    unitCost: 0.05,
+    supplier: 'Prairie Aero Supply',
+    supplierPart: '',
+    leadTimeDays: 14,
+    reorderPoint: 100,
+    reorderQty: 500,
+    location: 'Cabinet R, drawer 1',
+    notes: '',
+    onHand: 400,
+    low: false,
+    toOrder: 0,
+    stockValueCents: 0,
+    lastCountedAt: null,
+    ...over,
+  };
+  const designation = fastenerDesignation(base) ?? base.name;
+  const gripRange = isBlindKind(base.kind) && base.grip16 !== null ? (blindGripRange(base.grip16) ?? null) : null;
+  return { ...base, designation, gripRange, low: base.onHand <= base.reorderPoint, ...over };
+}
+
+/** A Restock line: the numbers the server works out are given, so a test reads them as data. */
+export function restockFixture(code: string, over: Partial<RestockItem> & Pick<RestockItem, 'toOrder' | 'packsToOrder' | 'orderCostCents'>): RestockItem {
+  return { ...binFixture(code, { onHand: 20, reorderPoint: 100, ...over }), ...over };
+}

@@ -26,7 +26,7 @@ export function BinSummary({ bin, isQuartermaster }: { bin: Bin; isQuartermaster
       </div>
       <div className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
         <p>
-          <span className="font-mono text-5xl font-bold tabular-nums" data-testid="bin-on-hand">
+          <span className="text-5xl font-bold tabular-nums" data-testid="bin-on-hand">
             {formatCount(bin.onHand)}
           </span>{' '}
           <span className="text-lg">

@@ -3,8 +3,7 @@ import BetterSqlite3 from 'better-sqlite3';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/seed/demo-chapter';
-import { launchChromium, startBuiltApp } from '../helpers/browser';
-import { writeQrVideo } from '../helpers/fake-camera';
+import { launchWithCameraOn, signedInPhone, startBuiltApp } from '../helpers/browser';
 
 let app: Awaited<ReturnType<typeof startBuiltApp>>;
 let browser: Browser;
@@ -15,14 +14,7 @@ beforeAll(async () => {
   const db = new BetterSqlite3(join(app.dir, 'gripline.db'), { readonly: true });
   code = (db.prepare("select code from tools where name = 'Rivet spacing fan, 10 hole'").get() as { code: string }).code;
   db.close();
-  const video = join(app.dir, 'label.y4m');
-  writeQrVideo(video, code);
-  // The fake camera's file is fixed per browser process: one launch per code.
-  browser = await launchChromium([
-    '--use-fake-ui-for-media-stream',
-    '--use-fake-device-for-media-stream',
-    `--use-file-for-fake-video-capture=${video}`,
-  ]);
+  browser = await launchWithCameraOn(app.dir, code);
 });
 afterAll(async () => {
   await browser?.close();
@@ -31,14 +23,7 @@ afterAll(async () => {
 
 describe('a member scanning a tool label with the phone camera', () => {
   it('sees the tool recognised, checks it out, and finds it under My loans', async () => {
-    const context = await browser.newContext({ viewport: { width: 360, height: 780 } });
-    await context.grantPermissions(['camera'], { origin: app.url });
-    const page = await context.newPage();
-    await page.goto(`${app.url}/sign-in`);
-    await page.getByLabel('E-mail').fill('member@example.org');
-    await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.getByRole('heading', { name: /Hello/ }).waitFor();
+    const page = await signedInPhone(browser, app.url, 'member@example.org', DEMO_PASSWORD);
 
     await page.getByRole('link', { name: 'Scan' }).click();
     await page.waitForURL(new RegExp(`/tools/${code}$`), { timeout: 15_000 });
@@ -53,6 +38,6 @@ describe('a member scanning a tool label with the phone camera', () => {
     const mine = page.getByRole('link', { name: new RegExp(`${code}.*Rivet spacing fan, 10 hole`) });
     await mine.waitFor();
     expect(await mine.isVisible()).toBe(true);
-    await context.close();
+    await page.context().close();
   });
 });

@@ -3,8 +3,7 @@ import BetterSqlite3 from 'better-sqlite3';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/seed/demo-chapter';
-import { launchChromium, startBuiltApp } from '../helpers/browser';
-import { writeQrVideo } from '../helpers/fake-camera';
+import { launchWithCameraOn, signedInPhone, startBuiltApp } from '../helpers/browser';
 
 let app: Awaited<ReturnType<typeof startBuiltApp>>;
 let browser: Browser;
@@ -22,13 +21,7 @@ beforeAll(async () => {
   const db = new BetterSqlite3(join(app.dir, 'gripline.db'), { readonly: true });
   bin = db.prepare("select code, on_hand as onHand from bins where kind = 'solid_rivet' and pack_size > 1 order by code limit 1").get() as typeof bin;
   db.close();
-  const video = join(app.dir, 'bin-label.y4m');
-  writeQrVideo(video, bin.code);
-  browser = await launchChromium([
-    '--use-fake-ui-for-media-stream',
-    '--use-fake-device-for-media-stream',
-    `--use-file-for-fake-video-capture=${video}`,
-  ]);
+  browser = await launchWithCameraOn(app.dir, bin.code);
 });
 afterAll(async () => {
   await browser?.close();
@@ -37,14 +30,7 @@ afterAll(async () => {
 
 describe('the quartermaster scanning a bin label with the phone camera', () => {
   it('opens the bin, receives a delivery, and sees on hand go up at once', async () => {
-    const context = await browser.newContext({ viewport: { width: 360, height: 780 } });
-    await context.grantPermissions(['camera'], { origin: app.url });
-    const page = await context.newPage();
-    await page.goto(`${app.url}/sign-in`);
-    await page.getByLabel('E-mail').fill('quartermaster@example.org');
-    await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.getByRole('heading', { name: /Hello/ }).waitFor();
+    const page = await signedInPhone(browser, app.url, 'quartermaster@example.org', DEMO_PASSWORD);
 
     await page.getByRole('link', { name: 'Scan' }).click();
     await page.waitForURL(new RegExp(`/bins/${bin.code}$`), { timeout: 15_000 });
@@ -62,6 +48,6 @@ describe('the quartermaster scanning a bin label with the phone camera', () => {
     const stored = onHandNow();
     expect(stored.onHand).toBe(bin.onHand + 250);
     expect(stored.ledger).toBe(stored.onHand);
-    await context.close();
+    await page.context().close();
   });
 });

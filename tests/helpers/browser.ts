@@ -1,9 +1,10 @@
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { chromium, type Browser } from 'playwright-core';
+import { chromium, type Browser, type Page } from 'playwright-core';
 import { readEnv } from '../../server/env';
 import { CLIENT_DIR, startGripline, type RunningGripline } from '../../server/main';
+import { writeQrVideo } from './fake-camera';
 
 export const CHROMIUM = '/usr/bin/chromium';
 export const CHROMIUM_FLAGS = [
@@ -42,4 +43,27 @@ export async function startBuiltApp(): Promise<RunningGripline & { dir: string }
       rmSync(dir, { recursive: true, force: true });
     },
   };
+}
+
+/**
+ * Chromium whose fake camera shows a QR label of `code` (the video file is fixed per browser
+ * process: one launch per code).
+ */
+export async function launchWithCameraOn(dir: string, code: string): Promise<Browser> {
+  const video = join(dir, `${code}.y4m`);
+  writeQrVideo(video, code);
+  return launchChromium(['--use-fake-ui-for-media-stream', '--use-fake-device-for-media-stream', `--use-file-for-fake-video-capture=${video}`]);
+}
+
+/** A phone-sized page with the camera allowed, signed in as `email`, on its home page. */
+export async function signedInPhone(browser: Browser, url: string, email: string, password: string): Promise<Page> {
+  const context = await browser.newContext({ viewport: { width: 360, height: 780 } });
+  await context.grantPermissions(['camera'], { origin: url });
+  const page = await context.newPage();
+  await page.goto(`${url}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password', { exact: true }).fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: /Hello/ }).waitFor();
+  return page;
 }

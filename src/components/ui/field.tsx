@@ -7,7 +7,8 @@ interface FieldShellProps {
   children: (ids: { id: string; describedBy: string | undefined }) => ReactNode;
 }
 
-function FieldShell({ label, hint, error, children }: FieldShellProps) {
+/** Label, hint and error around any control; the control gets the ids that tie them together. */
+export function FieldShell({ label, hint, error, children }: FieldShellProps) {
   const id = useId();
   const hintId = hint ? `${id}-hint` : undefined;
   const errorId = error ? `${id}-error` : undefined;

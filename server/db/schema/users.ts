@@ -10,6 +10,8 @@ export const users = sqliteTable(
     role: text({ enum: ['member', 'quartermaster', 'lead'] }).notNull(),
     passwordHash: text().notNull(),
     phone: text(),
+    /** How this person types rivet line lengths: inches or millimetres. */
+    preferredUnit: text({ enum: ['in', 'mm'] }).notNull().default('in'),
     /** Set when the lead deactivates the person; they keep their history but cannot sign in. */
     deactivatedAt: integer({ mode: 'timestamp_ms' }),
     createdAt: integer({ mode: 'timestamp_ms' })

@@ -10,6 +10,7 @@ import { healthRouter } from './features/health/health.router';
 import { invitationsRouter } from './features/invitations/invitations.router';
 import { labelsRouter } from './features/labels/labels.router';
 import { binsRouter } from './features/stock/bins.router';
+import { estimateRouter } from './features/estimate/estimate.router';
 import { binCsvRouter, binImportBodyParsers } from './features/stock/stock-csv.router';
 import { stockMoneyRouter } from './features/stock/money.router';
 import { mailRouter } from './features/mail/mail.router';
@@ -98,6 +99,7 @@ export function createApp(config: AppConfig) {
   api.use('/bins', binCsvRouter());
   api.use('/bins', binsRouter());
   api.use('/stock', stockMoneyRouter());
+  api.use('/estimate', estimateRouter());
   api.use(apiNotFound);
   app.use('/api', api);
 

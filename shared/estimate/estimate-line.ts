@@ -1,0 +1,139 @@
+import { BLIND_GRIP_RANGES, blindGripForStack, inchFraction, solidLengthDash } from '../stock/fasteners';
+import type { RivetHead } from '../stock/kinds';
+import {
+  DEFAULT_MAX_PITCH_DIAMETERS,
+  drillSequence,
+  familyOf,
+  MIN_PITCH_DIAMETERS,
+  minEdgeDiameters,
+  MM_PER_INCH,
+  SOFT_RIVET_CAUTION,
+  TEMP_FASTENER_FOR_DRILL,
+  type EstimateRivetKind,
+} from './rivet-rules';
+
+export type LengthUnit = 'in' | 'mm';
+
+export interface RivetLineInput {
+  length: number;
+  rows?: number;
+  pitch?: number;
+  holesPerRow?: number;
+  edgeDistance?: number;
+  stack: number[];
+  structural?: boolean;
+  rivet: { kind: EstimateRivetKind; head: RivetHead; diameter32: number; material?: string };
+}
+
+export interface EstimateNotice {
+  code: string;
+  message: string;
+}
+
+export interface LineOptions {
+  unit: LengthUnit;
+  /** The build's own edge distance floor, in inches. */
+  edgeFloorIn?: number | null;
+  maxPitchDiameters?: number;
+  /** A bin's own hole drill for this rivet, replacing the usual final drill. */
+  finalDrillOverride?: string | null;
+}
+
+export interface LineEstimate {
+  holesPerRow: number;
+  holes: number;
+  pitch: number;
+  edgeDistance: number;
+  grip: number | null;
+  drillSequence: string[];
+  tempFasteners: Record<string, number>;
+  warnings: EstimateNotice[];
+}
+
+/** A line the estimator must refuse: the code and the words say why. */
+export interface LineError extends EstimateNotice {
+  error: true;
+}
+
+const clean = (x: number) => Math.round(x * 1e6) / 1e6;
+const fmt = (x: number, unit: LengthUnit) => `${clean(x)} ${unit}`;
+
+/**
+ * One rivet line: holes, actual pitch, edge distance, grip, drill steps and temporary fasteners.
+ * Lengths are in `unit`; the rivet diameter is converted to it for the spacing rules.
+ */
+export function estimateLine(line: RivetLineInput, options: LineOptions): LineEstimate | LineError {
+  const { unit } = options;
+  const toUnit = (inches: number) => (unit === 'mm' ? inches * MM_PER_INCH : inches);
+  const toInches = (x: number) => (unit === 'mm' ? x / MM_PER_INCH : x);
+  const { kind, head, diameter32 } = line.rivet;
+  const d = toUnit(diameter32 / 32);
+  const dia = `${inchFraction(diameter32, 32)} in`;
+  const warnings: EstimateNotice[] = [];
+
+  if (kind === 'blind-general' && line.structural) {
+    return { error: true, code: 'SOFT_RIVET_ON_STRUCTURE', message: `A general-purpose blind rivet cannot go on a structural line. ${SOFT_RIVET_CAUTION}` };
+  }
+
+  const minEdge = minEdgeDiameters(head) * d;
+  let edge: number;
+  if (line.edgeDistance !== undefined) {
+    edge = line.edgeDistance;
+    if (edge < minEdge - 1e-9) {
+      warnings.push({
+        code: 'EDGE_BELOW_MINIMUM',
+        message: `Edge distance ${fmt(edge, unit)} is below the published minimum of ${minEdgeDiameters(head)}D = ${fmt(minEdge, unit)} for a ${dia} ${head === 'countersunk' ? 'countersunk ' : ''}rivet.`,
+      });
+    }
+  } else {
+    edge = Math.max(minEdge, options.edgeFloorIn ? toUnit(options.edgeFloorIn) : 0);
+  }
+
+  const span = line.length - 2 * edge;
+  if (span <= 1e-9) {
+    return {
+      error: true,
+      code: 'LINE_TOO_SHORT',
+      message: `A line of ${fmt(line.length, unit)} is too short for two holes ${fmt(edge, unit)} from each end; it needs more than ${fmt(2 * edge, unit)}.`,
+    };
+  }
+  const holesPerRow = line.holesPerRow ?? Math.ceil(span / line.pitch! - 1e-9) + 1;
+  const pitch = span / (holesPerRow - 1);
+  const minPitch = MIN_PITCH_DIAMETERS * d;
+  if (pitch < minPitch - 1e-9) {
+    return {
+      error: true,
+      code: 'PITCH_BELOW_MINIMUM',
+      message: `${holesPerRow} holes give a pitch of ${fmt(pitch, unit)}, below the published minimum of 3D = ${fmt(minPitch, unit)} for a ${dia} rivet. Use fewer holes or a wider pitch.`,
+    };
+  }
+  const maxD = options.maxPitchDiameters ?? DEFAULT_MAX_PITCH_DIAMETERS;
+  if (pitch > maxD * d + 1e-9) {
+    warnings.push({ code: 'PITCH_ABOVE_MAXIMUM', message: `The pitch of ${fmt(pitch, unit)} is above the chapter's maximum of ${maxD}D = ${fmt(maxD * d, unit)}.` });
+  }
+
+  const stackIn = toInches(line.stack.reduce((s, t) => s + t, 0));
+  let grip: number | null;
+  if (familyOf(kind) === 'solid') {
+    grip = solidLengthDash(stackIn, diameter32);
+  } else {
+    grip = blindGripForStack(stackIn) ?? null;
+    const longest = BLIND_GRIP_RANGES.at(-1)!;
+    if (grip === null && stackIn > longest.max) {
+      warnings.push({ code: 'STACK_BEYOND_LONGEST_GRIP', message: `The stack of ${stackIn.toFixed(3)} in is beyond the longest grip, −${longest.dash} (${longest.min.toFixed(3)}–${longest.max.toFixed(3)} in).` });
+    } else if (grip === null) {
+      grip = BLIND_GRIP_RANGES[0]!.dash;
+      warnings.push({ code: 'STACK_BELOW_SHORTEST_GRIP', message: `The stack of ${stackIn.toFixed(3)} in is thinner than the shortest grip range (from ${BLIND_GRIP_RANGES[0]!.min.toFixed(3)} in).` });
+    }
+  }
+
+  const rows = line.rows ?? 1;
+  const holes = holesPerRow * rows;
+  const steps = drillSequence(kind, diameter32, options.finalDrillOverride);
+  const tempFasteners: Record<string, number> = {};
+  for (const step of steps) {
+    const size = TEMP_FASTENER_FOR_DRILL[step];
+    if (size) tempFasteners[size] = (tempFasteners[size] ?? 0) + Math.ceil(holes / 3);
+  }
+  return { holesPerRow, holes, pitch: clean(pitch), edgeDistance: clean(edge), grip, drillSequence: steps, tempFasteners, warnings };
+}

@@ -1,0 +1,93 @@
+import { DEFAULT_WASTE_PERCENT, type EstimateRivetKind } from './rivet-rules';
+import { estimateLine, type EstimateNotice, type LengthUnit, type LineEstimate, type LineOptions, type RivetLineInput } from './estimate-line';
+import type { RivetHead } from '../stock/kinds';
+
+export interface EstimateInput {
+  unit: LengthUnit;
+  wastePercent?: number;
+  lines: RivetLineInput[];
+}
+
+export interface EstimateOptions extends Omit<LineOptions, 'unit' | 'finalDrillOverride'> {
+  /** The chapter's waste allowance when the input gives none. */
+  defaultWastePercent?: number;
+  /** A bin's own hole drill per rivet line (same order as the lines), when known. */
+  finalDrillOverrides?: (string | null | undefined)[];
+}
+
+/** One kind of rivet the assembly needs: what a bin must stock. */
+export interface FastenerNeed {
+  kind: EstimateRivetKind;
+  head: RivetHead;
+  material: string | null;
+  diameter32: number;
+  /** Blind: grip dash; solid: length dash. */
+  grip: number | null;
+  rivets: number;
+  withWaste: number;
+  lines: number[];
+}
+
+export interface EstimateTotals {
+  rivets: number;
+  rivetsWithWaste: number;
+  drillHoles: Record<string, number>;
+  tempFasteners: Record<string, number>;
+}
+
+export interface EstimateResult {
+  lines: LineEstimate[];
+  totals: EstimateTotals;
+  warnings: EstimateNotice[];
+  /** Not part of the /api/estimate answer: the needs by fastener, the tool sizes, the waste used. */
+  needs: FastenerNeed[];
+  nosepieces: { kind: 'blind' | 'solid'; diameter32: number; head: RivetHead }[];
+  wastePercent: number;
+}
+
+export interface EstimateErrors {
+  errors: (EstimateNotice & { line: number })[];
+}
+
+const add = (into: Record<string, number>, from: Record<string, number>) => {
+  for (const [k, v] of Object.entries(from)) into[k] = (into[k] ?? 0) + v;
+};
+
+/**
+ * The whole estimate: every line, the totals, the needs by fastener with the waste allowance
+ * applied to each need and rounded up. Lines the rules refuse come back as errors instead.
+ */
+export function estimate(input: EstimateInput, options: EstimateOptions = {}): EstimateResult | EstimateErrors {
+  const wastePercent = input.wastePercent ?? options.defaultWastePercent ?? DEFAULT_WASTE_PERCENT;
+  const results = input.lines.map((line, i) =>
+    estimateLine(line, { ...options, unit: input.unit, finalDrillOverride: options.finalDrillOverrides?.[i] }),
+  );
+  const errors = results.flatMap((r, i) => ('error' in r ? [{ code: r.code, message: `Line ${i + 1}: ${r.message}`, line: i }] : []));
+  if (errors.length > 0) return { errors };
+  const lines = results as LineEstimate[];
+
+  const totals: EstimateTotals = { rivets: 0, rivetsWithWaste: 0, drillHoles: {}, tempFasteners: {} };
+  const needs = new Map<string, FastenerNeed>();
+  const nosepieces = new Map<string, EstimateResult['nosepieces'][number]>();
+  lines.forEach((l, i) => {
+    const rivet = input.lines[i]!.rivet;
+    totals.rivets += l.holes;
+    for (const step of l.drillSequence) totals.drillHoles[step] = (totals.drillHoles[step] ?? 0) + l.holes;
+    add(totals.tempFasteners, l.tempFasteners);
+    const key = [rivet.kind, rivet.head, rivet.material ?? '', rivet.diameter32, l.grip ?? ''].join('|');
+    const need = needs.get(key) ?? { kind: rivet.kind, head: rivet.head, material: rivet.material ?? null, diameter32: rivet.diameter32, grip: l.grip, rivets: 0, withWaste: 0, lines: [] };
+    need.rivets += l.holes;
+    need.lines.push(i);
+    needs.set(key, need);
+    const family = rivet.kind === 'solid' ? 'solid' : 'blind';
+    nosepieces.set(`${family}|${rivet.diameter32}|${family === 'solid' ? rivet.head : ''}`, { kind: family, diameter32: rivet.diameter32, head: rivet.head });
+  });
+  for (const need of needs.values()) {
+    need.withWaste = Math.ceil(need.rivets * (1 + wastePercent / 100) - 1e-9);
+    totals.rivetsWithWaste += need.withWaste;
+  }
+  const warnings = lines.flatMap((l, i) => l.warnings.map((w) => ({ code: w.code, message: `Line ${i + 1}: ${w.message}` })));
+  return { lines, totals, warnings, needs: [...needs.values()], nosepieces: [...nosepieces.values()], wastePercent };
+}
+
+export const isEstimateErrors = (r: EstimateResult | EstimateErrors): r is EstimateErrors => 'errors' in r;

@@ -1,0 +1,61 @@
+import { z } from 'zod';
+import { ESTIMATE_DIAMETERS, ESTIMATE_RIVET_KINDS } from '../estimate/rivet-rules';
+import { RIVET_HEADS } from '../stock/kinds';
+
+const positiveLength = (what: string) =>
+  z.number({ error: `Enter the ${what} as a number.` }).positive({ error: `The ${what} must be more than 0.` }).max(100_000, { error: `That ${what} is too large.` });
+
+export const rivetSpecSchema = z.object({
+  kind: z.enum(ESTIMATE_RIVET_KINDS, { error: 'The rivet kind is blind-structural, blind-general or solid.' }),
+  head: z.enum(RIVET_HEADS, { error: 'The head is dome, countersunk or flange.' }),
+  diameter32: z
+    .number({ error: 'Enter the rivet diameter in 32nds of an inch, like 4 for 1/8 in.' })
+    .int({ error: 'The diameter is a whole number of 32nds.' })
+    .refine((d) => (ESTIMATE_DIAMETERS as readonly number[]).includes(d), { error: 'Use a diameter of 3, 4, 5, 6 or 8 (32nds: 3/32 to 1/4 in).' }),
+  material: z.string().trim().min(1).max(40).optional(),
+});
+
+export const rivetLineSchema = z
+  .object({
+    length: positiveLength('line length'),
+    rows: z.number().int({ error: 'Rows are a whole number.' }).min(1, { error: 'A line has at least 1 row.' }).max(20, { error: 'At most 20 rows in one line.' }).optional(),
+    pitch: positiveLength('pitch').optional(),
+    holesPerRow: z.number().int({ error: 'Holes per row are a whole number.' }).min(2, { error: 'A row has at least 2 holes.' }).max(10_000).optional(),
+    edgeDistance: positiveLength('edge distance').optional(),
+    stack: z
+      .array(positiveLength('sheet thickness'), { error: 'Give the sheet stack as a list of thicknesses.' })
+      .min(1, { error: 'Give at least one sheet thickness.' })
+      .max(10, { error: 'At most 10 sheets in a stack.' }),
+    structural: z.boolean().optional(),
+    rivet: rivetSpecSchema,
+  })
+  .refine((l) => l.pitch !== undefined || l.holesPerRow !== undefined, { error: 'Give a target pitch or the holes per row.', path: ['pitch'] });
+export type RivetLine = z.infer<typeof rivetLineSchema>;
+
+export const estimateBodySchema = z.object({
+  unit: z.enum(['in', 'mm'], { error: 'unit is "in" or "mm".' }),
+  wastePercent: z.number({ error: 'The waste allowance is a percentage, like 5.' }).min(0, { error: 'Waste cannot be below 0 %.' }).max(100, { error: 'Waste is at most 100 %.' }).optional(),
+  lines: z.array(rivetLineSchema, { error: 'Send the rivet lines as a list.' }).min(1, { error: 'Send at least one rivet line.' }).max(20_000, { error: 'At most 20,000 lines at a time.' }),
+});
+export type EstimateBody = z.infer<typeof estimateBodySchema>;
+
+const notice = z.object({ code: z.string(), message: z.string() });
+const counts = z.record(z.string(), z.number());
+
+export const lineEstimateSchema = z.object({
+  holesPerRow: z.number(),
+  holes: z.number(),
+  pitch: z.number(),
+  edgeDistance: z.number(),
+  grip: z.number().nullable(),
+  drillSequence: z.array(z.string()),
+  tempFasteners: counts,
+  warnings: z.array(notice),
+});
+
+export const estimateResponseSchema = z.object({
+  lines: z.array(lineEstimateSchema),
+  totals: z.object({ rivets: z.number(), rivetsWithWaste: z.number(), drillHoles: counts, tempFasteners: counts }),
+  warnings: z.array(notice),
+});
+export type EstimateResponse = z.infer<typeof estimateResponseSchema>;

@@ -1,0 +1,85 @@
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { estimateResponseSchema } from '@shared/schemas/estimate';
+import { post } from '../helpers/crib';
+import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+
+let t: TestApp;
+let member: SignedInAgent;
+
+beforeEach(async () => {
+  t = await buildTestApp();
+  await t.addCrew();
+  member = await t.signIn('member@example.org');
+});
+afterEach(() => t.close());
+
+const rivet = { kind: 'blind-structural', head: 'dome', diameter32: 5 };
+
+describe('POST /api/estimate', () => {
+  it('answers the contract for two lines, in inches', async () => {
+    const res = await post(member, '/api/estimate', {
+      unit: 'in',
+      lines: [
+        { length: 20, pitch: 1, edgeDistance: 0.375, stack: [0.032, 0.032], structural: true, rivet },
+        { length: 12, holesPerRow: 11, rows: 2, stack: [0.025, 0.04], rivet: { kind: 'solid', head: 'countersunk', diameter32: 4, material: '2117-T4' } },
+      ],
+    });
+    expect(res.status).toBe(200);
+    expect(estimateResponseSchema.strict().parse(res.body)).toBeTruthy();
+    // Worked check (our own arithmetic from the hole-count rule): 20 in, e 0.375, p 1.0 → 21 holes at 0.9625 in.
+    expect(res.body.lines[0]).toEqual({
+      holesPerRow: 21,
+      holes: 21,
+      pitch: 0.9625,
+      edgeDistance: 0.375,
+      grip: 2,
+      drillSequence: ['#40', '#30', '#20'],
+      tempFasteners: { '3/32': 7, '1/8': 7, '5/32': 7 },
+      warnings: [],
+    });
+    // Solid 1/8 countersunk: e = 2.5D = 0.3125 in; 11 holes over 11.375 in → 1.1375 in; grip 0.065 + 0.1875 → 5/16.
+    expect(res.body.lines[1]).toMatchObject({ holesPerRow: 11, holes: 22, pitch: 1.1375, edgeDistance: 0.3125, grip: 5, drillSequence: ['#40', '#30'] });
+    // The chapter's default waste of 5 %: 21 → ⌈22.05⌉ = 23, 22 → ⌈23.1⌉ = 24.
+    expect(res.body.totals).toEqual({
+      rivets: 43,
+      rivetsWithWaste: 47,
+      drillHoles: { '#40': 43, '#30': 43, '#20': 21 },
+      tempFasteners: { '3/32': 15, '1/8': 15, '5/32': 7 },
+    });
+    expect(res.body.warnings).toEqual([]);
+  });
+
+  it('reports warnings at the line and at the top', async () => {
+    const res = await post(member, '/api/estimate', { unit: 'mm', wastePercent: 0, lines: [{ length: 300, holesPerRow: 3, edgeDistance: 5, stack: [1, 1], rivet }] });
+    expect(res.status).toBe(200);
+    expect(res.body.lines[0].warnings.map((w: { code: string }) => w.code)).toEqual(['EDGE_BELOW_MINIMUM', 'PITCH_ABOVE_MAXIMUM']);
+    expect(res.body.warnings.map((w: { code: string }) => w.code)).toEqual(['EDGE_BELOW_MINIMUM', 'PITCH_ABOVE_MAXIMUM']);
+    expect(res.body.lines[0].pitch).toBe(145);
+    expect(res.body.totals.rivetsWithWaste).toBe(3);
+  });
+
+  it.each([
+    ['PITCH_BELOW_MINIMUM', { length: 20, pitch: 0.2, stack: [0.04], rivet }],
+    ['LINE_TOO_SHORT', { length: 0.6, pitch: 1, stack: [0.04], rivet }],
+    ['SOFT_RIVET_ON_STRUCTURE', { length: 20, pitch: 1, stack: [0.04], structural: true, rivet: { ...rivet, kind: 'blind-general' } }],
+  ])('refuses impossible input with 400 %s', async (code, bad) => {
+    const res = await post(member, '/api/estimate', { unit: 'in', lines: [{ length: 10, pitch: 1, stack: [0.04], rivet }, bad] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe(code);
+    expect(res.body.error.message).toMatch(/^Line 2: /);
+    expect(res.body.error.issues[0].path).toBe('lines.1');
+  });
+
+  it('answers malformed bodies with 400 VALIDATION_FAILED in words, and needs a signed-in person', async () => {
+    const noPitch = await post(member, '/api/estimate', { unit: 'in', lines: [{ length: 10, stack: [0.04], rivet }] });
+    expect(noPitch.status).toBe(400);
+    expect(noPitch.body.error.code).toBe('VALIDATION_FAILED');
+    expect(noPitch.body.error.message).toContain('Give a target pitch or the holes per row');
+    const badDia = await post(member, '/api/estimate', { unit: 'in', lines: [{ length: 10, pitch: 1, stack: [0.04], rivet: { ...rivet, diameter32: 7 } }] });
+    expect(badDia.status).toBe(400);
+    const badUnit = await post(member, '/api/estimate', { unit: 'cm', lines: [] });
+    expect(badUnit.status).toBe(400);
+    const anon = await t.anonymous();
+    expect((await post(anon, '/api/estimate', { unit: 'in', lines: [{ length: 10, pitch: 1, stack: [0.04], rivet }] })).status).toBe(401);
+  });
+});

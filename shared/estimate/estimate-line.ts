@@ -68,7 +68,7 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
   const toInches = (x: number) => (unit === 'mm' ? x / MM_PER_INCH : x);
   const { kind, head, diameter32 } = line.rivet;
   const d = toUnit(diameter32 / 32);
-  const dia = `${inchFraction(diameter32, 32)} in`;
+  const dia = () => `${inchFraction(diameter32, 32)} in`;
   const warnings: EstimateNotice[] = [];
 
   if (kind === 'blind-general' && line.structural) {
@@ -82,7 +82,7 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
     if (edge < minEdge - 1e-9) {
       warnings.push({
         code: 'EDGE_BELOW_MINIMUM',
-        message: `Edge distance ${fmt(edge, unit)} is below the published minimum of ${minEdgeDiameters(head)}D = ${fmt(minEdge, unit)} for a ${dia} ${head === 'countersunk' ? 'countersunk ' : ''}rivet.`,
+        message: `Edge distance ${fmt(edge, unit)} is below the published minimum of ${minEdgeDiameters(head)}D = ${fmt(minEdge, unit)} for a ${dia()} ${head === 'countersunk' ? 'countersunk ' : ''}rivet.`,
       });
     }
   } else {
@@ -104,7 +104,7 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
     return {
       error: true,
       code: 'PITCH_BELOW_MINIMUM',
-      message: `${holesPerRow} holes give a pitch of ${fmt(pitch, unit)}, below the published minimum of 3D = ${fmt(minPitch, unit)} for a ${dia} rivet. Use fewer holes or a wider pitch.`,
+      message: `${holesPerRow} holes give a pitch of ${fmt(pitch, unit)}, below the published minimum of 3D = ${fmt(minPitch, unit)} for a ${dia()} rivet. Use fewer holes or a wider pitch.`,
     };
   }
   const maxD = options.maxPitchDiameters ?? DEFAULT_MAX_PITCH_DIAMETERS;
@@ -112,7 +112,9 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
     warnings.push({ code: 'PITCH_ABOVE_MAXIMUM', message: `The pitch of ${fmt(pitch, unit)} is above the chapter's maximum of ${maxD}D = ${fmt(maxD * d, unit)}.` });
   }
 
-  const stackIn = toInches(line.stack.reduce((s, t) => s + t, 0));
+  let stackSum = 0;
+  for (const t of line.stack) stackSum += t;
+  const stackIn = toInches(stackSum);
   let grip: number | null;
   if (familyOf(kind) === 'solid') {
     grip = solidLengthDash(stackIn, diameter32);
@@ -131,9 +133,10 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
   const holes = holesPerRow * rows;
   const steps = drillSequence(kind, diameter32, options.finalDrillOverride);
   const tempFasteners: Record<string, number> = {};
+  const perStep = Math.ceil(holes / 3);
   for (const step of steps) {
     const size = TEMP_FASTENER_FOR_DRILL[step];
-    if (size) tempFasteners[size] = (tempFasteners[size] ?? 0) + Math.ceil(holes / 3);
+    if (size) tempFasteners[size] = (tempFasteners[size] ?? 0) + perStep;
   }
   return { holesPerRow, holes, pitch: clean(pitch), edgeDistance: clean(edge), grip, drillSequence: steps, tempFasteners, warnings };
 }

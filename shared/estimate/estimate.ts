@@ -59,9 +59,9 @@ const add = (into: Record<string, number>, from: Record<string, number>) => {
  */
 export function estimate(input: EstimateInput, options: EstimateOptions = {}): EstimateResult | EstimateErrors {
   const wastePercent = input.wastePercent ?? options.defaultWastePercent ?? DEFAULT_WASTE_PERCENT;
-  const results = input.lines.map((line, i) =>
-    estimateLine(line, { ...options, unit: input.unit, finalDrillOverride: options.finalDrillOverrides?.[i] }),
-  );
+  const shared: LineOptions = { ...options, unit: input.unit };
+  const overrides = options.finalDrillOverrides;
+  const results = input.lines.map((line, i) => estimateLine(line, overrides?.[i] ? { ...shared, finalDrillOverride: overrides[i] } : shared));
   const errors = results.flatMap((r, i) => ('error' in r ? [{ code: r.code, message: `Line ${i + 1}: ${r.message}`, line: i }] : []));
   if (errors.length > 0) return { errors };
   const lines = results as LineEstimate[];

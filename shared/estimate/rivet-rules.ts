@@ -37,6 +37,16 @@ export const familyOf = (kind: EstimateRivetKind): 'solid' | 'blind' => (kind ==
  * (common practice: open the hole one rivet size at a time). `finalOverride` is a bin's own hole drill.
  */
 export function drillSequence(kind: EstimateRivetKind, diameter32: number, finalOverride?: string | null): string[] {
+  const key = `${familyOf(kind)}|${diameter32}|${finalOverride ?? ''}`;
+  let steps = sequences.get(key);
+  if (!steps) sequences.set(key, (steps = buildSequence(kind, diameter32, finalOverride)));
+  return [...steps];
+}
+
+/** Few distinct sequences exist; each is worked out once. */
+const sequences = new Map<string, readonly string[]>();
+
+function buildSequence(kind: EstimateRivetKind, diameter32: number, finalOverride?: string | null): string[] {
   const table = FINAL_DRILL[familyOf(kind)];
   const steps = [PILOT_DRILL];
   for (const d of ESTIMATE_DIAMETERS) {

@@ -1,0 +1,47 @@
+/**
+ * Estimate throughput: 1,000 and 10,000 rivet lines through the shared estimate, the code the API
+ * and the assembly editor run. Prints the median time of several runs and the 10x-input ratio.
+ */
+import { estimate, isEstimateErrors } from '../../shared/estimate/estimate';
+import type { RivetLineInput } from '../../shared/estimate/estimate-line';
+
+const kinds = ['blind-structural', 'blind-general', 'solid'] as const;
+const heads = ['dome', 'countersunk', 'flange'] as const;
+const gauges = [0.016, 0.02, 0.025, 0.032, 0.04, 0.05, 0.063];
+
+/** Deterministic, varied lines: lengths 6–48 in, pitch 0.8–1.5 in, two or three sheets. */
+function lines(n: number): RivetLineInput[] {
+  let seed = 42;
+  const rnd = () => ((seed = (seed * 1_103_515_245 + 12_345) % 2 ** 31) / 2 ** 31);
+  return Array.from({ length: n }, (_, i) => ({
+    length: 6 + rnd() * 42,
+    pitch: 0.8 + rnd() * 0.7,
+    rows: 1 + (i % 2),
+    stack: Array.from({ length: 2 + (i % 2) }, () => gauges[Math.floor(rnd() * gauges.length)]!),
+    rivet: { kind: kinds[i % 3]!, head: heads[i % 2]!, diameter32: [3, 4, 5][i % 3]!, material: i % 3 === 2 ? '2117-T4' : '5056' },
+  }));
+}
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.floor(s.length / 2)]!;
+}
+
+function time(n: number, runs = 15): number {
+  const input = { unit: 'in' as const, lines: lines(n) };
+  for (let i = 0; i < 5; i++) estimate(input); // warm up
+  const times: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const start = performance.now();
+    const r = estimate(input);
+    times.push(performance.now() - start);
+    if (isEstimateErrors(r)) throw new Error(`bench input refused: ${r.errors[0]!.message}`);
+  }
+  return median(times);
+}
+
+const small = time(1_000);
+const large = time(10_000);
+console.log(`estimate  1,000 lines: ${small.toFixed(2)} ms (median of 15)`);
+console.log(`estimate 10,000 lines: ${large.toFixed(2)} ms (median of 15; target < 50 ms)`);
+console.log(`estimate 10x-input time ratio: ${(large / small).toFixed(2)} (target < 12)`);

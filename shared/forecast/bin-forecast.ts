@@ -1,0 +1,146 @@
+/**
+ * One bin's forecast: weekly demand, projected on hand, safety stock, reorder point, EOQ and the
+ * suggested order, and whether the bin needs a reorder alert (with the reason in words).
+ */
+import { HORIZON_WEEKS, meanAndStdDev, projectOnHand, type ExpectedReceipt } from './demand';
+import { inverseNormal } from './inverse-normal';
+import { ceilWhole, eoq, reorderPoint, safetyStock, suggestedOrder } from './inventory';
+
+export const DEFAULT_SERVICE_LEVEL = 0.95;
+const WEEKS_PER_YEAR = 52;
+
+export type BinForecastInput = {
+  onHand: number;
+  leadTimeDays: number;
+  /** Units per pack: orders are whole packs. */
+  packSize: number;
+  /** Dollars per unit; 0 when unknown (then no EOQ: the order is the shortfall). */
+  unitCost: number;
+  /** Planned demand per week (from spreadAssemblyDemand), or null when no assembly plans this bin. */
+  weeklyPlanned: readonly number[] | null;
+  /** Net consumption per past week (from weeklyDrawHistory), oldest first; [] when none. */
+  history: readonly number[];
+  expectedReceipts?: readonly ExpectedReceipt[];
+  /** Chance of not running out during a lead time, 0.5 ≤ level < 1. */
+  serviceLevel?: number;
+  /** S: dollars per order placed. */
+  orderCost: number;
+  /** H as a yearly fraction of unit cost (0.25 = 25 % a year). */
+  holdingRate: number;
+  /** Weeks to forecast when there is no plan to take the length from. */
+  horizonWeeks?: number;
+};
+
+export type BinForecast = {
+  /** Per week: the plan when there is one, else the history's weekly mean. */
+  weeklyDemand: number[];
+  demandSource: 'planned' | 'history';
+  /** On hand at the end of each week (may be negative). */
+  projected: number[];
+  meanWeekly: number;
+  sigmaWeekly: number;
+  z: number;
+  leadTimeWeeks: number;
+  leadTimeDemand: number;
+  safetyStock: number;
+  safetyStockExact: number;
+  reorderPoint: number;
+  reorderPointExact: number;
+  annualDemand: number;
+  eoq: number;
+  shortfall: number;
+  suggestedOrder: number;
+  needsAlert: boolean;
+  /** Index of the first week inside the lead time whose projected on hand is below safety stock (0 = this week). */
+  weekBelowSafetyStock: number | null;
+  /** Why it needs an alert, or why not; weeks in words count from 1 = this week. */
+  reason: string;
+};
+
+function requireRange(name: string, value: number, ok: boolean): void {
+  if (!(Number.isFinite(value) && ok)) throw new RangeError(`${name} is out of range: ${value}`);
+}
+
+/** Expected demand over a lead time of `weeks` (may be fractional); past the horizon, the horizon's mean. */
+export function demandOverWeeks(weeklyDemand: readonly number[], weeks: number): number {
+  const { mean } = meanAndStdDev(weeklyDemand);
+  let total = 0;
+  for (let w = 0; w < weeks; w++) total += (weeklyDemand[w] ?? mean) * Math.min(1, weeks - w);
+  return total;
+}
+
+const units = (n: number) => String(Math.round(n * 10) / 10);
+const leadTimeWords = (days: number) => (days % 7 === 0 ? `${days / 7}-week` : `${days}-day`);
+
+export function binForecast(input: BinForecastInput): BinForecast {
+  const { onHand, leadTimeDays, packSize, unitCost, weeklyPlanned, history, expectedReceipts = [] } = input;
+  const { serviceLevel = DEFAULT_SERVICE_LEVEL, orderCost, holdingRate, horizonWeeks = HORIZON_WEEKS } = input;
+  requireRange('onHand', onHand, true);
+  requireRange('leadTimeDays', leadTimeDays, leadTimeDays >= 0);
+  requireRange('unitCost', unitCost, unitCost >= 0);
+  requireRange('serviceLevel', serviceLevel, serviceLevel >= 0.5 && serviceLevel < 1);
+  requireRange('holdingRate', holdingRate, holdingRate >= 0);
+
+  const { mean: meanWeekly, stdDev: sigmaWeekly } = meanAndStdDev(history);
+  const demandSource = weeklyPlanned ? 'planned' : 'history';
+  const weeklyDemand = weeklyPlanned ? [...weeklyPlanned] : new Array<number>(horizonWeeks).fill(meanWeekly);
+  const projected = projectOnHand({ onHand, weeklyDemand, expectedReceipts });
+
+  const z = inverseNormal(serviceLevel);
+  const leadTimeWeeks = leadTimeDays / 7;
+  const leadTimeDemand = demandOverWeeks(weeklyDemand, leadTimeWeeks);
+  const safetyStockExact = safetyStock({ z, sigmaWeekly, leadTimeWeeks });
+  const reorderPointExact = reorderPoint({ leadTimeDemand, safetyStock: safetyStockExact });
+  const safety = ceilWhole(safetyStockExact);
+  const reorder = ceilWhole(reorderPointExact);
+
+  const annualDemand = meanAndStdDev(weeklyDemand).mean * WEEKS_PER_YEAR;
+  const holdingCost = unitCost * holdingRate;
+  const economic = holdingCost > 0 ? eoq({ annualDemand, orderCost, holdingCostPerUnitYear: holdingCost }) : 0;
+
+  // Weeks that start before an order placed now would arrive.
+  let weekBelowSafetyStock: number | null = null;
+  let lowestInLeadTime = Infinity;
+  for (let w = 0; w < Math.min(leadTimeWeeks, projected.length); w++) {
+    const level = projected[w]!;
+    lowestInLeadTime = Math.min(lowestInLeadTime, level);
+    if (weekBelowSafetyStock === null && level < safety) weekBelowSafetyStock = w;
+  }
+  // A bin nothing draws from has a reorder point of 0: an empty one is not a reason to order.
+  const atReorderPoint = reorder > 0 && onHand <= reorder;
+  const shortfall = Math.max(0, atReorderPoint ? reorder - onHand : 0, weekBelowSafetyStock === null ? 0 : safety - lowestInLeadTime);
+  const needsAlert = atReorderPoint || weekBelowSafetyStock !== null;
+
+  const lead = leadTimeWords(leadTimeDays);
+  const reasons: string[] = [];
+  if (atReorderPoint) reasons.push(`On hand ${units(onHand)} is at or below the reorder point ${reorder}`);
+  if (weekBelowSafetyStock !== null) {
+    const when = weekBelowSafetyStock === 0 ? 'this week' : `in week ${weekBelowSafetyStock + 1}`;
+    reasons.push(`Projected to fall below safety stock (${safety}) ${when}, inside the ${lead} lead time`);
+  }
+  const reason =
+    reasons.join('; ') ||
+    `On hand ${units(onHand)} is above the reorder point ${reorder} and stays at or above safety stock (${safety}) through the ${lead} lead time`;
+
+  return {
+    weeklyDemand,
+    demandSource,
+    projected,
+    meanWeekly,
+    sigmaWeekly,
+    z,
+    leadTimeWeeks,
+    leadTimeDemand,
+    safetyStock: safety,
+    safetyStockExact,
+    reorderPoint: reorder,
+    reorderPointExact,
+    annualDemand,
+    eoq: economic,
+    shortfall,
+    suggestedOrder: suggestedOrder({ eoq: economic, shortfall, packSize }),
+    needsAlert,
+    weekBelowSafetyStock,
+    reason,
+  };
+}

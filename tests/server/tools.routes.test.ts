@@ -175,9 +175,17 @@ describe('holds', () => {
     expect((await post(qm, '/api/tools/T-0001/checkout')).status).toBe(201);
   });
 
-  it('refuses a hold on an available tool', async () => {
+  it('sets an available tool aside for the person at once, for the chapter’s hold time', async () => {
     await addTool({ name: 'Spacing fan', category: 'spacing_fan' });
-    expect((await post(member, '/api/tools/T-0001/holds')).body.error.code).toBe('TOOL_AVAILABLE');
+    const held = await post(member, '/api/tools/T-0001/holds');
+    expect(held.status).toBe(201);
+    expect(held.body).toMatchObject({ code: 'T-0001', status: 'offered', position: 1 });
+    const tool = await member.agent.get('/api/tools/T-0001');
+    expect(tool.body.status).toBe('held');
+    expect(tool.body.forYou.actions).toContain('check_out');
+    expect(tool.body.forYou.yourHold).toMatchObject({ status: 'offered', offerExpiresAt: new Date(t.clock.now.getTime() + 48 * 3600_000).toISOString() });
+    expect((await post(qm, '/api/tools/T-0001/checkout')).body.error.code).toBe('TOOL_HELD');
+    expect((await post(member, '/api/tools/T-0001/checkout')).status).toBe(201);
   });
 });
 

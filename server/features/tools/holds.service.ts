@@ -42,12 +42,16 @@ export function offerToNextInQueue(ctx: ServiceContext, tool: ToolRow, now: Date
   };
 }
 
+/**
+ * Joins the queue for a tool someone else has; a tool on the shelf is set aside for this person
+ * at once (held for the chapter's hold time), as when a member reserves the kit for an assembly.
+ */
 export function placeHold(ctx: ServiceContext, user: UserRow, code: string) {
   const now = ctx.now();
   return ctx.db.transaction(() => {
     const tool = findToolByCode(ctx.db, code);
     if (!tool) throw new HttpError(404, 'TOOL_NOT_FOUND', `No tool has the code ${code}.`);
-    if (tool.status === 'available') throw new HttpError(409, 'TOOL_AVAILABLE', `${tool.code} is available now: check it out instead of waiting.`);
+    if (tool.status === 'available') return setAside(ctx, tool, user, now);
     if (tool.status === 'lost' || tool.status === 'retired') {
       throw new HttpError(409, 'TOOL_UNAVAILABLE', `${tool.code} is ${tool.status === 'lost' ? 'marked lost' : 'retired'}; a hold would never be filled.`);
     }
@@ -57,6 +61,14 @@ export function placeHold(ctx: ServiceContext, user: UserRow, code: string) {
     recordToolEvent(ctx.db, { toolId: tool.id, actorId: user.id, at: now, action: 'hold_placed', detail: `${user.name} joined the queue` });
     return { id: hold.id, code: tool.code, status: hold.status, position: queuePosition(ctx.db, tool.id, hold.id) };
   });
+}
+
+function setAside(ctx: ServiceContext, tool: ToolRow, user: UserRow, now: Date) {
+  const until = new Date(now.getTime() + readCribSettings(ctx.db).holdHours * HOUR_MS);
+  const hold = ctx.db.insert(holds).values({ toolId: tool.id, userId: user.id, createdAt: now, status: 'offered', offeredAt: now, offerExpiresAt: until }).returning().get();
+  ctx.db.update(tools).set({ status: 'held', statusNote: null, updatedAt: now }).where(eq(tools.id, tool.id)).run();
+  recordToolEvent(ctx.db, { toolId: tool.id, actorId: user.id, at: now, action: 'held', fromStatus: 'available', toStatus: 'held', detail: `Set aside for ${user.name} until ${until.toISOString()}` });
+  return { id: hold.id, code: tool.code, status: hold.status, position: 1 };
 }
 
 export async function cancelHold(ctx: ServiceContext, user: UserRow, code: string): Promise<void> {

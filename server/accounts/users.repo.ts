@@ -43,7 +43,7 @@ export function insertUser(
 export function updateUser(
   db: Executor,
   id: number,
-  values: Partial<Pick<UserRow, 'role' | 'passwordHash' | 'deactivatedAt' | 'name'>>,
+  values: Partial<Pick<UserRow, 'role' | 'passwordHash' | 'deactivatedAt' | 'name' | 'preferredUnit'>>,
 ): UserRow | undefined {
   return db.update(users).set(values).where(eq(users.id, id)).returning().get();
 }

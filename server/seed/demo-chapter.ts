@@ -2,6 +2,7 @@ import type { Role } from '@shared/roles';
 import { hashPassword } from '../accounts/passwords';
 import { countUsers, insertUser } from '../accounts/users.repo';
 import type { Database } from '../db/client';
+import { seedDemoBuilds } from './demo-builds';
 import { seedDemoCrib } from './demo-crib';
 import { seedDemoStock } from './demo-stock';
 
@@ -25,5 +26,6 @@ export async function seedDemoChapter(db: Database): Promise<boolean> {
   });
   await seedDemoCrib(db);
   seedDemoStock(db);
+  seedDemoBuilds(db);
   return true;
 }

@@ -109,6 +109,13 @@ export const buildSchema = z.object({
 });
 export type Build = z.infer<typeof buildSchema>;
 export const buildListSchema = z.object({ data: z.array(buildSchema) });
+export const assemblyListSchema = z.object({ data: z.array(assemblySchema) });
+
+const flag = z.enum(['true', 'false'], { error: 'Use true or false.' }).transform((v) => v === 'true');
+/** GET /api/builds: your own builds; `all=true` (quartermaster or lead) lists everyone's. */
+export const buildListQuerySchema = z.object({ all: flag.default(false) });
+/** GET /api/assemblies: a member sees their own; a quartermaster or lead sees all unless `mine=true`. */
+export const assemblyListQuerySchema = z.object({ status: z.enum(ASSEMBLY_STATUSES, { error: 'The status is planned, in_progress or done.' }).optional(), mine: flag.default(false) });
 
 const binRef = z.object({ code: z.string(), designation: z.string(), onHand: z.number(), location: z.string() });
 
@@ -130,7 +137,8 @@ export const billLineSchema = z.object({
 });
 export type BillLine = z.infer<typeof billLineSchema>;
 
-export const KIT_ROLES = ['puller', 'rivet_gun', 'nosepiece', 'rivet_set', 'drill_bit', 'temporary_fastener_tray', 'deburring_tool'] as const;
+export const KIT_ROLES = ['puller', 'rivet_gun', 'nosepiece', 'rivet_set', 'bucking_bar', 'drill_bit', 'temporary_fastener_tray', 'deburring_tool'] as const;
+export type KitRole = (typeof KIT_ROLES)[number];
 /** A crib tool the assembly needs, and whether one is free now. */
 export const kitItemSchema = z.object({
   role: z.enum(KIT_ROLES),

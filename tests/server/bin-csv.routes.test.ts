@@ -3,6 +3,8 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { importPreviewSchema, importResultSchema } from '@shared/schemas/bin-import';
 import { errorEnvelopeSchema } from '@shared/schemas/errors';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
+import { giveAssemblies } from '../helpers/planning';
+import { findUserByEmail } from '../../server/accounts/users.repo';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
@@ -213,6 +215,7 @@ describe('GET /api/bins/ledger.csv', () => {
 
   it('lists every entry of the days asked for, both ends included, oldest first', async () => {
     at('2026-11-28T23:59:59.999Z');
+    giveAssemblies(t.db, findUserByEmail(t.db, 'member@example.org')!.id, [7]);
     await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
     at('2026-11-29T00:00:00.000Z');
     await post(member, '/api/bins/B-0001/draw', { quantity: 20, note: 'left flap' });

@@ -159,6 +159,27 @@ describe('refusals', () => {
     expect(undo.status).toBe(409);
     expect(undo.body.error).toMatchObject({ code: 'INSUFFICIENT_STOCK', message: expect.stringContaining('only 40 on hand') });
   });
+
+  it('lets a draw name only the drawing member’s own assembly: 400 ASSEMBLY_NOT_YOURS otherwise, and nothing written', async () => {
+    const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));
+    const build = await post(member, '/api/builds', { name: 'Tool chest' });
+    const lid = await post(member, `/api/builds/${build.body.id}/assemblies`, { name: 'Lid', unit: 'in' });
+    expect(lid.status).toBe(201);
+
+    const own = await post(member, `/api/bins/${bin.code}/draw`, { quantity: 10, assemblyId: lid.body.id });
+    expect(own.status).toBe(201);
+    expect(own.body).toMatchObject({ kind: 'draw', quantity: -10, assemblyId: lid.body.id });
+
+    for (const [who, assemblyId] of [[qm, lid.body.id], [member, 9999]] as const) {
+      const res = await post(who, `/api/bins/${bin.code}/draw`, { quantity: 5, assemblyId });
+      expect(res.status).toBe(400);
+      expect(res.headers['content-type']).toMatch(/json/);
+      expect(res.body.error.code).toBe('ASSEMBLY_NOT_YOURS');
+      expect(res.body.error.message).toBe(`Assembly ${assemblyId} is not one of your assemblies. Choose one of your own, or leave the assembly out.`);
+    }
+    const ledger = await member.agent.get(`/api/bins/${bin.code}/ledger`);
+    expect(ledger.body.data.map((m: { quantity: number }) => m.quantity)).toEqual([-10, 100]);
+  });
 });
 
 describe('what a scan offers', () => {

@@ -26,6 +26,22 @@ describe('the demo chapter', () => {
       now,
     ).n;
     expect(dueForCalibration).toBe(1);
+    // Builds across the next six months: most assemblies planned, a few begun, one done.
+    expect(one<{ n: number }>('select count(*) as n from builds').n).toBeGreaterThanOrEqual(3);
+    const statuses = db.$client.prepare('select status, count(*) as n from assemblies group by status').all() as { status: string; n: number }[];
+    const byStatus = Object.fromEntries(statuses.map((r) => [r.status, r.n]));
+    expect(byStatus.done).toBe(1);
+    expect(byStatus.in_progress).toBeGreaterThanOrEqual(2);
+    expect(byStatus.planned).toBeGreaterThanOrEqual(5);
+    const total = statuses.reduce((s, r) => s + r.n, 0);
+    expect(total).toBeGreaterThanOrEqual(8);
+    expect(total).toBeLessThanOrEqual(12);
+    const lastFinish = one<{ at: number }>('select max(planned_finish) as at from assemblies').at;
+    expect(lastFinish).toBeGreaterThan(now + 120 * 86_400_000);
+    expect(lastFinish).toBeLessThanOrEqual(now + 190 * 86_400_000);
+    // Draws name the assemblies already begun, and only those.
+    const drawnFor = db.$client.prepare('select distinct a.status from stock_movements m join assemblies a on a.id = m.assembly_id').all() as { status: string }[];
+    expect(drawnFor.map((r) => r.status).sort()).toEqual(['done', 'in_progress']);
     expect(await seedDemoChapter(db)).toBe(false);
     db.$client.close();
   }, SEEDING_MS);

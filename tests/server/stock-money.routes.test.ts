@@ -1,6 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { paymentSchema, spendSchema, tabListSchema, tabSchema } from '@shared/schemas/stock-money';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
+import { giveAssemblies } from '../helpers/planning';
 import { buildTestApp, type Crew, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 // Expected money is worked out here as quantity × unit cost in whole cents (arithmetic, no outside source).
@@ -31,6 +32,7 @@ beforeEach(async () => {
   qm = await t.signIn('qm@example.org');
   member = await t.signIn('member@example.org');
   lead = await t.signIn('lead@example.org');
+  giveAssemblies(t.db, crew.member.id, [7, 8]);
 });
 afterEach(() => t.close());
 

@@ -1,0 +1,71 @@
+import { estimate, isEstimateErrors, type EstimateInput, type EstimateResult } from '@shared/estimate/estimate';
+import type { AssemblyEstimate, KitItem } from '@shared/schemas/builds';
+import type { ServiceContext } from '../../context';
+import type { Executor } from '../../db/client';
+import type { UserRow } from '../../db/schema/users';
+import { readPlanningSettings } from '../../settings/planning-settings';
+import type { AssemblyInBuild } from './assemblies.repo';
+import { assemblyToRead } from './assemblies.service';
+import { billLines, drillOverrides, matchNeeds, type NeedMatch } from './bill';
+import { cribKit } from './crib-kit';
+import { parseExtraItems, parseLines } from './planning-dto';
+
+export const ESTIMATE_CAUTION =
+  'Gripline plans stock and tools; it does not design structures. The kit’s plans and the rivet maker’s instructions govern rivet counts, grips, edge distances and drill sizes, and on a certificated aircraft so do the approved data and a licensed mechanic or inspector. Follow local codes and rules. Powered tools: eye and hearing protection, and a sign-off before first use.';
+
+interface Worked {
+  result: EstimateResult;
+  matches: NeedMatch[];
+}
+
+/**
+ * The assembly's estimate with the build's edge distance floor and the chapter's settings. When a
+ * bin that stocks a line's rivet names its own hole drill, that line is estimated again with it.
+ */
+function work(db: Executor, { assembly, build }: AssemblyInBuild): Worked | { errors: AssemblyEstimate['errors'] } {
+  const planning = readPlanningSettings(db);
+  const input: EstimateInput = { unit: assembly.unit, lines: parseLines(assembly.lines).map(({ label: _label, ...line }) => line) };
+  const options = { defaultWastePercent: planning.wastePercent, maxPitchDiameters: planning.maxPitchDiameters, edgeFloorIn: build.edgeFloorIn };
+  const first = estimate(input, options);
+  if (isEstimateErrors(first)) return first;
+  const matches = matchNeeds(db, first.needs);
+  const finalDrillOverrides = drillOverrides(matches, input.lines.length);
+  if (finalDrillOverrides.every((d) => d === null)) return { result: first, matches };
+  const second = estimate(input, { ...options, finalDrillOverrides });
+  return isEstimateErrors(second) ? second : { result: second, matches };
+}
+
+export function estimateAssembly(db: Executor, found: AssemblyInBuild): AssemblyEstimate {
+  const { assembly } = found;
+  const extras = parseExtraItems(assembly.extraItems);
+  const base = { assemblyId: assembly.id, unit: assembly.unit, caution: ESTIMATE_CAUTION };
+  const worked = work(db, found);
+  if ('errors' in worked) {
+    // The editor shows what to fix; the extra items still have their bins.
+    const totals = { rivets: 0, rivetsWithWaste: 0, drillHoles: {}, tempFasteners: {} };
+    const wastePercent = readPlanningSettings(db).wastePercent;
+    return { ...base, wastePercent, lines: [], totals, warnings: [], errors: worked.errors, bill: billLines(db, assembly.id, [], extras), kit: [] };
+  }
+  const { result, matches } = worked;
+  const labels = parseLines(assembly.lines).map((l) => l.label ?? null);
+  return {
+    ...base,
+    wastePercent: result.wastePercent,
+    lines: result.lines.map((l, i) => ({ ...l, label: labels[i] ?? null })),
+    totals: result.totals,
+    warnings: result.warnings,
+    errors: [],
+    bill: billLines(db, assembly.id, matches, extras),
+    kit: cribKit(db, result, found.build.ownerId),
+  };
+}
+
+export function getAssemblyEstimate(ctx: ServiceContext, user: UserRow, id: number): AssemblyEstimate {
+  return estimateAssembly(ctx.db, assemblyToRead(ctx, user, id));
+}
+
+/** The crib kit alone, for placing holds. */
+export function assemblyKit(db: Executor, found: AssemblyInBuild): KitItem[] {
+  const worked = work(db, found);
+  return 'errors' in worked ? [] : cribKit(db, worked.result, found.build.ownerId);
+}

@@ -11,6 +11,10 @@ import { invitationsRouter } from './features/invitations/invitations.router';
 import { labelsRouter } from './features/labels/labels.router';
 import { binsRouter } from './features/stock/bins.router';
 import { estimateRouter } from './features/estimate/estimate.router';
+import { assembliesRouter, buildsRouter, preferencesRouter } from './features/planning/planning.router';
+import { alertsRouter } from './features/planning/alerts.router';
+import { forecastRouter, planningSettingsRouter, wasteRouter } from './features/planning/forecast.router';
+import { placeHold } from './features/tools/holds.service';
 import { binCsvRouter, binImportBodyParsers } from './features/stock/stock-csv.router';
 import { stockMoneyRouter } from './features/stock/money.router';
 import { mailRouter } from './features/mail/mail.router';
@@ -94,12 +98,20 @@ export function createApp(config: AppConfig) {
   api.use('/overdue', overdueRouter());
   api.use('/service-due', serviceDueRouter());
   api.use('/signoffs', signoffsRouter());
+  api.use('/settings/planning', planningSettingsRouter());
   api.use('/settings', cribSettingsRouter());
   api.use('/labels', labelsRouter());
   api.use('/bins', binCsvRouter());
   api.use('/bins', binsRouter());
   api.use('/stock', stockMoneyRouter());
   api.use('/estimate', estimateRouter());
+  api.use('/builds', buildsRouter());
+  // Holds belong to the crib: the app hands its rule to the planning feature.
+  api.use('/assemblies', assembliesRouter({ placeHold }));
+  api.use('/me', preferencesRouter());
+  api.use('/forecast', forecastRouter());
+  api.use('/alerts', alertsRouter());
+  api.use('/waste', wasteRouter());
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -5,6 +5,7 @@ import { fileURLToPath } from 'node:url';
 import { createApp } from './app';
 import { migrateDatabase, openDatabase } from './db/client';
 import type { Env } from './env';
+import { startPlanningScheduler } from './features/planning/planning-scheduler';
 import { startCribScheduler } from './features/tools/crib-scheduler';
 import { createLogger } from './lib/logger';
 import { startMailCatcher, type MailCatcher } from './mail/mail-catcher';
@@ -52,7 +53,9 @@ export async function startGripline(env: Env): Promise<RunningGripline> {
     clientDir: CLIENT_DIR,
   });
   server.on('request', app);
-  const scheduler = startCribScheduler({ db, mailer, publicUrl: env.PUBLIC_URL ?? url, now: () => new Date() }, logger);
+  const jobContext = { db, mailer, publicUrl: env.PUBLIC_URL ?? url, now: () => new Date() };
+  const scheduler = startCribScheduler(jobContext, logger);
+  const planningScheduler = startPlanningScheduler(jobContext, logger);
   logger.info({ url, mail: catcher ? 'caught locally' : 'SMTP_URL' }, 'Gripline is listening');
 
   return {
@@ -64,6 +67,7 @@ export async function startGripline(env: Env): Promise<RunningGripline> {
         server.closeAllConnections();
       });
       scheduler.stop();
+      planningScheduler.stop();
       app.sessionStore.close();
       mailer.close();
       await catcher?.close();

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { BIN_KINDS } from '../stock/kinds';
+import { binCodeField } from './bins';
 import { idParam } from './fields';
 
 export const ALERT_STATES = ['open', 'ordered', 'closed', 'dismissed'] as const;
@@ -47,6 +48,16 @@ export const forecastListSchema = z.object({
   meta: z.object({ generatedAt: z.string(), serviceLevel: z.number(), horizonWeeks: z.number() }),
 });
 export type ForecastList = z.infer<typeof forecastListSchema>;
+
+/** GET /api/forecast?bins=B-0001,B-0002: only these bins (all when absent). */
+export const forecastQuerySchema = z.object({
+  bins: z
+    .string()
+    .max(7000, { error: 'List at most 1,000 bin codes.' })
+    .optional()
+    .transform((v) => (v ? v.split(',').filter((c) => c.trim() !== '') : undefined))
+    .pipe(z.array(binCodeField).max(1000, { error: 'List at most 1,000 bin codes.' }).optional()),
+});
 
 export const alertSchema = z.object({
   id: z.number(),

@@ -1,6 +1,8 @@
 import { and, desc, eq, gte, lt, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
 import type { Executor } from '../../db/client';
+import { binAlerts } from '../../db/schema/builds';
+import { assemblies, builds } from '../../db/schema/builds';
 import { bins, stockMovements, type MovementRow } from '../../db/schema/stock';
 import { users } from '../../db/schema/users';
 
@@ -8,6 +10,11 @@ export type NewMovementRow = typeof stockMovements.$inferInsert;
 
 export function insertMovement(db: Executor, values: NewMovementRow): MovementRow {
   return db.insert(stockMovements).values(values).returning().get();
+}
+
+/** Who owns the build an assembly belongs to; undefined when there is no such assembly. */
+export function assemblyOwnerId(db: Executor, assemblyId: number): number | undefined {
+  return db.select({ ownerId: builds.ownerId }).from(assemblies).innerJoin(builds, eq(builds.id, assemblies.buildId)).where(eq(assemblies.id, assemblyId)).get()?.ownerId;
 }
 
 export function findMovement(db: Executor, id: number): MovementRow | undefined {
@@ -21,6 +28,14 @@ export function findPairedWith(db: Executor, id: number): MovementRow | undefine
 
 export function findReversalOf(db: Executor, id: number): MovementRow | undefined {
   return db.select().from(stockMovements).where(eq(stockMovements.reversesId, id)).get();
+}
+
+/** A receipt ends the bin's reorder alert (open or ordered): the stock it asked for has come in. */
+export function closeActiveAlert(db: Executor, binId: number, movementId: number, at: Date): void {
+  db.update(binAlerts)
+    .set({ state: 'closed', closedAt: at, closedByMovementId: movementId })
+    .where(and(eq(binAlerts.binId, binId), sql`${binAlerts.state} in ('open', 'ordered')`))
+    .run();
 }
 
 /** Sets the bin's balance; the caller has already checked it stays at or above zero. */

@@ -7,7 +7,7 @@ import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { isUniqueViolation } from '../../lib/sqlite-errors';
 import { findBinByCode, findBinById, sameSpecBins, updateBin } from './bins.repo';
-import { findMovement, findPairedWith, findReversalOf, insertMovement, listMovements, netDrawnBy, setOnHand, type LedgerRow } from './ledger.repo';
+import { assemblyOwnerId, closeActiveAlert, findMovement, findPairedWith, findReversalOf, insertMovement, listMovements, netDrawnBy, setOnHand, type LedgerRow } from './ledger.repo';
 import { dollarsToE4, e4ToDollars, valueCents } from '@shared/stock/money';
 import { slipExists } from './slips.repo';
 
@@ -94,10 +94,19 @@ function loadMovement(ctx: ServiceContext, id: number): Movement {
   return movementDto(row);
 }
 
+/** A draw or return names only the member's own assembly, so each assembly's actual use is its owner's. */
+function checkOwnAssembly(db: Executor, actor: UserRow, assemblyId: number | null | undefined): void {
+  if (assemblyId === null || assemblyId === undefined || assemblyOwnerId(db, assemblyId) === actor.id) return;
+  throw new HttpError(400, 'ASSEMBLY_NOT_YOURS', `Assembly ${assemblyId} is not one of your assemblies. Choose one of your own, or leave the assembly out.`, [
+    { path: 'assemblyId', message: 'Choose one of your own assemblies.' },
+  ]);
+}
+
 /** A member takes stock for their work; it goes on their tab at today's unit cost. */
 export function draw(ctx: ServiceContext, actor: UserRow, code: string, body: DrawBody): Movement {
   const id = inTransaction(ctx, () => {
     const bin = binOrThrow(ctx.db, code);
+    checkOwnAssembly(ctx.db, actor, body.assemblyId);
     return post(ctx.db, bin, { kind: 'draw', quantity: -body.quantity, actor, at: ctx.now(), memberId: actor.id, assemblyId: body.assemblyId, note: body.note }, 'draw').id;
   });
   return loadMovement(ctx, id);
@@ -107,6 +116,7 @@ export function draw(ctx: ServiceContext, actor: UserRow, code: string, body: Dr
 export function returnUnused(ctx: ServiceContext, actor: UserRow, code: string, body: ReturnUnusedBody): Movement {
   const id = inTransaction(ctx, () => {
     const bin = binOrThrow(ctx.db, code);
+    checkOwnAssembly(ctx.db, actor, body.assemblyId);
     const drawn = netDrawnBy(ctx.db, bin.id, actor.id);
     if (body.quantity > drawn) {
       throw new HttpError(409, 'RETURN_EXCEEDS_DRAWN', `You can return at most ${drawn} to ${bin.code}: that is what you drew from it and have not returned.`);
@@ -126,7 +136,9 @@ export function receive(ctx: ServiceContext, actor: UserRow, code: string, body:
     const at = ctx.now();
     const unitCostE4 = body.unitCost !== undefined ? dollarsToE4(body.unitCost) : bin.unitCostE4;
     if (unitCostE4 !== bin.unitCostE4) Object.assign(bin, updateBin(ctx.db, bin.id, { unitCostE4, updatedAt: at }));
-    return post(ctx.db, bin, { kind: 'receive', quantity: body.quantity, actor, at, unitCostE4, note: body.note, slipId: body.slipId }, 'receive').id;
+    const row = post(ctx.db, bin, { kind: 'receive', quantity: body.quantity, actor, at, unitCostE4, note: body.note, slipId: body.slipId }, 'receive');
+    closeActiveAlert(ctx.db, bin.id, row.id, at);
+    return row.id;
   });
   return loadMovement(ctx, id);
 }

@@ -1,7 +1,7 @@
-import Papa from 'papaparse';
 import type { LedgerExportQuery } from '@shared/schemas/bin-import';
 import type { Bin } from '@shared/schemas/bins';
 import type { ServiceContext } from '../../context';
+import { textCell as text, toCsv, type CsvCell as Cell } from '../../lib/csv';
 import { HttpError } from '../../lib/http-error';
 import { binDesignation, toBinDto } from './bin-dto';
 import { BIN_COLUMNS, isNumericColumn } from './bin-csv';
@@ -9,21 +9,6 @@ import { ALL_BINS } from './bin-import.service';
 import { listBins } from './bins.repo';
 import { listMovements } from './ledger.repo';
 import { e4ToDollars, valueCents } from '@shared/stock/money';
-
-type Cell = string | number | null;
-
-/**
- * A spreadsheet runs a cell that starts with = + - @ (or a tab or carriage return) as a formula;
- * text cells get a leading apostrophe so they stay text. Numbers are written as numbers.
- */
-export const guardText = (value: string) => (/^[=+\-@\t\r]/.test(value) ? `'${value}` : value);
-
-/** UTF-8 with a byte-order mark, so spreadsheets show the dashes and degree signs in designations. */
-function toCsv(fields: readonly string[], rows: readonly Cell[][]): string {
-  return '\uFEFF' + Papa.unparse({ fields: [...fields], data: rows.map((r) => r.map((c) => c ?? '')) }, { newline: '\r\n' });
-}
-
-const text = (value: string | null | undefined) => (value ? guardText(value) : '');
 
 /** The export's columns are the import's, so a file exported from one chapter imports into another. */
 const BIN_EXPORT_FIELDS = [...BIN_COLUMNS.map((c) => c.name), 'designation', 'on_hand'];

@@ -1,0 +1,54 @@
+import { Router, type Response } from 'express';
+import { alertIdParams, alertListQuerySchema, dismissBodySchema, markOrderedBodySchema } from '@shared/schemas/forecast';
+import { parseInput } from '../../lib/validate';
+import { requireRole, requireUser } from '../../middleware/auth';
+import { dismissAlert, listAlertsIn, markOrdered, refreshAlerts, refreshIfStale } from './alerts.service';
+import { purchaseList, purchaseListCsv } from './purchase-list';
+
+function sendCsv(res: Response, filename: string, csv: string) {
+  res.type('text/csv; charset=utf-8');
+  res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
+  res.send(csv);
+}
+
+/**
+ * /api/alerts: reorder alerts and the purchase list, for quartermasters (and leads). Opening the
+ * list refreshes the alerts first when the last refresh is more than 5 minutes old.
+ */
+export function alertsRouter() {
+  const router = Router();
+  router.use(requireRole('quartermaster'));
+
+  router.get('/', (req, res) => {
+    const { state } = parseInput(alertListQuerySchema, req.query, 'query');
+    refreshIfStale(req.ctx);
+    res.json({ data: listAlertsIn(req.ctx, state) });
+  });
+
+  router.post('/refresh', (req, res) => {
+    const { raised } = refreshAlerts(req.ctx);
+    res.json({ raised: raised.length, data: listAlertsIn(req.ctx, 'active') });
+  });
+
+  router.get('/purchase-list', (req, res) => {
+    res.json(purchaseList(req.ctx));
+  });
+
+  router.get('/purchase-list.csv', (req, res) => {
+    sendCsv(res, `gripline-purchase-list-${req.ctx.now().toISOString().slice(0, 10)}.csv`, purchaseListCsv(req.ctx));
+  });
+
+  router.post('/:id/ordered', (req, res) => {
+    const { id } = parseInput(alertIdParams, req.params, 'path');
+    const body = parseInput(markOrderedBodySchema, req.body);
+    res.json(markOrdered(req.ctx, requireUser(req), id, body));
+  });
+
+  router.post('/:id/dismiss', (req, res) => {
+    const { id } = parseInput(alertIdParams, req.params, 'path');
+    const { reason } = parseInput(dismissBodySchema, req.body);
+    res.json(dismissAlert(req.ctx, requireUser(req), id, reason));
+  });
+
+  return router;
+}

@@ -1,0 +1,22 @@
+import type { BinForecastDto } from '@shared/schemas/forecast';
+import { fastenerDesignation } from '@shared/stock/fasteners';
+import { e4ToDollars } from '@shared/stock/money';
+import type { BinRow } from '../../db/schema/stock';
+
+export type BinBrief = BinForecastDto['bin'];
+
+/** The few facts of a bin the forecast, the alerts and the purchase list show. */
+export function binBrief(bin: BinRow): BinBrief {
+  return {
+    code: bin.code,
+    designation: fastenerDesignation(bin) ?? bin.name,
+    kind: bin.kind,
+    supplier: bin.supplier,
+    supplierPart: bin.supplierPart,
+    packSize: bin.packSize,
+    unit: bin.unit,
+    unitCost: e4ToDollars(bin.unitCostE4),
+    onHand: bin.onHand,
+    leadTimeDays: bin.leadTimeDays,
+  };
+}

@@ -1,0 +1,160 @@
+import { binForecast, type BinForecast } from '@shared/forecast/bin-forecast';
+import {
+  HORIZON_WEEKS,
+  spreadAssemblyDemand,
+  startOfUtcWeek,
+  WEEK_MS,
+  weekIndexOf,
+  weekStarts,
+  weeklyDrawHistory,
+  type ExpectedReceipt,
+  type PlannedAssembly,
+} from '@shared/forecast/demand';
+import type { BinForecastDto, ForecastList } from '@shared/schemas/forecast';
+import type { ServiceContext } from '../../context';
+import type { Executor } from '../../db/client';
+import type { BinRow } from '../../db/schema/stock';
+import { HttpError } from '../../lib/http-error';
+import { readPlanningSettings, type PlanningSettings } from '../../settings/planning-settings';
+import { assemblyBinNeeds, binIndex } from './assembly-needs';
+import { binBrief } from './bin-brief';
+import { allBins, assembliesIn, drawnForAssemblies, orderedAlerts, weeklyConsumption } from './forecast.repo';
+
+export interface BinPlan {
+  bin: BinRow;
+  forecast: BinForecast;
+  receipts: ExpectedReceipt[];
+}
+
+export interface ForecastRun {
+  now: Date;
+  weeks: Date[];
+  settings: PlanningSettings;
+  plans: BinPlan[];
+}
+
+const ACTIVE = ['planned', 'in_progress'] as const;
+
+/**
+ * What planned and in-progress assemblies still need from each bin, spread over their dates. An
+ * assembly's need goes to the bin of its spec with most on hand; what was already drawn for it from
+ * any bin of that spec is taken off first.
+ */
+function plannedDemand(db: Executor, settings: PlanningSettings, bins: readonly BinRow[], weeks: Date[]): Map<number, number[]> {
+  const index = binIndex(bins);
+  const drawn = drawnForAssemblies(db, [...ACTIVE]);
+  const planned = assembliesIn(db, [...ACTIVE]).map((a): PlannedAssembly<number> => {
+    const byBin = new Map<number, { need: number; from: Set<number> }>();
+    for (const need of assemblyBinNeeds(a, settings, index)) {
+      const entry = byBin.get(need.binIds[0]!) ?? { need: 0, from: new Set<number>() };
+      entry.need += need.withWaste;
+      for (const id of need.binIds) entry.from.add(id);
+      byBin.set(need.binIds[0]!, entry);
+    }
+    const remainingNeed = new Map<number, number>();
+    for (const [binId, { need, from }] of byBin) {
+      let taken = 0;
+      for (const id of from) taken += drawn.get(`${a.id}:${id}`) ?? 0;
+      if (need > taken) remainingNeed.set(binId, need - taken);
+    }
+    return { remainingNeed, plannedStart: a.plannedStart, plannedFinish: a.plannedFinish };
+  });
+  return spreadAssemblyDemand(planned, weeks);
+}
+
+/** The last 26 full weeks of net draws per bin, bucketed by week in the database. */
+function drawHistory(db: Executor, now: Date): Map<number, number[]> {
+  const current = startOfUtcWeek(now);
+  const from = new Date(current.getTime() - HORIZON_WEEKS * WEEK_MS);
+  const rows = weeklyConsumption(db, from, current, WEEK_MS);
+  const entries = rows.map((r) => ({ binId: r.binId, at: new Date(from.getTime() + r.week * WEEK_MS), quantity: r.quantity }));
+  return weeklyDrawHistory(entries, now, HORIZON_WEEKS);
+}
+
+function expectedReceipts(db: Executor, weeks: Date[]): Map<number, ExpectedReceipt[]> {
+  const byBin = new Map<number, ExpectedReceipt[]>();
+  for (const order of orderedAlerts(db)) {
+    const list = byBin.get(order.binId) ?? [];
+    list.push({ week: weekIndexOf(order.expectedAt, weeks), quantity: order.quantity });
+    byBin.set(order.binId, list);
+  }
+  return byBin;
+}
+
+/** Every bin's forecast from four queries: bins, assemblies, draws naming them, the draw history, open orders. */
+export function forecastBins(ctx: ServiceContext): ForecastRun {
+  const now = ctx.now();
+  const settings = readPlanningSettings(ctx.db);
+  const weeks = weekStarts(now, HORIZON_WEEKS);
+  const bins = allBins(ctx.db);
+  const planned = plannedDemand(ctx.db, settings, bins, weeks);
+  const history = drawHistory(ctx.db, now);
+  const receipts = expectedReceipts(ctx.db, weeks);
+  const plans = bins.map((bin): BinPlan => {
+    const binReceipts = receipts.get(bin.id) ?? [];
+    const forecast = binForecast({
+      onHand: bin.onHand,
+      leadTimeDays: bin.leadTimeDays,
+      packSize: bin.packSize,
+      unitCost: bin.unitCostE4 / 10_000,
+      weeklyPlanned: planned.get(bin.id) ?? null,
+      history: history.get(bin.id) ?? [],
+      expectedReceipts: binReceipts,
+      serviceLevel: settings.serviceLevel,
+      orderCost: settings.orderCost,
+      holdingRate: settings.holdingRate,
+      horizonWeeks: HORIZON_WEEKS,
+    });
+    return { bin, forecast, receipts: binReceipts };
+  });
+  return { now, weeks, settings, plans };
+}
+
+const rounder = (places: number) => {
+  const factor = 10 ** places;
+  return (x: number) => Math.round(x * factor) / factor + 0;
+};
+const round1 = rounder(1);
+const round2 = rounder(2);
+const round3 = rounder(3);
+const round4 = rounder(4);
+
+function toForecastDto({ bin, forecast: f, receipts }: BinPlan, weeks: Date[]): BinForecastDto {
+  return {
+    bin: binBrief(bin),
+    weeks: weeks.map((w) => w.toISOString().slice(0, 10)),
+    weeklyDemand: f.weeklyDemand.map(round2),
+    demandSource: f.demandSource,
+    projected: f.projected.map(round2),
+    // As the projection counts them: an overdue order in this week, orders after the horizon left out.
+    expectedReceipts: receipts.filter((r) => r.week < weeks.length).map((r) => ({ week: Math.max(0, r.week), quantity: r.quantity })),
+    sigmaWeekly: round3(f.sigmaWeekly),
+    z: round4(f.z),
+    leadTimeWeeks: round3(f.leadTimeWeeks),
+    leadTimeDemand: round2(f.leadTimeDemand),
+    safetyStock: f.safetyStock,
+    reorderPoint: f.reorderPoint,
+    eoq: round1(f.eoq),
+    suggestedOrder: f.suggestedOrder,
+    needsAlert: f.needsAlert,
+    reason: f.reason,
+  };
+}
+
+/** GET /api/forecast: every bin, or the listed ones (an unknown code is a 404 that names it). */
+export function forecastList(ctx: ServiceContext, codes?: string[]): ForecastList {
+  const run = forecastBins(ctx);
+  let plans = run.plans;
+  if (codes) {
+    const wanted = new Set(codes);
+    plans = plans.filter((p) => wanted.has(p.bin.code));
+    const found = new Set(plans.map((p) => p.bin.code));
+    const missing = [...wanted].filter((c) => !found.has(c));
+    if (missing.length === 1) throw new HttpError(404, 'BIN_NOT_FOUND', `No bin has the code ${missing[0]}. Check the label, or type the code.`);
+    if (missing.length > 1) throw new HttpError(404, 'BIN_NOT_FOUND', `No bins have the codes ${missing.join(', ')}. Check the codes and try again.`);
+  }
+  return {
+    data: plans.map((p) => toForecastDto(p, run.weeks)),
+    meta: { generatedAt: run.now.toISOString(), serviceLevel: run.settings.serviceLevel, horizonWeeks: run.weeks.length },
+  };
+}

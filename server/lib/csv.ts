@@ -1,0 +1,17 @@
+import Papa from 'papaparse';
+
+export type CsvCell = string | number | null;
+
+/**
+ * A spreadsheet runs a cell that starts with = + - @ (or a tab or carriage return) as a formula;
+ * text cells get a leading apostrophe so they stay text. Numbers are written as numbers.
+ */
+export const guardText = (value: string) => (/^[=+\-@\t\r]/.test(value) ? `'${value}` : value);
+
+/** A text cell, guarded; empty for nothing. */
+export const textCell = (value: string | null | undefined) => (value ? guardText(value) : '');
+
+/** UTF-8 with a byte-order mark, so spreadsheets show the dashes and degree signs in designations. */
+export function toCsv(fields: readonly string[], rows: readonly CsvCell[][]): string {
+  return '\uFEFF' + Papa.unparse({ fields: [...fields], data: rows.map((r) => r.map((c) => c ?? '')) }, { newline: '\r\n' });
+}

@@ -1,0 +1,234 @@
+import { eq, inArray } from 'drizzle-orm';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { alertListSchema, purchaseListSchema, type Alert } from '@shared/schemas/forecast';
+import { binAlerts } from '../../server/db/schema/builds';
+import { addBinAs, blindRivetBin, post } from '../helpers/crib';
+import { addAssembly, DAY_MS, drawFrom, hundredRivetLine, screwBin } from '../helpers/planning-fixture';
+import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+
+let t: TestApp;
+let qm: SignedInAgent;
+let member: SignedInAgent;
+let lead: SignedInAgent;
+
+// Tuesday 2026-12-01 12:00 UTC: week 0 runs Monday 2026-11-30 to Sunday 2026-12-06.
+beforeEach(async () => {
+  t = await buildTestApp();
+  await t.addCrew();
+  qm = await t.signIn('qm@example.org');
+  member = await t.signIn('member@example.org');
+  lead = await t.signIn('lead@example.org');
+});
+afterEach(() => t.close());
+
+/**
+ * A bin of 100 rivets (lead time 14 days) and an assembly needing 105 of them this week. Forecast:
+ * week 0 demand 105, projected −5; reorder point 105 (σ = 0, no safety stock). Suggested order:
+ * EOQ √(2 × 210 × $15 / (25 % × $0.12)) = √210,000 = 458.3 (D = 105 / 26 × 52 = 210 a year) → 5 packs = 500.
+ */
+async function binRunningLow(over: Record<string, unknown> = {}, line: Record<string, unknown> = hundredRivetLine) {
+  const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100, leadTimeDays: 14, ...over }));
+  await addAssembly(member, { name: `Rib bay for ${bin.code}`, plannedStart: '2026-12-01', plannedFinish: '2026-12-06', lines: [line] });
+  return bin;
+}
+
+const refresh = async (who = qm) => {
+  const res = await post(who, '/api/alerts/refresh');
+  expect(res.status).toBe(200);
+  return res.body as { raised: number; data: Alert[] };
+};
+const alertsIn = async (state: string) => alertListSchema.parse((await qm.agent.get(`/api/alerts?state=${state}`)).body).data;
+const activeRows = () => t.db.select().from(binAlerts).where(inArray(binAlerts.state, ['open', 'ordered'])).all();
+
+describe('reorder alerts', () => {
+  it('goes open → ordered → closed by the next receipt, the order counting as an expected receipt meanwhile', async () => {
+    const bin = await binRunningLow();
+    const raised = await refresh();
+    expect(raised.raised).toBe(1);
+    const alert = raised.data[0]!;
+    expect(alert).toMatchObject({
+      state: 'open',
+      bin: { code: bin.code, supplier: 'Cedar Valley Fastener Supply', onHand: 100, packSize: 100 },
+      raisedAt: '2026-12-01T12:00:00.000Z',
+      onHandAtRaise: 100,
+      reorderPoint: 105,
+      safetyStock: 0,
+      suggestedQty: 500,
+      orderedAt: null,
+      closedAt: null,
+    });
+    expect(alert.reason).toBe('On hand 100 is at or below the reorder point 105; Projected to fall below safety stock (0) this week, inside the 2-week lead time');
+
+    const ordered = await post(qm, `/api/alerts/${alert.id}/ordered`, { quantity: 500, expectedAt: '2026-12-10', note: 'phoned in' });
+    expect(ordered.status).toBe(200);
+    expect(ordered.body).toMatchObject({ state: 'ordered', orderedQty: 500, expectedAt: '2026-12-10', orderedAt: '2026-12-01T12:00:00.000Z', orderedBy: { name: 'Quinn Quartermaster' } });
+    expect(ordered.body.reason).toContain('Order note: phoned in');
+
+    // Thursday 2026-12-10 is in week 1: the 500 arrive there in the projection.
+    const forecast = (await qm.agent.get(`/api/forecast?bins=${bin.code}`)).body.data[0];
+    expect(forecast.expectedReceipts).toEqual([{ week: 1, quantity: 500 }]);
+    expect(forecast.projected.slice(0, 3)).toEqual([-5, 495, 495]);
+
+    const again = await post(qm, `/api/alerts/${alert.id}/ordered`, { quantity: 100, expectedAt: '2026-12-11' });
+    expect(again.status).toBe(409);
+    expect(again.body.error).toMatchObject({ code: 'ALERT_NOT_OPEN', message: expect.stringContaining('already ordered') });
+    expect((await refresh()).raised).toBe(0);
+
+    t.clock.now = new Date('2026-12-09T15:00:00Z');
+    const receipt = await post(qm, `/api/bins/${bin.code}/receive`, { quantity: 500 });
+    expect(receipt.status).toBe(201);
+    const closed = await alertsIn('closed');
+    expect(closed).toHaveLength(1);
+    expect(closed[0]).toMatchObject({ id: alert.id, state: 'closed', closedAt: '2026-12-09T15:00:00.000Z' });
+    expect(t.db.select().from(binAlerts).where(eq(binAlerts.id, alert.id)).get()?.closedByMovementId).toBe(receipt.body.id);
+    expect(await alertsIn('active')).toEqual([]);
+    // 600 on hand now covers the reorder point: no new alert.
+    expect((await refresh()).raised).toBe(0);
+  });
+
+  it('closes an open alert too when stock is received before anyone marked it ordered', async () => {
+    const bin = await binRunningLow();
+    const { data } = await refresh();
+    await post(qm, `/api/bins/${bin.code}/receive`, { quantity: 100 });
+    expect((await alertsIn('closed')).map((a) => a.id)).toEqual([data[0]!.id]);
+  });
+
+  it('dismisses an open or ordered alert with a reason, and keeps the bin quiet until stock falls or two weeks pass', async () => {
+    const bin = await binRunningLow();
+    const { data } = await refresh();
+    const dismissed = await post(qm, `/api/alerts/${data[0]!.id}/dismiss`, { reason: '  The kit ships with a bag of these.  ' });
+    expect(dismissed.status).toBe(200);
+    expect(dismissed.body).toMatchObject({ state: 'dismissed', dismissReason: 'The kit ships with a bag of these.', dismissedAt: '2026-12-01T12:00:00.000Z' });
+
+    const twice = await post(qm, `/api/alerts/${data[0]!.id}/dismiss`, { reason: 'again' });
+    expect(twice.status).toBe(409);
+    expect(twice.body.error.code).toBe('ALERT_NOT_ACTIVE');
+    const order = await post(qm, `/api/alerts/${data[0]!.id}/ordered`, { quantity: 100, expectedAt: '2026-12-10' });
+    expect(order.status).toBe(409);
+    expect(order.body.error).toMatchObject({ code: 'ALERT_NOT_OPEN', message: expect.stringContaining('dismissed') });
+
+    expect((await refresh()).raised).toBe(0);
+    await drawFrom(member, bin.code, 10);
+    const after = await refresh();
+    expect(after.raised).toBe(1);
+    expect(after.data[0]).toMatchObject({ state: 'open', onHandAtRaise: 90 });
+
+    // An ordered alert can be dismissed too (the order was cancelled); then 15 days on it is raised again.
+    await post(qm, `/api/alerts/${after.data[0]!.id}/ordered`, { quantity: 100, expectedAt: '2026-12-10' });
+    expect((await post(qm, `/api/alerts/${after.data[0]!.id}/dismiss`, { reason: 'Order cancelled' })).body.state).toBe('dismissed');
+    expect((await refresh()).raised).toBe(0);
+    t.clock.now = new Date(t.clock.now.getTime() + 15 * DAY_MS);
+    expect((await refresh()).raised).toBe(1);
+    expect(await alertsIn('dismissed')).toHaveLength(2);
+  });
+
+  it('keeps at most one active alert per bin however often and however fast it is refreshed', async () => {
+    await binRunningLow();
+    const results = await Promise.all([refresh(), refresh(lead), refresh()]);
+    expect(results.map((r) => r.raised).reduce((a, b) => a + b)).toBe(1);
+    expect(activeRows()).toHaveLength(1);
+    await post(qm, `/api/alerts/${activeRows()[0]!.id}/ordered`, { quantity: 500, expectedAt: '2026-12-08' });
+    expect((await refresh()).raised).toBe(0);
+    // The database itself refuses a second active alert for the bin.
+    const row = activeRows()[0]!;
+    expect(() => t.db.insert(binAlerts).values({ ...row, id: undefined, state: 'open' }).run()).toThrow(/UNIQUE/);
+    expect(activeRows()).toHaveLength(1);
+  });
+
+  it('refreshes when a quartermaster opens the list and the last refresh is over 5 minutes old', async () => {
+    await binRunningLow();
+    expect(await alertsIn('active')).toHaveLength(1);
+    await binRunningLow({ diameter32: 5 }, { ...hundredRivetLine, rivet: { ...hundredRivetLine.rivet, diameter32: 5 } });
+    t.clock.now = new Date(t.clock.now.getTime() + 4 * 60_000);
+    expect(await alertsIn('active')).toHaveLength(1);
+    t.clock.now = new Date(t.clock.now.getTime() + 2 * 60_000);
+    expect(await alertsIn('active')).toHaveLength(2);
+  });
+
+  it('filters by state and refuses bad input in words', async () => {
+    await binRunningLow();
+    const { data } = await refresh();
+    const id = data[0]!.id;
+    expect(await alertsIn('open')).toHaveLength(1);
+    expect(await alertsIn('ordered')).toHaveLength(0);
+    expect(await alertsIn('all')).toHaveLength(1);
+
+    const state = await qm.agent.get('/api/alerts?state=urgent');
+    expect(state.status).toBe(400);
+    expect(state.body.error.message).toContain('state is open, ordered, closed, dismissed, active or all.');
+    const order = await post(qm, `/api/alerts/${id}/ordered`, { quantity: 0, expectedAt: 'next week' });
+    expect(order.status).toBe(400);
+    expect(order.body.error.code).toBe('VALIDATION_FAILED');
+    expect(order.body.error.message).toContain('Order at least 1.');
+    expect(order.body.error.message).toContain('Use a date like 2027-01-15.');
+    const past = await post(qm, `/api/alerts/${id}/ordered`, { quantity: 100, expectedAt: '2026-11-30' });
+    expect(past.status).toBe(400);
+    expect(past.body.error).toMatchObject({ code: 'VALIDATION_FAILED', issues: [{ path: 'expectedAt' }] });
+    expect(past.body.error.message).toContain('in the past');
+    const noReason = await post(qm, `/api/alerts/${id}/dismiss`, { reason: '   ' });
+    expect(noReason.status).toBe(400);
+    expect(noReason.body.error.message).toContain('Say why the alert is dismissed.');
+    const badId = await post(qm, '/api/alerts/abc/dismiss', { reason: 'x' });
+    expect(badId.status).toBe(400);
+    expect(badId.body.error.message).toContain('The id must be a number.');
+    const missing = await post(qm, '/api/alerts/999/dismiss', { reason: 'x' });
+    expect(missing.status).toBe(404);
+    expect(missing.body.error.code).toBe('ALERT_NOT_FOUND');
+    expect((await alertsIn('open')).map((a) => a.id)).toEqual([id]);
+  });
+
+  it('is for quartermasters and leads', async () => {
+    for (const path of ['/api/alerts', '/api/alerts/purchase-list', '/api/alerts/purchase-list.csv']) {
+      const res = await member.agent.get(path);
+      expect(res.status).toBe(403);
+      expect(res.body.error.code).toBe('FORBIDDEN');
+    }
+    expect((await post(member, '/api/alerts/refresh')).status).toBe(403);
+    expect((await lead.agent.get('/api/alerts')).status).toBe(200);
+  });
+});
+
+describe('the purchase list', () => {
+  /** Two rivet bins from one supplier and a screw bin from another, all running low. */
+  async function threeLowBins() {
+    const dome = await binRunningLow();
+    const fat = await binRunningLow({ diameter32: 5 }, { ...hundredRivetLine, rivet: { ...hundredRivetLine.rivet, diameter32: 5 } });
+    // 250 screws this week against 200 on hand (lead time 7 days): reorder point 250, shortfall 50;
+    // EOQ √(2 × 500 × $15 / (25 % × $0.09)) = 816.5 → 17 packs of 50 = 850, $76.50.
+    const screws = await addBinAs(qm, screwBin({ supplierPart: '=HYPERLINK("http://x.test")' }));
+    await addAssembly(member, { name: 'Tool chest', plannedStart: '2026-12-01', plannedFinish: '2026-12-06', extraItems: [{ binCode: screws.code, quantity: 250 }] });
+    const { data } = await refresh();
+    expect(data).toHaveLength(3);
+    return { dome, fat, screws, alerts: data };
+  }
+
+  it('groups open alerts by supplier with packs and cost, leaving ordered ones out', async () => {
+    const { dome, fat, screws, alerts } = await threeLowBins();
+    const fatAlert = alerts.find((a) => a.bin.code === fat.code)!;
+    await post(qm, `/api/alerts/${fatAlert.id}/ordered`, { quantity: 500, expectedAt: '2026-12-08' });
+
+    const res = await qm.agent.get('/api/alerts/purchase-list');
+    expect(res.status).toBe(200);
+    const list = purchaseListSchema.parse(res.body);
+    expect(list.data.map((g) => g.supplier)).toEqual(['Cedar Valley Fastener Supply', 'Harbour Hardware Co.']);
+    expect(list.data[0]!.lines).toEqual([expect.objectContaining({ bin: expect.objectContaining({ code: dome.code }), quantity: 500, packs: 5, costCents: 6000 })]);
+    expect(list.data[0]!.totalCents).toBe(6000);
+    expect(list.data[1]!.lines).toEqual([expect.objectContaining({ bin: expect.objectContaining({ code: screws.code }), quantity: 850, packs: 17, costCents: 7650 })]);
+    expect(list.data[1]!.totalCents).toBe(7650);
+  });
+
+  it('exports the list as CSV with formula-like text made harmless', async () => {
+    const { dome, fat, screws } = await threeLowBins();
+    const res = await qm.agent.get('/api/alerts/purchase-list.csv');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
+    expect(res.headers['content-disposition']).toBe('attachment; filename="gripline-purchase-list-2026-12-01.csv"');
+    const lines = res.text.replace(/^\uFEFF/, '').trim().split('\r\n');
+    expect(lines[0]).toBe('supplier,supplier_part,bin_code,designation,quantity,unit,pack_size,packs,unit_cost,cost,alert_id');
+    expect(lines).toHaveLength(4);
+    expect(lines[1]).toMatch(new RegExp(`^Cedar Valley Fastener Supply,,${dome.code},.*,500,each,100,5,0.12,60.00,\\d+$`));
+    expect(lines[2]).toMatch(new RegExp(`^Cedar Valley Fastener Supply,,${fat.code},`));
+    expect(lines[3]).toContain(`Harbour Hardware Co.,"'=HYPERLINK(""http://x.test"")",${screws.code},`);
+    expect(lines[3]).toMatch(/,850,each,50,17,0.09,76.50,\d+$/);
+  });
+});

@@ -149,6 +149,62 @@ export function createAppRouter(queryClient: QueryClient) {
             return { loader: labelsLoader(queryClient), Component: LabelsRoute };
           },
         },
+        {
+          path: 'alerts',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { AlertsRoute, alertsLoader } = await import('./routes/app/alerts');
+            return { loader: alertsLoader(queryClient), Component: AlertsRoute };
+          },
+        },
+        {
+          path: 'forecast',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { ForecastRoute, forecastLoader } = await import('./routes/app/forecast');
+            return { loader: forecastLoader(queryClient), Component: ForecastRoute };
+          },
+        },
+        {
+          path: 'settings/planning',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { PlanningSettingsRoute, planningSettingsLoader } = await import('./routes/app/planning-settings');
+            return { loader: planningSettingsLoader(queryClient), Component: PlanningSettingsRoute };
+          },
+        },
+        {
+          path: 'builds',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { BuildsRoute, buildsLoader } = await import('./routes/app/builds');
+            return { loader: buildsLoader(queryClient), Component: BuildsRoute };
+          },
+        },
+        {
+          path: 'builds/:id/assemblies/new',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { AssemblyNewRoute, assemblyNewLoader } = await import('./routes/app/assembly-edit');
+            return { loader: assemblyNewLoader(queryClient), Component: AssemblyNewRoute };
+          },
+        },
+        {
+          path: 'assemblies/:id',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { AssemblyDetailRoute, assemblyDetailLoader } = await import('./routes/app/assembly-detail');
+            return { loader: assemblyDetailLoader(queryClient), Component: AssemblyDetailRoute };
+          },
+        },
+        {
+          path: 'assemblies/:id/edit',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { AssemblyEditRoute, assemblyEditLoader } = await import('./routes/app/assembly-edit');
+            return { loader: assemblyEditLoader(queryClient), Component: AssemblyEditRoute };
+          },
+        },
       ],
     },
     { path: '*', Component: NotFoundRoute },

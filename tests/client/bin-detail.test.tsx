@@ -7,6 +7,7 @@ import type { BinForYou, Movement } from '@shared/schemas/bins';
 import { BinDetailRoute, binDetailLoader } from '@/app/routes/app/bin-detail';
 import { ScanRoute } from '@/app/routes/app/scan';
 import { setCsrfToken } from '@/lib/api-client';
+import { assemblyFixture } from '../helpers/assembly-fixture';
 import { binFixture } from '../helpers/bin-fixture';
 import { fakeFetch, type FakeCall } from '../helpers/render';
 
@@ -59,6 +60,13 @@ const LEDGER: Movement[] = [
   entry({ id: 9, kind: 'receive', quantity: 120, balanceAfter: 120, slipId: 3, note: 'Order 2291' }),
 ];
 
+/** The member's own assemblies: one planned, one in progress, one done. */
+const MY_ASSEMBLIES = [
+  assemblyFixture(7, { name: 'Rudder', status: 'planned' }),
+  assemblyFixture(8, { name: 'Left elevator', status: 'in_progress' }),
+  assemblyFixture(9, { name: 'Vertical stabiliser', status: 'done' }),
+];
+
 /**
  * A small fake of the bins API: GET answers the current bin, and a successful movement changes
  * its on hand, so the page is seen to refresh. `answer` may take over a POST.
@@ -69,6 +77,7 @@ function serve(role: Role, opts: { bin?: BinForYou; answer?: (call: FakeCall) =>
     if (call.path === '/api/auth/me') return { status: 200, body: { user: { ...PEOPLE[role], email: `${role}@example.org`, role } } };
     if (call.method === 'GET' && call.path === '/api/bins/B-0107') return { status: 200, body: bin };
     if (call.method === 'GET' && call.path === '/api/bins/B-0107/ledger') return { status: 200, body: { data: LEDGER } };
+    if (call.method === 'GET' && call.path === '/api/assemblies?mine=true') return { status: 200, body: { data: MY_ASSEMBLIES } };
     if (call.method !== 'POST') return undefined;
     const taken = opts.answer?.(call);
     if (taken) return taken;
@@ -158,6 +167,17 @@ describe('the bin page', () => {
     await userEvent.click(screen.getByRole('button', { name: 'Draw from B-0107' }));
     await waitFor(() => expect(onHand()).toBe('118'));
     expect(posts(calls)[0]!.body).toEqual({ quantity: 2 });
+  });
+
+  it('names one of the member’s open assemblies on a draw when chosen', async () => {
+    const calls = serve('member');
+    await renderBinPage();
+    const picker = await screen.findByLabelText('For which assembly (optional)');
+    expect(within(picker).getAllByRole('option').map((o) => o.textContent)).toEqual(['Not for an assembly', 'Rudder · Two-seat low wing', 'Left elevator · Two-seat low wing']);
+    await userEvent.selectOptions(picker, 'Left elevator · Two-seat low wing');
+    await userEvent.type(screen.getByLabelText('Quantity to draw'), '12');
+    await userEvent.click(screen.getByRole('button', { name: 'Draw from B-0107' }));
+    await waitFor(() => expect(posts(calls)[0]?.body).toEqual({ quantity: 12, assemblyId: 8 }));
   });
 
   it('offers Return unused up to what the member drew, and refuses more before calling the server', async () => {

@@ -1,30 +1,33 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { useQuery } from '@tanstack/react-query';
 import { useForm, useWatch } from 'react-hook-form';
 import { toast } from 'sonner';
 import type { z } from 'zod';
 import { drawBodySchema, type BinForYou, type DrawBody } from '@shared/schemas/bins';
-import { TextField } from '@/components/ui/field';
+import { SelectField, TextField } from '@/components/ui/field';
 import { applyServerErrors } from '@/lib/errors';
 import { useDraw } from '../api/bin-actions';
+import { myAssembliesQueryOptions } from '../api/get-my-assemblies';
 import { formatCents, formatQuantity, formatUnitCost } from '../utils/format';
 import { valueAtCost } from '../utils/value';
 import { ActionForm, Preview, QuantityInput } from './action-form';
 
 /**
- * A member takes stock for their work; it goes on their tab at today's unit cost. Which assembly
- * it is for stays optional (assemblies come later): a note says it for now.
+ * A member takes stock for their work; it goes on their tab at today's unit cost. Naming one of
+ * their open assemblies is optional; it puts the draw beside that assembly's estimate.
  */
 export function DrawForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void }) {
   const draw = useDraw();
   const form = useForm<z.input<typeof drawBodySchema>, unknown, DrawBody>({ resolver: zodResolver(drawBodySchema), defaultValues: { note: '' } });
   const quantity = useWatch({ control: form.control, name: 'quantity' });
   const wanted = Number.isInteger(quantity) && quantity > 0 ? quantity : undefined;
+  const openAssemblies = useQuery(myAssembliesQueryOptions()).data?.filter((a) => a.status !== 'done') ?? [];
 
   const submit = form.handleSubmit(async (body) => {
     try {
       const entry = await draw.mutateAsync({ code: bin.code, body });
       toast.success(`You drew ${formatQuantity(-entry.quantity, bin.unit)} from ${bin.code}: ${formatCents(-entry.valueCents)} on your tab.`);
-      form.reset({ note: '' });
+      form.reset({ note: '', assemblyId: body.assemblyId });
       onDone?.();
     } catch (err) {
       form.setError('root', { message: applyServerErrors(err, form.setError, ['quantity', 'note']) });
@@ -39,9 +42,17 @@ export function DrawForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void 
           Goes on your tab: <strong>{formatCents(valueAtCost(wanted, bin.unitCost))}</strong> ({formatQuantity(wanted, bin.unit)} at {formatUnitCost(bin.unitCost)})
         </Preview>
       )}
+      {openAssemblies.length > 0 && (
+        <SelectField
+          label="For which assembly (optional)"
+          options={[{ value: '', label: 'Not for an assembly' }, ...openAssemblies.map((a) => ({ value: String(a.id), label: `${a.name} · ${a.buildName}` }))]}
+          error={form.formState.errors.assemblyId?.message}
+          {...form.register('assemblyId', { setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v)) })}
+        />
+      )}
       <TextField
         label="Note (optional)"
-        hint="Which assembly or part it is for, like “left flap skin”."
+        hint="Which part it is for, like “left flap skin”."
         error={form.formState.errors.note?.message}
         {...form.register('note')}
       />

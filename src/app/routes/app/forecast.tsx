@@ -1,0 +1,32 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { Link, type LoaderFunctionArgs } from 'react-router';
+import { forecastQueryOptions } from '@/features/forecast/api/get-forecast';
+import { ForecastList } from '@/features/forecast/components/forecast-list';
+import { formatDay, formatPercent } from '@/features/forecast/utils/format';
+import { PageHeader } from '@/components/ui/page';
+import { requireRole } from './guards';
+
+export const forecastLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  await requireRole(queryClient, request, 'quartermaster');
+  await queryClient.ensureQueryData(forecastQueryOptions());
+  return null;
+};
+
+export function ForecastRoute() {
+  const { data } = useSuspenseQuery(forecastQueryOptions());
+  return (
+    <>
+      <PageHeader
+        title="Forecast"
+        lead={`Each bin's next ${data.meta.horizonWeeks} weeks: demand from planned assemblies (or past draws), projected on hand, and when to reorder. Worked out ${formatDay(data.meta.generatedAt)} at a ${formatPercent(data.meta.serviceLevel)} service level.`}
+        actions={
+          <Link to="/settings/planning" className="inline-flex min-h-12 items-center rounded-lg border-2 border-ink px-5 font-semibold text-ink">
+            Planning settings
+          </Link>
+        }
+      />
+      <ForecastList list={data} />
+    </>
+  );
+}

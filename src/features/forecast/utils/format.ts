@@ -1,0 +1,52 @@
+const count = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
+const oneDecimal = new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 });
+const cents = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' });
+const dollars = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD', minimumFractionDigits: 2, maximumFractionDigits: 4 });
+const dayFormat = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' });
+const shortDay = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', timeZone: 'UTC' });
+
+/** 12000 → "12,000"; a fraction is rounded to a whole unit. */
+export const formatCount = (n: number): string => count.format(n);
+/** 47.25 → "47.3": weekly averages and σ. */
+export const formatTenth = (n: number): string => oneDecimal.format(n);
+/** A projected level, to a tenth where demand is fractional, with a real minus sign: −20, 1.9. */
+export const formatLevel = (n: number): string => (n < 0 ? `−${oneDecimal.format(-n)}` : oneDecimal.format(n));
+
+/** The server's reasons come without a full stop; a sentence on screen ends with one. */
+export const asSentence = (text: string): string => (/[.!?]$/.test(text) ? text : `${text}.`);
+export const formatQuantity = (n: number, unit: string): string => `${formatCount(n)} ${unit}`;
+/** Whole cents as money: 1240 → "$12.40". */
+export const formatCents = (valueCents: number): string => cents.format(valueCents / 100);
+/** Dollars, to a hundredth of a cent where a rivet has one: 0.0825 → "$0.0825". */
+export const formatDollars = (d: number): string => dollars.format(d);
+
+/** A calendar day "2027-01-15" (or a timestamp, read for its UTC day) as "Jan 15, 2027". */
+export const formatDay = (iso: string): string => dayFormat.format(new Date(iso.length === 10 ? `${iso}T00:00:00Z` : iso));
+/** A week's Monday for a chart axis: "Jan 11". */
+export const formatWeek = (iso: string): string => shortDay.format(new Date(`${iso}T00:00:00Z`));
+
+/** The day `days` after `from` in the viewer's own calendar, as YYYY-MM-DD for a date field. */
+export function dayAfter(from: Date, days: number): string {
+  const d = new Date(from.getFullYear(), from.getMonth(), from.getDate() + Math.ceil(days));
+  const pad = (n: number) => String(n).padStart(2, '0');
+  return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`;
+}
+
+/** Whole packs an order makes: 600 in packs of 250 → 3 (orders are rounded up to packs). */
+export const packsFor = (quantity: number, packSize: number): number => Math.ceil(quantity / Math.max(1, packSize));
+
+/** "3 packs of 250", or '' where the bin is bought by the unit. */
+export function packWords(quantity: number, packSize: number): string {
+  if (packSize <= 1) return '';
+  const packs = packsFor(quantity, packSize);
+  return `${formatCount(packs)} ${packs === 1 ? 'pack' : 'packs'} of ${formatCount(packSize)}`;
+}
+
+/** 0.95 → "95 %", 0.975 → "97.5 %". */
+export const formatPercent = (fraction: number): string => `${oneDecimal.format(fraction * 100)} %`;
+
+/** A lead time in words: 21 days → "3 weeks", 10 days → "10 days". */
+export function leadTimeWords(days: number): string {
+  if (days > 0 && days % 7 === 0) return days === 7 ? '1 week' : `${days / 7} weeks`;
+  return days === 1 ? '1 day' : `${formatCount(days)} days`;
+}

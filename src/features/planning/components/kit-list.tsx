@@ -1,0 +1,42 @@
+import { Link } from 'react-router';
+import type { KitItem } from '@shared/schemas/builds';
+import { STATUS_LABELS, TOOL_STATUSES, type ToolStatus } from '@shared/tools/categories';
+
+const ROLE_LABELS: Record<KitItem['role'], string> = {
+  puller: 'Rivet puller',
+  rivet_gun: 'Rivet gun',
+  nosepiece: 'Nosepiece',
+  rivet_set: 'Rivet set',
+  bucking_bar: 'Bucking bar',
+  drill_bit: 'Drill bit',
+  temporary_fastener_tray: 'Temporary fastener tray',
+  deburring_tool: 'Deburring tool',
+};
+
+const statusText = (status: string) => (status === 'held_for_you' ? 'held for you' : (TOOL_STATUSES as readonly string[]).includes(status) ? STATUS_LABELS[status as ToolStatus] : status);
+
+/** The crib tools the assembly needs: which tool the crib has for each, and whether it is free now. */
+export function KitList({ kit }: { kit: KitItem[] }) {
+  if (kit.length === 0) return <p className="text-steel">No crib tools needed yet.</p>;
+  return (
+    <ul className="flex flex-col gap-2">
+      {kit.map((item, i) => (
+        <li key={i} className="flex flex-col gap-1 rounded-lg border border-rule bg-card p-3">
+          <p>
+            <span className="font-semibold">{ROLE_LABELS[item.role]}</span>: {item.need}
+            {item.count !== null && <span className="font-mono"> · {item.count}</span>}
+          </p>
+          {item.tool ? (
+            <p className="text-sm">
+              <Link to={`/tools/${item.tool.code}`} className="inline-flex min-h-11 items-center font-mono font-semibold underline underline-offset-4">
+                {item.tool.code}
+              </Link>{' '}
+              {item.tool.name} · <span className={item.tool.status === 'available' || item.tool.status === 'held_for_you' ? 'text-ok' : 'text-warn'}>{statusText(item.tool.status)}</span>
+            </p>
+          ) : null}
+          {item.note && <p className="text-sm text-steel">{item.note}</p>}
+        </li>
+      ))}
+    </ul>
+  );
+}

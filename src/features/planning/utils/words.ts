@@ -1,0 +1,62 @@
+import type { LengthUnit } from '@shared/schemas/builds';
+import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
+import { blindGripRange, inchFraction } from '@shared/stock/fasteners';
+import { RIVET_HEAD_LABELS, type RivetHead } from '@shared/stock/kinds';
+
+export const RIVET_KIND_LABELS: Record<EstimateRivetKind, string> = {
+  'blind-structural': 'Structural blind rivet',
+  'blind-general': 'General-purpose blind rivet',
+  solid: 'Solid rivet',
+};
+
+export const UNIT_WORDS: Record<LengthUnit, string> = { in: 'inches', mm: 'millimetres' };
+
+const inchNumber = new Intl.NumberFormat('en-US', { maximumFractionDigits: 4, useGrouping: false });
+const mmNumber = new Intl.NumberFormat('en-US', { maximumFractionDigits: 2, useGrouping: false });
+
+/** A length in its unit: inches to 0.0001 in, millimetres to 0.01 mm. */
+export const lengthText = (x: number, unit: LengthUnit): string => `${(unit === 'in' ? inchNumber : mmNumber).format(x)} ${unit}`;
+
+/** A rivet diameter dash in 32nds: 5 → "5/32 in". */
+export const diameterText = (diameter32: number): string => `${inchFraction(diameter32, 32)} in`;
+
+/**
+ * The grip of a rivet line: blind rivets by grip dash with the stack it takes ("−2 (0.063–0.125 in)"),
+ * solid rivets by length dash as inches ("length −4 (1/4 in)").
+ */
+export function gripText(kind: EstimateRivetKind, grip: number | null): string {
+  if (grip === null) return 'none in the grip table';
+  if (kind === 'solid') return `length −${grip} (${inchFraction(grip * 2, 32)} in)`;
+  const range = blindGripRange(grip);
+  return range ? `−${grip} (${range.min.toFixed(3)}–${range.max.toFixed(3)} in)` : `−${grip}`;
+}
+
+export const drillStepsText = (steps: readonly string[]): string => steps.join(' → ');
+
+/** Temporary fasteners by size: "3/32 in × 7, 1/8 in × 7". */
+export const tempFastenersText = (bySize: Record<string, number>): string =>
+  Object.entries(bySize)
+    .map(([size, n]) => `${size} in × ${n}`)
+    .join(', ') || 'none';
+
+/** Holes per drill step: "#40: 21, #30: 21". */
+export const drillHolesText = (byDrill: Record<string, number>): string =>
+  Object.entries(byDrill)
+    .map(([drill, n]) => `${drill}: ${n}`)
+    .join(', ') || 'none';
+
+export const headText = (head: RivetHead): string => RIVET_HEAD_LABELS[head];
+
+const day = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' });
+
+/** A planned day (YYYY-MM-DD) for people; days carry no time zone, so format them as UTC. */
+export const dayText = (iso: string): string => day.format(new Date(`${iso.slice(0, 10)}T00:00:00Z`));
+
+export function plannedDatesText(start: string | null, finish: string | null): string {
+  if (start && finish) return `${dayText(start)} to ${dayText(finish)}`;
+  if (start) return `from ${dayText(start)}`;
+  if (finish) return `finish by ${dayText(finish)}`;
+  return 'no dates planned';
+}
+
+export const plural = (n: number, one: string, many = `${one}s`): string => `${n} ${n === 1 ? one : many}`;

@@ -1,0 +1,171 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { render, screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { createMemoryRouter, RouterProvider } from 'react-router';
+import { beforeEach, describe, expect, it } from 'vitest';
+import type { AssemblyEstimate, KitHoldsResult } from '@shared/schemas/builds';
+import { AssemblyDetailRoute, assemblyDetailLoader } from '@/app/routes/app/assembly-detail';
+import { setCsrfToken } from '@/lib/api-client';
+import { estimateFixture, rudderFixture } from '../helpers/assembly-fixture';
+import { fakeFetch, type FakeCall } from '../helpers/render';
+
+const OWNER = { id: 2, name: 'Ruth Lindqvist', email: 'member@example.org', role: 'member' };
+const QUARTERMASTER = { id: 3, name: 'Marco Bellweather', email: 'qm@example.org', role: 'quartermaster' };
+
+const ASSEMBLY = rudderFixture({ status: 'planned' });
+
+const CAUTION = 'Gripline plans stock and tools; it does not design structures. The kit’s plans, approved data and licensed practice govern.';
+
+/** The server's answer for that assembly: figures as the shared estimate gives them for the line (see assembly-editor.test.tsx). */
+const ESTIMATE: AssemblyEstimate = estimateFixture(7, {
+  lines: [{ label: 'Skin to spar', holesPerRow: 21, holes: 21, pitch: 0.9625, edgeDistance: 0.375, grip: 2, drillSequence: ['#40', '#30', '#20'], tempFasteners: { '3/32': 7, '1/8': 7, '5/32': 7 }, warnings: [] }],
+  totals: { rivets: 21, rivetsWithWaste: 23, drillHoles: { '#40': 21, '#30': 21, '#20': 21 }, tempFasteners: { '3/32': 7, '1/8': 7, '5/32': 7 } },
+  bill: [
+    {
+      description: 'Blind, structural, dome, 5056, steel stem · 5/32 in · grip −2 (0.063–0.125 in)',
+      kind: 'blind_structural',
+      diameter32: 5,
+      grip: 2,
+      lines: [0],
+      estimated: 21,
+      withWaste: 23,
+      bin: { code: 'B-0107', designation: 'Blind, structural, dome, 5056, steel stem · 5/32 in · grip −2 (0.063–0.125 in)', onHand: 20, location: 'Cabinet R, drawer 3' },
+      unstocked: null,
+      shortBy: 3,
+      drawn: 10,
+    },
+    {
+      description: 'Solid, dome, 2117-T4 · 1/8 in · 1/4 in long',
+      kind: 'solid_rivet',
+      diameter32: 4,
+      grip: 4,
+      lines: [1],
+      estimated: 22,
+      withWaste: 24,
+      bin: null,
+      unstocked: 'No bin stocks a 1/8 in dome 2117-T4 solid rivet, length −4.',
+      shortBy: 24,
+      drawn: 0,
+    },
+    {
+      description: 'Screw #8-32 × 1/2 pan head',
+      kind: 'screw',
+      diameter32: null,
+      grip: null,
+      lines: [],
+      estimated: 24,
+      withWaste: 24,
+      bin: { code: 'B-0210', designation: 'Screw #8-32 × 1/2 pan head', onHand: 400, location: 'Cabinet S, drawer 1' },
+      unstocked: null,
+      shortBy: 0,
+      drawn: 0,
+    },
+  ],
+  kit: [
+    { role: 'puller', need: 'A rivet puller for 5/32 in blind rivets', count: null, tool: { code: 'T-0012', name: 'Hand rivet puller', status: 'available' }, note: null },
+    { role: 'drill_bit', need: '#30 drill bit', count: 21, tool: { code: 'T-0031', name: '#30 drill bit, 6 in long', status: 'on_loan' }, note: null },
+    { role: 'temporary_fastener_tray', need: '3/32 in temporary fasteners', count: 7, tool: null, note: 'No tray of 3/32 in temporary fasteners in the crib.' },
+  ],
+  caution: CAUTION,
+});
+
+const HOLDS: KitHoldsResult = {
+  placed: [{ code: 'T-0012', name: 'Hand rivet puller' }],
+  skipped: [{ code: 'T-0031', reason: 'It is on loan; you are next in its queue.' }],
+};
+
+function serve(me = OWNER, hold: { status: number; body: unknown } = { status: 201, body: HOLDS }) {
+  return fakeFetch((call) => {
+    if (call.path === '/api/auth/me') return { status: 200, body: { user: me } };
+    if (call.method === 'GET' && call.path === '/api/assemblies/7') return { status: 200, body: ASSEMBLY };
+    if (call.method === 'GET' && call.path === '/api/assemblies/7/estimate') return { status: 200, body: ESTIMATE };
+    if (call.method === 'POST' && call.path === '/api/assemblies/7/kit/holds') return hold;
+    return undefined;
+  });
+}
+
+function renderPage() {
+  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+  const router = createMemoryRouter([{ path: '/assemblies/:id', loader: assemblyDetailLoader(queryClient), Component: AssemblyDetailRoute, HydrateFallback: () => null }], {
+    initialEntries: ['/assemblies/7'],
+  });
+  render(
+    <QueryClientProvider client={queryClient}>
+      <RouterProvider router={router} />
+    </QueryClientProvider>,
+  );
+  return screen.findByRole('heading', { level: 1, name: 'Rudder' });
+}
+
+const billItem = (description: string) => within(screen.getByRole('listitem', { name: description }));
+const estimateGets = (calls: FakeCall[]) => calls.filter((c) => c.method === 'GET' && c.path === '/api/assemblies/7/estimate');
+
+beforeEach(() => setCsrfToken('tok'));
+
+describe('the assembly estimate page', () => {
+  it('shows the caution first, then each bill line with its bin, on hand, short-by and drawn against estimated, or that no bin stocks it', async () => {
+    serve();
+    await renderPage();
+    expect(screen.getByText(CAUTION)).toBeTruthy();
+    expect(screen.getByRole('link', { name: 'Edit the assembly' }).getAttribute('href')).toBe('/assemblies/7/edit');
+
+    const rivets = billItem(ESTIMATE.bill[0]!.description);
+    expect(rivets.getByRole('link', { name: 'B-0107' }).getAttribute('href')).toBe('/bins/B-0107');
+    expect(rivets.getByText('21 (23 with 5 % waste)')).toBeTruthy();
+    expect(rivets.getByText('10 of 21 estimated')).toBeTruthy();
+    expect(rivets.getByText(/Short by 3/).parentElement!.textContent).toBe('Short by 3: the bin has 20 on hand, the assembly needs 23.');
+
+    const solid = billItem(ESTIMATE.bill[1]!.description);
+    expect(solid.getByText(/Not stocked/).parentElement!.textContent).toBe('Not stocked: No bin stocks a 1/8 in dome 2117-T4 solid rivet, length −4.');
+    expect(solid.queryByRole('link')).toBeNull();
+
+    const screws = billItem('Screw #8-32 × 1/2 pan head');
+    expect(screws.getByText('Enough on hand.')).toBeTruthy();
+    expect(screws.getByRole('link', { name: 'B-0210' })).toBeTruthy();
+  });
+
+  it('lists the crib kit with each tool’s status or the note, and the rivet line worked out', async () => {
+    serve();
+    await renderPage();
+    const kit = within(screen.getByRole('heading', { name: 'From the crib' }).parentElement!);
+    expect(kit.getByRole('link', { name: 'T-0012' }).getAttribute('href')).toBe('/tools/T-0012');
+    expect(kit.getByText('Available')).toBeTruthy();
+    expect(kit.getByText('On loan')).toBeTruthy();
+    expect(kit.getByText('No tray of 3/32 in temporary fasteners in the crib.')).toBeTruthy();
+
+    const lines = within(screen.getByRole('heading', { name: 'Rivet lines' }).parentElement!);
+    expect(lines.getByRole('heading', { name: 'Skin to spar' })).toBeTruthy();
+    expect(lines.getByText('−2 (0.063–0.125 in)')).toBeTruthy();
+    expect(lines.getByText('#40 → #30 → #20')).toBeTruthy();
+  });
+
+  it('holds the kit in one tap and says which holds were placed and which were not, with the reason', async () => {
+    const calls = serve();
+    await renderPage();
+    expect(estimateGets(calls)).toHaveLength(1);
+    await userEvent.click(screen.getByRole('button', { name: 'Hold the kit' }));
+    const result = await screen.findByText('Holds placed');
+    const box = within(result.closest('[role="status"]') as HTMLElement);
+    expect(box.getByText('T-0012').parentElement!.textContent).toBe('T-0012 Hand rivet puller');
+    expect(box.getByText('Not held')).toBeTruthy();
+    expect(box.getByText('T-0031').parentElement!.textContent).toBe('T-0031: It is on loan; you are next in its queue.');
+    expect(calls.filter((c) => c.method === 'POST').map((c) => c.path)).toEqual(['/api/assemblies/7/kit/holds']);
+    // The kit's statuses changed: the estimate is asked for again.
+    await waitFor(() => expect(estimateGets(calls)).toHaveLength(2));
+  });
+
+  it('shows the server’s sentence when no hold can be placed', async () => {
+    serve(OWNER, { status: 409, body: { error: { code: 'KIT_EMPTY', message: 'The crib has none of this kit’s tools.' } } });
+    await renderPage();
+    await userEvent.click(screen.getByRole('button', { name: 'Hold the kit' }));
+    expect((await screen.findByRole('alert')).textContent).toContain('The crib has none of this kit’s tools.');
+  });
+
+  it('lets someone else read the estimate but neither edit it nor hold its kit', async () => {
+    serve(QUARTERMASTER);
+    await renderPage();
+    expect(screen.getByText(/Ruth Lindqvist/)).toBeTruthy();
+    expect(screen.queryByRole('link', { name: 'Edit the assembly' })).toBeNull();
+    expect(screen.queryByRole('button', { name: 'Hold the kit' })).toBeNull();
+  });
+});

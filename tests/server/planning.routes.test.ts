@@ -353,7 +353,7 @@ describe('the crib kit', () => {
     expect(again.body.skipped).toContainEqual({ code: c.bit30.code, reason: `You are already in the queue for ${c.bit30.code}.` });
     expect(again.body.skipped).toContainEqual({ code: c.tray18.code, reason: `Already held for you: ${c.tray18.code}.` });
     const kit = (await member.agent.get(`/api/assemblies/${id}/estimate`)).body.kit as { tool: { code: string; status: string } | null; note: string | null }[];
-    expect(kit.find((k) => k.tool?.code === c.puller532.code)).toMatchObject({ tool: { status: 'held_for_you' }, note: 'held for you' });
+    expect(kit.find((k) => k.tool?.code === c.puller532.code)).toMatchObject({ tool: { status: 'held_for_you' }, note: null });
   });
 });
 

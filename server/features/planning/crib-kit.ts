@@ -51,7 +51,7 @@ const preferred = (a: CribTool, b: CribTool) =>
 function noteFor(tool: CribTool | undefined, candidates: CribTool[]): string | null {
   if (!tool) return 'none in the crib';
   if (tool.status === 'available') return null;
-  if (tool.status === HELD_FOR_YOU) return 'held for you';
+  if (tool.status === HELD_FOR_YOU) return null;
   if (candidates.every((c) => c.status === 'on_loan')) return 'all on loan';
   return 'none free now: on loan, held for someone or out of service';
 }

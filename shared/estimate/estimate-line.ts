@@ -45,9 +45,9 @@ export interface LineEstimate {
   pitch: number;
   edgeDistance: number;
   grip: number | null;
-  drillSequence: string[];
+  drillSequence: readonly string[];
   tempFasteners: Record<string, number>;
-  warnings: EstimateNotice[];
+  warnings: readonly EstimateNotice[];
 }
 
 /** A line the estimator must refuse: the code and the words say why. */
@@ -55,21 +55,30 @@ export interface LineError extends EstimateNotice {
   error: true;
 }
 
-const clean = (x: number) => Math.round(x * 1e6) / 1e6;
-const fmt = (x: number, unit: LengthUnit) => `${clean(x)} ${unit}`;
+function clean(x: number): number {
+  return Math.round(x * 1e6) / 1e6;
+}
+function fmt(x: number, unit: LengthUnit): string {
+  return `${clean(x)} ${unit}`;
+}
+const NO_WARNINGS: readonly EstimateNotice[] = Object.freeze([]);
+
+function diaWords(diameter32: number): string {
+  return `${inchFraction(diameter32, 32)} in`;
+}
 
 /**
  * One rivet line: holes, actual pitch, edge distance, grip, drill steps and temporary fasteners.
  * Lengths are in `unit`; the rivet diameter is converted to it for the spacing rules.
  */
 export function estimateLine(line: RivetLineInput, options: LineOptions): LineEstimate | LineError {
-  const { unit } = options;
-  const toUnit = (inches: number) => (unit === 'mm' ? inches * MM_PER_INCH : inches);
-  const toInches = (x: number) => (unit === 'mm' ? x / MM_PER_INCH : x);
+  const unit = options.unit;
+  /** Inches to the line's unit. */
+  const scale = unit === 'mm' ? MM_PER_INCH : 1;
   const { kind, head, diameter32 } = line.rivet;
-  const d = toUnit(diameter32 / 32);
-  const dia = () => `${inchFraction(diameter32, 32)} in`;
+  const d = (diameter32 / 32) * scale;
   const warnings: EstimateNotice[] = [];
+  // Most lines have no warning: they share one frozen empty list (10,000 lines make 10,000 fewer arrays to collect).
 
   if (kind === 'blind-general' && line.structural) {
     return { error: true, code: 'SOFT_RIVET_ON_STRUCTURE', message: `A general-purpose blind rivet cannot go on a structural line. ${SOFT_RIVET_CAUTION}` };
@@ -82,11 +91,11 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
     if (edge < minEdge - 1e-9) {
       warnings.push({
         code: 'EDGE_BELOW_MINIMUM',
-        message: `Edge distance ${fmt(edge, unit)} is below the published minimum of ${minEdgeDiameters(head)}D = ${fmt(minEdge, unit)} for a ${dia()} ${head === 'countersunk' ? 'countersunk ' : ''}rivet.`,
+        message: `Edge distance ${fmt(edge, unit)} is below the published minimum of ${minEdgeDiameters(head)}D = ${fmt(minEdge, unit)} for a ${diaWords(diameter32)} ${head === 'countersunk' ? 'countersunk ' : ''}rivet.`,
       });
     }
   } else {
-    edge = Math.max(minEdge, options.edgeFloorIn ? toUnit(options.edgeFloorIn) : 0);
+    edge = Math.max(minEdge, options.edgeFloorIn ? options.edgeFloorIn * scale : 0);
   }
 
   const span = line.length - 2 * edge;
@@ -104,7 +113,7 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
     return {
       error: true,
       code: 'PITCH_BELOW_MINIMUM',
-      message: `${holesPerRow} holes give a pitch of ${fmt(pitch, unit)}, below the published minimum of 3D = ${fmt(minPitch, unit)} for a ${dia()} rivet. Use fewer holes or a wider pitch.`,
+      message: `${holesPerRow} holes give a pitch of ${fmt(pitch, unit)}, below the published minimum of 3D = ${fmt(minPitch, unit)} for a ${diaWords(diameter32)} rivet. Use fewer holes or a wider pitch.`,
     };
   }
   const maxD = options.maxPitchDiameters ?? DEFAULT_MAX_PITCH_DIAMETERS;
@@ -114,7 +123,7 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
 
   let stackSum = 0;
   for (const t of line.stack) stackSum += t;
-  const stackIn = toInches(stackSum);
+  const stackIn = stackSum / scale;
   let grip: number | null;
   if (familyOf(kind) === 'solid') {
     grip = solidLengthDash(stackIn, diameter32);
@@ -138,5 +147,5 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
     const size = TEMP_FASTENER_FOR_DRILL[step];
     if (size) tempFasteners[size] = (tempFasteners[size] ?? 0) + perStep;
   }
-  return { holesPerRow, holes, pitch: clean(pitch), edgeDistance: clean(edge), grip, drillSequence: steps, tempFasteners, warnings };
+  return { holesPerRow, holes, pitch: clean(pitch), edgeDistance: clean(edge), grip, drillSequence: steps, tempFasteners, warnings: warnings.length > 0 ? warnings : NO_WARNINGS };
 }

@@ -49,9 +49,9 @@ export interface EstimateErrors {
   errors: (EstimateNotice & { line: number })[];
 }
 
-const add = (into: Record<string, number>, from: Record<string, number>) => {
-  for (const [k, v] of Object.entries(from)) into[k] = (into[k] ?? 0) + v;
-};
+function add(into: Record<string, number>, from: Record<string, number>): void {
+  for (const k in from) into[k] = (into[k] ?? 0) + from[k]!;
+}
 
 /**
  * The whole estimate: every line, the totals, the needs by fastener with the waste allowance
@@ -62,31 +62,40 @@ export function estimate(input: EstimateInput, options: EstimateOptions = {}): E
   const shared: LineOptions = { ...options, unit: input.unit };
   const overrides = options.finalDrillOverrides;
   const results = input.lines.map((line, i) => estimateLine(line, overrides?.[i] ? { ...shared, finalDrillOverride: overrides[i] } : shared));
-  const errors = results.flatMap((r, i) => ('error' in r ? [{ code: r.code, message: `Line ${i + 1}: ${r.message}`, line: i }] : []));
+  const errors: EstimateErrors['errors'] = [];
+  for (let i = 0; i < results.length; i++) {
+    const r = results[i]!;
+    if ('error' in r) errors.push({ code: r.code, message: `Line ${i + 1}: ${r.message}`, line: i });
+  }
   if (errors.length > 0) return { errors };
   const lines = results as LineEstimate[];
 
   const totals: EstimateTotals = { rivets: 0, rivetsWithWaste: 0, drillHoles: {}, tempFasteners: {} };
   const needs = new Map<string, FastenerNeed>();
   const nosepieces = new Map<string, EstimateResult['nosepieces'][number]>();
-  lines.forEach((l, i) => {
+  for (let i = 0; i < lines.length; i++) {
+    const l = lines[i]!;
     const rivet = input.lines[i]!.rivet;
     totals.rivets += l.holes;
     for (const step of l.drillSequence) totals.drillHoles[step] = (totals.drillHoles[step] ?? 0) + l.holes;
     add(totals.tempFasteners, l.tempFasteners);
-    const key = [rivet.kind, rivet.head, rivet.material ?? '', rivet.diameter32, l.grip ?? ''].join('|');
+    const key = `${rivet.kind}|${rivet.head}|${rivet.material ?? ''}|${rivet.diameter32}|${l.grip ?? ''}`;
     const need = needs.get(key) ?? { kind: rivet.kind, head: rivet.head, material: rivet.material ?? null, diameter32: rivet.diameter32, grip: l.grip, rivets: 0, withWaste: 0, lines: [] };
     need.rivets += l.holes;
     need.lines.push(i);
     needs.set(key, need);
     const family = rivet.kind === 'solid' ? 'solid' : 'blind';
-    nosepieces.set(`${family}|${rivet.diameter32}|${family === 'solid' ? rivet.head : ''}`, { kind: family, diameter32: rivet.diameter32, head: rivet.head });
-  });
+    const toolKey = `${family}|${rivet.diameter32}|${family === 'solid' ? rivet.head : ''}`;
+    if (!nosepieces.has(toolKey)) nosepieces.set(toolKey, { kind: family, diameter32: rivet.diameter32, head: rivet.head });
+  }
   for (const need of needs.values()) {
     need.withWaste = Math.ceil(need.rivets * (1 + wastePercent / 100) - 1e-9);
     totals.rivetsWithWaste += need.withWaste;
   }
-  const warnings = lines.flatMap((l, i) => l.warnings.map((w) => ({ code: w.code, message: `Line ${i + 1}: ${w.message}` })));
+  const warnings: EstimateNotice[] = [];
+  for (let i = 0; i < lines.length; i++) {
+    for (const w of lines[i]!.warnings) warnings.push({ code: w.code, message: `Line ${i + 1}: ${w.message}` });
+  }
   return { lines, totals, warnings, needs: [...needs.values()], nosepieces: [...nosepieces.values()], wastePercent };
 }
 

@@ -36,14 +36,14 @@ export const familyOf = (kind: EstimateRivetKind): 'solid' | 'blind' => (kind ==
  * Pilot #40, then the final drill of each smaller rivet size, then this rivet's final drill
  * (common practice: open the hole one rivet size at a time). `finalOverride` is a bin's own hole drill.
  */
-export function drillSequence(kind: EstimateRivetKind, diameter32: number, finalOverride?: string | null): string[] {
+export function drillSequence(kind: EstimateRivetKind, diameter32: number, finalOverride?: string | null): readonly string[] {
   const key = `${familyOf(kind)}|${diameter32}|${finalOverride ?? ''}`;
   let steps = sequences.get(key);
-  if (!steps) sequences.set(key, (steps = buildSequence(kind, diameter32, finalOverride)));
-  return [...steps];
+  if (!steps) sequences.set(key, (steps = Object.freeze(buildSequence(kind, diameter32, finalOverride))));
+  return steps;
 }
 
-/** Few distinct sequences exist; each is worked out once. */
+/** Few distinct sequences exist; each is worked out once and shared (frozen) by every line that uses it. */
 const sequences = new Map<string, readonly string[]>();
 
 function buildSequence(kind: EstimateRivetKind, diameter32: number, finalOverride?: string | null): string[] {

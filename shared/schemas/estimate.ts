@@ -48,9 +48,9 @@ export const lineEstimateSchema = z.object({
   pitch: z.number(),
   edgeDistance: z.number(),
   grip: z.number().nullable(),
-  drillSequence: z.array(z.string()),
+  drillSequence: z.array(z.string()).readonly(),
   tempFasteners: counts,
-  warnings: z.array(notice),
+  warnings: z.array(notice).readonly(),
 });
 
 export const estimateResponseSchema = z.object({

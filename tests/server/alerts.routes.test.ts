@@ -27,7 +27,7 @@ afterEach(() => t.close());
  * EOQ √(2 × 210 × $15 / (25 % × $0.12)) = √210,000 = 458.3 (D = 105 / 26 × 52 = 210 a year) → 5 packs = 500.
  */
 async function binRunningLow(over: Record<string, unknown> = {}, line: Record<string, unknown> = hundredRivetLine) {
-  const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100, leadTimeDays: 14, ...over }));
+  const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100, leadTimeDays: 14, reorderPoint: 0, ...over }));
   await addAssembly(member, { name: `Rib bay for ${bin.code}`, plannedStart: '2026-12-01', plannedFinish: '2026-12-06', lines: [line] });
   return bin;
 }

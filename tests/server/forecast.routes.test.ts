@@ -35,7 +35,7 @@ async function forecastOf(code: string): Promise<BinForecastDto> {
 describe('GET /api/forecast', () => {
   it('forecasts a bin nobody plans from its weekly draws, net of returns and reversals', async () => {
     at('2026-10-01T12:00:00Z');
-    const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 1000, leadTimeDays: 14, unitCost: 0.05 }));
+    const bin = await addBinAs(qm, blindRivetBin({ reorderPoint: 0, initialQuantity: 1000, leadTimeDays: 14, unitCost: 0.05 }));
     // Six past weeks of draws: 10, 14, 8, 12 (20 drawn, 8 back), 6 (a 50 reversed the same week), 10.
     for (const [day, quantity] of [['2026-10-20', 10], ['2026-10-27', 14], ['2026-11-03', 8], ['2026-11-10', 20], ['2026-11-17', 6], ['2026-11-24', 10]] as const) {
       at(`${day}T10:00:00Z`);
@@ -80,7 +80,7 @@ describe('GET /api/forecast', () => {
   });
 
   it('spreads what planned and in-progress assemblies still need over their weeks, less what was drawn for them', async () => {
-    const rivets = await addBinAs(qm, blindRivetBin());
+    const rivets = await addBinAs(qm, blindRivetBin({ reorderPoint: 0 }));
     const screws = await addBinAs(qm, screwBin());
     // 105 rivets (100 + 5 % waste) and 24 screws over weeks 1–3 (Mon 2026-12-07 to Sun 2026-12-27).
     const wing = await addAssembly(member, {
@@ -119,7 +119,7 @@ describe('GET /api/forecast', () => {
   });
 
   it('answers every bin in code order with the settings it used', async () => {
-    await addBinAs(qm, blindRivetBin());
+    await addBinAs(qm, blindRivetBin({ reorderPoint: 0 }));
     await addBinAs(qm, screwBin());
     const res = await lead.agent.get('/api/forecast');
     expect(res.status).toBe(200);
@@ -131,8 +131,17 @@ describe('GET /api/forecast', () => {
     expect(body.data[0]).toMatchObject({ demandSource: 'history', reorderPoint: 0, safetyStock: 0, suggestedOrder: 0, needsAlert: false });
   });
 
+  it('keeps the reorder point typed on a bin as a floor, so a low bin on the Restock list is also alerted', async () => {
+    // No draws, so the computed reorder point is 0; the bin's own is 200 and it holds 150.
+    const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 150, reorderPoint: 200, reorderQty: 450, packSize: 100 }));
+    const f = forecastListSchema.parse((await qm.agent.get(`/api/forecast?bins=${bin.code}`)).body).data[0]!;
+    expect(f).toMatchObject({ reorderPoint: 200, needsAlert: true, suggestedOrder: 500, reason: 'On hand 150 is at or below the bin\'s own reorder point 200.' });
+    const raised = await post(qm, '/api/alerts/refresh');
+    expect(raised.body.data.map((a: { bin: { code: string } }) => a.bin.code)).toEqual([bin.code]);
+  });
+
   it('names unknown bins with 404 and refuses badly written codes with 400', async () => {
-    await addBinAs(qm, blindRivetBin());
+    await addBinAs(qm, blindRivetBin({ reorderPoint: 0 }));
     const unknown = await qm.agent.get('/api/forecast?bins=B-0001,B-9999');
     expect(unknown.status).toBe(404);
     expect(unknown.body.error).toMatchObject({ code: 'BIN_NOT_FOUND', message: expect.stringContaining('B-9999') });

@@ -1,4 +1,5 @@
 import type { CreateBinBody } from '@shared/schemas/bins';
+import { seededRandom } from '@shared/random/seeded';
 import { createBinBodySchema } from '@shared/schemas/bins';
 import type { RivetHead } from '@shared/stock/kinds';
 import { findUserByEmail } from '../accounts/users.repo';
@@ -170,18 +171,6 @@ const PROJECTS: Project[] = [
   { who: DANA, note: 'Spar carry-through doubler', from: 66, to: 20, uses: [['b6d4', 20], ['b6d8', 8], ['b5d6', 15], ['b5d3', 25], ['drill30', 1], ['drill21', 1], ['drill11', 1]] },
   { who: RUTH, note: 'Open-day demonstration panel', from: 32, to: 26, uses: [['b4d2', 40], ['s470ad4_4', 60], ['b4d4', 20], ['drill40', 1]] },
 ];
-
-/** A small seeded generator (mulberry32), so the demo is the same every time. */
-function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 type Planned =
   | { at: Date; type: 'draw'; who: string; key: string; quantity: number; note: string }

@@ -6,6 +6,7 @@
  * Warm-up passes first (so the JIT has compiled the code), then the median of timed samples.
  */
 import { performance } from 'node:perf_hooks';
+import { seededRandom as seeded } from '@shared/random/seeded';
 import { binForecast } from '@shared/forecast/bin-forecast';
 import { spreadAssemblyDemand, weekIndexOf, weekStarts, weeklyDrawHistory, type DrawEntry, type PlannedAssembly } from '@shared/forecast/demand';
 
@@ -21,18 +22,6 @@ const GOAL_MS_500 = 200;
 const GOAL_RATIO = 12;
 const DAY_MS = 86_400_000;
 const NOW = new Date('2026-12-02T15:30:00Z');
-
-/** mulberry32: a small seeded generator, enough for spreading synthetic data. */
-function seeded(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4_294_967_296;
-  };
-}
 
 type SyntheticBin = { id: number; onHand: number; leadTimeDays: number; packSize: number; unitCost: number };
 type Scenario = { bins: SyntheticBin[]; assemblies: PlannedAssembly<number>[]; draws: DrawEntry<number>[]; receiptsByBin: Map<number, { at: Date; quantity: number }[]> };

@@ -6,6 +6,7 @@
  * filled from a seeded generator. Median of timed runs after warm-up; the HTTP layer is not timed.
  */
 import { performance } from 'node:perf_hooks';
+import { seededRandom as seeded } from '@shared/random/seeded';
 import { BLIND_GRIP_RANGES } from '@shared/stock/fasteners';
 import type { ServiceContext } from '../../server/context';
 import { migrateDatabase, openDatabase, type Database } from '../../server/db/client';
@@ -22,17 +23,6 @@ const RUNS = 15;
 const GOAL_MS_500 = 200;
 const DAY_MS = 86_400_000;
 const NOW = new Date('2026-12-02T15:30:00Z');
-
-function seeded(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4_294_967_296;
-  };
-}
 
 /** 72 rivet specs: two blind kinds × two heads × three diameters × six grips. */
 const SPECS = (['blind_structural', 'blind_general'] as const).flatMap((kind) =>

@@ -2,7 +2,8 @@ import type { Alert } from '@shared/schemas/forecast';
 import { valueAtCost } from '@shared/stock/money';
 import type { ServiceContext } from '../../context';
 import type { OutgoingMail } from '../../mail/mailer';
-import { activeQuartermasters, finishJobRun, startJobRun } from './alerts.repo';
+import { finishJobRun, startJobRun } from '../../jobs/job-runs.repo';
+import { activeQuartermasters } from './alerts.repo';
 import { listAlertsIn, refreshAlerts } from './alerts.service';
 
 export const ALERT_DIGEST_JOB = 'alert-digest';

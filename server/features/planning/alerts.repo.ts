@@ -1,8 +1,8 @@
-import { and, asc, desc, eq, gte, inArray, isNull, min } from 'drizzle-orm';
+import { and, asc, desc, eq, gte, inArray, min } from 'drizzle-orm';
 import type { AlertState } from '@shared/schemas/forecast';
 import type { Executor } from '../../db/client';
+import { activePeopleWithRole } from '../../jobs/job-runs.repo';
 import { binAlerts, type BinAlertRow } from '../../db/schema/builds';
-import { jobRuns } from '../../db/schema/crib-jobs';
 import { bins, type BinRow } from '../../db/schema/stock';
 import { users } from '../../db/schema/users';
 
@@ -62,22 +62,8 @@ export function updateAlertFrom(db: Executor, id: number, from: AlertState[], va
   return changed.length > 0;
 }
 
-export function activeQuartermasters(db: Executor): { name: string; email: string }[] {
-  return db
-    .select({ name: users.name, email: users.email })
-    .from(users)
-    .where(and(eq(users.role, 'quartermaster'), isNull(users.deactivatedAt)))
-    .orderBy(asc(users.id))
-    .all();
-}
+export const activeQuartermasters = (db: Executor) => activePeopleWithRole(db, 'quartermaster');
 
-export function startJobRun(db: Executor, job: string, startedAt: Date): number {
-  return db.insert(jobRuns).values({ job, startedAt }).returning({ id: jobRuns.id }).get().id;
-}
-
-export function finishJobRun(db: Executor, id: number, values: { finishedAt: Date; summary: string; error: string | null }): void {
-  db.update(jobRuns).set(values).where(eq(jobRuns.id, id)).run();
-}
 
 /** Bins with an alert dismissed since `since`, each with the lowest on hand such an alert was raised at. */
 export function recentDismissals(db: Executor, since: Date): Map<number, number> {

@@ -1,6 +1,7 @@
-import { and, asc, desc, eq, isNull, lt, max } from 'drizzle-orm';
+import { and, asc, eq, isNull, lt, max } from 'drizzle-orm';
 import type { Executor } from '../../db/client';
-import { jobRuns, loanReminders } from '../../db/schema/crib-jobs';
+import { activePeopleWithRole } from '../../jobs/job-runs.repo';
+import { loanReminders } from '../../db/schema/crib-jobs';
 import { loans, tools } from '../../db/schema/tools';
 import { users } from '../../db/schema/users';
 
@@ -64,29 +65,6 @@ export function releaseReminder(db: Executor, loanId: number, day: string): void
   db.delete(loanReminders).where(and(eq(loanReminders.loanId, loanId), eq(loanReminders.day, day))).run();
 }
 
-export function activeLeads(db: Executor): { name: string; email: string }[] {
-  return db
-    .select({ name: users.name, email: users.email })
-    .from(users)
-    .where(and(eq(users.role, 'lead'), isNull(users.deactivatedAt)))
-    .orderBy(asc(users.id))
-    .all();
-}
+export const activeLeads = (db: Executor) => activePeopleWithRole(db, 'lead');
 
-export function startJobRun(db: Executor, job: string, startedAt: Date): number {
-  return db.insert(jobRuns).values({ job, startedAt }).returning({ id: jobRuns.id }).get().id;
-}
 
-export function finishJobRun(db: Executor, id: number, values: { finishedAt: Date; summary: string; error: string | null }): void {
-  db.update(jobRuns).set(values).where(eq(jobRuns.id, id)).run();
-}
-
-export function lastJobRun(db: Executor, job: string) {
-  return db
-    .select()
-    .from(jobRuns)
-    .where(eq(jobRuns.job, job))
-    .orderBy(desc(jobRuns.startedAt), desc(jobRuns.id))
-    .limit(1)
-    .get();
-}

@@ -3,7 +3,8 @@ import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { overdueReminderMail, type OverdueMailLine } from '../../mail/messages';
-import { claimReminder, findLoanForReminder, lastJobRun, listOverdueLoans, loansRemindedOn, releaseReminder, type OverdueLoanRow } from './overdue.repo';
+import { lastJobRun } from '../../jobs/job-runs.repo';
+import { claimReminder, findLoanForReminder, listOverdueLoans, loansRemindedOn, releaseReminder, type OverdueLoanRow } from './overdue.repo';
 
 export const OVERDUE_JOB = 'overdue-reminders';
 

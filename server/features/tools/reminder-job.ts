@@ -1,7 +1,8 @@
 import type { ServiceContext } from '../../context';
 import { overdueDigestMail, overdueReminderMail } from '../../mail/messages';
 import { expireHoldOffers } from './holds.service';
-import { activeLeads, claimReminder, finishJobRun, releaseReminder, startJobRun } from './overdue.repo';
+import { finishJobRun, startJobRun } from '../../jobs/job-runs.repo';
+import { activeLeads, claimReminder, releaseReminder } from './overdue.repo';
 import { calendarDay, OVERDUE_JOB, overdueLoans, toMailLine } from './overdue.service';
 
 export interface OverdueRunResult {

@@ -46,7 +46,7 @@ export interface LineEstimate {
   edgeDistance: number;
   grip: number | null;
   drillSequence: readonly string[];
-  tempFasteners: Record<string, number>;
+  tempFasteners: Readonly<Record<string, number>>;
   warnings: readonly EstimateNotice[];
 }
 
@@ -62,6 +62,27 @@ function fmt(x: number, unit: LengthUnit): string {
   return `${clean(x)} ${unit}`;
 }
 const NO_WARNINGS: readonly EstimateNotice[] = Object.freeze([]);
+
+/**
+ * Temporary fasteners by size: `perStep` for each drill step. Lines with the same steps and count
+ * share one frozen answer, so a long list of lines does not leave one object per line to collect.
+ */
+const fastenerCounts = new Map<readonly string[], Map<number, Readonly<Record<string, number>>>>();
+function tempFastenersFor(steps: readonly string[], perStep: number): Readonly<Record<string, number>> {
+  let bySteps = fastenerCounts.get(steps);
+  if (!bySteps) fastenerCounts.set(steps, (bySteps = new Map<number, Readonly<Record<string, number>>>()));
+  let counts = bySteps.get(perStep);
+  if (!counts) {
+    const made: Record<string, number> = {};
+    for (const step of steps) {
+      const size = TEMP_FASTENER_FOR_DRILL[step];
+      if (size) made[size] = (made[size] ?? 0) + perStep;
+    }
+    if (bySteps.size < 5000) bySteps.set(perStep, (counts = Object.freeze(made)));
+    else counts = made;
+  }
+  return counts;
+}
 
 function diaWords(diameter32: number): string {
   return `${inchFraction(diameter32, 32)} in`;
@@ -141,11 +162,6 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
   const rows = line.rows ?? 1;
   const holes = holesPerRow * rows;
   const steps = drillSequence(kind, diameter32, options.finalDrillOverride);
-  const tempFasteners: Record<string, number> = {};
-  const perStep = Math.ceil(holes / 3);
-  for (const step of steps) {
-    const size = TEMP_FASTENER_FOR_DRILL[step];
-    if (size) tempFasteners[size] = (tempFasteners[size] ?? 0) + perStep;
-  }
+  const tempFasteners = tempFastenersFor(steps, Math.ceil(holes / 3));
   return { holesPerRow, holes, pitch: clean(pitch), edgeDistance: clean(edge), grip, drillSequence: steps, tempFasteners, warnings: warnings.length > 0 ? warnings : NO_WARNINGS };
 }

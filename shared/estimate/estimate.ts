@@ -49,6 +49,31 @@ export interface EstimateErrors {
   errors: (EstimateNotice & { line: number })[];
 }
 
+const HEAD_INDEX: Record<RivetHead, number> = { dome: 0, countersunk: 1, flange: 2 };
+const KIND_INDEX: Record<EstimateRivetKind, number> = { 'blind-structural': 0, 'blind-general': 1, solid: 2 };
+
+/**
+ * One key per fastener need. Its strings are made once per distinct spec and kept, so 10,000 lines
+ * of a few specs make a few strings, not 10,000.
+ */
+const needKeys = new Map<string, Map<number, string>>();
+function needKey(rivet: RivetLineInput['rivet'], grip: number | null): string {
+  const material = rivet.material ?? '';
+  let byMaterial = needKeys.get(material);
+  if (!byMaterial) {
+    byMaterial = new Map<number, string>();
+    // Materials come from people's input: keep at most a few hundred of them.
+    if (needKeys.size < 500) needKeys.set(material, byMaterial);
+  }
+  const code = ((KIND_INDEX[rivet.kind] * 3 + HEAD_INDEX[rivet.head]) * 64 + rivet.diameter32) * 256 + (grip === null ? 255 : grip * 2);
+  let key = byMaterial.get(code);
+  if (key === undefined) {
+    key = `${rivet.kind}|${rivet.head}|${material}|${rivet.diameter32}|${grip ?? ''}`;
+    if (byMaterial.size < 10_000) byMaterial.set(code, key);
+  }
+  return key;
+}
+
 function add(into: Record<string, number>, from: Record<string, number>): void {
   for (const k in from) into[k] = (into[k] ?? 0) + from[k]!;
 }
@@ -72,20 +97,20 @@ export function estimate(input: EstimateInput, options: EstimateOptions = {}): E
 
   const totals: EstimateTotals = { rivets: 0, rivetsWithWaste: 0, drillHoles: {}, tempFasteners: {} };
   const needs = new Map<string, FastenerNeed>();
-  const nosepieces = new Map<string, EstimateResult['nosepieces'][number]>();
+  const nosepieces = new Map<number, EstimateResult['nosepieces'][number]>();
   for (let i = 0; i < lines.length; i++) {
     const l = lines[i]!;
     const rivet = input.lines[i]!.rivet;
     totals.rivets += l.holes;
     for (const step of l.drillSequence) totals.drillHoles[step] = (totals.drillHoles[step] ?? 0) + l.holes;
     add(totals.tempFasteners, l.tempFasteners);
-    const key = `${rivet.kind}|${rivet.head}|${rivet.material ?? ''}|${rivet.diameter32}|${l.grip ?? ''}`;
+    const key = needKey(rivet, l.grip);
     const need = needs.get(key) ?? { kind: rivet.kind, head: rivet.head, material: rivet.material ?? null, diameter32: rivet.diameter32, grip: l.grip, rivets: 0, withWaste: 0, lines: [] };
     need.rivets += l.holes;
     need.lines.push(i);
     needs.set(key, need);
     const family = rivet.kind === 'solid' ? 'solid' : 'blind';
-    const toolKey = `${family}|${rivet.diameter32}|${family === 'solid' ? rivet.head : ''}`;
+    const toolKey = (family === 'solid' ? 1000 + HEAD_INDEX[rivet.head] * 100 : 0) + rivet.diameter32;
     if (!nosepieces.has(toolKey)) nosepieces.set(toolKey, { kind: family, diameter32: rivet.diameter32, head: rivet.head });
   }
   for (const need of needs.values()) {

@@ -4,18 +4,22 @@
  */
 import { estimate, isEstimateErrors } from '../../shared/estimate/estimate';
 import type { RivetLineInput } from '../../shared/estimate/estimate-line';
+import { seededRandom } from '../../shared/random/seeded';
 
 const kinds = ['blind-structural', 'blind-general', 'solid'] as const;
 const heads = ['dome', 'countersunk', 'flange'] as const;
 const gauges = [0.016, 0.02, 0.025, 0.032, 0.04, 0.05, 0.063];
 
-/** Deterministic, varied lines: lengths 6–48 in, pitch 0.8–1.5 in, two or three sheets. */
+/**
+ * Deterministic, varied lines as builders lay them out: lengths 6–48 in, a pitch in the usual 4D–8D
+ * range (trade-checks §3: "usually 4D–8D"), two or three sheets. One line in fifty has a pitch past
+ * the 10D maximum, so warnings are part of the work too.
+ */
 function lines(n: number): RivetLineInput[] {
-  let seed = 42;
-  const rnd = () => ((seed = (seed * 1_103_515_245 + 12_345) % 2 ** 31) / 2 ** 31);
+  const rnd = seededRandom(42);
   return Array.from({ length: n }, (_, i) => ({
     length: 6 + rnd() * 42,
-    pitch: 0.8 + rnd() * 0.7,
+    pitch: (([3, 4, 5][i % 3]! / 32) * (i % 50 === 0 ? 11 : 4 + rnd() * 4)),
     rows: 1 + (i % 2),
     stack: Array.from({ length: 2 + (i % 2) }, () => gauges[Math.floor(rnd() * gauges.length)]!),
     rivet: { kind: kinds[i % 3]!, head: heads[i % 2]!, diameter32: [3, 4, 5][i % 3]!, material: i % 3 === 2 ? '2117-T4' : '5056' },

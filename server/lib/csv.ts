@@ -1,3 +1,4 @@
+import type { Response } from 'express';
 import Papa from 'papaparse';
 
 export type CsvCell = string | number | null;
@@ -14,4 +15,15 @@ export const textCell = (value: string | null | undefined) => (value ? guardText
 /** UTF-8 with a byte-order mark, so spreadsheets show the dashes and degree signs in designations. */
 export function toCsv(fields: readonly string[], rows: readonly CsvCell[][]): string {
   return '\uFEFF' + Papa.unparse({ fields: [...fields], data: rows.map((r) => r.map((c) => c ?? '')) }, { newline: '\r\n' });
+}
+
+/** Money in a CSV: cents as dollars with two places, a number to the spreadsheet. */
+export const centsCell = (cents: number) => (cents / 100).toFixed(2);
+
+/** Sends a CSV as a download that no cache keeps. */
+export function sendCsv(res: Response, filename: string, csv: string): void {
+  res.type('text/csv; charset=utf-8');
+  res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
+  res.setHeader('Cache-Control', 'no-store');
+  res.send(csv);
 }

@@ -64,7 +64,10 @@ export interface OverdueMailLine {
 
 const dayWords = (d: Date) => d.toISOString().slice(0, 10);
 const lateWords = (n: number) => `${n} ${n === 1 ? 'day' : 'days'} late`;
-const valueWords = (cents: number) => `$${(cents / 100).toFixed(2)}`;
+/** An amount in cents as the mails write it: $12.50. */
+export const valueWords = (cents: number) => `$${(cents / 100).toFixed(2)}`;
+/** A count with its noun: 1 pack, 3 packs. */
+export const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 const toolLink = (publicUrl: string, code: string) => `${publicUrl.replace(/\/$/, '')}/tools/${code}`;
 
 export function overdueReminderMail(line: OverdueMailLine, publicUrl: string): OutgoingMail {

@@ -8,6 +8,7 @@ import { findAssembly } from '../features/planning/assemblies.repo';
 import { createAssembly } from '../features/planning/assemblies.service';
 import { estimateAssembly } from '../features/planning/assembly-estimate.service';
 import { createBuild } from '../features/planning/builds.service';
+import { findBinByCode } from '../features/stock/bins.repo';
 import { draw } from '../features/stock/ledger.service';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
@@ -169,7 +170,7 @@ export function seedDemoBuilds(db: Database, now: Date = new Date()): DemoBuilds
         const begun = today + a.days[0] * DAY_MS + 9 * 60 * MINUTE_MS;
         for (const need of estimateAssembly(db, findAssembly(db, assembly.id)!).bill) {
           if (!need.bin || need.lines.length === 0) continue;
-          const bin = db.select().from(bins).where(eq(bins.code, need.bin.code)).get()!;
+          const bin = findBinByCode(db, need.bin.code)!;
           const quantity = Math.min(Math.round(need.estimated * share), bin.onHand - bin.reorderPoint - 1);
           if (quantity <= 0) continue;
           // Two sessions: the first on the day work began, or just after the bin's last entry.

@@ -107,3 +107,8 @@ export function fastenerDesignation(spec: FastenerSpec): string | undefined {
   }
   return undefined;
 }
+
+/** How a bin is named: its fastener's designation, or the bin's own name when it holds something else. */
+export function binDesignation(bin: FastenerSpec & { name: string }): string {
+  return fastenerDesignation(bin) ?? bin.name;
+}

@@ -1,5 +1,5 @@
 import { inArray } from 'drizzle-orm';
-import { fastenerDesignation } from '@shared/stock/fasteners';
+import { binDesignation } from '@shared/stock/fasteners';
 import type { Executor } from '../../db/client';
 import { bins } from '../../db/schema/stock';
 import { tools } from '../../db/schema/tools';
@@ -34,5 +34,5 @@ export function findBinTitles(db: Executor, codes: readonly string[]): Map<strin
     .from(bins)
     .where(inArray(bins.code, unique))
     .all();
-  return new Map(rows.map((r) => [r.code, fastenerDesignation(r) ?? r.name]));
+  return new Map(rows.map((r) => [r.code, binDesignation(r)]));
 }

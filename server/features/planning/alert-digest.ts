@@ -2,6 +2,7 @@ import type { Alert } from '@shared/schemas/forecast';
 import { valueAtCost } from '@shared/stock/money';
 import type { ServiceContext } from '../../context';
 import type { OutgoingMail } from '../../mail/mailer';
+import { plural, valueWords } from '../../mail/messages';
 import { finishJobRun, startJobRun } from '../../jobs/job-runs.repo';
 import { activeQuartermasters } from './alerts.repo';
 import { listAlertsIn, refreshAlerts } from './alerts.service';
@@ -15,16 +16,13 @@ export interface AlertDigestResult {
   error: string | null;
 }
 
-const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
-const money = (cents: number) => `$${(cents / 100).toFixed(2)}`;
-
 function alertLine(a: Alert): string {
   const { bin } = a;
   const part = bin.supplierPart ? `, part ${bin.supplierPart}` : '';
   const head = `- ${bin.code} ${bin.designation}${part}: ${bin.onHand} ${bin.unit} on hand`;
   if (a.state === 'ordered') return `${head}; ordered ${a.orderedQty} on ${a.orderedAt?.slice(0, 10)}, expected ${a.expectedAt}`;
   const packs = Math.ceil(a.suggestedQty / bin.packSize);
-  return `${head}; order ${a.suggestedQty} (${plural(packs, 'pack', 'packs')} of ${bin.packSize}, about ${money(valueAtCost(a.suggestedQty, bin.unitCost))})\n  ${a.reason}`;
+  return `${head}; order ${a.suggestedQty} (${plural(packs, 'pack', 'packs')} of ${bin.packSize}, about ${valueWords(valueAtCost(a.suggestedQty, bin.unitCost))})\n  ${a.reason}`;
 }
 
 /** The quartermaster's morning list: alerts still to order and orders on their way, by supplier. */

@@ -1,15 +1,10 @@
-import { Router, type Response } from 'express';
+import { Router } from 'express';
 import { alertIdParams, alertListQuerySchema, dismissBodySchema, markOrderedBodySchema } from '@shared/schemas/forecast';
+import { sendCsv } from '../../lib/csv';
 import { parseInput } from '../../lib/validate';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { dismissAlert, listAlertsIn, markOrdered, refreshAlerts, refreshIfStale } from './alerts.service';
 import { purchaseList, purchaseListCsv } from './purchase-list';
-
-function sendCsv(res: Response, filename: string, csv: string) {
-  res.type('text/csv; charset=utf-8');
-  res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
-  res.send(csv);
-}
 
 /**
  * /api/alerts: reorder alerts and the purchase list, for quartermasters (and leads). Opening the

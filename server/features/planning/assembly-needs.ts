@@ -1,9 +1,9 @@
-import { estimate, isEstimateErrors, type FastenerNeed } from '@shared/estimate/estimate';
-import type { AssemblyLine, ExtraItem } from '@shared/schemas/builds';
+import { estimate, isEstimateErrors } from '@shared/estimate/estimate';
 import { isRivetKind } from '@shared/stock/kinds';
 import type { BinRow } from '../../db/schema/stock';
 import type { PlanningSettings } from '../../settings/planning-settings';
-import { binStocksNeed, mostOnHand } from './bill';
+import { binsStocking } from './bill';
+import { parseExtraItems, parseLines } from './planning-dto';
 
 /**
  * What one assembly takes from the bins: each need with the bins that stock it (best first, where
@@ -31,11 +31,6 @@ export function binIndex(all: readonly BinRow[]): BinIndex {
   };
 }
 
-/** The bins of the need's spec, as the assembly's bill ranks them (most on hand first). */
-function binsStocking(index: BinIndex, need: FastenerNeed): BinRow[] {
-  return index.rivetBins.filter((b) => binStocksNeed(b, need)).sort(mostOnHand);
-}
-
 export interface AssemblyForNeeds {
   unit: 'in' | 'mm';
   lines: string;
@@ -48,8 +43,8 @@ export interface AssemblyForNeeds {
  * they were saved) add nothing; the assembly page shows why. Unstocked needs are left out.
  */
 export function assemblyBinNeeds(a: AssemblyForNeeds, settings: PlanningSettings, index: BinIndex): BinNeed[] {
-  const lines = JSON.parse(a.lines) as AssemblyLine[];
-  const extras = JSON.parse(a.extraItems) as ExtraItem[];
+  const lines = parseLines(a.lines);
+  const extras = parseExtraItems(a.extraItems);
   const out: BinNeed[] = [];
   if (lines.length > 0) {
     const result = estimate(
@@ -58,7 +53,7 @@ export function assemblyBinNeeds(a: AssemblyForNeeds, settings: PlanningSettings
     );
     if (!isEstimateErrors(result)) {
       for (const need of result.needs) {
-        const found = binsStocking(index, need);
+        const found = binsStocking(index.rivetBins, need);
         if (found.length > 0) out.push({ binIds: found.map((b) => b.id), estimated: need.rivets, withWaste: need.withWaste, rivet: true });
       }
     }

@@ -2,7 +2,7 @@ import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { FastenerNeed } from '@shared/estimate/estimate';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import type { BillLine, ExtraItem } from '@shared/schemas/builds';
-import { fastenerDesignation, inchFraction, type FastenerSpec } from '@shared/stock/fasteners';
+import { binDesignation, fastenerDesignation, inchFraction, type FastenerSpec } from '@shared/stock/fasteners';
 import { RIVET_HEAD_LABELS, RIVET_KINDS, type RivetKind } from '@shared/stock/kinds';
 import type { Executor } from '../../db/client';
 import { bins, stockMovements, type BinRow } from '../../db/schema/stock';
@@ -31,7 +31,7 @@ function specOf(need: FastenerNeed): FastenerSpec {
 }
 
 /** Kind, head, diameter and grip (blind: grip dash; solid: length dash) must match; material too when the line names one. */
-export function binStocksNeed(bin: BinRow, need: FastenerNeed): boolean {
+function binStocksNeed(bin: BinRow, need: FastenerNeed): boolean {
   if (bin.kind !== BIN_KIND_FOR[need.kind] || bin.head !== need.head || bin.diameter32 !== need.diameter32) return false;
   if (need.material !== null && bin.material?.toLowerCase() !== need.material.toLowerCase()) return false;
   const grip = need.kind === 'solid' ? bin.length16 : bin.grip16;
@@ -39,14 +39,16 @@ export function binStocksNeed(bin: BinRow, need: FastenerNeed): boolean {
 }
 
 /** The bin to take from first: the one with the most on hand. */
-export const mostOnHand = (a: BinRow, b: BinRow) => b.onHand - a.onHand || a.code.localeCompare(b.code);
+const mostOnHand = (a: BinRow, b: BinRow) => b.onHand - a.onHand || a.code.localeCompare(b.code);
+
+/** The bins of the need's spec, best first (most on hand). */
+export function binsStocking(rivetBins: readonly BinRow[], need: FastenerNeed): BinRow[] {
+  return rivetBins.filter((b) => binStocksNeed(b, need)).sort(mostOnHand);
+}
 
 export function matchNeeds(db: Executor, needs: FastenerNeed[]): NeedMatch[] {
   const rivetBins = db.select().from(bins).where(inArray(bins.kind, [...RIVET_KINDS])).all();
-  return needs.map((need) => ({
-    need,
-    bins: rivetBins.filter((b) => binStocksNeed(b, need)).sort(mostOnHand),
-  }));
+  return needs.map((need) => ({ need, bins: binsStocking(rivetBins, need) }));
 }
 
 /** Each rivet line's final drill from the bin that stocks its rivet, where the bin names one. */
@@ -82,7 +84,7 @@ function drawnByBin(db: Executor, assemblyId: number): Map<number, number> {
   return new Map(rows.map((r) => [r.binId, r.n]));
 }
 
-const binRef = (b: BinRow) => ({ code: b.code, designation: fastenerDesignation(b) ?? b.name, onHand: b.onHand, location: b.location });
+const binRef = (b: BinRow) => ({ code: b.code, designation: binDesignation(b), onHand: b.onHand, location: b.location });
 
 /**
  * The bill: each fastener need with the bin that stocks it (or why none does), then the extra

@@ -1,5 +1,5 @@
 import type { BinForecastDto } from '@shared/schemas/forecast';
-import { fastenerDesignation } from '@shared/stock/fasteners';
+import { binDesignation } from '@shared/stock/fasteners';
 import { e4ToDollars } from '@shared/stock/money';
 import type { BinRow } from '../../db/schema/stock';
 
@@ -9,7 +9,7 @@ export type BinBrief = BinForecastDto['bin'];
 export function binBrief(bin: BinRow): BinBrief {
   return {
     code: bin.code,
-    designation: fastenerDesignation(bin) ?? bin.name,
+    designation: binDesignation(bin),
     kind: bin.kind,
     supplier: bin.supplier,
     supplierPart: bin.supplierPart,

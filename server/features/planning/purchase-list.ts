@@ -1,7 +1,7 @@
 import type { PurchaseList } from '@shared/schemas/forecast';
 import { valueCents } from '@shared/stock/money';
 import type { ServiceContext } from '../../context';
-import { textCell, toCsv, type CsvCell } from '../../lib/csv';
+import { centsCell, textCell, toCsv, type CsvCell } from '../../lib/csv';
 import { openAlertsBySupplier } from './alerts.repo';
 import { binBrief } from './bin-brief';
 
@@ -34,7 +34,7 @@ export function purchaseListCsv(ctx: ServiceContext): string {
       l.bin.packSize,
       l.packs,
       l.bin.unitCost,
-      (l.costCents / 100).toFixed(2),
+      centsCell(l.costCents),
       l.alertId,
     ]),
   );

@@ -1,5 +1,5 @@
 import type { Bin } from '@shared/schemas/bins';
-import { blindGripRange, fastenerDesignation } from '@shared/stock/fasteners';
+import { binDesignation, blindGripRange } from '@shared/stock/fasteners';
 import { isBlindKind } from '@shared/stock/kinds';
 import type { BinRow } from '../../db/schema/stock';
 import { e4ToDollars, valueCents } from '@shared/stock/money';
@@ -11,10 +11,6 @@ export function orderQuantity(bin: Pick<BinRow, 'reorderQty' | 'packSize'>): num
 
 export function isLow(bin: Pick<BinRow, 'onHand' | 'reorderPoint'>): boolean {
   return bin.onHand <= bin.reorderPoint;
-}
-
-export function binDesignation(bin: BinRow): string {
-  return fastenerDesignation(bin) ?? bin.name;
 }
 
 export function toBinDto(bin: BinRow, lastCounted?: Date): Bin {

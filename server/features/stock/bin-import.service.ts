@@ -1,13 +1,13 @@
 import type { ImportPreview, ImportResult } from '@shared/schemas/bin-import';
 import type { BinListQuery, CreateBinInput } from '@shared/schemas/bins';
-import { fastenerDesignation } from '@shared/stock/fasteners';
+import { binDesignation } from '@shared/stock/fasteners';
 import { BIN_CODE_PATTERN } from '@shared/stock/kinds';
 import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { parseBinCsv, problem } from './bin-csv';
 import { listBins, nextBinCode } from './bins.repo';
-import { createBin } from './bins.service';
+import { insertNewBin } from './bins.service';
 
 export const ALL_BINS: BinListQuery = { page: 1, pageSize: Number.MAX_SAFE_INTEGER };
 /** At most this many problems travel in a refused import's envelope; the message gives the full count. */
@@ -18,8 +18,6 @@ interface CheckedFile {
   /** The bins to create, codes assigned, in file order (only meaningful when the preview can import). */
   bins: CreateBinInput[];
 }
-
-const designationOf = (bin: CreateBinInput) => fastenerDesignation(bin) ?? bin.name;
 
 /**
  * Checks every row of a bins CSV against the bin rules and against the codes already in use:
@@ -53,7 +51,7 @@ function checkFile(ctx: ServiceContext, csv: string): CheckedFile {
     const code = r.code || freeCode();
     const ok = r.errors.length === 0 && r.input !== undefined;
     if (ok) bins.push({ ...r.input!, code });
-    return { line: r.line, code, designation: r.input ? designationOf(r.input) : r.name, ok, errors: r.errors };
+    return { line: r.line, code, designation: r.input ? binDesignation(r.input) : r.name, ok, errors: r.errors };
   });
   const valid = bins.length;
   const invalid = rows.length - valid;
@@ -84,7 +82,7 @@ export function commitImport(ctx: ServiceContext, actor: UserRow, csv: string): 
     .transaction(() => {
       const { preview, bins } = checkFile(ctx, csv);
       if (!preview.canImport) throw refusal(preview);
-      const codes = bins.map((bin) => createBin(ctx, actor, bin).code);
+      const codes = bins.map((bin) => insertNewBin(ctx, actor, bin).code);
       return { created: codes.length, codes };
     })
     .immediate();

@@ -57,8 +57,13 @@ const codeTaken = (code: string) =>
 
 /** A new bin; opening stock becomes its first ledger entry, so on hand is the ledger's sum from the start. */
 export function createBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): Bin {
+  return getBin(ctx, insertNewBin(ctx, actor, input).code);
+}
+
+/** Writes a new bin and its opening stock, and returns the row (an import needs no more than its code). */
+export function insertNewBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): BinRow {
   const at = ctx.now();
-  const row = ctx.db.$client
+  return ctx.db.$client
     .transaction(() => {
       const code = input.code ?? nextBinCode(ctx.db);
       if (findBinByCode(ctx.db, code)) throw codeTaken(code);
@@ -69,7 +74,6 @@ export function createBin(ctx: ServiceContext, actor: UserRow, input: CreateBinI
       return bin;
     })
     .immediate();
-  return getBin(ctx, row.code);
 }
 
 /** Changes the fields sent; on hand changes only through the ledger. The result must still be a valid bin of its kind. */

@@ -6,7 +6,7 @@ import type { ServiceContext } from '../../context';
 import type { MovementRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
-import { binDesignation } from './bin-dto';
+import { binDesignation } from '@shared/stock/fasteners';
 import { e4ToDollars, valueCents } from '@shared/stock/money';
 import { insertPayment, namesOf, paidByPerson, paymentById, paymentsOf, spendEntries, tabEntries, type PaymentRow, type TabEntryRow } from './money.repo';
 

@@ -1,6 +1,7 @@
-import express, { Router, type Request, type Response } from 'express';
+import express, { Router, type Request } from 'express';
 import { binImportBodySchema, ledgerExportQuerySchema } from '@shared/schemas/bin-import';
 import { requireRole, requireUser } from '../../middleware/auth';
+import { sendCsv } from '../../lib/csv';
 import { parseInput } from '../../lib/validate';
 import { commitImport, previewImport } from './bin-import.service';
 import { binsCsv, ledgerCsv, templateCsv } from './stock-export.service';
@@ -17,13 +18,6 @@ export function binImportBodyParsers() {
 }
 
 const csvOf = (req: Request) => parseInput(binImportBodySchema, typeof req.body === 'string' ? { csv: req.body } : req.body).csv;
-
-function sendCsv(res: Response, filename: string, body: string) {
-  res.type('text/csv; charset=utf-8');
-  res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
-  res.setHeader('Cache-Control', 'no-store');
-  res.send(body);
-}
 
 /**
  * /api/bins CSV import and export, mounted before the bins router (whose /:code would take

@@ -1,9 +1,10 @@
 import type { LedgerExportQuery } from '@shared/schemas/bin-import';
 import type { Bin } from '@shared/schemas/bins';
 import type { ServiceContext } from '../../context';
-import { textCell as text, toCsv, type CsvCell as Cell } from '../../lib/csv';
+import { centsCell, textCell as text, toCsv, type CsvCell as Cell } from '../../lib/csv';
 import { HttpError } from '../../lib/http-error';
-import { binDesignation, toBinDto } from './bin-dto';
+import { binDesignation } from '@shared/stock/fasteners';
+import { toBinDto } from './bin-dto';
 import { BIN_COLUMNS, isNumericColumn } from './bin-csv';
 import { ALL_BINS } from './bin-import.service';
 import { listBins } from './bins.repo';
@@ -51,7 +52,7 @@ export function ledgerCsv(ctx: ServiceContext, range: LedgerExportQuery): string
     m.quantity,
     m.balanceAfter,
     e4ToDollars(m.unitCostE4),
-    (valueCents(m.quantity, m.unitCostE4) / 100).toFixed(2),
+    centsCell(valueCents(m.quantity, m.unitCostE4)),
     text(actorName),
     text(memberName),
     m.assemblyId,

@@ -1,5 +1,5 @@
 import type { ServiceContext } from '../../context';
-import { overdueDigestMail, overdueReminderMail } from '../../mail/messages';
+import { overdueDigestMail, overdueReminderMail, plural } from '../../mail/messages';
 import { expireHoldOffers } from './holds.service';
 import { finishJobRun, startJobRun } from '../../jobs/job-runs.repo';
 import { activeLeads, claimReminder, releaseReminder } from './overdue.repo';
@@ -12,8 +12,6 @@ export interface OverdueRunResult {
   holdOffersExpired: number;
   error: string | null;
 }
-
-const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
 function summarize(r: Omit<OverdueRunResult, 'summary' | 'error'>, overdue: number): string {
   const parts = [plural(r.remindersSent, 'reminder', 'reminders')];

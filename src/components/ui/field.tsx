@@ -1,4 +1,4 @@
-import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes } from 'react';
+import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
 
 interface FieldShellProps {
   label: string;
@@ -48,6 +48,26 @@ export function TextField({ label, hint, error, className = '', ...input }: Text
           aria-describedby={describedBy}
           className={`${CONTROL} border-rule ${className}`}
           {...input}
+        />
+      )}
+    </FieldShell>
+  );
+}
+
+type TextAreaFieldProps = TextareaHTMLAttributes<HTMLTextAreaElement> & { label: string; hint?: ReactNode; error?: string };
+
+/** Several lines of text; 16 px type so a phone does not zoom in on it. */
+export function TextAreaField({ label, hint, error, className = '', rows = 3, ...textarea }: TextAreaFieldProps) {
+  return (
+    <FieldShell label={label} hint={hint} error={error}>
+      {({ id, describedBy }) => (
+        <textarea
+          id={id}
+          rows={rows}
+          aria-invalid={error ? true : undefined}
+          aria-describedby={describedBy}
+          className={`w-full rounded-lg border-2 border-rule bg-card p-3 text-base text-ink placeholder:text-steel/70 focus:border-ink aria-[invalid=true]:border-bad ${className}`}
+          {...textarea}
         />
       )}
     </FieldShell>

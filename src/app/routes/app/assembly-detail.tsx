@@ -61,7 +61,7 @@ export function AssemblyDetailRoute() {
             ))}
           </ul>
           {mine && (
-            <Link to={edit} className="mt-2 inline-flex min-h-11 items-center font-semibold underline underline-offset-4">
+            <Link to={edit} className="mt-2 inline-flex min-h-12 items-center font-semibold underline underline-offset-4">
               Fix them in the editor
             </Link>
           )}

@@ -42,7 +42,7 @@ export function AlertCard({ alert }: { alert: Alert }) {
     <article aria-labelledby={headingId} className="flex flex-col gap-3 py-4">
       <header className="flex flex-wrap items-start justify-between gap-2">
         <h3 id={headingId} className="flex min-w-0 flex-col">
-          <Link to={`/bins/${bin.code}`} className="inline-flex min-h-11 items-center self-start font-mono text-lg font-semibold underline underline-offset-4">
+          <Link to={`/bins/${bin.code}`} className="inline-flex min-h-12 items-center self-start font-mono text-lg font-semibold underline underline-offset-4">
             {bin.code}
           </Link>
           <span className="font-medium">{bin.designation}</span>

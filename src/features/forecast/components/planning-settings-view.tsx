@@ -1,12 +1,12 @@
 import type { PlanningSettingsDto } from '@shared/schemas/forecast';
-import { formatDollars, formatTenth } from '../utils/format';
+import { formatUnitCost, formatTenth } from '../utils/format';
 import { SETTING_HELP, toPercent } from '../utils/planning-form';
 
 const VALUE: { [K in keyof PlanningSettingsDto]: (v: number) => string } = {
   wastePercent: (v) => `${formatTenth(v)} %`,
   maxPitchDiameters: (v) => `${formatTenth(v)} D`,
   serviceLevel: (v) => `${formatTenth(toPercent(v))} %`,
-  orderCost: (v) => formatDollars(v),
+  orderCost: (v) => formatUnitCost(v),
   holdingRate: (v) => `${formatTenth(toPercent(v))} % a year`,
 };
 

@@ -1,12 +1,10 @@
-const count = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
+import { formatCount } from '@/lib/format';
+
+export { formatCents, formatCount, formatDay, formatQuantity, formatUnitCost } from '@/lib/format';
+
 const oneDecimal = new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 });
-const cents = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' });
-const dollars = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD', minimumFractionDigits: 2, maximumFractionDigits: 4 });
-const dayFormat = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' });
 const shortDay = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', timeZone: 'UTC' });
 
-/** 12000 → "12,000"; a fraction is rounded to a whole unit. */
-export const formatCount = (n: number): string => count.format(n);
 /** 47.25 → "47.3": weekly averages and σ. */
 export const formatTenth = (n: number): string => oneDecimal.format(n);
 /** A projected level, to a tenth where demand is fractional, with a real minus sign: −20, 1.9. */
@@ -14,14 +12,7 @@ export const formatLevel = (n: number): string => (n < 0 ? `−${oneDecimal.form
 
 /** The server's reasons come without a full stop; a sentence on screen ends with one. */
 export const asSentence = (text: string): string => (/[.!?]$/.test(text) ? text : `${text}.`);
-export const formatQuantity = (n: number, unit: string): string => `${formatCount(n)} ${unit}`;
-/** Whole cents as money: 1240 → "$12.40". */
-export const formatCents = (valueCents: number): string => cents.format(valueCents / 100);
-/** Dollars, to a hundredth of a cent where a rivet has one: 0.0825 → "$0.0825". */
-export const formatDollars = (d: number): string => dollars.format(d);
 
-/** A calendar day "2027-01-15" (or a timestamp, read for its UTC day) as "Jan 15, 2027". */
-export const formatDay = (iso: string): string => dayFormat.format(new Date(iso.length === 10 ? `${iso}T00:00:00Z` : iso));
 /** A week's Monday for a chart axis: "Jan 11". */
 export const formatWeek = (iso: string): string => shortDay.format(new Date(`${iso}T00:00:00Z`));
 

@@ -3,7 +3,7 @@ import { FormProvider, useFieldArray, useForm, useWatch, type Path, type Resolve
 import { estimate, isEstimateErrors } from '@shared/estimate/estimate';
 import { ASSEMBLY_STATUS_LABELS, ASSEMBLY_STATUSES, type Assembly, type CreateAssemblyInput, type LengthUnit } from '@shared/schemas/builds';
 import { Button } from '@/components/ui/button';
-import { SelectField, TextField } from '@/components/ui/field';
+import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { Card } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
@@ -122,10 +122,7 @@ export function AssemblyForm({ assembly, build, defaultUnit, onPreferUnit, prefe
                 {build.name} sets an edge distance floor of <strong>{lengthText(unit === 'mm' ? build.edgeFloorIn * 25.4 : build.edgeFloorIn, unit)}</strong>: a line without its own edge distance uses at least this.
               </p>
             )}
-            <label className="flex flex-col gap-1.5">
-              <span className="text-sm font-semibold">Notes</span>
-              <textarea rows={3} className="rounded-lg border-2 border-rule bg-card p-3" {...register('notes')} />
-            </label>
+            <TextAreaField label="Notes" {...register('notes')} />
           </div>
         </Card>
 

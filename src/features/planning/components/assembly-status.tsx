@@ -1,4 +1,5 @@
 import { ASSEMBLY_STATUS_LABELS, type AssemblyStatus } from '@shared/schemas/builds';
+import { Badge } from '@/components/ui/badge';
 
 const TONE: Record<AssemblyStatus, string> = {
   planned: 'border-ink-soft bg-card',
@@ -8,5 +9,5 @@ const TONE: Record<AssemblyStatus, string> = {
 
 /** The status in words, boxed: colour only repeats what the word says. */
 export function AssemblyStatusBadge({ status }: { status: AssemblyStatus }) {
-  return <span className={`inline-flex items-center rounded-md border px-2 py-0.5 text-sm font-semibold whitespace-nowrap ${TONE[status]}`}>{ASSEMBLY_STATUS_LABELS[status]}</span>;
+  return <Badge className={`border ${TONE[status]}`}>{ASSEMBLY_STATUS_LABELS[status]}</Badge>;
 }

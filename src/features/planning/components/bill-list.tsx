@@ -31,7 +31,7 @@ export function BillList({ bill, wastePercent }: { bill: BillLine[]; wastePercen
               <>
                 <dt className="text-sm text-steel">Bin</dt>
                 <dd>
-                  <Link to={`/bins/${item.bin.code}`} className="inline-flex min-h-11 items-center font-mono font-semibold underline underline-offset-4">
+                  <Link to={`/bins/${item.bin.code}`} className="inline-flex min-h-12 items-center font-mono font-semibold underline underline-offset-4">
                     {item.bin.code}
                   </Link>{' '}
                   {item.bin.location && <span className="text-sm text-steel">· {item.bin.location}</span>}

@@ -18,9 +18,9 @@ export function BuildList({ builds, unit, meId }: { builds: Build[]; unit: Lengt
             <Card>
               <div className="flex flex-wrap items-start justify-between gap-3">
                 <div className="min-w-0">
-                  <h2 className="text-lg font-semibold">{build.name}</h2>
+                  <h2 className="text-lg font-semibold break-words">{build.name}</h2>
                   {!mine && <p className="text-sm text-steel">{build.owner.name}’s build</p>}
-                  {build.description && <p className="mt-1">{build.description}</p>}
+                  {build.description && <p className="mt-1 break-words">{build.description}</p>}
                   {build.edgeFloorIn !== null && (
                     <p className="mt-1 text-sm text-steel">Edge distance floor {lengthText(unit === 'mm' ? build.edgeFloorIn * 25.4 : build.edgeFloorIn, unit)}</p>
                   )}

@@ -28,7 +28,7 @@ export function KitList({ kit }: { kit: KitItem[] }) {
           </p>
           {item.tool ? (
             <p className="text-sm">
-              <Link to={`/tools/${item.tool.code}`} className="inline-flex min-h-11 items-center font-mono font-semibold underline underline-offset-4">
+              <Link to={`/tools/${item.tool.code}`} className="inline-flex min-h-12 items-center font-mono font-semibold underline underline-offset-4">
                 {item.tool.code}
               </Link>{' '}
               {item.tool.name} · <span className={item.tool.status === 'available' || item.tool.status === 'held_for_you' ? 'text-ok' : 'text-warn'}>{statusText(item.tool.status)}</span>

@@ -2,6 +2,7 @@ import type { LengthUnit } from '@shared/schemas/builds';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import { blindGripRange, inchFraction } from '@shared/stock/fasteners';
 import { RIVET_HEAD_LABELS, type RivetHead } from '@shared/stock/kinds';
+import { formatDay } from '@/lib/format';
 
 export const RIVET_KIND_LABELS: Record<EstimateRivetKind, string> = {
   'blind-structural': 'Structural blind rivet',
@@ -47,10 +48,8 @@ export const drillHolesText = (byDrill: Record<string, number>): string =>
 
 export const headText = (head: RivetHead): string => RIVET_HEAD_LABELS[head];
 
-const day = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' });
-
-/** A planned day (YYYY-MM-DD) for people; days carry no time zone, so format them as UTC. */
-export const dayText = (iso: string): string => day.format(new Date(`${iso.slice(0, 10)}T00:00:00Z`));
+/** A planned day (YYYY-MM-DD) for people; days carry no time zone, so they are read as UTC. */
+export const dayText = formatDay;
 
 export function plannedDatesText(start: string | null, finish: string | null): string {
   if (start && finish) return `${dayText(start)} to ${dayText(finish)}`;

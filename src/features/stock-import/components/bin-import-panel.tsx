@@ -2,6 +2,7 @@ import { useId, useState, type ChangeEvent } from 'react';
 import { Link } from 'react-router';
 import { MAX_IMPORT_CSV_CHARS, type ImportResult } from '@shared/schemas/bin-import';
 import { Button } from '@/components/ui/button';
+import { TextAreaField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { messageOf } from '@/lib/errors';
@@ -83,19 +84,7 @@ export function BinImportPanel({ onImported }: { onImported?: (result: ImportRes
         </label>
         <input id={`${ids}-file`} type="file" accept=".csv,text/csv" onChange={(e) => void chooseFile(e)} className="min-h-12 text-base file:mr-3 file:min-h-12 file:rounded-lg file:border-2 file:border-ink file:bg-card file:px-4 file:font-semibold" />
       </div>
-      <div className="flex flex-col gap-1.5">
-        <label htmlFor={`${ids}-text`} className="text-sm font-semibold">
-          Or paste the CSV here
-        </label>
-        <textarea
-          id={`${ids}-text`}
-          value={csv}
-          onChange={(e) => edit(e.target.value)}
-          rows={6}
-          spellCheck={false}
-          className="w-full rounded-lg border-2 border-rule bg-card p-3 font-mono text-sm focus:border-ink"
-        />
-      </div>
+      <TextAreaField label="Or paste the CSV here" value={csv} onChange={(e) => edit(e.target.value)} rows={6} spellCheck={false} className="font-mono" />
       {readProblem && <Notice tone="bad">{readProblem}</Notice>}
       {check.error && <Notice tone="bad">{messageOf(check.error)}</Notice>}
       <div className="flex flex-wrap gap-3">

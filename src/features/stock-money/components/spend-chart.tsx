@@ -4,7 +4,7 @@ import { BIN_KIND_LABELS, type BinKind } from '@shared/stock/kinds';
 import { dollars, monthShort } from './format';
 import { KIND_COLOURS } from './kind-colours';
 
-const wholeDollars = new Intl.NumberFormat(undefined, { style: 'currency', currency: 'USD', maximumFractionDigits: 0 });
+const wholeDollars = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD', maximumFractionDigits: 0 });
 const label = (key: unknown) => BIN_KIND_LABELS[key as BinKind] ?? String(key);
 
 /**

@@ -32,7 +32,7 @@ export const binColumns = helper.columns([
   helper.accessor('code', {
     header: 'Code',
     cell: ({ getValue }) => (
-      <Link to={`/bins/${getValue()}`} className="inline-flex min-h-11 items-center font-mono font-medium whitespace-nowrap underline underline-offset-4">
+      <Link to={`/bins/${getValue()}`} className="inline-flex min-h-12 items-center font-mono font-medium whitespace-nowrap underline underline-offset-4">
         {getValue()}
       </Link>
     ),

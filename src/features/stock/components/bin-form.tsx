@@ -7,7 +7,7 @@ import { binKindRules, createBinBodySchema, type Bin } from '@shared/schemas/bin
 import { BLIND_GRIP_RANGES, fastenerDesignation } from '@shared/stock/fasteners';
 import { BIN_KIND_LABELS, BIN_KINDS, isBlindKind, isRivetKind, RIVET_HEAD_LABELS, RIVET_HEADS, RIVET_MATERIALS, STEM_MATERIALS } from '@shared/stock/kinds';
 import { Button } from '@/components/ui/button';
-import { SelectField, TextField } from '@/components/ui/field';
+import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { applyServerErrors } from '@/lib/errors';
 import { diameterText, gripDashText, lengthText } from '../utils/format';
@@ -215,10 +215,7 @@ export function BinForm({ bin, submitLabel, onSubmit }: { bin?: Bin; submitLabel
             <TextField label="Opening stock" inputMode="numeric" hint="Already in the bin; written to its ledger as the first receipt." error={errors.initialQuantity?.message} {...form.register('initialQuantity', { setValueAs: (v: unknown) => (v === '' ? 0 : asNumber(v)) })} />
           )}
         </div>
-        <label className="flex flex-col gap-1.5">
-          <span className="text-sm font-semibold">Notes</span>
-          <textarea rows={3} className="rounded-lg border-2 border-rule bg-card p-3" {...form.register('notes')} />
-        </label>
+        <TextAreaField label="Notes" {...form.register('notes')} />
       </fieldset>
 
       <Button type="submit" busy={isSubmitting} className="self-start">

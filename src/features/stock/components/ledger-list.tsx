@@ -21,7 +21,7 @@ const entryAnchor = (id: number) => `entry-${id}`;
 
 function EntryLink({ id, words }: { id: number; words: string }) {
   return (
-    <a href={`#${entryAnchor(id)}`} className="underline underline-offset-4">
+    <a href={`#${entryAnchor(id)}`} className="inline-flex min-h-12 items-center underline underline-offset-4">
       {words} #{id}
     </a>
   );
@@ -102,7 +102,7 @@ function LedgerEntry({ code, entry: m, isQuartermaster }: { code: string; entry:
           {m.reversesId !== null && <EntryLink id={m.reversesId} words="reverses" />}
           {m.reversedById !== null && <EntryLink id={m.reversedById} words="reversed by" />}
           {m.slipId !== null && isQuartermaster && (
-            <a href={slipUrl(m.slipId)} target="_blank" rel="noreferrer" className="underline underline-offset-4">
+            <a href={slipUrl(m.slipId)} target="_blank" rel="noreferrer" className="inline-flex min-h-12 items-center underline underline-offset-4">
               Packing slip
             </a>
           )}

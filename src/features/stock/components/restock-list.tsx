@@ -10,7 +10,7 @@ function RestockRow({ item }: { item: RestockItem }) {
   const packs = packWords(item.packsToOrder, item.packSize);
   return (
     <li className="grid gap-x-4 gap-y-1 py-3 sm:grid-cols-[7rem_1fr_auto]">
-      <Link to={`/bins/${item.code}`} className="inline-flex min-h-11 items-center self-start font-mono font-medium underline underline-offset-4">
+      <Link to={`/bins/${item.code}`} className="inline-flex min-h-12 items-center self-start font-mono font-medium underline underline-offset-4">
         {item.code}
       </Link>
       <div className="flex flex-col gap-1">

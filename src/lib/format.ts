@@ -1,0 +1,26 @@
+/** Money, counts and days as every page shows them; a feature's own format module adds its trade words. */
+const cents = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' });
+/** Unit costs run to a hundredth of a cent (a rivet costs $0.0825). */
+const unitCost = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD', minimumFractionDigits: 2, maximumFractionDigits: 4 });
+const count = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
+
+/** Whole cents as money: 1240 → "$12.40". */
+export const formatCents = (valueCents: number): string => cents.format(valueCents / 100);
+
+/** A unit cost in dollars, keeping up to 4 decimals: 0.0825 → "$0.0825", 3 → "$3.00". */
+export const formatUnitCost = (dollars: number): string => unitCost.format(dollars);
+
+/** A whole quantity with thousands separators: 12000 → "12,000"; a fraction is rounded to a whole unit. */
+export const formatCount = (n: number): string => count.format(n);
+
+/** A quantity with its unit: (250, "each") → "250 each". */
+export const formatQuantity = (n: number, unit: string): string => `${formatCount(n)} ${unit}`;
+
+const utcDay = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' });
+const localDay = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric' });
+
+/** A calendar day "2027-01-15" (or a timestamp, read for its UTC day) as "Jan 15, 2027": days carry no time zone. */
+export const formatDay = (iso: string): string => utcDay.format(new Date(iso.length === 10 ? `${iso}T00:00:00Z` : iso));
+
+/** A moment (ISO timestamp) as the day it fell on where the viewer is: "Jan 15, 2027". */
+export const formatDate = (iso: string): string => localDay.format(new Date(iso));

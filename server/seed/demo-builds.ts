@@ -6,7 +6,7 @@ import type { Database } from '../db/client';
 import { bins, stockMovements } from '../db/schema/stock';
 import { findAssembly } from '../features/planning/assemblies.repo';
 import { createAssembly } from '../features/planning/assemblies.service';
-import { estimateAssembly } from '../features/planning/assembly-estimate.service';
+import { assemblyBill } from '../features/planning/assembly-estimate.service';
 import { createBuild } from '../features/planning/builds.service';
 import { findBinByCode } from '../features/stock/bins.repo';
 import { draw } from '../features/stock/ledger.service';
@@ -168,7 +168,7 @@ export function seedDemoBuilds(db: Database, now: Date = new Date()): DemoBuilds
         const share = DRAWN_SHARE[a.status];
         if (!share) continue;
         const begun = today + a.days[0] * DAY_MS + 9 * 60 * MINUTE_MS;
-        for (const need of estimateAssembly(db, findAssembly(db, assembly.id)!).bill) {
+        for (const need of assemblyBill(db, findAssembly(db, assembly.id)!)) {
           if (!need.bin || need.lines.length === 0) continue;
           const bin = findBinByCode(db, need.bin.code)!;
           const quantity = Math.min(Math.round(need.estimated * share), bin.onHand - bin.reorderPoint - 1);

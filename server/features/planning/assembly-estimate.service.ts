@@ -16,23 +16,31 @@ export const ESTIMATE_CAUTION =
 interface Worked {
   result: EstimateResult;
   matches: NeedMatch[];
+  labels: (string | null)[];
+}
+interface Refused {
+  errors: AssemblyEstimate['errors'];
+  wastePercent: number;
 }
 
 /**
  * The assembly's estimate with the build's edge distance floor and the chapter's settings. When a
  * bin that stocks a line's rivet names its own hole drill, that line is estimated again with it.
  */
-function work(db: Executor, { assembly, build }: AssemblyInBuild): Worked | { errors: AssemblyEstimate['errors'] } {
+function work(db: Executor, { assembly, build }: AssemblyInBuild): Worked | Refused {
   const planning = readPlanningSettings(db);
-  const input: EstimateInput = { unit: assembly.unit, lines: parseLines(assembly.lines).map(({ label: _label, ...line }) => line) };
+  const stored = parseLines(assembly.lines);
+  const labels = stored.map((l) => l.label ?? null);
+  const input: EstimateInput = { unit: assembly.unit, lines: stored.map(({ label: _label, ...line }) => line) };
   const options = { defaultWastePercent: planning.wastePercent, maxPitchDiameters: planning.maxPitchDiameters, edgeFloorIn: build.edgeFloorIn };
+  const refused = (errors: AssemblyEstimate['errors']): Refused => ({ errors, wastePercent: planning.wastePercent });
   const first = estimate(input, options);
-  if (isEstimateErrors(first)) return first;
+  if (isEstimateErrors(first)) return refused(first.errors);
   const matches = matchNeeds(db, first.needs);
   const finalDrillOverrides = drillOverrides(matches, input.lines.length);
-  if (finalDrillOverrides.every((d) => d === null)) return { result: first, matches };
+  if (finalDrillOverrides.every((d) => d === null)) return { result: first, matches, labels };
   const second = estimate(input, { ...options, finalDrillOverrides });
-  return isEstimateErrors(second) ? second : { result: second, matches };
+  return isEstimateErrors(second) ? refused(second.errors) : { result: second, matches, labels };
 }
 
 export function estimateAssembly(db: Executor, found: AssemblyInBuild): AssemblyEstimate {
@@ -43,11 +51,9 @@ export function estimateAssembly(db: Executor, found: AssemblyInBuild): Assembly
   if ('errors' in worked) {
     // The editor shows what to fix; the extra items still have their bins.
     const totals = { rivets: 0, rivetsWithWaste: 0, drillHoles: {}, tempFasteners: {} };
-    const wastePercent = readPlanningSettings(db).wastePercent;
-    return { ...base, wastePercent, lines: [], totals, warnings: [], errors: worked.errors, bill: billLines(db, assembly.id, [], extras), kit: [] };
+    return { ...base, wastePercent: worked.wastePercent, lines: [], totals, warnings: [], errors: worked.errors, bill: billLines(db, assembly.id, [], extras), kit: [] };
   }
-  const { result, matches } = worked;
-  const labels = parseLines(assembly.lines).map((l) => l.label ?? null);
+  const { result, matches, labels } = worked;
   return {
     ...base,
     wastePercent: result.wastePercent,
@@ -62,6 +68,12 @@ export function estimateAssembly(db: Executor, found: AssemblyInBuild): Assembly
 
 export function getAssemblyEstimate(ctx: ServiceContext, user: UserRow, id: number): AssemblyEstimate {
   return estimateAssembly(ctx.db, assemblyToRead(ctx, user, id));
+}
+
+/** The bill alone (bins against needs), without working out the crib kit. */
+export function assemblyBill(db: Executor, found: AssemblyInBuild): AssemblyEstimate['bill'] {
+  const worked = work(db, found);
+  return billLines(db, found.assembly.id, 'errors' in worked ? [] : worked.matches, parseExtraItems(found.assembly.extraItems));
 }
 
 /** The crib kit alone, for placing holds. */

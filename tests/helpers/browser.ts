@@ -1,7 +1,7 @@
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { chromium, type Browser, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { readEnv } from '../../server/env';
 import { CLIENT_DIR, startGripline, type RunningGripline } from '../../server/main';
 import { writeQrVideo } from './fake-camera';
@@ -55,10 +55,20 @@ export async function launchWithCameraOn(dir: string, code: string): Promise<Bro
   return launchChromium(['--use-fake-ui-for-media-stream', '--use-fake-device-for-media-stream', `--use-file-for-fake-video-capture=${video}`]);
 }
 
-/** A phone-sized page with the camera allowed, signed in as `email`, on its home page. */
-export async function signedInPhone(browser: Browser, url: string, email: string, password: string): Promise<Page> {
+/**
+ * A phone-sized page with the camera allowed, signed in as `email`, on its home page. `prepare`
+ * may set up the context first (init scripts, listeners).
+ */
+export async function signedInPhone(
+  browser: Browser,
+  url: string,
+  email: string,
+  password: string,
+  prepare?: (context: BrowserContext) => Promise<void>,
+): Promise<Page> {
   const context = await browser.newContext({ viewport: { width: 360, height: 780 } });
   await context.grantPermissions(['camera'], { origin: url });
+  await prepare?.(context);
   const page = await context.newPage();
   await page.goto(`${url}/sign-in`);
   await page.getByLabel('E-mail').fill(email);

@@ -28,14 +28,15 @@ export function ScanRoute() {
       setProblem(`"${raw.slice(0, 40)}" is not a Gripline label. Tool codes look like T-0042, bin codes like B-0107.`);
     }
   };
+  // The code field mounts with the page, so the page can take a code from its first paint.
   return (
-    <>
+    <div data-scan-ready="true">
       <PageHeader title="Scan" lead="Hold a tool or bin label inside the frame. A USB scanner works too." />
       <div className="mx-auto flex max-w-lg flex-col gap-4">
         {problem && <Notice tone="warn">{problem}</Notice>}
         <CameraScanner onCode={open} />
         <CodeEntry onCode={open} autoFocus />
       </div>
-    </>
+    </div>
   );
 }

@@ -1,60 +1,17 @@
-import { useEffect, useRef, useState } from 'react';
 import { Notice } from '@/components/ui/notice';
-
-type State = { kind: 'starting' } | { kind: 'scanning' } | { kind: 'failed'; message: string };
-
-function cameraProblem(err: unknown): string {
-  const name = (err as { name?: string }).name;
-  if (name === 'NotAllowedError') return 'Gripline may not use the camera. Allow it in the browser settings, or type the code below.';
-  if (name === 'NotFoundError' || name === 'OverconstrainedError') return 'No camera was found. Type the code below, or use a USB scanner.';
-  if (!window.isSecureContext) return 'The camera works only over HTTPS (or on localhost). Type the code below.';
-  return 'The camera did not start. Type the code below, or try again.';
-}
+import { useQrCamera } from '../scanner/use-qr-camera';
 
 /**
- * The rear camera reading QR labels. The decoder library is large, so it loads only here, when
- * this screen opens. Each code is reported once until the camera sees a different one.
+ * The rear camera reading QR labels, with the browser's own detector or, where there is none, the
+ * decoder library (loaded only then). The element says which one read and how soon the first code
+ * came after the camera started (`data-scan-path`, `data-first-decode-ms`).
  */
 export function CameraScanner({ onCode }: { onCode: (code: string) => void }) {
-  const video = useRef<HTMLVideoElement>(null);
-  const [state, setState] = useState<State>({ kind: 'starting' });
-  const onCodeRef = useRef(onCode);
-  useEffect(() => {
-    onCodeRef.current = onCode;
-  });
-
-  useEffect(() => {
-    let stop: (() => void) | undefined;
-    let cancelled = false;
-    let last = '';
-    void (async () => {
-      try {
-        if (!navigator.mediaDevices?.getUserMedia) throw Object.assign(new Error('no media devices'), { name: window.isSecureContext ? 'NotFoundError' : 'Insecure' });
-        const { BrowserQRCodeReader } = await import('@zxing/browser');
-        if (cancelled || !video.current) return;
-        const reader = new BrowserQRCodeReader(undefined, { delayBetweenScanAttempts: 150 });
-        const controls = await reader.decodeFromConstraints({ video: { facingMode: { ideal: 'environment' } } }, video.current, (result) => {
-          const text = result?.getText().trim();
-          if (text && text !== last) {
-            last = text;
-            onCodeRef.current(text);
-          }
-        });
-        stop = () => controls.stop();
-        if (cancelled) stop();
-        else setState({ kind: 'scanning' });
-      } catch (err) {
-        if (!cancelled) setState({ kind: 'failed', message: cameraProblem(err) });
-      }
-    })();
-    return () => {
-      cancelled = true;
-      stop?.();
-    };
-  }, []);
+  const [state, video] = useQrCamera(onCode);
+  const scanning = state.kind === 'scanning' ? state : undefined;
 
   return (
-    <div className="flex flex-col gap-2">
+    <div className="flex flex-col gap-2" data-scan-path={scanning?.path} data-first-decode-ms={scanning?.firstDecodeMs}>
       {state.kind === 'failed' ? (
         <Notice tone="warn" title="Camera">
           {state.message}

@@ -2,6 +2,7 @@ import { fileURLToPath } from 'node:url';
 import tailwindcss from '@tailwindcss/vite';
 import react from '@vitejs/plugin-react';
 import { defineConfig } from 'vitest/config';
+import { pwaPlugin } from './vite-plugins/pwa.js';
 
 const alias = {
   '@': fileURLToPath(new URL('./src', import.meta.url)),
@@ -10,7 +11,7 @@ const alias = {
 const apiPort = process.env.PORT ?? '3000';
 
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  plugins: [react(), tailwindcss(), pwaPlugin()],
   resolve: { alias },
   server: {
     port: 5173,

@@ -2,6 +2,7 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router/dom';
 import { AppProvider, createQueryClient } from './app/provider';
+import { AppUpdate } from './app/pwa/app-update';
 import { createAppRouter } from './app/router';
 import './index.css';
 
@@ -12,6 +13,7 @@ createRoot(document.getElementById('root')!).render(
   <StrictMode>
     <AppProvider queryClient={queryClient}>
       <RouterProvider router={router} />
+      <AppUpdate />
     </AppProvider>
   </StrictMode>,
 );

@@ -1,6 +1,7 @@
 import { fileURLToPath } from 'node:url';
 import tailwindcss from '@tailwindcss/vite';
 import react from '@vitejs/plugin-react';
+import { compression } from 'vite-plugin-compression2';
 import { defineConfig } from 'vitest/config';
 import { pwaPlugin } from './vite-plugins/pwa.js';
 
@@ -11,7 +12,19 @@ const alias = {
 const apiPort = process.env.PORT ?? '3000';
 
 export default defineConfig({
-  plugins: [react(), tailwindcss(), pwaPlugin()],
+  plugins: [
+    react(),
+    tailwindcss(),
+    pwaPlugin(),
+    // Brotli and gzip copies beside each text file; the server picks one by Accept-Encoding
+    // (server/static/client-static.ts). The build manifest is read by the budget test, never served.
+    compression({
+      algorithms: ['brotliCompress', 'gzip'],
+      include: /\.(html|js|mjs|css|json|svg|webmanifest|txt)$/,
+      exclude: /(^|[\\/])\.vite[\\/]/,
+      logLevel: 'silent',
+    }),
+  ],
   resolve: { alias },
   server: {
     port: 5173,
@@ -20,6 +33,8 @@ export default defineConfig({
   build: {
     outDir: 'dist',
     emptyOutDir: true,
+    // dist/.vite/manifest.json: what each page loads, read by tests/build/first-load-budget.test.ts.
+    manifest: true,
     // Libraries change less often than our code: separate chunks stay cached on members' phones.
     rolldownOptions: {
       output: {
@@ -42,6 +57,14 @@ export default defineConfig({
           name: 'server',
           environment: 'node',
           include: ['tests/server/**/*.test.ts', 'tests/shared/**/*.test.ts'],
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'build',
+          environment: 'node',
+          include: ['tests/build/**/*.test.ts'],
         },
       },
       {

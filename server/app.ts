@@ -1,5 +1,3 @@
-import { existsSync } from 'node:fs';
-import { join } from 'node:path';
 import express from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
@@ -30,9 +28,11 @@ import { signoffsRouter } from './features/tools/signoffs.router';
 import { toolsRouter } from './features/tools/tools.router';
 import { loadUser, requireRole } from './middleware/auth';
 import { csrf } from './middleware/csrf';
+import { compressJson } from './middleware/compress-json';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { signInLimiters } from './middleware/rate-limit';
 import { sessionMiddleware } from './middleware/session';
+import { clientStatic } from './static/client-static';
 
 /** Link tokens never reach the logs. */
 const hideTokens = (url: string) => url.replace(/[A-Za-z0-9_-]{43}/g, '[token]');
@@ -74,6 +74,7 @@ export function createApp(config: AppConfig) {
   const { middleware: session, store } = sessionMiddleware(config);
 
   const api = express.Router();
+  api.use(compressJson());
   api.use((req, _res, next) => {
     req.ctx = ctx;
     next();
@@ -115,15 +116,7 @@ export function createApp(config: AppConfig) {
   api.use(apiNotFound);
   app.use('/api', api);
 
-  if (config.clientDir && existsSync(join(config.clientDir, 'index.html'))) {
-    const indexHtml = join(config.clientDir, 'index.html');
-    app.use('/assets', express.static(join(config.clientDir, 'assets'), { immutable: true, maxAge: '1y' }));
-    app.use(express.static(config.clientDir, { index: false }));
-    app.use((req, res, next) => {
-      if (req.method !== 'GET' && req.method !== 'HEAD') return next();
-      res.sendFile(indexHtml);
-    });
-  }
+  if (config.clientDir) app.use(clientStatic(config.clientDir));
 
   app.use(errorHandler);
   return Object.assign(app, { sessionStore: store });

@@ -1,6 +1,5 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import type { ReactNode } from 'react';
-import { Toaster } from 'sonner';
+import { lazy, Suspense, type ReactNode } from 'react';
 import { ApiError } from '@/lib/api-client';
 
 /** Retries only what a flaky hangar network can explain: no connection or a server hiccup. */
@@ -18,11 +17,19 @@ export function createQueryClient(): QueryClient {
   });
 }
 
+/**
+ * The toast host loads after the first render, outside the first-load budget; a toast raised before
+ * it mounts is shown once it does (sonner replays them).
+ */
+const Toaster = lazy(() => import('sonner').then(({ Toaster }) => ({ default: Toaster })));
+
 export function AppProvider({ queryClient, children }: { queryClient: QueryClient; children: ReactNode }) {
   return (
     <QueryClientProvider client={queryClient}>
       {children}
-      <Toaster position="top-center" richColors closeButton toastOptions={{ className: 'text-base' }} />
+      <Suspense fallback={null}>
+        <Toaster position="top-center" richColors closeButton toastOptions={{ className: 'text-base' }} />
+      </Suspense>
     </QueryClientProvider>
   );
 }

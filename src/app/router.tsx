@@ -1,28 +1,31 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { createBrowserRouter } from 'react-router';
 import { AppShell, appShellLoader } from './routes/app/app-shell';
-import { BinDetailRoute, binDetailLoader } from './routes/app/bin-detail';
-import { BinsRoute, binsLoader } from './routes/app/bins';
 import { HomeRoute } from './routes/app/home';
-import { LoansRoute, loansLoader } from './routes/app/loans';
-import { ScanRoute } from './routes/app/scan';
-import { ToolDetailRoute, toolDetailLoader } from './routes/app/tool-detail';
-import { ToolsRoute, toolsLoader } from './routes/app/tools';
-import { AcceptInvitationRoute } from './routes/auth/accept-invitation';
-import { ResetPasswordConfirmRoute, ResetPasswordRequestRoute } from './routes/auth/reset-password';
 import { SignInRoute, signInLoader } from './routes/auth/sign-in';
 import { LoadingRoute, NotFoundRoute, RouteError } from './routes/route-error';
 
 /**
  * A data router: loaders fill the query cache, components read the same queries. Pages members
- * rarely or never open load lazily, so a phone downloads first what a member uses.
+ * opens first (sign-in, and home inside the shell) are in the first download; every other page loads
+ * with its own chunk when it is opened, so the first load stays within its budget
+ * (tests/build/first-load-budget.test.ts).
  */
 export function createAppRouter(queryClient: QueryClient) {
   return createBrowserRouter([
     { path: '/sign-in', loader: signInLoader(queryClient), Component: SignInRoute, ErrorBoundary: RouteError, HydrateFallback: LoadingRoute },
-    { path: '/reset-password', Component: ResetPasswordRequestRoute },
-    { path: '/reset-password/:token', Component: ResetPasswordConfirmRoute },
-    { path: '/invite/:token', Component: AcceptInvitationRoute },
+    {
+      path: '/reset-password',
+      lazy: async () => ({ Component: (await import('./routes/auth/reset-password')).ResetPasswordRequestRoute }),
+    },
+    {
+      path: '/reset-password/:token',
+      lazy: async () => ({ Component: (await import('./routes/auth/reset-password')).ResetPasswordConfirmRoute }),
+    },
+    {
+      path: '/invite/:token',
+      lazy: async () => ({ Component: (await import('./routes/auth/accept-invitation')).AcceptInvitationRoute }),
+    },
     {
       path: '/',
       loader: appShellLoader(queryClient),
@@ -31,8 +34,19 @@ export function createAppRouter(queryClient: QueryClient) {
       HydrateFallback: LoadingRoute,
       children: [
         { index: true, Component: HomeRoute },
-        { path: 'scan', Component: ScanRoute },
-        { path: 'tools', loader: toolsLoader(queryClient), Component: ToolsRoute, ErrorBoundary: RouteError },
+        {
+          path: 'scan',
+          ErrorBoundary: RouteError,
+          lazy: async () => ({ Component: (await import('./routes/app/scan')).ScanRoute }),
+        },
+        {
+          path: 'tools',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { ToolsRoute, toolsLoader } = await import('./routes/app/tools');
+            return { loader: toolsLoader(queryClient), Component: ToolsRoute };
+          },
+        },
         {
           path: 'tools/new',
           ErrorBoundary: RouteError,
@@ -41,7 +55,14 @@ export function createAppRouter(queryClient: QueryClient) {
             return { loader: toolNewLoader(queryClient), Component: ToolNewRoute };
           },
         },
-        { path: 'tools/:code', loader: toolDetailLoader(queryClient), Component: ToolDetailRoute, ErrorBoundary: RouteError },
+        {
+          path: 'tools/:code',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { ToolDetailRoute, toolDetailLoader } = await import('./routes/app/tool-detail');
+            return { loader: toolDetailLoader(queryClient), Component: ToolDetailRoute };
+          },
+        },
         {
           path: 'tools/:code/edit',
           ErrorBoundary: RouteError,
@@ -50,8 +71,22 @@ export function createAppRouter(queryClient: QueryClient) {
             return { loader: toolEditLoader(queryClient), Component: ToolEditRoute };
           },
         },
-        { path: 'loans', loader: loansLoader(queryClient), Component: LoansRoute, ErrorBoundary: RouteError },
-        { path: 'bins', loader: binsLoader(queryClient), Component: BinsRoute, ErrorBoundary: RouteError },
+        {
+          path: 'loans',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { LoansRoute, loansLoader } = await import('./routes/app/loans');
+            return { loader: loansLoader(queryClient), Component: LoansRoute };
+          },
+        },
+        {
+          path: 'bins',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { BinsRoute, binsLoader } = await import('./routes/app/bins');
+            return { loader: binsLoader(queryClient), Component: BinsRoute };
+          },
+        },
         {
           path: 'bins/import',
           ErrorBoundary: RouteError,
@@ -68,7 +103,14 @@ export function createAppRouter(queryClient: QueryClient) {
             return { loader: binNewLoader(queryClient), Component: BinNewRoute };
           },
         },
-        { path: 'bins/:code', loader: binDetailLoader(queryClient), Component: BinDetailRoute, ErrorBoundary: RouteError },
+        {
+          path: 'bins/:code',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { BinDetailRoute, binDetailLoader } = await import('./routes/app/bin-detail');
+            return { loader: binDetailLoader(queryClient), Component: BinDetailRoute };
+          },
+        },
         {
           path: 'bins/:code/edit',
           ErrorBoundary: RouteError,

@@ -1,7 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { NavLink, Outlet, useNavigate, type LoaderFunctionArgs } from 'react-router';
-import { toast } from 'sonner';
 import { hasRole, ROLE_LABELS, type Role } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { useLogout } from '@/features/auth/api/logout';
@@ -51,7 +50,8 @@ export function AppShell() {
   const signOut = () =>
     logout.mutate(undefined, {
       onSuccess: () => void navigate('/sign-in', { replace: true }),
-      onError: (err) => toast.error(messageOf(err)),
+      // sonner stays out of the first load (see app/provider.tsx).
+      onError: (err) => void import('sonner').then(({ toast }) => toast.error(messageOf(err))),
     });
 
   return (

@@ -28,6 +28,7 @@ import { serviceDueRouter } from './features/tools/service-due.router';
 import { photosRouter, toolPhotosRouter } from './features/tools/photos.router';
 import { signoffsRouter } from './features/tools/signoffs.router';
 import { toolsRouter } from './features/tools/tools.router';
+import { certificateRouter } from './lan/certificate.router';
 import { loadUser, requireRole } from './middleware/auth';
 import { csrf } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
@@ -114,6 +115,7 @@ export function createApp(config: AppConfig) {
   api.use('/waste', wasteRouter());
   api.use(apiNotFound);
   app.use('/api', api);
+  app.use(certificateRouter(config.certificateDownload));
 
   if (config.clientDir && existsSync(join(config.clientDir, 'index.html'))) {
     const indexHtml = join(config.clientDir, 'index.html');

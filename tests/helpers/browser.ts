@@ -4,9 +4,9 @@ import { join } from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { readEnv } from '../../server/env';
 import { CLIENT_DIR, startGripline, type RunningGripline } from '../../server/main';
+import { CHROMIUM } from './chromium-check';
 import { writeQrVideo } from './fake-camera';
 
-export const CHROMIUM = '/usr/bin/chromium';
 export const CHROMIUM_FLAGS = [
   '--headless',
   '--no-sandbox',

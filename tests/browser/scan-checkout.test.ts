@@ -1,9 +1,7 @@
-import { join } from 'node:path';
-import BetterSqlite3 from 'better-sqlite3';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/seed/demo-chapter';
-import { launchWithCameraOn, signedInPhone, startBuiltApp } from '../helpers/browser';
+import { demoToolCode, launchWithCameraOn, signedInPhone, startBuiltApp } from '../helpers/browser';
 
 let app: Awaited<ReturnType<typeof startBuiltApp>>;
 let browser: Browser;
@@ -11,9 +9,7 @@ let code: string;
 
 beforeAll(async () => {
   app = await startBuiltApp();
-  const db = new BetterSqlite3(join(app.dir, 'gripline.db'), { readonly: true });
-  code = (db.prepare("select code from tools where name = 'Rivet spacing fan, 10 hole'").get() as { code: string }).code;
-  db.close();
+  code = demoToolCode(app, 'Rivet spacing fan, 10 hole');
   browser = await launchWithCameraOn(app.dir, code);
 });
 afterAll(async () => {

@@ -14,6 +14,10 @@ import { stopOnSignals } from './stop-on-signals';
  */
 buildClientWhenStale();
 const env = readEnv();
+if (env.TLS_CERT_FILE) {
+  console.error('npm run start:lan makes and uses its own certificate; to serve TLS_CERT_FILE and TLS_KEY_FILE, use npm start.');
+  process.exit(1);
+}
 const names = lanNames();
 const certificate = await ensureLanCertificate({ dir: dirname(resolve(env.DATABASE_PATH)), ...names });
 for (const what of certificate.made) console.log(`Made ${what}.`);

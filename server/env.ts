@@ -22,7 +22,7 @@ const envSchema = z.object({
   ctx.addIssue({
     code: 'custom',
     path: [missing],
-    message: `${missing} is missing: set TLS_CERT_FILE and TLS_KEY_FILE together (PEM certificate and key paths) to serve HTTPS, or neither.`,
+    message: 'not set; HTTPS needs both TLS_CERT_FILE and TLS_KEY_FILE (PEM certificate and key paths): set both, or neither.',
   });
 });
 

@@ -59,8 +59,8 @@ describe('GET /certificate', () => {
 
 describe('TLS_CERT_FILE and TLS_KEY_FILE', () => {
   it('refuse to start when only one is set, naming the missing one', () => {
-    expect(() => readEnv({ TLS_CERT_FILE: '/etc/gripline/cert.pem' })).toThrow(/TLS_KEY_FILE is missing: set TLS_CERT_FILE and TLS_KEY_FILE together/);
-    expect(() => readEnv({ TLS_KEY_FILE: '/etc/gripline/key.pem' })).toThrow(/TLS_CERT_FILE is missing/);
+    expect(() => readEnv({ TLS_CERT_FILE: '/etc/gripline/cert.pem' })).toThrow(/\n  TLS_KEY_FILE: not set; HTTPS needs both TLS_CERT_FILE and TLS_KEY_FILE/);
+    expect(() => readEnv({ TLS_KEY_FILE: '/etc/gripline/key.pem' })).toThrow(/\n  TLS_CERT_FILE: not set;/);
   });
 
   it('refuse to start when a file cannot be read, naming it', async () => {

@@ -26,6 +26,7 @@ import { serviceDueRouter } from './features/tools/service-due.router';
 import { photosRouter, toolPhotosRouter } from './features/tools/photos.router';
 import { signoffsRouter } from './features/tools/signoffs.router';
 import { toolsRouter } from './features/tools/tools.router';
+import { certificateRouter } from './lan/certificate.router';
 import { loadUser, requireRole } from './middleware/auth';
 import { csrf } from './middleware/csrf';
 import { compressJson } from './middleware/compress-json';
@@ -115,6 +116,7 @@ export function createApp(config: AppConfig) {
   api.use('/waste', wasteRouter());
   api.use(apiNotFound);
   app.use('/api', api);
+  app.use(certificateRouter(config.certificateDownload));
 
   if (config.clientDir) app.use(clientStatic(config.clientDir));
 

@@ -1,5 +1,6 @@
 import type { Logger } from './lib/logger';
 import type { Database } from './db/client';
+import type { CertificateDownload } from './lan/certificate.router';
 import type { Mailer } from './mail/mailer';
 
 export interface RateLimitConfig {
@@ -30,5 +31,7 @@ export interface AppConfig {
   trustProxyHops: number;
   /** Folder of the built client; when set the app serves it. */
   clientDir?: string;
+  /** The certificate Gripline made for itself (npm run start:lan), offered at /certificate. */
+  certificateDownload?: CertificateDownload;
   now?: () => Date;
 }

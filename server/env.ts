@@ -14,6 +14,16 @@ const envSchema = z.object({
   TRUST_PROXY_HOPS: z.coerce.number().int().min(0).default(0),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   SEED_DEMO: z.stringbool().default(true),
+  TLS_CERT_FILE: z.string().min(1).optional(),
+  TLS_KEY_FILE: z.string().min(1).optional(),
+}).superRefine((env, ctx) => {
+  if ((env.TLS_CERT_FILE === undefined) === (env.TLS_KEY_FILE === undefined)) return;
+  const missing = env.TLS_CERT_FILE === undefined ? 'TLS_CERT_FILE' : 'TLS_KEY_FILE';
+  ctx.addIssue({
+    code: 'custom',
+    path: [missing],
+    message: 'not set; HTTPS needs both TLS_CERT_FILE and TLS_KEY_FILE (PEM certificate and key paths): set both, or neither.',
+  });
 });
 
 export type Env = z.infer<typeof envSchema>;

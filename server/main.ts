@@ -1,10 +1,11 @@
-import { createServer } from 'node:http';
+import { createServer as createHttpServer } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { dirname, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { createApp } from './app';
 import { migrateDatabase, openDatabase } from './db/client';
 import type { Env } from './env';
+import type { LanCertificate } from './lan/lan-certificate';
 import { startPlanningScheduler } from './features/planning/planning-scheduler';
 import { startCribScheduler } from './features/tools/crib-scheduler';
 import { createLogger } from './lib/logger';
@@ -12,6 +13,7 @@ import { startMailCatcher, type MailCatcher } from './mail/mail-catcher';
 import { createSmtpMailer } from './mail/mailer';
 import { seedDemoChapter } from './seed/demo-chapter';
 import { resolveSessionSecret } from './session-secret';
+import { createTlsServer, tlsFromEnv } from './tls';
 
 export const CLIENT_DIR = resolve(dirname(fileURLToPath(import.meta.url)), '../dist');
 
@@ -21,8 +23,21 @@ export interface RunningGripline {
   close(): Promise<void>;
 }
 
-/** Opens and migrates the database, seeds the demo chapter when empty, starts mail, listens. */
-export async function startGripline(env: Env): Promise<RunningGripline> {
+export interface StartOptions {
+  /** A certificate Gripline made for itself (npm run start:lan): served over HTTPS and offered at /certificate. */
+  lanCertificate?: LanCertificate;
+  /** Host name in the URL Gripline reports and in e-mailed links when PUBLIC_URL is unset. */
+  urlHost?: string;
+}
+
+/**
+ * Opens and migrates the database, seeds the demo chapter when empty, starts mail, listens: over HTTPS
+ * with a certificate (TLS_CERT_FILE and TLS_KEY_FILE, or one made by start:lan), which implies Secure
+ * cookies and HSTS; over HTTP otherwise.
+ */
+export async function startGripline(env: Env, options: StartOptions = {}): Promise<RunningGripline> {
+  const tls = options.lanCertificate ?? tlsFromEnv(env);
+  const server = tls ? createTlsServer(tls) : createHttpServer();
   const logger = createLogger(env.LOG_LEVEL);
   const db = openDatabase(env.DATABASE_PATH);
   migrateDatabase(db);
@@ -32,17 +47,16 @@ export async function startGripline(env: Env): Promise<RunningGripline> {
   if (!env.SMTP_URL) catcher = await startMailCatcher(db);
   const mailer = createSmtpMailer(env.SMTP_URL ?? catcher!.url, env.MAIL_FROM);
 
-  const server = createServer();
   await new Promise<void>((ok, fail) => {
     server.once('error', fail);
     server.listen(env.PORT, env.HOST, () => ok());
   });
   const { port } = server.address() as AddressInfo;
-  const url = `http://localhost:${port}`;
+  const url = `${tls ? 'https' : 'http'}://${options.urlHost ?? 'localhost'}:${port}`;
   const app = createApp({
     db,
     sessionSecret: resolveSessionSecret(env.SESSION_SECRET, env.DATABASE_PATH),
-    secureCookies: env.SECURE_COOKIES,
+    secureCookies: env.SECURE_COOKIES || tls !== undefined,
     sessionIdleMs: env.SESSION_IDLE_MINUTES * 60_000,
     publicUrl: env.PUBLIC_URL ?? url,
     mailer,
@@ -51,6 +65,7 @@ export async function startGripline(env: Env): Promise<RunningGripline> {
     rateLimit: { windowMs: 15 * 60_000, perIp: 50, perAccount: 10 },
     trustProxyHops: env.TRUST_PROXY_HOPS,
     clientDir: CLIENT_DIR,
+    certificateDownload: options.lanCertificate && { pem: options.lanCertificate.authority, fileName: options.lanCertificate.fileName },
   });
   server.on('request', app);
   const jobContext = { db, mailer, publicUrl: env.PUBLIC_URL ?? url, now: () => new Date() };

@@ -1,10 +1,8 @@
-import { join } from 'node:path';
-import BetterSqlite3 from 'better-sqlite3';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/seed/demo-chapter';
 import { addBarcodeDetectorShim } from '../helpers/barcode-detector-shim';
-import { launchWithCameraOn, signedInPhone, startBuiltApp } from '../helpers/browser';
+import { demoToolCode, launchWithCameraOn, signedInPhone, startBuiltApp } from '../helpers/browser';
 import { firstDecode, hasNativeQrReader, type FirstDecode } from '../helpers/first-decode';
 
 let app: Awaited<ReturnType<typeof startBuiltApp>>;
@@ -13,9 +11,7 @@ let code: string;
 
 beforeAll(async () => {
   app = await startBuiltApp();
-  const db = new BetterSqlite3(join(app.dir, 'gripline.db'), { readonly: true });
-  code = (db.prepare("select code from tools where name = 'Rivet spacing fan, 10 hole'").get() as { code: string }).code;
-  db.close();
+  code = demoToolCode(app, 'Rivet spacing fan, 10 hole');
   browser = await launchWithCameraOn(app.dir, code);
 });
 afterAll(async () => {
@@ -66,7 +62,7 @@ describe('a member scanning a tool label with the phone camera', () => {
   });
 
   it("reads the label with the browser's own detector where there is one, without fetching the decoder library", async () => {
-    const page = await signedInPhone(browser, app.url, 'kelechi.obi@example.org', DEMO_PASSWORD, addBarcodeDetectorShim);
+    const page = await signedInPhone(browser, app.url, 'kelechi.obi@example.org', DEMO_PASSWORD, { prepare: addBarcodeDetectorShim });
     const decoded = firstDecode(page);
     const scripts = scriptsFetched(page);
 

@@ -24,3 +24,32 @@ export function decodeQrPng(file: Buffer): string | null {
   const png = PNG.sync.read(file);
   return jsQR(new Uint8ClampedArray(png.data), png.width, png.height)?.data ?? null;
 }
+
+/**
+ * Decodes a QR code drawn in a terminal with half blocks (black ink on white, two modules per
+ * character cell), as the `qrcode` package's small terminal output draws it; null when none reads.
+ */
+export function decodeTerminalQr(text: string): string | null {
+  const rects: Rect[] = [];
+  let width = 0;
+  text.split('\n').forEach((line, row) => {
+    let ink = false;
+    let col = 0;
+    for (const part of line.split(/(\x1b\[\d+m)/)) {
+      const code = /^\x1b\[(\d+)m$/.exec(part)?.[1];
+      if (code !== undefined) {
+        if (code === '30') ink = true;
+        else if (code === '0' || code === '37') ink = false;
+        continue;
+      }
+      for (const ch of part) {
+        if (ink && (ch === '█' || ch === '▀')) rects.push({ x: col + 4, y: 2 * row + 4, width: 1, height: 1 });
+        if (ink && (ch === '█' || ch === '▄')) rects.push({ x: col + 4, y: 2 * row + 5, width: 1, height: 1 });
+        col++;
+      }
+      width = Math.max(width, col);
+    }
+  });
+  const height = 2 * text.split('\n').length;
+  return decodeQrPng(rectsToPng(width + 8, height + 8, rects, 6));
+}

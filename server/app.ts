@@ -8,6 +8,10 @@ import type { ServiceContext } from './context';
 import { authRouter } from './features/auth/auth.router';
 import { healthRouter } from './features/health/health.router';
 import { runQueuedAction } from './features/idempotency/queued-action';
+import { offlineRouter } from './features/offline/offline.router';
+import { openAssembliesOf } from './features/planning/assembly-catalogue';
+import { catalogueBins } from './features/stock/bin-catalogue';
+import { catalogueTools, signoffIdsOf } from './features/tools/tool-catalogue';
 import { invitationsRouter } from './features/invitations/invitations.router';
 import { labelsRouter } from './features/labels/labels.router';
 import { binsRouter } from './features/stock/bins.router';
@@ -114,6 +118,7 @@ export function createApp(config: AppConfig) {
   api.use('/forecast', forecastRouter());
   api.use('/alerts', alertsRouter());
   api.use('/waste', wasteRouter());
+  api.use('/offline', offlineRouter({ tools: catalogueTools, signoffIds: signoffIdsOf, bins: catalogueBins, assemblies: openAssembliesOf }));
   api.use(apiNotFound);
   app.use('/api', api);
 

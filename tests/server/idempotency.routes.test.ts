@@ -159,8 +159,8 @@ describe('X-Performed-At and X-Catalogue-At', () => {
     expect(res.body.checkedOutAt).toBe(iso(performed));
     expect(res.body.dueAt).toBe(iso(performed + 3 * DAY));
     expect(res.body.recordedAt).toBe(iso(now()));
-    const mine = (await member.agent.get('/api/loans/mine')).body.data as { checkedOutAt: string }[];
-    expect(mine[0]!.checkedOutAt).toBe(iso(performed));
+    const mine = (await member.agent.get('/api/loans/mine')).body.data as { checkedOutAt: string; checkoutRecordedAt: string }[];
+    expect(mine[0]).toMatchObject({ checkedOutAt: iso(performed), dueAt: iso(performed + 3 * DAY), checkoutRecordedAt: iso(now()) });
   });
 
   it('records a time in the future as the arrival time', async () => {
@@ -192,6 +192,10 @@ describe('X-Performed-At and X-Catalogue-At', () => {
     expect(back.status).toBe(200);
     expect(back.body.returnedAt).toBe(out.body.checkedOutAt);
     expect(back.body.recordedAt).toBe(iso(now()));
+    const mine = (await member.agent.get('/api/loans/mine')).body.data as unknown[];
+    expect(mine[0]).toMatchObject({ returnedAt: out.body.checkedOutAt, returnRecordedAt: iso(now()) });
+    const events = (await member.agent.get(`/api/tools/${tool.code}/events`)).body.data as { action: string; at: string }[];
+    expect(events.find((e) => e.action === 'returned')?.at).toBe(out.body.checkedOutAt);
   });
 });
 

@@ -94,6 +94,7 @@ describe('Idempotency-Key on check out, return, draw and return unused', () => {
     const elsewhere = await send(member, `/api/bins/${other.code}/draw`, { quantity: 40 }, { 'Idempotency-Key': 'draw-key-0002' });
     expect(elsewhere.status).toBe(422);
     expect(elsewhere.body.error.code).toBe('IDEMPOTENCY_KEY_REUSED');
+    expect(elsewhere.body.error.message).toContain(`POST /api/bins/${bin.code}/draw`);
     expect(await onHand(bin.code)).toBe(460);
     expect(await onHand(other.code)).toBe(500);
   });

@@ -134,6 +134,21 @@ describe('Idempotency-Key on check out, return, draw and return unused', () => {
     expect(await onHand(bin.code)).toBe(110);
   });
 
+  it('stores nothing for an unexpected failure, so the same key runs the action when sent again', async () => {
+    const tool = await addToolAs(qm, { name: 'Rivet puller, long reach', category: 'other' });
+    // The audit trail refusing a row stands in for a fault the service does not expect.
+    t.db.$client.exec("create trigger fail_event before insert on tool_events begin select raise(abort, 'disk trouble'); end");
+    const failed = await send(member, `/api/tools/${tool.code}/checkout`, {}, { 'Idempotency-Key': 'after-a-fault-01' });
+    expect(failed.status).toBe(500);
+    expect(failed.body.error.code).toBe('INTERNAL_ERROR');
+    expect(await openLoans()).toHaveLength(0);
+    t.db.$client.exec('drop trigger fail_event');
+    const retried = await send(member, `/api/tools/${tool.code}/checkout`, {}, { 'Idempotency-Key': 'after-a-fault-01' });
+    expect(retried.status).toBe(201);
+    expect(retried.headers['idempotent-replayed']).toBeUndefined();
+    expect(await openLoans()).toHaveLength(1);
+  });
+
   it('answers 400 INVALID_HEADER naming a malformed key or time, and does nothing', async () => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
     const shortKey = await send(member, `/api/bins/${bin.code}/draw`, { quantity: 1 }, { 'Idempotency-Key': 'short' });

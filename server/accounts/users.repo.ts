@@ -1,6 +1,7 @@
 import { asc, eq, sql } from 'drizzle-orm';
 import type { Role } from '@shared/roles';
 import type { Database, Executor } from '../db/client';
+import { preparedPerDatabase } from '../db/prepared';
 import { users, type UserRow } from '../db/schema/users';
 
 export function findUserByEmail(db: Executor, email: string): UserRow | undefined {
@@ -11,22 +12,17 @@ export function findUserById(db: Executor, id: number): UserRow | undefined {
   return db.select().from(users).where(eq(users.id, id)).get();
 }
 
-const byIdStatements = new WeakMap<Database, ReturnType<typeof prepareById>>();
-const prepareById = (db: Database) =>
+const byIdStatement = preparedPerDatabase((db) =>
   db
     .select()
     .from(users)
     .where(eq(users.id, sql.placeholder('id')))
-    .prepare();
+    .prepare(),
+);
 
 /** The signed-in person, looked up on every request: the statement is prepared once per database. */
 export function loadUserById(db: Database, id: number): UserRow | undefined {
-  let statement = byIdStatements.get(db);
-  if (!statement) {
-    statement = prepareById(db);
-    byIdStatements.set(db, statement);
-  }
-  return statement.get({ id });
+  return byIdStatement(db).get({ id });
 }
 
 export function listUsers(db: Executor): UserRow[] {

@@ -10,26 +10,19 @@
  * (helmet, pino-http, express.json, session, loadUser, CSRF) on both sides, and only the route
  * (zod parsing, Drizzle, the service) differs.
  */
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { performance } from 'node:perf_hooks';
-import { fileURLToPath } from 'node:url';
-import autocannon from 'autocannon';
 import express, { type Request, type RequestHandler, type Response } from 'express';
-import { pino } from 'pino';
 import { hasRole } from '@shared/roles';
 import { TOOL_CODE_PATTERN } from '@shared/schemas/tools';
 import { CATEGORY_LABELS, DEFAULT_LOAN_DAYS, POWERED_CATEGORIES, TOOL_CATEGORIES, type ToolCategory } from '@shared/tools/categories';
-import { createApp, type App } from '../../server/app';
+import type { App } from '../../server/app';
 import { hashPassword } from '../../server/accounts/passwords';
 import { migrateDatabase, openDatabase, type Database } from '../../server/db/client';
 import type { UserRow } from '../../server/db/schema/users';
 import { HttpError } from '../../server/lib/http-error';
-import { startMailCatcher, type MailCatcher } from '../../server/mail/mail-catcher';
-import { createSmtpMailer, type Mailer } from '../../server/mail/mailer';
+import { checkoutReturnRequests, closeServed, drive, elapsedSince, fmt, mean, median, serveApp, signIn, type Member, type Run, type Served } from './http-bench';
 
 const CONNECTIONS = 50;
 const WARMUP_SECONDS = 3;
@@ -49,40 +42,16 @@ const GOAL_RATIO = 0.85;
 const GOAL_P99_MS = 25;
 const WATCHDOG_MS = 150_000;
 const PASSWORD = 'bench password that is long enough';
-const BENCH_ENV = 'GRIPLINE_BENCH_CONNECTIONS'; // read by checkout-bench-client.cts in autocannon's worker
-const SETUP_CLIENT = fileURLToPath(new URL('./checkout-bench-client.cts', import.meta.url));
 
 type Side = 'gripline' | 'baseline';
 
-interface Member {
-  email: string;
-  cookie: string;
-  csrf: string;
-}
-
-interface Target {
+interface Target extends Served {
   side: Side;
-  db: Database;
-  app: App;
-  server: Server;
-  base: string;
   members: Member[];
-  catcher: MailCatcher;
-  mailer: Mailer;
 }
 
-interface Figures {
+interface Figures extends Run {
   side: Side;
-  reqPerSec: number;
-  meanMs: number;
-  p99Ms: number;
-  total: number;
-  non2xx: number;
-  errors: number;
-  timeouts: number;
-  statusCodes: string;
-  /** Server (main) thread CPU time per answered request; event-loop busy time where /proc is missing. */
-  busyMsPerReq: number;
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -272,137 +241,26 @@ async function buildTarget(side: Side, dir: string, passwordHash: string): Promi
   const db = openDatabase(join(dir, `${side}.sqlite`));
   migrateDatabase(db);
   seed(db, passwordHash);
-  const catcher = await startMailCatcher(db);
-  const mailer = createSmtpMailer(catcher.url, 'Gripline bench <bench@example.org>');
-  const app = createApp({
-    db,
-    sessionSecret: 'bench-secret-that-is-long-enough-for-the-check',
-    secureCookies: false,
-    sessionIdleMs: 30 * 60_000,
-    publicUrl: 'http://gripline.bench',
-    mailer,
-    catchingMail: true,
-    logger: pino({ level: 'silent' }),
-    rateLimit: { windowMs: 60_000, perIp: 100_000, perAccount: 100_000 },
-    trustProxyHops: 0,
-  });
-  if (side === 'baseline') spliceBareRouter(app, bareRouter(db));
-  const server = createServer(app);
-  await new Promise<void>((resolve, reject) => {
-    server.once('error', reject);
-    server.listen(0, '127.0.0.1', () => resolve());
-  });
-  const { port } = server.address() as AddressInfo;
-  const base = `http://127.0.0.1:${port}`;
+  const served = await serveApp(db, side === 'baseline' ? (app) => spliceBareRouter(app, bareRouter(db)) : undefined);
   const members: Member[] = [];
   for (let i = 1; i <= CONNECTIONS; i += 5) {
-    const batch = Array.from({ length: Math.min(5, CONNECTIONS - i + 1) }, (_, k) => signIn(base, `builder${i + k}@example.org`));
+    const batch = Array.from({ length: Math.min(5, CONNECTIONS - i + 1) }, (_, k) => signIn(served.base, `builder${i + k}@example.org`, PASSWORD));
     members.push(...(await Promise.all(batch)));
   }
-  return { side, db, app, server, base, members, catcher, mailer };
+  return { ...served, side, members };
 }
 
-function sessionCookie(res: globalThis.Response): string {
-  const cookie = res.headers.getSetCookie().find((c) => c.startsWith('gripline.sid='));
-  if (!cookie) throw new Error(`no session cookie from ${res.url} (${res.status})`);
-  return cookie.split(';')[0]!;
-}
-
-/** GET /api/auth/csrf, then POST /api/auth/login: the regenerated session's cookie and token. */
-async function signIn(base: string, email: string): Promise<Member> {
-  const first = await fetch(`${base}/api/auth/csrf`);
-  const { token } = (await first.json()) as { token: string };
-  const login = await fetch(`${base}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json', cookie: sessionCookie(first), 'x-csrf-token': token },
-    body: JSON.stringify({ email, password: PASSWORD }),
-  });
-  if (login.status !== 200) throw new Error(`sign-in failed for ${email}: ${login.status} ${await login.text()}`);
-  const { csrfToken } = (await login.json()) as { csrfToken: string };
-  return { email, cookie: sessionCookie(login), csrf: csrfToken };
-}
-
-/** Connection n: member n, tool (block * CONNECTIONS + n), checkout then return, over and over. */
-function connectionRequests(target: Target, block: number) {
-  return target.members.map((m, n) => {
-    const code = toolCode(block * CONNECTIONS + n + 1);
-    const headers = { 'content-type': 'application/json', cookie: m.cookie, 'x-csrf-token': m.csrf };
-    return [
-      { method: 'POST' as const, path: `/api/tools/${code}/checkout`, headers, body: '{}' },
-      { method: 'POST' as const, path: `/api/tools/${code}/return`, headers, body: '{"condition":"ok"}' },
-    ];
-  });
-}
-
-async function drive(target: Target, block: number, seconds: number): Promise<Figures> {
-  process.env[BENCH_ENV] = JSON.stringify(connectionRequests(target, block));
-  const options = {
-    url: target.base,
-    connections: CONNECTIONS,
-    pipelining: 1,
-    duration: seconds,
-    workers: 1,
-    setupClient: SETUP_CLIENT,
-    timeout: 10,
-  };
-  // With workers, setupClient is a file path (the types only know the function form).
-  const before = performance.eventLoopUtilization();
-  const cpuBefore = mainThreadCpuMs();
-  const result = await autocannon(options as unknown as autocannon.Options);
-  const cpuAfter = mainThreadCpuMs();
-  const busyMs = cpuBefore !== undefined && cpuAfter !== undefined ? cpuAfter - cpuBefore : performance.eventLoopUtilization(before).active;
-  const codes = Object.entries(result.statusCodeStats ?? {})
-    .map(([code, v]) => `${code}×${v.count ?? 0}`)
-    .join(' ');
-  return {
-    side: target.side,
-    reqPerSec: result.requests.average,
-    meanMs: result.latency.mean,
-    p99Ms: result.latency.p99,
-    total: result.requests.total,
-    non2xx: result.non2xx,
-    errors: result.errors,
-    timeouts: result.timeouts,
-    statusCodes: codes,
-    busyMsPerReq: busyMs / Math.max(1, result.requests.total),
-  };
-}
-
-/**
- * CPU time of this process's main thread (the one serving both apps; autocannon runs in a worker),
- * from /proc on Linux: utime + stime in clock ticks (100 per second). Undefined elsewhere.
- */
-function mainThreadCpuMs(): number | undefined {
-  try {
-    const stat = readFileSync(`/proc/self/task/${process.pid}/stat`, 'utf8');
-    const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
-    return (Number(fields[11]) + Number(fields[12])) * 10;
-  } catch {
-    return undefined;
-  }
-}
-
-async function closeTarget(t: Target): Promise<void> {
-  t.server.closeAllConnections();
-  await new Promise<void>((resolve) => t.server.close(() => resolve()));
-  t.app.sessionStore.close();
-  t.mailer.close();
-  await t.catcher.close();
-  t.db.$client.close();
+/** Connection n: member n, tool (block * CONNECTIONS + n). */
+async function driveSide(target: Target, block: number, seconds: number): Promise<Figures> {
+  const run = await drive(target.base, checkoutReturnRequests(target.members, (n) => toolCode(block * CONNECTIONS + n + 1)), seconds);
+  return { ...run, side: target.side };
 }
 
 // ---------------------------------------------------------------------------------------------
 // Report.
 
-const fmt = (n: number, digits = 1, width = 9) => n.toFixed(digits).padStart(width);
-const mean = (xs: number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
-const median = (xs: number[]) => {
-  const sorted = [...xs].sort((a, b) => a - b);
-  const mid = sorted.length >> 1;
-  return sorted.length % 2 ? sorted[mid]! : (sorted[mid - 1]! + sorted[mid]!) / 2;
-};
 const startedAt = Date.now();
-const elapsed = () => `[${((Date.now() - startedAt) / 1000).toFixed(0).padStart(3)} s]`;
+const elapsed = elapsedSince(startedAt);
 
 interface Summary {
   reqPerSec: number;
@@ -462,7 +320,7 @@ async function main(): Promise<void> {
 
     const all: Figures[] = [];
     for (const t of [gripline, baseline]) {
-      const f = await drive(t, 0, WARMUP_SECONDS);
+      const f = await driveSide(t, 0, WARMUP_SECONDS);
       console.log(`${elapsed()} warm-up ${t.side.padEnd(9)} ${f.total} requests (${f.statusCodes})`);
       all.push(f);
     }
@@ -471,7 +329,7 @@ async function main(): Promise<void> {
     for (let r = 0; r < ROUNDS; r++) {
       const round: Figures[] = [];
       for (const side of ROUND) {
-        const f = await drive(bySide[side], blockOf[side]++, RUN_SECONDS);
+        const f = await driveSide(bySide[side], blockOf[side]++, RUN_SECONDS);
         console.log(
           `${elapsed()} round ${r + 1} ${side.padEnd(9)} ${f.reqPerSec.toFixed(0).padStart(5)} req/s, p99 ${f.p99Ms} ms, cpu ${f.busyMsPerReq.toFixed(3)} ms/req (${f.statusCodes})`,
         );
@@ -530,8 +388,7 @@ async function main(): Promise<void> {
       }
     }
   } finally {
-    for (const t of targets) await closeTarget(t);
-    delete process.env[BENCH_ENV];
+    for (const t of targets) await closeServed(t);
     cleanup();
     clearTimeout(watchdog);
   }

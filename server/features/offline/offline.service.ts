@@ -1,11 +1,11 @@
 import type { Catalogue, CatalogueBin, CatalogueTool } from '@shared/schemas/offline';
 import type { ServiceContext } from '../../context';
-import type { Executor } from '../../db/client';
+import type { Database, Executor } from '../../db/client';
 import type { UserRow } from '../../db/schema/users';
 
 /** What the catalogue copy is made of; each part comes from the feature that owns its tables (the app wires them). */
 export interface CatalogueSources {
-  tools(db: Executor): CatalogueTool[];
+  tools(db: Database): CatalogueTool[];
   signoffIds(db: Executor, userId: number): number[];
   bins(db: Executor, memberId: number): CatalogueBin[];
   assemblies(db: Executor, ownerId: number): Catalogue['yourAssemblies'];

@@ -1,13 +1,47 @@
 import { and, asc, count, eq, like, lte, max, ne, or, sql, type SQL } from 'drizzle-orm';
 import type { BinListQuery } from '@shared/schemas/bins';
-import type { Executor } from '../../db/client';
-import type { SQLiteColumn } from 'drizzle-orm/sqlite-core';
+import type { Database, Executor } from '../../db/client';
+import { preparedPerDatabase } from '../../db/prepared';
 import { bins, stockMovements, type BinRow } from '../../db/schema/stock';
 
 export type NewBinRow = typeof bins.$inferInsert;
 
-export function findBinByCode(db: Executor, code: string): BinRow | undefined {
-  return db.select().from(bins).where(eq(bins.code, code)).get();
+const p = sql.placeholder;
+
+/**
+ * What a scan of a bin reads, prepared once per database. "x is ?" matches null to null, so one
+ * statement finds the bins of the same spec whichever fields the spec leaves empty.
+ */
+const binStatements = preparedPerDatabase((db) => ({
+  byCode: db.select().from(bins).where(eq(bins.code, p('code'))).prepare(),
+  lastCounted: db
+    .select({ at: max(stockMovements.at) })
+    .from(stockMovements)
+    .where(and(eq(stockMovements.kind, 'count'), eq(stockMovements.binId, p('binId'))))
+    .prepare(),
+  sameSpec: db
+    .select()
+    .from(bins)
+    .where(
+      and(
+        ne(bins.id, p('id')),
+        eq(bins.kind, p('kind')),
+        sql`${bins.head} is ${p('head')}`,
+        sql`${bins.material} is ${p('material')}`,
+        sql`${bins.stemMaterial} is ${p('stemMaterial')}`,
+        sql`${bins.diameter32} is ${p('diameter32')}`,
+        sql`${bins.grip16} is ${p('grip16')}`,
+        sql`${bins.length16} is ${p('length16')}`,
+        sql`${bins.drillSize} is ${p('drillSize')}`,
+        sql`(${p('diameter32')} is not null or lower(${bins.name}) = lower(${p('name')}))`,
+      ),
+    )
+    .orderBy(asc(bins.code))
+    .prepare(),
+}));
+
+export function findBinByCode(db: Database, code: string): BinRow | undefined {
+  return binStatements(db).byCode.get({ code });
 }
 
 export function findBinById(db: Executor, id: number): BinRow | undefined {
@@ -63,8 +97,12 @@ export function listLowBins(db: Executor): BinRow[] {
 }
 
 /** When each bin was last counted. */
-export function lastCountedAt(db: Executor, binIds: readonly number[]): Map<number, Date> {
+export function lastCountedAt(db: Database, binIds: readonly number[]): Map<number, Date> {
   if (binIds.length === 0) return new Map();
+  if (binIds.length === 1) {
+    const at = binStatements(db).lastCounted.get({ binId: binIds[0] })?.at;
+    return new Map(at ? [[binIds[0]!, at]] : []);
+  }
   const rows = db
     .select({ binId: stockMovements.binId, at: max(stockMovements.at) })
     .from(stockMovements)
@@ -75,26 +113,7 @@ export function lastCountedAt(db: Executor, binIds: readonly number[]): Map<numb
 }
 
 /** Other bins holding exactly the same thing (kind, spec and, for non-rivets, name): where stock may move. */
-export function sameSpecBins(db: Executor, bin: BinRow): BinRow[] {
-  const same = <T>(column: SQLiteColumn, value: T | null) =>
-    value === null ? sql`${column} is null` : sql`${column} = ${value}`;
-  return db
-    .select()
-    .from(bins)
-    .where(
-      and(
-        ne(bins.id, bin.id),
-        eq(bins.kind, bin.kind),
-        same(bins.head, bin.head),
-        same(bins.material, bin.material),
-        same(bins.stemMaterial, bin.stemMaterial),
-        same(bins.diameter32, bin.diameter32),
-        same(bins.grip16, bin.grip16),
-        same(bins.length16, bin.length16),
-        same(bins.drillSize, bin.drillSize),
-        bin.diameter32 === null ? sql`lower(${bins.name}) = lower(${bin.name})` : undefined,
-      ),
-    )
-    .orderBy(asc(bins.code))
-    .all();
+export function sameSpecBins(db: Database, bin: BinRow): BinRow[] {
+  const { id, kind, head, material, stemMaterial, diameter32, grip16, length16, drillSize, name } = bin;
+  return binStatements(db).sameSpec.all({ id, kind, head, material, stemMaterial, diameter32, grip16, length16, drillSize, name });
 }

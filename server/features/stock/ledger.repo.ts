@@ -1,6 +1,7 @@
 import { and, desc, eq, gte, lt, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
-import type { Executor } from '../../db/client';
+import type { Database, Executor } from '../../db/client';
+import { preparedPerDatabase } from '../../db/prepared';
 import { binAlerts } from '../../db/schema/builds';
 import { assemblies, builds } from '../../db/schema/builds';
 import { bins, stockMovements, type MovementRow } from '../../db/schema/stock';
@@ -55,13 +56,16 @@ const netDrawn = sql<number>`coalesce(sum(-${stockMovements.quantity}), 0)`;
  * What a member has drawn from a bin, less what they returned and less reversals of either:
  * the most they may return to it.
  */
-export function netDrawnBy(db: Executor, binId: number, memberId: number): number {
-  const row = db
+const netDrawnStatement = preparedPerDatabase((db) =>
+  db
     .select({ n: netDrawn })
     .from(stockMovements)
-    .where(and(eq(stockMovements.binId, binId), eq(stockMovements.memberId, memberId)))
-    .get();
-  return Math.max(0, row?.n ?? 0);
+    .where(and(eq(stockMovements.binId, sql.placeholder('binId')), eq(stockMovements.memberId, sql.placeholder('memberId'))))
+    .prepare(),
+);
+
+export function netDrawnBy(db: Database, binId: number, memberId: number): number {
+  return Math.max(0, netDrawnStatement(db).get({ binId, memberId })?.n ?? 0);
 }
 
 /** netDrawnBy for every bin the member has taken from, in one query (bins with nothing to return are left out). */

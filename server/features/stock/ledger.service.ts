@@ -1,7 +1,7 @@
 import type { CountBody, CountResult, DrawBody, MoveBody, Movement, ReceiveBody, ReturnUnusedBody, ReverseBody, WriteOffBody } from '@shared/schemas/bins';
 import type { MovementKind } from '@shared/stock/kinds';
 import type { ServiceContext } from '../../context';
-import type { Executor } from '../../db/client';
+import type { Database, Executor } from '../../db/client';
 import type { BinRow, MovementRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
@@ -11,7 +11,7 @@ import { assemblyOwnerId, closeActiveAlert, findMovement, findPairedWith, findRe
 import { dollarsToE4, e4ToDollars, valueCents } from '@shared/stock/money';
 import { slipExists } from './slips.repo';
 
-export function binOrThrow(db: Executor, code: string): BinRow {
+export function binOrThrow(db: Database, code: string): BinRow {
   const bin = findBinByCode(db, code);
   if (!bin) throw new HttpError(404, 'BIN_NOT_FOUND', `No bin has the code ${code}. Check the label, or type the code.`);
   return bin;

@@ -1,5 +1,6 @@
 import { and, eq, isNull, sql } from 'drizzle-orm';
 import type { Database } from '../../db/client';
+import { preparedPerDatabase } from '../../db/prepared';
 import { memberSignoffs, signoffs } from '../../db/schema/signoffs';
 import { holds, loans, toolEvents, tools } from '../../db/schema/tools';
 import { users } from '../../db/schema/users';
@@ -83,13 +84,4 @@ function prepareLoanStatements(db: Database) {
 }
 
 export type LoanStatements = ReturnType<typeof prepareLoanStatements>;
-const cache = new WeakMap<Database, LoanStatements>();
-
-export function loanStatements(db: Database): LoanStatements {
-  let s = cache.get(db);
-  if (!s) {
-    s = prepareLoanStatements(db);
-    cache.set(db, s);
-  }
-  return s;
-}
+export const loanStatements: (db: Database) => LoanStatements = preparedPerDatabase(prepareLoanStatements);

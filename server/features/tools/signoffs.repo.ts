@@ -1,6 +1,7 @@
 import { and, asc, count, eq, isNull, ne, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
-import type { Executor } from '../../db/client';
+import type { Database, Executor } from '../../db/client';
+import { preparedPerDatabase } from '../../db/prepared';
 import { memberSignoffs, signoffs } from '../../db/schema/signoffs';
 import { tools } from '../../db/schema/tools';
 import { users } from '../../db/schema/users';
@@ -83,12 +84,18 @@ export function markGrantRevoked(db: Executor, grantId: number, at: Date, byId: 
     .run();
 }
 
-export function activeLeadNames(db: Executor): string[] {
-  return db
+const activeLeadsStatement = preparedPerDatabase((db) =>
+  db
     .select({ name: users.name })
     .from(users)
     .where(and(eq(users.role, 'lead'), isNull(users.deactivatedAt)))
     .orderBy(asc(users.name))
+    .prepare(),
+);
+
+/** Named in every "needs a sign-off" answer, a scan's included. */
+export function activeLeadNames(db: Database): string[] {
+  return activeLeadsStatement(db)
     .all()
     .map((r) => r.name);
 }

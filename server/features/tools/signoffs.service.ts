@@ -1,7 +1,7 @@
 import type { CreateSignoffInput, MySignoff, Signoff, SignoffGrant, UpdateSignoffBody } from '@shared/schemas/signoffs';
 import { findUserById } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
-import type { Executor } from '../../db/client';
+import type { Database, Executor } from '../../db/client';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { isUniqueViolation } from '../../lib/sqlite-errors';
@@ -33,7 +33,7 @@ function signoffOrThrow(db: Executor, id: number): SignoffRow {
 }
 
 /** Who to ask for a sign-off, by name: "Ask Dana Okafor (chapter lead) to sign you off." */
-export function signOffAdvice(db: Executor): string {
+export function signOffAdvice(db: Database): string {
   const names = activeLeadNames(db);
   if (names.length === 0) return 'Ask the chapter lead to sign you off.';
   const who = names.length === 1 ? names[0] : `${names.slice(0, -1).join(', ')} or ${names.at(-1)}`;

@@ -1,13 +1,13 @@
 import { asc, ne } from 'drizzle-orm';
 import type { CatalogueTool } from '@shared/schemas/offline';
-import type { Executor } from '../../db/client';
+import type { Database, Executor } from '../../db/client';
 import { tools } from '../../db/schema/tools';
 import { listActiveGrants } from './signoffs.repo';
 import { effectiveLoanDays } from './tool-dto';
 import { loadToolExtras } from './tools.repo';
 
 /** Every tool a scan may find (all but retired ones), as a phone keeps it for offline use: five queries in all. */
-export function catalogueTools(db: Executor): CatalogueTool[] {
+export function catalogueTools(db: Database): CatalogueTool[] {
   const rows = db.select().from(tools).where(ne(tools.status, 'retired')).orderBy(asc(tools.code)).all();
   const extras = loadToolExtras(db, rows);
   return rows.map((row) => {

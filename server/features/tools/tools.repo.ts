@@ -1,15 +1,18 @@
 import { and, asc, count, eq, inArray, isNull, like, lte, or, sql, type SQL } from 'drizzle-orm';
 import type { ToolListQuery } from '@shared/schemas/tools';
-import type { Executor } from '../../db/client';
+import type { Database, Executor } from '../../db/client';
+import { preparedPerDatabase } from '../../db/prepared';
 import { signoffs } from '../../db/schema/signoffs';
 import { holds, loans, photos, tools } from '../../db/schema/tools';
 import { users } from '../../db/schema/users';
+import { loanStatements } from './loans.repo';
 
 export type ToolRow = typeof tools.$inferSelect;
 export type NewToolRow = typeof tools.$inferInsert;
 
-export function findToolByCode(db: Executor, code: string): ToolRow | undefined {
-  return db.select().from(tools).where(eq(tools.code, code)).get();
+/** Every scan starts here, so the lookup is the checkout's own prepared statement. */
+export function findToolByCode(db: Database, code: string): ToolRow | undefined {
+  return loanStatements(db).toolByCode.get({ code });
 }
 
 export function insertTool(db: Executor, values: NewToolRow): ToolRow {
@@ -59,25 +62,83 @@ export interface ToolExtras {
   photoIds: Map<number, number[]>;
 }
 
-/** Open loans, hold queues, sign-off names and photo ids for a page of tools, in four queries. */
-export function loadToolExtras(db: Executor, rows: ToolRow[]): ToolExtras {
-  const ids = rows.map((r) => r.id);
-  const extras: ToolExtras = { loans: new Map(), holds: new Map(), signoffNames: new Map(), photoIds: new Map() };
-  if (ids.length === 0) return extras;
-  for (const l of db
+interface ExtrasRows {
+  loans: { id: number; toolId: number; holderId: number; holderName: string; checkedOutAt: Date; dueAt: Date }[];
+  holds: { toolId: number; status: string; userId: number; name: string; offerExpiresAt: Date | null }[];
+  signoffs: { id: number; name: string }[];
+  photos: { id: number; toolId: number }[];
+}
+
+const ACTIVE_HOLD = ['waiting', 'offered'] as const;
+const p = sql.placeholder;
+
+/** The same four queries for one tool (a scan opens one), prepared once per database. */
+const oneToolStatements = preparedPerDatabase((db) => ({
+  loans: db
     .select({ id: loans.id, toolId: loans.toolId, holderId: loans.userId, holderName: users.name, checkedOutAt: loans.checkedOutAt, dueAt: loans.dueAt })
     .from(loans)
     .innerJoin(users, eq(users.id, loans.userId))
-    .where(and(inArray(loans.toolId, ids), sql`${loans.returnedAt} is null`))
-    .all()) {
-    extras.loans.set(l.toolId, l);
-  }
-  for (const h of db
+    .where(and(eq(loans.toolId, p('toolId')), isNull(loans.returnedAt)))
+    .prepare(),
+  holds: db
     .select({ toolId: holds.toolId, status: holds.status, userId: holds.userId, name: users.name, offerExpiresAt: holds.offerExpiresAt })
     .from(holds)
     .innerJoin(users, eq(users.id, holds.userId))
-    .where(and(inArray(holds.toolId, ids), inArray(holds.status, ['waiting', 'offered'])))
-    .all()) {
+    .where(and(eq(holds.toolId, p('toolId')), inArray(holds.status, [...ACTIVE_HOLD])))
+    .prepare(),
+  signoffs: db.select({ id: signoffs.id, name: signoffs.name }).from(signoffs).where(eq(signoffs.id, p('signoffId'))).prepare(),
+  photos: db.select({ id: photos.id, toolId: photos.toolId }).from(photos).where(eq(photos.toolId, p('toolId'))).orderBy(asc(photos.id)).prepare(),
+  activeHold: db
+    .select()
+    .from(holds)
+    .where(and(eq(holds.toolId, p('toolId')), eq(holds.userId, p('userId')), inArray(holds.status, [...ACTIVE_HOLD])))
+    .prepare(),
+  queuePosition: db
+    .select({ n: count() })
+    .from(holds)
+    .where(and(eq(holds.toolId, p('toolId')), inArray(holds.status, [...ACTIVE_HOLD]), lte(holds.id, p('holdId'))))
+    .prepare(),
+}));
+
+function oneToolRows(db: Database, row: ToolRow): ExtrasRows {
+  const s = oneToolStatements(db);
+  const toolId = row.id;
+  return {
+    loans: s.loans.all({ toolId }),
+    holds: s.holds.all({ toolId }),
+    signoffs: row.requiredSignoffId !== null ? s.signoffs.all({ signoffId: row.requiredSignoffId }) : [],
+    photos: s.photos.all({ toolId }),
+  };
+}
+
+function pageRows(db: Database, rows: ToolRow[]): ExtrasRows {
+  const ids = rows.map((r) => r.id);
+  const signoffIds = [...new Set(rows.map((r) => r.requiredSignoffId).filter((id): id is number => id !== null))];
+  return {
+    loans: db
+      .select({ id: loans.id, toolId: loans.toolId, holderId: loans.userId, holderName: users.name, checkedOutAt: loans.checkedOutAt, dueAt: loans.dueAt })
+      .from(loans)
+      .innerJoin(users, eq(users.id, loans.userId))
+      .where(and(inArray(loans.toolId, ids), isNull(loans.returnedAt)))
+      .all(),
+    holds: db
+      .select({ toolId: holds.toolId, status: holds.status, userId: holds.userId, name: users.name, offerExpiresAt: holds.offerExpiresAt })
+      .from(holds)
+      .innerJoin(users, eq(users.id, holds.userId))
+      .where(and(inArray(holds.toolId, ids), inArray(holds.status, [...ACTIVE_HOLD])))
+      .all(),
+    signoffs: signoffIds.length > 0 ? db.select({ id: signoffs.id, name: signoffs.name }).from(signoffs).where(inArray(signoffs.id, signoffIds)).all() : [],
+    photos: db.select({ id: photos.id, toolId: photos.toolId }).from(photos).where(inArray(photos.toolId, ids)).orderBy(asc(photos.id)).all(),
+  };
+}
+
+/** Open loans, hold queues, sign-off names and photo ids for a page of tools (or the one scanned), in four queries. */
+export function loadToolExtras(db: Database, rows: ToolRow[]): ToolExtras {
+  const extras: ToolExtras = { loans: new Map(), holds: new Map(), signoffNames: new Map(), photoIds: new Map() };
+  if (rows.length === 0) return extras;
+  const found = rows.length === 1 ? oneToolRows(db, rows[0]!) : pageRows(db, rows);
+  for (const l of found.loans) extras.loans.set(l.toolId, l);
+  for (const h of found.holds) {
     const entry = extras.holds.get(h.toolId) ?? { waiting: 0, offeredTo: null, offerExpiresAt: null };
     if (h.status === 'waiting') entry.waiting++;
     else {
@@ -86,15 +147,8 @@ export function loadToolExtras(db: Executor, rows: ToolRow[]): ToolExtras {
     }
     extras.holds.set(h.toolId, entry);
   }
-  const signoffIds = [...new Set(rows.map((r) => r.requiredSignoffId).filter((id): id is number => id !== null))];
-  if (signoffIds.length > 0) {
-    for (const s of db.select({ id: signoffs.id, name: signoffs.name }).from(signoffs).where(inArray(signoffs.id, signoffIds)).all()) {
-      extras.signoffNames.set(s.id, s.name);
-    }
-  }
-  for (const p of db.select({ id: photos.id, toolId: photos.toolId }).from(photos).where(inArray(photos.toolId, ids)).orderBy(asc(photos.id)).all()) {
-    extras.photoIds.set(p.toolId, [...(extras.photoIds.get(p.toolId) ?? []), p.id]);
-  }
+  for (const s of found.signoffs) extras.signoffNames.set(s.id, s.name);
+  for (const ph of found.photos) extras.photoIds.set(ph.toolId, [...(extras.photoIds.get(ph.toolId) ?? []), ph.id]);
   return extras;
 }
 
@@ -107,20 +161,10 @@ export function openLoanHolderId(db: Executor, toolId: number): number | undefin
 }
 
 /** 1 for the person first in the queue (or the one the tool is held for). */
-export function queuePosition(db: Executor, toolId: number, holdId: number): number {
-  return (
-    db
-      .select({ n: count() })
-      .from(holds)
-      .where(and(eq(holds.toolId, toolId), inArray(holds.status, ['waiting', 'offered']), lte(holds.id, holdId)))
-      .get()?.n ?? 0
-  );
+export function queuePosition(db: Database, toolId: number, holdId: number): number {
+  return oneToolStatements(db).queuePosition.get({ toolId, holdId })?.n ?? 0;
 }
 
-export function findActiveHold(db: Executor, toolId: number, userId: number) {
-  return db
-    .select()
-    .from(holds)
-    .where(and(eq(holds.toolId, toolId), eq(holds.userId, userId), inArray(holds.status, ['waiting', 'offered'])))
-    .get();
+export function findActiveHold(db: Database, toolId: number, userId: number) {
+  return oneToolStatements(db).activeHold.get({ toolId, userId });
 }

@@ -1,0 +1,185 @@
+import sharp from 'sharp';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { binForYouSchema, binListSchema, type BinForYou } from '@shared/schemas/bins';
+import { toolForYouSchema, toolListSchema, type ToolForYou } from '@shared/schemas/tools';
+import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { addBinAs, addToolAs, blindRivetBin, lend, post } from '../helpers/crib';
+import { screwBin } from '../helpers/planning-fixture';
+
+/**
+ * What a scan opens, GET /api/tools/:code and GET /api/bins/:code, in each state: the whole answer
+ * parses with the shared schema and loses nothing in the parse (no field the client does not know),
+ * says what the person may do, and shows the tool or bin exactly as the list does.
+ */
+let t: TestApp;
+let qm: SignedInAgent;
+let member: SignedInAgent;
+let other: SignedInAgent;
+const HOUR = 3600_000;
+const DAY = 24 * HOUR;
+
+beforeEach(async () => {
+  t = await buildTestApp();
+  await t.addCrew();
+  await t.addUser({ email: 'other@example.org', name: 'Otto Other' });
+  qm = await t.signIn('qm@example.org');
+  member = await t.signIn('member@example.org');
+  other = await t.signIn('other@example.org');
+});
+afterEach(() => t.close());
+
+async function openTool(who: SignedInAgent, code: string): Promise<ToolForYou> {
+  const res = await who.agent.get(`/api/tools/${code}`);
+  expect(res.status).toBe(200);
+  expect(res.type).toBe('application/json');
+  const parsed = toolForYouSchema.parse(res.body);
+  expect(parsed).toEqual(res.body);
+  return parsed;
+}
+
+async function openBin(who: SignedInAgent, code: string): Promise<BinForYou> {
+  const res = await who.agent.get(`/api/bins/${code}`);
+  expect(res.status).toBe(200);
+  expect(res.type).toBe('application/json');
+  const parsed = binForYouSchema.parse(res.body);
+  expect(parsed).toEqual(res.body);
+  return parsed;
+}
+
+/** The one item opened by a scan is the same as that item in the list. */
+async function expectSameAsInList(kind: 'tools' | 'bins', opened: ToolForYou | BinForYou) {
+  const res = await qm.agent.get(`/api/${kind}?pageSize=500`);
+  const list = kind === 'tools' ? toolListSchema.parse(res.body) : binListSchema.parse(res.body);
+  const { forYou: _forYou, ...item } = opened;
+  expect(list.data.find((x) => x.code === opened.code)).toEqual(item);
+}
+
+const iso = (ms: number) => new Date(ms).toISOString();
+
+describe('GET /api/tools/:code in each state', () => {
+  it('answers the tool and what the person may do, on the shelf, behind a sign-off, on loan, queued, held, out of service, lost and retired', async () => {
+    const now = t.clock.now.getTime();
+    const lead = await t.signIn('lead@example.org');
+    const signoff = await post(lead, '/api/signoffs', { name: 'Air tools', description: 'Air drills and rivet guns' });
+    expect(signoff.status).toBe(201);
+    await addToolAs(qm, { name: 'Bucking bar, 1 lb', category: 'other', accessories: ['leather pad'] });
+    await addToolAs(qm, { name: 'Air drill', category: 'air_drill', requiredSignoffId: signoff.body.id });
+    await addToolAs(qm, { name: 'Rivet squeezer', category: 'other', loanDays: 5 });
+    await addToolAs(qm, { name: 'Rivet gun 3X', category: 'other' });
+    await addToolAs(qm, { name: 'Edge deburrer', category: 'other' });
+    await addToolAs(qm, { name: 'Spacing fan', category: 'other' });
+
+    const jpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#5a7d9a' } }).jpeg().toBuffer();
+    const photo = await qm.agent.post('/api/tools/T-0001/photos').set('X-CSRF-Token', qm.csrf).attach('photo', jpeg, { filename: 'bar.jpg', contentType: 'image/jpeg' });
+    expect(photo.status).toBe(201);
+
+    const shelf = await openTool(member, 'T-0001');
+    expect(shelf).toMatchObject({ status: 'available', accessories: ['leather pad'], photoIds: [photo.body.id], loan: null, holds: { waiting: 0, offeredTo: null, offerExpiresAt: null } });
+    expect(shelf.forYou).toEqual({ actions: ['check_out'], reason: null, defaultDueAt: iso(now + shelf.loanDays * DAY), yourHold: null });
+    await expectSameAsInList('tools', shelf);
+
+    const gated = await openTool(member, 'T-0002');
+    expect(gated.requiredSignoff).toEqual({ id: signoff.body.id, name: 'Air tools' });
+    expect(gated.forYou).toMatchObject({
+      actions: [],
+      reason: 'Needs the "Air tools" sign-off, which you do not have yet. Ask Lee Lead (chapter lead) to sign you off.',
+    });
+    await expectSameAsInList('tools', gated);
+
+    await lend(t, other, 'T-0003', 3 * DAY);
+    const lent = await openTool(member, 'T-0003');
+    expect(lent.loan).toMatchObject({ holder: { name: 'Otto Other' }, dueAt: iso(now + 3 * DAY) });
+    expect(lent.forYou).toEqual({ actions: ['place_hold'], reason: `On loan to Otto Other until ${iso(now + 3 * DAY).slice(0, 10)}.`, defaultDueAt: iso(now + 5 * DAY), yourHold: null });
+    expect((await openTool(other, 'T-0003')).forYou).toMatchObject({ actions: ['return'], reason: null });
+    expect((await openTool(qm, 'T-0003')).forYou.actions).toEqual(['return', 'place_hold']);
+    await expectSameAsInList('tools', lent);
+
+    expect((await post(member, '/api/tools/T-0003/holds')).status).toBe(201);
+    expect((await post(qm, '/api/tools/T-0003/holds')).status).toBe(201);
+    const queued = await openTool(member, 'T-0003');
+    expect(queued.holds).toEqual({ waiting: 2, offeredTo: null, offerExpiresAt: null });
+    expect(queued.forYou).toMatchObject({ actions: ['cancel_hold'], yourHold: { status: 'waiting', position: 1, offerExpiresAt: null } });
+    expect((await openTool(qm, 'T-0003')).forYou).toMatchObject({ actions: ['return', 'cancel_hold'], yourHold: { status: 'waiting', position: 2 } });
+
+    expect((await post(other, '/api/tools/T-0003/return', { condition: 'ok' })).status).toBe(200);
+    const offerEnds = iso(now + 48 * HOUR);
+    const heldForMe = await openTool(member, 'T-0003');
+    expect(heldForMe).toMatchObject({ status: 'held', loan: null, holds: { waiting: 1, offeredTo: { name: 'Mia Member' }, offerExpiresAt: offerEnds } });
+    expect(heldForMe.forYou).toMatchObject({ actions: ['check_out', 'cancel_hold'], reason: null, yourHold: { status: 'offered', position: 1, offerExpiresAt: offerEnds } });
+    const heldForSomeoneElse = await openTool(qm, 'T-0003');
+    expect(heldForSomeoneElse.forYou).toMatchObject({
+      actions: ['cancel_hold'],
+      reason: `Held for Mia Member until ${offerEnds.slice(0, 16).replace('T', ' ')}.`,
+      yourHold: { status: 'waiting', position: 2 },
+    });
+    expect((await openTool(other, 'T-0003')).forYou.actions).toEqual(['place_hold']);
+    await expectSameAsInList('tools', heldForMe);
+
+    expect((await post(qm, '/api/tools/T-0004/out-of-service', { note: 'Worn retaining spring' })).status).toBe(200);
+    expect((await post(qm, '/api/tools/T-0005/lost', { note: 'Not on the shelf at the count' })).status).toBe(200);
+    expect((await post(qm, '/api/tools/T-0006/retire', { note: 'Bent beyond use' })).status).toBe(200);
+    const states = [
+      ['T-0004', 'out_of_service', 'Out of service: Worn retaining spring.', ['place_hold']],
+      ['T-0005', 'lost', 'Marked lost. Tell the quartermaster if you find it.', []],
+      ['T-0006', 'retired', 'Retired from the crib.', []],
+    ] as const;
+    for (const [code, status, reason, actions] of states) {
+      const tool = await openTool(member, code);
+      expect(tool.status).toBe(status);
+      expect(tool.forYou).toMatchObject({ actions, reason, yourHold: null });
+      await expectSameAsInList('tools', tool);
+    }
+  });
+
+  it('answers 404 TOOL_NOT_FOUND for a code on no tool', async () => {
+    const res = await member.agent.get('/api/tools/T-0404');
+    expect(res.status).toBe(404);
+    expect(res.body.error.code).toBe('TOOL_NOT_FOUND');
+  });
+});
+
+describe('GET /api/bins/:code in each state', () => {
+  it('answers the bin, what the person may do and where its stock may move', async () => {
+    const a = await addBinAs(qm, blindRivetBin({ location: 'Shelf A2' }));
+    const b = await addBinAs(qm, blindRivetBin({ location: 'Shelf B1', initialQuantity: 0 }));
+    await addBinAs(qm, blindRivetBin({ location: 'Shelf B2', grip16: 3 }));
+    const s1 = await addBinAs(qm, screwBin());
+    const s2 = await addBinAs(qm, screwBin({ name: 'SCREW #8-32 × 1/2 PAN HEAD, STAINLESS', location: 'Drawer C5', initialQuantity: 40 }));
+    await addBinAs(qm, screwBin({ name: 'Screw #8-32 × 3/4 pan head, stainless', location: 'Drawer C6' }));
+
+    const fresh = await openBin(member, a.code);
+    expect(fresh).toMatchObject({ onHand: 500, lastCountedAt: null });
+    expect(fresh.forYou).toEqual({ actions: ['draw'], yourNetDrawn: 0, sameSpecBins: [] });
+    await expectSameAsInList('bins', fresh);
+
+    expect((await post(member, `/api/bins/${a.code}/draw`, { quantity: 30 })).status).toBe(201);
+    expect((await post(member, `/api/bins/${a.code}/return`, { quantity: 5 })).status).toBe(201);
+    expect((await openBin(member, a.code)).forYou).toEqual({ actions: ['draw', 'return_unused'], yourNetDrawn: 25, sameSpecBins: [] });
+    expect((await openBin(other, a.code)).forYou).toEqual({ actions: ['draw'], yourNetDrawn: 0, sameSpecBins: [] });
+
+    expect((await post(qm, `/api/bins/${a.code}/count`, { counted: 470 })).status).toBe(201);
+    const counted = await openBin(qm, a.code);
+    expect(counted).toMatchObject({ onHand: 470, lastCountedAt: t.clock.now.toISOString() });
+    expect(counted.forYou).toEqual({
+      actions: ['draw', 'receive', 'count', 'move', 'write_off'],
+      yourNetDrawn: 0,
+      sameSpecBins: [{ code: b.code, location: 'Shelf B1', onHand: 0 }],
+    });
+    await expectSameAsInList('bins', counted);
+
+    const empty = await openBin(qm, b.code);
+    expect(empty.forYou).toEqual({ actions: ['receive', 'count'], yourNetDrawn: 0, sameSpecBins: [{ code: a.code, location: 'Shelf A2', onHand: 470 }] });
+    expect((await openBin(member, b.code)).forYou).toEqual({ actions: [], yourNetDrawn: 0, sameSpecBins: [] });
+    await expectSameAsInList('bins', empty);
+
+    const screws = await openBin(qm, s1.code);
+    expect(screws.forYou.sameSpecBins).toEqual([{ code: s2.code, location: 'Drawer C5', onHand: 40 }]);
+    await expectSameAsInList('bins', screws);
+  });
+
+  it('answers 404 BIN_NOT_FOUND for a code on no bin', async () => {
+    const res = await member.agent.get('/api/bins/B-0404');
+    expect(res.status).toBe(404);
+    expect(res.body.error.code).toBe('BIN_NOT_FOUND');
+  });
+});

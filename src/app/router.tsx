@@ -5,6 +5,7 @@ import { BinDetailRoute, binDetailLoader } from './routes/app/bin-detail';
 import { BinsRoute, binsLoader } from './routes/app/bins';
 import { HomeRoute } from './routes/app/home';
 import { LoansRoute, loansLoader } from './routes/app/loans';
+import { QueueRoute } from './routes/app/queue';
 import { ScanRoute } from './routes/app/scan';
 import { ToolDetailRoute, toolDetailLoader } from './routes/app/tool-detail';
 import { ToolsRoute, toolsLoader } from './routes/app/tools';
@@ -32,6 +33,7 @@ export function createAppRouter(queryClient: QueryClient) {
       children: [
         { index: true, Component: HomeRoute },
         { path: 'scan', Component: ScanRoute },
+        { path: 'queue', Component: QueueRoute },
         { path: 'tools', loader: toolsLoader(queryClient), Component: ToolsRoute, ErrorBoundary: RouteError },
         {
           path: 'tools/new',

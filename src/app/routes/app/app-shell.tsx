@@ -1,10 +1,18 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { useSuspenseQuery } from '@tanstack/react-query';
+import { useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
+import { useCallback } from 'react';
 import { NavLink, Outlet, useNavigate, type LoaderFunctionArgs } from 'react-router';
 import { toast } from 'sonner';
 import { hasRole, ROLE_LABELS, type Role } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { useLogout } from '@/features/auth/api/logout';
+import { clearCatalogues } from '@/features/offline/api/catalogue';
+import { OfflineBanner } from '@/features/offline/components/offline-banner';
+import { OfflineSync } from '@/features/offline/components/offline-sync';
+import type { QueuedAction } from '@/features/offline/db';
+import { binKeys } from '@/features/stock/api/keys';
+import { stockMoneyKeys } from '@/features/stock-money/api/keys';
+import { toolKeys } from '@/features/tools/api/keys';
 import { messageOf } from '@/lib/errors';
 import { requireSignedIn } from './guards';
 
@@ -40,17 +48,38 @@ const NAV_LINKS: { to: string; label: string; role: Role; primary?: boolean }[] 
   { to: '/signoffs', label: 'Sign-offs', role: 'lead' },
 ];
 
+/** A queued action reached the server (or was refused): refresh what it changes. */
+function useRefreshAfterQueue() {
+  const queryClient = useQueryClient();
+  return useCallback(
+    (entry: QueuedAction) => {
+      if (entry.kind === 'check_out' || entry.kind === 'return') {
+        void queryClient.invalidateQueries({ queryKey: toolKeys.all });
+      } else {
+        void queryClient.invalidateQueries({ queryKey: binKeys.all });
+        void queryClient.invalidateQueries({ queryKey: stockMoneyKeys.all });
+      }
+    },
+    [queryClient],
+  );
+}
+
 export function AppShell() {
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const logout = useLogout();
   const navigate = useNavigate();
+  const refreshAfterQueue = useRefreshAfterQueue();
   if (!me) return null;
   const links = NAV_LINKS.filter((link) => hasRole(me.role, link.role));
   const more = links.filter((link) => !link.primary);
 
   const signOut = () =>
     logout.mutate(undefined, {
-      onSuccess: () => void navigate('/sign-in', { replace: true }),
+      onSuccess: () => {
+        // No copy of the chapter's catalogue stays on a phone nobody is signed in to.
+        void clearCatalogues();
+        void navigate('/sign-in', { replace: true });
+      },
       onError: (err) => toast.error(messageOf(err)),
     });
 
@@ -94,6 +123,8 @@ export function AppShell() {
           </button>
         </div>
       </header>
+      <OfflineBanner memberId={me.id} />
+      <OfflineSync memberId={me.id} onSettled={refreshAfterQueue} />
       <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-10 border-t border-rule bg-card sm:static sm:border-t-0 sm:border-b">
         <div className="mx-auto flex max-w-5xl sm:flex-wrap sm:gap-1 sm:px-4">
           {links.map((link) => (

@@ -1,0 +1,30 @@
+import { liveQuery } from 'dexie';
+import { useEffect, useState } from 'react';
+import { readCatalogue } from './api/catalogue';
+import { refusedOf, waitingOf } from './api/queue';
+import type { QueuedAction, StoredCatalogue } from './db';
+
+/** The answer of a query on the phone's store, kept current as the store changes; undefined while it loads. */
+function useLive<A, T>(query: (arg: A) => Promise<T>, arg: A): T | undefined {
+  const [state, setState] = useState<{ arg: A; value: T }>();
+  useEffect(() => {
+    const subscription = liveQuery(() => query(arg)).subscribe({
+      next: (value) => setState({ arg, value }),
+      error: () => setState(undefined),
+    });
+    return () => subscription.unsubscribe();
+  }, [query, arg]);
+  return state && state.arg === arg ? state.value : undefined;
+}
+
+export const useCatalogueCopy = (memberId: number): StoredCatalogue | undefined | null => {
+  const value = useLive(readCatalogueOrNull, memberId);
+  return value;
+};
+
+async function readCatalogueOrNull(memberId: number): Promise<StoredCatalogue | null> {
+  return (await readCatalogue(memberId)) ?? null;
+}
+
+export const useWaiting = (memberId: number): QueuedAction[] | undefined => useLive(waitingOf, memberId);
+export const useRefused = (memberId: number): QueuedAction[] | undefined => useLive(refusedOf, memberId);

@@ -17,14 +17,9 @@ function useLive<A, T>(query: (arg: A) => Promise<T>, arg: A): T | undefined {
   return state && state.arg === arg ? state.value : undefined;
 }
 
-export const useCatalogueCopy = (memberId: number): StoredCatalogue | undefined | null => {
-  const value = useLive(readCatalogueOrNull, memberId);
-  return value;
-};
+const catalogueOrNull = async (memberId: number): Promise<StoredCatalogue | null> => (await readCatalogue(memberId)) ?? null;
 
-async function readCatalogueOrNull(memberId: number): Promise<StoredCatalogue | null> {
-  return (await readCatalogue(memberId)) ?? null;
-}
-
+/** The member's copy; null when the phone has none, undefined while it is read. */
+export const useCatalogueCopy = (memberId: number): StoredCatalogue | null | undefined => useLive(catalogueOrNull, memberId);
 export const useWaiting = (memberId: number): QueuedAction[] | undefined => useLive(waitingOf, memberId);
 export const useRefused = (memberId: number): QueuedAction[] | undefined => useLive(refusedOf, memberId);

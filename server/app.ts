@@ -7,6 +7,11 @@ import type { AppConfig } from './config';
 import type { ServiceContext } from './context';
 import { authRouter } from './features/auth/auth.router';
 import { healthRouter } from './features/health/health.router';
+import { runQueuedAction } from './features/idempotency/queued-action';
+import { offlineRouter } from './features/offline/offline.router';
+import { openAssembliesOf } from './features/planning/assembly-catalogue';
+import { catalogueBins } from './features/stock/bin-catalogue';
+import { catalogueTools, signoffIdsOf } from './features/tools/tool-catalogue';
 import { invitationsRouter } from './features/invitations/invitations.router';
 import { labelsRouter } from './features/labels/labels.router';
 import { binsRouter } from './features/stock/bins.router';
@@ -92,7 +97,8 @@ export function createApp(config: AppConfig) {
   api.use('/mail', mailRouter(config.catchingMail));
   api.use('/reference', referenceRouter());
   api.use('/tools', toolPhotosRouter());
-  api.use('/tools', toolsRouter());
+  // Check out, return, draw and return unused may be replayed from a phone's offline queue.
+  api.use('/tools', toolsRouter({ runQueuedAction }));
   api.use('/photos', photosRouter());
   api.use('/loans', loansRouter());
   api.use('/overdue', overdueRouter());
@@ -102,7 +108,7 @@ export function createApp(config: AppConfig) {
   api.use('/settings', cribSettingsRouter());
   api.use('/labels', labelsRouter());
   api.use('/bins', binCsvRouter());
-  api.use('/bins', binsRouter());
+  api.use('/bins', binsRouter({ runQueuedAction }));
   api.use('/stock', stockMoneyRouter());
   api.use('/estimate', estimateRouter());
   api.use('/builds', buildsRouter());
@@ -112,6 +118,7 @@ export function createApp(config: AppConfig) {
   api.use('/forecast', forecastRouter());
   api.use('/alerts', alertsRouter());
   api.use('/waste', wasteRouter());
+  api.use('/offline', offlineRouter({ tools: catalogueTools, signoffIds: signoffIdsOf, bins: catalogueBins, assemblies: openAssembliesOf }));
   api.use(apiNotFound);
   app.use('/api', api);
 

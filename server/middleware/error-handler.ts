@@ -6,6 +6,9 @@ function envelope(code: string, message: string, issues?: ErrorEnvelope['error']
   return { error: issues ? { code, message, issues } : { code, message } };
 }
 
+/** The JSON a known error answers with (also stored to replay an idempotent refusal). */
+export const httpErrorBody = (err: HttpError): ErrorEnvelope => envelope(err.code, err.message, err.issues);
+
 /** Unknown /api paths answer 404 in the same envelope as every other failure. */
 export const apiNotFound: RequestHandler = (req, _res, next) => {
   next(new HttpError(404, 'NOT_FOUND', `There is no API at ${req.method} ${req.originalUrl}.`));
@@ -21,7 +24,7 @@ interface ParserError {
 /** The one error handler, registered last: known errors keep their status; anything else is a logged 500. */
 export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next) => {
   if (err instanceof HttpError) {
-    res.status(err.status).json(envelope(err.code, err.message, err.issues));
+    res.status(err.status).json(httpErrorBody(err));
     return;
   }
   const e = (err ?? {}) as ParserError;

@@ -287,7 +287,10 @@ export type BinForYou = z.infer<typeof binForYouSchema>;
 export const movementSchema = z.object({
   id: z.number(),
   binCode: z.string(),
+  /** When it happened (a draw or return queued offline: when the member did it). */
   at: z.string(),
+  /** When it reached the server; later than `at` for an entry queued offline. Entries before this was kept give `at`. */
+  arrivedAt: z.string().optional(),
   kind: z.enum(MOVEMENT_KINDS),
   /** Signed: receipts add, draws take away. */
   quantity: z.number(),

@@ -23,6 +23,25 @@ export const idempotencyKeyField = z
 /** Keys (and the answers they replay) are kept at least this long. */
 export const IDEMPOTENCY_KEEP_DAYS = 7;
 
+/** Set to "true" on an answer given again for a key already used (nothing was done the second time). */
+export const IDEMPOTENT_REPLAYED_HEADER = 'Idempotent-Replayed';
+/**
+ * The oldest performed-at the server records, in days before the request arrived: an older one is
+ * recorded as that floor (a queued action that old could also outlive its key).
+ */
+export const OLDEST_PERFORMED_AT_DAYS = IDEMPOTENCY_KEEP_DAYS;
+
+const isoHeader = (name: string) =>
+  z.iso.datetime({ offset: true, error: `${name} is a date and time in ISO 8601, like 2026-12-03T09:15:00.000Z.` }).optional();
+
+/** The headers a queued action carries; each is optional (an online scan sends none). */
+export const queuedActionHeadersSchema = z.object({
+  [IDEMPOTENCY_KEY_HEADER]: idempotencyKeyField.optional(),
+  [PERFORMED_AT_HEADER]: isoHeader(PERFORMED_AT_HEADER),
+  [CATALOGUE_AT_HEADER]: isoHeader(CATALOGUE_AT_HEADER),
+});
+export type QueuedActionHeaders = z.infer<typeof queuedActionHeadersSchema>;
+
 const person = z.object({ id: z.number(), name: z.string() });
 
 export const catalogueToolSchema = z.object({

@@ -77,7 +77,10 @@ export const stockMovements = sqliteTable(
     quantity: integer().notNull(),
     balanceAfter: integer().notNull(),
     unitCostE4: integer().notNull(),
+    /** When it happened: for a draw or return queued offline, the member's phone time (clamped). */
     at: integer({ mode: 'timestamp_ms' }).notNull(),
+    /** When the entry reached the server (null before this was kept); id order is arrival order. */
+    arrivedAt: integer({ mode: 'timestamp_ms' }),
     actorId: integer()
       .notNull()
       .references(() => users.id),

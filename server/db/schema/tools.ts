@@ -61,6 +61,7 @@ export const loans = sqliteTable(
     userId: integer()
       .notNull()
       .references(() => users.id),
+    /** When the member took it (a queued offline checkout: their phone's time, clamped); due counts from it. */
     checkedOutAt: integer({ mode: 'timestamp_ms' }).notNull(),
     dueAt: integer({ mode: 'timestamp_ms' }).notNull(),
     returnedAt: integer({ mode: 'timestamp_ms' }),
@@ -71,6 +72,9 @@ export const loans = sqliteTable(
     returnedCount: integer(),
     shortfall: integer(),
     returnPhotoId: integer(),
+    /** When the checkout and the return reached the server (later than the times above when queued offline; null before these were kept). */
+    checkoutArrivedAt: integer({ mode: 'timestamp_ms' }),
+    returnArrivedAt: integer({ mode: 'timestamp_ms' }),
   },
   (t) => [
     uniqueIndex('loans_one_open_per_tool').on(t.toolId).where(sql`${t.returnedAt} is null`),

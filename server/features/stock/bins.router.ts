@@ -17,6 +17,7 @@ import {
 import { idParam } from '@shared/schemas/fields';
 import { z } from 'zod';
 import { requireRole, requireUser } from '../../middleware/auth';
+import type { RunQueuedAction } from '../../lib/queued-action';
 import { parseInput } from '../../lib/validate';
 import { createBin, editBin, getBinForYou, listBinPage, restockList } from './bins.service';
 import { count, draw, ledgerFor, move, receive, returnUnused, reverse, writeOff } from './ledger.service';
@@ -25,8 +26,11 @@ import { readSlip, receiveSlipUpload, storeSlip } from './slips.service';
 const DAY_MS = 24 * 60 * 60 * 1000;
 const dayStart = (day: string) => new Date(`${day}T00:00:00Z`);
 
-/** /api/bins: the bins, their ledger, and the movements members and the quartermaster make by scan. */
-export function binsRouter() {
+/**
+ * /api/bins: the bins, their ledger, and the movements members and the quartermaster make by scan.
+ * `runQueuedAction` (from the app) lets a phone replay a draw or return queued offline.
+ */
+export function binsRouter({ runQueuedAction }: { runQueuedAction: RunQueuedAction }) {
   const router = Router();
   const quartermaster = requireRole('quartermaster');
   const code = (params: unknown) => parseInput(binCodeParams, params, 'path').code;
@@ -69,13 +73,16 @@ export function binsRouter() {
     res.json({ data: ledgerFor(req.ctx, code(req.params), q.from ? dayStart(q.from) : undefined, to, q.limit) });
   });
 
-  router.post('/:code/draw', (req, res) => {
-    res.status(201).json(draw(req.ctx, requireUser(req), code(req.params), parseInput(drawBodySchema, req.body)));
-  });
+  router.post('/:code/draw', (req, res) =>
+    runQueuedAction(req, res, (at) => ({ status: 201, body: draw(req.ctx, requireUser(req), code(req.params), parseInput(drawBodySchema, req.body), at) })),
+  );
 
-  router.post('/:code/return', (req, res) => {
-    res.status(201).json(returnUnused(req.ctx, requireUser(req), code(req.params), parseInput(returnUnusedBodySchema, req.body)));
-  });
+  router.post('/:code/return', (req, res) =>
+    runQueuedAction(req, res, (at) => ({
+      status: 201,
+      body: returnUnused(req.ctx, requireUser(req), code(req.params), parseInput(returnUnusedBodySchema, req.body), at),
+    })),
+  );
 
   router.post('/:code/receive', quartermaster, (req, res) => {
     res.status(201).json(receive(req.ctx, requireUser(req), code(req.params), parseInput(receiveBodySchema, req.body)));

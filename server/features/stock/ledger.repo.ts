@@ -48,17 +48,31 @@ export function ledgerSum(db: Executor, binId: number): number {
   return db.select({ n: sql<number>`coalesce(sum(${stockMovements.quantity}), 0)` }).from(stockMovements).where(eq(stockMovements.binId, binId)).get()?.n ?? 0;
 }
 
+/** A member's entries on a bin (draws, returns and reversals of either) summed: what they took out. */
+const netDrawn = sql<number>`coalesce(sum(-${stockMovements.quantity}), 0)`;
+
 /**
  * What a member has drawn from a bin, less what they returned and less reversals of either:
  * the most they may return to it.
  */
 export function netDrawnBy(db: Executor, binId: number, memberId: number): number {
   const row = db
-    .select({ n: sql<number>`coalesce(sum(-${stockMovements.quantity}), 0)` })
+    .select({ n: netDrawn })
     .from(stockMovements)
     .where(and(eq(stockMovements.binId, binId), eq(stockMovements.memberId, memberId)))
     .get();
   return Math.max(0, row?.n ?? 0);
+}
+
+/** netDrawnBy for every bin the member has taken from, in one query (bins with nothing to return are left out). */
+export function netDrawnPerBin(db: Executor, memberId: number): Map<number, number> {
+  const rows = db
+    .select({ binId: stockMovements.binId, n: netDrawn })
+    .from(stockMovements)
+    .where(eq(stockMovements.memberId, memberId))
+    .groupBy(stockMovements.binId)
+    .all();
+  return new Map(rows.filter((r) => r.n > 0).map((r) => [r.binId, r.n]));
 }
 
 const actor = alias(users, 'actor');

@@ -24,7 +24,9 @@ interface Entry {
   kind: MovementKind;
   quantity: number;
   actor: UserRow;
+  /** When it happened; when it reached the server, if later (a draw or return queued offline). */
   at: Date;
+  arrivedAt?: Date;
   unitCostE4?: number;
   memberId?: number | null;
   assemblyId?: number | null;
@@ -48,6 +50,7 @@ function post(db: Executor, bin: BinRow, e: Entry, refusal: string): MovementRow
     balanceAfter,
     unitCostE4: e.unitCostE4 ?? bin.unitCostE4,
     at: e.at,
+    arrivedAt: e.arrivedAt ?? e.at,
     actorId: e.actor.id,
     memberId: e.memberId ?? null,
     assemblyId: e.assemblyId ?? null,
@@ -56,7 +59,7 @@ function post(db: Executor, bin: BinRow, e: Entry, refusal: string): MovementRow
     pairedId: e.pairedId ?? null,
     slipId: e.slipId ?? null,
   });
-  setOnHand(db, bin.id, balanceAfter, e.at);
+  setOnHand(db, bin.id, balanceAfter, e.arrivedAt ?? e.at);
   bin.onHand = balanceAfter;
   return row;
 }
@@ -72,6 +75,7 @@ export function movementDto(r: LedgerRow): Movement {
     id: m.id,
     binCode: r.binCode,
     at: m.at.toISOString(),
+    arrivedAt: (m.arrivedAt ?? m.at).toISOString(),
     kind: m.kind,
     quantity: m.quantity,
     balanceAfter: m.balanceAfter,
@@ -102,18 +106,28 @@ function checkOwnAssembly(db: Executor, actor: UserRow, assemblyId: number | nul
   ]);
 }
 
-/** A member takes stock for their work; it goes on their tab at today's unit cost. */
-export function draw(ctx: ServiceContext, actor: UserRow, code: string, body: DrawBody): Movement {
+/** When a member's draw or return happened (`performedAt`, queued offline) and when it arrived. */
+const memberTimes = (ctx: ServiceContext, performedAt?: Date) => {
+  const arrivedAt = ctx.now();
+  return { at: performedAt ?? arrivedAt, arrivedAt };
+};
+
+/**
+ * A member takes stock for their work; it goes on their tab at today's unit cost. A draw queued
+ * offline is dated when it was done; the bin's balance moves when it arrives.
+ */
+export function draw(ctx: ServiceContext, actor: UserRow, code: string, body: DrawBody, performedAt?: Date): Movement {
   const id = inTransaction(ctx, () => {
     const bin = binOrThrow(ctx.db, code);
     checkOwnAssembly(ctx.db, actor, body.assemblyId);
-    return post(ctx.db, bin, { kind: 'draw', quantity: -body.quantity, actor, at: ctx.now(), memberId: actor.id, assemblyId: body.assemblyId, note: body.note }, 'draw').id;
+    const times = memberTimes(ctx, performedAt);
+    return post(ctx.db, bin, { kind: 'draw', quantity: -body.quantity, actor, ...times, memberId: actor.id, assemblyId: body.assemblyId, note: body.note }, 'draw').id;
   });
   return loadMovement(ctx, id);
 }
 
 /** Unused stock goes back in the bin and off the member's tab; at most what they drew from it. */
-export function returnUnused(ctx: ServiceContext, actor: UserRow, code: string, body: ReturnUnusedBody): Movement {
+export function returnUnused(ctx: ServiceContext, actor: UserRow, code: string, body: ReturnUnusedBody, performedAt?: Date): Movement {
   const id = inTransaction(ctx, () => {
     const bin = binOrThrow(ctx.db, code);
     checkOwnAssembly(ctx.db, actor, body.assemblyId);
@@ -121,7 +135,8 @@ export function returnUnused(ctx: ServiceContext, actor: UserRow, code: string, 
     if (body.quantity > drawn) {
       throw new HttpError(409, 'RETURN_EXCEEDS_DRAWN', `You can return at most ${drawn} to ${bin.code}: that is what you drew from it and have not returned.`);
     }
-    return post(ctx.db, bin, { kind: 'return_unused', quantity: body.quantity, actor, at: ctx.now(), memberId: actor.id, assemblyId: body.assemblyId, note: body.note }, 'return').id;
+    const times = memberTimes(ctx, performedAt);
+    return post(ctx.db, bin, { kind: 'return_unused', quantity: body.quantity, actor, ...times, memberId: actor.id, assemblyId: body.assemblyId, note: body.note }, 'return').id;
   });
   return loadMovement(ctx, id);
 }

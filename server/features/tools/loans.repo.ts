@@ -40,7 +40,7 @@ function prepareLoanStatements(db: Database) {
       .prepare(),
     insertLoan: db
       .insert(loans)
-      .values({ toolId: p('toolId'), userId: p('userId'), checkedOutAt: p('checkedOutAt'), dueAt: p('dueAt') })
+      .values({ toolId: p('toolId'), userId: p('userId'), checkedOutAt: p('checkedOutAt'), dueAt: p('dueAt'), checkoutArrivedAt: p('arrivedAt') })
       .returning({ id: loans.id })
       .prepare(),
     setToolStatus: db
@@ -57,6 +57,7 @@ function prepareLoanStatements(db: Database) {
       .update(loans)
       .set({
         returnedAt: sql`${p('returnedAt')}`,
+        returnArrivedAt: sql`${p('arrivedAt')}`,
         returnedById: sql`${p('returnedById')}`,
         returnCondition: sql`${p('condition')}`,
         returnNote: sql`${p('note')}`,

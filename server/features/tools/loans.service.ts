@@ -23,6 +23,8 @@ export interface LoanResult {
   holder: { id: number; name: string };
   checkedOutAt: string;
   dueAt: string;
+  /** When the checkout reached the server (checkedOutAt is when it was done). */
+  recordedAt: string;
   accessories: string[];
 }
 
@@ -43,11 +45,13 @@ function dueDate(tool: ToolRow, body: CheckoutBody, now: Date): Date {
 /**
  * Checks a tool out to the signed-in person. Only an available tool, or one held for this person,
  * can go out; a required sign-off must be on record. The partial unique index on open loans is
- * the last word when two phones race.
+ * the last word when two phones race. `performedAt` is when the member took it (earlier than now
+ * for a checkout queued offline): the loan and its due date count from it.
  */
-export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body: CheckoutBody): LoanResult {
+export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body: CheckoutBody, performedAt?: Date): LoanResult {
   const s = loanStatements(ctx.db);
   const now = ctx.now();
+  const at = performedAt ?? now;
   return ctx.db.$client.transaction(() => {
     const tool = toolOrThrow(ctx, code);
     if (tool.status === 'on_loan') {
@@ -75,10 +79,10 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
         `${tool.code} needs the "${name}" sign-off, which you do not have yet. ${signOffAdvice(ctx.db)}`,
       );
     }
-    const due = dueDate(tool, body, now);
+    const due = dueDate(tool, body, at);
     let loanId: number;
     try {
-      loanId = s.insertLoan.get({ toolId: tool.id, userId: user.id, checkedOutAt: now, dueAt: due }).id;
+      loanId = s.insertLoan.get({ toolId: tool.id, userId: user.id, checkedOutAt: at, dueAt: due, arrivedAt: now }).id;
     } catch (err) {
       if (isUniqueViolation(err)) {
         throw new HttpError(409, 'TOOL_ON_LOAN', `${tool.code} was just checked out by someone else.`);
@@ -86,11 +90,11 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
       throw err;
     }
     s.setToolStatus.run({ toolId: tool.id, status: 'on_loan', statusNote: null, updatedAt: now.getTime() });
-    if (holdId !== undefined) s.fulfilHold.run({ holdId, at: now.getTime() });
+    if (holdId !== undefined) s.fulfilHold.run({ holdId, at: at.getTime() });
     s.insertEvent.run({
       toolId: tool.id,
       actorId: user.id,
-      at: now,
+      at,
       action: 'checked_out',
       fromStatus: tool.status,
       toStatus: 'on_loan',
@@ -101,8 +105,9 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
       toolId: tool.id,
       code: tool.code,
       holder: { id: user.id, name: user.name },
-      checkedOutAt: now.toISOString(),
+      checkedOutAt: at.toISOString(),
       dueAt: due.toISOString(),
+      recordedAt: now.toISOString(),
       accessories: JSON.parse(tool.accessories) as string[],
     };
   })();
@@ -114,13 +119,33 @@ export interface ReturnResult {
   status: ToolRow['status'];
   shortfall: number | null;
   offeredTo: { id: number; name: string } | null;
+  /** When it came back (a return queued offline: when it was done, never before the checkout). */
+  returnedAt: string;
+  /** When the return reached the server. */
+  recordedAt: string;
 }
 
 /** Returns a tool: the holder, or a quartermaster or lead on their behalf. */
 export async function returnTool(ctx: ServiceContext, user: UserRow, code: string, body: ReturnBody): Promise<ReturnResult> {
+  const { result, notify } = returnToolNow(ctx, user, code, body);
+  await notify?.();
+  return result;
+}
+
+/**
+ * The return's transaction, with the hold offer's e-mail to send once it has committed.
+ * `performedAt` (a return queued offline) is kept, but never before the loan began.
+ */
+export function returnToolNow(
+  ctx: ServiceContext,
+  user: UserRow,
+  code: string,
+  body: ReturnBody,
+  performedAt?: Date,
+): { result: ReturnResult; notify?: () => Promise<void> } {
   const s = loanStatements(ctx.db);
   const now = ctx.now();
-  const { result, notify } = ctx.db.$client.transaction(() => {
+  return ctx.db.$client.transaction(() => {
     const tool = toolOrThrow(ctx, code);
     const loan = s.openLoan.get({ toolId: tool.id });
     if (!loan) throw new HttpError(409, 'TOOL_NOT_ON_LOAN', `${tool.code} is not on loan, so there is nothing to return.`);
@@ -142,9 +167,11 @@ export async function returnTool(ctx: ServiceContext, user: UserRow, code: strin
       shortfall = tool.trayCapacity !== null ? tool.trayCapacity - body.returnedCount : null;
     }
     if (body.photoId !== undefined) checkReturnPhoto(ctx, tool, body.photoId);
+    const at = performedAt && performedAt < loan.checkedOutAt ? loan.checkedOutAt : (performedAt ?? now);
     s.closeLoan.run({
       loanId: loan.id,
-      returnedAt: now.getTime(),
+      returnedAt: at.getTime(),
+      arrivedAt: now.getTime(),
       returnedById: user.id,
       condition: body.condition,
       note: body.note ?? null,
@@ -172,9 +199,8 @@ export async function returnTool(ctx: ServiceContext, user: UserRow, code: strin
       notify = offer?.notify;
       if (!offer) s.setToolStatus.run({ toolId: tool.id, status, statusNote: null, updatedAt: now.getTime() });
     }
-    s.insertEvent.run({ toolId: tool.id, actorId: user.id, at: now, action: 'returned', fromStatus: 'on_loan', toStatus: status, detail });
-    return { result: { loanId: loan.id, code: tool.code, status, shortfall, offeredTo }, notify };
+    s.insertEvent.run({ toolId: tool.id, actorId: user.id, at, action: 'returned', fromStatus: 'on_loan', toStatus: status, detail });
+    const result = { loanId: loan.id, code: tool.code, status, shortfall, offeredTo, returnedAt: at.toISOString(), recordedAt: now.toISOString() };
+    return { result, notify };
   })();
-  await notify?.();
-  return result;
 }

@@ -10,9 +10,10 @@ import {
   updateToolBodySchema,
 } from '@shared/schemas/tools';
 import { requireRole, requireUser } from '../../middleware/auth';
+import type { RunQueuedAction } from '../../lib/queued-action';
 import { parseInput } from '../../lib/validate';
 import { cancelHold, placeHold } from './holds.service';
-import { checkOut, returnTool } from './loans.service';
+import { checkOut, returnToolNow } from './loans.service';
 import { listToolEvents } from './tool-events.repo';
 import { changeToolStatus, type StatusCommand } from './tool-status.service';
 import { createTool, editTool, getToolForYou, getToolRow, listToolPage } from './tools.service';
@@ -26,7 +27,8 @@ const STATUS_PATHS: Record<string, StatusCommand> = {
 };
 const backInServiceBody = statusChangeBodySchema.extend({ serviced: z.boolean().default(false) });
 
-export function toolsRouter() {
+/** `runQueuedAction` (from the app) lets a phone replay a checkout or return queued offline. */
+export function toolsRouter({ runQueuedAction }: { runQueuedAction: RunQueuedAction }) {
   const router = Router();
   const signedIn = requireRole('member');
   const quartermaster = requireRole('quartermaster');
@@ -53,15 +55,19 @@ export function toolsRouter() {
     res.json({ data: listToolEvents(req.ctx.db, getToolRow(req.ctx, code(req.params)).id) });
   });
 
-  router.post('/:code/checkout', (req, res) => {
-    const toolCode = code(req.params);
-    res.status(201).json(checkOut(req.ctx, requireUser(req), toolCode, parseInput(checkoutBodySchema, req.body)));
-  });
+  router.post('/:code/checkout', (req, res) =>
+    runQueuedAction(req, res, (at) => ({
+      status: 201,
+      body: checkOut(req.ctx, requireUser(req), code(req.params), parseInput(checkoutBodySchema, req.body), at),
+    })),
+  );
 
-  router.post('/:code/return', async (req, res) => {
-    const toolCode = code(req.params);
-    res.json(await returnTool(req.ctx, requireUser(req), toolCode, parseInput(returnBodySchema, req.body)));
-  });
+  router.post('/:code/return', (req, res) =>
+    runQueuedAction(req, res, (at) => {
+      const { result, notify } = returnToolNow(req.ctx, requireUser(req), code(req.params), parseInput(returnBodySchema, req.body), at);
+      return { status: 200, body: result, afterCommit: notify };
+    }),
+  );
 
   router.post('/:code/holds', (req, res) => {
     res.status(201).json(placeHold(req.ctx, requireUser(req), code(req.params)));

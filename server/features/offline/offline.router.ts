@@ -1,0 +1,16 @@
+import { Router } from 'express';
+import { requireRole, requireUser } from '../../middleware/auth';
+import { takeCatalogue, type CatalogueSources } from './offline.service';
+
+/** /api/offline: what a phone keeps so a scan still works when the hangar Wi-Fi drops out. */
+export function offlineRouter(sources: CatalogueSources) {
+  const router = Router();
+  router.use(requireRole('member'));
+
+  router.get('/catalogue', (req, res) => {
+    res.set('Cache-Control', 'no-store');
+    res.json(takeCatalogue(req.ctx, requireUser(req), sources));
+  });
+
+  return router;
+}

@@ -32,3 +32,12 @@ export async function forgetOtherCatalogues(memberId: number): Promise<void> {
 export async function clearCatalogues(): Promise<void> {
   await offlineDb.catalogues.clear();
 }
+
+/**
+ * Who last signed in on this phone and has not signed out: the owner of the one copy kept. Lets
+ * the installed app open with no network; the server still checks the session when actions replay.
+ */
+export async function offlineMember(): Promise<Catalogue['you'] | undefined> {
+  const copies = await offlineDb.catalogues.toArray();
+  return copies.length === 1 ? copies[0]?.catalogue.you : undefined;
+}

@@ -10,6 +10,8 @@ import { useWaiting } from '../hooks';
 const REFRESH_EVERY_MS = 5 * 60_000;
 const RETRY_FIRST_MS = 5_000;
 const RETRY_MOST_MS = 2 * 60_000;
+/** How often to ask again while the network is up but the server did not answer. */
+const PROBE_EVERY_MS = 15_000;
 
 interface Sync {
   sendWaiting: () => Promise<void>;
@@ -20,6 +22,7 @@ interface Sync {
  * Keeps the signed-in member's offline copy fresh and sends their queue when the connection is
  * back: at start, on the `online` event, when a request gets an answer after none did, after a
  * successful change, every few minutes while the page is visible, and with backoff after a failure.
+ * While the network is up but the server is silent, it asks again every few seconds.
  * `onSettled` hears of each entry sent or refused, to refresh what it changed.
  */
 export function OfflineSync({ memberId, onSettled }: { memberId: number; onSettled: (entry: QueuedAction) => void }) {
@@ -75,6 +78,10 @@ export function OfflineSync({ memberId, onSettled }: { memberId: number; onSettl
     const every = setInterval(() => {
       if (document.visibilityState === 'visible') void refresh();
     }, REFRESH_EVERY_MS);
+    // The Wi-Fi is up but Gripline did not answer: ask again now and then, so the pages come back.
+    const probe = setInterval(() => {
+      if (navigator.onLine && isOffline()) void refresh();
+    }, PROBE_EVERY_MS);
     // A change made online (a check out, a draw, a new tool) makes the copy stale: take a new one.
     const stopWatchingChanges = queryClient.getMutationCache().subscribe((event) => {
       if (event.type === 'updated' && event.action.type === 'success') {
@@ -89,6 +96,7 @@ export function OfflineSync({ memberId, onSettled }: { memberId: number; onSettl
       clearTimeout(retryTimer);
       clearTimeout(refreshTimer);
       clearInterval(every);
+      clearInterval(probe);
       stopListening();
       stopWatchingChanges();
       window.removeEventListener('online', onOnline);

@@ -7,6 +7,7 @@ import { migrateDatabase, openDatabase } from './db/client';
 import type { Env } from './env';
 import { startPlanningScheduler } from './features/planning/planning-scheduler';
 import { startCribScheduler } from './features/tools/crib-scheduler';
+import { sweepIdempotencyKeys } from './features/idempotency/idempotency.service';
 import { createLogger } from './lib/logger';
 import { startMailCatcher, type MailCatcher } from './mail/mail-catcher';
 import { createSmtpMailer } from './mail/mailer';
@@ -54,7 +55,7 @@ export async function startGripline(env: Env): Promise<RunningGripline> {
   });
   server.on('request', app);
   const jobContext = { db, mailer, publicUrl: env.PUBLIC_URL ?? url, now: () => new Date() };
-  const scheduler = startCribScheduler(jobContext, logger);
+  const scheduler = startCribScheduler(jobContext, logger, [{ name: 'sweep-idempotency-keys', run: () => sweepIdempotencyKeys(jobContext) }]);
   const planningScheduler = startPlanningScheduler(jobContext, logger);
   logger.info({ url, mail: catcher ? 'caught locally' : 'SMTP_URL' }, 'Gripline is listening');
 

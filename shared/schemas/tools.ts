@@ -169,6 +169,12 @@ export const loanSchema = z.object({
   returnedCount: z.number().nullable(),
   shortfall: z.number().nullable(),
   returnPhotoId: z.number().nullable(),
+  /**
+   * When the checkout and the return reached the server: later than checkedOutAt / returnedAt
+   * when they were queued offline; null when not kept (older loans, or not returned yet).
+   */
+  checkoutRecordedAt: z.string().nullable().optional(),
+  returnRecordedAt: z.string().nullable().optional(),
 });
 export type Loan = z.infer<typeof loanSchema>;
 

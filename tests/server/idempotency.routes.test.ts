@@ -94,6 +94,7 @@ describe('Idempotency-Key on check out, return, draw and return unused', () => {
     const elsewhere = await send(member, `/api/bins/${other.code}/draw`, { quantity: 40 }, { 'Idempotency-Key': 'draw-key-0002' });
     expect(elsewhere.status).toBe(422);
     expect(elsewhere.body.error.code).toBe('IDEMPOTENCY_KEY_REUSED');
+    expect(elsewhere.body.error.message).toContain(`POST /api/bins/${bin.code}/draw`);
     expect(await onHand(bin.code)).toBe(460);
     expect(await onHand(other.code)).toBe(500);
   });
@@ -133,6 +134,21 @@ describe('Idempotency-Key on check out, return, draw and return unused', () => {
     expect(await onHand(bin.code)).toBe(110);
   });
 
+  it('stores nothing for an unexpected failure, so the same key runs the action when sent again', async () => {
+    const tool = await addToolAs(qm, { name: 'Rivet puller, long reach', category: 'other' });
+    // The audit trail refusing a row stands in for a fault the service does not expect.
+    t.db.$client.exec("create trigger fail_event before insert on tool_events begin select raise(abort, 'disk trouble'); end");
+    const failed = await send(member, `/api/tools/${tool.code}/checkout`, {}, { 'Idempotency-Key': 'after-a-fault-01' });
+    expect(failed.status).toBe(500);
+    expect(failed.body.error.code).toBe('INTERNAL_ERROR');
+    expect(await openLoans()).toHaveLength(0);
+    t.db.$client.exec('drop trigger fail_event');
+    const retried = await send(member, `/api/tools/${tool.code}/checkout`, {}, { 'Idempotency-Key': 'after-a-fault-01' });
+    expect(retried.status).toBe(201);
+    expect(retried.headers['idempotent-replayed']).toBeUndefined();
+    expect(await openLoans()).toHaveLength(1);
+  });
+
   it('answers 400 INVALID_HEADER naming a malformed key or time, and does nothing', async () => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
     const shortKey = await send(member, `/api/bins/${bin.code}/draw`, { quantity: 1 }, { 'Idempotency-Key': 'short' });
@@ -159,8 +175,8 @@ describe('X-Performed-At and X-Catalogue-At', () => {
     expect(res.body.checkedOutAt).toBe(iso(performed));
     expect(res.body.dueAt).toBe(iso(performed + 3 * DAY));
     expect(res.body.recordedAt).toBe(iso(now()));
-    const mine = (await member.agent.get('/api/loans/mine')).body.data as { checkedOutAt: string }[];
-    expect(mine[0]!.checkedOutAt).toBe(iso(performed));
+    const mine = (await member.agent.get('/api/loans/mine')).body.data as { checkedOutAt: string; checkoutRecordedAt: string }[];
+    expect(mine[0]).toMatchObject({ checkedOutAt: iso(performed), dueAt: iso(performed + 3 * DAY), checkoutRecordedAt: iso(now()) });
   });
 
   it('records a time in the future as the arrival time', async () => {
@@ -192,6 +208,10 @@ describe('X-Performed-At and X-Catalogue-At', () => {
     expect(back.status).toBe(200);
     expect(back.body.returnedAt).toBe(out.body.checkedOutAt);
     expect(back.body.recordedAt).toBe(iso(now()));
+    const mine = (await member.agent.get('/api/loans/mine')).body.data as unknown[];
+    expect(mine[0]).toMatchObject({ returnedAt: out.body.checkedOutAt, returnRecordedAt: iso(now()) });
+    const events = (await member.agent.get(`/api/tools/${tool.code}/events`)).body.data as { action: string; at: string }[];
+    expect(events.find((e) => e.action === 'returned')?.at).toBe(out.body.checkedOutAt);
   });
 });
 

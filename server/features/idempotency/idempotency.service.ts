@@ -47,11 +47,8 @@ export function runOnce(ctx: ServiceContext, request: KeyedRequest, action: () =
       const found = findKey(ctx.db, request.userId, request.key);
       if (found) {
         if (found.method !== request.method || found.path !== request.path || found.bodyHash !== hash) {
-          throw new HttpError(
-            422,
-            'IDEMPOTENCY_KEY_REUSED',
-            `This Idempotency-Key was already used for ${found.method} ${found.path} with ${found.path === request.path ? 'a different body' : 'that path'}. Make a new key for a new action.`,
-          );
+          const what = found.method === request.method && found.path === request.path ? 'this action with a different body' : `${found.method} ${found.path}`;
+          throw new HttpError(422, 'IDEMPOTENCY_KEY_REUSED', `This Idempotency-Key was already used for ${what}. Make a new key for each action.`);
         }
         return { status: found.status, body: JSON.parse(found.answer) as unknown, replayed: true };
       }

@@ -8,12 +8,20 @@ import { runOverdueReminders } from './reminder-job';
 const OVERDUE_SCHEDULE = '0 7 * * *';
 /** Every 5 minutes, so a held tool goes to the next person soon after its offer runs out. */
 const HOLD_OFFER_SCHEDULE = '*/5 * * * *';
+/** Daily at 03:30 server local time, when nobody is at the bench. */
+const HOUSEKEEPING_SCHEDULE = '30 3 * * *';
+
+/** A nightly clean-up another feature owns (e.g. old idempotency keys); the app hands it in. */
+export interface HousekeepingJob {
+  name: string;
+  run: () => unknown;
+}
 
 /**
  * Starts the tool crib's timed jobs. A failing run is logged and the schedule goes on; `protect`
  * skips a tick while the previous run of the same job is still going.
  */
-export function startCribScheduler(ctx: ServiceContext, logger: Logger): { stop(): void } {
+export function startCribScheduler(ctx: ServiceContext, logger: Logger, housekeeping: readonly HousekeepingJob[] = []): { stop(): void } {
   const guarded = (name: string, run: () => Promise<unknown>) => async () => {
     try {
       const result = await run();
@@ -26,6 +34,7 @@ export function startCribScheduler(ctx: ServiceContext, logger: Logger): { stop(
   const jobs = [
     new Cron(OVERDUE_SCHEDULE, { name: 'overdue-reminders', protect: true, unref: true }, guarded('overdue-reminders', () => runOverdueReminders(ctx))),
     new Cron(HOLD_OFFER_SCHEDULE, { name: 'expire-hold-offers', protect: true, unref: true }, guarded('expire-hold-offers', () => expireHoldOffers(ctx))),
+    ...housekeeping.map((job) => new Cron(HOUSEKEEPING_SCHEDULE, { name: job.name, protect: true, unref: true }, guarded(job.name, () => Promise.resolve().then(job.run)))),
   ];
   return {
     stop() {

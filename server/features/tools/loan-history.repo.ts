@@ -30,5 +30,7 @@ export function listLoans(db: Executor, filter: { userId?: number; open?: boolea
       returnedCount: loan.returnedCount,
       shortfall: loan.shortfall,
       returnPhotoId: loan.returnPhotoId,
+      checkoutRecordedAt: loan.checkoutArrivedAt?.toISOString() ?? null,
+      returnRecordedAt: loan.returnArrivedAt?.toISOString() ?? null,
     }));
 }

@@ -111,11 +111,13 @@ describe('replaying the queue', () => {
     expect(await waitingOf(MARCO)).toEqual([]);
   });
 
-  it('keeps an action the server could not handle (5xx) or a lapsed session (401) waiting', async () => {
+  it('keeps an action waiting on a server hiccup (5xx), a lapsed session (401) or its key still being handled', async () => {
     await enqueue(checkout('T-0042'));
     server([{ status: 503, body: {} }]);
     expect((await replayQueue(MARCO)).stopped).toBe(true);
     server([refusal(401, 'SIGNED_OUT', 'Sign in first.')]);
+    expect((await replayQueue(MARCO)).stopped).toBe(true);
+    server([refusal(409, 'IDEMPOTENCY_KEY_IN_USE', 'This request is being handled. Retry shortly.')]);
     expect((await replayQueue(MARCO)).stopped).toBe(true);
     expect((await waitingOf(MARCO)).map((a) => a.code)).toEqual(['T-0042']);
     expect(await refusedOf(MARCO)).toEqual([]);

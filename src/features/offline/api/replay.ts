@@ -11,15 +11,17 @@ export interface ReplayResult {
   stopped: boolean;
 }
 
+/** Answers that say "not now" rather than "no": a lapsed session, a stale token, the same key still being handled. */
+const TRY_AGAIN_STATUSES = [401, 408, 429];
+const TRY_AGAIN_CODES = ['CSRF_TOKEN_INVALID', 'IDEMPOTENCY_KEY_IN_USE'];
+
 /**
  * A refusal is the server's final word on that action: it goes to the Not sent list. No answer, a
- * server hiccup, a lapsed session or "slow down" says nothing about the action: keep it and stop,
- * so nothing after it goes ahead of it.
+ * server hiccup or a "not now" says nothing about the action: keep it and stop, so nothing after it
+ * goes ahead of it.
  */
 function isRefusal(err: unknown): err is ApiError {
-  return (
-    err instanceof ApiError && err.status >= 400 && err.status < 500 && ![401, 408, 429].includes(err.status) && err.code !== 'CSRF_TOKEN_INVALID'
-  );
+  return err instanceof ApiError && err.status >= 400 && err.status < 500 && !TRY_AGAIN_STATUSES.includes(err.status) && !TRY_AGAIN_CODES.includes(err.code);
 }
 
 /** The server applies an action to whoever the session belongs to: send only when that is this member. */

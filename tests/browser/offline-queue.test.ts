@@ -64,7 +64,7 @@ afterAll(async () => {
 });
 
 describe('a member scanning with no connection', () => {
-  it('checks a tool out and draws from a bin from the offline copy, and both reach the server once when the connection is back', async () => {
+  it('checks a tool out and draws from a bin from the offline copy, and both reach the server exactly once when the connection is back', async () => {
     const [tool] = tools;
     const loansBefore = loansOf(tool!.code, member.id);
     const drawsBefore = drawsOf(bin.code, member.id);
@@ -86,9 +86,25 @@ describe('a member scanning with no connection', () => {
     await page.screenshot({ path: 'test-results/offline-queue-waiting-phone.png', fullPage: true });
     expect(loansOf(tool!.code, member.id)).toEqual(loansBefore);
 
+    // The first check out reaches the server but its answer is lost on the way back: the phone
+    // keeps it and sends it again later with the same key, and the server applies it once.
+    const checkoutKeys: string[] = [];
+    let firstAnswer = 0;
+    await page.route(`**/api/tools/${tool!.code}/checkout`, async (route) => {
+      checkoutKeys.push(route.request().headers()['idempotency-key'] ?? '');
+      if (checkoutKeys.length === 1) {
+        firstAnswer = (await route.fetch()).status();
+        await route.abort('connectionreset');
+      } else {
+        await route.continue();
+      }
+    });
     await page.context().setOffline(false);
-    await page.getByRole('link', { name: /waiting to send/ }).waitFor({ state: 'detached', timeout: 20_000 });
+    await page.getByRole('link', { name: /waiting to send/ }).waitFor({ state: 'detached', timeout: 30_000 });
 
+    expect(firstAnswer).toBe(201);
+    expect(checkoutKeys).toHaveLength(2);
+    expect(checkoutKeys[1]).toBe(checkoutKeys[0]);
     expect(loansOf(tool!.code, member.id)).toEqual({ all: loansBefore.all + 1, open: 1 });
     expect(drawsOf(bin.code, member.id)).toBe(drawsBefore + 1);
     expect(onHandOf(bin.code)).toBe(bin.onHand - 5);

@@ -23,3 +23,13 @@ const catalogueOrNull = async (memberId: number): Promise<StoredCatalogue | null
 export const useCatalogueCopy = (memberId: number): StoredCatalogue | null | undefined => useLive(catalogueOrNull, memberId);
 export const useWaiting = (memberId: number): QueuedAction[] | undefined => useLive(waitingOf, memberId);
 export const useRefused = (memberId: number): QueuedAction[] | undefined => useLive(refusedOf, memberId);
+
+/** The time now, moving on every half minute, so "10 min ago" stays true while the page is open. */
+export function useNow(): Date {
+  const [now, setNow] = useState(() => new Date());
+  useEffect(() => {
+    const timer = setInterval(() => setNow(new Date()), 30_000);
+    return () => clearInterval(timer);
+  }, []);
+  return now;
+}

@@ -1,7 +1,7 @@
 import { Link } from 'react-router';
 import { formatTimeAgo } from '@/lib/format';
 import { useOffline } from '../connection';
-import { useCatalogueCopy, useRefused, useWaiting } from '../hooks';
+import { useCatalogueCopy, useNow, useRefused, useWaiting } from '../hooks';
 
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
@@ -14,6 +14,7 @@ export function OfflineBanner({ memberId }: { memberId: number }) {
   const copy = useCatalogueCopy(memberId);
   const waiting = useWaiting(memberId)?.length ?? 0;
   const refused = useRefused(memberId)?.length ?? 0;
+  const now = useNow();
   const shown = offline || waiting > 0 || refused > 0;
   return (
     <div role="status" className={shown ? 'border-b border-brass bg-warn-soft text-ink' : 'sr-only'}>
@@ -23,7 +24,7 @@ export function OfflineBanner({ memberId }: { memberId: number }) {
             <p>
               <strong>Offline</strong> —{' '}
               {copy
-                ? `scans use the copy from ${formatTimeAgo(copy.catalogue.takenAt)}; check out, return and draw will be sent when the connection is back.`
+                ? `scans use the copy from ${formatTimeAgo(copy.catalogue.takenAt, now)}; check out, return and draw will be sent when the connection is back.`
                 : 'this phone has no copy of the catalogue yet, so scans need the connection.'}
             </p>
           )}

@@ -1,12 +1,11 @@
 import { useState } from 'react';
 import { BIN_KIND_LABELS } from '@shared/stock/kinds';
 import { Card } from '@/components/ui/page';
-import { Notice } from '@/components/ui/notice';
-import { formatQuantity, formatTimeAgo } from '@/lib/format';
+import { formatQuantity } from '@/lib/format';
 import { useCatalogueCopy, useWaiting } from '../hooks';
 import { offlineBin } from '../utils/offline-state';
 import { OfflineBinForm } from './offline-bin-forms';
-import { NeedsConnection, NoOfflineCopy, OfflineCopyNote } from './offline-copy-note';
+import { NeedsConnection, NoOfflineCopy, NotInOfflineCopy, OfflineCopyNote } from './offline-copy-note';
 import { WaitingHere } from './waiting-here';
 
 /** A scanned bin opened from the phone's copy: draw and return unused are queued. */
@@ -18,11 +17,7 @@ export function OfflineBinView({ memberId, code }: { memberId: number; code: str
   if (copy === null) return <NoOfflineCopy code={code} />;
   const state = offlineBin(copy.catalogue, code, waiting);
   if (!state) {
-    return (
-      <Notice tone="warn" title={`${code} is not in the offline copy`}>
-        The copy from {formatTimeAgo(copy.catalogue.takenAt)} has no bin {code}. Check the label, or open it again when the connection is back.
-      </Notice>
-    );
+    return <NotInOfflineCopy code={code} kind="bin" takenAt={copy.catalogue.takenAt} />;
   }
   const { bin } = state;
   const kinds = [...(state.onHand > 0 ? (['draw'] as const) : []), ...(state.drawnByYou > 0 ? (['return_unused'] as const) : [])];

@@ -1,10 +1,10 @@
 import { CATEGORY_LABELS, STATUS_LABELS } from '@shared/tools/categories';
 import { Card } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
-import { formatDate, formatTimeAgo } from '@/lib/format';
+import { formatDate } from '@/lib/format';
 import { useCatalogueCopy, useWaiting } from '../hooks';
 import { offlineTool } from '../utils/offline-state';
-import { NeedsConnection, NoOfflineCopy, OfflineCopyNote } from './offline-copy-note';
+import { NeedsConnection, NoOfflineCopy, NotInOfflineCopy, OfflineCopyNote } from './offline-copy-note';
 import { OfflineCheckoutForm } from './offline-checkout-form';
 import { OfflineReturnForm } from './offline-return-form';
 import { WaitingHere } from './waiting-here';
@@ -17,11 +17,7 @@ export function OfflineToolView({ memberId, code }: { memberId: number; code: st
   if (copy === null) return <NoOfflineCopy code={code} />;
   const state = offlineTool(copy.catalogue, code, waiting);
   if (!state) {
-    return (
-      <Notice tone="warn" title={`${code} is not in the offline copy`}>
-        The copy from {formatTimeAgo(copy.catalogue.takenAt)} has no tool {code}. Check the label, or open it again when the connection is back.
-      </Notice>
-    );
+    return <NotInOfflineCopy code={code} kind="tool" takenAt={copy.catalogue.takenAt} />;
   }
   const { tool } = state;
   return (

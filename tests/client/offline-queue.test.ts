@@ -1,7 +1,7 @@
 import 'fake-indexeddb/auto';
 import { beforeEach, describe, expect, it, vi } from 'vitest';
-import { CATALOGUE_AT_HEADER, IDEMPOTENCY_KEY_HEADER, PERFORMED_AT_HEADER } from '@shared/schemas/offline';
-import { dismissRefused, enqueue, refusedOf, waitingOf, type NewQueuedAction } from '@/features/offline/api/queue';
+import { CATALOGUE_AT_HEADER, IDEMPOTENCY_KEY_HEADER, IDEMPOTENCY_KEY_PATTERN, PERFORMED_AT_HEADER } from '@shared/schemas/offline';
+import { dismissRefused, enqueue, newIdempotencyKey, refusedOf, waitingOf, type NewQueuedAction } from '@/features/offline/api/queue';
 import { replayQueue } from '@/features/offline/api/replay';
 import { offlineDb } from '@/features/offline/db';
 import { setCsrfToken } from '@/lib/api-client';
@@ -63,6 +63,21 @@ describe('the offline queue', () => {
     expect(waiting.map((a) => a.code)).toEqual(['T-0042', 'B-0107', 'T-0043']);
     expect(new Set(waiting.map((a) => a.key)).size).toBe(3);
     expect(first.performedAt).toBe('2026-12-03T08:05:00.000Z');
+  });
+
+  it('makes keys the server accepts, also where randomUUID is missing (plain http on the hangar network)', () => {
+    expect(newIdempotencyKey()).toMatch(IDEMPOTENCY_KEY_PATTERN);
+    const original = Object.getOwnPropertyDescriptor(crypto, 'randomUUID');
+    Object.defineProperty(crypto, 'randomUUID', { value: undefined, configurable: true });
+    try {
+      const keys = [newIdempotencyKey(), newIdempotencyKey()];
+      expect(keys[0]).toMatch(IDEMPOTENCY_KEY_PATTERN);
+      expect(keys[1]).not.toBe(keys[0]);
+    } finally {
+      if (original) Object.defineProperty(crypto, 'randomUUID', original);
+      else delete (crypto as { randomUUID?: unknown }).randomUUID;
+    }
+    expect(typeof crypto.randomUUID).toBe('function');
   });
 
   it('never dates an action before the copy it was made from (a phone clock running slow)', async () => {

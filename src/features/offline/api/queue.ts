@@ -11,12 +11,21 @@ export interface NewQueuedAction {
 }
 
 /**
+ * A fresh idempotency key. `randomUUID` exists only in a secure context; a phone on plain
+ * `http://<laptop>` still has `getRandomValues`, which makes a key as good.
+ */
+export function newIdempotencyKey(): string {
+  if (typeof crypto.randomUUID === 'function') return crypto.randomUUID();
+  return Array.from(crypto.getRandomValues(new Uint8Array(16)), (b) => b.toString(16).padStart(2, '0')).join('');
+}
+
+/**
  * Puts an action at the end of the queue with a fresh idempotency key and the phone's time. The
  * time never goes before the copy it was made from (a phone clock running slow).
  */
 export async function enqueue(action: NewQueuedAction, now: Date = new Date()): Promise<QueuedAction> {
   const performedAt = new Date(Math.max(now.getTime(), new Date(action.catalogueAt).getTime())).toISOString();
-  const entry: Omit<QueuedAction, 'seq'> = { ...action, key: crypto.randomUUID(), performedAt, state: 'waiting' };
+  const entry: Omit<QueuedAction, 'seq'> = { ...action, key: newIdempotencyKey(), performedAt, state: 'waiting' };
   const seq = await offlineDb.actions.add(entry);
   return { ...entry, seq };
 }

@@ -122,8 +122,9 @@ export function AppShell() {
             Sign out
           </button>
         </div>
+        {/* Inside the header landmark, under the name: quiet, but the first thing read. */}
+        <OfflineBanner memberId={me.id} />
       </header>
-      <OfflineBanner memberId={me.id} />
       <OfflineSync memberId={me.id} onSettled={refreshAfterQueue} />
       <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-10 border-t border-rule bg-card sm:static sm:border-t-0 sm:border-b">
         <div className="mx-auto flex max-w-5xl sm:flex-wrap sm:gap-1 sm:px-4">

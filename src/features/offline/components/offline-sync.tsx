@@ -13,11 +13,6 @@ const RETRY_MOST_MS = 2 * 60_000;
 /** How often to ask again while the network is up but the server did not answer. */
 const PROBE_EVERY_MS = 15_000;
 
-interface Sync {
-  sendWaiting: () => Promise<void>;
-  refresh: () => Promise<void>;
-}
-
 /**
  * Keeps the signed-in member's offline copy fresh and sends their queue when the connection is
  * back: at start, on the `online` event, when a request gets an answer after none did, after a
@@ -28,7 +23,7 @@ interface Sync {
 export function OfflineSync({ memberId, onSettled }: { memberId: number; onSettled: (entry: QueuedAction) => void }) {
   const queryClient = useQueryClient();
   const settled = useRef(onSettled);
-  const sync = useRef<Sync>(undefined);
+  const sendNow = useRef<() => Promise<void>>(undefined);
   const waiting = useWaiting(memberId)?.length ?? 0;
   const offline = useOffline();
 
@@ -59,7 +54,7 @@ export function OfflineSync({ memberId, onSettled }: { memberId: number; onSettl
         retryDelay = RETRY_FIRST_MS;
       }
     };
-    sync.current = { sendWaiting, refresh };
+    sendNow.current = sendWaiting;
 
     void forgetOtherCatalogues(memberId).then(async () => {
       await sendWaiting();
@@ -107,7 +102,7 @@ export function OfflineSync({ memberId, onSettled }: { memberId: number; onSettl
   // Queued while the server only seemed out of reach, or it answers again: send now.
   const before = useRef(0);
   useEffect(() => {
-    if (!offline && waiting > before.current) void sync.current?.sendWaiting();
+    if (!offline && waiting > before.current) void sendNow.current?.();
     before.current = offline ? 0 : waiting;
   }, [offline, waiting]);
 

@@ -12,7 +12,7 @@ import { authKeys } from '@/features/auth/api/keys';
 import { enqueue, markRefused, waitingOf } from '@/features/offline/api/queue';
 import { OfflineBanner } from '@/features/offline/components/offline-banner';
 import { offlineDb } from '@/features/offline/db';
-import { catalogueFixture } from '../helpers/catalogue-fixture';
+import { catalogueFixture, catalogueTool } from '../helpers/catalogue-fixture';
 
 const MARCO = { id: 7, name: 'Marco Bellweather', email: 'member@example.org', role: 'member' as const };
 const TEN_MIN_AGO = () => new Date(Date.now() - 10 * 60_000).toISOString();
@@ -83,6 +83,29 @@ describe('a scanned tool with no connection', () => {
     expect(await screen.findByText('Needs the "Air tools" sign-off, which you do not have yet.')).toBeTruthy();
     expect(screen.queryByRole('button', { name: /Check out/ })).toBeNull();
     expect(screen.getByText(/holds, photos, the tool's history/)).toBeTruthy();
+  });
+
+  it('queues the return of the member’s own tray with its condition, note and count', async () => {
+    await offlineDb.catalogues.put({
+      memberId: MARCO.id,
+      catalogue: catalogueFixture({
+        takenAt: TEN_MIN_AGO(),
+        tools: [catalogueTool('T-0060', { name: 'Temporary fastener tray, 1/8', category: 'temporary_fastener_tray', status: 'on_loan', holder: { id: MARCO.id, name: MARCO.name }, traySize: '1/8', trayCapacity: 50 })],
+        yourLoans: [{ code: 'T-0060', dueAt: '2026-12-17T12:00:00.000Z' }],
+      }),
+    });
+    renderOffline('/tools/T-0060');
+    await userEvent.click(await screen.findByRole('radio', { name: 'Needs attention' }));
+    await userEvent.click(screen.getByRole('button', { name: 'Return T-0060' }));
+    expect(await screen.findByText('Say what needs attention, so the quartermaster knows what to look at.')).toBeTruthy();
+
+    await userEvent.type(screen.getByLabelText('What needs attention?'), 'Two pins bent');
+    await userEvent.clear(screen.getByLabelText('Temporary fasteners in the tray now'));
+    await userEvent.type(screen.getByLabelText('Temporary fasteners in the tray now'), '46');
+    await userEvent.click(screen.getByRole('button', { name: 'Return T-0060' }));
+    await waitFor(async () =>
+      expect((await waitingOf(MARCO.id)).map((a) => [a.kind, a.body])).toEqual([['return', { condition: 'needs_attention', note: 'Two pins bent', returnedCount: 46 }]]),
+    );
   });
 
   it('says so when the code is not in the copy', async () => {

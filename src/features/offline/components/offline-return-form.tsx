@@ -2,6 +2,7 @@ import { useState } from 'react';
 import type { CatalogueTool } from '@shared/schemas/offline';
 import { returnBodySchema } from '@shared/schemas/tools';
 import { Button } from '@/components/ui/button';
+import { ConditionField, type ReturnCondition } from '@/components/ui/condition-field';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { queueFromCopy } from '../api/queue-from-copy';
@@ -10,7 +11,7 @@ import type { StoredCatalogue } from '../db';
 /** Return from the copy: ok or needs attention (with a note), and the count for a temporary fastener tray. */
 export function OfflineReturnForm({ copy, tool }: { copy: StoredCatalogue; tool: CatalogueTool }) {
   const isTray = tool.category === 'temporary_fastener_tray';
-  const [condition, setCondition] = useState<'ok' | 'needs_attention'>('ok');
+  const [condition, setCondition] = useState<ReturnCondition>('ok');
   const [note, setNote] = useState('');
   const [count, setCount] = useState(isTray && tool.trayCapacity ? String(tool.trayCapacity) : '');
   const [problem, setProblem] = useState<string>();
@@ -38,23 +39,7 @@ export function OfflineReturnForm({ copy, tool }: { copy: StoredCatalogue; tool:
   return (
     <div className="flex flex-col gap-4">
       {problem && <Notice tone="bad">{problem}</Notice>}
-      <fieldset className="flex flex-col gap-1">
-        <legend className="text-sm font-semibold">How is it?</legend>
-        <label className="flex min-h-12 items-center gap-3">
-          <input type="radio" name="offline-condition" className="size-6 accent-ink" checked={condition === 'ok'} onChange={() => setCondition('ok')} />
-          Works fine
-        </label>
-        <label className="flex min-h-12 items-center gap-3">
-          <input
-            type="radio"
-            name="offline-condition"
-            className="size-6 accent-ink"
-            checked={condition === 'needs_attention'}
-            onChange={() => setCondition('needs_attention')}
-          />
-          Needs attention
-        </label>
-      </fieldset>
+      <ConditionField name="offline-condition" value={condition} onChange={setCondition} />
       {isTray && (
         <TextField
           label="Temporary fasteners in the tray now"

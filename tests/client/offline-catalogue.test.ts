@@ -1,6 +1,8 @@
 import 'fake-indexeddb/auto';
 import { beforeEach, describe, expect, it } from 'vitest';
-import { clearCatalogues, forgetOtherCatalogues, readCatalogue, refreshCatalogue } from '@/features/offline/api/catalogue';
+import { forgetOtherCatalogues, readCatalogue, refreshCatalogue } from '@/features/offline/api/catalogue';
+import { enqueue, waitingOf } from '@/features/offline/api/queue';
+import { forgetOnSignOut } from '@/features/offline/api/sign-out';
 import { offlineDb, type QueuedAction } from '@/features/offline/db';
 import { offlineBin, offlineTool } from '@/features/offline/utils/offline-state';
 import { catalogueFixture, catalogueTool } from '../helpers/catalogue-fixture';
@@ -11,6 +13,7 @@ const INES = 9;
 
 beforeEach(async () => {
   await offlineDb.catalogues.clear();
+  await offlineDb.actions.clear();
 });
 
 describe('the catalogue copy', () => {
@@ -30,15 +33,18 @@ describe('the catalogue copy', () => {
     expect(await offlineDb.catalogues.count()).toBe(0);
   });
 
-  it('is forgotten for other people when someone signs in, and entirely on sign-out', async () => {
+  it('is forgotten for other people when someone signs in, and entirely on sign-out, where waiting actions stay', async () => {
     await offlineDb.catalogues.bulkPut([
       { memberId: MARCO, catalogue: catalogueFixture() },
       { memberId: INES, catalogue: catalogueFixture() },
     ]);
     await forgetOtherCatalogues(MARCO);
     expect((await offlineDb.catalogues.toArray()).map((c) => c.memberId)).toEqual([MARCO]);
-    await clearCatalogues();
+    await enqueue({ memberId: MARCO, kind: 'check_out', code: 'T-0042', what: 'Fan', body: {}, catalogueAt: '2026-12-03T08:00:00.000Z' });
+    expect(await forgetOnSignOut(MARCO)).toBe(1);
     expect(await offlineDb.catalogues.count()).toBe(0);
+    // What waits is kept for when they sign in again: nothing is dropped.
+    expect(await waitingOf(MARCO)).toHaveLength(1);
   });
 });
 

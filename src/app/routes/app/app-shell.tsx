@@ -6,7 +6,7 @@ import { toast } from 'sonner';
 import { hasRole, ROLE_LABELS, type Role } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { useLogout } from '@/features/auth/api/logout';
-import { clearCatalogues } from '@/features/offline/api/catalogue';
+import { forgetOnSignOut } from '@/features/offline/api/sign-out';
 import { OfflineBanner } from '@/features/offline/components/offline-banner';
 import { OfflineSync } from '@/features/offline/components/offline-sync';
 import type { QueuedAction } from '@/features/offline/db';
@@ -76,8 +76,9 @@ export function AppShell() {
   const signOut = () =>
     logout.mutate(undefined, {
       onSuccess: () => {
-        // No copy of the chapter's catalogue stays on a phone nobody is signed in to.
-        void clearCatalogues();
+        void forgetOnSignOut(me.id).then((waiting) => {
+          if (waiting > 0) toast.info(`${waiting === 1 ? '1 action waits' : `${waiting} actions wait`} on this phone: sign in here again to send them.`);
+        });
         void navigate('/sign-in', { replace: true });
       },
       onError: (err) => toast.error(messageOf(err)),

@@ -46,10 +46,17 @@ function reportReachability(answered: boolean): void {
 }
 
 let csrfToken: string | undefined;
+let sessionChanges = 0;
 
-/** Sign-in and invitation acceptance start a new session and hand back its token. */
+/** Sign-in and invitation acceptance start a new session and hand back its token; sign-out drops it. */
 export function setCsrfToken(token: string | undefined): void {
   csrfToken = token;
+  sessionChanges++;
+}
+
+/** Goes up whenever this page signs someone in or out: work checked against one session can tell it changed. */
+export function sessionGeneration(): number {
+  return sessionChanges;
 }
 
 async function fetchCsrfToken(options: RequestOptions = {}): Promise<string> {

@@ -178,6 +178,16 @@ describe('replaying the queue', () => {
     expect(await refusedOf(MARCO)).toEqual([]);
   });
 
+  it('stops when someone signs in or out on the page while it replays', async () => {
+    await enqueue(checkout('T-0042'));
+    await enqueue(checkout('T-0043'));
+    server();
+    const result = await replayQueue(MARCO, () => setCsrfToken(undefined));
+    expect(result).toMatchObject({ stopped: true });
+    expect(result.sent.map((a) => a.code)).toEqual(['T-0042']);
+    expect((await waitingOf(MARCO)).map((a) => a.code)).toEqual(['T-0043']);
+  });
+
   it('sends only the signed-in member’s actions, and none when the session is someone else’s', async () => {
     await enqueue(checkout('T-0042', INES));
     await enqueue(checkout('T-0043', MARCO));

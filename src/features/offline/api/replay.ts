@@ -1,4 +1,4 @@
-import { ApiError, api, isNoConnection } from '@/lib/api-client';
+import { ApiError, api, isNoConnection, sessionGeneration } from '@/lib/api-client';
 import type { QueuedAction } from '../db';
 import { nextStepFor } from '../utils/next-step';
 import { markRefused, markSent, nextWaiting } from './queue';
@@ -38,8 +38,11 @@ async function sessionIsMember(memberId: number): Promise<boolean> {
 async function replay(memberId: number, onSettled: (entry: QueuedAction) => void): Promise<ReplayResult> {
   const result: ReplayResult = { sent: [], refused: [], stopped: false };
   let entry = await nextWaiting(memberId);
+  const session = sessionGeneration();
   if (entry && !(await sessionIsMember(memberId))) return { ...result, stopped: true };
   for (; entry; entry = await nextWaiting(memberId)) {
+    // Someone signed in or out meanwhile: the next send would go out under another session.
+    if (sessionGeneration() !== session) return { ...result, stopped: true };
     try {
       await sendQueued(entry);
     } catch (err) {

@@ -48,6 +48,11 @@ export function createAppRouter(queryClient: QueryClient) {
           },
         },
         {
+          path: 'queue',
+          ErrorBoundary: RouteError,
+          lazy: async () => ({ Component: (await import('./routes/app/queue')).QueueRoute }),
+        },
+        {
           path: 'tools/new',
           ErrorBoundary: RouteError,
           lazy: async () => {

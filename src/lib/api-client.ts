@@ -14,27 +14,66 @@ export class ApiError extends Error {
   }
 }
 
-let csrfToken: string | undefined;
-
-/** Sign-in and invitation acceptance start a new session and hand back its token. */
-export function setCsrfToken(token: string | undefined): void {
-  csrfToken = token;
+/**
+ * True when the request never got an answer (no network, or the server did not answer in time),
+ * so it may or may not have arrived; false for any answer from the server, a refusal included.
+ */
+export function isNoConnection(err: unknown): boolean {
+  return err instanceof ApiError && err.status === 0;
 }
 
-async function fetchCsrfToken(): Promise<string> {
-  const { token } = await send<{ token: string }>('GET', '/api/auth/csrf');
+/** How long a request waits for the server before it counts as "no answer" (weak hangar Wi-Fi). */
+export const ANSWER_TIMEOUT_MS = 8_000;
+
+export interface RequestOptions {
+  /** Extra headers for this request only (the offline queue's idempotency and time headers). */
+  headers?: Record<string, string>;
+  /** Give up after this long and treat it as no connection; 0 waits as long as the browser does. */
+  timeoutMs?: number;
+}
+
+type ReachabilityListener = (answered: boolean) => void;
+const reachabilityListeners = new Set<ReachabilityListener>();
+
+/** Told after every request whether the server answered (any status) or not (status 0). */
+export function onReachability(listener: ReachabilityListener): () => void {
+  reachabilityListeners.add(listener);
+  return () => reachabilityListeners.delete(listener);
+}
+
+function reportReachability(answered: boolean): void {
+  for (const listener of reachabilityListeners) listener(answered);
+}
+
+let csrfToken: string | undefined;
+let sessionChanges = 0;
+
+/** Sign-in and invitation acceptance start a new session and hand back its token; sign-out drops it. */
+export function setCsrfToken(token: string | undefined): void {
+  csrfToken = token;
+  sessionChanges++;
+}
+
+/** Goes up whenever this page signs someone in or out: work checked against one session can tell it changed. */
+export function sessionGeneration(): number {
+  return sessionChanges;
+}
+
+async function fetchCsrfToken(options: RequestOptions = {}): Promise<string> {
+  const { token } = await send<{ token: string }>('GET', '/api/auth/csrf', undefined, undefined, 'json', { timeoutMs: options.timeoutMs });
   csrfToken = token;
   return token;
 }
 
 type Answer = 'json' | 'blob';
 
-async function send<T>(method: string, path: string, body?: unknown, token?: string, answer: Answer = 'json'): Promise<T> {
-  const headers: Record<string, string> = { Accept: answer === 'json' ? 'application/json' : '*/*' };
+async function send<T>(method: string, path: string, body?: unknown, token?: string, answer: Answer = 'json', options: RequestOptions = {}): Promise<T> {
+  const headers: Record<string, string> = { Accept: answer === 'json' ? 'application/json' : '*/*', ...options.headers };
   // A FormData body sets its own multipart Content-Type, boundary included.
   const isForm = body instanceof FormData;
   if (body !== undefined && !isForm) headers['Content-Type'] = 'application/json';
   if (token) headers['X-CSRF-Token'] = token;
+  const timeoutMs = options.timeoutMs ?? 0;
   let res: Response;
   try {
     res = await fetch(path, {
@@ -42,10 +81,16 @@ async function send<T>(method: string, path: string, body?: unknown, token?: str
       headers,
       credentials: 'same-origin',
       body: body === undefined ? undefined : isForm ? body : JSON.stringify(body),
+      ...(timeoutMs > 0 && { signal: AbortSignal.timeout(timeoutMs) }),
     });
-  } catch {
+  } catch (err) {
+    reportReachability(false);
+    if (err instanceof DOMException && err.name === 'TimeoutError') {
+      throw new ApiError(0, 'TIMEOUT', 'Gripline did not answer in time. Check the Wi-Fi and try again.');
+    }
     throw new ApiError(0, 'NETWORK', 'No connection to Gripline. Check the Wi-Fi and try again.');
   }
+  reportReachability(true);
   if (res.status === 204) return undefined as T;
   if (res.ok && answer === 'blob') return (await res.blob()) as T;
   const json: unknown = await res.json().catch(() => undefined);
@@ -58,14 +103,14 @@ async function send<T>(method: string, path: string, body?: unknown, token?: str
   throw new ApiError(res.status, 'HTTP_' + res.status, `The server answered ${res.status}. Try again in a moment.`);
 }
 
-async function mutate<T>(method: string, path: string, body?: unknown, answer: Answer = 'json'): Promise<T> {
-  const token = csrfToken ?? (await fetchCsrfToken());
+async function mutate<T>(method: string, path: string, body?: unknown, answer: Answer = 'json', options: RequestOptions = {}): Promise<T> {
+  const token = csrfToken ?? (await fetchCsrfToken(options));
   try {
-    return await send<T>(method, path, body, token, answer);
+    return await send<T>(method, path, body, token, answer, options);
   } catch (err) {
     // The session may have changed under us (expired, signed in elsewhere): get a fresh token once.
     if (err instanceof ApiError && err.code === 'CSRF_TOKEN_INVALID') {
-      return send<T>(method, path, body, await fetchCsrfToken(), answer);
+      return send<T>(method, path, body, await fetchCsrfToken(options), answer, options);
     }
     throw err;
   }
@@ -73,8 +118,9 @@ async function mutate<T>(method: string, path: string, body?: unknown, answer: A
 
 /** The only place the client calls fetch. */
 export const api = {
-  get: <T>(path: string) => send<T>('GET', path),
-  post: <T>(path: string, body?: unknown) => mutate<T>('POST', path, body ?? {}),
+  /** A read gives up after ANSWER_TIMEOUT_MS unless told otherwise: then the phone's copy can take over. */
+  get: <T>(path: string, options?: RequestOptions) => send<T>('GET', path, undefined, undefined, 'json', { timeoutMs: ANSWER_TIMEOUT_MS, ...options }),
+  post: <T>(path: string, body?: unknown, options?: RequestOptions) => mutate<T>('POST', path, body ?? {}, 'json', options),
   patch: <T>(path: string, body: unknown) => mutate<T>('PATCH', path, body),
   delete: <T = void>(path: string) => mutate<T>('DELETE', path),
   /** multipart/form-data (photo uploads), with the same CSRF token and error handling. */

@@ -24,3 +24,20 @@ export const formatDay = (iso: string): string => utcDay.format(new Date(iso.len
 
 /** A moment (ISO timestamp) as the day it fell on where the viewer is: "Jan 15, 2027". */
 export const formatDate = (iso: string): string => localDay.format(new Date(iso));
+
+const relative = new Intl.RelativeTimeFormat('en-US', { numeric: 'auto' });
+
+/**
+ * How long ago a moment was, in the largest whole unit: "just now", "10 min ago", "3 hours ago",
+ * "yesterday", "4 days ago", and the day itself from a week on.
+ */
+export const formatTimeAgo = (iso: string, now: Date = new Date()): string => {
+  const minutes = Math.max(0, (now.getTime() - new Date(iso).getTime()) / 60_000);
+  if (minutes < 1) return 'just now';
+  if (minutes < 60) return `${Math.floor(minutes)} min ago`;
+  const hours = minutes / 60;
+  if (hours < 24) return relative.format(-Math.floor(hours), 'hour');
+  const days = hours / 24;
+  if (days < 7) return relative.format(-Math.floor(days), 'day');
+  return formatDate(iso);
+};

@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it, vi } from 'vitest';
-import { api, ApiError, setCsrfToken } from '@/lib/api-client';
+import { api, ApiError, isNoConnection, onReachability, setCsrfToken } from '@/lib/api-client';
 import { fakeFetch } from '../helpers/render';
 
 beforeEach(() => setCsrfToken(undefined));
@@ -39,5 +39,35 @@ describe('api client', () => {
     expect(err.status).toBe(0);
     expect(err.code).toBe('NETWORK');
     expect(err.message).toMatch(/No connection/);
+  });
+
+  it('counts a server that does not answer in time as no connection, and a refusal as an answer', async () => {
+    vi.stubGlobal(
+      'fetch',
+      vi.fn((_path: string, init: RequestInit) => new Promise((_resolve, reject) => init.signal?.addEventListener('abort', () => reject(init.signal?.reason)))),
+    );
+    const heard: boolean[] = [];
+    const stop = onReachability((answered) => heard.push(answered));
+    const slow = (await api.get('/api/x', { timeoutMs: 20 }).catch((e: unknown) => e)) as ApiError;
+    expect(slow.status).toBe(0);
+    expect(slow.code).toBe('TIMEOUT');
+    expect(isNoConnection(slow)).toBe(true);
+
+    fakeFetch(() => ({ status: 409, body: { error: { code: 'TOOL_ON_LOAN', message: 'Someone has it.' } } }));
+    const refused = await api.get('/api/x').catch((e: unknown) => e);
+    expect(isNoConnection(refused)).toBe(false);
+    stop();
+    expect(heard).toEqual([false, true]);
+  });
+
+  it('sends the extra headers of one request beside the CSRF token', async () => {
+    setCsrfToken('t1');
+    const calls = fakeFetch(() => ({ status: 201, body: { ok: true } }));
+    await api.post('/api/tools/T-0042/checkout', {}, { headers: { 'Idempotency-Key': 'abcdefgh-1' } });
+    await api.post('/api/tools/T-0042/checkout', {});
+    expect(calls.map((c) => [c.headers['Idempotency-Key'], c.headers['X-CSRF-Token']])).toEqual([
+      ['abcdefgh-1', 't1'],
+      [undefined, 't1'],
+    ]);
   });
 });

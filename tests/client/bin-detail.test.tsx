@@ -6,6 +6,7 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import type { BinForYou, Movement } from '@shared/schemas/bins';
 import { BinDetailRoute, binDetailLoader } from '@/app/routes/app/bin-detail';
 import { ScanRoute } from '@/app/routes/app/scan';
+import { authKeys } from '@/features/auth/api/keys';
 import { setCsrfToken } from '@/lib/api-client';
 import { assemblyFixture } from '../helpers/assembly-fixture';
 import { binFixture } from '../helpers/bin-fixture';
@@ -286,7 +287,14 @@ describe('the Scan screen', () => {
       ],
       { initialEntries: ['/scan'] },
     );
-    render(<RouterProvider router={router} />);
+    // Signed out here: the Scan screen reads who is signed in only to say whether an offline copy is kept.
+    const queryClient = new QueryClient();
+    queryClient.setQueryData(authKeys.me(), null);
+    render(
+      <QueryClientProvider client={queryClient}>
+        <RouterProvider router={router} />
+      </QueryClientProvider>,
+    );
     return router;
   }
 

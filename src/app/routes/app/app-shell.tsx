@@ -1,11 +1,21 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { useSuspenseQuery } from '@tanstack/react-query';
+import { useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
+import { lazy, Suspense, useCallback, useEffect } from 'react';
 import { NavLink, Outlet, useNavigate, type LoaderFunctionArgs } from 'react-router';
 import { hasRole, ROLE_LABELS, type Role } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { useLogout } from '@/features/auth/api/logout';
+import type { QueuedAction } from '@/features/offline/db';
+import { binKeys } from '@/features/stock/api/keys';
+import { stockMoneyKeys } from '@/features/stock-money/api/keys';
+import { toolKeys } from '@/features/tools/api/keys';
 import { messageOf } from '@/lib/errors';
 import { requireSignedIn } from './guards';
+
+// The offline copy and queue (IndexedDB through Dexie) load just after the first render, outside the
+// first-load budget: nothing is queued before the page exists.
+const OfflineBanner = lazy(() => import('@/features/offline/components/offline-banner').then((m) => ({ default: m.OfflineBanner })));
+const OfflineSync = lazy(() => import('@/features/offline/components/offline-sync').then((m) => ({ default: m.OfflineSync })));
 
 export const appShellLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
   await requireSignedIn(queryClient, request);
@@ -39,18 +49,59 @@ const NAV_LINKS: { to: string; label: string; role: Role; primary?: boolean }[] 
   { to: '/signoffs', label: 'Sign-offs', role: 'lead' },
 ];
 
+/** A queued action reached the server (or was refused): refresh what it changes. */
+function useRefreshAfterQueue() {
+  const queryClient = useQueryClient();
+  return useCallback(
+    (entry: QueuedAction) => {
+      if (entry.kind === 'check_out' || entry.kind === 'return') {
+        void queryClient.invalidateQueries({ queryKey: toolKeys.all });
+      } else {
+        void queryClient.invalidateQueries({ queryKey: binKeys.all });
+        void queryClient.invalidateQueries({ queryKey: stockMoneyKeys.all });
+      }
+    },
+    [queryClient],
+  );
+}
+
+/**
+ * The pages a scan walks through load with their route, but a phone that loses the Wi-Fi before it
+ * opened them (and has no service worker yet) could not open them offline: fetch them once the
+ * first page has settled, so a scan opens the tool or bin from the offline copy.
+ */
+function usePreloadScanPages() {
+  useEffect(() => {
+    const preload = () => {
+      void Promise.all([import('./scan'), import('./tool-detail'), import('./bin-detail'), import('./queue')]).catch(() => undefined);
+    };
+    const timer = setTimeout(preload, 1_500);
+    return () => clearTimeout(timer);
+  }, []);
+}
+
 export function AppShell() {
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const logout = useLogout();
   const navigate = useNavigate();
+  const refreshAfterQueue = useRefreshAfterQueue();
+  usePreloadScanPages();
   if (!me) return null;
   const links = NAV_LINKS.filter((link) => hasRole(me.role, link.role));
   const more = links.filter((link) => !link.primary);
 
   const signOut = () =>
     logout.mutate(undefined, {
-      onSuccess: () => void navigate('/sign-in', { replace: true }),
-      // sonner stays out of the first load (see app/provider.tsx).
+      onSuccess: () => {
+        void import('@/features/offline/api/sign-out').then(async ({ forgetOnSignOut }) => {
+          const waiting = await forgetOnSignOut(me.id);
+          if (waiting === 0) return;
+          const words = `${waiting === 1 ? '1 action waits' : `${waiting} actions wait`} on this phone: sign in here again to send them.`;
+          // sonner stays out of the first load (see app/provider.tsx).
+          void import('sonner').then(({ toast }) => toast.info(words));
+        });
+        void navigate('/sign-in', { replace: true });
+      },
       onError: (err) => void import('sonner').then(({ toast }) => toast.error(messageOf(err))),
     });
 
@@ -93,7 +144,14 @@ export function AppShell() {
             Sign out
           </button>
         </div>
+        {/* Inside the header landmark, under the name: quiet, but the first thing read. */}
+        <Suspense fallback={null}>
+          <OfflineBanner memberId={me.id} />
+        </Suspense>
       </header>
+      <Suspense fallback={null}>
+        <OfflineSync memberId={me.id} onSettled={refreshAfterQueue} />
+      </Suspense>
       <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-10 border-t border-rule bg-card sm:static sm:border-t-0 sm:border-b">
         <div className="mx-auto flex max-w-5xl sm:flex-wrap sm:gap-1 sm:px-4">
           {links.map((link) => (

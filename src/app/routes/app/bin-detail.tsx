@@ -1,8 +1,9 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
+import { Link, useLoaderData, useParams, type LoaderFunctionArgs } from 'react-router';
 import { hasRole } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
+import { OfflineBinView } from '@/features/offline/components/offline-bin-view';
 import { binQueryOptions } from '@/features/stock/api/get-bins';
 import { ledgerQueryOptions } from '@/features/stock/api/get-ledger';
 import { BinActionsPanel } from '@/features/stock/components/bin-actions-panel';
@@ -10,20 +11,32 @@ import { BinDetails, BinSummary } from '@/features/stock/components/bin-summary'
 import { LedgerList } from '@/features/stock/components/ledger-list';
 import { Card } from '@/components/ui/page';
 import { requireSignedIn } from './guards';
+import { loadOrOffline, useOfflinePage, type ScanLoaderData } from './offline-fallback';
 
 const codeOf = (params: { code?: string }) => (params.code ?? '').toUpperCase();
 
-export const binDetailLoader = (queryClient: QueryClient) => async ({ request, params }: LoaderFunctionArgs) => {
-  await requireSignedIn(queryClient, request);
-  const code = codeOf(params);
-  void queryClient.prefetchQuery(ledgerQueryOptions(code));
-  await queryClient.ensureQueryData(binQueryOptions(code));
-  return null;
-};
+export const binDetailLoader =
+  (queryClient: QueryClient) =>
+  async ({ request, params }: LoaderFunctionArgs): Promise<ScanLoaderData> => {
+    await requireSignedIn(queryClient, request);
+    const code = codeOf(params);
+    return loadOrOffline(() => {
+      void queryClient.prefetchQuery(ledgerQueryOptions(code));
+      return queryClient.ensureQueryData(binQueryOptions(code));
+    });
+  };
 
-/** A bin's page, opened by scanning its label: what it holds, what you may do with it, its ledger. */
+/** A bin's page, opened by scanning its label; with no connection, the bin as the phone's offline copy has it. */
 export function BinDetailRoute() {
   const code = codeOf(useParams());
+  const { data: me } = useSuspenseQuery(meQueryOptions());
+  const offline = useOfflinePage(useLoaderData<ScanLoaderData>());
+  if (offline && me) return <OfflineBinView memberId={me.id} code={code} />;
+  return <OnlineBinDetail code={code} />;
+}
+
+/** What it holds, what you may do with it, its ledger. */
+function OnlineBinDetail({ code }: { code: string }) {
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const { data: bin } = useSuspenseQuery(binQueryOptions(code));
   const isQuartermaster = !!me && hasRole(me.role, 'quartermaster');

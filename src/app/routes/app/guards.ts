@@ -1,12 +1,43 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { data, redirect } from 'react-router';
-import { hasRole, ROLE_LABELS, type Role } from '@shared/roles';
+import { hasRole, ROLE_LABELS, ROLES, type Role } from '@shared/roles';
 import type { User } from '@shared/schemas/auth';
 import { meQueryOptions } from '@/features/auth/api/get-me';
+import { isNoConnection } from '@/lib/api-client';
+
+/**
+ * With no network and nobody in memory (the installed app opened in airplane mode), the person
+ * whose offline copy the phone keeps is taken as signed in, so scans open from the copy.
+ */
+async function personFromOfflineCopy(queryClient: QueryClient): Promise<User | undefined> {
+  // Dexie loads only here, when it is needed, not with the first page.
+  const you = await import('@/features/offline/api/catalogue').then(({ offlineMember }) => offlineMember()).catch(() => undefined);
+  if (!you || !(ROLES as readonly string[]).includes(you.role)) return undefined;
+  const user: User = { id: you.id, name: you.name, role: you.role as Role, email: '' };
+  queryClient.setQueryData(meQueryOptions().queryKey, user);
+  return user;
+}
+
+async function signedInPerson(queryClient: QueryClient): Promise<User | null> {
+  const known = queryClient.getQueryData(meQueryOptions().queryKey);
+  if (known !== undefined) return known;
+  // A query would wait for the network to come back; the copy answers now.
+  if (!navigator.onLine) {
+    const offline = await personFromOfflineCopy(queryClient);
+    if (offline) return offline;
+  }
+  try {
+    return await queryClient.ensureQueryData(meQueryOptions());
+  } catch (err) {
+    const offline = isNoConnection(err) ? await personFromOfflineCopy(queryClient) : undefined;
+    if (offline) return offline;
+    throw err;
+  }
+}
 
 /** The signed-in person, or a redirect to sign-in that comes back here afterwards. */
 export async function requireSignedIn(queryClient: QueryClient, request: Request): Promise<User> {
-  const me = await queryClient.ensureQueryData(meQueryOptions());
+  const me = await signedInPerson(queryClient);
   if (!me) {
     const url = new URL(request.url);
     throw redirect(`/sign-in?next=${encodeURIComponent(url.pathname + url.search)}`);

@@ -1,7 +1,10 @@
+import { useQuery } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import { useNavigate } from 'react-router';
 import { TOOL_CODE_PATTERN } from '@shared/schemas/tools';
 import { BIN_CODE_PATTERN } from '@shared/stock/kinds';
+import { meQueryOptions } from '@/features/auth/api/get-me';
+import { OfflineCopyStatus } from '@/features/offline/components/offline-copy-status';
 import { CameraScanner } from '@/features/tools/components/camera-scanner';
 import { CodeEntry } from '@/features/tools/components/code-entry';
 import { Notice } from '@/components/ui/notice';
@@ -23,6 +26,7 @@ export function ScanRoute() {
   useEffect(() => {
     performance.mark('scan-ready');
   }, []);
+  const me = useQuery(meQueryOptions()).data;
   const [problem, setProblem] = useState<string>();
   const open = (raw: string) => {
     const path = labelPath(raw);
@@ -41,6 +45,7 @@ export function ScanRoute() {
         {problem && <Notice tone="warn">{problem}</Notice>}
         <CameraScanner onCode={open} />
         <CodeEntry onCode={open} autoFocus />
+        {me && <OfflineCopyStatus memberId={me.id} />}
       </div>
     </div>
   );

@@ -1,8 +1,9 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
-import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
+import { Link, useLoaderData, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { hasRole } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
+import { OfflineToolView } from '@/features/offline/components/offline-tool-view';
 import { ReturnPhotoPicker } from '@/features/photos/components/return-photo-picker';
 import { ToolPhotos } from '@/features/photos/components/tool-photos';
 import { toolQueryOptions } from '@/features/tools/api/get-tool';
@@ -13,18 +14,28 @@ import { ToolHistory } from '@/features/tools/components/tool-history';
 import { ToolSummary } from '@/features/tools/components/tool-summary';
 import { Card } from '@/components/ui/page';
 import { requireSignedIn } from './guards';
+import { loadOrOffline, useOfflinePage, type ScanLoaderData } from './offline-fallback';
 
 const codeOf = (params: { code?: string }) => (params.code ?? '').toUpperCase();
 
-export const toolDetailLoader = (queryClient: QueryClient) => async ({ request, params }: LoaderFunctionArgs) => {
-  await requireSignedIn(queryClient, request);
-  await queryClient.ensureQueryData(toolQueryOptions(codeOf(params)));
-  return null;
-};
+export const toolDetailLoader =
+  (queryClient: QueryClient) =>
+  async ({ request, params }: LoaderFunctionArgs): Promise<ScanLoaderData> => {
+    await requireSignedIn(queryClient, request);
+    return loadOrOffline(() => queryClient.ensureQueryData(toolQueryOptions(codeOf(params))));
+  };
 
-/** A tool's page: what it is, what you can do with it, and (for the quartermaster) its upkeep. */
+/** A tool's page; with no connection, the tool as the phone's offline copy has it. */
 export function ToolDetailRoute() {
   const code = codeOf(useParams());
+  const { data: me } = useSuspenseQuery(meQueryOptions());
+  const offline = useOfflinePage(useLoaderData<ScanLoaderData>());
+  if (offline && me) return <OfflineToolView memberId={me.id} code={code} />;
+  return <OnlineToolDetail code={code} />;
+}
+
+/** What it is, what you can do with it, and (for the quartermaster) its upkeep. */
+function OnlineToolDetail({ code }: { code: string }) {
   const navigate = useNavigate();
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const { data: tool } = useSuspenseQuery(toolQueryOptions(code));

@@ -2,7 +2,7 @@ import type { FormEventHandler, ReactNode } from 'react';
 import { Controller, type Control, type FieldPath, type FieldValues } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
-import { QuantityField } from './quantity-field';
+import { QuantityField } from '@/components/ui/quantity-field';
 
 /** The frame every bin action shares: the server's refusal on top, the fields, one big confirm button. */
 export function ActionForm({

@@ -2,6 +2,7 @@ import { useState, type ReactNode } from 'react';
 import { toast } from 'sonner';
 import type { ToolForYou } from '@shared/schemas/tools';
 import { Button } from '@/components/ui/button';
+import { ConditionField, type ReturnCondition } from '@/components/ui/condition-field';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { messageOf } from '@/lib/errors';
@@ -16,7 +17,7 @@ export type PhotoSlot = (onUploaded: (photoId: number | undefined) => void) => R
 export function ReturnForm({ tool, photoSlot, onDone }: { tool: ToolForYou; photoSlot?: PhotoSlot; onDone?: () => void }) {
   const giveBack = useReturnTool();
   const isTray = tool.category === 'temporary_fastener_tray';
-  const [condition, setCondition] = useState<'ok' | 'needs_attention'>('ok');
+  const [condition, setCondition] = useState<ReturnCondition>('ok');
   const [note, setNote] = useState('');
   const [count, setCount] = useState(isTray && tool.trayCapacity ? String(tool.trayCapacity) : '');
   const [photoId, setPhotoId] = useState<number>();
@@ -48,23 +49,7 @@ export function ReturnForm({ tool, photoSlot, onDone }: { tool: ToolForYou; phot
   return (
     <div className="flex flex-col gap-4">
       {problem && <Notice tone="bad">{problem}</Notice>}
-      <fieldset className="flex flex-col gap-1">
-        <legend className="text-sm font-semibold">How is it?</legend>
-        <label className="flex min-h-12 items-center gap-3">
-          <input type="radio" name="condition" className="size-6 accent-ink" checked={condition === 'ok'} onChange={() => setCondition('ok')} />
-          Works fine
-        </label>
-        <label className="flex min-h-12 items-center gap-3">
-          <input
-            type="radio"
-            name="condition"
-            className="size-6 accent-ink"
-            checked={condition === 'needs_attention'}
-            onChange={() => setCondition('needs_attention')}
-          />
-          Needs attention
-        </label>
-      </fieldset>
+      <ConditionField name="condition" value={condition} onChange={setCondition} />
       {isTray && (
         <TextField
           label="Temporary fasteners in the tray now"

@@ -1,0 +1,34 @@
+import { useState } from 'react';
+import type { CatalogueTool } from '@shared/schemas/offline';
+import { Button } from '@/components/ui/button';
+import { formatDate } from '@/lib/format';
+import { queueFromCopy } from '../api/queue-from-copy';
+import type { StoredCatalogue } from '../db';
+
+const DAY_MS = 24 * 60 * 60 * 1000;
+
+/** Check out from the copy: the loan period's due date, the accessories to take along. */
+export function OfflineCheckoutForm({ copy, tool }: { copy: StoredCatalogue; tool: CatalogueTool }) {
+  const [busy, setBusy] = useState(false);
+  // The loan period counts from now, when the member takes it off the shelf.
+  const [due] = useState(() => new Date(Date.now() + tool.loanDays * DAY_MS).toISOString());
+  const submit = async () => {
+    setBusy(true);
+    try {
+      await queueFromCopy(copy, 'check_out', tool.code, tool.name, {});
+    } finally {
+      setBusy(false);
+    }
+  };
+  return (
+    <div className="flex flex-col gap-3">
+      <p>
+        Bring it back by <strong>{formatDate(due)}</strong> ({tool.loanDays} days).
+      </p>
+      {tool.accessories.length > 0 && <p>Take these with it: {tool.accessories.join(', ')}.</p>}
+      <Button onClick={() => void submit()} busy={busy} className="w-full text-lg">
+        Check out {tool.code}
+      </Button>
+    </div>
+  );
+}

@@ -36,6 +36,9 @@ export function pwaPlugin(): PluginOption[] {
         navigateFallback: 'index.html',
         navigateFallbackDenylist: [/^\/api(\/|$)/, /^\/certificate/],
         cleanupOutdatedCaches: true,
+        // The first service worker takes over the open page at once, so the app opens offline
+        // without a reload; a later version still waits for the member's tap (no skipWaiting).
+        clientsClaim: true,
         runtimeCaching: [],
       },
     }),

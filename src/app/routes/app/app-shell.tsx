@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
-import { lazy, Suspense, useCallback, useEffect } from 'react';
+import { lazy, Suspense, useCallback } from 'react';
 import { NavLink, Outlet, useNavigate, type LoaderFunctionArgs } from 'react-router';
 import { hasRole, ROLE_LABELS, type Role } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
@@ -67,17 +67,12 @@ function useRefreshAfterQueue() {
 
 /**
  * The pages a scan walks through load with their route, but a phone that loses the Wi-Fi before it
- * opened them (and has no service worker yet) could not open them offline: fetch them once the
- * first page has settled, so a scan opens the tool or bin from the offline copy.
+ * opened them (and before the service worker has taken over) could not open them offline: the
+ * offline sync fetches them before it takes the catalogue copy, so a copy on the phone means a scan
+ * opens from it.
  */
-function usePreloadScanPages() {
-  useEffect(() => {
-    const preload = () => {
-      void Promise.all([import('./scan'), import('./tool-detail'), import('./bin-detail'), import('./queue')]).catch(() => undefined);
-    };
-    const timer = setTimeout(preload, 1_500);
-    return () => clearTimeout(timer);
-  }, []);
+async function preloadScanPages(): Promise<void> {
+  await Promise.all([import('./scan'), import('./tool-detail'), import('./bin-detail'), import('./queue')]);
 }
 
 export function AppShell() {
@@ -85,7 +80,6 @@ export function AppShell() {
   const logout = useLogout();
   const navigate = useNavigate();
   const refreshAfterQueue = useRefreshAfterQueue();
-  usePreloadScanPages();
   if (!me) return null;
   const links = NAV_LINKS.filter((link) => hasRole(me.role, link.role));
   const more = links.filter((link) => !link.primary);
@@ -150,7 +144,7 @@ export function AppShell() {
         </Suspense>
       </header>
       <Suspense fallback={null}>
-        <OfflineSync memberId={me.id} onSettled={refreshAfterQueue} />
+        <OfflineSync memberId={me.id} onSettled={refreshAfterQueue} prepare={preloadScanPages} />
       </Suspense>
       <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-10 border-t border-rule bg-card sm:static sm:border-t-0 sm:border-b">
         <div className="mx-auto flex max-w-5xl sm:flex-wrap sm:gap-1 sm:px-4">

@@ -18,11 +18,21 @@ const PROBE_EVERY_MS = 15_000;
  * back: at start, on the `online` event, when a request gets an answer after none did, after a
  * successful change, every few minutes while the page is visible, and with backoff after a failure.
  * While the network is up but the server is silent, it asks again every few seconds.
- * `onSettled` hears of each entry sent or refused, to refresh what it changed.
+ * `onSettled` hears of each entry sent or refused, to refresh what it changed; `prepare` fetches
+ * what the pages a scan opens need, before the first copy is taken.
  */
-export function OfflineSync({ memberId, onSettled }: { memberId: number; onSettled: (entry: QueuedAction) => void }) {
+export function OfflineSync({
+  memberId,
+  onSettled,
+  prepare,
+}: {
+  memberId: number;
+  onSettled: (entry: QueuedAction) => void;
+  prepare?: () => Promise<void>;
+}) {
   const queryClient = useQueryClient();
   const settled = useRef(onSettled);
+  const prepared = useRef(prepare);
   const sendNow = useRef<() => Promise<void>>(undefined);
   const waiting = useWaiting(memberId)?.length ?? 0;
   const offline = useOffline();
@@ -56,7 +66,8 @@ export function OfflineSync({ memberId, onSettled }: { memberId: number; onSettl
     };
     sendNow.current = sendWaiting;
 
-    void forgetOtherCatalogues(memberId).then(async () => {
+    const ready = (prepared.current?.() ?? Promise.resolve()).catch(() => undefined);
+    void ready.then(() => forgetOtherCatalogues(memberId)).then(async () => {
       await sendWaiting();
       await refresh();
     });

@@ -1,3 +1,4 @@
+import { createHash, X509Certificate } from 'node:crypto';
 import { once } from 'node:events';
 import { readFileSync } from 'node:fs';
 import { createServer } from 'node:http';
@@ -6,7 +7,7 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CLIENT_DIR } from '../../server/main';
 import { DEMO_PASSWORD } from '../../server/seed/demo-chapter';
-import { demoToolCode, launchWithCameraOn, signedInPhone, startBuiltApp, type BuiltApp } from '../helpers/browser';
+import { demoToolCode, launchChromium, launchWithCameraOn, signedInPhone, startBuiltApp, type BuiltApp } from '../helpers/browser';
 import { buildTestApp } from '../helpers/test-app';
 
 /** A name that is neither localhost nor 127.0.0.1, as a phone on the hangar network sees the laptop. */
@@ -97,6 +98,30 @@ describe('Gripline on a certificate made by npm run start:lan, opened by name on
       expect(pem).toBe(app.lanCertificate?.authority);
     } finally {
       await context.close();
+    }
+  });
+
+  it('on a phone that trusts the certificate, the service worker installs and the app opens again with no network', async () => {
+    // Trusting the hangar's certificate, as a phone does once it is installed: Chromium is told the
+    // server key's fingerprint instead of being given the authority (no system store to change here).
+    const serverCert = new X509Certificate(app.lanCertificate!.cert);
+    const spki = createHash('sha256').update(serverCert.publicKey.export({ type: 'spki', format: 'der' })).digest('base64');
+    const trusting = await launchChromium([`--host-resolver-rules=MAP ${HOST} 127.0.0.1`, `--ignore-certificate-errors-spki-list=${spki}`]);
+    try {
+      const page = await signedInPhone(trusting, app.url, 'member@example.org', DEMO_PASSWORD);
+      await page.evaluate(() => navigator.serviceWorker.ready.then(() => undefined));
+      await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
+      await page.getByRole('link', { name: 'Scan' }).click();
+      await page.getByText(/^Offline copy on this phone, from just now/).waitFor({ timeout: 15_000 });
+
+      await page.context().setOffline(true);
+      await page.reload();
+      await page.getByRole('heading', { name: 'Scan' }).waitFor();
+      // The shell comes from the service worker's cache, the banner from the copy on the phone.
+      await page.getByText(/^Offline — scans use the copy from/).waitFor();
+      expect(await page.getByText(/^Offline copy on this phone/).isVisible()).toBe(true);
+    } finally {
+      await trusting.close();
     }
   });
 });

@@ -10,8 +10,6 @@
  * (helmet, pino-http, express.json, session, loadUser, CSRF) on both sides, and only the route
  * (zod parsing, Drizzle, the service) differs.
  */
-import { mkdtempSync, rmSync } from 'node:fs';
-import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import express, { type Request, type RequestHandler, type Response } from 'express';
 import { hasRole } from '@shared/roles';
@@ -22,7 +20,7 @@ import { hashPassword } from '../../server/accounts/passwords';
 import { migrateDatabase, openDatabase, type Database } from '../../server/db/client';
 import type { UserRow } from '../../server/db/schema/users';
 import { HttpError } from '../../server/lib/http-error';
-import { checkoutReturnRequests, closeServed, drive, elapsedSince, fmt, mean, median, serveApp, signIn, type Member, type Run, type Served } from './http-bench';
+import { checkoutReturnRequests, closeServed, drive, elapsedSince, fmt, mean, median, noRefusals, printLoadAverage, runBench, serveApp, signIn, type Member, type Run, type Served } from './http-bench';
 
 const CONNECTIONS = 50;
 const WARMUP_SECONDS = 3;
@@ -294,20 +292,10 @@ Each side: createApp() on its own temporary WAL file (openDatabase + migrateData
 `);
 }
 
-async function main(): Promise<void> {
+async function main(dir: string): Promise<boolean> {
   if (PHASES_PER_SIDE * CONNECTIONS >= TRAY_FROM) throw new Error('Not enough seeded tools for a fresh block per phase.');
-  const dir = mkdtempSync(join(tmpdir(), 'gripline-bench-'));
-  const cleanup = () => rmSync(dir, { recursive: true, force: true });
-  process.once('exit', cleanup);
-  const watchdog = setTimeout(() => {
-    console.error(`The bench ran past ${WATCHDOG_MS / 1000} s; stopping.`);
-    process.exit(1);
-  }, WATCHDOG_MS);
-  watchdog.unref();
-
   header();
   const targets: Target[] = [];
-  let failed = false;
   try {
     const passwordHash = await hashPassword(PASSWORD);
     const gripline = await buildTarget('gripline', dir, passwordHash);
@@ -371,8 +359,7 @@ async function main(): Promise<void> {
     console.log(
       `(closed loop: mean latency = connections / throughput, so p99 < ${GOAL_P99_MS} ms at ${CONNECTIONS} connections needs well over ${neededRps.toFixed(0)} req/s; the baseline, with the same middleware, made ${b.reqPerSec.toFixed(0)})`,
     );
-    const [load1] = loadavg();
-    console.log(`load average now: ${load1!.toFixed(1)} on ${availableParallelism()} cores (other work on this machine moves absolute figures; compare ratios)`);
+    printLoadAverage();
 
     for (const t of targets) {
       const loans = t.db.$client.prepare('select count(*) as n, count(returned_at) as closed from loans').get() as { n: number; closed: number };
@@ -380,22 +367,10 @@ async function main(): Promise<void> {
       console.log(`${t.side.padEnd(9)} wrote ${loans.n} loans (${loans.closed} returned) and ${events.n} tool_events rows`);
     }
 
-    const bad = all.filter((f) => f.non2xx > 0 || f.errors > 0 || f.timeouts > 0);
-    if (bad.length > 0) {
-      failed = true;
-      for (const f of bad) {
-        console.error(`FAILED: ${f.side}: ${f.non2xx} non-2xx, ${f.errors} errors, ${f.timeouts} timeouts (${f.statusCodes}); a bench full of refusals measures nothing.`);
-      }
-    }
+    return noRefusals(all, (f) => f.side);
   } finally {
     for (const t of targets) await closeServed(t);
-    cleanup();
-    clearTimeout(watchdog);
   }
-  if (failed) process.exitCode = 1;
 }
 
-main().catch((err: unknown) => {
-  console.error(err);
-  process.exitCode = 1;
-});
+void runBench('bench', 'gripline-bench-', WATCHDOG_MS, main);

@@ -3,9 +3,11 @@
  * signing in over HTTP, driving per-connection request lists with autocannon in a worker thread,
  * and the server thread's CPU time per answered request.
  */
-import { readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { availableParallelism, loadavg, tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { fileURLToPath } from 'node:url';
 import autocannon from 'autocannon';
@@ -174,6 +176,45 @@ function mainThreadCpuMs(): number | undefined {
   } catch {
     return undefined;
   }
+}
+
+/**
+ * Runs a bench's `body` with a fresh temporary directory (removed at exit) under a watchdog that
+ * stops it after `watchdogMs`. The exit code is 1 when `body` throws or answers false.
+ */
+export async function runBench(what: string, dirPrefix: string, watchdogMs: number, body: (dir: string) => Promise<boolean>): Promise<void> {
+  const dir = mkdtempSync(join(tmpdir(), dirPrefix));
+  const cleanup = () => rmSync(dir, { recursive: true, force: true });
+  process.once('exit', cleanup);
+  const watchdog = setTimeout(() => {
+    console.error(`The ${what} ran past ${watchdogMs / 1000} s; stopping.`);
+    process.exit(1);
+  }, watchdogMs);
+  watchdog.unref();
+  try {
+    if (!(await body(dir))) process.exitCode = 1;
+  } catch (err: unknown) {
+    console.error(err);
+    process.exitCode = 1;
+  } finally {
+    cleanup();
+    clearTimeout(watchdog);
+  }
+}
+
+/** Printed under every table: other work on a shared machine moves absolute figures. */
+export function printLoadAverage(): void {
+  const [load1] = loadavg();
+  console.log(`load average now: ${load1!.toFixed(1)} on ${availableParallelism()} cores (other work on this machine moves absolute figures; compare ratios)`);
+}
+
+/** Reports every run that met refusals, errors or timeouts; true when none did. */
+export function noRefusals<R extends Run>(runs: R[], nameOf: (run: R) => string): boolean {
+  const bad = runs.filter((f) => f.non2xx > 0 || f.errors > 0 || f.timeouts > 0);
+  for (const f of bad) {
+    console.error(`FAILED: ${nameOf(f)}: ${f.non2xx} non-2xx, ${f.errors} errors, ${f.timeouts} timeouts (${f.statusCodes}); a bench full of refusals measures nothing.`);
+  }
+  return bad.length === 0;
 }
 
 export const fmt = (n: number, digits = 1, width = 9) => n.toFixed(digits).padStart(width);

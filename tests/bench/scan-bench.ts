@@ -7,8 +7,6 @@
  * over HTTP as the demo member on every connection. GET /api/health (no session, no database) is
  * shown beside them as the ceiling of the middleware in front of every route.
  */
-import { mkdtempSync, rmSync } from 'node:fs';
-import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { migrateDatabase, openDatabase } from '../../server/db/client';
 import { DEMO_PASSWORD, seedDemoChapter } from '../../server/seed/demo-chapter';
@@ -21,6 +19,9 @@ import {
   mean,
   median,
   memberHeaders,
+  noRefusals,
+  printLoadAverage,
+  runBench,
   serveApp,
   signIn,
   type BenchRequest,
@@ -135,19 +136,10 @@ every connection is signed in over HTTP as ${MEMBER} (its own session cookie and
 `);
 }
 
-async function main(): Promise<void> {
-  const dir = mkdtempSync(join(tmpdir(), 'gripline-scan-bench-'));
-  const cleanup = () => rmSync(dir, { recursive: true, force: true });
-  process.once('exit', cleanup);
-  const watchdog = setTimeout(() => {
-    console.error(`The scan bench ran past ${WATCHDOG_MS / 1000} s; stopping.`);
-    process.exit(1);
-  }, WATCHDOG_MS);
-  watchdog.unref();
+async function main(dir: string): Promise<boolean> {
   const elapsed = elapsedSince(Date.now());
 
   let scene: Scene | undefined;
-  let failed = false;
   try {
     scene = await buildScene(dir);
     header(scene);
@@ -188,23 +180,11 @@ async function main(): Promise<void> {
     console.log(` × checkout: the median over rounds of req/s against the checkout/return run of the same round;`);
     console.log(` cpu ×: checkout/return CPU per request over this kind's, the throughput ratio when the CPU is ours alone)`);
     console.log(`scan reads at least ${GOAL_RATIO.toFixed(2)}× the checkout/return rate: ${goalMet ? 'met' : 'NOT met'}`);
-    const [load1] = loadavg();
-    console.log(`load average now: ${load1!.toFixed(1)} on ${availableParallelism()} cores (other work on this machine moves absolute figures; compare ratios)`);
-
-    const bad = all.filter((f) => f.non2xx > 0 || f.errors > 0 || f.timeouts > 0);
-    for (const f of bad) {
-      failed = true;
-      console.error(`FAILED: ${f.kind}: ${f.non2xx} non-2xx, ${f.errors} errors, ${f.timeouts} timeouts (${f.statusCodes}); a bench full of refusals measures nothing.`);
-    }
+    printLoadAverage();
+    return noRefusals(all, (f) => f.kind);
   } finally {
     if (scene) await closeServed(scene.served);
-    cleanup();
-    clearTimeout(watchdog);
   }
-  if (failed) process.exitCode = 1;
 }
 
-main().catch((err: unknown) => {
-  console.error(err);
-  process.exitCode = 1;
-});
+void runBench('scan bench', 'gripline-scan-bench-', WATCHDOG_MS, main);

@@ -1,19 +1,10 @@
-import type { Browser, Locator } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Locator } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/seed/demo-chapter';
-import { launchChromium, signedInPhone, startBuiltApp } from '../helpers/browser';
+import { signedInPhone } from '../helpers/browser';
+import { builtAppWithChromium } from '../helpers/browser-suite';
 
-let app: Awaited<ReturnType<typeof startBuiltApp>>;
-let browser: Browser;
-
-beforeAll(async () => {
-  app = await startBuiltApp();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
-});
+const suite = builtAppWithChromium();
 
 async function fillLine(line: Locator, v: { length: string; pitch: string; sheets: string[]; kind: string; diameter: string }) {
   await line.getByLabel('Length (in)').fill(v.length);
@@ -28,8 +19,8 @@ async function fillLine(line: Locator, v: { length: string; pitch: string; sheet
 
 describe('a member planning an assembly on a phone', () => {
   it('enters two rivet lines, sees the live estimate, saves, and holds the kit', async () => {
-    const page = await signedInPhone(browser, app.url, 'member@example.org', DEMO_PASSWORD);
-    await page.goto(`${app.url}/builds`);
+    const page = await signedInPhone(suite.browser, suite.app.url, 'member@example.org', DEMO_PASSWORD);
+    await page.goto(`${suite.app.url}/builds`);
     await page.getByRole('button', { name: 'New build' }).click();
     await page.getByLabel('Build name').fill('Baggage door');
     await page.getByRole('button', { name: 'Start the build' }).click();

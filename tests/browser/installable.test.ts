@@ -3,24 +3,14 @@ import { createServer } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import type { Browser, Page, Response } from 'playwright-core';
+import type { Page, Response } from 'playwright-core';
 import sharp from 'sharp';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { CLIENT_DIR } from '../../server/main';
-import { launchChromium, startBuiltApp } from '../helpers/browser';
+import { builtAppWithChromium } from '../helpers/browser-suite';
 import { buildTestApp } from '../helpers/test-app';
 
-let app: Awaited<ReturnType<typeof startBuiltApp>>;
-let browser: Browser;
-
-beforeAll(async () => {
-  app = await startBuiltApp();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
-});
+const suite = builtAppWithChromium();
 
 interface ManifestIcon {
   src: string;
@@ -30,7 +20,7 @@ interface ManifestIcon {
 }
 
 async function fetchOk(path: string): Promise<globalThis.Response> {
-  const res = await fetch(new URL(path, app.url));
+  const res = await fetch(new URL(path, suite.app.url));
   expect(res.status, path).toBe(200);
   return res;
 }
@@ -59,8 +49,8 @@ async function serviceWorkerActive(page: Page): Promise<string> {
 
 describe('Gripline as an installable app', () => {
   it('links a web app manifest with our name, colours and icons at the usual sizes', async () => {
-    const page = await browser.newPage();
-    await page.goto(`${app.url}/sign-in`);
+    const page = await suite.browser.newPage();
+    await page.goto(`${suite.app.url}/sign-in`);
     const href = await page.locator('link[rel="manifest"]').getAttribute('href');
     const appleIcon = await page.locator('link[rel="apple-touch-icon"]').getAttribute('href');
     await page.close();
@@ -102,12 +92,12 @@ describe('Gripline as an installable app', () => {
   });
 
   it('opens with no network once visited: the app shell, the fonts and the scanner come from its own cache', async () => {
-    const context = await browser.newContext({ serviceWorkers: 'allow', viewport: { width: 360, height: 780 } });
+    const context = await suite.browser.newContext({ serviceWorkers: 'allow', viewport: { width: 360, height: 780 } });
     const page = await context.newPage();
-    await page.goto(`${app.url}/sign-in`);
-    expect(await serviceWorkerActive(page)).toBe(`${app.url}/`);
+    await page.goto(`${suite.app.url}/sign-in`);
+    expect(await serviceWorkerActive(page)).toBe(`${suite.app.url}/`);
     await page.reload();
-    expect(await page.evaluate(() => navigator.serviceWorker.controller?.scriptURL)).toBe(`${app.url}/sw.js`);
+    expect(await page.evaluate(() => navigator.serviceWorker.controller?.scriptURL)).toBe(`${suite.app.url}/sw.js`);
 
     const cached = await page.evaluate(async () => {
       const urls: string[] = [];
@@ -125,10 +115,10 @@ describe('Gripline as an installable app', () => {
     page.on('requestfailed', (request) => failed.push(new URL(request.url()).pathname));
     page.on('pageerror', (error) => errors.push(error.message));
     for (const path of ['/', '/scan', '/sign-in']) {
-      const response: Response | null = await page.goto(`${app.url}${path}`);
+      const response: Response | null = await page.goto(`${suite.app.url}${path}`);
       expect(response?.status(), path).toBe(200);
       expect(response?.fromServiceWorker(), path).toBe(true);
-      expect(page.url()).toMatch(new RegExp(`^${app.url}`));
+      expect(page.url()).toMatch(new RegExp(`^${suite.app.url}`));
       // Signed out and offline, the shell shows while the sign-in check waits for the network.
       await page.getByText('Gripline', { exact: true }).first().waitFor();
       await page.screenshot({ path: `test-results/offline${path === '/' ? '-home' : path.replace('/', '-')}.png` });
@@ -174,7 +164,7 @@ async function serveClientCopy() {
 describe('a new version of the installed app', () => {
   it('says "Update ready", keeps a half-filled form, and reloads only on the tap', async () => {
     const served = await serveClientCopy();
-    const context = await browser.newContext({ serviceWorkers: 'allow', viewport: { width: 360, height: 780 } });
+    const context = await suite.browser.newContext({ serviceWorkers: 'allow', viewport: { width: 360, height: 780 } });
     try {
       const page = await context.newPage();
       await page.goto(`${served.url}/sign-in`);

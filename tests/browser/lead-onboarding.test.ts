@@ -1,25 +1,18 @@
 import { mkdirSync } from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/seed/demo-chapter';
-import { launchChromium, startBuiltApp } from '../helpers/browser';
+import { builtAppWithChromium } from '../helpers/browser-suite';
 
 const SHOTS = 'test-results';
-let app: Awaited<ReturnType<typeof startBuiltApp>>;
-let browser: Browser;
+const suite = builtAppWithChromium();
 
-beforeAll(async () => {
+beforeAll(() => {
   mkdirSync(SHOTS, { recursive: true });
-  app = await startBuiltApp();
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
 });
 
 async function phonePage(): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 360, height: 780 }, deviceScaleFactor: 1 });
+  const context = await suite.browser.newContext({ viewport: { width: 360, height: 780 }, deviceScaleFactor: 1 });
   return context.newPage();
 }
 
@@ -30,7 +23,7 @@ async function openFromMenu(page: Page, name: string) {
 }
 
 async function signIn(page: Page, email: string, password: string) {
-  await page.goto(`${app.url}/`);
+  await page.goto(`${suite.app.url}/`);
   await page.waitForURL(/\/sign-in/);
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password', { exact: true }).fill(password);
@@ -61,7 +54,7 @@ describe('the demo lead on a phone', () => {
 
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.waitForURL(/\/sign-in/);
-    await page.goto(`${app.url}/people`);
+    await page.goto(`${suite.app.url}/people`);
     await page.waitForURL(/\/sign-in\?next=%2Fpeople/);
     await page.context().close();
 

@@ -1,13 +1,11 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen, waitFor, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { createMemoryRouter, RouterProvider } from 'react-router';
 import { beforeEach, describe, expect, it } from 'vitest';
 import type { Assembly, Build } from '@shared/schemas/builds';
 import { AssemblyEditRoute, assemblyEditLoader, AssemblyNewRoute, assemblyNewLoader } from '@/app/routes/app/assembly-edit';
 import { setCsrfToken } from '@/lib/api-client';
 import { assemblyFixture, buildFixture, rudderFixture } from '../helpers/assembly-fixture';
-import { fakeFetch, type FakeCall } from '../helpers/render';
+import { fakeFetch, renderRoutes, testQueryClient, type FakeCall } from '../helpers/render';
 
 const ME = { id: 2, name: 'Ruth Lindqvist', email: 'member@example.org', role: 'member' };
 
@@ -33,21 +31,16 @@ function serve({ build = buildFixture(1), assembly, preferredUnit, settings }: S
 }
 
 function renderEditor(path = '/builds/1/assemblies/new') {
-  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  const router = createMemoryRouter(
+  const queryClient = testQueryClient();
+  return renderRoutes(
+    queryClient,
     [
       { path: '/builds/:id/assemblies/new', loader: assemblyNewLoader(queryClient), Component: AssemblyNewRoute, HydrateFallback: () => null },
       { path: '/assemblies/:id/edit', loader: assemblyEditLoader(queryClient), Component: AssemblyEditRoute, HydrateFallback: () => null },
       { path: '/assemblies/:id', element: <p>estimate page</p> },
     ],
-    { initialEntries: [path] },
+    path,
   );
-  render(
-    <QueryClientProvider client={queryClient}>
-      <RouterProvider router={router} />
-    </QueryClientProvider>,
-  );
-  return router;
 }
 
 const line = (n: number) => within(screen.getByRole('group', { name: `Rivet line ${n}` }));

@@ -1,13 +1,11 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen, waitFor, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { createMemoryRouter, RouterProvider } from 'react-router';
 import { beforeEach, describe, expect, it } from 'vitest';
 import type { AssemblyEstimate, KitHoldsResult } from '@shared/schemas/builds';
 import { AssemblyDetailRoute, assemblyDetailLoader } from '@/app/routes/app/assembly-detail';
 import { setCsrfToken } from '@/lib/api-client';
 import { estimateFixture, rudderFixture } from '../helpers/assembly-fixture';
-import { fakeFetch, type FakeCall } from '../helpers/render';
+import { fakeFetch, renderRoutes, testQueryClient, type FakeCall } from '../helpers/render';
 
 const OWNER = { id: 2, name: 'Ruth Lindqvist', email: 'member@example.org', role: 'member' };
 const QUARTERMASTER = { id: 3, name: 'Marco Bellweather', email: 'qm@example.org', role: 'quartermaster' };
@@ -85,15 +83,8 @@ function serve(me = OWNER, hold: { status: number; body: unknown } = { status: 2
 }
 
 function renderPage() {
-  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  const router = createMemoryRouter([{ path: '/assemblies/:id', loader: assemblyDetailLoader(queryClient), Component: AssemblyDetailRoute, HydrateFallback: () => null }], {
-    initialEntries: ['/assemblies/7'],
-  });
-  render(
-    <QueryClientProvider client={queryClient}>
-      <RouterProvider router={router} />
-    </QueryClientProvider>,
-  );
+  const queryClient = testQueryClient();
+  renderRoutes(queryClient, [{ path: '/assemblies/:id', loader: assemblyDetailLoader(queryClient), Component: AssemblyDetailRoute, HydrateFallback: () => null }], '/assemblies/7');
   return screen.findByRole('heading', { level: 1, name: 'Rudder' });
 }
 

@@ -1,7 +1,6 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen, waitFor, within } from '@testing-library/react';
+import { QueryClient } from '@tanstack/react-query';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { createMemoryRouter, RouterProvider } from 'react-router';
 import { beforeEach, describe, expect, it } from 'vitest';
 import type { BinForYou, Movement } from '@shared/schemas/bins';
 import { BinDetailRoute, binDetailLoader } from '@/app/routes/app/bin-detail';
@@ -10,7 +9,7 @@ import { authKeys } from '@/features/auth/api/keys';
 import { setCsrfToken } from '@/lib/api-client';
 import { assemblyFixture } from '../helpers/assembly-fixture';
 import { binFixture } from '../helpers/bin-fixture';
-import { fakeFetch, type FakeCall } from '../helpers/render';
+import { fakeFetch, renderRoutes, testQueryClient, type FakeCall } from '../helpers/render';
 
 type Role = 'member' | 'quartermaster';
 const PEOPLE = { member: { id: 2, name: 'Ruth Lindqvist' }, quartermaster: { id: 3, name: 'Marco Bellweather' } };
@@ -102,13 +101,8 @@ function serve(role: Role, opts: { bin?: BinForYou; answer?: (call: FakeCall) =>
 }
 
 function renderBinPage() {
-  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  const router = createMemoryRouter([{ path: '/bins/:code', loader: binDetailLoader(queryClient), Component: BinDetailRoute, HydrateFallback: () => null }], { initialEntries: ['/bins/B-0107'] });
-  render(
-    <QueryClientProvider client={queryClient}>
-      <RouterProvider router={router} />
-    </QueryClientProvider>,
-  );
+  const queryClient = testQueryClient();
+  renderRoutes(queryClient, [{ path: '/bins/:code', loader: binDetailLoader(queryClient), Component: BinDetailRoute, HydrateFallback: () => null }], '/bins/B-0107');
   return screen.findByRole('heading', { level: 1 });
 }
 
@@ -279,23 +273,18 @@ describe('the ledger on the bin page', () => {
 
 describe('the Scan screen', () => {
   function renderScan() {
-    const router = createMemoryRouter(
+    // Signed out here: the Scan screen reads who is signed in only to say whether an offline copy is kept.
+    const queryClient = new QueryClient();
+    queryClient.setQueryData(authKeys.me(), null);
+    return renderRoutes(
+      queryClient,
       [
         { path: '/scan', Component: ScanRoute },
         { path: '/bins/:code', element: <p>bin page</p> },
         { path: '/tools/:code', element: <p>tool page</p> },
       ],
-      { initialEntries: ['/scan'] },
+      '/scan',
     );
-    // Signed out here: the Scan screen reads who is signed in only to say whether an offline copy is kept.
-    const queryClient = new QueryClient();
-    queryClient.setQueryData(authKeys.me(), null);
-    render(
-      <QueryClientProvider client={queryClient}>
-        <RouterProvider router={router} />
-      </QueryClientProvider>,
-    );
-    return router;
   }
 
   it('opens a typed bin code on its bin page', async () => {

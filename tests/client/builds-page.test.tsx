@@ -1,13 +1,11 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen, waitFor, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { createMemoryRouter, RouterProvider } from 'react-router';
 import { beforeEach, describe, expect, it } from 'vitest';
 import type { Build } from '@shared/schemas/builds';
 import { BuildsRoute, buildsLoader } from '@/app/routes/app/builds';
 import { setCsrfToken } from '@/lib/api-client';
 import { buildFixture } from '../helpers/assembly-fixture';
-import { fakeFetch } from '../helpers/render';
+import { fakeFetch, renderRoutes, testQueryClient } from '../helpers/render';
 
 const MEMBER = { id: 2, name: 'Ruth Lindqvist', email: 'member@example.org', role: 'member' };
 const QUARTERMASTER = { id: 3, name: 'Marco Bellweather', email: 'qm@example.org', role: 'quartermaster' };
@@ -34,13 +32,8 @@ function serve(me: typeof MEMBER, preferredUnit: 'in' | 'mm' = 'in') {
 }
 
 function renderPage() {
-  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  const router = createMemoryRouter([{ path: '/builds', loader: buildsLoader(queryClient), Component: BuildsRoute, HydrateFallback: () => null }], { initialEntries: ['/builds'] });
-  render(
-    <QueryClientProvider client={queryClient}>
-      <RouterProvider router={router} />
-    </QueryClientProvider>,
-  );
+  const queryClient = testQueryClient();
+  renderRoutes(queryClient, [{ path: '/builds', loader: buildsLoader(queryClient), Component: BuildsRoute, HydrateFallback: () => null }], '/builds');
   return screen.findByRole('heading', { level: 1 });
 }
 

@@ -1,8 +1,8 @@
 import 'fake-indexeddb/auto';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen, waitFor, within } from '@testing-library/react';
+import { QueryClient } from '@tanstack/react-query';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { createMemoryRouter, Outlet, RouterProvider } from 'react-router';
+import { Outlet } from 'react-router';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { requireSignedIn } from '@/app/routes/app/guards';
 import { QueueRoute } from '@/app/routes/app/queue';
@@ -13,6 +13,7 @@ import { enqueue, markRefused, waitingOf } from '@/features/offline/api/queue';
 import { OfflineBanner } from '@/features/offline/components/offline-banner';
 import { offlineDb } from '@/features/offline/db';
 import { catalogueFixture, catalogueTool } from '../helpers/catalogue-fixture';
+import { renderRoutes } from '../helpers/render';
 
 const MARCO = { id: 7, name: 'Marco Bellweather', email: 'member@example.org', role: 'member' as const };
 const TEN_MIN_AGO = () => new Date(Date.now() - 10 * 60_000).toISOString();
@@ -20,7 +21,8 @@ const TEN_MIN_AGO = () => new Date(Date.now() - 10 * 60_000).toISOString();
 function renderOffline(path: string) {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   queryClient.setQueryData(authKeys.me(), MARCO);
-  const router = createMemoryRouter(
+  return renderRoutes(
+    queryClient,
     [
       {
         path: '/',
@@ -37,14 +39,8 @@ function renderOffline(path: string) {
         ],
       },
     ],
-    { initialEntries: [path] },
+    path,
   );
-  render(
-    <QueryClientProvider client={queryClient}>
-      <RouterProvider router={router} />
-    </QueryClientProvider>,
-  );
-  return router;
 }
 
 let fetchSpy: ReturnType<typeof vi.fn>;

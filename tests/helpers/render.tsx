@@ -1,12 +1,26 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { render } from '@testing-library/react';
 import type { ReactElement } from 'react';
-import { createMemoryRouter, RouterProvider } from 'react-router';
+import { createMemoryRouter, RouterProvider, type RouteObject } from 'react-router';
 import { vi } from 'vitest';
+
+/** A fresh QueryClient that never retries, so a failing fake answer shows at once. */
+export const testQueryClient = () => new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+
+/** Renders `routes` in a memory router opened at `path`, inside `queryClient`; the router lets a test see where it went. */
+export function renderRoutes(queryClient: QueryClient, routes: RouteObject[], path: string) {
+  const router = createMemoryRouter(routes, { initialEntries: [path] });
+  render(
+    <QueryClientProvider client={queryClient}>
+      <RouterProvider router={router} />
+    </QueryClientProvider>,
+  );
+  return router;
+}
 
 /** Renders a component inside a fresh QueryClient and a memory router. */
 export function renderWithProviders(ui: ReactElement, path = '/') {
-  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+  const queryClient = testQueryClient();
   const router = createMemoryRouter([{ path: '*', element: ui }], { initialEntries: [path] });
   return {
     queryClient,

@@ -9,7 +9,7 @@ import {
 } from '@shared/schemas/overdue';
 import type { ServiceContext } from '../../context';
 import { listServiceCandidates } from './service-due.repo';
-import { serviceDueAt } from './tool-dto';
+import { serviceDueAt, toolIdentity } from './tool-dto';
 import type { ToolRow } from './tools.repo';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
@@ -39,11 +39,7 @@ function toItem(row: ToolRow, now: Date): ServiceDueItem | undefined {
     daysUntilDue !== null && daysUntilDue <= SERVICE_DUE_WITHIN_DAYS ? serviceDueWords(kind, daysUntilDue) : undefined,
   ].filter(Boolean);
   return {
-    code: row.code,
-    name: row.name,
-    category: row.category,
-    location: row.location,
-    status: row.status,
+    ...toolIdentity(row),
     outOfServiceReason: outOfService ? row.statusNote : null,
     serviceKind: kind,
     serviceIntervalDays: row.serviceIntervalDays,

@@ -3,7 +3,7 @@ import type { CatalogueTool } from '@shared/schemas/offline';
 import type { Database, Executor } from '../../db/client';
 import { tools } from '../../db/schema/tools';
 import { listActiveGrants } from './signoffs.repo';
-import { effectiveLoanDays } from './tool-dto';
+import { effectiveLoanDays, toolIdentity } from './tool-dto';
 import { loadToolExtras } from './tools.repo';
 
 /** Every tool a scan may find (all but retired ones), as a phone keeps it for offline use: five queries in all. */
@@ -13,11 +13,7 @@ export function catalogueTools(db: Database): CatalogueTool[] {
   return rows.map((row) => {
     const loan = extras.loans.get(row.id);
     return {
-      code: row.code,
-      name: row.name,
-      category: row.category,
-      location: row.location,
-      status: row.status,
+      ...toolIdentity(row),
       accessories: JSON.parse(row.accessories) as string[],
       loanDays: effectiveLoanDays(row),
       requiredSignoffId: row.requiredSignoffId,

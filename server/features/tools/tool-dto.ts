@@ -14,6 +14,11 @@ export function serviceDueAt(row: Pick<ToolRow, 'serviceIntervalDays' | 'lastSer
   return new Date((row.lastServiceAt ?? row.createdAt).getTime() + row.serviceIntervalDays * DAY_MS);
 }
 
+/** What every list of tools says of each: its code and name, kind, where it lives, and its state. */
+export function toolIdentity(row: Pick<ToolRow, 'code' | 'name' | 'category' | 'location' | 'status'>) {
+  return { code: row.code, name: row.name, category: row.category, location: row.location, status: row.status };
+}
+
 export function toTool(row: ToolRow, extras: ToolExtras): Tool {
   const loan = extras.loans.get(row.id);
   const hold = extras.holds.get(row.id);

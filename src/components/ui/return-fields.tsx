@@ -1,6 +1,7 @@
 import { useState, type ReactNode } from 'react';
 import { ConditionField, type ReturnCondition } from '@/components/ui/condition-field';
 import { TextField } from '@/components/ui/field';
+import { returnBodySchema, type ReturnBody } from '@shared/schemas/tools';
 
 /** What a return form needs to know of the tool coming back. */
 export interface ReturnedTool {
@@ -16,6 +17,26 @@ export interface ReturnFieldValues {
 }
 
 export const isTray = (tool: ReturnedTool): boolean => tool.category === 'temporary_fastener_tray';
+
+/**
+ * The return's body from the fields, or the sentence that says what to fix. A tray with its count
+ * cleared is asked for a count, never sent as 0 (which would record every fastener as lost).
+ */
+export function returnBodyFrom(tool: ReturnedTool, { condition, note, count }: ReturnFieldValues): { body: ReturnBody } | { problem: string } {
+  const tray = isTray(tool);
+  if (tray && count.trim() === '') return { problem: 'Count the temporary fasteners that came back.' };
+  const parsed = returnBodySchema.safeParse({
+    condition,
+    ...(note.trim() && { note: note.trim() }),
+    ...(tray && { returnedCount: Number(count) }),
+  });
+  if (!parsed.success) return { problem: parsed.error.issues[0]?.message ?? 'Check the return.' };
+  const counted = parsed.data.returnedCount;
+  if (tray && tool.trayCapacity !== null && counted !== undefined && counted > tool.trayCapacity) {
+    return { problem: `A full tray holds ${tool.trayCapacity}. Count again.` };
+  }
+  return { body: parsed.data };
+}
 
 /** Fresh return fields: works fine, no note, and a tray assumed full until counted. */
 export function useReturnFieldValues(tool: ReturnedTool) {

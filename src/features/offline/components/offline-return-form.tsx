@@ -1,34 +1,24 @@
 import { useState } from 'react';
 import type { CatalogueTool } from '@shared/schemas/offline';
-import { returnBodySchema } from '@shared/schemas/tools';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
-import { isTray, ReturnFields, useReturnFieldValues } from '@/components/ui/return-fields';
+import { ReturnFields, returnBodyFrom, useReturnFieldValues } from '@/components/ui/return-fields';
 import { queueFromCopy } from '../api/queue-from-copy';
 import type { StoredCatalogue } from '../db';
 
 /** Return from the copy: ok or needs attention (with a note), and the count for a temporary fastener tray. */
 export function OfflineReturnForm({ copy, tool }: { copy: StoredCatalogue; tool: CatalogueTool }) {
-  const tray = isTray(tool);
   const [fields, setFields] = useReturnFieldValues(tool);
   const [problem, setProblem] = useState<string>();
   const [busy, setBusy] = useState(false);
 
   const submit = async () => {
-    const { condition, note, count } = fields;
-    const parsed = returnBodySchema.safeParse({
-      condition,
-      ...(note.trim() && { note: note.trim() }),
-      ...(tray && { returnedCount: count === '' ? undefined : Number(count) }),
-    });
-    if (!parsed.success) return setProblem(parsed.error.issues[0]?.message);
-    if (tray && tool.trayCapacity !== null && (parsed.data.returnedCount ?? 0) > tool.trayCapacity) {
-      return setProblem(`A full tray holds ${tool.trayCapacity}. Count again.`);
-    }
+    const made = returnBodyFrom(tool, fields);
+    if ('problem' in made) return setProblem(made.problem);
     setProblem(undefined);
     setBusy(true);
     try {
-      await queueFromCopy(copy, 'return', tool.code, tool.name, parsed.data);
+      await queueFromCopy(copy, 'return', tool.code, tool.name, made.body);
     } finally {
       setBusy(false);
     }

@@ -3,7 +3,7 @@ import { toast } from 'sonner';
 import type { ToolForYou } from '@shared/schemas/tools';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
-import { isTray, ReturnFields, useReturnFieldValues } from '@/components/ui/return-fields';
+import { ReturnFields, returnBodyFrom, useReturnFieldValues } from '@/components/ui/return-fields';
 import { messageOf } from '@/lib/errors';
 import { useReturnTool } from '../api/tool-actions';
 
@@ -21,13 +21,9 @@ export function ReturnForm({ tool, photoSlot, onDone }: { tool: ToolForYou; phot
 
   const submit = () => {
     setProblem(undefined);
-    const { condition, note, count } = fields;
-    const body = {
-      condition,
-      ...(note.trim() && { note: note.trim() }),
-      ...(isTray(tool) && { returnedCount: Number(count) }),
-      ...(photoId !== undefined && { photoId }),
-    };
+    const made = returnBodyFrom(tool, fields);
+    if ('problem' in made) return setProblem(made.problem);
+    const body = { ...made.body, ...(photoId !== undefined && { photoId }) };
     giveBack.mutate(
       { code: tool.code, body },
       {

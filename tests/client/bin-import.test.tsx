@@ -127,3 +127,24 @@ describe('StockExportPanel', () => {
     expect(screen.getByRole('alert').textContent).toBe('The end date is before the start date: swap them.');
   });
 });
+
+describe('BinImportPanel reading a file that is not UTF-8', () => {
+  it('reads a Windows-1252 file with its accents intact and says how it was read', async () => {
+    const calls = fakeFetch((call) => (call.path === '/api/bins/import/preview' ? { status: 200, body: MIXED } : undefined));
+    renderWithProviders(<BinImportPanel />);
+    // "Société" with é as the single Windows-1252 byte 0xE9.
+    const bytes = Uint8Array.from([...'kind,notes\nscrew,Soci'].map((c) => c.charCodeAt(0)).concat([0xe9, 0x74, 0xe9, 0x0a]));
+    await userEvent.upload(screen.getByLabelText('CSV file'), new File([bytes], 'bins-1252.csv', { type: 'text/csv' }));
+    expect(await screen.findByText('bins-1252.csv is not UTF-8; it was read as Windows-1252 text. Check the accented letters in the preview.')).toBeTruthy();
+    await userEvent.click(screen.getByRole('button', { name: 'Check file' }));
+    await waitFor(() => expect(calls.at(-1)?.body).toEqual({ csv: 'kind,notes\nscrew,Société\n' }));
+  });
+
+  it('refuses a file that is not text, and sends nothing', async () => {
+    const calls = fakeFetch(() => undefined);
+    renderWithProviders(<BinImportPanel />);
+    await userEvent.upload(screen.getByLabelText('CSV file'), new File([Uint8Array.from([0x50, 0x4b, 0x03, 0x04, 0x81, 0x00])], 'bins.xlsx', { type: 'text/csv' }));
+    expect(await screen.findByText(/^bins\.xlsx: This file is not text Gripline can read/)).toBeTruthy();
+    expect(calls).toEqual([]);
+  });
+});

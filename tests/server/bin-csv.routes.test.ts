@@ -267,3 +267,32 @@ describe('GET /api/bins/import/template.csv', () => {
     expect(preview.rows.map((r) => r.designation)).toEqual(['Blind, structural, dome, 5056, steel stem · 1/8 in · grip −2 (0.063–0.125 in)', 'Screw #8-32 × 1/2 pan head, stainless']);
   });
 });
+
+describe('a CSV file that is not UTF-8', () => {
+  // "Société Aéro" with é as the single Windows-1252 byte 0xE9, as an older spreadsheet saves it.
+  const latin = (text: string) => Buffer.from(text, 'latin1');
+  const screwRow = ',Screw,Screw #8-32 × 1/2 pan head,,,,,,,each,50,0.09,Société Aéro,120';
+
+  it('is read as Windows-1252 when it plainly is, so accents arrive intact', async () => {
+    const res = await qm.agent.post('/api/bins/import').set('X-CSRF-Token', qm.csrf).type('text/csv').send(latin(csvOf(screwRow)));
+    expect(res.status).toBe(201);
+    const bins = (await qm.agent.get('/api/bins')).body as { data: { name: string; notes: string }[] };
+    expect(bins.data.map((b) => [b.name, b.notes])).toEqual([['Screw #8-32 × 1/2 pan head', 'Société Aéro']]);
+  });
+
+  it('is refused with 400 CSV_NOT_TEXT when it is neither UTF-8 nor Windows-1252, and nothing is created', async () => {
+    const bytes = Buffer.concat([Buffer.from(csvOf(GOOD_BLIND), 'utf8'), Buffer.from([0x0d, 0x0a, 0x81, 0x2c, 0x00])]);
+    const res = await qm.agent.post('/api/bins/import').set('X-CSRF-Token', qm.csrf).type('text/csv').send(bytes);
+    expect(res.status).toBe(400);
+    expect(errorEnvelopeSchema.parse(res.body).error.code).toBe('CSV_NOT_TEXT');
+    expect(await binCount()).toBe(0);
+  });
+
+  it('is refused, naming the line, when its text was already mangled into replacement characters', async () => {
+    const res = await post(qm, '/api/bins/import/preview', { csv: csvOf(GOOD_BLIND, screwRow.replace('Société', 'Soci\uFFFDt\uFFFD')) });
+    expect(res.status).toBe(400);
+    const { error } = errorEnvelopeSchema.parse(res.body);
+    expect(error.code).toBe('CSV_NOT_UTF8');
+    expect(error.message).toContain('Line 3');
+  });
+});

@@ -1,5 +1,7 @@
 import express, { Router, type Request } from 'express';
 import { binImportBodySchema, ledgerExportQuerySchema } from '@shared/schemas/bin-import';
+import { decodeCsvBytes, lineWithReplacementCharacter } from '@shared/stock/csv-text';
+import { HttpError } from '../../lib/http-error';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { sendCsv } from '../../lib/csv';
 import { parseInput } from '../../lib/validate';
@@ -11,13 +13,32 @@ const IMPORT_BODY_LIMIT = '5mb';
 
 /**
  * Body parsers for /api/bins/import*, mounted before the API's small JSON parser (which then
- * leaves the parsed body alone): a {csv} JSON body, or the CSV itself as text/csv.
+ * leaves the parsed body alone): a {csv} JSON body, or the CSV file's bytes as text/csv, decoded
+ * here (UTF-8, or plainly Windows-1252) rather than by the parser, which would mangle the second.
  */
 export function binImportBodyParsers() {
-  return [express.json({ limit: IMPORT_BODY_LIMIT }), express.text({ type: ['text/csv', 'text/plain'], limit: IMPORT_BODY_LIMIT })];
+  return [express.json({ limit: IMPORT_BODY_LIMIT }), express.raw({ type: ['text/csv', 'text/plain'], limit: IMPORT_BODY_LIMIT })];
 }
 
-const csvOf = (req: Request) => parseInput(binImportBodySchema, typeof req.body === 'string' ? { csv: req.body } : req.body).csv;
+function csvText(body: unknown): unknown {
+  if (!Buffer.isBuffer(body)) return body;
+  const decoded = decodeCsvBytes(body);
+  if ('problem' in decoded) throw new HttpError(400, 'CSV_NOT_TEXT', decoded.problem);
+  return { csv: decoded.text };
+}
+
+function csvOf(req: Request): string {
+  const { csv } = parseInput(binImportBodySchema, csvText(req.body));
+  const mangled = lineWithReplacementCharacter(csv);
+  if (mangled !== undefined) {
+    throw new HttpError(
+      400,
+      'CSV_NOT_UTF8',
+      `Line ${mangled} holds characters that were lost when the file was read as UTF-8 (shown as �). In the spreadsheet, save it as "CSV UTF-8" and choose it again.`,
+    );
+  }
+  return csv;
+}
 
 /**
  * /api/bins CSV import and export, mounted before the bins router (whose /:code would take

@@ -1,6 +1,7 @@
 import { useId, useState, type ChangeEvent } from 'react';
 import { Link } from 'react-router';
 import { MAX_IMPORT_CSV_CHARS, type ImportResult } from '@shared/schemas/bin-import';
+import { decodeCsvBytes } from '@shared/stock/csv-text';
 import { Button } from '@/components/ui/button';
 import { TextAreaField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
@@ -40,6 +41,7 @@ export function BinImportPanel({ onImported }: { onImported?: (result: ImportRes
   const ids = useId();
   const [csv, setCsv] = useState('');
   const [readProblem, setReadProblem] = useState<string>();
+  const [readNote, setReadNote] = useState<string>();
   const check = usePreviewImport();
   const commit = useCommitImport(onImported);
   const preview = check.data && check.variables?.csv === csv ? check.data : undefined;
@@ -47,6 +49,7 @@ export function BinImportPanel({ onImported }: { onImported?: (result: ImportRes
   const edit = (text: string) => {
     setCsv(text);
     setReadProblem(undefined);
+    setReadNote(undefined);
     commit.reset();
   };
 
@@ -55,7 +58,10 @@ export function BinImportPanel({ onImported }: { onImported?: (result: ImportRes
     e.target.value = '';
     if (!file) return;
     if (file.size > MAX_IMPORT_CSV_CHARS) return setReadProblem(`${file.name} is larger than 2 MB. Split it into smaller files.`);
-    edit(await file.text());
+    const decoded = decodeCsvBytes(new Uint8Array(await file.arrayBuffer()));
+    if ('problem' in decoded) return setReadProblem(`${file.name}: ${decoded.problem}`);
+    edit(decoded.text);
+    if (decoded.encoding === 'windows-1252') setReadNote(`${file.name} is not UTF-8; it was read as Windows-1252 text. Check the accented letters in the preview.`);
   };
 
   const runImport = () =>
@@ -86,6 +92,7 @@ export function BinImportPanel({ onImported }: { onImported?: (result: ImportRes
       </div>
       <TextAreaField label="Or paste the CSV here" value={csv} onChange={(e) => edit(e.target.value)} rows={6} spellCheck={false} className="font-mono" />
       {readProblem && <Notice tone="bad">{readProblem}</Notice>}
+      {readNote && <Notice tone="warn">{readNote}</Notice>}
       {check.error && <Notice tone="bad">{messageOf(check.error)}</Notice>}
       <div className="flex flex-wrap gap-3">
         <Button variant="secondary" busy={check.isPending} disabled={csv.trim() === ''} onClick={() => check.mutate({ csv })}>

@@ -141,16 +141,35 @@ describe('sign-in rate limiting', () => {
     expect(other.status).toBe(401);
   });
 
-  it('answers 429 after too many failures from one address across accounts', async () => {
+  it('after too many failures from one address, refuses it on the accounts it failed on, yet lets a member behind it sign in', async () => {
     await t.close();
     t = await buildTestApp({ rateLimit: { windowMs: 60_000, perIp: 3, perAccount: 100 } });
+    await t.addUser({ email: 'member@example.org' });
     const { agent, csrf } = await t.anonymous();
     for (let i = 0; i < 3; i++) {
       const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: `u${i}@example.org`, password: 'nope' });
       expect(res.status).toBe(401);
     }
-    const blocked = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'u9@example.org', password: 'nope' });
-    expect(blocked.status).toBe(429);
-    expect(blocked.headers['retry-after']).toBeDefined();
+    const again = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'u0@example.org', password: 'nope' });
+    expect(again.status).toBe(429);
+    expect(again.headers['retry-after']).toBeDefined();
+    // The next guess at a new account from the same address is its last one there.
+    expect((await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'u9@example.org', password: 'nope' })).status).toBe(401);
+    expect((await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'u9@example.org', password: 'nope' })).status).toBe(429);
+    // A member behind the same address (one hangar network) who has not been failing still gets in.
+    expect((await t.signIn('member@example.org')).csrf).toBeTruthy();
+  });
+
+  it("does not lock the owner out when someone else keeps guessing the account's password from another address", async () => {
+    await t.close();
+    t = await buildTestApp({ rateLimit: { windowMs: 60_000, perIp: 100, perAccount: 3 }, trustProxyHops: 1 });
+    await t.addUser({ email: 'member@example.org' });
+    const { agent, csrf } = await t.anonymous();
+    const from = (address: string, password: string) =>
+      agent.post('/api/auth/login').set('X-CSRF-Token', csrf).set('X-Forwarded-For', address).send({ email: 'member@example.org', password });
+    for (let i = 0; i < 10; i++) await from('198.51.100.7', 'guess ' + i);
+    expect((await from('198.51.100.7', 'guess again')).status).toBe(429);
+    const owner = await from('203.0.113.20', PASSWORD);
+    expect(owner.status).toBe(200);
   });
 });

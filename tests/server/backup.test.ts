@@ -1,4 +1,4 @@
-import { execFileSync } from 'node:child_process';
+import { execFileSync, spawnSync } from 'node:child_process';
 import { copyFileSync, existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -13,7 +13,11 @@ import { backupsToDelete } from '../../server/backup/retention';
 import { backupDirFor, takeBackup } from '../../server/backup/take-backup';
 import { migrateDatabase, openDatabase } from '../../server/db/client';
 import { readEnv } from '../../server/env';
+import { receive } from '../../server/features/stock/ledger.service';
+import { findUserByEmail } from '../../server/accounts/users.repo';
+import { createSmtpMailer } from '../../server/mail/mailer';
 import { startGripline } from '../../server/main';
+import { seedDemoChapter } from '../../server/seed/demo-chapter';
 
 let dir: string;
 let dbPath: string;
@@ -71,11 +75,13 @@ async function waitFor(check: () => boolean) {
   expect(check()).toBe(true);
 }
 
+/** About 24 MB the test owns, so a copy takes long enough for the writer to commit during it. */
+const PADDING = 'create table test_padding (b blob); with recursive i(x) as (select 1 union all select x + 1 from i where x < 600) insert into test_padding select randomblob(40000) from i;';
+
 describe('takeBackup', () => {
   it('copies the database while another connection keeps writing: the copy passes integrity_check, is one consistent moment and holds every write acknowledged before it began', async () => {
     const live = makeDatabase();
-    // About 24 MB, so the copy takes long enough for the writer to commit during it.
-    live.exec('create table test_padding (b blob); with recursive i(x) as (select 1 union all select x + 1 from i where x < 600) insert into test_padding select randomblob(40000) from i;');
+    live.exec(PADDING);
     const writer = startWriter(dbPath);
     const source = new BetterSqlite3(dbPath, { fileMustExist: true });
     try {
@@ -103,6 +109,51 @@ describe('takeBackup', () => {
       await writer.stop();
       source.close();
       live.close();
+    }
+  });
+
+  it('copies the demo chapter while a member draws from a bin through the ledger service on another thread: every acknowledged draw is in the copy and every bin balances', async () => {
+    const db = openDatabase(dbPath);
+    migrateDatabase(db);
+    expect(await seedDemoChapter(db)).toBe(true);
+    const ctx = { db, mailer: createSmtpMailer('smtp://127.0.0.1:9', 'test@example.org'), publicUrl: 'http://gripline.test', now: () => new Date() };
+    const binCode = db.$client.prepare('select code from bins order by id limit 1').pluck().get() as string;
+    receive(ctx, findUserByEmail(db, 'quartermaster@example.org')!, binCode, { quantity: 1_000_000 });
+    ctx.mailer.close();
+    db.$client.exec(PADDING);
+
+    const shared = new Int32Array(new SharedArrayBuffer(8));
+    // The worker runs the app's TypeScript through tsx, as `npm start` does.
+    const worker = new Worker(`require('tsx/cjs/api').register(); require(${JSON.stringify(join(import.meta.dirname, '../helpers/ledger-draw-writer.ts'))});`, {
+      eval: true,
+      workerData: { path: dbPath, binCode, email: 'member@example.org', shared },
+    });
+    const done = new Promise((ok, fail) => worker.once('exit', ok).once('error', fail));
+    try {
+      await waitFor(() => Atomics.load(shared, 0) >= 50);
+      const acknowledgedBefore = Atomics.load(shared, 0);
+      const { file } = await takeBackup(db.$client, join(dir, 'backups'), new Date(2026, 11, 3, 2, 30));
+      const drawnDuring = Atomics.load(shared, 0) - acknowledgedBefore;
+      Atomics.store(shared, 1, 1);
+      await done;
+
+      const copy = new BetterSqlite3(file, { readonly: true });
+      expect(copy.pragma('integrity_check', { simple: true })).toBe('ok');
+      const notes = copy.prepare(`select note from stock_movements where note like 'stream %' order by id`).pluck().all() as string[];
+      const unbalanced = copy
+        .prepare('select b.code from bins b where b.on_hand != (select coalesce(sum(m.quantity), 0) from stock_movements m where m.bin_id = b.id)')
+        .pluck()
+        .all();
+      copy.close();
+
+      expect(drawnDuring).toBeGreaterThan(0);
+      expect(notes.length).toBeGreaterThanOrEqual(acknowledgedBefore);
+      expect(notes).toEqual(Array.from({ length: notes.length }, (_, i) => `stream ${i + 1}`));
+      expect(unbalanced).toEqual([]);
+    } finally {
+      Atomics.store(shared, 1, 1);
+      await done;
+      db.$client.close();
     }
   });
 
@@ -295,4 +346,34 @@ describe('restoreDatabase', () => {
     expect(numbers(dbPath)).toEqual([5]);
     expect(readdirSync(dir).filter((f) => f.includes('before-restore') || f.includes('.restoring'))).toEqual([]);
   });
+});
+
+describe('npm run backup and npm run restore', () => {
+  const run = (script: string, args: string[] = []) =>
+    spawnSync(join(process.cwd(), 'node_modules/.bin/tsx'), [`server/backup/${script}`, ...args], {
+      env: { ...process.env, DATABASE_PATH: dbPath, BACKUP_DIR: join(dir, 'copies'), LOG_LEVEL: 'silent' },
+      encoding: 'utf8',
+    });
+
+  it('back up while Gripline runs, refuse to restore until it stops, then restore', async () => {
+    makeDatabase().close();
+    const running = await startGripline(readEnv({ DATABASE_PATH: dbPath, PORT: '0', HOST: '127.0.0.1', SEED_DEMO: 'false', LOG_LEVEL: 'silent' }));
+    let backup = '';
+    try {
+      const taken = run('backup-command.ts');
+      expect(taken.status).toBe(0);
+      expect(taken.stdout).toMatch(/^Backed up .*gripline-\d{4}-\d{2}-\d{2}T\d{4}\.db \(\d+ pages, integrity checked\)\./);
+      backup = readdirSync(join(dir, 'copies'))[0]!;
+      const refused = run('restore-command.ts', [join(dir, 'copies', backup)]);
+      expect(refused.status).toBe(1);
+      expect(refused.stderr).toMatch(/^Nothing was restored\. .* is open in another process/);
+    } finally {
+      await running.close();
+    }
+    const restored = run('restore-command.ts', [join(dir, 'copies', backup)]);
+    expect(restored.stderr).toBe('');
+    expect(restored.status).toBe(0);
+    expect(restored.stdout).toMatch(/^Restored .* The database it replaced is kept as .*gripline\.before-restore-.*\.db\. Start Gripline again\./);
+    expect(run('restore-command.ts').stderr).toMatch(/^Name the backup to restore/);
+  }, 60_000);
 });

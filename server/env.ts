@@ -5,6 +5,8 @@ const envSchema = z.object({
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
   HOST: z.string().default('0.0.0.0'),
   DATABASE_PATH: z.string().min(1).default('data/gripline.db'),
+  /** Where backups go; unset: backups/ beside the database (server/backup/take-backup.ts). */
+  BACKUP_DIR: z.string().min(1).optional(),
   SESSION_SECRET: z.string().min(32, { error: 'SESSION_SECRET must be at least 32 characters.' }).optional(),
   SESSION_IDLE_MINUTES: z.coerce.number().int().positive().default(480),
   SECURE_COOKIES: z.stringbool().default(false),

@@ -3,6 +3,8 @@ import type { AddressInfo } from 'node:net';
 import { dirname, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { createApp } from './app';
+import { startBackupScheduler } from './backup/nightly-backup';
+import { backupDirFor } from './backup/take-backup';
 import { migrateDatabase, openDatabase } from './db/client';
 import type { Env } from './env';
 import type { LanCertificate } from './lan/lan-certificate';
@@ -72,6 +74,7 @@ export async function startGripline(env: Env, options: StartOptions = {}): Promi
   const jobContext = { db, mailer, publicUrl: env.PUBLIC_URL ?? url, now: () => new Date() };
   const scheduler = startCribScheduler(jobContext, logger, [{ name: 'sweep-idempotency-keys', run: () => sweepIdempotencyKeys(jobContext) }]);
   const planningScheduler = startPlanningScheduler(jobContext, logger);
+  const backupScheduler = env.DATABASE_PATH === ':memory:' ? undefined : startBackupScheduler(db.$client, backupDirFor(env), logger);
   logger.info({ url, mail: catcher ? 'caught locally' : 'SMTP_URL' }, 'Gripline is listening');
 
   return {
@@ -84,6 +87,7 @@ export async function startGripline(env: Env, options: StartOptions = {}): Promi
       });
       scheduler.stop();
       planningScheduler.stop();
+      backupScheduler?.stop();
       app.sessionStore.close();
       mailer.close();
       await catcher?.close();

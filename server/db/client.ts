@@ -21,7 +21,7 @@ export type Database = BetterSQLite3Database<typeof schema> & { $client: BetterS
 /** The database or a transaction on it: what repositories take. */
 export type Executor = BaseSQLiteDatabase<'sync', BetterSqlite3.RunResult, typeof schema>;
 
-const MIGRATIONS = resolve(dirname(fileURLToPath(import.meta.url)), '../../drizzle');
+export const MIGRATIONS = resolve(dirname(fileURLToPath(import.meta.url)), '../../drizzle');
 
 /** Opens (creating if needed) the SQLite file, or ':memory:', with WAL and foreign keys on. */
 export function openDatabase(path: string): Database {

@@ -218,6 +218,7 @@ export function reverse(ctx: ServiceContext, actor: UserRow, code: string, entry
     const at = ctx.now();
     const undo = (target: MovementRow, targetBin: BinRow) => {
       if (findReversalOf(ctx.db, target.id)) throw new HttpError(409, 'ALREADY_REVERSED', `Entry ${target.id} has already been reversed.`);
+      checkNoReturnAgainst(ctx.db, target);
       return post(
         ctx.db,
         targetBin,
@@ -236,6 +237,23 @@ export function reverse(ctx: ServiceContext, actor: UserRow, code: string, entry
     }
   });
   return loadMovement(ctx, id);
+}
+
+/**
+ * Returns are kept per member per bin, not against one draw. The rule: a draw may be reversed only
+ * while the member's net drawn on that bin (draws less returns, net of reversals) stays at or above
+ * zero after the reversal. Otherwise part of this draw has already come back, and reversing it would
+ * put stock in the bin that never existed and leave the member's tab below nothing: the return
+ * must be reversed first. A return's own reversal only adds to what the member has drawn, so it is
+ * limited by on hand alone (post() checks that).
+ */
+function checkNoReturnAgainst(db: Database, entry: MovementRow): void {
+  if (entry.kind !== 'draw' || entry.memberId === null) return;
+  const taken = -entry.quantity;
+  const returnedAgainst = taken - netDrawnBy(db, entry.binId, entry.memberId);
+  if (returnedAgainst <= 0) return;
+  const were = returnedAgainst === 1 ? 'was' : 'were';
+  throw new HttpError(409, 'RETURN_AGAINST_DRAW', `${returnedAgainst} of this draw ${were} returned; reverse that return first.`);
 }
 
 function pairedEntry(db: Executor, entry: MovementRow): MovementRow | undefined {

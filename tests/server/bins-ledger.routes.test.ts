@@ -179,6 +179,8 @@ describe('refusals', () => {
     }
     const ledger = await member.agent.get(`/api/bins/${bin.code}/ledger`);
     expect(ledger.body.data.map((m: { quantity: number }) => m.quantity)).toEqual([-10, 100]);
+    // The ledger names the assembly and its build; an entry for no assembly names none.
+    expect(ledger.body.data.map((m: { assembly: unknown }) => m.assembly)).toEqual([{ name: 'Lid', buildName: 'Tool chest' }, null]);
   });
 });
 

@@ -1,4 +1,4 @@
-import type { CountBody, CountResult, DrawBody, MoveBody, Movement, ReceiveBody, ReturnUnusedBody, ReverseBody, WriteOffBody } from '@shared/schemas/bins';
+import type { CountBody, CountResult, DrawBody, LedgerEntry, MoveBody, Movement, ReceiveBody, ReturnUnusedBody, ReverseBody, WriteOffBody } from '@shared/schemas/bins';
 import type { MovementKind } from '@shared/stock/kinds';
 import type { ServiceContext } from '../../context';
 import type { Database, Executor } from '../../db/client';
@@ -10,6 +10,7 @@ import { findBinByCode, findBinById, sameSpecBins, updateBin } from './bins.repo
 import { assemblyOwnerId, closeActiveAlert, findMovement, findPairedWith, findReversalOf, insertMovement, listMovements, netDrawnBy, setOnHand, type LedgerRow } from './ledger.repo';
 import { dollarsToE4, e4ToDollars, valueCents } from '@shared/stock/money';
 import { slipExists } from './slips.repo';
+import { withAssemblyNames, type NameAssemblies } from './assembly-names';
 
 export function binOrThrow(db: Database, code: string): BinRow {
   const bin = findBinByCode(db, code);
@@ -268,7 +269,7 @@ function binById(db: Executor, id: number): BinRow {
   return bin;
 }
 
-export function ledgerFor(ctx: ServiceContext, code: string, from?: Date, to?: Date, limit?: number): Movement[] {
+export function ledgerFor(ctx: ServiceContext, nameAssemblies: NameAssemblies, code: string, from?: Date, to?: Date, limit?: number): LedgerEntry[] {
   const bin = binOrThrow(ctx.db, code);
-  return listMovements(ctx.db, { binId: bin.id, from, to, limit }).map(movementDto);
+  return withAssemblyNames(ctx.db, nameAssemblies, listMovements(ctx.db, { binId: bin.id, from, to, limit }).map(movementDto));
 }

@@ -7,7 +7,7 @@ import { authRouter } from './features/auth/auth.router';
 import { healthRouter } from './features/health/health.router';
 import { runQueuedAction } from './features/idempotency/queued-action';
 import { offlineRouter } from './features/offline/offline.router';
-import { openAssembliesOf } from './features/planning/assembly-catalogue';
+import { assemblyNames, openAssembliesOf } from './features/planning/assembly-catalogue';
 import { catalogueBins } from './features/stock/bin-catalogue';
 import { catalogueTools, signoffIdsOf } from './features/tools/tool-catalogue';
 import { invitationsRouter } from './features/invitations/invitations.router';
@@ -109,9 +109,10 @@ export function createApp(config: AppConfig) {
   api.use('/settings/planning', planningSettingsRouter());
   api.use('/settings', cribSettingsRouter());
   api.use('/labels', labelsRouter());
-  api.use('/bins', binCsvRouter());
-  api.use('/bins', binsRouter({ runQueuedAction }));
-  api.use('/stock', stockMoneyRouter());
+  // Assemblies belong to planning: the app hands stock the way to name them.
+  api.use('/bins', binCsvRouter({ nameAssemblies: assemblyNames }));
+  api.use('/bins', binsRouter({ runQueuedAction, nameAssemblies: assemblyNames }));
+  api.use('/stock', stockMoneyRouter({ nameAssemblies: assemblyNames }));
   api.use('/estimate', estimateRouter());
   api.use('/builds', buildsRouter());
   // Holds belong to the crib: the app hands its rule to the planning feature.

@@ -310,7 +310,15 @@ export const movementSchema = z.object({
 });
 export type Movement = z.infer<typeof movementSchema>;
 
-export const ledgerSchema = z.object({ data: z.array(movementSchema) });
+/** An assembly named for people: its own name and its build's ("Left wing", "Two-seat kit"). */
+export const assemblyNameSchema = z.strictObject({ name: z.string(), buildName: z.string() });
+export type AssemblyName = z.infer<typeof assemblyNameSchema>;
+
+/** A bin's ledger entry as listed: the movement with its assembly named (null when it names none). */
+export const ledgerEntrySchema = movementSchema.extend({ assembly: assemblyNameSchema.nullable() });
+export type LedgerEntry = z.infer<typeof ledgerEntrySchema>;
+
+export const ledgerSchema = z.object({ data: z.array(ledgerEntrySchema) });
 
 export const countResultSchema = movementSchema.extend({
   counted: z.number(),

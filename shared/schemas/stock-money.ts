@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { BIN_KINDS, MOVEMENT_KINDS } from '../stock/kinds';
+import { assemblyNameSchema } from './bins';
 import { idParam } from './fields';
 
 /** A payment is at most $10,000: a larger figure is almost surely a typing slip. */
@@ -72,6 +73,8 @@ export const tabEntrySchema = z.strictObject({
   /** What the entry adds to the tab: a draw is positive, a return or a reversed draw negative. */
   chargeCents: z.number(),
   assemblyId: z.number().nullable(),
+  /** The assembly and build named; null when the entry names no assembly. */
+  assembly: assemblyNameSchema.nullable(),
   note: z.string(),
 });
 export type TabEntry = z.infer<typeof tabEntrySchema>;
@@ -85,7 +88,7 @@ export const tabSchema = z.strictObject({
   /** Months with any charge or payment, newest first. */
   byMonth: z.array(z.strictObject({ month, chargedCents: z.number(), paidCents: z.number() })),
   /** Net units taken and their value per assembly; null is stock not tied to an assembly. */
-  byAssembly: z.array(z.strictObject({ assemblyId: z.number().nullable(), quantity: z.number(), chargedCents: z.number() })),
+  byAssembly: z.array(z.strictObject({ assemblyId: z.number().nullable(), assembly: assemblyNameSchema.nullable(), quantity: z.number(), chargedCents: z.number() })),
   /** The latest tab entries, newest first. */
   recent: z.array(tabEntrySchema),
   payments: z.array(paymentSchema),

@@ -10,6 +10,9 @@ export const formatCents = (valueCents: number): string => cents.format(valueCen
 /** A unit cost in dollars, keeping up to 4 decimals: 0.0825 → "$0.0825", 3 → "$3.00". */
 export const formatUnitCost = (dollars: number): string => unitCost.format(dollars);
 
+/** An assembly as every page names it: "Left aileron · Two-seat kit" (its name, then its build's). */
+export const formatAssembly = (a: { name: string; buildName: string }): string => `${a.name} · ${a.buildName}`;
+
 /** A whole quantity with thousands separators: 12000 → "12,000"; a fraction is rounded to a whole unit. */
 export const formatCount = (n: number): string => count.format(n);
 

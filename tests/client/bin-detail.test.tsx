@@ -2,7 +2,7 @@ import { QueryClient } from '@tanstack/react-query';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { beforeEach, describe, expect, it } from 'vitest';
-import type { BinForYou, Movement } from '@shared/schemas/bins';
+import type { BinForYou, LedgerEntry } from '@shared/schemas/bins';
 import { BinDetailRoute, binDetailLoader } from '@/app/routes/app/bin-detail';
 import { ScanRoute } from '@/app/routes/app/scan';
 import { authKeys } from '@/features/auth/api/keys';
@@ -36,7 +36,7 @@ function binFor(role: Role, over: Partial<BinForYou['forYou']> = {}, onHand = 12
   };
 }
 
-const entry = (over: Partial<Movement> & Pick<Movement, 'id' | 'kind' | 'quantity' | 'balanceAfter'>): Movement => ({
+const entry = (over: Partial<LedgerEntry> & Pick<LedgerEntry, 'id' | 'kind' | 'quantity' | 'balanceAfter'>): LedgerEntry => ({
   binCode: 'B-0107',
   at: '2026-11-20T15:00:00.000Z',
   unitCost: 0.13,
@@ -44,6 +44,7 @@ const entry = (over: Partial<Movement> & Pick<Movement, 'id' | 'kind' | 'quantit
   actor: PEOPLE.quartermaster,
   member: null,
   assemblyId: null,
+  assembly: null,
   note: '',
   reversesId: null,
   reversedById: null,
@@ -53,9 +54,9 @@ const entry = (over: Partial<Movement> & Pick<Movement, 'id' | 'kind' | 'quantit
 });
 
 /** Newest first, as the server sends it. */
-const LEDGER: Movement[] = [
+const LEDGER: LedgerEntry[] = [
   entry({ id: 12, kind: 'reversal', quantity: 20, balanceAfter: 120, reversesId: 11, note: 'Drawn on the wrong bin' }),
-  entry({ id: 11, kind: 'draw', quantity: -20, balanceAfter: 100, actor: PEOPLE.member, member: PEOPLE.member, reversedById: 12 }),
+  entry({ id: 11, kind: 'draw', quantity: -20, balanceAfter: 100, actor: PEOPLE.member, member: PEOPLE.member, reversedById: 12, assemblyId: 8, assembly: { name: 'Left aileron', buildName: 'Two-seat kit' } }),
   entry({ id: 10, kind: 'count', quantity: 0, balanceAfter: 120 }),
   entry({ id: 9, kind: 'receive', quantity: 120, balanceAfter: 120, slipId: 3, note: 'Order 2291' }),
 ];
@@ -250,6 +251,9 @@ describe('the ledger on the bin page', () => {
     const draw = document.getElementById('entry-11')!;
     expect(draw.textContent).toContain('Drawn −20');
     expect(draw.textContent).toContain('balance 100 · −$2.60');
+    // A draw for an assembly names it and its build; an entry for none says nothing of one.
+    expect(draw.textContent).toContain('for Left aileron · Two-seat kit');
+    expect(document.getElementById('entry-9')!.textContent).not.toContain(' for ');
   });
 
   it('lets the quartermaster reverse only entries that can be, with a reason', async () => {

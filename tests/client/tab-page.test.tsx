@@ -8,6 +8,9 @@ import { RecordPaymentForm } from '@/features/stock-money/components/record-paym
 import { setCsrfToken } from '@/lib/api-client';
 import { fakeFetch, renderWithProviders } from '../helpers/render';
 
+const LEFT_AILERON = { name: 'Left aileron', buildName: 'Two-seat kit' };
+const RIGHT_FLAP = { name: 'Right flap', buildName: 'Two-seat kit' };
+
 const entry = (over: Partial<TabEntry>): TabEntry => ({
   id: 1,
   at: '2026-09-10T15:00:00.000Z',
@@ -18,6 +21,7 @@ const entry = (over: Partial<TabEntry>): TabEntry => ({
   unitCost: 0.12,
   chargeCents: 1440,
   assemblyId: 7,
+  assembly: LEFT_AILERON,
   note: '',
   ...over,
 });
@@ -35,14 +39,14 @@ const TAB: Tab = {
     { month: '2026-09', chargedCents: 1790, paidCents: 0 },
   ],
   byAssembly: [
-    { assemblyId: 7, quantity: 170, chargedCents: 2090 },
-    { assemblyId: null, quantity: 10, chargedCents: 350 },
+    { assemblyId: 7, assembly: LEFT_AILERON, quantity: 170, chargedCents: 2090 },
+    { assemblyId: null, assembly: null, quantity: 10, chargedCents: 350 },
   ],
   recent: [
-    entry({ id: 5, kind: 'reversal', at: '2026-11-03T10:00:00.000Z', quantity: 30, unitCost: 0.13, chargeCents: -390, assemblyId: 8, note: 'drawn on the wrong member' }),
-    entry({ id: 4, at: '2026-10-28T18:00:00.000Z', quantity: -30, unitCost: 0.13, chargeCents: 390, assemblyId: 8 }),
+    entry({ id: 5, kind: 'reversal', at: '2026-11-03T10:00:00.000Z', quantity: 30, unitCost: 0.13, chargeCents: -390, assemblyId: 8, assembly: RIGHT_FLAP, note: 'drawn on the wrong member' }),
+    entry({ id: 4, at: '2026-10-28T18:00:00.000Z', quantity: -30, unitCost: 0.13, chargeCents: 390, assemblyId: 8, assembly: RIGHT_FLAP }),
     entry({ id: 3, at: '2026-10-05T09:00:00.000Z', quantity: -50, unitCost: 0.13, chargeCents: 650 }),
-    entry({ id: 2, binCode: 'B-0002', designation: 'Screw #8-32 × 1/2 pan head', quantity: -10, unitCost: 0.35, chargeCents: 350, assemblyId: null }),
+    entry({ id: 2, binCode: 'B-0002', designation: 'Screw #8-32 × 1/2 pan head', quantity: -10, unitCost: 0.35, chargeCents: 350, assemblyId: null, assembly: null }),
     entry({ id: 1 }),
   ],
   payments: [{ id: 1, userId: 2, amountCents: 1000, at: '2026-12-02T12:00:00.000Z', note: 'cash at the bench', recordedBy: { id: 1, name: 'Lee Lead' } }],
@@ -83,15 +87,16 @@ describe('My tab page', () => {
       ['September 2026', '$17.90', '$0.00'],
     ]);
     expect(tableRows('Charged by assembly').map(cellTexts)).toEqual([
-      ['Assembly 7', '170', '$20.90'],
+      ['Left aileron · Two-seat kit', '170', '$20.90'],
       ['Not tied to an assembly', '10', '$3.50'],
     ]);
 
     const recent = tableRows('Recent draws, returns and corrections').map(cellTexts);
     expect(recent).toHaveLength(5);
-    expect(recent[0]).toEqual([expect.any(String), expect.stringContaining('B-0001'), 'Correction: drawn on the wrong member', '-30 × $0.13', 'Assembly 8', '-$3.90']);
-    expect(recent[4]).toEqual([expect.any(String), expect.stringContaining('B-0001'), 'Drawn', '120 × $0.12', 'Assembly 7', '$14.40']);
+    expect(recent[0]).toEqual([expect.any(String), expect.stringContaining('B-0001'), 'Correction: drawn on the wrong member', '-30 × $0.13', 'Right flap · Two-seat kit', '-$3.90']);
+    expect(recent[4]).toEqual([expect.any(String), expect.stringContaining('B-0001'), 'Drawn', '120 × $0.12', 'Left aileron · Two-seat kit', '$14.40']);
     expect(recent[3]![1]).toContain('Screw #8-32 × 1/2 pan head');
+    expect(recent[3]![4]).toBe('Not tied to an assembly');
 
     expect(screen.getByText(/cash at the bench/)).toBeTruthy();
   });

@@ -215,7 +215,7 @@ describe('GET /api/bins/ledger.csv', () => {
 
   it('lists every entry of the days asked for, both ends included, oldest first', async () => {
     at('2026-11-28T23:59:59.999Z');
-    giveAssemblies(t.db, findUserByEmail(t.db, 'member@example.org')!.id, [7]);
+    giveAssemblies(t.db, findUserByEmail(t.db, 'member@example.org')!.id, [7], { build: 'Two-seat kit', assemblies: { 7: 'Left aileron' } });
     await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
     at('2026-11-29T00:00:00.000Z');
     await post(member, '/api/bins/B-0001/draw', { quantity: 20, note: 'left flap' });
@@ -238,7 +238,8 @@ describe('GET /api/bins/ledger.csv', () => {
     ]);
     expect(rows[0]).toMatchObject({ bin_code: 'B-0001', designation: 'Blind, structural, dome, 5056, steel stem · 1/8 in · grip −2 (0.063–0.125 in)', unit_cost: '0.12', value: '-2.40', by: 'Mia Member', for_member: 'Mia Member', note: 'left flap', reverses_id: '' });
     // A note that a spreadsheet would run as a formula stays text.
-    expect(rows[2]).toMatchObject({ note: `'=cmd|" /C calc"!A0`, assembly_id: '7', value: '-0.65', unit_cost: '0.13' });
+    expect(rows[2]).toMatchObject({ note: `'=cmd|" /C calc"!A0`, assembly_id: '7', assembly: 'Left aileron', build: 'Two-seat kit', value: '-0.65', unit_cost: '0.13' });
+    expect(rows[0]).toMatchObject({ assembly_id: '', assembly: '', build: '' });
 
     const day = records((await qm.agent.get('/api/bins/ledger.csv?from=2026-11-28&to=2026-11-28')).text);
     expect(day.map((r) => r.note)).toEqual(['Opening stock']);

@@ -179,6 +179,8 @@ describe('refusals', () => {
     }
     const ledger = await member.agent.get(`/api/bins/${bin.code}/ledger`);
     expect(ledger.body.data.map((m: { quantity: number }) => m.quantity)).toEqual([-10, 100]);
+    // The ledger names the assembly and its build; an entry for no assembly names none.
+    expect(ledger.body.data.map((m: { assembly: unknown }) => m.assembly)).toEqual([{ name: 'Lid', buildName: 'Tool chest' }, null]);
   });
 });
 
@@ -216,5 +218,56 @@ describe('what a scan offers', () => {
     const moved = await patch(qm, `/api/bins/${bin.code}`, { location: 'Rivet cabinet, drawer 3', reorderPoint: 250 });
     expect(moved.status).toBe(200);
     expect(moved.body).toMatchObject({ location: 'Rivet cabinet, drawer 3', reorderPoint: 250, onHand: 500 });
+  });
+});
+
+describe('reversing what has moved on', () => {
+  it('refuses to reverse a draw that has a return against it (409 RETURN_AGAINST_DRAW) until the return is reversed', async () => {
+    const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));
+    const drawn = await post(member, `/api/bins/${bin.code}/draw`, { quantity: 25 });
+    const back = await post(member, `/api/bins/${bin.code}/return`, { quantity: 5 });
+    const refused = await post(qm, `/api/bins/${bin.code}/ledger/${drawn.body.id}/reverse`, { note: 'wrong bin' });
+    expect(refused.status).toBe(409);
+    expect(refused.body.error).toMatchObject({ code: 'RETURN_AGAINST_DRAW', message: '5 of this draw were returned; reverse that return first.' });
+    expect((await qm.agent.get(`/api/bins/${bin.code}`)).body.onHand).toBe(80);
+    expect((await member.agent.get('/api/stock/tab')).body.chargedCents).toBeGreaterThan(0);
+
+    expect((await post(qm, `/api/bins/${bin.code}/ledger/${back.body.id}/reverse`, { note: 'not returned' })).status).toBe(201);
+    const undo = await post(qm, `/api/bins/${bin.code}/ledger/${drawn.body.id}/reverse`, { note: 'wrong bin' });
+    expect(undo.status).toBe(201);
+    expect((await qm.agent.get(`/api/bins/${bin.code}`)).body.onHand).toBe(100);
+    expect((await member.agent.get('/api/stock/tab')).body.chargedCents).toBe(0);
+  });
+
+  it('lets a draw be reversed when the member’s other draws cover the return', async () => {
+    const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));
+    const first = await post(member, `/api/bins/${bin.code}/draw`, { quantity: 10 });
+    await post(member, `/api/bins/${bin.code}/draw`, { quantity: 20 });
+    await post(member, `/api/bins/${bin.code}/return`, { quantity: 15 });
+    const undo = await post(qm, `/api/bins/${bin.code}/ledger/${first.body.id}/reverse`, { note: 'double scan' });
+    expect(undo.status).toBe(201);
+    expect((await member.agent.get(`/api/bins/${bin.code}`)).body.forYou.yourNetDrawn).toBe(5);
+  });
+
+  it('refuses with 409 to reverse a move whose stock has left the other bin, and writes nothing', async () => {
+    const a = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));
+    const b = await addBinAs(qm, blindRivetBin({ initialQuantity: 0, location: 'Shelf B1' }));
+    const moved = await post(qm, `/api/bins/${a.code}/move`, { to: b.code, quantity: 40 });
+    await post(member, `/api/bins/${b.code}/draw`, { quantity: 30 });
+    const undo = await post(qm, `/api/bins/${a.code}/ledger/${moved.body.id}/reverse`, { note: 'wrong shelf' });
+    expect(undo.status).toBe(409);
+    expect(undo.body.error).toMatchObject({ code: 'INSUFFICIENT_STOCK', message: expect.stringContaining('only 10 on hand') });
+    expect((await qm.agent.get(`/api/bins/${a.code}`)).body.onHand).toBe(60);
+    expect((await qm.agent.get(`/api/bins/${b.code}`)).body.onHand).toBe(10);
+  });
+
+  it('refuses with 409 to reverse a count that found stock when that stock has since been drawn', async () => {
+    const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 10 }));
+    const counted = await post(qm, `/api/bins/${bin.code}/count`, { counted: 50 });
+    await post(member, `/api/bins/${bin.code}/draw`, { quantity: 45 });
+    const undo = await post(qm, `/api/bins/${bin.code}/ledger/${counted.body.id}/reverse`, { note: 'miscounted' });
+    expect(undo.status).toBe(409);
+    expect(undo.body.error).toMatchObject({ code: 'INSUFFICIENT_STOCK', message: expect.stringContaining('only 5 on hand') });
+    expect((await qm.agent.get(`/api/bins/${bin.code}`)).body.onHand).toBe(5);
   });
 });

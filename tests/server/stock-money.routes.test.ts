@@ -32,7 +32,7 @@ beforeEach(async () => {
   qm = await t.signIn('qm@example.org');
   member = await t.signIn('member@example.org');
   lead = await t.signIn('lead@example.org');
-  giveAssemblies(t.db, crew.member.id, [7, 8]);
+  giveAssemblies(t.db, crew.member.id, [7, 8], { build: 'Two-seat kit', assemblies: { 7: 'Left aileron', 8: 'Right flap' } });
 });
 afterEach(() => t.close());
 
@@ -71,8 +71,8 @@ describe('GET /api/stock/tab', () => {
         { month: '2026-09', chargedCents: september, paidCents: 0 },
       ],
       byAssembly: [
-        { assemblyId: 7, quantity: 120 + 50 - 5, chargedCents: 120 * A_1 + 50 * A_2 - 5 * A_2 },
-        { assemblyId: null, quantity: 10, chargedCents: 10 * SCREW },
+        { assemblyId: 7, assembly: { name: 'Left aileron', buildName: 'Two-seat kit' }, quantity: 120 + 50 - 5, chargedCents: 120 * A_1 + 50 * A_2 - 5 * A_2 },
+        { assemblyId: null, assembly: null, quantity: 10, chargedCents: 10 * SCREW },
       ],
     });
     expect(september + october).toBe(2375); // $14.40 + $3.50 + $6.50 − $0.65 = $23.75
@@ -82,7 +82,9 @@ describe('GET /api/stock/tab', () => {
     expect(recent.map((e) => e.kind)).toEqual(['reversal', 'draw', 'return_unused', 'draw', 'draw', 'draw']);
     expect(recent.find((e) => e.id === first.id)).toMatchObject({ unitCost: 0.12, chargeCents: 120 * A_1 });
     expect(recent[0]).toMatchObject({ kind: 'reversal', chargeCents: -30 * A_2 });
-    expect(recent[1]).toMatchObject({ id: mistake.id, chargeCents: 30 * A_2 });
+    expect(recent[1]).toMatchObject({ id: mistake.id, chargeCents: 30 * A_2, assemblyId: 8, assembly: { name: 'Right flap', buildName: 'Two-seat kit' } });
+    const screwDraw = (res.body.recent as { binCode: string; assembly: unknown }[]).find((e) => e.binCode === screws.code);
+    expect(screwDraw).toMatchObject({ assembly: null });
   });
 
   it('keeps other people’s draws off the tab', async () => {

@@ -1,4 +1,4 @@
-import { and, asc, count, eq, type SQL } from 'drizzle-orm';
+import { and, asc, count, eq, inArray, type SQL } from 'drizzle-orm';
 import type { AssemblyStatus } from '@shared/schemas/builds';
 import type { Executor } from '../../db/client';
 import { assemblies, builds, type AssemblyRow, type BuildRow } from '../../db/schema/builds';
@@ -50,4 +50,15 @@ export function listAssemblies(db: Executor, f: { ownerId?: number; status?: Ass
 /** Ledger entries that name the assembly (draws, returns and their reversals). */
 export function countEntriesNaming(db: Executor, assemblyId: number): number {
   return db.select({ n: count() }).from(stockMovements).where(eq(stockMovements.assemblyId, assemblyId)).get()?.n ?? 0;
+}
+
+/** The assemblies with these ids and their builds' names (ids that name nothing are left out). */
+export function assemblyAndBuildNames(db: Executor, ids: readonly number[]): { id: number; name: string; buildName: string }[] {
+  if (ids.length === 0) return [];
+  return db
+    .select({ id: assemblies.id, name: assemblies.name, buildName: builds.name })
+    .from(assemblies)
+    .innerJoin(builds, eq(builds.id, assemblies.buildId))
+    .where(inArray(assemblies.id, [...ids]))
+    .all();
 }

@@ -21,6 +21,7 @@ import type { RunQueuedAction } from '../../lib/queued-action';
 import { parseInput } from '../../lib/validate';
 import { createBin, editBin, getBinForYou, listBinPage, restockList } from './bins.service';
 import { count, draw, ledgerFor, move, receive, returnUnused, reverse, writeOff } from './ledger.service';
+import type { NameAssemblies } from './assembly-names';
 import { readSlip, receiveSlipUpload, storeSlip } from './slips.service';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
@@ -28,9 +29,10 @@ const dayStart = (day: string) => new Date(`${day}T00:00:00Z`);
 
 /**
  * /api/bins: the bins, their ledger, and the movements members and the quartermaster make by scan.
- * `runQueuedAction` (from the app) lets a phone replay a draw or return queued offline.
+ * `runQueuedAction` (from the app) lets a phone replay a draw or return queued offline;
+ * `nameAssemblies` (from the planning feature) names the assembly each ledger entry was for.
  */
-export function binsRouter({ runQueuedAction }: { runQueuedAction: RunQueuedAction }) {
+export function binsRouter({ runQueuedAction, nameAssemblies }: { runQueuedAction: RunQueuedAction; nameAssemblies: NameAssemblies }) {
   const router = Router();
   const quartermaster = requireRole('quartermaster');
   const code = (params: unknown) => parseInput(binCodeParams, params, 'path').code;
@@ -70,7 +72,7 @@ export function binsRouter({ runQueuedAction }: { runQueuedAction: RunQueuedActi
   router.get('/:code/ledger', (req, res) => {
     const q = parseInput(ledgerQuerySchema, req.query, 'query');
     const to = q.to ? new Date(dayStart(q.to).getTime() + DAY_MS) : undefined;
-    res.json({ data: ledgerFor(req.ctx, code(req.params), q.from ? dayStart(q.from) : undefined, to, q.limit) });
+    res.json({ data: ledgerFor(req.ctx, nameAssemblies, code(req.params), q.from ? dayStart(q.from) : undefined, to, q.limit) });
   });
 
   router.post('/:code/draw', (req, res) =>

@@ -1,4 +1,4 @@
-import type { CountBody, CountResult, DrawBody, MoveBody, Movement, ReceiveBody, ReturnUnusedBody, ReverseBody, WriteOffBody } from '@shared/schemas/bins';
+import type { CountBody, CountResult, DrawBody, LedgerEntry, MoveBody, Movement, ReceiveBody, ReturnUnusedBody, ReverseBody, WriteOffBody } from '@shared/schemas/bins';
 import type { MovementKind } from '@shared/stock/kinds';
 import type { ServiceContext } from '../../context';
 import type { Database, Executor } from '../../db/client';
@@ -10,6 +10,7 @@ import { findBinByCode, findBinById, sameSpecBins, updateBin } from './bins.repo
 import { assemblyOwnerId, closeActiveAlert, findMovement, findPairedWith, findReversalOf, insertMovement, listMovements, netDrawnBy, setOnHand, type LedgerRow } from './ledger.repo';
 import { dollarsToE4, e4ToDollars, valueCents } from '@shared/stock/money';
 import { slipExists } from './slips.repo';
+import { withAssemblyNames, type NameAssemblies } from './assembly-names';
 
 export function binOrThrow(db: Database, code: string): BinRow {
   const bin = findBinByCode(db, code);
@@ -218,6 +219,7 @@ export function reverse(ctx: ServiceContext, actor: UserRow, code: string, entry
     const at = ctx.now();
     const undo = (target: MovementRow, targetBin: BinRow) => {
       if (findReversalOf(ctx.db, target.id)) throw new HttpError(409, 'ALREADY_REVERSED', `Entry ${target.id} has already been reversed.`);
+      checkNoReturnAgainst(ctx.db, target);
       return post(
         ctx.db,
         targetBin,
@@ -238,6 +240,23 @@ export function reverse(ctx: ServiceContext, actor: UserRow, code: string, entry
   return loadMovement(ctx, id);
 }
 
+/**
+ * Returns are kept per member per bin, not against one draw. The rule: a draw may be reversed only
+ * while the member's net drawn on that bin (draws less returns, net of reversals) stays at or above
+ * zero after the reversal. Otherwise part of this draw has already come back, and reversing it would
+ * put stock in the bin that never existed and leave the member's tab below nothing: the return
+ * must be reversed first. A return's own reversal only adds to what the member has drawn, so it is
+ * limited by on hand alone (post() checks that).
+ */
+function checkNoReturnAgainst(db: Database, entry: MovementRow): void {
+  if (entry.kind !== 'draw' || entry.memberId === null) return;
+  const taken = -entry.quantity;
+  const returnedAgainst = taken - netDrawnBy(db, entry.binId, entry.memberId);
+  if (returnedAgainst <= 0) return;
+  const were = returnedAgainst === 1 ? 'was' : 'were';
+  throw new HttpError(409, 'RETURN_AGAINST_DRAW', `${returnedAgainst} of this draw ${were} returned; reverse that return first.`);
+}
+
 function pairedEntry(db: Executor, entry: MovementRow): MovementRow | undefined {
   if (entry.kind === 'transfer_in' && entry.pairedId !== null) return findMovement(db, entry.pairedId);
   if (entry.kind === 'transfer_out') return findPairedWith(db, entry.id);
@@ -250,7 +269,7 @@ function binById(db: Executor, id: number): BinRow {
   return bin;
 }
 
-export function ledgerFor(ctx: ServiceContext, code: string, from?: Date, to?: Date, limit?: number): Movement[] {
+export function ledgerFor(ctx: ServiceContext, nameAssemblies: NameAssemblies, code: string, from?: Date, to?: Date, limit?: number): LedgerEntry[] {
   const bin = binOrThrow(ctx.db, code);
-  return listMovements(ctx.db, { binId: bin.id, from, to, limit }).map(movementDto);
+  return withAssemblyNames(ctx.db, nameAssemblies, listMovements(ctx.db, { binId: bin.id, from, to, limit }).map(movementDto));
 }

@@ -8,6 +8,7 @@ import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { binDesignation } from '@shared/stock/fasteners';
 import { e4ToDollars, valueCents } from '@shared/stock/money';
+import { withAssemblyNames, type NameAssemblies } from './assembly-names';
 import { insertPayment, namesOf, paidByPerson, paymentById, paymentsOf, spendEntries, tabEntries, type PaymentRow, type TabEntryRow } from './money.repo';
 
 const RECENT_ENTRIES = 25;
@@ -32,7 +33,7 @@ function paymentDto(r: PaymentRow): Payment {
   return { id: r.p.id, userId: r.p.userId, amountCents: r.p.amountCents, at: r.p.at.toISOString(), note: r.p.note, recordedBy: { id: r.p.recordedById, name: r.recordedByName } };
 }
 
-function entryDto(r: TabEntryRow): TabEntry {
+function entryDto(r: TabEntryRow): Omit<TabEntry, 'assembly'> {
   return {
     id: r.m.id,
     at: r.m.at.toISOString(),
@@ -48,7 +49,7 @@ function entryDto(r: TabEntryRow): TabEntry {
 }
 
 /** A member reads their own tab; the quartermaster and the lead read anyone's. */
-export function readTab(ctx: ServiceContext, viewer: UserRow, userId: number): Tab {
+export function readTab(ctx: ServiceContext, nameAssemblies: NameAssemblies, viewer: UserRow, userId: number): Tab {
   if (viewer.id !== userId && !hasRole(viewer.role, 'quartermaster')) {
     throw new HttpError(403, 'FORBIDDEN', 'You can read your own tab only. The quartermaster or the chapter lead can read anyone’s.');
   }
@@ -81,11 +82,15 @@ export function readTab(ctx: ServiceContext, viewer: UserRow, userId: number): T
     balanceCents: chargedCents - paidCents,
     byMonth: [...months].sort(([a], [b]) => b.localeCompare(a)).map(([month, v]) => ({ month, ...v })),
     // Assemblies in id order; stock not tied to one comes last.
-    byAssembly: [...assemblies]
-      .filter(([, v]) => v.quantity !== 0 || v.chargedCents !== 0)
-      .sort(([a], [b]) => (a ?? Infinity) - (b ?? Infinity))
-      .map(([assemblyId, v]) => ({ assemblyId, ...v })),
-    recent: entries.slice(-RECENT_ENTRIES).reverse().map(entryDto),
+    byAssembly: withAssemblyNames(
+      ctx.db,
+      nameAssemblies,
+      [...assemblies]
+        .filter(([, v]) => v.quantity !== 0 || v.chargedCents !== 0)
+        .sort(([a], [b]) => (a ?? Infinity) - (b ?? Infinity))
+        .map(([assemblyId, v]) => ({ assemblyId, ...v })),
+    ),
+    recent: withAssemblyNames(ctx.db, nameAssemblies, entries.slice(-RECENT_ENTRIES).reverse().map(entryDto)),
     payments: payments.map(paymentDto),
   };
 }

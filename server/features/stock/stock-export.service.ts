@@ -9,6 +9,7 @@ import { BIN_COLUMNS, isNumericColumn } from './bin-csv';
 import { ALL_BINS } from './bin-import.service';
 import { listBins } from './bins.repo';
 import { listMovements } from './ledger.repo';
+import type { NameAssemblies } from './assembly-names';
 import { e4ToDollars, valueCents } from '@shared/stock/money';
 
 /** The export's columns are the import's, so a file exported from one chapter imports into another. */
@@ -29,12 +30,12 @@ export function binsCsv(ctx: ServiceContext): string {
   return toCsv(BIN_EXPORT_FIELDS, bins.map(binCells));
 }
 
-const LEDGER_FIELDS = ['id', 'at', 'bin_code', 'designation', 'kind', 'quantity', 'balance_after', 'unit_cost', 'value', 'by', 'for_member', 'assembly_id', 'note', 'reverses_id'];
+const LEDGER_FIELDS = ['id', 'at', 'bin_code', 'designation', 'kind', 'quantity', 'balance_after', 'unit_cost', 'value', 'by', 'for_member', 'assembly_id', 'assembly', 'build', 'note', 'reverses_id'];
 const LEDGER_EXPORT_LIMIT = 500_000;
 const DAY_MS = 24 * 60 * 60 * 1000;
 
 /** Every ledger entry from the first day to the last, whole days in UTC, oldest first. */
-export function ledgerCsv(ctx: ServiceContext, range: LedgerExportQuery): string {
+export function ledgerCsv(ctx: ServiceContext, nameAssemblies: NameAssemblies, range: LedgerExportQuery): string {
   const from = new Date(`${range.from}T00:00:00Z`);
   const to = new Date(new Date(`${range.to}T00:00:00Z`).getTime() + DAY_MS);
   const entries = listMovements(ctx.db, { from, to, limit: LEDGER_EXPORT_LIMIT + 1 });
@@ -42,6 +43,10 @@ export function ledgerCsv(ctx: ServiceContext, range: LedgerExportQuery): string
     throw new HttpError(400, 'RANGE_TOO_LARGE', `More than ${LEDGER_EXPORT_LIMIT} ledger entries fall in that range. Export a shorter range.`);
   }
   const designations = new Map(listBins(ctx.db, ALL_BINS).rows.map((b) => [b.code, binDesignation(b)]));
+  const assemblies = nameAssemblies(
+    ctx.db,
+    entries.flatMap(({ m }) => (m.assemblyId === null ? [] : [m.assemblyId])),
+  );
   // listMovements answers newest first (at, then id); the reverse is oldest first.
   const rows = entries.reverse().map(({ m, binCode, actorName, memberName }): Cell[] => [
     m.id,
@@ -56,6 +61,8 @@ export function ledgerCsv(ctx: ServiceContext, range: LedgerExportQuery): string
     text(actorName),
     text(memberName),
     m.assemblyId,
+    text(m.assemblyId === null ? null : assemblies.get(m.assemblyId)?.name),
+    text(m.assemblyId === null ? null : assemblies.get(m.assemblyId)?.buildName),
     text(m.note),
     m.reversesId,
   ]);

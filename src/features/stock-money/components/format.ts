@@ -1,3 +1,6 @@
+import type { AssemblyName } from '@shared/schemas/bins';
+import { formatAssembly } from '@/lib/format';
+
 /** Whole cents as dollars ($14.40), unit costs to a hundredth of a cent ($0.0125) and days, as on every page. */
 export { formatCents as dollars, formatDate as dayOf, formatUnitCost as unitCost } from '@/lib/format';
 
@@ -10,4 +13,5 @@ export const monthName = (month: string) => longMonth.format(firstOf(month));
 /** 2026-11 as "Nov 26", for chart axes. */
 export const monthShort = (month: string) => shortMonth.format(firstOf(month));
 
-export const assemblyName = (id: number | null) => (id === null ? 'Not tied to an assembly' : `Assembly ${id}`);
+/** What a tab row was for: its assembly and build, or none. */
+export const assemblyName = (a: AssemblyName | null) => (a === null ? 'Not tied to an assembly' : formatAssembly(a));

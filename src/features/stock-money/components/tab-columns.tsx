@@ -20,7 +20,7 @@ export const tabMonthColumns = month.columns([
 
 const assembly = createColumnHelper<ListFeatures, AssemblyRow>();
 export const tabAssemblyColumns = assembly.columns([
-  assembly.accessor((r) => assemblyName(r.assemblyId), { id: 'assembly', header: 'Assembly', enableSorting: false }),
+  assembly.accessor((r) => assemblyName(r.assembly), { id: 'assembly', header: 'Assembly', enableSorting: false }),
   assembly.accessor('quantity', { header: 'Units', sortFn: byNumber((r) => r.quantity), cell: ({ getValue }) => <span className="font-mono">{getValue()}</span> }),
   assembly.accessor('chargedCents', { header: 'Charged', sortFn: byNumber((r) => r.chargedCents), cell: ({ getValue }) => <Cents cents={getValue()} /> }),
 ]);
@@ -52,6 +52,6 @@ export const tabEntryColumns = entry.columns([
       </span>
     ),
   }),
-  entry.accessor((e) => assemblyName(e.assemblyId), { id: 'assembly', header: 'For', enableSorting: false }),
+  entry.accessor((e) => assemblyName(e.assembly), { id: 'assembly', header: 'For', enableSorting: false }),
   entry.accessor('chargeCents', { header: 'Charge', enableSorting: false, cell: ({ getValue }) => <Cents cents={getValue()} /> }),
 ]);

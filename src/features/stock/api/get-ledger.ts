@@ -1,5 +1,5 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { Movement } from '@shared/schemas/bins';
+import type { LedgerEntry } from '@shared/schemas/bins';
 import { api } from '@/lib/api-client';
 import { binKeys } from './keys';
 
@@ -7,5 +7,5 @@ import { binKeys } from './keys';
 export const ledgerQueryOptions = (code: string) =>
   queryOptions({
     queryKey: binKeys.ledger(code),
-    queryFn: async () => (await api.get<{ data: Movement[] }>(`/api/bins/${encodeURIComponent(code)}/ledger`)).data,
+    queryFn: async () => (await api.get<{ data: LedgerEntry[] }>(`/api/bins/${encodeURIComponent(code)}/ledger`)).data,
   });

@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { toast } from 'sonner';
-import type { Movement } from '@shared/schemas/bins';
+import type { LedgerEntry, Movement } from '@shared/schemas/bins';
 import { MOVEMENT_LABELS } from '@shared/stock/kinds';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
@@ -11,6 +11,7 @@ import { messageOf } from '@/lib/errors';
 import { useReverse } from '../api/bin-actions';
 import { ledgerQueryOptions } from '../api/get-ledger';
 import { slipUrl } from '../api/upload-slip';
+import { formatAssembly } from '@/lib/format';
 import { formatCount, formatDateTime, formatSigned, formatUnitCost } from '../utils/format';
 import { formatSignedCents } from '../utils/value';
 
@@ -71,7 +72,7 @@ function ReverseEntry({ code, entry }: { code: string; entry: Movement }) {
   );
 }
 
-function LedgerEntry({ code, entry: m, isQuartermaster }: { code: string; entry: Movement; isQuartermaster: boolean }) {
+function LedgerItem({ code, entry: m, isQuartermaster }: { code: string; entry: LedgerEntry; isQuartermaster: boolean }) {
   const forSomeoneElse = m.member && m.member.id !== m.actor.id;
   return (
     <li id={entryAnchor(m.id)} className="flex flex-col gap-0.5 py-3">
@@ -94,7 +95,8 @@ function LedgerEntry({ code, entry: m, isQuartermaster }: { code: string; entry:
       </div>
       <p className="text-sm text-steel">
         #{m.id} · {formatDateTime(m.at)} · {m.actor.name}
-        {forSomeoneElse && ` for ${m.member!.name}`} · at {formatUnitCost(m.unitCost)}
+        {forSomeoneElse && ` for ${m.member!.name}`}
+        {m.assembly && ` for ${formatAssembly(m.assembly)}`} · at {formatUnitCost(m.unitCost)}
       </p>
       {m.note && <p className="text-sm">{m.note}</p>}
       {(m.reversesId !== null || m.reversedById !== null || (m.slipId !== null && isQuartermaster)) && (
@@ -123,7 +125,7 @@ export function LedgerList({ code, isQuartermaster }: { code: string; isQuarterm
       {ledger.data?.length === 0 && <p className="text-steel">Nothing has moved in or out of this bin yet.</p>}
       <ol className="flex flex-col divide-y divide-rule">
         {ledger.data?.map((m) => (
-          <LedgerEntry key={m.id} code={code} entry={m} isQuartermaster={isQuartermaster} />
+          <LedgerItem key={m.id} code={code} entry={m} isQuartermaster={isQuartermaster} />
         ))}
       </ol>
     </Card>

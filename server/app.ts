@@ -38,6 +38,7 @@ import { compressJson } from './middleware/compress-json';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { signInLimiters } from './middleware/rate-limit';
 import { sessionMiddleware } from './middleware/session';
+import { wellFormedPath } from './middleware/well-formed-path';
 import { clientStatic } from './static/client-static';
 
 /** Link tokens never reach the logs. */
@@ -70,6 +71,7 @@ export function createApp(config: AppConfig) {
       },
     }),
   );
+  app.use(wellFormedPath);
 
   const ctx: ServiceContext = {
     db: config.db,

@@ -144,7 +144,7 @@ const WELL_FORMED_TOKEN = 'T'.repeat(43);
 describe('bad input on every mutating route', () => {
   const cases: BadInputCase[] = [
     { route: 'POST /api/auth/login', as: 'anonymous', method: 'post', path: () => '/api/auth/login', body: { email: 42, password: ['x'] }, paths: ['email', 'password'] },
-    { route: 'POST /api/auth/password-reset', as: 'anonymous', method: 'post', path: () => '/api/auth/password-reset', body: { address: 'lead@example.org' }, paths: ['email'] },
+    { route: 'POST /api/auth/password-reset', as: 'anonymous', method: 'post', path: () => '/api/auth/password-reset', body: { address: 'lead@example.org' }, paths: ['address', 'email'] },
     {
       route: 'POST /api/auth/password-reset/confirm',
       as: 'anonymous',

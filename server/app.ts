@@ -34,10 +34,12 @@ import { toolsRouter } from './features/tools/tools.router';
 import { certificateRouter } from './lan/certificate.router';
 import { loadUser, requireRole } from './middleware/auth';
 import { csrf } from './middleware/csrf';
+import { noStore } from './middleware/cache-control';
 import { compressJson } from './middleware/compress-json';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { signInLimiters } from './middleware/rate-limit';
 import { sessionMiddleware } from './middleware/session';
+import { wellFormedPath } from './middleware/well-formed-path';
 import { clientStatic } from './static/client-static';
 
 /** Link tokens never reach the logs. */
@@ -70,6 +72,7 @@ export function createApp(config: AppConfig) {
       },
     }),
   );
+  app.use(wellFormedPath);
 
   const ctx: ServiceContext = {
     db: config.db,
@@ -80,6 +83,7 @@ export function createApp(config: AppConfig) {
   const { middleware: session, store } = sessionMiddleware(config);
 
   const api = express.Router();
+  api.use(noStore);
   api.use(compressJson());
   api.use((req, _res, next) => {
     req.ctx = ctx;

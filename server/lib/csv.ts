@@ -20,10 +20,9 @@ export function toCsv(fields: readonly string[], rows: readonly CsvCell[][]): st
 /** Money in a CSV: cents as dollars with two places, a number to the spreadsheet. */
 export const centsCell = (cents: number) => (cents / 100).toFixed(2);
 
-/** Sends a CSV as a download that no cache keeps. */
+/** Sends a CSV as a download (no cache keeps it: every /api answer is no-store). */
 export function sendCsv(res: Response, filename: string, csv: string): void {
   res.type('text/csv; charset=utf-8');
   res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
-  res.setHeader('Cache-Control', 'no-store');
   res.send(csv);
 }

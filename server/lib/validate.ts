@@ -2,11 +2,15 @@ import type { z } from 'zod';
 import type { ErrorIssue } from '@shared/schemas/errors';
 import { HttpError } from './http-error';
 
+const joinPath = (path: readonly PropertyKey[]) => path.map(String).join('.');
+
+/** A field the schema does not know is named on its own path, one issue per field, so a typo is never dropped. */
 function issuesOf(error: z.ZodError): ErrorIssue[] {
-  return error.issues.map((issue) => ({
-    path: issue.path.map(String).join('.'),
-    message: issue.message,
-  }));
+  return error.issues.flatMap((issue) =>
+    issue.code === 'unrecognized_keys'
+      ? issue.keys.map((key) => ({ path: joinPath([...issue.path, key]), message: `Unknown field "${key}".` }))
+      : [{ path: joinPath(issue.path), message: issue.message }],
+  );
 }
 
 function summarize(where: string, issues: ErrorIssue[]): string {

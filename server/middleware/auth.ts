@@ -4,6 +4,8 @@ import { loadUserById } from '../accounts/users.repo';
 import type { Database } from '../db/client';
 import type { UserRow } from '../db/schema/users';
 import { HttpError } from '../lib/http-error';
+import { endSessionsOf } from '../lib/session-helpers';
+import { SESSION_COOKIE } from './session';
 
 declare module 'express-serve-static-core' {
   interface Request {
@@ -11,18 +13,26 @@ declare module 'express-serve-static-core' {
   }
 }
 
-/** Loads the signed-in person on every request; a deactivated person's session ends at once. */
+/**
+ * Loads the signed-in person on every request. A session whose person is gone or deactivated (even
+ * by a change made outside the People screens) ends, with the person's other sessions, and the
+ * request answers 401: nothing after this point may meet a session without its person.
+ */
 export function loadUser(db: Database) {
-  return (req: Request, _res: Response, next: NextFunction) => {
+  return (req: Request, res: Response, next: NextFunction) => {
     const id = req.session?.userId;
     if (id === undefined) return next();
     const user = loadUserById(db, id);
-    if (!user || user.deactivatedAt) {
-      req.session.destroy(() => next());
-      return;
+    if (user && !user.deactivatedAt) {
+      req.user = user;
+      return next();
     }
-    req.user = user;
-    next();
+    endSessionsOf(db, id);
+    req.session.destroy((err) => {
+      if (err) return next(err);
+      res.clearCookie(SESSION_COOKIE, { path: '/' });
+      next(new HttpError(401, 'NOT_SIGNED_IN', 'Your session has ended: this account is no longer active. Sign in again, or ask a chapter lead.'));
+    });
   };
 }
 

@@ -10,7 +10,7 @@ export const userSchema = z.strictObject({
 });
 export type User = z.infer<typeof userSchema>;
 
-export const loginBodySchema = z.object({
+export const loginBodySchema = z.strictObject({
   email: emailField,
   password: z.string({ error: 'Enter your password.' }).min(1, { error: 'Enter your password.' }).max(200),
 });
@@ -20,16 +20,16 @@ export const loginResponseSchema = z.strictObject({ user: userSchema, csrfToken:
 export const meResponseSchema = z.strictObject({ user: userSchema });
 export const csrfResponseSchema = z.strictObject({ token: z.string() });
 
-export const resetRequestBodySchema = z.object({ email: emailField });
+export const resetRequestBodySchema = z.strictObject({ email: emailField });
 export type ResetRequestBody = z.infer<typeof resetRequestBodySchema>;
 
-export const resetConfirmBodySchema = z.object({
+export const resetConfirmBodySchema = z.strictObject({
   token: linkTokenField,
   password: newPasswordField,
 });
 export type ResetConfirmBody = z.infer<typeof resetConfirmBodySchema>;
 
-export const acceptInvitationBodySchema = z.object({
+export const acceptInvitationBodySchema = z.strictObject({
   token: linkTokenField,
   name: personNameField,
   password: newPasswordField,

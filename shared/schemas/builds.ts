@@ -34,14 +34,14 @@ export const updateBuildBodySchema = z
   .refine((b) => Object.keys(b).length > 0, { error: 'Send at least one field to change.' });
 
 /** Something an assembly takes from a bin besides its rivet lines: 24 screws from B-0210. */
-export const extraItemSchema = z.object({
+export const extraItemSchema = z.strictObject({
   binCode: binCodeField,
   quantity: z.number({ error: 'Enter how many.' }).int({ error: 'Enter a whole number.' }).min(1, { error: 'At least 1.' }).max(1_000_000),
 });
 export type ExtraItem = z.infer<typeof extraItemSchema>;
 
 /** A rivet line as an assembly stores it: the estimate's line plus a label for people. */
-export const assemblyLineSchema = rivetLineSchema.and(z.object({ label: z.string().trim().max(80).optional() }));
+export const assemblyLineSchema = rivetLineSchema.safeExtend({ label: z.string().trim().max(80).optional() });
 export type AssemblyLine = z.infer<typeof assemblyLineSchema>;
 
 const assemblyFields = {

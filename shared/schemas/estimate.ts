@@ -5,7 +5,7 @@ import { RIVET_HEADS } from '../stock/kinds';
 const positiveLength = (what: string) =>
   z.number({ error: `Enter the ${what} as a number.` }).positive({ error: `The ${what} must be more than 0.` }).max(100_000, { error: `That ${what} is too large.` });
 
-export const rivetSpecSchema = z.object({
+export const rivetSpecSchema = z.strictObject({
   kind: z.enum(ESTIMATE_RIVET_KINDS, { error: 'The rivet kind is blind-structural, blind-general or solid.' }),
   head: z.enum(RIVET_HEADS, { error: 'The head is dome, countersunk or flange.' }),
   diameter32: z
@@ -16,7 +16,7 @@ export const rivetSpecSchema = z.object({
 });
 
 export const rivetLineSchema = z
-  .object({
+  .strictObject({
     length: positiveLength('line length'),
     rows: z.number().int({ error: 'Rows are a whole number.' }).min(1, { error: 'A line has at least 1 row.' }).max(20, { error: 'At most 20 rows in one line.' }).optional(),
     pitch: positiveLength('pitch').optional(),
@@ -32,7 +32,7 @@ export const rivetLineSchema = z
   .refine((l) => l.pitch !== undefined || l.holesPerRow !== undefined, { error: 'Give a target pitch or the holes per row.', path: ['pitch'] });
 export type RivetLine = z.infer<typeof rivetLineSchema>;
 
-export const estimateBodySchema = z.object({
+export const estimateBodySchema = z.strictObject({
   unit: z.enum(['in', 'mm'], { error: 'unit is "in" or "mm".' }),
   wastePercent: z.number({ error: 'The waste allowance is a percentage, like 5.' }).min(0, { error: 'Waste cannot be below 0 %.' }).max(100, { error: 'Waste is at most 100 %.' }).optional(),
   lines: z.array(rivetLineSchema, { error: 'Send the rivet lines as a list.' }).min(1, { error: 'Send at least one rivet line.' }).max(20_000, { error: 'At most 20,000 lines at a time.' }),

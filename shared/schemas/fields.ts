@@ -33,3 +33,6 @@ export const idParam = z.coerce
   .number({ error: 'The id must be a number.' })
   .int({ error: 'The id must be a whole number.' })
   .positive({ error: 'The id must be a positive number.' });
+
+/** The body of a command that takes no fields: `{}` or none at all; a field sent anyway is refused by name. */
+export const noFieldsBodySchema = z.strictObject({});

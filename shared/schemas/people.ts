@@ -15,7 +15,7 @@ export type Person = z.infer<typeof personSchema>;
 
 export const peopleListSchema = z.strictObject({ data: z.array(personSchema) });
 
-export const inviteBodySchema = z.object({ email: emailField, role: roleField });
+export const inviteBodySchema = z.strictObject({ email: emailField, role: roleField });
 export type InviteBody = z.infer<typeof inviteBodySchema>;
 
 export const pendingInvitationSchema = z.strictObject({

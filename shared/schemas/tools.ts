@@ -36,7 +36,7 @@ const toolFields = {
 };
 
 /** A new tool: what is not given takes its default. */
-const toolFieldsSchema = z.object({
+const toolFieldsSchema = z.strictObject({
   ...toolFields,
   location: toolFields.location.default(''),
   replacementValueCents: toolFields.replacementValueCents.default(0),
@@ -103,7 +103,7 @@ export const returnBodySchema = z
   });
 export type ReturnBody = z.infer<typeof returnBodySchema>;
 
-export const statusChangeBodySchema = z.object({
+export const statusChangeBodySchema = z.strictObject({
   note: z.string({ error: 'Give the reason.' }).trim().min(1, { error: 'Give the reason.' }).max(500),
 });
 export type StatusChangeBody = z.infer<typeof statusChangeBodySchema>;

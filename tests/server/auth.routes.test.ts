@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { buildTestApp, PASSWORD, type TestApp } from '../helpers/test-app';
+import { buildTestApp, PASSWORD, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
 beforeEach(async () => {
@@ -115,6 +115,59 @@ describe('GET /api/auth/me and POST /api/auth/logout', () => {
     const res = await agent.post('/api/auth/logout').set('X-CSRF-Token', csrf);
     expect(res.status).toBe(204);
     expect((await agent.get('/api/auth/me')).status).toBe(401);
+  });
+});
+
+describe('a session whose person was deactivated or removed outside the People screens', () => {
+  const sessionsOf = (email: string) =>
+    (
+      t.db.$client
+        .prepare("select count(*) as n from sessions where json_extract(sess, '$.userId') = (select id from users where email = ?)")
+        .get(email) as { n: number }
+    ).n;
+  const deactivate = (email: string) => t.db.$client.prepare('update users set deactivated_at = 1 where email = ?').run(email);
+  const remove = (email: string) => t.db.$client.prepare('delete from users where email = ?').run(email);
+
+  type Send = (s: SignedInAgent) => Promise<{ status: number; body: { error?: { code: string } } }>;
+  const requests: Array<[string, Send]> = [
+    ['GET /api/auth/me', (s) => s.agent.get('/api/auth/me')],
+    ['GET /api/auth/csrf', (s) => s.agent.get('/api/auth/csrf')],
+    ['GET /api/tools', (s) => s.agent.get('/api/tools')],
+    ['POST /api/auth/logout', (s) => s.agent.post('/api/auth/logout').set('X-CSRF-Token', s.csrf)],
+    ['PATCH /api/me/preferences', (s) => s.agent.patch('/api/me/preferences').set('X-CSRF-Token', s.csrf).send({ preferredUnit: 'mm' })],
+  ];
+
+  it.each(requests)('%s answers 401 NOT_SIGNED_IN once the person is deactivated in the database, and ends their sessions', async (_name, send) => {
+    const phone = await t.signIn('member@example.org');
+    await t.signIn('member@example.org');
+    expect(sessionsOf('member@example.org')).toBe(2);
+    deactivate('member@example.org');
+    const res = await send(phone);
+    expect(res.status).toBe(401);
+    expect(res.body.error?.code).toBe('NOT_SIGNED_IN');
+    expect(sessionsOf('member@example.org')).toBe(0);
+    expect((await phone.agent.get('/api/auth/me')).status).toBe(401);
+  });
+
+  it.each(requests)('%s answers 401 NOT_SIGNED_IN once the person’s row is deleted', async (_name, send) => {
+    const phone = await t.signIn('member@example.org');
+    const id = (await phone.agent.get('/api/auth/me')).body.user.id as number;
+    remove('member@example.org');
+    const res = await send(phone);
+    expect(res.status).toBe(401);
+    expect(res.body.error?.code).toBe('NOT_SIGNED_IN');
+    const left = t.db.$client.prepare("select count(*) as n from sessions where json_extract(sess, '$.userId') = ?").get(id) as { n: number };
+    expect(left.n).toBe(0);
+  });
+
+  it('lets someone else sign in on the same phone afterwards', async () => {
+    const phone = await t.signIn('member@example.org');
+    deactivate('member@example.org');
+    expect((await phone.agent.get('/api/tools')).status).toBe(401);
+    const token = (await phone.agent.get('/api/auth/csrf')).body.token as string;
+    const res = await phone.agent.post('/api/auth/login').set('X-CSRF-Token', token).send({ email: 'lead@example.org', password: PASSWORD });
+    expect(res.status).toBe(200);
+    expect((await phone.agent.get('/api/auth/me')).body.user.email).toBe('lead@example.org');
   });
 });
 

@@ -139,6 +139,12 @@ describe('the page and the client routes', () => {
     expect(gzip.headers.etag).not.toBe(first.headers.etag);
     expect(decoded(gzip)).toBe(variant(INDEX, 'gz'));
   });
+  it.each(['/%', '/tools/%zz', '/assets/%E0%A4%A.js'])('GET %s, a malformed percent-encoding, answers 400 BAD_REQUEST_PATH, not the page', async (path) => {
+    const res = await fetchRaw(path, { 'Accept-Encoding': 'br' });
+    expect(res.status).toBe(400);
+    expect(res.headers['content-type']).toMatch(/^application\/json/);
+    expect(JSON.parse(decoded(res))).toEqual({ error: { code: 'BAD_REQUEST_PATH', message: expect.any(String) } });
+  });
 });
 
 describe('API answers', () => {

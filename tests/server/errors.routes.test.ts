@@ -34,6 +34,43 @@ describe('unknown API paths', () => {
   });
 });
 
+describe('a path with a malformed percent-encoding', () => {
+  const expectBadPath = (res: { status: number; headers: Record<string, string>; body: unknown }) => {
+    expect(res.status).toBe(400);
+    expect(res.headers['content-type']).toMatch(/application\/json/);
+    expect(res.body).toEqual({ error: { code: 'BAD_REQUEST_PATH', message: expect.stringMatching(/percent/) } });
+    expectNoInternals(res.body);
+  };
+
+  it.each(['/api/tools/%', '/api/bins/%', '/api/users/%', '/api/assemblies/%zz', '/api/tools/%E0%A4%A', '/api/nope/%', '/api/tools/T-1%/photos'])(
+    'GET %s answers 400 BAD_REQUEST_PATH to a signed-in lead',
+    async (path) => {
+      const { agent } = await t.signIn('lead@example.org');
+      expectBadPath(await agent.get(path));
+    },
+  );
+
+  it.each(['/api/invitations/by-token/abc%', '/api/tools/%', '/api/health/%', '/%', '/tools/%zz'])('GET %s answers 400 BAD_REQUEST_PATH to anyone', async (path) => {
+    const { agent } = await t.anonymous();
+    expectBadPath(await agent.get(path));
+  });
+
+  it('answers 400 to a POST as well, before its CSRF check', async () => {
+    const { agent, csrf } = await t.signIn('lead@example.org');
+    expectBadPath(await agent.post('/api/tools/%/checkout').set('X-CSRF-Token', csrf).send({}));
+  });
+
+  it('reads a well-formed encoding as usual (%2D is a hyphen; %25 is a percent sign the code schema refuses)', async () => {
+    const { agent } = await t.signIn('lead@example.org');
+    const missing = await agent.get('/api/tools/T%2D0042');
+    expect(missing.status).toBe(404);
+    expect(missing.body.error.message).toMatch(/T-0042/);
+    const refused = await agent.get('/api/tools/T%25');
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.code).toBe('VALIDATION_FAILED');
+  });
+});
+
 describe('unexpected failures', () => {
   it('answers 500 INTERNAL_ERROR without internals when an async handler rejects (sign-in with the users table gone)', async () => {
     const { agent, csrf } = await t.anonymous();
@@ -107,7 +144,7 @@ const WELL_FORMED_TOKEN = 'T'.repeat(43);
 describe('bad input on every mutating route', () => {
   const cases: BadInputCase[] = [
     { route: 'POST /api/auth/login', as: 'anonymous', method: 'post', path: () => '/api/auth/login', body: { email: 42, password: ['x'] }, paths: ['email', 'password'] },
-    { route: 'POST /api/auth/password-reset', as: 'anonymous', method: 'post', path: () => '/api/auth/password-reset', body: { address: 'lead@example.org' }, paths: ['email'] },
+    { route: 'POST /api/auth/password-reset', as: 'anonymous', method: 'post', path: () => '/api/auth/password-reset', body: { address: 'lead@example.org' }, paths: ['address', 'email'] },
     {
       route: 'POST /api/auth/password-reset/confirm',
       as: 'anonymous',

@@ -152,7 +152,7 @@ describe('POST /api/labels/sheet', () => {
     ['no layout', { codes: ['T-0001'] }, 'layoutId'],
     ['a negative skip', { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'], skip: -1 }, 'skip'],
     ['a fractional skip', { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'], skip: 1.5 }, 'skip'],
-    ['an unknown field', { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'], copies: 2 }, ''],
+    ['an unknown field', { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'], copies: 2 }, 'copies'],
   ])('answers 400 VALIDATION_FAILED for %s', async (_name, body, path) => {
     addTools(1);
     const res = await postSheet(qm, body);

@@ -181,7 +181,7 @@ describe('PATCH /api/users/:id', () => {
 
   it.each([
     ['an empty body', {}, ''],
-    ['an unknown field', { role: 'member', nickname: 'Bucky' }, ''],
+    ['an unknown field', { role: 'member', nickname: 'Bucky' }, 'nickname'],
     ['an unknown role', { role: 'admiral' }, 'role'],
     ['an active flag that is not a boolean', { active: 'no' }, 'active'],
   ])('answers 400 VALIDATION_FAILED with issues for %s', async (_what, body, path) => {

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { RequestHandler } from 'express';
 import { loginBodySchema } from '@shared/schemas/auth';
+import { noFieldsBodySchema } from '@shared/schemas/fields';
 import { toUser } from '../../accounts/public-user';
 import { requireUser } from '../../middleware/auth';
 import { csrf } from '../../middleware/csrf';
@@ -28,6 +29,7 @@ export function authRouter(loginLimiters: RequestHandler[]) {
   });
 
   router.post('/logout', async (req, res) => {
+    parseInput(noFieldsBodySchema, req.body);
     await endSession(req);
     res.clearCookie(SESSION_COOKIE, { path: '/' });
     res.status(204).end();

@@ -17,7 +17,6 @@ export function labelsRouter() {
     const { filename, pdf } = await buildLabelSheet(req.ctx, parseInput(labelSheetBodySchema, req.body));
     res.setHeader('Content-Type', 'application/pdf');
     res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
-    res.setHeader('Cache-Control', 'no-store');
     res.send(pdf);
   });
 

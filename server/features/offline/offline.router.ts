@@ -8,7 +8,6 @@ export function offlineRouter(sources: CatalogueSources) {
   router.use(requireRole('member'));
 
   router.get('/catalogue', (req, res) => {
-    res.set('Cache-Control', 'no-store');
     res.json(takeCatalogue(req.ctx, requireUser(req), sources));
   });
 

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { noFieldsBodySchema } from '@shared/schemas/fields';
 import { alertIdParams, alertListQuerySchema, dismissBodySchema, markOrderedBodySchema } from '@shared/schemas/forecast';
 import { sendCsv } from '../../lib/csv';
 import { parseInput } from '../../lib/validate';
@@ -21,6 +22,7 @@ export function alertsRouter() {
   });
 
   router.post('/refresh', (req, res) => {
+    parseInput(noFieldsBodySchema, req.body);
     const { raised } = refreshAlerts(req.ctx);
     res.json({ raised: raised.length, data: listAlertsIn(req.ctx, 'active') });
   });

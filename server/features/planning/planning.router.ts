@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { noFieldsBodySchema } from '@shared/schemas/fields';
 import {
   assemblyIdParams,
   assemblyListQuerySchema,
@@ -65,7 +66,9 @@ export function assembliesRouter(deps: { placeHold: PlaceHold }) {
     res.json(getAssemblyEstimate(req.ctx, requireUser(req), id(req.params)));
   });
   router.post('/:id/kit/holds', (req, res) => {
-    res.status(201).json(holdKit(req.ctx, requireUser(req), id(req.params), deps.placeHold));
+    const assemblyId = id(req.params);
+    parseInput(noFieldsBodySchema, req.body);
+    res.status(201).json(holdKit(req.ctx, requireUser(req), assemblyId, deps.placeHold));
   });
   return router;
 }

@@ -17,6 +17,7 @@ import {
 import { idParam } from '@shared/schemas/fields';
 import { z } from 'zod';
 import { requireRole, requireUser } from '../../middleware/auth';
+import { PRIVATE_FILE_CACHE } from '../../middleware/cache-control';
 import type { RunQueuedAction } from '../../lib/queued-action';
 import { parseInput } from '../../lib/validate';
 import { createBin, editBin, getBinForYou, listBinPage, restockList } from './bins.service';
@@ -56,7 +57,7 @@ export function binsRouter({ runQueuedAction, nameAssemblies }: { runQueuedActio
 
   router.get('/slips/:id', quartermaster, (req, res) => {
     const slip = readSlip(req.ctx, parseInput(z.object({ id: idParam }), req.params, 'path').id);
-    res.set('Cache-Control', 'private, max-age=31536000, immutable').type(slip.contentType);
+    res.set('Cache-Control', PRIVATE_FILE_CACHE).type(slip.contentType);
     res.setHeader('Content-Disposition', `inline; filename="${slip.filename}"`);
     res.send(slip.bytes);
   });

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { noFieldsBodySchema } from '@shared/schemas/fields';
 import { loanIdParams } from '@shared/schemas/overdue';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { parseInput } from '../../lib/validate';
@@ -15,6 +16,7 @@ export function overdueRouter() {
 
   router.post('/:loanId/remind', async (req, res) => {
     const { loanId } = parseInput(loanIdParams, req.params, 'path');
+    parseInput(noFieldsBodySchema, req.body);
     res.status(201).json(await sendReminderNow(req.ctx, requireUser(req), loanId));
   });
 

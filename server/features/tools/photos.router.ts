@@ -3,6 +3,7 @@ import { photoIdParams } from '@shared/schemas/photos';
 import { toolCodeParams } from '@shared/schemas/tools';
 import { parseInput } from '../../lib/validate';
 import { requireRole, requireUser } from '../../middleware/auth';
+import { PRIVATE_FILE_CACHE } from '../../middleware/cache-control';
 import { addPhoto, photoUploadTarget, readPhoto, removePhoto } from './photos.service';
 import { receivePhoto } from './receive-photo';
 
@@ -25,9 +26,8 @@ export function toolPhotosRouter() {
   return router;
 }
 
-/** Photos never change once stored (a new photo gets a new id), so browsers may keep them. */
 function sendJpeg(res: Response, bytes: Buffer) {
-  res.set('Cache-Control', 'private, max-age=31536000, immutable').type('image/jpeg').send(bytes);
+  res.set('Cache-Control', PRIVATE_FILE_CACHE).type('image/jpeg').send(bytes);
 }
 
 /** GET and DELETE /api/photos/:id. */

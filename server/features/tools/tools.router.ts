@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { noFieldsBodySchema } from '@shared/schemas/fields';
 import { z } from 'zod';
 import {
   checkoutBodySchema,
@@ -70,7 +71,9 @@ export function toolsRouter({ runQueuedAction }: { runQueuedAction: RunQueuedAct
   );
 
   router.post('/:code/holds', (req, res) => {
-    res.status(201).json(placeHold(req.ctx, requireUser(req), code(req.params)));
+    const toolCode = code(req.params);
+    parseInput(noFieldsBodySchema, req.body);
+    res.status(201).json(placeHold(req.ctx, requireUser(req), toolCode));
   });
 
   router.delete('/:code/holds/mine', async (req, res) => {

@@ -54,7 +54,7 @@ describe('UpdateNotice', () => {
 
   it('offers the reload again once the member leaves the half-filled form', async () => {
     render(<PageWithForm needRefresh onUpdate={vi.fn()} />);
-    await userEvent.type(screen.getByLabelText('Note'), 'short two clecos');
+    await userEvent.type(screen.getByLabelText('Note'), 'short two temporary fasteners');
     expect(screen.queryByRole('button', { name: 'Reload now' })).toBeNull();
     await userEvent.click(screen.getByRole('button', { name: 'Leave the form' }));
     expect(await screen.findByRole('button', { name: 'Reload now' })).toBeTruthy();

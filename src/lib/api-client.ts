@@ -118,8 +118,12 @@ async function mutate<T>(method: string, path: string, body?: unknown, answer: A
 
 /** The only place the client calls fetch. */
 export const api = {
-  /** A read gives up after ANSWER_TIMEOUT_MS unless told otherwise: then the phone's copy can take over. */
-  get: <T>(path: string, options?: RequestOptions) => send<T>('GET', path, undefined, undefined, 'json', { timeoutMs: ANSWER_TIMEOUT_MS, ...options }),
+  get: <T>(path: string, options?: RequestOptions) => send<T>('GET', path, undefined, undefined, 'json', options ?? {}),
+  /**
+   * A read on the scan path (the person, a scanned tool or bin, the offline copy) gives up after
+   * ANSWER_TIMEOUT_MS, so the phone's copy can take over; other pages wait for a slow link.
+   */
+  getOrGiveUp: <T>(path: string) => send<T>('GET', path, undefined, undefined, 'json', { timeoutMs: ANSWER_TIMEOUT_MS }),
   post: <T>(path: string, body?: unknown, options?: RequestOptions) => mutate<T>('POST', path, body ?? {}, 'json', options),
   patch: <T>(path: string, body: unknown) => mutate<T>('PATCH', path, body),
   delete: <T = void>(path: string) => mutate<T>('DELETE', path),

@@ -6,7 +6,7 @@ import { authKeys } from './keys';
 /** The signed-in person, or null when signed out. */
 export async function getMe(): Promise<User | null> {
   try {
-    return (await api.get<{ user: User }>('/api/auth/me')).user;
+    return (await api.getOrGiveUp<{ user: User }>('/api/auth/me')).user;
   } catch (err) {
     if (err instanceof ApiError && err.status === 401) return null;
     throw err;

@@ -9,7 +9,7 @@ export const CATALOGUE_PATH = '/api/offline/catalogue';
  * Answers undefined when the session belongs to someone other than `memberId` (the person changed).
  */
 export async function refreshCatalogue(memberId: number): Promise<Catalogue | undefined> {
-  const catalogue = catalogueSchema.parse(await api.get<unknown>(CATALOGUE_PATH));
+  const catalogue = catalogueSchema.parse(await api.getOrGiveUp<unknown>(CATALOGUE_PATH));
   if (catalogue.you.id !== memberId) return undefined;
   await offlineDb.transaction('rw', offlineDb.catalogues, async () => {
     await offlineDb.catalogues.where('memberId').notEqual(memberId).delete();

@@ -27,7 +27,7 @@ function isRefusal(err: unknown): err is ApiError {
 /** The server applies an action to whoever the session belongs to: send only when that is this member. */
 async function sessionIsMember(memberId: number): Promise<boolean> {
   try {
-    const { user } = await api.get<{ user: { id: number } }>('/api/auth/me');
+    const { user } = await api.getOrGiveUp<{ user: { id: number } }>('/api/auth/me');
     return user.id === memberId;
   } catch (err) {
     if (err instanceof ApiError) return false;

@@ -17,6 +17,6 @@ export const binsQueryOptions = (filters: Partial<BinListQuery> = { pageSize: 50
 export const binQueryOptions = (code: string) =>
   queryOptions({
     queryKey: binKeys.detail(code),
-    queryFn: () => api.get<BinForYou>(`/api/bins/${encodeURIComponent(code)}`),
+    queryFn: () => api.getOrGiveUp<BinForYou>(`/api/bins/${encodeURIComponent(code)}`),
     retry: false,
   });

@@ -6,7 +6,7 @@ import { toolKeys } from './keys';
 export const toolQueryOptions = (code: string) =>
   queryOptions({
     queryKey: toolKeys.detail(code),
-    queryFn: () => api.get<ToolForYou>(`/api/tools/${encodeURIComponent(code)}`),
+    queryFn: () => api.getOrGiveUp<ToolForYou>(`/api/tools/${encodeURIComponent(code)}`),
     retry: false,
   });
 

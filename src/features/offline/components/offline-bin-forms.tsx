@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { QuantityField } from '@/components/ui/quantity-field';
-import { formatQuantity } from '@/lib/format';
+import { formatAssembly, formatQuantity } from '@/lib/format';
 import { queueFromCopy } from '../api/queue-from-copy';
 import type { StoredCatalogue } from '../db';
 import type { OfflineBin } from '../utils/offline-state';
@@ -69,7 +69,7 @@ export function OfflineBinForm({ copy, state, kind }: { copy: StoredCatalogue; s
           label="For which assembly (optional)"
           value={assemblyId}
           onChange={(e) => setAssemblyId(e.target.value)}
-          options={[{ value: '', label: 'Not for an assembly' }, ...assemblies.map((a) => ({ value: String(a.id), label: `${a.name} · ${a.buildName}` }))]}
+          options={[{ value: '', label: 'Not for an assembly' }, ...assemblies.map((a) => ({ value: String(a.id), label: formatAssembly(a) }))]}
         />
       )}
       <Button type="submit" busy={busy} className="w-full text-lg">

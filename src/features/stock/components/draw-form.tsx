@@ -8,6 +8,7 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { applyServerErrors } from '@/lib/errors';
 import { useDraw } from '../api/bin-actions';
 import { myAssembliesQueryOptions } from '../api/get-my-assemblies';
+import { formatAssembly } from '@/lib/format';
 import { formatCents, formatQuantity, formatUnitCost } from '../utils/format';
 import { valueAtCost } from '../utils/value';
 import { ActionForm, Preview, QuantityInput } from './action-form';
@@ -45,7 +46,7 @@ export function DrawForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void 
       {openAssemblies.length > 0 && (
         <SelectField
           label="For which assembly (optional)"
-          options={[{ value: '', label: 'Not for an assembly' }, ...openAssemblies.map((a) => ({ value: String(a.id), label: `${a.name} · ${a.buildName}` }))]}
+          options={[{ value: '', label: 'Not for an assembly' }, ...openAssemblies.map((a) => ({ value: String(a.id), label: formatAssembly(a) }))]}
           error={form.formState.errors.assemblyId?.message}
           {...form.register('assemblyId', { setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v)) })}
         />

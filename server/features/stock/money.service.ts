@@ -8,7 +8,7 @@ import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { binDesignation } from '@shared/stock/fasteners';
 import { e4ToDollars, valueCents } from '@shared/stock/money';
-import { withAssemblyNames, type NameAssemblies } from './assembly-names';
+import { namesFor, withNames, type NameAssemblies } from './assembly-names';
 import { insertPayment, namesOf, paidByPerson, paymentById, paymentsOf, spendEntries, tabEntries, type PaymentRow, type TabEntryRow } from './money.repo';
 
 const RECENT_ENTRIES = 25;
@@ -75,22 +75,22 @@ export function readTab(ctx: ServiceContext, nameAssemblies: NameAssemblies, vie
     monthRow(monthOf(p.p.at)).paidCents += p.p.amountCents;
   }
 
+  // Assemblies in id order; stock not tied to one comes last.
+  const byAssembly = [...assemblies]
+    .filter(([, v]) => v.quantity !== 0 || v.chargedCents !== 0)
+    .sort(([a], [b]) => (a ?? Infinity) - (b ?? Infinity))
+    .map(([assemblyId, v]) => ({ assemblyId, ...v }));
+  const recent = entries.slice(-RECENT_ENTRIES).reverse().map(entryDto);
+  const names = namesFor(ctx.db, nameAssemblies, byAssembly, recent);
+
   return {
     member: { id: member.id, name: member.name },
     chargedCents,
     paidCents,
     balanceCents: chargedCents - paidCents,
     byMonth: [...months].sort(([a], [b]) => b.localeCompare(a)).map(([month, v]) => ({ month, ...v })),
-    // Assemblies in id order; stock not tied to one comes last.
-    byAssembly: withAssemblyNames(
-      ctx.db,
-      nameAssemblies,
-      [...assemblies]
-        .filter(([, v]) => v.quantity !== 0 || v.chargedCents !== 0)
-        .sort(([a], [b]) => (a ?? Infinity) - (b ?? Infinity))
-        .map(([assemblyId, v]) => ({ assemblyId, ...v })),
-    ),
-    recent: withAssemblyNames(ctx.db, nameAssemblies, entries.slice(-RECENT_ENTRIES).reverse().map(entryDto)),
+    byAssembly: withNames(byAssembly, names),
+    recent: withNames(recent, names),
     payments: payments.map(paymentDto),
   };
 }

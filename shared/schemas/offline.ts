@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { ROLES } from '../roles';
 import { BIN_KINDS } from '../stock/kinds';
 import { TOOL_CATEGORIES, TOOL_STATUSES } from '../tools/categories';
 
@@ -81,7 +82,7 @@ export type CatalogueBin = z.infer<typeof catalogueBinSchema>;
 export const catalogueSchema = z.object({
   /** When the server took this copy (ISO 8601). */
   takenAt: z.string(),
-  you: person.extend({ role: z.string() }),
+  you: person.extend({ role: z.enum(ROLES) }),
   tools: z.array(catalogueToolSchema),
   bins: z.array(catalogueBinSchema),
   /** Codes of the tools the member has out now. */

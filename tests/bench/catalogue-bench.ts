@@ -21,6 +21,7 @@ import { openAssembliesOf } from '../../server/features/planning/assembly-catalo
 import { catalogueBins } from '../../server/features/stock/bin-catalogue';
 import { catalogueTools, signoffIdsOf } from '../../server/features/tools/tool-catalogue';
 import type { Mailer } from '../../server/mail/mailer';
+import { median } from './median';
 
 const RUNS = 15;
 const MEMBERS = 40;
@@ -79,7 +80,6 @@ function fill(db: Database, size: number): UserRow {
   return people[0]!;
 }
 
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[xs.length >> 1]!;
 
 function timed(work: () => unknown): number {
   for (let i = 0; i < 5; i++) work();

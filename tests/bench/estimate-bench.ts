@@ -5,6 +5,7 @@
 import { estimate, isEstimateErrors } from '../../shared/estimate/estimate';
 import type { RivetLineInput } from '../../shared/estimate/estimate-line';
 import { seededRandom } from '../../shared/random/seeded';
+import { median } from './median';
 
 const kinds = ['blind-structural', 'blind-general', 'solid'] as const;
 const heads = ['dome', 'countersunk', 'flange'] as const;
@@ -26,10 +27,6 @@ function lines(n: number): RivetLineInput[] {
   }));
 }
 
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)]!;
-}
 
 /**
  * Median time of one estimate. Each sample times a batch of runs lasting at least SAMPLE_MIN_MS, so a

@@ -9,6 +9,7 @@ import { performance } from 'node:perf_hooks';
 import { seededRandom as seeded } from '@shared/random/seeded';
 import { binForecast } from '@shared/forecast/bin-forecast';
 import { spreadAssemblyDemand, weekIndexOf, weekStarts, weeklyDrawHistory, type DrawEntry, type PlannedAssembly } from '@shared/forecast/demand';
+import { median } from './median';
 
 const WEEKS = 26;
 const ASSEMBLIES = 200;
@@ -81,11 +82,6 @@ function forecastAll({ bins, assemblies, draws, receiptsByBin }: Scenario): numb
   return alerts;
 }
 
-const median = (xs: number[]) => {
-  const s = [...xs].sort((a, b) => a - b);
-  const mid = s.length >> 1;
-  return s.length % 2 ? s[mid]! : (s[mid - 1]! + s[mid]!) / 2;
-};
 
 function measure(binCount: number) {
   const data = scenario(binCount, 417 + binCount);

@@ -15,6 +15,7 @@ import { bins, stockMovements } from '../../server/db/schema/stock';
 import { users } from '../../server/db/schema/users';
 import { forecastList } from '../../server/features/planning/forecast.service';
 import type { Mailer } from '../../server/mail/mailer';
+import { median } from './median';
 
 const ASSEMBLIES = 200;
 const WEEKS = 26;
@@ -103,7 +104,6 @@ function fill(db: Database, binCount: number, seed: number): void {
   });
 }
 
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[xs.length >> 1]!;
 
 function measure(binCount: number) {
   const db = openDatabase(':memory:');

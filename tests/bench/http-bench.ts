@@ -219,11 +219,7 @@ export function noRefusals<R extends Run>(runs: R[], nameOf: (run: R) => string)
 
 export const fmt = (n: number, digits = 1, width = 9) => n.toFixed(digits).padStart(width);
 export const mean = (xs: number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
-export const median = (xs: number[]) => {
-  const sorted = [...xs].sort((a, b) => a - b);
-  const mid = sorted.length >> 1;
-  return sorted.length % 2 ? sorted[mid]! : (sorted[mid - 1]! + sorted[mid]!) / 2;
-};
+export { median } from './median';
 
 /** Seconds since `startedAt`, for progress lines. */
 export const elapsedSince = (startedAt: number) => () => `[${((Date.now() - startedAt) / 1000).toFixed(0).padStart(3)} s]`;

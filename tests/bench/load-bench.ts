@@ -18,6 +18,7 @@ import { createServer, request, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import type { Browser, BrowserContext, CDPSession, Page } from 'playwright-core';
 import { launchChromium, startBuiltApp } from '../helpers/browser';
+import { median } from './median';
 
 const ROUNDS = Number(process.env.LOAD_BENCH_ROUNDS ?? 5);
 const SLOW_LINK = { offline: false, latency: 150, downloadThroughput: 1_600_000 / 8, uploadThroughput: 750_000 / 8 };
@@ -128,10 +129,6 @@ async function scanDirect(browser: Browser, side: Side, base: string) {
   await context.close();
 }
 
-const median = (xs: number[]) => {
-  const s = [...xs].sort((a, b) => a - b);
-  return s.length % 2 ? s[(s.length - 1) / 2]! : (s[s.length / 2 - 1]! + s[s.length / 2]!) / 2;
-};
 const ms = (n: number) => `${(n / 1000).toFixed(2)} s`;
 
 function report() {

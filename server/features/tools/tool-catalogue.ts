@@ -6,10 +6,10 @@ import { listActiveGrants } from './signoffs.repo';
 import { effectiveLoanDays, toolIdentity } from './tool-dto';
 import { loadToolExtras } from './tools.repo';
 
-/** Every tool a scan may find (all but retired ones), as a phone keeps it for offline use: five queries in all. */
+/** Every tool a scan may find (all but retired ones), as a phone keeps it for offline use: four queries in all (no photo ids). */
 export function catalogueTools(db: Database): CatalogueTool[] {
   const rows = db.select().from(tools).where(ne(tools.status, 'retired')).orderBy(asc(tools.code)).all();
-  const extras = loadToolExtras(db, rows);
+  const extras = loadToolExtras(db, rows, { withPhotos: false });
   return rows.map((row) => {
     const loan = extras.loans.get(row.id);
     return {

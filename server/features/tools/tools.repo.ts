@@ -111,7 +111,7 @@ function oneToolRows(db: Database, row: ToolRow): ExtrasRows {
   };
 }
 
-function pageRows(db: Database, rows: ToolRow[]): ExtrasRows {
+function pageRows(db: Database, rows: ToolRow[], withPhotos: boolean): ExtrasRows {
   const ids = rows.map((r) => r.id);
   const signoffIds = [...new Set(rows.map((r) => r.requiredSignoffId).filter((id): id is number => id !== null))];
   return {
@@ -128,15 +128,18 @@ function pageRows(db: Database, rows: ToolRow[]): ExtrasRows {
       .where(and(inArray(holds.toolId, ids), inArray(holds.status, [...ACTIVE_HOLD])))
       .all(),
     signoffs: signoffIds.length > 0 ? db.select({ id: signoffs.id, name: signoffs.name }).from(signoffs).where(inArray(signoffs.id, signoffIds)).all() : [],
-    photos: db.select({ id: photos.id, toolId: photos.toolId }).from(photos).where(inArray(photos.toolId, ids)).orderBy(asc(photos.id)).all(),
+    photos: withPhotos ? db.select({ id: photos.id, toolId: photos.toolId }).from(photos).where(inArray(photos.toolId, ids)).orderBy(asc(photos.id)).all() : [],
   };
 }
 
-/** Open loans, hold queues, sign-off names and photo ids for a page of tools (or the one scanned), in four queries. */
-export function loadToolExtras(db: Database, rows: ToolRow[]): ToolExtras {
+/**
+ * Open loans, hold queues, sign-off names and photo ids for a page of tools (or the one scanned), in
+ * four queries; `withPhotos: false` skips the photo ids (the offline copy has no use for them).
+ */
+export function loadToolExtras(db: Database, rows: ToolRow[], { withPhotos = true } = {}): ToolExtras {
   const extras: ToolExtras = { loans: new Map(), holds: new Map(), signoffNames: new Map(), photoIds: new Map() };
   if (rows.length === 0) return extras;
-  const found = rows.length === 1 ? oneToolRows(db, rows[0]!) : pageRows(db, rows);
+  const found = rows.length === 1 ? oneToolRows(db, rows[0]!) : pageRows(db, rows, withPhotos);
   for (const l of found.loans) extras.loans.set(l.toolId, l);
   for (const h of found.holds) {
     const entry = extras.holds.get(h.toolId) ?? { waiting: 0, offeredTo: null, offerExpiresAt: null };

@@ -76,7 +76,6 @@ export function createApp(config: AppConfig) {
 
   const ctx: ServiceContext = {
     db: config.db,
-    mailer: config.mailer,
     publicUrl: config.publicUrl,
     now: config.now ?? (() => new Date()),
   };

@@ -1,7 +1,6 @@
 import type { Logger } from './lib/logger';
 import type { Database } from './db/client';
 import type { CertificateDownload } from './lan/certificate.router';
-import type { Mailer } from './mail/mailer';
 
 export interface RateLimitConfig {
   /** Window for counting failed sign-ins. */
@@ -22,7 +21,6 @@ export interface AppConfig {
   sessionIdleMs: number;
   /** Base URL put in e-mailed links, e.g. http://localhost:3000 */
   publicUrl: string;
-  mailer: Mailer;
   /** True when the built-in mail catcher receives the mail (no real SMTP server configured). */
   catchingMail: boolean;
   logger: Logger;

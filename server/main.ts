@@ -14,6 +14,7 @@ import { sweepIdempotencyKeys } from './features/idempotency/idempotency.service
 import { createLogger } from './lib/logger';
 import { startMailCatcher, type MailCatcher } from './mail/mail-catcher';
 import { createSmtpMailer } from './mail/mailer';
+import { startOutboxWorker } from './mail/outbox-worker';
 import { seedDemoChapter } from './seed/demo-chapter';
 import { resolveSessionSecret } from './session-secret';
 import { createTlsServer, tlsFromEnv } from './tls';
@@ -62,7 +63,6 @@ export async function startGripline(env: Env, options: StartOptions = {}): Promi
     secureCookies: env.SECURE_COOKIES || tls !== undefined,
     sessionIdleMs: env.SESSION_IDLE_MINUTES * 60_000,
     publicUrl: env.PUBLIC_URL ?? url,
-    mailer,
     catchingMail: catcher !== undefined,
     logger,
     rateLimit: { windowMs: 15 * 60_000, perIp: 50, perAccount: 10 },
@@ -71,7 +71,8 @@ export async function startGripline(env: Env, options: StartOptions = {}): Promi
     certificateDownload: options.lanCertificate && { pem: options.lanCertificate.authority, fileName: options.lanCertificate.fileName },
   });
   server.on('request', app);
-  const jobContext = { db, mailer, publicUrl: env.PUBLIC_URL ?? url, now: () => new Date() };
+  const jobContext = { db, publicUrl: env.PUBLIC_URL ?? url, now: () => new Date() };
+  const outbox = startOutboxWorker({ db, mailer, now: jobContext.now }, logger);
   const scheduler = startCribScheduler(jobContext, logger, [{ name: 'sweep-idempotency-keys', run: () => sweepIdempotencyKeys(jobContext) }]);
   const planningScheduler = startPlanningScheduler(jobContext, logger);
   const backupScheduler = env.DATABASE_PATH === ':memory:' ? undefined : startBackupScheduler(db.$client, backupDirFor(env), logger);
@@ -88,6 +89,7 @@ export async function startGripline(env: Env, options: StartOptions = {}): Promi
       scheduler.stop();
       planningScheduler.stop();
       backupScheduler?.stop();
+      await outbox.stop();
       app.sessionStore.close();
       mailer.close();
       await catcher?.close();

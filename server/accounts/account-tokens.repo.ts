@@ -1,4 +1,4 @@
-import { and, desc, eq, gt, isNull } from 'drizzle-orm';
+import { and, count, desc, eq, gt, gte, isNull } from 'drizzle-orm';
 import type { Executor } from '../db/client';
 import { accountTokens, type AccountTokenRow } from '../db/schema/account-tokens';
 import { users } from '../db/schema/users';
@@ -19,6 +19,15 @@ export function findAccountToken(
     .from(accountTokens)
     .where(and(eq(accountTokens.kind, kind), eq(accountTokens.tokenHash, tokenHash)))
     .get();
+}
+
+/** How many links of one kind an address was sent since a moment (used, withdrawn or not). */
+export function countTokensSince(db: Executor, kind: AccountTokenRow['kind'], email: string, since: Date): number {
+  return db
+    .select({ n: count() })
+    .from(accountTokens)
+    .where(and(eq(accountTokens.kind, kind), eq(accountTokens.email, email), gte(accountTokens.createdAt, since)))
+    .get()!.n;
 }
 
 /** Marks a token used only if nobody used it first; returns false when it lost that race. */

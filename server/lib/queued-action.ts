@@ -1,10 +1,9 @@
 import type { Request, Response } from 'express';
 
-/** What an action answers: the status and JSON to send, and work to do once its transaction has committed (e-mail). */
+/** What an action answers: the status and JSON to send (its e-mail, if any, is in the outbox). */
 export interface ActionAnswer {
   status: number;
   body: unknown;
-  afterCommit?: () => Promise<void>;
 }
 
 /** An action a phone may have queued offline; it runs synchronously, with the time it was done. */
@@ -15,4 +14,4 @@ export type QueuedAction = (performedAt: Date) => ActionAnswer;
  * runs the action at most once per key and sends its answer. The app hands the implementation
  * (the idempotency feature) to the routers that need it.
  */
-export type RunQueuedAction = (req: Request, res: Response, action: QueuedAction) => Promise<void>;
+export type RunQueuedAction = (req: Request, res: Response, action: QueuedAction) => void;

@@ -3,13 +3,12 @@ import { simpleParser, type AddressObject } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
 import type { Database } from '../db/client';
 import { caughtMail } from '../db/schema/mail';
+import { linksIn } from './links';
 
 export interface MailCatcher {
   url: string;
   close(): Promise<void>;
 }
-
-const LINK = /https?:\/\/[^\s<>"')]+/g;
 
 function addresses(field: AddressObject | AddressObject[] | undefined): string[] {
   const list = Array.isArray(field) ? field : field ? [field] : [];
@@ -38,7 +37,7 @@ export async function startMailCatcher(db: Database): Promise<MailCatcher> {
               toAddresses: JSON.stringify(addresses(parsed.to)),
               subject: parsed.subject ?? '(no subject)',
               textBody: text,
-              links: JSON.stringify([...new Set(text.match(LINK) ?? [])]),
+              links: JSON.stringify(linksIn(text)),
             })
             .run();
           callback();

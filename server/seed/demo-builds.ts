@@ -144,7 +144,7 @@ export interface DemoBuildsSummary {
  */
 export function seedDemoBuilds(db: Database, now: Date = new Date()): DemoBuildsSummary {
   let clock = new Date(now.getTime() - 60 * DAY_MS);
-  const ctx: ServiceContext = { db, mailer: { send: async () => {}, close: () => {} }, publicUrl: 'http://localhost', now: () => clock };
+  const ctx: ServiceContext = { db, publicUrl: 'http://localhost', now: () => clock };
   const today = Math.floor(now.getTime() / DAY_MS) * DAY_MS;
   const day = (offset: number) => new Date(today + offset * DAY_MS).toISOString().slice(0, 10);
   const binCode = (name: string) => db.select({ code: bins.code }).from(bins).where(eq(bins.name, name)).get()?.code;

@@ -86,16 +86,13 @@ const DEMO_TOOLS: DemoTool[] = [
   { name: 'Fluting pliers', category: 'other', location: 'Wall rack', replacementValueCents: 2400 },
 ];
 
-/** Sends nothing: the seed must not fill the mail catcher with reminders from the past. */
-const silentMailer = { send: async () => {}, close: () => {} };
-
 /**
  * Seeds the invented chapter's crib through the same services members use, at dates in the past,
  * so its audit trail, loans (two overdue), a hold and a tool due for calibration read as real.
  */
-export async function seedDemoCrib(db: Database, now: Date = new Date()): Promise<void> {
+export function seedDemoCrib(db: Database, now: Date = new Date()): void {
   let clock = now;
-  const ctx: ServiceContext = { db, mailer: silentMailer, publicUrl: 'http://localhost', now: () => clock };
+  const ctx: ServiceContext = { db, publicUrl: 'http://localhost', now: () => clock };
   const at = (daysAgo: number) => (clock = new Date(now.getTime() - daysAgo * DAY_MS));
   const person = (email: string): UserRow => findUserByEmail(db, email)!;
   const lead = person('lead@example.org');
@@ -120,9 +117,9 @@ export async function seedDemoCrib(db: Database, now: Date = new Date()): Promis
 
   // The second torque wrench came back from calibration recently; the first is overdue for it.
   at(30);
-  await changeToolStatus(ctx, quartermaster, code('Torque wrench, 10–80 ft-lb'), 'out_of_service', 'Sent for calibration');
+  changeToolStatus(ctx, quartermaster, code('Torque wrench, 10–80 ft-lb'), 'out_of_service', 'Sent for calibration');
   at(5);
-  await changeToolStatus(ctx, quartermaster, code('Torque wrench, 10–80 ft-lb'), 'back_in_service', 'Calibrated, certificate in the binder', true);
+  changeToolStatus(ctx, quartermaster, code('Torque wrench, 10–80 ft-lb'), 'back_in_service', 'Calibrated, certificate in the binder', true);
 
   at(21);
   checkOut(ctx, kelechi, code('Temporary fasteners 1/8, tray'), {});
@@ -135,14 +132,14 @@ export async function seedDemoCrib(db: Database, now: Date = new Date()): Promis
   placeHold(ctx, tomasz, code('Pneumatic rivet puller'));
   at(4);
   checkOut(ctx, marco, code('Drill bit #40, jobber'), {});
-  await returnTool(ctx, marco, code('Drill bit #40, jobber'), { condition: 'ok' });
+  returnTool(ctx, marco, code('Drill bit #40, jobber'), { condition: 'ok' });
   at(3);
   checkOut(ctx, tomasz, code('Rivet gun, 3X'), {});
-  await returnTool(ctx, tomasz, code('Rivet gun, 3X'), { condition: 'needs_attention', note: 'Throttle valve leaks air' });
+  returnTool(ctx, tomasz, code('Rivet gun, 3X'), { condition: 'needs_attention', note: 'Throttle valve leaks air' });
   at(2);
   checkOut(ctx, quartermaster, code('Air drill, 90° angle head'), {});
   checkOut(ctx, tomasz, code('Rivet spacing fan, 12 hole'), {});
   at(1);
   checkOut(ctx, ines, code('Deburring tool, swivel blade'), {});
-  await changeToolStatus(ctx, quartermaster, code('Edge deburring tool'), 'lost', 'Not in the drawer at the monthly count');
+  changeToolStatus(ctx, quartermaster, code('Edge deburring tool'), 'lost', 'Not in the drawer at the monthly count');
 }

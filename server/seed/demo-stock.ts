@@ -217,7 +217,7 @@ export interface DemoStockSummary {
  */
 export function seedDemoStock(db: Database, now: Date = new Date()): DemoStockSummary {
   let clock = now;
-  const ctx: ServiceContext = { db, mailer: { send: async () => {}, close: () => {} }, publicUrl: 'http://localhost', now: () => clock };
+  const ctx: ServiceContext = { db, publicUrl: 'http://localhost', now: () => clock };
   const today = Math.floor(now.getTime() / DAY_MS) * DAY_MS;
   const dayAt = (daysAgo: number, hour: number) => new Date(today - daysAgo * DAY_MS + Math.round(hour * 60) * 60_000);
   const people = new Map<string, UserRow>();

@@ -165,6 +165,14 @@ export function createAppRouter(queryClient: QueryClient) {
           },
         },
         {
+          path: 'my-mail',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { MyMailRoute, myMailLoader } = await import('./routes/app/my-mail');
+            return { loader: myMailLoader(queryClient), Component: MyMailRoute };
+          },
+        },
+        {
           path: 'overdue',
           ErrorBoundary: RouteError,
           lazy: async () => {

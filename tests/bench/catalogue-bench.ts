@@ -20,7 +20,6 @@ import { takeCatalogue } from '../../server/features/offline/offline.service';
 import { openAssembliesOf } from '../../server/features/planning/assembly-catalogue';
 import { catalogueBins } from '../../server/features/stock/bin-catalogue';
 import { catalogueTools, signoffIdsOf } from '../../server/features/tools/tool-catalogue';
-import type { Mailer } from '../../server/mail/mailer';
 import { median } from './median';
 
 const RUNS = 15;
@@ -96,7 +95,7 @@ function measure(size: number) {
   const db = openDatabase(':memory:');
   migrateDatabase(db);
   const member = fill(db, size);
-  const ctx: ServiceContext = { db, mailer: {} as Mailer, publicUrl: 'http://bench.test', now: () => NOW };
+  const ctx: ServiceContext = { db, publicUrl: 'http://bench.test', now: () => NOW };
   const bareTools = db.$client.prepare('select * from tools');
   const bareBins = db.$client.prepare('select * from bins');
   // Interleaved (ABBA) so both sides see the same neighbours on a shared machine.

@@ -14,7 +14,6 @@ import { assemblies, binAlerts, builds } from '../../server/db/schema/builds';
 import { bins, stockMovements } from '../../server/db/schema/stock';
 import { users } from '../../server/db/schema/users';
 import { forecastList } from '../../server/features/planning/forecast.service';
-import type { Mailer } from '../../server/mail/mailer';
 import { median } from './median';
 
 const ASSEMBLIES = 200;
@@ -109,7 +108,7 @@ function measure(binCount: number) {
   const db = openDatabase(':memory:');
   migrateDatabase(db);
   fill(db, binCount, 417 + binCount);
-  const ctx: ServiceContext = { db, mailer: {} as Mailer, publicUrl: 'http://bench.test', now: () => NOW };
+  const ctx: ServiceContext = { db, publicUrl: 'http://bench.test', now: () => NOW };
   let alerts = 0;
   for (let i = 0; i < 5; i++) forecastList(ctx);
   const times: number[] = [];

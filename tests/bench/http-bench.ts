@@ -1,5 +1,5 @@
 /**
- * What the HTTP benches share: a full createApp() listening on 127.0.0.1 with its own mail catcher,
+ * What the HTTP benches share: a full createApp() listening on 127.0.0.1 (its mail stays in the outbox),
  * signing in over HTTP, driving per-connection request lists with autocannon in a worker thread,
  * and the server thread's CPU time per answered request.
  */
@@ -14,8 +14,6 @@ import autocannon from 'autocannon';
 import { pino } from 'pino';
 import { createApp, type App } from '../../server/app';
 import type { Database } from '../../server/db/client';
-import { startMailCatcher, type MailCatcher } from '../../server/mail/mail-catcher';
-import { createSmtpMailer, type Mailer } from '../../server/mail/mailer';
 
 /** Read by checkout-bench-client.cts in autocannon's worker. */
 const BENCH_ENV = 'GRIPLINE_BENCH_CONNECTIONS';
@@ -39,8 +37,6 @@ export interface Served {
   app: App;
   server: Server;
   base: string;
-  catcher: MailCatcher;
-  mailer: Mailer;
 }
 
 export interface Run {
@@ -58,15 +54,12 @@ export interface Run {
 
 /** createApp() on a migrated, seeded database, listening on a free loopback port. `prepare` may add to the app first. */
 export async function serveApp(db: Database, prepare?: (app: App) => void): Promise<Served> {
-  const catcher = await startMailCatcher(db);
-  const mailer = createSmtpMailer(catcher.url, 'Gripline bench <bench@example.org>');
   const app = createApp({
     db,
     sessionSecret: 'bench-secret-that-is-long-enough-for-the-check',
     secureCookies: false,
     sessionIdleMs: 30 * 60_000,
     publicUrl: 'http://gripline.bench',
-    mailer,
     catchingMail: true,
     logger: pino({ level: 'silent' }),
     rateLimit: { windowMs: 60_000, perIp: 100_000, perAccount: 100_000 },
@@ -79,15 +72,13 @@ export async function serveApp(db: Database, prepare?: (app: App) => void): Prom
     server.listen(0, '127.0.0.1', () => resolve());
   });
   const { port } = server.address() as AddressInfo;
-  return { db, app, server, base: `http://127.0.0.1:${port}`, catcher, mailer };
+  return { db, app, server, base: `http://127.0.0.1:${port}` };
 }
 
 export async function closeServed(s: Served): Promise<void> {
   s.server.closeAllConnections();
   await new Promise<void>((resolve) => s.server.close(() => resolve()));
   s.app.sessionStore.close();
-  s.mailer.close();
-  await s.catcher.close();
   s.db.$client.close();
 }
 

@@ -10,7 +10,8 @@ import { migrateDatabase, openDatabase, type Database } from '../../server/db/cl
 import { caughtMail } from '../../server/db/schema/mail';
 import type { UserRow } from '../../server/db/schema/users';
 import { startMailCatcher, type MailCatcher } from '../../server/mail/mail-catcher';
-import { createSmtpMailer } from '../../server/mail/mailer';
+import { createSmtpMailer, type Mailer } from '../../server/mail/mailer';
+import { deliverDueMail, type OutboxRun } from '../../server/mail/outbox';
 
 export const PASSWORD = 'correct horse battery';
 let passwordHash: Promise<string> | undefined;
@@ -19,13 +20,18 @@ export interface TestApp {
   app: App;
   db: Database;
   catcher: MailCatcher;
+  /** A working mailer to the catcher. */
+  mailer: Mailer;
   clock: { now: Date };
   addUser(values: { email: string; name?: string; role?: Role; password?: string }): Promise<UserRow>;
   /** One person per role: lead@, member@ and qm@example.org, all with PASSWORD. */
   addCrew(): Promise<Crew>;
   signIn(email: string, password?: string): Promise<SignedInAgent>;
   anonymous(): Promise<SignedInAgent>;
-  lastMailTo(address: string): { subject: string; text: string; links: string[] } | undefined;
+  /** Runs the outbox worker once at the test's clock (with the working mailer unless another is given). */
+  deliverMail(mailer?: Mailer): Promise<OutboxRun>;
+  /** Delivers the outbox, then reads the newest message the catcher holds for an address. */
+  lastMailTo(address: string): Promise<{ subject: string; text: string; links: string[] } | undefined>;
   close(): Promise<void>;
 }
 
@@ -53,7 +59,6 @@ export async function buildTestApp(overrides: Partial<AppConfig> = {}): Promise<
     secureCookies: false,
     sessionIdleMs: 30 * 60_000,
     publicUrl: 'http://gripline.test',
-    mailer,
     catchingMail: true,
     logger: pino({ level: 'silent' }),
     rateLimit: { windowMs: 60_000, perIp: 100, perAccount: 100 },
@@ -61,6 +66,8 @@ export async function buildTestApp(overrides: Partial<AppConfig> = {}): Promise<
     now: () => clock.now,
     ...overrides,
   });
+
+  const deliverMail = (via: Mailer = mailer) => deliverDueMail({ db, mailer: via, now: () => clock.now });
 
   const anonymous = async (): Promise<SignedInAgent> => {
     const agent = request.agent(app);
@@ -77,6 +84,7 @@ export async function buildTestApp(overrides: Partial<AppConfig> = {}): Promise<
     app,
     db,
     catcher,
+    mailer,
     clock,
     addUser,
     async addCrew() {
@@ -93,7 +101,9 @@ export async function buildTestApp(overrides: Partial<AppConfig> = {}): Promise<
       if (res.status !== 200) throw new Error(`sign-in failed for ${email}: ${res.status} ${JSON.stringify(res.body)}`);
       return { agent, csrf: (res.body as { csrfToken: string }).csrfToken };
     },
-    lastMailTo(address) {
+    deliverMail,
+    async lastMailTo(address) {
+      await deliverMail();
       const rows = db.select().from(caughtMail).orderBy(desc(caughtMail.id)).all();
       const row = rows.find((r) => (JSON.parse(r.toAddresses) as string[]).includes(address));
       return row && { subject: row.subject, text: row.textBody, links: JSON.parse(row.links) as string[] };

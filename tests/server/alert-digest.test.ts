@@ -2,10 +2,9 @@ import { eq } from 'drizzle-orm';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { ServiceContext } from '../../server/context';
 import { jobRuns } from '../../server/db/schema/crib-jobs';
-import { caughtMail } from '../../server/db/schema/mail';
+import { outboxMail } from '../../server/db/schema/mail';
 import { users } from '../../server/db/schema/users';
 import { ALERT_DIGEST_JOB, runAlertDigest } from '../../server/features/planning/alert-digest';
-import { createSmtpMailer, type Mailer } from '../../server/mail/mailer';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
 import { addAssembly, hundredRivetLine, screwBin } from '../helpers/planning-fixture';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
@@ -13,7 +12,6 @@ import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-
 let t: TestApp;
 let qm: SignedInAgent;
 let member: SignedInAgent;
-let mailer: Mailer;
 let ctx: ServiceContext;
 
 beforeEach(async () => {
@@ -21,18 +19,15 @@ beforeEach(async () => {
   await t.addCrew();
   qm = await t.signIn('qm@example.org');
   member = await t.signIn('member@example.org');
-  // The job gets what the server gives it: a real mailer to the test's mail catcher, the test's clock.
-  mailer = createSmtpMailer(t.catcher.url, 'Gripline test <test@example.org>');
-  ctx = { db: t.db, mailer, publicUrl: 'http://gripline.test', now: () => t.clock.now };
+  // The job gets what the server gives it, with the test's clock; its mail goes to the outbox.
+  ctx = { db: t.db, publicUrl: 'http://gripline.test', now: () => t.clock.now };
   t.clock.now = new Date('2026-12-01T07:00:00Z');
 });
-afterEach(async () => {
-  mailer.close();
-  await t.close();
-});
+afterEach(() => t.close());
 
 const runs = () => t.db.select().from(jobRuns).where(eq(jobRuns.job, ALERT_DIGEST_JOB)).all();
-const mailCount = () => t.db.select().from(caughtMail).all().length;
+/** Messages written, sent or not. */
+const mailCount = () => t.db.select().from(outboxMail).all().length;
 
 /** A rivet bin (Cedar Valley) and a screw bin (Harbour Hardware), both short this week. */
 async function twoShortBins() {
@@ -55,25 +50,25 @@ describe('the daily alert digest', () => {
     const gone = await t.addUser({ email: 'qm-old@example.org', name: 'Old Quartermaster', role: 'quartermaster' });
     t.db.update(users).set({ deactivatedAt: new Date('2026-11-01T00:00:00Z') }).where(eq(users.id, gone.id)).run();
 
-    const result = await runAlertDigest(ctx);
+    const result = runAlertDigest(ctx);
     expect(result).toMatchObject({ raised: 2, digestsSent: 2, error: null });
     expect(result.summary).toBe('2 alerts raised, 2 bins to order, digest to 2 quartermasters');
 
     for (const address of ['qm@example.org', other.email]) {
-      const mail = t.lastMailTo(address);
+      const mail = await t.lastMailTo(address);
       expect(mail?.subject).toBe('Reorder: 2 bins need ordering');
       expect(mail?.links).toContain('http://gripline.test/alerts');
     }
-    const text = t.lastMailTo('qm@example.org')!.text;
+    const text = (await t.lastMailTo('qm@example.org'))!.text;
     expect(text).toContain('Hello Quinn Quartermaster,');
     // Suppliers by name, each with its bins and the suggested order in whole packs.
     expect(text.indexOf('Cedar Valley Fastener Supply:')).toBeLessThan(text.indexOf('Harbour Hardware Co.:'));
     expect(text).toContain(`- ${rivets.code} `);
     expect(text).toContain('100 each on hand; order 500 (5 packs of 100, about $60.00)');
     expect(text).toContain(`- ${screws.code} Screw #8-32 × 1/2 pan head, stainless, part PS832-8: 200 each on hand; order 850 (17 packs of 50, about $76.50)`);
-    expect(t.lastMailTo('qm-old@example.org')).toBeUndefined();
-    expect(t.lastMailTo('lead@example.org')).toBeUndefined();
-    expect(t.lastMailTo('member@example.org')).toBeUndefined();
+    expect(await t.lastMailTo('qm-old@example.org')).toBeUndefined();
+    expect(await t.lastMailTo('lead@example.org')).toBeUndefined();
+    expect(await t.lastMailTo('member@example.org')).toBeUndefined();
 
     const [run] = runs();
     expect(run).toMatchObject({ startedAt: new Date('2026-12-01T07:00:00Z'), finishedAt: new Date('2026-12-01T07:00:00Z'), summary: result.summary, error: null });
@@ -81,23 +76,23 @@ describe('the daily alert digest', () => {
 
   it('lists orders on their way too, and sends nothing once no alert is still to order', async () => {
     const { rivets, screws } = await twoShortBins();
-    await runAlertDigest(ctx);
+    runAlertDigest(ctx);
     const alerts = (await qm.agent.get('/api/alerts')).body.data as { id: number; bin: { code: string } }[];
     const idOf = (code: string) => alerts.find((a) => a.bin.code === code)!.id;
     await post(qm, `/api/alerts/${idOf(rivets.code)}/ordered`, { quantity: 500, expectedAt: '2026-12-09' });
 
     t.clock.now = new Date('2026-12-02T07:00:00Z');
-    const second = await runAlertDigest(ctx);
+    const second = runAlertDigest(ctx);
     expect(second).toMatchObject({ raised: 0, digestsSent: 1 });
-    const text = t.lastMailTo('qm@example.org')!.text;
-    expect(t.lastMailTo('qm@example.org')!.subject).toBe('Reorder: 1 bin needs ordering');
+    const text = (await t.lastMailTo('qm@example.org'))!.text;
+    expect((await t.lastMailTo('qm@example.org'))!.subject).toBe('Reorder: 1 bin needs ordering');
     expect(text).toContain(`- ${rivets.code} `);
     expect(text).toContain('ordered 500 on 2026-12-01, expected 2026-12-09');
 
     await post(qm, `/api/alerts/${idOf(screws.code)}/dismiss`, { reason: 'Borrowing from the chapter next door' });
     const before = mailCount();
     t.clock.now = new Date('2026-12-03T07:00:00Z');
-    const third = await runAlertDigest(ctx);
+    const third = runAlertDigest(ctx);
     expect(third).toMatchObject({ raised: 0, digestsSent: 0, summary: '0 alerts raised, nothing to order, no digest' });
     expect(mailCount()).toBe(before);
     expect(runs()).toHaveLength(3);
@@ -105,7 +100,7 @@ describe('the daily alert digest', () => {
 
   it('records a run with nothing to do', async () => {
     await addBinAs(qm, blindRivetBin());
-    const result = await runAlertDigest(ctx);
+    const result = runAlertDigest(ctx);
     expect(result).toMatchObject({ raised: 0, digestsSent: 0, error: null });
     expect(mailCount()).toBe(0);
     expect(runs()).toEqual([expect.objectContaining({ summary: '0 alerts raised, nothing to order, no digest', error: null })]);

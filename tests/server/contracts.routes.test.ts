@@ -6,7 +6,7 @@ import {
   meResponseSchema,
 } from '@shared/schemas/auth';
 import { errorEnvelopeSchema } from '@shared/schemas/errors';
-import { caughtMailListSchema } from '@shared/schemas/mail';
+import { mailListSchema } from '@shared/schemas/mail';
 import { peopleListSchema, pendingInvitationListSchema, pendingInvitationSchema, personSchema } from '@shared/schemas/people';
 import { buildTestApp, PASSWORD, tokenFromLink, type TestApp } from '../helpers/test-app';
 
@@ -42,7 +42,7 @@ describe('response contracts', () => {
     expect(pendingInvitationSchema.parse(invited.body).email).toBe('new@example.org');
     expect(pendingInvitationListSchema.parse((await lead.agent.get('/api/invitations')).body).data).toHaveLength(1);
 
-    const mail = caughtMailListSchema.parse((await lead.agent.get('/api/mail')).body);
+    const mail = mailListSchema.parse((await lead.agent.get('/api/mail')).body);
     const token = tokenFromLink(mail.data[0]!.links[0]!);
     const preview = await (await t.anonymous()).agent.get(`/api/invitations/by-token/${token}`);
     expect(invitationPreviewSchema.parse(preview.body)).toMatchObject({ email: 'new@example.org', role: 'member', invitedBy: 'Lee Lead' });

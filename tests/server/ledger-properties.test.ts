@@ -28,7 +28,7 @@ function freshChapter() {
   const db = openDatabase(':memory:');
   migrateDatabase(db);
   let clock = new Date('2026-06-01T08:00:00Z');
-  const ctx: ServiceContext = { db, mailer: { send: async () => {}, close: () => {} }, publicUrl: 'http://x', now: () => (clock = new Date(clock.getTime() + 60_000)) };
+  const ctx: ServiceContext = { db, publicUrl: 'http://x', now: () => (clock = new Date(clock.getTime() + 60_000)) };
   const people: UserRow[] = ['a', 'b', 'c'].map((n) => insertUser(db, { email: `${n}@example.org`, name: n.toUpperCase(), role: n === 'a' ? 'quartermaster' : 'member', passwordHash: 'x' }));
   return { db, ctx, people };
 }

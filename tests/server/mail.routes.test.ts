@@ -1,4 +1,11 @@
+import { eq } from 'drizzle-orm';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { mailListSchema, mailMessageSchema } from '@shared/schemas/mail';
+import { hashLinkToken } from '../../server/accounts/link-tokens';
+import { accountTokens } from '../../server/db/schema/account-tokens';
+import { caughtMail, outboxMail } from '../../server/db/schema/mail';
+import { OUTBOX_MAX_ATTEMPTS } from '../../server/mail/outbox';
+import { post } from '../helpers/crib';
 import { buildTestApp, tokenFromLink, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
@@ -10,43 +17,69 @@ beforeEach(async () => {
 });
 afterEach(() => t.close());
 
+const deadMailer = { send: () => Promise.reject(new Error('421 mail server busy')), close: () => undefined };
+
+async function requestReset(email: string) {
+  const { agent, csrf } = await t.anonymous();
+  await agent.post('/api/auth/password-reset').set('X-CSRF-Token', csrf).send({ email }).expect(202);
+}
+
+/** Fails every attempt of the waiting mail until it is marked failed. */
+async function failForGood() {
+  for (let i = 0; i < OUTBOX_MAX_ATTEMPTS; i++) {
+    await t.deliverMail(deadMailer);
+    t.clock.now = new Date(t.clock.now.getTime() + 2 * 60 * 60_000);
+  }
+}
+
 describe('GET /api/mail', () => {
-  it('answers an empty list and catching: true before any mail was sent', async () => {
+  it('answers an empty list and catching: true before any mail was written', async () => {
     const res = await lead.agent.get('/api/mail');
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/json/);
     expect(res.body).toEqual({ data: [], catching: true });
   });
 
-  it('lists a sent invitation with its recipient, subject and link', async () => {
-    await lead.agent.post('/api/invitations').set('X-CSRF-Token', lead.csrf).send({ email: 'newcomer@example.org', role: 'member' }).expect(201);
-    const res = await lead.agent.get('/api/mail');
-    expect(res.status).toBe(200);
-    expect(res.body.catching).toBe(true);
-    expect(res.body.data).toHaveLength(1);
-    const [mail] = res.body.data;
-    expect(mail).toEqual({
-      id: expect.any(Number),
-      from: 'test@example.org',
-      to: ['newcomer@example.org'],
-      subject: expect.stringMatching(/Lee Lead invited you/),
-      text: expect.stringContaining(mail.links[0]),
-      links: [expect.stringMatching(/^http:\/\/gripline\.test\/invite\/[A-Za-z0-9_-]{43}$/)],
-      receivedAt: expect.any(String),
-    });
-    expect(Number.isNaN(Date.parse(mail.receivedAt))).toBe(false);
-    // The listed link is the working one.
-    const preview = await (await t.anonymous()).agent.get(`/api/invitations/by-token/${tokenFromLink(mail.links[0])}`);
+  it('lists an invitation as waiting at once, with its working link, and as sent once delivered', async () => {
+    await post(lead, '/api/invitations', { email: 'newcomer@example.org', role: 'member' }).expect(201);
+    const waiting = mailListSchema.parse((await lead.agent.get('/api/mail')).body).data;
+    expect(waiting).toEqual([
+      {
+        id: expect.any(Number),
+        to: 'newcomer@example.org',
+        subject: expect.stringMatching(/Lee Lead invited you/),
+        text: expect.stringContaining(waiting[0]!.links[0]!),
+        links: [expect.stringMatching(/^http:\/\/gripline\.test\/invite\/[A-Za-z0-9_-]{43}$/)],
+        state: 'waiting',
+        attempts: 0,
+        lastError: null,
+        nextAttemptAt: t.clock.now.toISOString(),
+        createdAt: t.clock.now.toISOString(),
+        sentAt: null,
+      },
+    ]);
+    // The lead may hand the invitation link on: it is listed whole and works.
+    const preview = await (await t.anonymous()).agent.get(`/api/invitations/by-token/${tokenFromLink(waiting[0]!.links[0]!)}`);
     expect(preview.status).toBe(200);
-    expect(preview.body.email).toBe('newcomer@example.org');
+
+    await t.deliverMail();
+    const [sent] = (await lead.agent.get('/api/mail')).body.data;
+    expect(sent).toMatchObject({ state: 'sent', attempts: 0, nextAttemptAt: null, sentAt: t.clock.now.toISOString() });
   });
 
   it('lists the newest message first', async () => {
-    await lead.agent.post('/api/invitations').set('X-CSRF-Token', lead.csrf).send({ email: 'first@example.org', role: 'member' }).expect(201);
-    const { agent, csrf } = await t.anonymous();
-    await agent.post('/api/auth/password-reset').set('X-CSRF-Token', csrf).send({ email: 'member@example.org' }).expect(202);
+    await post(lead, '/api/invitations', { email: 'first@example.org', role: 'member' }).expect(201);
+    t.clock.now = new Date(t.clock.now.getTime() + 1000);
+    await requestReset('member@example.org');
     const res = await lead.agent.get('/api/mail');
-    expect(res.body.data.map((m: { to: string[] }) => m.to[0])).toEqual(['member@example.org', 'first@example.org']);
+    expect(res.body.data.map((m: { to: string }) => m.to)).toEqual(['member@example.org', 'first@example.org']);
+  });
+
+  it('shows a message the mail server refused as waiting, with its attempts, last error and next try', async () => {
+    await requestReset('member@example.org');
+    expect(await t.deliverMail(deadMailer)).toEqual({ sent: 0, retrying: 1, failed: 0 });
+    const [m] = (await lead.agent.get('/api/mail')).body.data;
+    expect(m).toMatchObject({ state: 'waiting', attempts: 1, lastError: '421 mail server busy', nextAttemptAt: new Date(t.clock.now.getTime() + 60_000).toISOString() });
   });
 
   it('says catching: false when a real mail server is configured', async () => {
@@ -59,7 +92,6 @@ describe('GET /api/mail', () => {
   });
 
   it('answers 403 FORBIDDEN for a member and a quartermaster', async () => {
-    await lead.agent.post('/api/invitations').set('X-CSRF-Token', lead.csrf).send({ email: 'newcomer@example.org', role: 'member' }).expect(201);
     for (const email of ['member@example.org', 'qm@example.org']) {
       const res = await (await t.signIn(email)).agent.get('/api/mail');
       expect(res.status).toBe(403);
@@ -72,5 +104,106 @@ describe('GET /api/mail', () => {
     const res = await (await t.anonymous()).agent.get('/api/mail');
     expect(res.status).toBe(401);
     expect(res.body.error.code).toBe('NOT_SIGNED_IN');
+  });
+});
+
+describe('reset links on Sent mail', () => {
+  it('keeps the message but masks the link in someone else’s reset mail: the lead finds no usable link', async () => {
+    await requestReset('member@example.org');
+    await t.deliverMail();
+    const body = JSON.stringify((await lead.agent.get('/api/mail')).body);
+    const [m] = (await lead.agent.get('/api/mail')).body.data;
+    expect(m.subject).toMatch(/reset/i);
+    expect(m.links).toEqual(['http://gripline.test/reset-password/••••••']);
+    expect(m.text).toContain('http://gripline.test/reset-password/••••••');
+    // Whatever in the answer looks like a token, none opens the account.
+    const candidates = body.match(/[A-Za-z0-9_-]{43}/g) ?? [];
+    const hashes = new Set(t.db.select({ h: accountTokens.tokenHash }).from(accountTokens).all().map((r) => r.h));
+    expect(candidates.filter((c) => hashes.has(hashLinkToken(c)))).toEqual([]);
+    // The member's own copy works.
+    const link = (await t.lastMailTo('member@example.org'))!.links[0]!;
+    const { agent, csrf } = await t.anonymous();
+    const confirmed = await agent.post('/api/auth/password-reset/confirm').set('X-CSRF-Token', csrf).send({ token: tokenFromLink(link), password: 'a brand new password' });
+    expect(confirmed.status).toBe(200);
+  });
+
+  it('shows the lead their own reset link whole', async () => {
+    await requestReset('lead@example.org');
+    const [m] = (await lead.agent.get('/api/mail')).body.data;
+    expect(m.links).toEqual([expect.stringMatching(/^http:\/\/gripline\.test\/reset-password\/[A-Za-z0-9_-]{43}$/)]);
+  });
+
+  it('keeps no raw link token in the database outside the message itself', async () => {
+    await requestReset('member@example.org');
+    await post(lead, '/api/invitations', { email: 'newcomer@example.org', role: 'member' }).expect(201);
+    await t.deliverMail();
+    const tokens = t.db.select().from(outboxMail).all().map((m) => tokenFromLink(m.textBody.match(/http:\/\/gripline\.test\/\S+/)![0]));
+    const rows = t.db.select().from(accountTokens).all();
+    expect(rows).toHaveLength(2);
+    for (const token of tokens) {
+      expect(JSON.stringify(rows)).not.toContain(token);
+      expect(rows.map((r) => r.tokenHash)).toContain(hashLinkToken(token));
+    }
+  });
+});
+
+describe('GET /api/mail/mine', () => {
+  it('shows each person only the mail written to them, links whole', async () => {
+    await requestReset('member@example.org');
+    await requestReset('qm@example.org');
+    const member = await t.signIn('member@example.org');
+    const res = await member.agent.get('/api/mail/mine');
+    expect(res.status).toBe(200);
+    const { data } = mailListSchema.parse(res.body);
+    expect(data.map((m) => m.to)).toEqual(['member@example.org']);
+    expect(data[0]!.links).toEqual([expect.stringMatching(/\/reset-password\/[A-Za-z0-9_-]{43}$/)]);
+  });
+
+  it('answers 401 NOT_SIGNED_IN when signed out', async () => {
+    const res = await (await t.anonymous()).agent.get('/api/mail/mine');
+    expect(res.status).toBe(401);
+    expect(res.body.error.code).toBe('NOT_SIGNED_IN');
+  });
+});
+
+describe('POST /api/mail/:id/retry', () => {
+  it('puts a failed message back to waiting with a fresh round of attempts; the next run sends it', async () => {
+    await requestReset('member@example.org');
+    await failForGood();
+    const [failed] = (await lead.agent.get('/api/mail')).body.data;
+    expect(failed).toMatchObject({ state: 'failed', attempts: OUTBOX_MAX_ATTEMPTS, lastError: '421 mail server busy', nextAttemptAt: null });
+
+    const res = await post(lead, `/api/mail/${failed.id}/retry`);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toMatch(/json/);
+    expect(mailMessageSchema.parse(res.body)).toMatchObject({ id: failed.id, state: 'waiting', attempts: 0, nextAttemptAt: t.clock.now.toISOString() });
+    expect(await t.deliverMail()).toEqual({ sent: 1, retrying: 0, failed: 0 });
+    expect(t.db.select().from(caughtMail).all()).toHaveLength(1);
+  });
+
+  it('answers 409 MAIL_NOT_FAILED for a waiting or sent message', async () => {
+    await requestReset('member@example.org');
+    const [m] = (await lead.agent.get('/api/mail')).body.data;
+    const waiting = await post(lead, `/api/mail/${m.id}/retry`);
+    expect(waiting.status).toBe(409);
+    expect(waiting.body.error).toEqual({ code: 'MAIL_NOT_FAILED', message: expect.stringMatching(/still waiting/) });
+    await t.deliverMail();
+    expect((await post(lead, `/api/mail/${m.id}/retry`)).body.error.code).toBe('MAIL_NOT_FAILED');
+  });
+
+  it('answers 404 MAIL_NOT_FOUND for an unknown id and 400 for one that is not a number', async () => {
+    expect((await post(lead, '/api/mail/999/retry')).body.error.code).toBe('MAIL_NOT_FOUND');
+    const bad = await post(lead, '/api/mail/abc/retry');
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.code).toBe('VALIDATION_FAILED');
+  });
+
+  it('answers 403 FORBIDDEN for a member, and the message stays failed', async () => {
+    await requestReset('member@example.org');
+    await failForGood();
+    const [failed] = (await lead.agent.get('/api/mail')).body.data;
+    const member = await t.signIn('member@example.org');
+    expect((await post(member, `/api/mail/${failed.id}/retry`)).status).toBe(403);
+    expect(t.db.select().from(outboxMail).where(eq(outboxMail.id, failed.id)).get()!.state).toBe('failed');
   });
 });

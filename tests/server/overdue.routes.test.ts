@@ -97,7 +97,7 @@ describe('POST /api/overdue/:loanId/remind', () => {
     expect(res.status).toBe(201);
     expect(res.headers['content-type']).toMatch(/application\/json/);
     expect(reminderSentSchema.parse(res.body)).toEqual({ loanId, sentTo: 'member@example.org', sentAt: t.clock.now.toISOString(), day: '2026-12-07' });
-    const mail = t.lastMailTo('member@example.org');
+    const mail = await t.lastMailTo('member@example.org');
     expect(mail?.subject).toBe(`Reminder: ${code} Torque wrench was due back on 2026-12-02`);
     expect(mail?.text).toContain('Hello Mia Member,');
     expect(mail?.text).toContain('is now 5 days late');
@@ -140,7 +140,7 @@ describe('POST /api/overdue/:loanId/remind', () => {
     const returned = await post(lead, `/api/overdue/${loanId}/remind`);
     expect(returned.status).toBe(409);
     expect(returned.body.error.code).toBe('LOAN_RETURNED');
-    expect(t.lastMailTo('member@example.org')).toBeUndefined();
+    expect(await t.lastMailTo('member@example.org')).toBeUndefined();
   });
 
   it('answers 404 LOAN_NOT_FOUND for an unknown loan and 400 VALIDATION_FAILED for a malformed id', async () => {
@@ -165,6 +165,6 @@ describe('POST /api/overdue/:loanId/remind', () => {
       expect(res.status).toBe(403);
       expect(res.body.error.code).toBe('FORBIDDEN');
     }
-    expect(t.lastMailTo('member@example.org')).toBeUndefined();
+    expect(await t.lastMailTo('member@example.org')).toBeUndefined();
   });
 });

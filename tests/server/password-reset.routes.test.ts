@@ -1,5 +1,6 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { caughtMail } from '../../server/db/schema/mail';
+import { outboxMail } from '../../server/db/schema/mail';
+import { RESETS_PER_HOUR } from '../../server/features/password-reset/password-reset.service';
 import { buildTestApp, PASSWORD, tokenFromLink, type TestApp } from '../helpers/test-app';
 
 const NEW_PASSWORD = 'fresh bucking bar 42';
@@ -20,7 +21,7 @@ async function requestReset(email: string) {
 /** Asks for a reset and returns the token from the link in the e-mail. */
 async function resetToken(email: string): Promise<string> {
   expect((await requestReset(email)).status).toBe(202);
-  const link = t.lastMailTo(email)?.links.find((l) => l.startsWith('http://gripline.test/reset-password/'));
+  const link = (await t.lastMailTo(email))?.links.find((l) => l.startsWith('http://gripline.test/reset-password/'));
   expect(link).toBeDefined();
   return tokenFromLink(link!);
 }
@@ -35,7 +36,8 @@ async function login(email: string, password: string) {
   return agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email, password });
 }
 
-const mailCount = () => t.db.select().from(caughtMail).all().length;
+/** Messages written, sent or not. */
+const mailCount = () => t.db.select().from(outboxMail).all().length;
 
 describe('POST /api/auth/password-reset', () => {
   it('answers 202 with the same body for a known and an unknown address', async () => {
@@ -52,8 +54,8 @@ describe('POST /api/auth/password-reset', () => {
     await requestReset('Member@Example.org');
     await requestReset('nobody@example.org');
     expect(mailCount()).toBe(1);
-    expect(t.lastMailTo('nobody@example.org')).toBeUndefined();
-    const mail = t.lastMailTo('member@example.org');
+    expect(await t.lastMailTo('nobody@example.org')).toBeUndefined();
+    const mail = await t.lastMailTo('member@example.org');
     expect(mail?.subject).toMatch(/reset/i);
     expect(mail?.text).toMatch(/Mia Member/);
     expect(mail?.links).toEqual([expect.stringMatching(/^http:\/\/gripline\.test\/reset-password\/[A-Za-z0-9_-]{43}$/)]);
@@ -68,6 +70,51 @@ describe('POST /api/auth/password-reset', () => {
     expect(res.status).toBe(202);
     expect(res.body).toEqual((await requestReset('nobody@example.org')).body);
     expect(mailCount()).toBe(0);
+  });
+
+  it('writes at most 3 reset mails per address an hour: 30 requests answer alike and queue 3', async () => {
+    const answers = [];
+    for (let i = 0; i < 30; i++) answers.push(await requestReset('member@example.org'));
+    expect(new Set(answers.map((r) => `${r.status} ${JSON.stringify(r.body)}`)).size).toBe(1);
+    expect(answers[0]!.status).toBe(202);
+    expect(RESETS_PER_HOUR).toBe(3);
+    expect(mailCount()).toBe(3);
+    // The newest link sent is the one that works; later requests did not replace it.
+    const link = (await t.lastMailTo('member@example.org'))!.links[0]!;
+    expect((await confirm(tokenFromLink(link))).status).toBe(200);
+
+    t.clock.now = new Date(t.clock.now.getTime() + HOUR_MS + 1000);
+    expect((await requestReset('member@example.org')).status).toBe(202);
+    expect(mailCount()).toBe(4);
+  });
+
+  it('counts each address on its own', async () => {
+    for (let i = 0; i < 5; i++) await requestReset('member@example.org');
+    await requestReset('qm@example.org');
+    expect(mailCount()).toBe(4);
+  });
+
+  it('takes as long for an address without an account as for one with it', async () => {
+    const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
+    const { agent, csrf } = await t.anonymous();
+    const timed = async (email: string) => {
+      const started = performance.now();
+      await agent.post('/api/auth/password-reset').set('X-CSRF-Token', csrf).send({ email }).expect(202);
+      return performance.now() - started;
+    };
+    // Spread over several accounts so the hourly cap never turns a known address into a cheap one.
+    const known: string[] = [];
+    for (let i = 0; i < 5; i++) known.push((await t.addUser({ email: `builder${i}@example.org` })).email);
+    const knownTimes: number[] = [];
+    const unknownTimes: number[] = [];
+    for (let i = 0; i < 15; i++) {
+      knownTimes.push(await timed(known[i % known.length]!));
+      unknownTimes.push(await timed(`nobody${i}@example.org`));
+    }
+    expect(mailCount()).toBe(15);
+    const ratio = median(knownTimes) / median(unknownTimes);
+    expect(ratio).toBeGreaterThan(0.5);
+    expect(ratio).toBeLessThan(2);
   });
 
   it('answers 400 VALIDATION_FAILED for an address that is not one', async () => {
@@ -152,7 +199,7 @@ describe('POST /api/auth/password-reset/confirm', () => {
   it('does not accept an invitation token as a reset token', async () => {
     const lead = await t.signIn('lead@example.org');
     await lead.agent.post('/api/invitations').set('X-CSRF-Token', lead.csrf).send({ email: 'new@example.org', role: 'member' }).expect(201);
-    const inviteToken = tokenFromLink(t.lastMailTo('new@example.org')!.links[0]!);
+    const inviteToken = tokenFromLink((await t.lastMailTo('new@example.org'))!.links[0]!);
     const res = await confirm(inviteToken);
     expect(res.status).toBe(404);
     expect(res.body.error.code).toBe('LINK_NOT_FOUND');

@@ -3,10 +3,9 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { overdueListSchema } from '@shared/schemas/overdue';
 import type { ServiceContext } from '../../server/context';
 import { jobRuns } from '../../server/db/schema/crib-jobs';
-import { caughtMail } from '../../server/db/schema/mail';
+import { outboxMail } from '../../server/db/schema/mail';
 import { users } from '../../server/db/schema/users';
 import { runOverdueReminders } from '../../server/features/tools/reminder-job';
-import { createSmtpMailer, type Mailer } from '../../server/mail/mailer';
 import { buildTestApp, type Crew, type SignedInAgent, type TestApp } from '../helpers/test-app';
 import { addToolAs, lend, post } from '../helpers/crib';
 
@@ -15,7 +14,6 @@ let crew: Crew;
 let lead: SignedInAgent;
 let qm: SignedInAgent;
 let member: SignedInAgent;
-let mailer: Mailer;
 let ctx: ServiceContext;
 const DAY_MS = 24 * 60 * 60 * 1000;
 const HOUR_MS = 60 * 60 * 1000;
@@ -27,24 +25,16 @@ beforeEach(async () => {
   lead = await t.signIn('lead@example.org');
   qm = await t.signIn('qm@example.org');
   member = await t.signIn('member@example.org');
-  // The job gets the same kind of context the server gives it: a real mailer to the test's mail catcher.
-  mailer = createSmtpMailer(t.catcher.url, 'Gripline test <test@example.org>');
-  ctx = { db: t.db, mailer, publicUrl: 'http://gripline.test', now: () => t.clock.now };
+  // The job gets the same kind of context the server gives it; its mail goes to the outbox.
+  ctx = { db: t.db, publicUrl: 'http://gripline.test', now: () => t.clock.now };
 });
-afterEach(async () => {
-  mailer.close();
-  await t.close();
-});
+afterEach(() => t.close());
 
 const later = (ms: number) => {
   t.clock.now = new Date(t.clock.now.getTime() + ms);
 };
-const mailsTo = (address: string) =>
-  t.db
-    .select()
-    .from(caughtMail)
-    .all()
-    .filter((m) => (JSON.parse(m.toAddresses) as string[]).includes(address));
+/** Messages written to an address, sent or not. */
+const mailsTo = (address: string) => t.db.select().from(outboxMail).where(eq(outboxMail.toAddress, address)).all();
 
 const addTool = async (body: Record<string, unknown>) => (await addToolAs(qm, body)).code;
 
@@ -68,28 +58,28 @@ describe('runOverdueReminders', () => {
     const gone = await t.addUser({ email: 'former-lead@example.org', name: 'Fay Former', role: 'lead' });
     t.db.update(users).set({ deactivatedAt: t.clock.now }).where(eq(users.id, gone.id)).run();
 
-    const result = await runOverdueReminders(ctx);
+    const result = runOverdueReminders(ctx);
     expect(result).toEqual({ summary: '2 reminders, digest to 2 leads', remindersSent: 2, digestsSent: 2, holdOffersExpired: 0, error: null });
 
-    expect(t.lastMailTo('member@example.org')?.subject).toBe(`Reminder: ${wrench} Torque wrench was due back on 2026-12-02`);
-    expect(t.lastMailTo('qm@example.org')?.text).toContain('is now 6 days late');
+    expect((await t.lastMailTo('member@example.org'))?.subject).toBe(`Reminder: ${wrench} Torque wrench was due back on 2026-12-02`);
+    expect((await t.lastMailTo('qm@example.org'))?.text).toContain('is now 6 days late');
     expect(mailsTo('member@example.org')).toHaveLength(1);
 
-    const digest = t.lastMailTo('lead@example.org');
+    const digest = await t.lastMailTo('lead@example.org');
     expect(digest?.subject).toBe('Overdue tools: 2 tools are late back');
     expect(digest?.text).toContain('replacement value $430.50 in all');
     expect(digest?.text).toContain(`- ${wrench} Torque wrench: Mia Member (member@example.org, 555-0100), due 2026-12-02, 9 days late, value $250.00`);
     expect(digest?.text).toContain(`- ${drill} Air drill: Quinn Quartermaster (qm@example.org), due 2026-12-05, 6 days late, value $180.50`);
     expect(digest!.text.indexOf(wrench)).toBeLessThan(digest!.text.indexOf(drill));
     expect(digest?.links).toContain('http://gripline.test/overdue');
-    expect(t.lastMailTo('second-lead@example.org')?.subject).toBe('Overdue tools: 2 tools are late back');
-    expect(t.lastMailTo('former-lead@example.org')).toBeUndefined();
+    expect((await t.lastMailTo('second-lead@example.org'))?.subject).toBe('Overdue tools: 2 tools are late back');
+    expect(await t.lastMailTo('former-lead@example.org')).toBeUndefined();
   });
 
   it('records the run with its summary, and GET /api/overdue shows it as the last run', async () => {
     await twoOverdueLoans();
     const startedAt = t.clock.now;
-    await runOverdueReminders(ctx);
+    runOverdueReminders(ctx);
 
     const runs = t.db.select().from(jobRuns).all();
     expect(runs).toHaveLength(1);
@@ -101,24 +91,24 @@ describe('runOverdueReminders', () => {
 
   it('sends no second reminder when it runs twice the same day, and reminds again the next day', async () => {
     await twoOverdueLoans();
-    await runOverdueReminders(ctx);
+    runOverdueReminders(ctx);
     later(6 * HOUR_MS);
-    const second = await runOverdueReminders(ctx);
+    const second = runOverdueReminders(ctx);
     expect(second.summary).toBe('0 reminders, digest to 1 lead');
     expect(mailsTo('member@example.org')).toHaveLength(1);
     expect(mailsTo('qm@example.org')).toHaveLength(1);
 
     later(DAY_MS);
-    const nextDay = await runOverdueReminders(ctx);
+    const nextDay = runOverdueReminders(ctx);
     expect(nextDay.summary).toBe('2 reminders, digest to 1 lead');
     expect(mailsTo('member@example.org')).toHaveLength(2);
-    expect(t.lastMailTo('member@example.org')?.text).toContain('is now 10 days late'); // 10 days and 6 hours past due: whole days count
+    expect((await t.lastMailTo('member@example.org'))?.text).toContain('is now 10 days late'); // 10 days and 6 hours past due: whole days count
   });
 
   it('sends no reminder for a loan the lead already reminded by hand that day', async () => {
     const { wrenchLoan } = await twoOverdueLoans();
     await post(lead, `/api/overdue/${wrenchLoan}/remind`).expect(201);
-    const result = await runOverdueReminders(ctx);
+    const result = runOverdueReminders(ctx);
     expect(result.summary).toBe('1 reminder, digest to 1 lead');
     expect(mailsTo('member@example.org')).toHaveLength(1);
     expect(mailsTo('qm@example.org')).toHaveLength(1);
@@ -127,9 +117,9 @@ describe('runOverdueReminders', () => {
   it('sends no digest when nothing is overdue', async () => {
     const code = await addTool({ name: 'Spacing fan', category: 'spacing_fan' });
     await lend(t, member, code, 3 * DAY_MS);
-    const result = await runOverdueReminders(ctx);
+    const result = runOverdueReminders(ctx);
     expect(result.summary).toBe('0 reminders, nothing overdue, no digest');
-    expect(t.lastMailTo('lead@example.org')).toBeUndefined();
+    expect(await t.lastMailTo('lead@example.org')).toBeUndefined();
   });
 
   it('moves expired hold offers on: the next person in the queue is offered the tool', async () => {
@@ -138,32 +128,29 @@ describe('runOverdueReminders', () => {
     await post(qm, `/api/tools/${code}/holds`).expect(201);
     await post(lead, `/api/tools/${code}/holds`).expect(201);
     await post(member, `/api/tools/${code}/return`, { condition: 'ok' }).expect(200);
-    expect(t.lastMailTo('lead@example.org')).toBeUndefined();
+    expect(await t.lastMailTo('lead@example.org')).toBeUndefined();
 
     later(49 * HOUR_MS); // the default hold is 48 hours
-    const result = await runOverdueReminders(ctx);
+    const result = runOverdueReminders(ctx);
     expect(result).toMatchObject({ holdOffersExpired: 1, summary: '0 reminders, nothing overdue, no digest, 1 expired hold offer moved on' });
-    expect(t.lastMailTo('lead@example.org')?.subject).toBe(`${code} Pneumatic rivet puller is back and held for you`);
+    expect((await t.lastMailTo('lead@example.org'))?.subject).toBe(`${code} Pneumatic rivet puller is back and held for you`);
     const tool = await qm.agent.get(`/api/tools/${code}`);
     expect(tool.body).toMatchObject({ status: 'held', holds: { offeredTo: { name: 'Lee Lead' } } });
   });
 
-  it('records the error when mail cannot go out, and gives the day’s reminders back so a later run sends them', async () => {
+  it('finishes the run when the mail server is down: the reminders wait in the outbox and a later delivery sends them', async () => {
     await twoOverdueLoans();
-    const deadMailer = createSmtpMailer('smtp://127.0.0.1:1', 'Gripline test <test@example.org>');
-    try {
-      const failed = await runOverdueReminders({ ...ctx, mailer: deadMailer });
-      expect(failed.remindersSent).toBe(0);
-      expect(failed.error).toMatch(/^Could not send reminder for T-0001 to member@example.org/);
-    } finally {
-      deadMailer.close();
-    }
+    const result = runOverdueReminders(ctx);
+    expect(result).toMatchObject({ remindersSent: 2, error: null });
+    const down = await t.deliverMail({ send: () => Promise.reject(new Error('connect ECONNREFUSED 127.0.0.1:1')), close: () => undefined });
+    expect(down).toEqual({ sent: 0, retrying: 3, failed: 0 });
+    expect(mailsTo('member@example.org')).toEqual([expect.objectContaining({ state: 'waiting', attempts: 1, lastError: 'connect ECONNREFUSED 127.0.0.1:1' })]);
     const shown = await lead.agent.get('/api/overdue');
-    expect(shown.body.lastRun.error).toMatch(/Could not send/);
-    expect(shown.body.data.every((l: { remindedToday: boolean }) => !l.remindedToday)).toBe(true);
+    expect(shown.body.data.every((l: { remindedToday: boolean }) => l.remindedToday)).toBe(true);
 
-    const retry = await runOverdueReminders(ctx);
-    expect(retry.summary).toBe('2 reminders, digest to 1 lead');
-    expect(mailsTo('member@example.org')).toHaveLength(1);
+    later(60_000);
+    expect(await t.deliverMail()).toEqual({ sent: 3, retrying: 0, failed: 0 });
+    expect((await t.lastMailTo('member@example.org'))?.subject).toMatch(/^Reminder: T-0001/);
+    expect(runOverdueReminders(ctx).remindersSent).toBe(0);
   });
 });

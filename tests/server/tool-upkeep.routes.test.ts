@@ -87,7 +87,7 @@ describe('quartermaster state changes', () => {
     expect((await post(member, '/api/tools/T-0001/holds')).status).toBe(201);
     const back = await post(qm, '/api/tools/T-0001/back-in-service', { note: 'New set' });
     expect(back.body.status).toBe('held');
-    expect(t.lastMailTo('member@example.org')?.subject).toMatch(/held for you/);
+    expect((await t.lastMailTo('member@example.org'))?.subject).toMatch(/held for you/);
   });
 });
 

@@ -167,7 +167,7 @@ describe('holds', () => {
     expect(hold.body.position).toBe(1);
     const back = await post(member, '/api/tools/T-0001/return', { condition: 'ok' });
     expect(back.body).toMatchObject({ status: 'held', offeredTo: { name: 'Quinn Quartermaster' } });
-    const mail = t.lastMailTo('qm@example.org');
+    const mail = await t.lastMailTo('qm@example.org');
     expect(mail?.subject).toMatch(/T-0001 Torque wrench is back and held for you/);
     expect(mail?.links[0]).toBe('http://gripline.test/tools/T-0001');
     const refused = await post(member, '/api/tools/T-0001/checkout');

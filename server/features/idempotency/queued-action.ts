@@ -20,7 +20,7 @@ function readHeaders(get: (name: string) => string | undefined) {
  * recorded performed-at, and at most once per Idempotency-Key (a repeat answers the first result
  * with Idempotent-Replayed: true).
  */
-export const runQueuedAction: RunQueuedAction = async (req, res, action) => {
+export const runQueuedAction: RunQueuedAction = (req, res, action) => {
   const headers = readHeaders((name) => req.get(name));
   const performedAt = recordedPerformedAt(req.ctx.now(), headers[PERFORMED_AT_HEADER], headers[CATALOGUE_AT_HEADER]);
   const key = headers[IDEMPOTENCY_KEY_HEADER];
@@ -32,6 +32,5 @@ export const runQueuedAction: RunQueuedAction = async (req, res, action) => {
     answer = runOnce(req.ctx, { userId: user.id, key, method: req.method, path: req.baseUrl + req.path, body: req.body }, () => action(performedAt));
     if (answer.replayed) res.setHeader(IDEMPOTENT_REPLAYED_HEADER, 'true');
   }
-  await answer.afterCommit?.();
   res.status(answer.status).json(answer.body);
 };

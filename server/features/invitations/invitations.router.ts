@@ -20,9 +20,9 @@ export function invitationsRouter() {
     res.json({ data: invitations.listPendingInvitations(req.ctx) });
   });
 
-  router.post('/', lead, async (req, res) => {
+  router.post('/', lead, (req, res) => {
     const body = parseInput(inviteBodySchema, req.body);
-    res.status(201).json(await invitations.invite(req.ctx, requireUser(req), body.email, body.role));
+    res.status(201).json(invitations.invite(req.ctx, requireUser(req), body.email, body.role));
   });
 
   router.delete('/:id', lead, (req, res) => {

@@ -9,13 +9,14 @@ import {
   revokeTokenById,
 } from '../../accounts/account-tokens.repo';
 import { linkUrl, openLinkToken } from '../../accounts/link-token.service';
-import { hashLinkToken, newLinkToken } from '../../accounts/link-tokens';
+import { hashLinkToken, LINK_PAGES, newLinkToken } from '../../accounts/link-tokens';
 import { hashPassword } from '../../accounts/passwords';
 import { findUserByEmail, findUserById, insertUser } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { invitationMail } from '../../mail/messages';
+import { queueMail } from '../../mail/outbox';
 
 export const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
 
@@ -23,13 +24,14 @@ function alreadyHasAccount(email: string): HttpError {
   return new HttpError(409, 'ALREADY_HAS_ACCOUNT', `${email} already has a Gripline account; change its role on the People page instead.`);
 }
 
-/** A new invitation replaces any open one for the same address. */
-export async function invite(ctx: ServiceContext, lead: UserRow, email: string, role: Role): Promise<PendingInvitation> {
+/** A new invitation replaces any open one for the same address; its e-mail is written to the outbox with it. */
+export function invite(ctx: ServiceContext, lead: UserRow, email: string, role: Role): PendingInvitation {
   if (findUserByEmail(ctx.db, email)) throw alreadyHasAccount(email);
   const now = ctx.now();
   const token = newLinkToken();
   const row = ctx.db.transaction((db) => {
     revokeOpenTokens(db, 'invitation', email, now);
+    queueMail(db, invitationMail(email, role, lead.name, linkUrl(ctx, LINK_PAGES.invitation, token)), now);
     return insertAccountToken(db, {
       kind: 'invitation',
       tokenHash: hashLinkToken(token),
@@ -40,12 +42,6 @@ export async function invite(ctx: ServiceContext, lead: UserRow, email: string, 
       expiresAt: new Date(now.getTime() + INVITATION_LIFETIME_MS),
     });
   });
-  try {
-    await ctx.mailer.send(invitationMail(email, role, lead.name, linkUrl(ctx, '/invite', token)));
-  } catch {
-    revokeTokenById(ctx.db, row.id, ctx.now());
-    throw new HttpError(502, 'MAIL_NOT_SENT', `The invitation e-mail to ${email} could not be sent. Check the mail settings and invite again.`);
-  }
   return {
     id: row.id,
     email,

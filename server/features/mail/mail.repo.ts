@@ -1,22 +1,18 @@
-import { desc } from 'drizzle-orm';
-import type { CaughtMail } from '@shared/schemas/mail';
+import { desc, eq, sql } from 'drizzle-orm';
 import type { Executor } from '../../db/client';
-import { caughtMail } from '../../db/schema/mail';
+import { outboxMail, type OutboxMailRow } from '../../db/schema/mail';
 
-export function listCaughtMail(db: Executor, limit: number): CaughtMail[] {
+/** The outbox, newest first; only what was written to one address when given. */
+export function listOutboxMail(db: Executor, limit: number, toAddress?: string): OutboxMailRow[] {
   return db
     .select()
-    .from(caughtMail)
-    .orderBy(desc(caughtMail.receivedAt), desc(caughtMail.id))
+    .from(outboxMail)
+    .where(toAddress === undefined ? undefined : eq(sql`lower(${outboxMail.toAddress})`, toAddress.toLowerCase()))
+    .orderBy(desc(outboxMail.createdAt), desc(outboxMail.id))
     .limit(limit)
-    .all()
-    .map((m) => ({
-      id: m.id,
-      from: m.fromAddress,
-      to: JSON.parse(m.toAddresses) as string[],
-      subject: m.subject,
-      text: m.textBody,
-      links: JSON.parse(m.links) as string[],
-      receivedAt: m.receivedAt.toISOString(),
-    }));
+    .all();
+}
+
+export function findOutboxMail(db: Executor, id: number): OutboxMailRow | undefined {
+  return db.select().from(outboxMail).where(eq(outboxMail.id, id)).get();
 }

@@ -6,9 +6,9 @@ import { confirmPasswordReset, requestPasswordReset } from './password-reset.ser
 export function passwordResetRouter() {
   const router = Router();
 
-  router.post('/', async (req, res) => {
+  router.post('/', (req, res) => {
     const body = parseInput(resetRequestBodySchema, req.body);
-    await requestPasswordReset(req.ctx, body.email);
+    requestPasswordReset(req.ctx, body.email);
     res.status(202).json({
       ok: true,
       message: 'If that address belongs to an active account, a reset link is on its way. It works for 1 hour.',

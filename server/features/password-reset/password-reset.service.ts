@@ -1,33 +1,44 @@
-import { claimAccountToken, insertAccountToken, revokeOpenTokens } from '../../accounts/account-tokens.repo';
+import { claimAccountToken, countTokensSince, insertAccountToken, revokeOpenTokens } from '../../accounts/account-tokens.repo';
 import { linkUrl, openLinkToken } from '../../accounts/link-token.service';
-import { hashLinkToken, newLinkToken } from '../../accounts/link-tokens';
+import { hashLinkToken, LINK_PAGES, newLinkToken } from '../../accounts/link-tokens';
 import { hashPassword } from '../../accounts/passwords';
 import { findUserByEmail, updateUser } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
 import { HttpError } from '../../lib/http-error';
 import { endSessionsOf } from '../../lib/session-helpers';
 import { passwordResetMail } from '../../mail/messages';
+import { queueMail } from '../../mail/outbox';
 
 export const RESET_LIFETIME_MS = 60 * 60 * 1000;
 
-/** Sends a reset link to an active account; says nothing about whether the address exists. */
-export async function requestPasswordReset(ctx: ServiceContext, email: string): Promise<void> {
-  const user = findUserByEmail(ctx.db, email);
-  if (!user || user.deactivatedAt) return;
+/** More requests for one address within the hour are answered alike and queue nothing. */
+export const RESETS_PER_HOUR = 3;
+const HOUR_MS = 60 * 60 * 1000;
+
+/**
+ * Writes a reset link for an active account to the outbox; says nothing about whether the address
+ * exists, not even by the time it takes: no mail is sent during the request, and both paths make
+ * a token and run one short transaction.
+ */
+export function requestPasswordReset(ctx: ServiceContext, email: string): void {
   const now = ctx.now();
   const token = newLinkToken();
+  const tokenHash = hashLinkToken(token);
   ctx.db.transaction((db) => {
+    const user = findUserByEmail(db, email);
+    if (!user || user.deactivatedAt) return;
+    if (countTokensSince(db, 'password_reset', user.email, new Date(now.getTime() - HOUR_MS)) >= RESETS_PER_HOUR) return;
     revokeOpenTokens(db, 'password_reset', user.email, now);
     insertAccountToken(db, {
       kind: 'password_reset',
-      tokenHash: hashLinkToken(token),
+      tokenHash,
       email: user.email,
       userId: user.id,
       createdAt: now,
       expiresAt: new Date(now.getTime() + RESET_LIFETIME_MS),
     });
+    queueMail(db, passwordResetMail(user.email, user.name, linkUrl(ctx, LINK_PAGES.password_reset, token)), now);
   });
-  await ctx.mailer.send(passwordResetMail(user.email, user.name, linkUrl(ctx, '/reset-password', token)));
 }
 
 export async function confirmPasswordReset(ctx: ServiceContext, token: string, password: string): Promise<void> {

@@ -3,6 +3,7 @@ import { valueAtCost } from '@shared/stock/money';
 import type { ServiceContext } from '../../context';
 import type { OutgoingMail } from '../../mail/mailer';
 import { plural, valueWords } from '../../mail/messages';
+import { queueMail } from '../../mail/outbox';
 import { finishJobRun, startJobRun } from '../../jobs/job-runs.repo';
 import { activeQuartermasters } from './alerts.repo';
 import { listAlertsIn, refreshAlerts } from './alerts.service';
@@ -48,35 +49,31 @@ export function alertDigestMail(to: string, name: string, alerts: Alert[], publi
 }
 
 /**
- * The daily run: refreshes the alerts, then, when at least one is still to order, mails every
- * active quartermaster the digest. Each run is recorded in job_runs; a failed e-mail is noted in
- * the run's error and does not stop the others.
+ * The daily run: refreshes the alerts, then, when at least one is still to order, writes every
+ * active quartermaster the digest (to the outbox, which sends it). Each run is recorded in job_runs.
  */
-export async function runAlertDigest(ctx: ServiceContext): Promise<AlertDigestResult> {
+export function runAlertDigest(ctx: ServiceContext): AlertDigestResult {
   const runId = startJobRun(ctx.db, ALERT_DIGEST_JOB, ctx.now());
   try {
     const { raised } = refreshAlerts(ctx);
     const alerts = listAlertsIn(ctx, 'active');
     const open = alerts.filter((a) => a.state === 'open').length;
-    const failures: string[] = [];
     let digestsSent = 0;
     if (open > 0) {
-      for (const qm of activeQuartermasters(ctx.db)) {
-        try {
-          await ctx.mailer.send(alertDigestMail(qm.email, qm.name, alerts, ctx.publicUrl));
+      const now = ctx.now();
+      ctx.db.transaction((db) => {
+        for (const qm of activeQuartermasters(db)) {
+          queueMail(db, alertDigestMail(qm.email, qm.name, alerts, ctx.publicUrl), now);
           digestsSent++;
-        } catch (err) {
-          failures.push(`digest to ${qm.email}: ${(err as Error).message}`);
         }
-      }
+      });
     }
     const summary = [
       `${plural(raised.length, 'alert', 'alerts')} raised`,
       open === 0 ? 'nothing to order, no digest' : `${plural(open, 'bin', 'bins')} to order, digest to ${plural(digestsSent, 'quartermaster', 'quartermasters')}`,
     ].join(', ');
-    const error = failures.length ? `Could not send ${failures.join('; ')}` : null;
-    finishJobRun(ctx.db, runId, { finishedAt: ctx.now(), summary, error });
-    return { summary, raised: raised.length, digestsSent, error };
+    finishJobRun(ctx.db, runId, { finishedAt: ctx.now(), summary, error: null });
+    return { summary, raised: raised.length, digestsSent, error: null };
   } catch (err) {
     finishJobRun(ctx.db, runId, { finishedAt: ctx.now(), summary: 'Stopped', error: (err as Error).message || String(err) });
     throw err;

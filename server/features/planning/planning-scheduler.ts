@@ -8,9 +8,9 @@ const ALERT_DIGEST_SCHEDULE = '0 7 * * *';
 
 /** Starts planning's timed job. A failing run is logged and the schedule goes on; `protect` skips overlapping ticks. */
 export function startPlanningScheduler(ctx: ServiceContext, logger: Logger): { stop(): void } {
-  const job = new Cron(ALERT_DIGEST_SCHEDULE, { name: ALERT_DIGEST_JOB, protect: true, unref: true }, async () => {
+  const job = new Cron(ALERT_DIGEST_SCHEDULE, { name: ALERT_DIGEST_JOB, protect: true, unref: true }, () => {
     try {
-      const result = await runAlertDigest(ctx);
+      const result = runAlertDigest(ctx);
       logger.info({ job: ALERT_DIGEST_JOB, result }, 'scheduled job finished');
     } catch (err) {
       logger.error({ job: ALERT_DIGEST_JOB, err }, 'scheduled job failed');

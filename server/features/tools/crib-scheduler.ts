@@ -32,8 +32,8 @@ export function startCribScheduler(ctx: ServiceContext, logger: Logger, housekee
     }
   };
   const jobs = [
-    new Cron(OVERDUE_SCHEDULE, { name: 'overdue-reminders', protect: true, unref: true }, guarded('overdue-reminders', () => runOverdueReminders(ctx))),
-    new Cron(HOLD_OFFER_SCHEDULE, { name: 'expire-hold-offers', protect: true, unref: true }, guarded('expire-hold-offers', () => expireHoldOffers(ctx))),
+    new Cron(OVERDUE_SCHEDULE, { name: 'overdue-reminders', protect: true, unref: true }, guarded('overdue-reminders', () => Promise.resolve().then(() => runOverdueReminders(ctx)))),
+    new Cron(HOLD_OFFER_SCHEDULE, { name: 'expire-hold-offers', protect: true, unref: true }, guarded('expire-hold-offers', () => Promise.resolve().then(() => expireHoldOffers(ctx)))),
     ...housekeeping.map((job) => new Cron(HOUSEKEEPING_SCHEDULE, { name: job.name, protect: true, unref: true }, guarded(job.name, () => Promise.resolve().then(job.run)))),
   ];
   return {

@@ -4,6 +4,7 @@ import { holds, tools } from '../../db/schema/tools';
 import { users, type UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { holdOfferedMail } from '../../mail/messages';
+import { queueMail } from '../../mail/outbox';
 import { readCribSettings } from '../../settings/crib-settings';
 import { recordToolEvent } from './tool-events.repo';
 import { findActiveHold, findToolByCode, openLoanHolderId, queuePosition, type ToolRow } from './tools.repo';
@@ -13,13 +14,12 @@ const HOUR_MS = 60 * 60 * 1000;
 export interface Offer {
   userId: number;
   name: string;
-  notify: () => Promise<void>;
 }
 
 /**
  * Offers a tool that just became free to the first person waiting, holding it for them for the
- * chapter's hold time. Returns undefined when nobody waits. Runs inside the caller's transaction;
- * the e-mail goes out afterwards through `notify`.
+ * chapter's hold time, and writes their e-mail to the outbox. Returns undefined when nobody waits.
+ * Runs inside the caller's transaction, so the offer and its e-mail are kept together.
  */
 export function offerToNextInQueue(ctx: ServiceContext, tool: ToolRow, now: Date): Offer | undefined {
   const next = ctx.db
@@ -35,11 +35,8 @@ export function offerToNextInQueue(ctx: ServiceContext, tool: ToolRow, now: Date
   ctx.db.update(tools).set({ status: 'held', statusNote: null, updatedAt: now }).where(eq(tools.id, tool.id)).run();
   recordToolEvent(ctx.db, { toolId: tool.id, actorId: null, at: now, action: 'held', fromStatus: tool.status, toStatus: 'held', detail: `Held for ${next.name} until ${until.toISOString()}` });
   const link = `${ctx.publicUrl.replace(/\/$/, '')}/tools/${tool.code}`;
-  return {
-    userId: next.userId,
-    name: next.name,
-    notify: () => ctx.mailer.send(holdOfferedMail(next.email, next.name, tool, until, link)),
-  };
+  queueMail(ctx.db, holdOfferedMail(next.email, next.name, tool, until, link), now);
+  return { userId: next.userId, name: next.name };
 }
 
 /**
@@ -71,19 +68,17 @@ function setAside(ctx: ServiceContext, tool: ToolRow, user: UserRow, now: Date) 
   return { id: hold.id, code: tool.code, status: hold.status, position: 1 };
 }
 
-export async function cancelHold(ctx: ServiceContext, user: UserRow, code: string): Promise<void> {
+export function cancelHold(ctx: ServiceContext, user: UserRow, code: string): void {
   const now = ctx.now();
-  const offer = ctx.db.transaction(() => {
+  ctx.db.transaction(() => {
     const tool = findToolByCode(ctx.db, code);
     if (!tool) throw new HttpError(404, 'TOOL_NOT_FOUND', `No tool has the code ${code}.`);
     const hold = findActiveHold(ctx.db, tool.id, user.id);
     if (!hold) throw new HttpError(404, 'HOLD_NOT_FOUND', `You have no hold on ${tool.code}.`);
     ctx.db.update(holds).set({ status: 'cancelled', closedAt: now }).where(eq(holds.id, hold.id)).run();
     recordToolEvent(ctx.db, { toolId: tool.id, actorId: user.id, at: now, action: 'hold_cancelled', detail: `${user.name} left the queue` });
-    if (hold.status !== 'offered') return undefined;
-    return releaseHeldTool(ctx, tool, now);
+    if (hold.status === 'offered') releaseHeldTool(ctx, tool, now);
   });
-  await offer?.notify();
 }
 
 /** A held tool whose offer ended goes to the next person waiting, or back on the shelf. */
@@ -97,9 +92,9 @@ function releaseHeldTool(ctx: ServiceContext, tool: ToolRow, now: Date): Offer |
 }
 
 /** Ends offers whose time ran out; the next person in each queue is offered the tool. */
-export async function expireHoldOffers(ctx: ServiceContext): Promise<number> {
+export function expireHoldOffers(ctx: ServiceContext): number {
   const now = ctx.now();
-  const offers = ctx.db.transaction(() => {
+  return ctx.db.transaction(() => {
     const expired = ctx.db
       .select({ hold: holds, tool: tools, name: users.name })
       .from(holds)
@@ -107,12 +102,11 @@ export async function expireHoldOffers(ctx: ServiceContext): Promise<number> {
       .innerJoin(users, eq(users.id, holds.userId))
       .where(and(eq(holds.status, 'offered'), lte(holds.offerExpiresAt, now)))
       .all();
-    return expired.map(({ hold, tool, name }) => {
+    for (const { hold, tool, name } of expired) {
       ctx.db.update(holds).set({ status: 'expired', closedAt: now }).where(eq(holds.id, hold.id)).run();
       recordToolEvent(ctx.db, { toolId: tool.id, actorId: null, at: now, action: 'hold_expired', detail: `${name} did not collect it in time` });
-      return releaseHeldTool(ctx, tool, now);
-    });
+      releaseHeldTool(ctx, tool, now);
+    }
+    return expired.length;
   });
-  await Promise.allSettled(offers.flatMap((o) => (o ? [o.notify()] : [])));
-  return offers.length;
 }

@@ -125,24 +125,12 @@ export interface ReturnResult {
   recordedAt: string;
 }
 
-/** Returns a tool: the holder, or a quartermaster or lead on their behalf. */
-export async function returnTool(ctx: ServiceContext, user: UserRow, code: string, body: ReturnBody): Promise<ReturnResult> {
-  const { result, notify } = returnToolNow(ctx, user, code, body);
-  await notify?.();
-  return result;
-}
-
 /**
- * The return's transaction, with the hold offer's e-mail to send once it has committed.
+ * Returns a tool: the holder, or a quartermaster or lead on their behalf. When someone waits, the
+ * offer and its e-mail (in the outbox) are written in the return's transaction.
  * `performedAt` (a return queued offline) is kept, but never before the loan began.
  */
-export function returnToolNow(
-  ctx: ServiceContext,
-  user: UserRow,
-  code: string,
-  body: ReturnBody,
-  performedAt?: Date,
-): { result: ReturnResult; notify?: () => Promise<void> } {
+export function returnTool(ctx: ServiceContext, user: UserRow, code: string, body: ReturnBody, performedAt?: Date): ReturnResult {
   const s = loanStatements(ctx.db);
   const now = ctx.now();
   return ctx.db.$client.transaction(() => {
@@ -188,7 +176,6 @@ export function returnToolNow(
       .join('; ');
     let status: ToolRow['status'];
     let offeredTo: ReturnResult['offeredTo'] = null;
-    let notify: (() => Promise<void>) | undefined;
     if (body.condition === 'needs_attention') {
       status = 'out_of_service';
       s.setToolStatus.run({ toolId: tool.id, status, statusNote: body.note ?? 'Needs attention', updatedAt: now.getTime() });
@@ -196,11 +183,9 @@ export function returnToolNow(
       const offer = s.anyoneWaiting.get({ toolId: tool.id }) ? offerToNextInQueue(ctx, tool, now) : undefined;
       status = offer ? 'held' : 'available';
       offeredTo = offer ? { id: offer.userId, name: offer.name } : null;
-      notify = offer?.notify;
       if (!offer) s.setToolStatus.run({ toolId: tool.id, status, statusNote: null, updatedAt: now.getTime() });
     }
     s.insertEvent.run({ toolId: tool.id, actorId: user.id, at, action: 'returned', fromStatus: 'on_loan', toStatus: status, detail });
-    const result = { loanId: loan.id, code: tool.code, status, shortfall, offeredTo, returnedAt: at.toISOString(), recordedAt: now.toISOString() };
-    return { result, notify };
+    return { loanId: loan.id, code: tool.code, status, shortfall, offeredTo, returnedAt: at.toISOString(), recordedAt: now.toISOString() };
   })();
 }

@@ -53,16 +53,11 @@ export function loansRemindedOn(db: Executor, day: string): Set<number> {
 
 /**
  * Claims the day's reminder for a loan. The unique (loanId, day) index decides: true when this
- * call inserted the row (and so must send the mail), false when one was already sent that day.
+ * call inserted the row (and so must queue the mail), false when one was already sent that day.
  */
 export function claimReminder(db: Executor, r: { loanId: number; day: string; sentAt: Date; sentById: number | null }): boolean {
   const inserted = db.insert(loanReminders).values(r).onConflictDoNothing().returning({ id: loanReminders.id }).all();
   return inserted.length > 0;
-}
-
-/** A reminder whose mail could not go out is given back, so a later attempt the same day can send it. */
-export function releaseReminder(db: Executor, loanId: number, day: string): void {
-  db.delete(loanReminders).where(and(eq(loanReminders.loanId, loanId), eq(loanReminders.day, day))).run();
 }
 
 export const activeLeads = (db: Executor) => activePeopleWithRole(db, 'lead');

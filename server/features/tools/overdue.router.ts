@@ -14,10 +14,10 @@ export function overdueRouter() {
     res.json(listOverdue(req.ctx));
   });
 
-  router.post('/:loanId/remind', async (req, res) => {
+  router.post('/:loanId/remind', (req, res) => {
     const { loanId } = parseInput(loanIdParams, req.params, 'path');
     parseInput(noFieldsBodySchema, req.body);
-    res.status(201).json(await sendReminderNow(req.ctx, requireUser(req), loanId));
+    res.status(201).json(sendReminderNow(req.ctx, requireUser(req), loanId));
   });
 
   return router;

@@ -3,8 +3,9 @@ import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { overdueReminderMail, type OverdueMailLine } from '../../mail/messages';
+import { queueMail } from '../../mail/outbox';
 import { lastJobRun } from '../../jobs/job-runs.repo';
-import { claimReminder, findLoanForReminder, listOverdueLoans, loansRemindedOn, releaseReminder, type OverdueLoanRow } from './overdue.repo';
+import { claimReminder, findLoanForReminder, listOverdueLoans, loansRemindedOn, type OverdueLoanRow } from './overdue.repo';
 
 export const OVERDUE_JOB = 'overdue-reminders';
 
@@ -48,9 +49,10 @@ function lastOverdueRun(ctx: ServiceContext): JobRun | null {
 
 /**
  * Sends one holder a reminder now, on the lead's word. The unique (loan, day) index allows one a
- * day whoever sends it (the lead or the daily job); if the mail fails the day's slot is given back.
+ * day whoever sends it (the lead or the daily job); the day's slot and the mail in the outbox are
+ * written together.
  */
-export async function sendReminderNow(ctx: ServiceContext, lead: UserRow, loanId: number): Promise<ReminderSent> {
+export function sendReminderNow(ctx: ServiceContext, lead: UserRow, loanId: number): ReminderSent {
   const now = ctx.now();
   const row = findLoanForReminder(ctx.db, loanId);
   if (!row) throw new HttpError(404, 'LOAN_NOT_FOUND', `No loan has the id ${loanId}.`);
@@ -59,14 +61,11 @@ export async function sendReminderNow(ctx: ServiceContext, lead: UserRow, loanId
     throw new HttpError(409, 'LOAN_NOT_OVERDUE', `${row.tool.code} is not due back until ${row.dueAt.toISOString().slice(0, 10)}; a reminder can go once it is late.`);
   }
   const day = calendarDay(now);
-  if (!claimReminder(ctx.db, { loanId, day, sentAt: now, sentById: lead.id })) {
-    throw new HttpError(409, 'REMINDER_ALREADY_SENT', `${row.holder.name} has already been reminded about ${row.tool.code} today; try again tomorrow.`);
-  }
-  try {
-    await ctx.mailer.send(overdueReminderMail(toMailLine(row, now), ctx.publicUrl));
-  } catch (err) {
-    releaseReminder(ctx.db, loanId, day);
-    throw err;
-  }
+  ctx.db.transaction((db) => {
+    if (!claimReminder(db, { loanId, day, sentAt: now, sentById: lead.id })) {
+      throw new HttpError(409, 'REMINDER_ALREADY_SENT', `${row.holder.name} has already been reminded about ${row.tool.code} today; try again tomorrow.`);
+    }
+    queueMail(db, overdueReminderMail(toMailLine(row, now), ctx.publicUrl), now);
+  });
   return { loanId, sentTo: row.holder.email, sentAt: now.toISOString(), day };
 }

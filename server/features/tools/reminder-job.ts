@@ -1,8 +1,9 @@
 import type { ServiceContext } from '../../context';
 import { overdueDigestMail, overdueReminderMail, plural } from '../../mail/messages';
+import { queueMail } from '../../mail/outbox';
 import { expireHoldOffers } from './holds.service';
 import { finishJobRun, startJobRun } from '../../jobs/job-runs.repo';
-import { activeLeads, claimReminder, releaseReminder } from './overdue.repo';
+import { activeLeads, claimReminder } from './overdue.repo';
 import { calendarDay, OVERDUE_JOB, overdueLoans, toMailLine } from './overdue.service';
 
 export interface OverdueRunResult {
@@ -22,47 +23,39 @@ function summarize(r: Omit<OverdueRunResult, 'summary' | 'error'>, overdue: numb
 
 /**
  * The daily overdue run: moves expired hold offers on, reminds each holder of an overdue tool
- * (at most once a day per loan: only the call that inserts the day's reminder row sends the mail),
- * then sends every active lead a digest of all overdue tools. Each run is recorded in job_runs.
- * A failed e-mail is noted in the run's error and does not stop the others.
+ * (at most once a day per loan: only the call that inserts the day's reminder row queues the mail),
+ * then writes every active lead a digest of all overdue tools. The mail goes to the outbox in the
+ * run's transaction, so a mail server that is down delays it and loses none. Each run is recorded
+ * in job_runs.
  */
-export async function runOverdueReminders(ctx: ServiceContext): Promise<OverdueRunResult> {
+export function runOverdueReminders(ctx: ServiceContext): OverdueRunResult {
   const startedAt = ctx.now();
   const runId = startJobRun(ctx.db, OVERDUE_JOB, startedAt);
-  const failures: string[] = [];
   const counts = { remindersSent: 0, digestsSent: 0, holdOffersExpired: 0 };
   try {
-    counts.holdOffersExpired = await expireHoldOffers(ctx);
+    counts.holdOffersExpired = expireHoldOffers(ctx);
     const now = ctx.now();
     const day = calendarDay(now);
     const overdue = overdueLoans(ctx);
-    for (const row of overdue) {
-      if (!claimReminder(ctx.db, { loanId: row.loanId, day, sentAt: now, sentById: null })) continue;
-      try {
-        await ctx.mailer.send(overdueReminderMail(toMailLine(row, now), ctx.publicUrl));
+    ctx.db.transaction((db) => {
+      for (const row of overdue) {
+        if (!claimReminder(db, { loanId: row.loanId, day, sentAt: now, sentById: null })) continue;
+        queueMail(db, overdueReminderMail(toMailLine(row, now), ctx.publicUrl), now);
         counts.remindersSent++;
-      } catch (err) {
-        releaseReminder(ctx.db, row.loanId, day);
-        failures.push(`reminder for ${row.tool.code} to ${row.holder.email}: ${(err as Error).message}`);
       }
-    }
-    if (overdue.length > 0) {
+      if (overdue.length === 0) return;
       const lines = overdue.map((row) => toMailLine(row, now));
-      for (const lead of activeLeads(ctx.db)) {
-        try {
-          await ctx.mailer.send(overdueDigestMail(lead.email, lead.name, lines, ctx.publicUrl));
-          counts.digestsSent++;
-        } catch (err) {
-          failures.push(`digest to ${lead.email}: ${(err as Error).message}`);
-        }
+      for (const lead of activeLeads(db)) {
+        queueMail(db, overdueDigestMail(lead.email, lead.name, lines, ctx.publicUrl), now);
+        counts.digestsSent++;
       }
-    }
-    const result = { ...counts, summary: summarize(counts, overdue.length), error: failures.length ? `Could not send ${failures.join('; ')}` : null };
-    finishJobRun(ctx.db, runId, { finishedAt: ctx.now(), summary: result.summary, error: result.error });
+    });
+    const result = { ...counts, summary: summarize(counts, overdue.length), error: null };
+    finishJobRun(ctx.db, runId, { finishedAt: ctx.now(), summary: result.summary, error: null });
     return result;
   } catch (err) {
     const error = (err as Error).message || String(err);
-    finishJobRun(ctx.db, runId, { finishedAt: ctx.now(), summary: `Stopped after ${plural(counts.remindersSent, 'reminder', 'reminders')}`, error });
+    finishJobRun(ctx.db, runId, { finishedAt: ctx.now(), summary: 'Stopped; no reminders queued', error });
     throw err;
   }
 }

@@ -25,7 +25,7 @@ const COMMANDS: Record<StatusCommand, { from: ToolRow['status'][]; to: ToolRow['
  * A tool on loan must come back before it can go out of service or be retired. Marking a tool on
  * loan lost closes its loan with the reason, so the record says who had it last.
  */
-export async function changeToolStatus(ctx: ServiceContext, actor: UserRow, code: string, command: StatusCommand, note: string, serviced = false) {
+export function changeToolStatus(ctx: ServiceContext, actor: UserRow, code: string, command: StatusCommand, note: string, serviced = false) {
   const now = ctx.now();
   const rule = COMMANDS[command];
   const { tool, offer } = ctx.db.transaction(() => {
@@ -57,6 +57,5 @@ export async function changeToolStatus(ctx: ServiceContext, actor: UserRow, code
     if (serviced) recordToolEvent(ctx.db, { toolId: tool.id, actorId: actor.id, at: now, action: 'serviced', detail: note });
     return { tool, offer };
   });
-  await offer?.notify();
   return { code: tool.code, status: offer ? 'held' : rule.to };
 }

@@ -14,7 +14,7 @@ import { requireRole, requireUser } from '../../middleware/auth';
 import type { RunQueuedAction } from '../../lib/queued-action';
 import { parseInput } from '../../lib/validate';
 import { cancelHold, placeHold } from './holds.service';
-import { checkOut, returnToolNow } from './loans.service';
+import { checkOut, returnTool } from './loans.service';
 import { listToolEvents } from './tool-events.repo';
 import { changeToolStatus, type StatusCommand } from './tool-status.service';
 import { createTool, editTool, getToolForYou, getToolRow, listToolPage } from './tools.service';
@@ -64,10 +64,10 @@ export function toolsRouter({ runQueuedAction }: { runQueuedAction: RunQueuedAct
   );
 
   router.post('/:code/return', (req, res) =>
-    runQueuedAction(req, res, (at) => {
-      const { result, notify } = returnToolNow(req.ctx, requireUser(req), code(req.params), parseInput(returnBodySchema, req.body), at);
-      return { status: 200, body: result, afterCommit: notify };
-    }),
+    runQueuedAction(req, res, (at) => ({
+      status: 200,
+      body: returnTool(req.ctx, requireUser(req), code(req.params), parseInput(returnBodySchema, req.body), at),
+    })),
   );
 
   router.post('/:code/holds', (req, res) => {
@@ -76,18 +76,18 @@ export function toolsRouter({ runQueuedAction }: { runQueuedAction: RunQueuedAct
     res.status(201).json(placeHold(req.ctx, requireUser(req), toolCode));
   });
 
-  router.delete('/:code/holds/mine', async (req, res) => {
-    await cancelHold(req.ctx, requireUser(req), code(req.params));
+  router.delete('/:code/holds/mine', (req, res) => {
+    cancelHold(req.ctx, requireUser(req), code(req.params));
     res.status(204).end();
   });
 
-  router.post('/:code/:command', quartermaster, async (req, res, next) => {
+  router.post('/:code/:command', quartermaster, (req, res, next) => {
     const command = STATUS_PATHS[String(req.params.command)];
     if (!command) return next();
     const toolCode = code({ code: req.params.code });
     const body = parseInput(command === 'back_in_service' ? backInServiceBody : statusChangeBodySchema, req.body);
     const serviced = 'serviced' in body && body.serviced === true;
-    res.json(await changeToolStatus(req.ctx, requireUser(req), toolCode, command, body.note, serviced));
+    res.json(changeToolStatus(req.ctx, requireUser(req), toolCode, command, body.note, serviced));
   });
 
   return router;

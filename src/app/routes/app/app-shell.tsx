@@ -45,6 +45,7 @@ const NAV_LINKS: { to: string; label: string; role: Role; primary?: boolean }[] 
   { to: '/forecast', label: 'Forecast', role: 'quartermaster' },
   { to: '/builds', label: 'My builds', role: 'member' },
   { to: '/tab', label: 'My tab', role: 'member' },
+  { to: '/my-mail', label: 'My mail', role: 'member' },
   { to: '/spend', label: 'Consumables', role: 'lead' },
   { to: '/signoffs', label: 'Sign-offs', role: 'lead' },
 ];

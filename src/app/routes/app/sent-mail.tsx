@@ -17,17 +17,20 @@ export function SentMailRoute() {
   const { data } = useSuspenseQuery(mailQueryOptions());
   return (
     <>
-      <PageHeader title="Sent mail" lead="Invitations and password resets Gripline has sent, newest first." />
+      <title>Sent mail · Gripline</title>
+      <PageHeader title="Sent mail" lead="Every message Gripline has written, newest first: waiting, sent or failed." />
       <div className="flex flex-col gap-4">
         {data.catching ? (
           <Notice title="Mail stays on this computer">
-            No mail server is configured, so Gripline keeps its messages here instead of sending them. Open a link below to act on
-            it, or set SMTP_URL to send real mail.
+            No mail server is configured, so Gripline keeps its messages here instead of sending them. Open an invitation link below to
+            hand it on, or set SMTP_URL to send real mail. A password reset link is shown only to the person it was sent to, on My mail.
           </Notice>
         ) : (
-          <Notice title="Mail goes out through the configured server">This list shows only mail caught locally, so it may be empty.</Notice>
+          <Notice title="Mail goes out through the configured server">
+            A message the server refuses is tried again, waiting longer each time; after the last try it is marked failed and can be retried here.
+          </Notice>
         )}
-        <MailList messages={data.data} />
+        <MailList messages={data.data} canRetry empty="No mail has been written yet. Invite someone and it shows up here." />
       </div>
     </>
   );

@@ -1,15 +1,20 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { CaughtMailList } from '@shared/schemas/mail';
+import type { MailList } from '@shared/schemas/mail';
 import { api } from '@/lib/api-client';
+import { mailKeys } from './keys';
 
-export const mailKeys = {
-  all: ['mail'] as const,
-  list: () => ['mail', 'list'] as const,
-};
-
+/** Every message, for the lead's Sent mail; refreshed while the outbox works through it. */
 export const mailQueryOptions = () =>
   queryOptions({
     queryKey: mailKeys.list(),
-    queryFn: () => api.get<CaughtMailList>('/api/mail'),
+    queryFn: () => api.get<MailList>('/api/mail'),
+    refetchInterval: 10_000,
+  });
+
+/** The signed-in person's own mail. */
+export const myMailQueryOptions = () =>
+  queryOptions({
+    queryKey: mailKeys.mine(),
+    queryFn: () => api.get<MailList>('/api/mail/mine'),
     refetchInterval: 10_000,
   });

@@ -1,0 +1,24 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router';
+import { myMailQueryOptions } from '@/features/mail/api/get-mail';
+import { MailList } from '@/features/mail/components/mail-list';
+import { PageHeader } from '@/components/ui/page';
+import { requireRole } from './guards';
+
+export const myMailLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  await requireRole(queryClient, request, 'member');
+  await queryClient.ensureQueryData(myMailQueryOptions());
+  return null;
+};
+
+export function MyMailRoute() {
+  const { data } = useSuspenseQuery(myMailQueryOptions());
+  return (
+    <>
+      <title>My mail · Gripline</title>
+      <PageHeader title="My mail" lead="The messages Gripline has written to you, newest first." />
+      <MailList messages={data.data} empty="Gripline has not written to you yet." />
+    </>
+  );
+}

@@ -1,0 +1,5 @@
+export const mailKeys = {
+  all: ['mail'] as const,
+  list: () => ['mail', 'list'] as const,
+  mine: () => ['mail', 'mine'] as const,
+};

@@ -51,6 +51,9 @@ describe('the demo lead on a phone', () => {
     await page.getByText(/invited you to the chapter's tool crib/).waitFor();
     const link = await page.getByRole('link', { name: 'Open the invitation link' }).getAttribute('href');
     expect(link).toMatch(/\/invite\/[A-Za-z0-9_-]{43}$/);
+    // The server's outbox worker sends it in the background; the page catches up on its next refresh.
+    await page.getByText('Sent', { exact: true }).first().waitFor({ timeout: 15_000 });
+    await page.screenshot({ path: `${SHOTS}/sent-mail-phone.png`, fullPage: true });
 
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.waitForURL(/\/sign-in/);

@@ -1,4 +1,5 @@
 import { and, asc, eq, lte } from 'drizzle-orm';
+import { maskResetLinks } from '../accounts/link-tokens';
 import type { Executor } from '../db/client';
 import { outboxMail, type OutboxMailRow, type OutboxState } from '../db/schema/mail';
 import type { Mailer, OutgoingMail } from './mailer';
@@ -30,7 +31,7 @@ const TRANSITIONS: Record<OutboxEvent, { from: OutboxState; to: OutboxState }> =
   retried: { from: 'failed', to: 'waiting' },
 };
 
-type Changes = Partial<Pick<OutboxMailRow, 'attempts' | 'nextAttemptAt' | 'lastError' | 'sentAt'>>;
+type Changes = Partial<Pick<OutboxMailRow, 'attempts' | 'nextAttemptAt' | 'lastError' | 'sentAt' | 'textBody'>>;
 
 function move(db: Executor, row: Pick<OutboxMailRow, 'id'>, event: OutboxEvent, changes: Changes, extra?: ReturnType<typeof eq>): boolean {
   const { from, to } = TRANSITIONS[event];
@@ -89,7 +90,8 @@ export async function deliverDueMail({ db, mailer, now }: OutboxDeps): Promise<O
       if (!move(db, row, 'claimed', { nextAttemptAt: lease }, eq(outboxMail.nextAttemptAt, row.nextAttemptAt))) continue;
       try {
         await mailer.send({ to: row.toAddress, subject: row.subject, text: row.textBody });
-        move(db, row, 'delivered', { sentAt: now(), lastError: null });
+        // Once it has left, the copy kept here no longer holds a live reset link.
+        move(db, row, 'delivered', { sentAt: now(), lastError: null, textBody: maskResetLinks(row.textBody) });
         run.sent++;
       } catch (err) {
         const attempts = row.attempts + 1;

@@ -20,6 +20,8 @@ describe('the demo chapter', () => {
     expect(open).toBeGreaterThanOrEqual(5);
     expect(one<{ n: number }>('select count(*) as n from loans where returned_at is null and due_at < ?', now).n).toBe(2);
     expect(one<{ n: number }>("select count(*) as n from holds where status = 'waiting'").n).toBe(1);
+    // The invented past's mail counts as sent: none waits for the outbox worker to send it now.
+    expect(one<{ n: number }>("select count(*) as n from outbox_mail where state != 'sent'").n).toBe(0);
     expect(one<{ n: number }>("select count(*) as n from tools where status = 'on_loan'").n).toBe(open);
     const dueForCalibration = one<{ n: number }>(
       "select count(*) as n from tools where category = 'torque_wrench' and last_service_at + service_interval_days * 86400000 < ?",

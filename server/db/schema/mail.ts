@@ -20,6 +20,8 @@ export const caughtMail = sqliteTable(
   (t) => [index('caught_mail_received_idx').on(t.receivedAt)],
 );
 
+export type CaughtMailRow = typeof caughtMail.$inferSelect;
+
 export const OUTBOX_STATES = ['waiting', 'sent', 'failed'] as const;
 export type OutboxState = (typeof OUTBOX_STATES)[number];
 

@@ -6,7 +6,7 @@ import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { linksIn } from '../../mail/links';
 import { retryFailedMail } from '../../mail/outbox';
-import { findOutboxMail, listOutboxMail } from './mail.repo';
+import { findOutboxMail, listCaughtMailTo, listOutboxMail } from './mail.repo';
 
 const SHOWN = 200;
 
@@ -35,9 +35,21 @@ export function listSentMail(ctx: ServiceContext, lead: UserRow): MailMessage[] 
   return listOutboxMail(ctx.db, SHOWN).map((row) => asSeenBy(row, lead));
 }
 
-/** The mail written to the signed-in person, whole. */
+/** What the local mail catcher holds for the signed-in person, whole: their inbox when mail stays on this computer. */
 export function listMyMail(ctx: ServiceContext, reader: UserRow): MailMessage[] {
-  return listOutboxMail(ctx.db, SHOWN, reader.email).map((row) => asSeenBy(row, reader));
+  return listCaughtMailTo(ctx.db, reader.email, SHOWN).map((row) => ({
+    id: row.id,
+    to: reader.email,
+    subject: row.subject,
+    text: row.textBody,
+    links: linksIn(row.textBody),
+    state: 'sent',
+    attempts: 0,
+    lastError: null,
+    nextAttemptAt: null,
+    createdAt: row.receivedAt.toISOString(),
+    sentAt: row.receivedAt.toISOString(),
+  }));
 }
 
 /** Gives a failed message a fresh round of attempts, starting now. */

@@ -3,6 +3,7 @@ import { useSuspenseQuery } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
 import { myMailQueryOptions } from '@/features/mail/api/get-mail';
 import { MailList } from '@/features/mail/components/mail-list';
+import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page';
 import { requireRole } from './guards';
 
@@ -17,8 +18,12 @@ export function MyMailRoute() {
   return (
     <>
       <title>My mail · Gripline</title>
-      <PageHeader title="My mail" lead="The messages Gripline has written to you, newest first." />
-      <MailList messages={data.data} empty="Gripline has not written to you yet." />
+      <PageHeader title="My mail" lead="The messages Gripline has sent you, newest first." />
+      {data.catching ? (
+        <MailList messages={data.data} empty="Gripline has not written to you yet." />
+      ) : (
+        <Notice title="Your mail goes to your inbox">Gripline sends its messages through the chapter's mail server; look for them in your e-mail.</Notice>
+      )}
     </>
   );
 }

@@ -72,6 +72,7 @@ const cases: Case[] = [
   { route: 'POST /api/alerts/refresh', who: 'qm', method: 'post', path: () => '/api/alerts/refresh', body: () => ({ force: true }), field: 'force' },
   { route: 'POST /api/overdue/:loanId/remind', who: 'lead', method: 'post', path: () => `/api/overdue/${loanId}/remind`, body: () => ({ text: 'Bring it back' }), field: 'text' },
   { route: 'POST /api/invitations', who: 'lead', method: 'post', path: () => '/api/invitations', body: () => ({ email: 'new@example.org', role: 'member', nmae: 'New' }), field: 'nmae' },
+  { route: 'POST /api/mail/:id/retry', who: 'lead', method: 'post', path: () => '/api/mail/1/retry', body: () => ({ force: true }), field: 'force' },
   { route: 'POST /api/auth/logout', who: 'member', method: 'post', path: () => '/api/auth/logout', body: () => ({ everywhere: true }), field: 'everywhere' },
   { route: 'POST /api/auth/login', who: 'anonymous', method: 'post', path: () => '/api/auth/login', body: () => ({ email: 'lead@example.org', password: PASSWORD, rememberMe: true }), field: 'rememberMe' },
   { route: 'POST /api/auth/password-reset', who: 'anonymous', method: 'post', path: () => '/api/auth/password-reset', body: () => ({ email: 'lead@example.org', mail: 'x' }), field: 'mail' },

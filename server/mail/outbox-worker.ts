@@ -1,8 +1,9 @@
+import { SECOND_MS } from '@shared/time/durations';
 import type { Logger } from '../lib/logger';
 import { deliverDueMail, type OutboxDeps } from './outbox';
 
 /** Often enough that a link asked for on a screen is in the inbox by the time the person looks. */
-const POLL_MS = 1000;
+const POLL_MS = SECOND_MS;
 
 export interface OutboxWorker {
   /** Stops polling and waits for the run in progress, so the mailer can be closed after it. */

@@ -1,3 +1,4 @@
+import { HOUR_MS, MINUTE_MS } from '@shared/time/durations';
 import { and, asc, eq, lte } from 'drizzle-orm';
 import { maskResetLinks } from '../accounts/link-tokens';
 import type { Executor } from '../db/client';
@@ -6,13 +7,13 @@ import type { Mailer, OutgoingMail } from './mailer';
 
 /** A message that failed this many times in a row is marked failed; the lead can retry it. */
 export const OUTBOX_MAX_ATTEMPTS = 8;
-const FIRST_RETRY_MS = 60_000;
-const LONGEST_RETRY_MS = 60 * 60_000;
+const FIRST_RETRY_MS = MINUTE_MS;
+const LONGEST_RETRY_MS = HOUR_MS;
 /**
  * While a message is with the mail server nobody else picks it up; should the process stop in the
  * middle, it is tried again after this.
  */
-const SENDING_LEASE_MS = 5 * 60_000;
+const SENDING_LEASE_MS = 5 * MINUTE_MS;
 const BATCH = 20;
 
 /** Wait after the n-th failed attempt: 1, 2, 4, 8 … minutes, at most an hour. */

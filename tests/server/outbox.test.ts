@@ -1,4 +1,5 @@
 import { pino } from 'pino';
+import { MINUTE_MS } from '@shared/time/durations';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { caughtMail, outboxMail } from '../../server/db/schema/mail';
 import type { Mailer, OutgoingMail } from '../../server/mail/mailer';
@@ -24,7 +25,6 @@ function refusingMailer(): Mailer & { offered: OutgoingMail[] } {
   return { offered, send: (mail) => (offered.push(mail), Promise.reject(new Error('connect ECONNREFUSED 127.0.0.1:25'))), close: () => undefined };
 }
 
-const MINUTE = 60_000;
 const later = (ms: number) => {
   t.clock.now = new Date(t.clock.now.getTime() + ms);
 };
@@ -49,7 +49,7 @@ describe('a tool return while the mail server is down', () => {
     ]);
     expect((await qm.agent.get(`/api/tools/${code}`)).body.status).toBe('held');
 
-    later(MINUTE);
+    later(MINUTE_MS);
     expect(await t.deliverMail()).toEqual({ sent: 1, retrying: 0, failed: 0 });
     expect(rows()[0]).toMatchObject({ state: 'sent', sentAt: t.clock.now });
     expect((await t.lastMailTo('qm@example.org'))?.subject).toBe(`${code} Torque wrench is back and held for you`);
@@ -65,14 +65,14 @@ describe('a tool return while the mail server is down', () => {
 
 describe('deliverDueMail', () => {
   it('waits 1, 2, 4, 8 … minutes after each failure and sends nothing before the time', async () => {
-    expect([1, 2, 3, 4, 5].map(retryDelayMs)).toEqual([1, 2, 4, 8, 16].map((n) => n * MINUTE));
-    expect(retryDelayMs(20)).toBe(60 * MINUTE);
+    expect([1, 2, 3, 4, 5].map(retryDelayMs)).toEqual([1, 2, 4, 8, 16].map((n) => n * MINUTE_MS));
+    expect(retryDelayMs(20)).toBe(60 * MINUTE_MS);
     oneMessage();
     const down = refusingMailer();
     for (const [attempt, wait] of [[1, 1], [2, 2], [3, 4]] as const) {
       await t.deliverMail(down);
-      expect(rows()[0]).toMatchObject({ state: 'waiting', attempts: attempt, nextAttemptAt: new Date(t.clock.now.getTime() + wait * MINUTE) });
-      later(wait * MINUTE - 1000);
+      expect(rows()[0]).toMatchObject({ state: 'waiting', attempts: attempt, nextAttemptAt: new Date(t.clock.now.getTime() + wait * MINUTE_MS) });
+      later(wait * MINUTE_MS - 1000);
       expect(await t.deliverMail(down)).toEqual({ sent: 0, retrying: 0, failed: 0 });
       later(1000);
     }
@@ -84,11 +84,11 @@ describe('deliverDueMail', () => {
     const down = refusingMailer();
     for (let i = 1; i < OUTBOX_MAX_ATTEMPTS; i++) {
       expect(await t.deliverMail(down)).toEqual({ sent: 0, retrying: 1, failed: 0 });
-      later(2 * 60 * MINUTE);
+      later(2 * 60 * MINUTE_MS);
     }
     expect(await t.deliverMail(down)).toEqual({ sent: 0, retrying: 0, failed: 1 });
     expect(rows()[0]).toMatchObject({ state: 'failed', attempts: OUTBOX_MAX_ATTEMPTS, lastError: 'connect ECONNREFUSED 127.0.0.1:25', sentAt: null });
-    later(24 * 60 * MINUTE);
+    later(24 * 60 * MINUTE_MS);
     expect(await t.deliverMail()).toEqual({ sent: 0, retrying: 0, failed: 0 });
     expect(down.offered).toHaveLength(OUTBOX_MAX_ATTEMPTS);
   });

@@ -1,3 +1,4 @@
+import { HOUR_MS } from '@shared/time/durations';
 import { claimAccountToken, countTokensSince, insertAccountToken, revokeOpenTokens } from '../../accounts/account-tokens.repo';
 import { linkUrl, openLinkToken } from '../../accounts/link-token.service';
 import { hashLinkToken, LINK_PAGES, newLinkToken } from '../../accounts/link-tokens';
@@ -9,11 +10,10 @@ import { endSessionsOf } from '../../lib/session-helpers';
 import { passwordResetMail } from '../../mail/messages';
 import { queueMail } from '../../mail/outbox';
 
-export const RESET_LIFETIME_MS = 60 * 60 * 1000;
+export const RESET_LIFETIME_MS = HOUR_MS;
 
 /** More requests for one address within the hour are answered alike and queue nothing. */
 export const RESETS_PER_HOUR = 3;
-const HOUR_MS = 60 * 60 * 1000;
 
 /**
  * Writes a reset link for an active account to the outbox; says nothing about whether the address

@@ -48,12 +48,18 @@ export function findBinById(db: Executor, id: number): BinRow | undefined {
   return db.select().from(bins).where(eq(bins.id, id)).get();
 }
 
-export function insertBin(db: Executor, values: NewBinRow): BinRow {
-  return db.insert(bins).values(values).returning().get();
-}
-
 export function updateBin(db: Executor, id: number, values: Partial<NewBinRow>): BinRow {
   return db.update(bins).set(values).where(eq(bins.id, id)).returning().get();
+}
+
+/** Rows per INSERT: well under SQLite's limit of 32,766 bound values at some 25 columns a row. */
+const INSERT_BATCH = 200;
+
+/** New bins, many rows per statement (an import writes thousands inside one transaction); rows come back in order. */
+export function insertBins(db: Executor, values: readonly NewBinRow[]): BinRow[] {
+  const rows: BinRow[] = [];
+  for (let i = 0; i < values.length; i += INSERT_BATCH) rows.push(...db.insert(bins).values(values.slice(i, i + INSERT_BATCH)).returning().all());
+  return rows;
 }
 
 /** The next free bin code: one more than the highest B-number in use, four digits at least. */
@@ -113,7 +119,9 @@ export function lastCountedAt(db: Database, binIds: readonly number[]): Map<numb
 }
 
 /** Other bins holding exactly the same thing (kind, spec and, for non-rivets, name): where stock may move. */
-export function sameSpecBins(db: Database, bin: BinRow): BinRow[] {
+export type BinSpec = Pick<BinRow, 'id' | 'kind' | 'head' | 'material' | 'stemMaterial' | 'diameter32' | 'grip16' | 'length16' | 'drillSize' | 'name'>;
+
+export function sameSpecBins(db: Database, bin: BinSpec): BinRow[] {
   const { id, kind, head, material, stemMaterial, diameter32, grip16, length16, drillSize, name } = bin;
   return binStatements(db).sameSpec.all({ id, kind, head, material, stemMaterial, diameter32, grip16, length16, drillSize, name });
 }

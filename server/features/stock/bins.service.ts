@@ -8,9 +8,9 @@ import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { parseInput } from '../../lib/validate';
 import { orderQuantity, toBinDto } from './bin-dto';
-import { findBinByCode, insertBin, lastCountedAt, listBins, listLowBins, nextBinCode, sameSpecBins, updateBin, type NewBinRow } from './bins.repo';
+import { findBinByCode, insertBins, lastCountedAt, listBins, listLowBins, nextBinCode, sameSpecBins, updateBin, type NewBinRow } from './bins.repo';
 import { binOrThrow } from './ledger.service';
-import { insertMovement, netDrawnBy } from './ledger.repo';
+import { insertMovements, netDrawnBy } from './ledger.repo';
 import { dollarsToE4, valueCents } from '@shared/stock/money';
 
 function withCounts(ctx: ServiceContext, rows: BinRow[]): Bin[] {
@@ -60,20 +60,36 @@ export function createBin(ctx: ServiceContext, actor: UserRow, input: CreateBinI
   return getBin(ctx, insertNewBin(ctx, actor, input).code);
 }
 
-/** Writes a new bin and its opening stock, and returns the row (an import needs no more than its code). */
+/** Writes a new bin and its opening stock, and returns the row. */
 export function insertNewBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): BinRow {
-  const at = ctx.now();
   return ctx.db.$client
     .transaction(() => {
       const code = input.code ?? nextBinCode(ctx.db);
       if (findBinByCode(ctx.db, code)) throw codeTaken(code);
-      const bin = insertBin(ctx.db, { ...(rowValues(input) as NewBinRow), code, name: input.name, createdAt: at, updatedAt: at, onHand: input.initialQuantity });
-      if (input.initialQuantity > 0) {
-        insertMovement(ctx.db, { binId: bin.id, kind: 'receive', quantity: input.initialQuantity, balanceAfter: input.initialQuantity, unitCostE4: bin.unitCostE4, at, actorId: actor.id, note: 'Opening stock' });
-      }
-      return bin;
+      return writeNewBins(ctx, actor, [{ ...input, code }], ctx.now())[0]!;
     })
     .immediate();
+}
+
+/**
+ * Writes new bins, codes given, inside the caller's transaction: each one's opening stock is its
+ * first ledger entry, so on hand is the ledger's sum from the start. Rows come back in input order.
+ */
+export function writeNewBins(ctx: ServiceContext, actor: UserRow, inputs: readonly (CreateBinInput & { code: string })[], at: Date): BinRow[] {
+  const rows = insertBins(
+    ctx.db,
+    inputs.map((input) => ({ ...(rowValues(input) as NewBinRow), code: input.code, name: input.name, createdAt: at, updatedAt: at, onHand: input.initialQuantity })),
+  );
+  insertMovements(
+    ctx.db,
+    rows.flatMap((bin) => (bin.onHand > 0 ? [{ binId: bin.id, kind: 'receive' as const, quantity: bin.onHand, balanceAfter: bin.onHand, unitCostE4: bin.unitCostE4, at, actorId: actor.id, note: 'Opening stock' }] : [])),
+  );
+  return rows;
+}
+
+/** Sets a bin's descriptive fields (the import's update); on hand is not among them. Inside the caller's transaction. */
+export function writeBinFields(ctx: ServiceContext, id: number, fields: Partial<CreateBinInput>, at: Date): void {
+  updateBin(ctx.db, id, { ...rowValues(fields), updatedAt: at });
 }
 
 /** Changes the fields sent; on hand changes only through the ledger. The result must still be a valid bin of its kind. */

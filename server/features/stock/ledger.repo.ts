@@ -13,6 +13,14 @@ export function insertMovement(db: Executor, values: NewMovementRow): MovementRo
   return db.insert(stockMovements).values(values).returning().get();
 }
 
+/** Rows per INSERT, well under SQLite's limit of bound values. */
+const INSERT_BATCH = 500;
+
+/** Many entries at once (the opening stock of an import's new bins), many rows per statement. */
+export function insertMovements(db: Executor, values: readonly NewMovementRow[]): void {
+  for (let i = 0; i < values.length; i += INSERT_BATCH) db.insert(stockMovements).values(values.slice(i, i + INSERT_BATCH)).run();
+}
+
 /** Who owns the build an assembly belongs to; undefined when there is no such assembly. */
 export function assemblyOwnerId(db: Executor, assemblyId: number): number | undefined {
   return db.select({ ownerId: builds.ownerId }).from(assemblies).innerJoin(builds, eq(builds.id, assemblies.buildId)).where(eq(assemblies.id, assemblyId)).get()?.ownerId;

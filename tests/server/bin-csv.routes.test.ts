@@ -110,6 +110,17 @@ describe('POST /api/bins/import/preview', () => {
     expect(odd.canImport).toBe(false);
   });
 
+  it('numbers the lines of a long file right, with quoted cells over two lines all through it', async () => {
+    // Long enough to be read in several pieces; every note spans two lines, so bin k starts on line 2 + 2k.
+    const rows = Array.from({ length: 1200 }, (_, k) => `,screw,"Screw #8-32 × ${k + 1}/64, ""pan"" head",,,,,,,each,50,${k === 777 ? 'cheap' : '0.09'},"Top shelf,\nleft bin ${k}",10`);
+    const preview = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: csvOf(...rows) })).body);
+    expect(csvOf(...rows).length).toBeGreaterThan(100_000);
+    expect(preview.rows).toHaveLength(1200);
+    expect(preview.rows.every((r, k) => r.line === 2 + 2 * k)).toBe(true);
+    expect(preview.rows[1199]!.designation).toBe('Screw #8-32 × 1200/64, "pan" head');
+    expect(preview.rows[777]!.errors).toEqual([{ column: 'unit_cost', message: 'Line 1556, unit_cost: enter a number, not "cheap".' }]);
+  });
+
   it('takes a file larger than the API’s usual body limit, refuses one over 2 MB, and is for the quartermaster only', async () => {
     const many = csvOf(...Array.from({ length: 1500 }, (_, i) => `,screw,Screw #8-32 × ${i + 1}/16 pan head stainless,,,,,,,each,50,0.09,,10`));
     expect(many.length).toBeGreaterThan(100_000);
@@ -335,6 +346,9 @@ describe('re-importing bins by code', () => {
     ]);
     expect(preview.counts).toEqual({ new: 0, update: 0, unchanged: 2, problem: 0 });
     expect(preview.canImport).toBe(false);
+    const res2 = await post(qm, '/api/bins/import', { csv });
+    expect(res2.status).toBe(409);
+    expect(errorEnvelopeSchema.parse(res2.body).error).toEqual({ code: 'NOTHING_TO_IMPORT', message: 'Nothing was imported: every row of the file already matches its bin.' });
     expect((await qm.agent.get('/api/bins')).body.data).toEqual(before);
   });
 

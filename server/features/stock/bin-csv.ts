@@ -1,5 +1,6 @@
 import Papa from 'papaparse';
 import { guardText, type CsvCell } from '../../lib/csv';
+import { slicePauser } from '../../lib/event-loop';
 import { MAX_IMPORT_ROWS, type ImportProblem } from '@shared/schemas/bin-import';
 import { createBinBodySchema, type CreateBinInput } from '@shared/schemas/bins';
 import { BIN_KIND_LABELS, BIN_KINDS, RIVET_HEAD_LABELS, RIVET_HEADS, RIVET_MATERIALS, STEM_MATERIALS } from '@shared/stock/kinds';
@@ -51,7 +52,7 @@ export const isNumericColumn = (c: BinColumn) => ['number', 'money', 'dash', 'di
 /** A field's value as a bins CSV writes it: numbers as numbers, text guarded against formulas, nothing as empty. */
 export function binCell(column: BinColumn, value: unknown): CsvCell {
   if (isNumericColumn(column)) return typeof value === 'number' ? value : null;
-  return value === null || value === undefined || value === '' ? null : guardText(String(value));
+  return typeof value === 'string' || typeof value === 'number' ? (value === '' ? null : guardText(String(value))) : null;
 }
 
 const COLUMN_BY_NAME = new Map(BIN_COLUMNS.map((c) => [c.name, c]));
@@ -202,31 +203,64 @@ function delimiterOf(text: string): string {
   return [',', ';', '\t'].reduce((best, d) => (header.split(d).length > header.split(best).length ? d : best), ',');
 }
 
-/** Splits a bins CSV into lines: the first non-blank line is the header, every other non-blank line a bin. */
-export function parseBinCsv(csv: string): ParsedCsv {
+/** Characters parsed between two pauses for other requests (some 250 lines of a bins CSV). */
+const PIECE_CHARS = 32_000;
+
+/**
+ * Cuts CSV text into pieces of about `size` characters, each ending with a line break outside any
+ * quoted cell (a quote toggles quoting; a doubled quote toggles twice), so each piece holds whole
+ * records and parses on its own.
+ */
+export function splitAtRecordEnds(text: string, size: number): string[] {
+  const pieces: string[] = [];
+  let start = 0;
+  let quoted = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c === 34) quoted = !quoted;
+    else if (c === 10 && !quoted && i + 1 - start >= size) {
+      pieces.push(text.slice(start, i + 1));
+      start = i + 1;
+    }
+  }
+  if (start < text.length) pieces.push(text.slice(start));
+  return pieces;
+}
+
+/**
+ * Splits a bins CSV into lines: the first non-blank line is the header, every other non-blank line
+ * a bin. A piece at a time, pausing for other requests between pieces.
+ */
+export async function parseBinCsv(csv: string): Promise<ParsedCsv> {
   const text = csv.replace(/^\uFEFF/, '');
   const empty = { columns: [], records: [] };
   if (text.trim() === '') return { ...empty, fileErrors: [fileProblem('The file is empty: it needs a header line of column names and one line per bin.')] };
 
   const records: CsvRecord[] = [];
-  let pos = 0;
+  const delimiter = delimiterOf(text);
+  const pause = slicePauser();
   let line = 1;
   let tooMany = false;
-  Papa.parse<string[]>(text, {
-    delimiter: delimiterOf(text),
-    step: (step, parser) => {
-      const start = line;
-      line += text.slice(pos, step.meta.cursor).split('\n').length - 1;
-      pos = step.meta.cursor;
-      if (step.data.every((c) => c.trim() === '')) return;
-      if (records.length > MAX_IMPORT_ROWS) {
-        tooMany = true;
-        return parser.abort();
-      }
-      records.push({ line: start, cells: step.data, damage: step.errors[0]?.message });
-    },
-  });
-  if (tooMany) return { ...empty, fileErrors: [fileProblem(`The file has more than ${MAX_IMPORT_ROWS} bins. Split it into smaller files.`)] };
+  for (const piece of splitAtRecordEnds(text, PIECE_CHARS)) {
+    let pos = 0;
+    Papa.parse<string[]>(piece, {
+      delimiter,
+      step: (step, parser) => {
+        const start = line;
+        line += piece.slice(pos, step.meta.cursor).split('\n').length - 1;
+        pos = step.meta.cursor;
+        if (step.data.every((c) => c.trim() === '')) return;
+        if (records.length > MAX_IMPORT_ROWS) {
+          tooMany = true;
+          return parser.abort();
+        }
+        records.push({ line: start, cells: step.data, damage: step.errors[0]?.message });
+      },
+    });
+    if (tooMany) return { ...empty, fileErrors: [fileProblem(`The file has more than ${MAX_IMPORT_ROWS} bins. Split it into smaller files.`)] };
+    line += piece.slice(pos).split('\n').length - 1;
+    await pause();
+  }
 
   const [header, ...data] = records;
   const columns = header!.cells.map(normalizeHeader);

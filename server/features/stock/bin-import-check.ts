@@ -41,7 +41,7 @@ export function descriptiveFields(row: BinRow): Record<string, unknown> {
   return Object.fromEntries(DESCRIPTIVE_COLUMNS.map((c) => [c.field, dto[c.field as keyof Bin]]));
 }
 
-const shown = (value: unknown) => (value === null || value === undefined ? '' : String(value));
+const shown = (value: unknown) => (typeof value === 'string' || typeof value === 'number' ? String(value) : '');
 const same = (type: string, a: unknown, b: unknown) =>
   type === 'money' && typeof a === 'number' && typeof b === 'number' ? dollarsToE4(a) === dollarsToE4(b) : (a ?? null) === (b ?? null);
 
@@ -149,7 +149,7 @@ export function assignCodes(db: Database, rows: readonly CheckedRow[], inUse: (c
  * the server keeps answering other requests. Writes nothing.
  */
 export async function checkBinFile(ctx: ServiceContext, csv: string): Promise<CheckedFile> {
-  const parsed = parseBinCsv(csv);
+  const parsed = await parseBinCsv(csv);
   const existing = new Map(listBins(ctx.db, ALL_BINS).rows.map((b) => [b.code, b]));
   const setFields = fieldsOfColumns(parsed.columns);
   const rows = await mapInSlices(parsed.records, (record) => checkRow(ctx.db, existing, setFields, readBinRow(parsed.columns, record)));

@@ -4,10 +4,11 @@ import type { ServiceContext } from '../../context';
 import type { BinRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
-import { ALL_BINS, assignCodes, checkBinFile, descriptiveFields, type CheckedFile, type CheckedRow } from './bin-import-check';
+import { mapInSlices } from '../../lib/event-loop';
+import { ALL_BINS, assignCodes, checkBinFile, type CheckedFile, type CheckedRow } from './bin-import-check';
 import { DESCRIPTIVE_COLUMNS } from './bin-csv';
-import { listBins } from './bins.repo';
-import { writeBinFields, writeNewBins } from './bins.service';
+import { listBins, type NewBinRow } from './bins.repo';
+import { binFieldsRow, newBinRow, writeBinFields, writeNewBins } from './bins.service';
 
 /** At most this many problems travel in a refused import's envelope; the message gives the full count. */
 const MAX_ISSUES = 100;
@@ -42,32 +43,43 @@ const changedMeanwhile = (row: CheckedRow) =>
 
 const descriptive = (input: CreateBinInput) => Object.fromEntries(DESCRIPTIVE_COLUMNS.map((c) => [c.field, input[c.field]]));
 
+/** Columns an import never writes: the key, the stock and the times. */
+const NOT_DESCRIPTIVE = new Set(['id', 'onHand', 'createdAt', 'updatedAt']);
+const sameDescription = (a: BinRow, b: BinRow) => (Object.keys(a) as (keyof BinRow)[]).every((k) => NOT_DESCRIPTIVE.has(k) || a[k] === b[k]);
+
+/** A checked row with what it will write, worked out before the transaction so that stays short. */
+interface PlannedRow extends CheckedRow {
+  newRow?: NewBinRow;
+  set?: Partial<NewBinRow>;
+}
+
 /**
- * Writes the checked file in one transaction: every new bin and every update, or nothing. The
- * slow part (reading and checking each row) ran before, a slice at a time; here the file's bins are
- * read again and must be as they were then, so the transaction is short and nothing is lost.
+ * Writes the planned file in one transaction: every new bin and every update, or nothing. The slow
+ * part (reading, checking and mapping each row) ran before, a slice at a time; here the file's bins
+ * are read again and must be as they were then, so the transaction is short and nothing is lost.
  */
-function writeImport(ctx: ServiceContext, actor: UserRow, file: CheckedFile): ImportResult {
+function writeImport(ctx: ServiceContext, actor: UserRow, planned: readonly PlannedRow[]): ImportResult {
   const now = new Map(listBins(ctx.db, ALL_BINS).rows.map((b) => [b.code, b]));
-  const fingerprint = (row: BinRow) => JSON.stringify(descriptiveFields(row));
   const hasWrittenCode = (r: CheckedRow) => r.status !== 'new' || r.input?.code !== undefined;
-  for (const row of file.rows) {
+  for (const row of planned) {
     const current = now.get(row.code);
-    const stale = row.before ? !current || fingerprint(current) !== fingerprint(row.before) : hasWrittenCode(row) && current !== undefined;
+    const stale = row.before ? !current || !sameDescription(current, row.before) : hasWrittenCode(row) && current !== undefined;
     if (stale) throw changedMeanwhile(row);
   }
-  const at = ctx.now();
   // The free codes were picked against the bins as they were; pick them again against the bins as they are.
-  const rows = assignCodes(ctx.db, file.rows.map((r) => (hasWrittenCode(r) ? r : { ...r, code: '' })), (code) => now.has(code));
-  const created = writeNewBins(
+  const rows = assignCodes(ctx.db, planned.map((r) => (hasWrittenCode(r) ? r : { ...r, code: '' })), (code) => now.has(code));
+  const created = rows.filter((r) => r.status === 'new');
+  writeNewBins(
     ctx,
     actor,
-    rows.flatMap((r) => (r.status === 'new' ? [{ ...r.input!, code: r.code }] : [])),
-    at,
-  ).map((b) => b.code);
-  const updated = rows.filter((r) => r.status === 'update');
-  for (const row of updated) writeBinFields(ctx, row.before!.id, descriptive(row.input!), at);
-  return { created, updated: updated.map((r) => r.code), unchanged: rows.filter((r) => r.status === 'unchanged').length };
+    created.map((r) => ({ ...(r as PlannedRow).newRow!, code: r.code })),
+  );
+  const updated = planned.filter((r) => r.status === 'update');
+  writeBinFields(
+    ctx,
+    updated.map((r) => ({ id: r.before!.id, set: r.set! })),
+  );
+  return { created: created.map((r) => r.code), updated: updated.map((r) => r.code), unchanged: rows.filter((r) => r.status === 'unchanged').length };
 }
 
 /** Creates and updates every bin of the file, or none: see `writeImport`. */
@@ -75,5 +87,11 @@ export async function commitImport(ctx: ServiceContext, actor: UserRow, csv: str
   const file = await checkBinFile(ctx, csv);
   const preview = toPreview(file);
   if (!preview.canImport) throw refusal(preview);
-  return ctx.db.$client.transaction(() => writeImport(ctx, actor, file)).immediate();
+  const at = ctx.now();
+  const planned = await mapInSlices(file.rows, (row): PlannedRow => {
+    if (row.status === 'new') return { ...row, newRow: newBinRow(row.input!, at) };
+    if (row.status === 'update') return { ...row, set: binFieldsRow(descriptive(row.input!), at) };
+    return row;
+  });
+  return ctx.db.$client.transaction(() => writeImport(ctx, actor, planned)).immediate();
 }

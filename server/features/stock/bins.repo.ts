@@ -1,6 +1,7 @@
 import { and, asc, count, eq, like, lte, max, ne, or, sql, type SQL } from 'drizzle-orm';
 import type { BinListQuery } from '@shared/schemas/bins';
 import type { Database, Executor } from '../../db/client';
+import { insertRows, updateRowsById } from '../../db/bulk-write';
 import { preparedPerDatabase } from '../../db/prepared';
 import { bins, stockMovements, type BinRow } from '../../db/schema/stock';
 
@@ -52,14 +53,14 @@ export function updateBin(db: Executor, id: number, values: Partial<NewBinRow>):
   return db.update(bins).set(values).where(eq(bins.id, id)).returning().get();
 }
 
-/** Rows per INSERT: well under SQLite's limit of 32,766 bound values at some 25 columns a row. */
-const INSERT_BATCH = 200;
+/** New bins in one go (an import writes thousands inside one transaction); answers their ids in order. */
+export function insertBins(db: Database, values: readonly NewBinRow[]): number[] {
+  return insertRows(db, bins, values);
+}
 
-/** New bins, many rows per statement (an import writes thousands inside one transaction); rows come back in order. */
-export function insertBins(db: Executor, values: readonly NewBinRow[]): BinRow[] {
-  const rows: BinRow[] = [];
-  for (let i = 0; i < values.length; i += INSERT_BATCH) rows.push(...db.insert(bins).values(values.slice(i, i + INSERT_BATCH)).returning().all());
-  return rows;
+/** Sets the same fields on many bins by id. */
+export function updateBins(db: Database, changes: readonly { id: number; set: Partial<NewBinRow> }[]): void {
+  updateRowsById(db, bins, changes);
 }
 
 /** The next free bin code: one more than the highest B-number in use, four digits at least. */

@@ -8,7 +8,7 @@ import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { parseInput } from '../../lib/validate';
 import { orderQuantity, toBinDto } from './bin-dto';
-import { findBinByCode, insertBins, lastCountedAt, listBins, listLowBins, nextBinCode, sameSpecBins, updateBin, type NewBinRow } from './bins.repo';
+import { findBinByCode, insertBins, lastCountedAt, listBins, listLowBins, nextBinCode, sameSpecBins, updateBin, updateBins, type NewBinRow } from './bins.repo';
 import { binOrThrow } from './ledger.service';
 import { insertMovements, netDrawnBy } from './ledger.repo';
 import { dollarsToE4, valueCents } from '@shared/stock/money';
@@ -57,39 +57,50 @@ const codeTaken = (code: string) =>
 
 /** A new bin; opening stock becomes its first ledger entry, so on hand is the ledger's sum from the start. */
 export function createBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): Bin {
-  return getBin(ctx, insertNewBin(ctx, actor, input).code);
+  return getBin(ctx, insertNewBin(ctx, actor, input));
 }
 
-/** Writes a new bin and its opening stock, and returns the row. */
-export function insertNewBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): BinRow {
+/** Writes a new bin and its opening stock, and answers its code. */
+export function insertNewBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): string {
   return ctx.db.$client
     .transaction(() => {
       const code = input.code ?? nextBinCode(ctx.db);
       if (findBinByCode(ctx.db, code)) throw codeTaken(code);
-      return writeNewBins(ctx, actor, [{ ...input, code }], ctx.now())[0]!;
+      writeNewBins(ctx, actor, [{ ...newBinRow(input, ctx.now()), code }]);
+      return code;
     })
     .immediate();
 }
 
-/**
- * Writes new bins, codes given, inside the caller's transaction: each one's opening stock is its
- * first ledger entry, so on hand is the ledger's sum from the start. Rows come back in input order.
- */
-export function writeNewBins(ctx: ServiceContext, actor: UserRow, inputs: readonly (CreateBinInput & { code: string })[], at: Date): BinRow[] {
-  const rows = insertBins(
-    ctx.db,
-    inputs.map((input) => ({ ...(rowValues(input) as NewBinRow), code: input.code, name: input.name, createdAt: at, updatedAt: at, onHand: input.initialQuantity })),
-  );
-  insertMovements(
-    ctx.db,
-    rows.flatMap((bin) => (bin.onHand > 0 ? [{ binId: bin.id, kind: 'receive' as const, quantity: bin.onHand, balanceAfter: bin.onHand, unitCostE4: bin.unitCostE4, at, actorId: actor.id, note: 'Opening stock' }] : [])),
-  );
-  return rows;
+/** A new bin as it is written: stock on hand is its opening stock. The code is set before writing. */
+export function newBinRow(input: CreateBinInput, at: Date): NewBinRow {
+  return { ...(rowValues(input) as NewBinRow), code: input.code ?? '', name: input.name, createdAt: at, updatedAt: at, onHand: input.initialQuantity };
 }
 
-/** Sets a bin's descriptive fields (the import's update); on hand is not among them. Inside the caller's transaction. */
-export function writeBinFields(ctx: ServiceContext, id: number, fields: Partial<CreateBinInput>, at: Date): void {
-  updateBin(ctx.db, id, { ...rowValues(fields), updatedAt: at });
+/**
+ * Writes new bins (rows from `newBinRow`, codes set) inside the caller's transaction: each one's
+ * opening stock is its first ledger entry, so on hand is the ledger's sum from the start.
+ */
+export function writeNewBins(ctx: ServiceContext, actor: UserRow, rows: readonly NewBinRow[]): void {
+  const ids = insertBins(ctx.db, rows);
+  insertMovements(
+    ctx.db,
+    rows.flatMap((bin, i) => {
+      const quantity = bin.onHand ?? 0;
+      const at = bin.createdAt ?? ctx.now();
+      return quantity > 0 ? [{ binId: ids[i]!, kind: 'receive' as const, quantity, balanceAfter: quantity, unitCostE4: bin.unitCostE4 ?? 0, at, actorId: actor.id, note: 'Opening stock' }] : [];
+    }),
+  );
+}
+
+/** What an update of a bin's descriptive fields writes (on hand is never among them). */
+export function binFieldsRow(fields: Partial<CreateBinInput>, at: Date): Partial<NewBinRow> {
+  return { ...rowValues(fields), updatedAt: at };
+}
+
+/** Writes many bins' changed fields (rows from `binFieldsRow`), inside the caller's transaction. */
+export function writeBinFields(ctx: ServiceContext, changes: readonly { id: number; set: Partial<NewBinRow> }[]): void {
+  updateBins(ctx.db, changes);
 }
 
 /** Changes the fields sent; on hand changes only through the ledger. The result must still be a valid bin of its kind. */

@@ -1,6 +1,7 @@
 import { and, desc, eq, gte, lt, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
 import type { Database, Executor } from '../../db/client';
+import { insertRows } from '../../db/bulk-write';
 import { preparedPerDatabase } from '../../db/prepared';
 import { binAlerts } from '../../db/schema/builds';
 import { assemblies, builds } from '../../db/schema/builds';
@@ -13,12 +14,9 @@ export function insertMovement(db: Executor, values: NewMovementRow): MovementRo
   return db.insert(stockMovements).values(values).returning().get();
 }
 
-/** Rows per INSERT, well under SQLite's limit of bound values. */
-const INSERT_BATCH = 500;
-
-/** Many entries at once (the opening stock of an import's new bins), many rows per statement. */
-export function insertMovements(db: Executor, values: readonly NewMovementRow[]): void {
-  for (let i = 0; i < values.length; i += INSERT_BATCH) db.insert(stockMovements).values(values.slice(i, i + INSERT_BATCH)).run();
+/** Many entries at once (the opening stock of an import's new bins). */
+export function insertMovements(db: Database, values: readonly NewMovementRow[]): void {
+  insertRows(db, stockMovements, values);
 }
 
 /** Who owns the build an assembly belongs to; undefined when there is no such assembly. */

@@ -60,9 +60,12 @@ export async function healthLatenciesDuring<T>(base: string, work: () => Promise
       await sleep(POLL_GAP_MS);
     }
   })();
-  const result = await running;
-  await polling;
-  return { result, latencies };
+  try {
+    return { result: await running, latencies };
+  } finally {
+    // The polling stops once the work settles, also when it failed; its own failure shows in the latencies' absence.
+    await polling.catch(() => undefined);
+  }
 }
 
 /** A bins CSV of `count` new screws, each its own name (no two the same bin). */

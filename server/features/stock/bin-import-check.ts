@@ -9,7 +9,7 @@ import type { BinRow } from '../../db/schema/stock';
 import { mapInSlices } from '../../lib/event-loop';
 import { toBinDto } from './bin-dto';
 import { binFromValues, DESCRIPTIVE_COLUMNS, fieldsOfColumns, parseBinCsv, problem, readBinRow, type ReadRow } from './bin-csv';
-import { listBins, nextBinCode, sameSpecBins } from './bins.repo';
+import { listBins, nextBinCode, sameSpecBins, type BinSpec } from './bins.repo';
 
 export const ALL_BINS: BinListQuery = { page: 1, pageSize: Number.MAX_SAFE_INTEGER };
 
@@ -55,7 +55,22 @@ function changesBetween(before: Record<string, unknown>, after: CreateBinInput):
 /** The fields that say what a bin holds; changing one may make it the twin of another bin. */
 const SPEC_COLUMNS = new Set(['kind', 'name', 'head', 'material', 'stem_material', 'diameter_32nds', 'grip_dash', 'length_16ths', 'drill_size']);
 
-function sameSpecWarnings(db: Database, line: number, bin: CreateBinInput, id = -1): ImportProblem[] {
+/**
+ * Which existing bins could hold the same thing as a row: equal in every spec column, and in the
+ * name folded to lower case. The rule itself is `sameSpecBins` (SQL); this key is looser (it folds
+ * more than SQLite's lower()), so a row with no candidate needs no query: 5,000 new screws against
+ * 5,000 in the crib take one query each only where a name is already there.
+ */
+type SpecKeyed = Pick<BinSpec, 'kind' | 'head' | 'material' | 'stemMaterial' | 'diameter32' | 'grip16' | 'length16' | 'drillSize' | 'name'>;
+const candidateKey = (b: SpecKeyed) => JSON.stringify([b.kind, b.head, b.material, b.stemMaterial, b.diameter32, b.grip16, b.length16, b.drillSize, b.diameter32 === null ? b.name.toLowerCase() : '']);
+
+interface Crib {
+  byCode: ReadonlyMap<string, BinRow>;
+  candidates: ReadonlySet<string>;
+}
+
+function sameSpecWarnings(db: Database, crib: Crib, line: number, bin: CreateBinInput, id = -1): ImportProblem[] {
+  if (!crib.candidates.has(candidateKey(bin))) return [];
   const twins = sameSpecBins(db, { ...bin, id });
   if (twins.length === 0) return [];
   const codes = twins.slice(0, 3).map((b) => b.code);
@@ -86,12 +101,12 @@ const problemRow = (row: ReadRow, errors: ImportProblem[]): CheckedRow => ({
  * (an empty cell clears the field, as it would on a new bin), the others keep theirs, and the result
  * must still be a valid bin. Stock never changes here: on hand moves only through the ledger.
  */
-function checkRow(db: Database, existing: ReadonlyMap<string, BinRow>, setFields: readonly string[], row: ReadRow): CheckedRow {
-  const before = row.code ? existing.get(row.code) : undefined;
+function checkRow(db: Database, crib: Crib, setFields: readonly string[], row: ReadRow): CheckedRow {
+  const before = row.code ? crib.byCode.get(row.code) : undefined;
   if (!before) {
     const { input, errors } = binFromValues(row, row.values);
     if (!input) return problemRow(row, errors);
-    return { line: row.line, code: row.code, status: 'new', designation: binDesignation(input), input, changes: [], warnings: sameSpecWarnings(db, row.line, input), errors: [] };
+    return { line: row.line, code: row.code, status: 'new', designation: binDesignation(input), input, changes: [], warnings: sameSpecWarnings(db, crib, row.line, input), errors: [] };
   }
   const current = descriptiveFields(before);
   const kept = Object.fromEntries(Object.entries(current).filter(([field]) => !setFields.includes(field)));
@@ -103,7 +118,7 @@ function checkRow(db: Database, existing: ReadonlyMap<string, BinRow>, setFields
     return problemRow(row, [problem(row.line, 'kind', `${row.code} is a bin of ${kind(before.kind)}, not ${kind(input.kind)}. Leave the code empty to add a new bin, or keep the bin's kind.`)]);
   }
   const changes = changesBetween(current, input);
-  const twins = changes.some((c) => SPEC_COLUMNS.has(c.column)) ? sameSpecWarnings(db, row.line, input, before.id) : [];
+  const twins = changes.some((c) => SPEC_COLUMNS.has(c.column)) ? sameSpecWarnings(db, crib, row.line, input, before.id) : [];
   return {
     line: row.line,
     code: row.code,
@@ -150,9 +165,10 @@ export function assignCodes(db: Database, rows: readonly CheckedRow[], inUse: (c
  */
 export async function checkBinFile(ctx: ServiceContext, csv: string): Promise<CheckedFile> {
   const parsed = await parseBinCsv(csv);
-  const existing = new Map(listBins(ctx.db, ALL_BINS).rows.map((b) => [b.code, b]));
+  const bins = listBins(ctx.db, ALL_BINS).rows;
+  const crib: Crib = { byCode: new Map(bins.map((b) => [b.code, b])), candidates: new Set(bins.map(candidateKey)) };
   const setFields = fieldsOfColumns(parsed.columns);
-  const rows = await mapInSlices(parsed.records, (record) => checkRow(ctx.db, existing, setFields, readBinRow(parsed.columns, record)));
+  const rows = await mapInSlices(parsed.records, (record) => checkRow(ctx.db, crib, setFields, readBinRow(parsed.columns, record)));
   refuseRepeatedCodes(rows);
-  return { columns: parsed.columns, fileErrors: parsed.fileErrors, rows: assignCodes(ctx.db, rows, (code) => existing.has(code)) };
+  return { columns: parsed.columns, fileErrors: parsed.fileErrors, rows: assignCodes(ctx.db, rows, (code) => crib.byCode.has(code)) };
 }

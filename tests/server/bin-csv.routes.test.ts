@@ -387,6 +387,8 @@ describe('re-importing bins by code', () => {
 
   it('keeps the values of columns the file leaves out, and checks the updated bin as a whole', async () => {
     await twoBins();
+    const counted = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: 'code,kind,on_hand,opening_stock\r\nB-0001,blind_structural,480,500' })).body);
+    expect(counted.rows[0]).toMatchObject({ status: 'unchanged', warnings: [{ column: 'opening_stock', message: expect.stringContaining('the file says 500 on hand and the bin holds 480') }] });
     const moved = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: 'code,kind,location\r\nB-0001,blind_structural,Shelf C3\r\nB-0002,screw,Drawer C4' })).body);
     expect(moved.rows.map((r) => [r.status, r.changes])).toEqual([
       ['update', [{ column: 'location', from: 'Shelf A2', to: 'Shelf C3' }]],

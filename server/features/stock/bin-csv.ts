@@ -128,8 +128,8 @@ export interface ReadRow {
   /** Only the cells that hold something; a present column with an empty cell leaves its field out. */
   values: Record<string, unknown>;
   errors: ImportProblem[];
-  /** What the file says is on hand (the export's on_hand, else opening_stock), for a bin that exists already. */
-  statedOnHand?: { column: string; quantity: number };
+  /** What the file says is on hand (the export's on_hand and opening_stock), for a bin that exists already. */
+  statedOnHand: { column: string; quantity: number }[];
 }
 
 /** Reads one data line of the file into values by bin field, or into problems in words. */
@@ -149,14 +149,16 @@ export function readBinRow(columns: readonly string[], record: CsvRecord): ReadR
   const stray = cells.findIndex((c, i) => c.trim() !== '' && !columns[i]);
   if (stray >= 0) errors.push(problem(line, '', `cell ${stray + 1} has no column name in the header line. Name the column or clear the cell.`));
   if (damage) errors.push(problem(line, '', `the CSV is damaged here (${damage}). Check the quotes on this line.`));
-  const onHandColumn = ['on_hand', 'opening_stock'].find((c) => columns.includes(c) && toNumber(cellOf(c)) !== undefined);
   return {
     line,
     code: cellOf('code').toUpperCase(),
     name: cellOf('name'),
     values,
     errors,
-    statedOnHand: onHandColumn ? { column: onHandColumn, quantity: toNumber(cellOf(onHandColumn))! } : undefined,
+    statedOnHand: ['on_hand', 'opening_stock'].flatMap((column) => {
+      const quantity = columns.includes(column) ? toNumber(cellOf(column)) : undefined;
+      return quantity === undefined ? [] : [{ column, quantity }];
+    }),
   };
 }
 

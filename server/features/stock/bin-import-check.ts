@@ -79,8 +79,8 @@ function sameSpecWarnings(db: Database, crib: Crib, line: number, bin: CreateBin
 }
 
 function onHandWarnings(row: ReadRow, before: BinRow): ImportProblem[] {
-  const stated = row.statedOnHand;
-  if (!stated || stated.quantity === before.onHand) return [];
+  const stated = row.statedOnHand.find((s) => s.quantity !== before.onHand);
+  if (!stated) return [];
   return [
     problem(row.line, stated.column, `the file says ${stated.quantity} on hand and the bin holds ${before.onHand}. Stock moves only through the ledger, so this is ignored: count the bin to correct it.`),
   ];

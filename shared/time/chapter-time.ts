@@ -1,0 +1,96 @@
+import { tz } from '@date-fns/tz';
+import { addDays, differenceInCalendarDays, endOfDay, format, startOfDay } from 'date-fns';
+
+/**
+ * The chapter's calendar: every "day" Gripline speaks of (a due date, days late, today's digest)
+ * is a day on the chapter's wall clock, in its IANA time zone, whatever the server's or the
+ * viewer's zone. Results are plain Dates (instants); only the arithmetic happens in the zone.
+ */
+
+const instant = (d: Date): Date => new Date(d.getTime());
+const zoned = (zone: string) => ({ in: tz(zone) });
+
+/** The zone the server runs in, the chapter's default until a lead chooses one. */
+export const serverTimeZone = (): string => Intl.DateTimeFormat().resolvedOptions().timeZone;
+
+/** Whether the runtime knows this IANA zone name ("America/Denver" yes, "Mars/Base" no). */
+export function isTimeZone(zone: string): boolean {
+  try {
+    new Intl.DateTimeFormat('en-US', { timeZone: zone });
+    return zone.length > 0;
+  } catch {
+    return false;
+  }
+}
+
+/** The chapter day a moment falls on, as "2026-11-29". */
+export const chapterDay = (at: Date, zone: string): string => format(at, 'yyyy-MM-dd', zoned(zone));
+
+/** The first instant of the chapter day a moment falls on. */
+export const startOfChapterDay = (at: Date, zone: string): Date => instant(startOfDay(at, zoned(zone)));
+
+/** The last instant of the chapter day a moment falls on. */
+export const endOfChapterDay = (at: Date, zone: string): Date => instant(endOfDay(at, zoned(zone)));
+
+/** The same wall-clock time `days` calendar days later (or earlier) in the chapter. */
+export const addChapterDays = (at: Date, days: number, zone: string): Date => instant(addDays(at, days, zoned(zone)));
+
+/** Calendar days from one moment's chapter day to another's: Monday 23:00 → Tuesday 01:00 is 1. */
+export const chapterDaysBetween = (from: Date, to: Date, zone: string): number => differenceInCalendarDays(to, from, zoned(zone));
+
+/** The chapter's midnight starting a calendar day "2026-11-29". */
+export function startOfDayNamed(day: string, zone: string): Date {
+  const [y, m, d] = day.split('-').map(Number);
+  return instant(startOfDay(new Date(Date.UTC(y!, m! - 1, d, 12)), zoned(zone)));
+}
+
+/**
+ * When a loan is due back: by the end of the chapter day `loanDays` days after the day it went
+ * out. A week's loan taken on a Saturday morning is due by the end of the next Saturday.
+ * The one due-date rule for the server, the offline copy and every screen.
+ */
+export const loanDueAt = (takenAt: Date, loanDays: number, zone: string): Date => endOfChapterDay(addChapterDays(takenAt, loanDays, zone), zone);
+
+/**
+ * How late a loan is: chapter calendar days from its due day to today, at least 1 once it is
+ * past due. The one rule for the Overdue page, the reminders, the badges and refusals.
+ */
+export const daysLate = (dueAt: Date, now: Date, zone: string): number => Math.max(1, chapterDaysBetween(dueAt, now, zone));
+
+/** "1 day", "3 days". */
+export const dayCount = (n: number): string => `${n} ${Math.abs(n) === 1 ? 'day' : 'days'}`;
+
+/** "1 day late", "5 days late". */
+export const daysLateWords = (days: number): string => `${dayCount(days)} late`;
+
+/**
+ * A chapter day in words: "Sunday, November 29", with the year when it is not this year
+ * ("Friday, December 4, 2025").
+ */
+export function dayInWords(at: Date, zone: string, now: Date = new Date()): string {
+  const sameYear = format(at, 'yyyy', zoned(zone)) === format(now, 'yyyy', zoned(zone));
+  return format(at, sameYear ? 'EEEE, MMMM d' : 'EEEE, MMMM d, yyyy', zoned(zone));
+}
+
+/** A chapter day in short words for tables: "Sun, Nov 29, 2026". */
+export const shortDayInWords = (at: Date, zone: string): string => format(at, 'EEE, MMM d, yyyy', zoned(zone));
+
+/** A moment on the chapter's clock: "Nov 29, 2026, 6:05 PM". */
+export const momentInWords = (at: Date, zone: string): string => format(at, 'MMM d, yyyy, h:mm a', zoned(zone));
+
+export interface DueState {
+  /** "due today", "due tomorrow", "due in 3 days", "2 days late". */
+  words: string;
+  overdue: boolean;
+  /** Due within two chapter days. */
+  soon: boolean;
+}
+
+/** A loan's due state in words, by chapter days; past the due moment it is late by the `daysLate` rule. */
+export function dueState(dueAt: Date, now: Date, zone: string): DueState {
+  if (dueAt.getTime() < now.getTime()) return { words: daysLateWords(daysLate(dueAt, now, zone)), overdue: true, soon: false };
+  const days = chapterDaysBetween(now, dueAt, zone);
+  if (days === 0) return { words: 'due today', overdue: false, soon: true };
+  if (days === 1) return { words: 'due tomorrow', overdue: false, soon: true };
+  return { words: `due in ${days} days`, overdue: false, soon: days <= 2 };
+}

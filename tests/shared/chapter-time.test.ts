@@ -1,0 +1,88 @@
+import { describe, expect, it } from 'vitest';
+import {
+  addChapterDays,
+  chapterDay,
+  chapterDaysBetween,
+  daysLate,
+  dayInWords,
+  dueState,
+  endOfChapterDay,
+  isTimeZone,
+  loanDueAt,
+  startOfChapterDay,
+  startOfDayNamed,
+} from '@shared/time/chapter-time';
+
+const CHICAGO = 'America/Chicago';
+const AUCKLAND = 'Pacific/Auckland';
+
+describe('the chapter calendar', () => {
+  it('puts a moment on the chapter day, not the UTC day', () => {
+    // 03:30 UTC on the 29th is still the evening of the 28th in Chicago (UTC−6 in November).
+    const at = new Date('2026-11-29T03:30:00Z');
+    expect(chapterDay(at, CHICAGO)).toBe('2026-11-28');
+    expect(chapterDay(at, 'UTC')).toBe('2026-11-29');
+    expect(chapterDay(at, AUCKLAND)).toBe('2026-11-29');
+  });
+
+  it('starts and ends a day at the chapter midnight', () => {
+    const at = new Date('2026-11-29T03:30:00Z');
+    expect(startOfChapterDay(at, CHICAGO).toISOString()).toBe('2026-11-28T06:00:00.000Z');
+    expect(endOfChapterDay(at, CHICAGO).toISOString()).toBe('2026-11-29T05:59:59.999Z');
+    expect(startOfDayNamed('2026-11-28', CHICAGO).toISOString()).toBe('2026-11-28T06:00:00.000Z');
+  });
+
+  // US daylight saving time starts on the second Sunday of March and ends on the first Sunday of
+  // November (15 U.S.C. § 260a as amended by the Energy Policy Act of 2005): 8 March and 1 November 2026.
+  it('keeps the wall clock across the spring change, a 23-hour day', () => {
+    const saturdayNoon = new Date('2026-03-07T18:00:00Z'); // 12:00 CST
+    const sundayNoon = addChapterDays(saturdayNoon, 1, CHICAGO);
+    expect(sundayNoon.toISOString()).toBe('2026-03-08T17:00:00.000Z'); // 12:00 CDT
+    expect(sundayNoon.getTime() - saturdayNoon.getTime()).toBe(23 * 3600_000);
+  });
+
+  it('counts calendar days, not 24-hour periods', () => {
+    const lateEvening = new Date('2026-11-30T05:00:00Z'); // Sunday 23:00 in Chicago
+    const earlyMorning = new Date('2026-11-30T07:00:00Z'); // Monday 01:00
+    expect(chapterDaysBetween(lateEvening, earlyMorning, CHICAGO)).toBe(1);
+    expect(chapterDaysBetween(lateEvening, earlyMorning, 'UTC')).toBe(0);
+  });
+
+  it('knows real zone names and refuses made-up ones', () => {
+    expect(isTimeZone(CHICAGO)).toBe(true);
+    expect(isTimeZone('UTC')).toBe(true);
+    expect(isTimeZone('Mars/Olympus_Mons')).toBe(false);
+    expect(isTimeZone('')).toBe(false);
+  });
+});
+
+describe('loans by the chapter day', () => {
+  it('makes a week loan due by the end of the same weekday a week on', () => {
+    const saturdayMorning = new Date('2026-11-28T15:00:00Z'); // 09:00 in Chicago
+    const due = loanDueAt(saturdayMorning, 7, CHICAGO);
+    expect(due.toISOString()).toBe('2026-12-06T05:59:59.999Z'); // Saturday 5 Dec, 23:59:59.999 CST
+    expect(chapterDay(due, CHICAGO)).toBe('2026-12-05');
+  });
+
+  it('counts days late from the due day, at least one once past due', () => {
+    const due = loanDueAt(new Date('2026-11-21T15:00:00Z'), 7, CHICAGO); // end of Saturday 28 Nov
+    expect(daysLate(due, new Date('2026-11-29T06:30:00Z'), CHICAGO)).toBe(1); // 00:30 Sunday
+    expect(daysLate(due, new Date('2026-12-01T16:00:00Z'), CHICAGO)).toBe(3); // Tuesday morning
+    const afternoonDue = new Date('2026-12-01T21:00:00Z'); // 15:00 Tuesday
+    expect(daysLate(afternoonDue, new Date('2026-12-02T00:00:00Z'), CHICAGO)).toBe(1); // 18:00 the same day
+  });
+
+  it('says the due state in chapter days', () => {
+    const now = new Date('2026-12-01T16:00:00Z'); // Tuesday 10:00
+    expect(dueState(new Date('2026-12-02T05:59:59.999Z'), now, CHICAGO)).toEqual({ words: 'due today', overdue: false, soon: true });
+    expect(dueState(new Date('2026-12-03T05:59:59.999Z'), now, CHICAGO)).toEqual({ words: 'due tomorrow', overdue: false, soon: true });
+    expect(dueState(new Date('2026-12-06T05:59:59.999Z'), now, CHICAGO).words).toBe('due in 4 days');
+    expect(dueState(new Date('2026-11-29T05:59:59.999Z'), now, CHICAGO)).toEqual({ words: '3 days late', overdue: true, soon: false });
+  });
+
+  it('names a day in words, with the year only when it is not this year', () => {
+    const now = new Date('2026-12-01T16:00:00Z');
+    expect(dayInWords(new Date('2026-11-29T05:59:59.999Z'), CHICAGO, now)).toBe('Saturday, November 28');
+    expect(dayInWords(new Date('2025-12-05T18:00:00Z'), CHICAGO, now)).toBe('Friday, December 5, 2025');
+  });
+});

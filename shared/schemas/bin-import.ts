@@ -17,31 +17,44 @@ export type BinImportBody = z.infer<typeof binImportBodySchema>;
 export const importProblemSchema = z.object({ column: z.string(), message: z.string() });
 export type ImportProblem = z.infer<typeof importProblemSchema>;
 
+/** What importing a row does: make a new bin, update the bin with its code, nothing, or nothing until its problems are fixed. */
+export const IMPORT_ROW_STATUSES = ['new', 'update', 'unchanged', 'problem'] as const;
+export type ImportRowStatus = (typeof IMPORT_ROW_STATUSES)[number];
+
+/** One field an update changes, in the file's column name and as the CSV writes the values. */
+export const importChangeSchema = z.object({ column: z.string(), from: z.string(), to: z.string() });
+export type ImportChange = z.infer<typeof importChangeSchema>;
+
 export const importRowSchema = z.object({
   /** The line in the file as a text editor or spreadsheet numbers it (the header is line 1). */
   line: z.number(),
-  /** The code the bin will get: as written, or the next free one when the cell was empty. */
+  /** The bin's code: as written, or the next free one when the cell was empty. */
   code: z.string(),
   designation: z.string(),
-  ok: z.boolean(),
+  status: z.enum(IMPORT_ROW_STATUSES),
+  /** For an update: each field that changes, old → new. */
+  changes: z.array(importChangeSchema),
+  /** Worth a look, but no reason to refuse: a second bin of the same thing, an on-hand figure that is ignored. */
+  warnings: z.array(importProblemSchema),
   errors: z.array(importProblemSchema),
 });
 export type ImportRow = z.infer<typeof importRowSchema>;
 
 export const importPreviewSchema = z.object({
   rows: z.array(importRowSchema),
-  valid: z.number(),
-  invalid: z.number(),
+  /** How many rows of each status. */
+  counts: z.object({ new: z.number(), update: z.number(), unchanged: z.number(), problem: z.number() }),
   /** The columns found in the header, as read (after trimming and lower-casing). */
   columns: z.array(z.string()),
   /** Problems with the file as a whole: empty, unknown or missing columns. */
   fileErrors: z.array(importProblemSchema),
-  /** True when the file has rows and nothing is wrong with any of them. */
+  /** True when nothing is wrong with the file or any row, and at least one row makes or changes a bin. */
   canImport: z.boolean(),
 });
 export type ImportPreview = z.infer<typeof importPreviewSchema>;
 
-export const importResultSchema = z.object({ created: z.number(), codes: z.array(z.string()) });
+/** The codes of the bins made and of the bins updated, and how many rows changed nothing. */
+export const importResultSchema = z.object({ created: z.array(z.string()), updated: z.array(z.string()), unchanged: z.number() });
 export type ImportResult = z.infer<typeof importResultSchema>;
 
 const isoDay = (what: string) => z.iso.date({ error: `Give the ${what} date like 2026-11-30.` });

@@ -14,16 +14,13 @@ import autocannon from 'autocannon';
 import { pino } from 'pino';
 import { createApp, type App } from '../../server/app';
 import type { Database } from '../../server/db/client';
+import type { Member } from '../helpers/http-sign-in';
+
+export { signIn, type Member } from '../helpers/http-sign-in';
 
 /** Read by checkout-bench-client.cts in autocannon's worker. */
 const BENCH_ENV = 'GRIPLINE_BENCH_CONNECTIONS';
 const SETUP_CLIENT = fileURLToPath(new URL('./checkout-bench-client.cts', import.meta.url));
-
-export interface Member {
-  email: string;
-  cookie: string;
-  csrf: string;
-}
 
 export interface BenchRequest {
   method: 'GET' | 'POST';
@@ -80,26 +77,6 @@ export async function closeServed(s: Served): Promise<void> {
   await new Promise<void>((resolve) => s.server.close(() => resolve()));
   s.app.sessionStore.close();
   s.db.$client.close();
-}
-
-function sessionCookie(res: globalThis.Response): string {
-  const cookie = res.headers.getSetCookie().find((c) => c.startsWith('gripline.sid='));
-  if (!cookie) throw new Error(`no session cookie from ${res.url} (${res.status})`);
-  return cookie.split(';')[0]!;
-}
-
-/** GET /api/auth/csrf, then POST /api/auth/login: the regenerated session's cookie and token. */
-export async function signIn(base: string, email: string, password: string): Promise<Member> {
-  const first = await fetch(`${base}/api/auth/csrf`);
-  const { token } = (await first.json()) as { token: string };
-  const login = await fetch(`${base}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json', cookie: sessionCookie(first), 'x-csrf-token': token },
-    body: JSON.stringify({ email, password }),
-  });
-  if (login.status !== 200) throw new Error(`sign-in failed for ${email}: ${login.status} ${await login.text()}`);
-  const { csrfToken } = (await login.json()) as { csrfToken: string };
-  return { email, cookie: sessionCookie(login), csrf: csrfToken };
 }
 
 /** The headers of a signed-in JSON request. */

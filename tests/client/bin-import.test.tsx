@@ -16,16 +16,15 @@ const BLIND = 'Blind, structural, dome, 5056 · 1/8 in · grip −2 (0.063–0.1
 /** What the server answers for CSV above: line 2 ready, line 3 with grip dash 7, which the table lacks. */
 const MIXED: ImportPreview = {
   rows: [
-    { line: 2, code: 'B-0004', designation: BLIND, ok: true, errors: [] },
-    { line: 3, code: 'B-0005', designation: '', ok: false, errors: [{ column: 'grip_dash', message: 'Line 3, grip_dash: use a grip dash from the table: 1 to 6, or 8.' }] },
+    { line: 2, code: 'B-0004', designation: BLIND, status: 'new', changes: [], warnings: [], errors: [] },
+    { line: 3, code: 'B-0005', designation: '', status: 'problem', changes: [], warnings: [], errors: [{ column: 'grip_dash', message: 'Line 3, grip_dash: use a grip dash from the table: 1 to 6, or 8.' }] },
   ],
-  valid: 1,
-  invalid: 1,
+  counts: { new: 1, update: 0, unchanged: 0, problem: 1 },
   columns: ['kind', 'head', 'material', 'diameter_32nds', 'grip_dash'],
   fileErrors: [],
   canImport: false,
 };
-const ALL_READY: ImportPreview = { ...MIXED, rows: [MIXED.rows[0]!, { ...MIXED.rows[0]!, line: 3, code: 'B-0005' }], valid: 2, invalid: 0, canImport: true };
+const ALL_READY: ImportPreview = { ...MIXED, rows: [MIXED.rows[0]!, { ...MIXED.rows[0]!, line: 3, code: 'B-0005' }], counts: { new: 2, update: 0, unchanged: 0, problem: 0 }, canImport: true };
 
 const importButton = () => screen.getByRole<HTMLButtonElement>('button', { name: /^Import/ });
 const pasteCsv = async (text: string) => {
@@ -42,16 +41,16 @@ describe('BinImportPanel', () => {
 
     await pasteCsv(CSV);
     await userEvent.click(screen.getByRole('button', { name: 'Check file' }));
-    expect(await screen.findByText('2 rows: 1 ready, 1 with problems.')).toBeTruthy();
+    expect(await screen.findByText('2 rows: 1 new, 1 with problems.')).toBeTruthy();
     expect(calls).toEqual([expect.objectContaining({ method: 'POST', path: '/api/bins/import/preview', body: { csv: CSV } })]);
 
     // Only the row with problems shows at first; the whole file on request.
     const table = screen.getByRole('table', { name: 'Rows of the file' });
     expect(within(table).getByText('Line 3, grip_dash: use a grip dash from the table: 1 to 6, or 8.')).toBeTruthy();
     expect(within(table).queryByText(BLIND)).toBeNull();
-    await userEvent.click(screen.getByRole('checkbox', { name: 'Show only rows with problems' }));
+    await userEvent.selectOptions(screen.getByRole('combobox', { name: 'Show' }), 'Every row');
     expect(within(table).getByText(BLIND)).toBeTruthy();
-    expect(within(table).getByText('Ready')).toBeTruthy();
+    expect(within(table).getByText('New bin')).toBeTruthy();
 
     expect(importButton().textContent).toBe('Import bins');
     expect(importButton().disabled).toBe(true);
@@ -61,7 +60,7 @@ describe('BinImportPanel', () => {
   it('reads a chosen file, imports the checked text only, and links to the bins afterwards', async () => {
     const calls = fakeFetch((call) => {
       if (call.path === '/api/bins/import/preview') return { status: 200, body: ALL_READY };
-      if (call.path === '/api/bins/import') return { status: 201, body: { created: 2, codes: ['B-0004', 'B-0005'] } };
+      if (call.path === '/api/bins/import') return { status: 201, body: { created: ['B-0004', 'B-0005'], updated: [], unchanged: 0 } };
       return undefined;
     });
     const onImported = vi.fn();
@@ -71,7 +70,7 @@ describe('BinImportPanel', () => {
 
     await userEvent.click(screen.getByRole('button', { name: 'Check file' }));
     await waitFor(() => expect(importButton().disabled).toBe(false));
-    expect(importButton().textContent).toBe('Import 2 bins');
+    expect(importButton().textContent).toBe('Import 2 new bins');
 
     // A change after the check closes Import until the file is checked again.
     await pasteCsv('x');
@@ -80,12 +79,52 @@ describe('BinImportPanel', () => {
     expect(importButton().disabled).toBe(false);
 
     await userEvent.click(importButton());
-    expect(await screen.findByText('Imported 2 bins')).toBeTruthy();
-    expect(screen.getByText(/Codes B-0004, B-0005/)).toBeTruthy();
+    expect(await screen.findByText('Added 2 bins')).toBeTruthy();
+    expect(screen.getByText('New: B-0004, B-0005.')).toBeTruthy();
     expect(screen.getByRole('link', { name: 'Open the bins' }).getAttribute('href')).toBe('/bins');
-    expect(onImported).toHaveBeenCalledWith({ created: 2, codes: ['B-0004', 'B-0005'] });
+    expect(onImported).toHaveBeenCalledWith({ created: ['B-0004', 'B-0005'], updated: [], unchanged: 0 });
     expect(calls.filter((c) => c.path === '/api/bins/import')).toEqual([expect.objectContaining({ body: { csv: CSV }, headers: expect.objectContaining({ 'X-CSRF-Token': 'token-1' }) })]);
     expect(screen.getByLabelText<HTMLTextAreaElement>('Or paste the CSV here').value).toBe('');
+  });
+
+  it('shows updates with each change old → new, hides unchanged rows at first, and says what is worth a check', async () => {
+    const REIMPORT: ImportPreview = {
+      rows: [
+        { line: 2, code: 'B-0001', designation: BLIND, status: 'update', changes: [{ column: 'location', from: 'Shelf A2', to: 'Shelf B1' }, { column: 'notes', from: 'Top shelf', to: '' }], warnings: [{ column: 'on_hand', message: 'Line 2, on_hand: the file says 999 on hand and the bin holds 480. Stock moves only through the ledger, so this is ignored: count the bin to correct it.' }], errors: [] },
+        { line: 3, code: 'B-0002', designation: 'Washer #10 flat', status: 'unchanged', changes: [], warnings: [], errors: [] },
+        { line: 4, code: 'B-0003', designation: BLIND, status: 'new', changes: [], warnings: [{ column: '', message: `Line 4: bin B-0001 already holds this (${BLIND}). Import the row only if you mean a second bin of it.` }], errors: [] },
+      ],
+      counts: { new: 1, update: 1, unchanged: 1, problem: 0 },
+      columns: ['code', 'kind'],
+      fileErrors: [],
+      canImport: true,
+    };
+    fakeFetch((call) => (call.path === '/api/bins/import/preview' ? { status: 200, body: REIMPORT } : undefined));
+    renderWithProviders(<BinImportPanel />);
+    await pasteCsv(CSV);
+    await userEvent.click(screen.getByRole('button', { name: 'Check file' }));
+    expect(await screen.findByText('3 rows: 1 new, 1 update, 1 unchanged. 2 to check.')).toBeTruthy();
+    expect(importButton().textContent).toBe('Import 1 new bin and 1 update');
+
+    const table = screen.getByRole('table', { name: 'Rows of the file' });
+    const changes = within(table).getByRole('list', { name: 'Changes to B-0001' });
+    expect(within(changes).getAllByRole('listitem').map((li) => li.textContent)).toEqual(['location: Shelf A2 →  becomes Shelf B1', 'notes: Top shelf →  becomes (empty)']);
+    expect(within(table).getByText(/the file says 999 on hand and the bin holds 480/)).toBeTruthy();
+    expect(within(table).getByText(/bin B-0001 already holds this/)).toBeTruthy();
+    expect(within(table).queryByText('Washer #10 flat')).toBeNull();
+    await userEvent.selectOptions(screen.getByRole('combobox', { name: 'Show' }), 'Every row');
+    expect(within(table).getByText('Washer #10 flat')).toBeTruthy();
+    expect(within(table).getByText('Unchanged')).toBeTruthy();
+  });
+
+  it('says there is nothing to import when every row already matches its bin', async () => {
+    const SAME: ImportPreview = { ...MIXED, rows: [{ ...MIXED.rows[0]!, code: 'B-0001', status: 'unchanged' }], counts: { new: 0, update: 0, unchanged: 1, problem: 0 }, canImport: false };
+    fakeFetch((call) => (call.path === '/api/bins/import/preview' ? { status: 200, body: SAME } : undefined));
+    renderWithProviders(<BinImportPanel />);
+    await pasteCsv(CSV);
+    await userEvent.click(screen.getByRole('button', { name: 'Check file' }));
+    expect(await screen.findByText('Every row of the file already matches its bin.')).toBeTruthy();
+    expect(importButton().disabled).toBe(true);
   });
 
   it('says nothing was imported, and why, when the server refuses the file', async () => {

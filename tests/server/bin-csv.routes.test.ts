@@ -48,25 +48,34 @@ describe('POST /api/bins/import/preview', () => {
     const res = await post(qm, '/api/bins/import/preview', { csv });
     expect(res.status).toBe(200);
     const preview = importPreviewSchema.strict().parse(res.body);
-    expect(preview).toMatchObject({ valid: 3, invalid: 6, canImport: false, fileErrors: [] });
+    expect(preview).toMatchObject({ counts: { new: 3, update: 0, unchanged: 0, problem: 6 }, canImport: false, fileErrors: [] });
     expect(preview.columns).toEqual(HEADER.split(','));
 
     const byLine = new Map(preview.rows.map((r) => [r.line, r]));
     expect([...byLine.keys()]).toEqual([2, 3, 5, 6, 7, 8, 9, 10, 11]);
     // Grip -2 covers 0.063–0.125 in: TM 10-5410-221-14/1 Table 4-3 (the IFI 114 convention).
-    expect(byLine.get(2)).toEqual({ line: 2, code: 'B-0002', ok: true, errors: [], designation: 'Blind, structural, dome, 5056, steel stem · 1/8 in · grip −2 (0.063–0.125 in)' });
+    expect(byLine.get(2)).toEqual({
+      line: 2,
+      code: 'B-0002',
+      status: 'new',
+      changes: [],
+      errors: [],
+      warnings: [{ column: '', message: 'Line 2: bin B-0001 already holds this (Blind, structural, dome, 5056, steel stem · 1/8 in · grip −2 (0.063–0.125 in)). Import the row only if you mean a second bin of it.' }],
+      designation: 'Blind, structural, dome, 5056, steel stem · 1/8 in · grip −2 (0.063–0.125 in)',
+    });
     // MS20470AD4-6: universal head, 2117-T4, 1/8 in, 3/8 in long (AC 43.13-1B para 4-57a).
-    expect(byLine.get(3)).toMatchObject({ code: 'B-0003', ok: true, designation: 'MS20470AD4-6' });
-    expect(byLine.get(10)).toMatchObject({ code: 'B-0100', ok: true, designation: 'Washer #10 flat' });
+    expect(byLine.get(3)).toMatchObject({ code: 'B-0003', status: 'new', designation: 'MS20470AD4-6' });
+    expect(byLine.get(10)).toMatchObject({ code: 'B-0100', status: 'new', designation: 'Washer #10 flat' });
 
     const errorsOn = (line: number) => byLine.get(line)!.errors;
     expect(errorsOn(5)).toEqual([{ column: 'kind', message: expect.stringMatching(/^Line 5, kind: "rivet" is not a kind of bin\. Use one of: Blind rivet – structural, /) }]);
     expect(errorsOn(6)).toEqual([{ column: 'grip_dash', message: 'Line 6, grip_dash: a blind rivet bin needs its grip dash, like 2 for 0.063–0.125 in.' }]);
     expect(errorsOn(7)).toEqual([{ column: 'grip_dash', message: 'Line 7, grip_dash: use a grip dash from the table: 1 to 6, or 8.' }]);
     expect(errorsOn(8)).toEqual([{ column: 'unit_cost', message: 'Line 8, unit_cost: give the unit cost to at most 4 decimals (a hundredth of a cent).' }]);
-    expect(errorsOn(9)).toEqual([{ column: 'code', message: 'Line 9, code: B-0001 is already on a bin in the crib. Leave the code empty to get the next free one.' }]);
+    // A code on a bin of another kind is not an edit of that bin (a file from another crib, most likely).
+    expect(errorsOn(9)).toEqual([{ column: 'kind', message: "Line 9, kind: B-0001 is a bin of blind rivet – structural, not nut. Leave the code empty to add a new bin, or keep the bin's kind." }]);
     expect(errorsOn(11)).toEqual([{ column: 'code', message: 'Line 11, code: B-0100 is also on line 10; each bin needs its own code.' }]);
-    expect(preview.rows.filter((r) => !r.ok).every((r) => r.errors.length > 0)).toBe(true);
+    expect(preview.rows.filter((r) => r.status === 'problem').every((r) => r.errors.length > 0)).toBe(true);
 
     expect(await binCount()).toBe(1);
   });
@@ -101,12 +110,23 @@ describe('POST /api/bins/import/preview', () => {
     expect(odd.canImport).toBe(false);
   });
 
+  it('numbers the lines of a long file right, with quoted cells over two lines all through it', async () => {
+    // Long enough to be read in several pieces; every note spans two lines, so bin k starts on line 2 + 2k.
+    const rows = Array.from({ length: 1200 }, (_, k) => `,screw,"Screw #8-32 × ${k + 1}/64, ""pan"" head",,,,,,,each,50,${k === 777 ? 'cheap' : '0.09'},"Top shelf,\nleft bin ${k}",10`);
+    const preview = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: csvOf(...rows) })).body);
+    expect(csvOf(...rows).length).toBeGreaterThan(100_000);
+    expect(preview.rows).toHaveLength(1200);
+    expect(preview.rows.every((r, k) => r.line === 2 + 2 * k)).toBe(true);
+    expect(preview.rows[1199]!.designation).toBe('Screw #8-32 × 1200/64, "pan" head');
+    expect(preview.rows[777]!.errors).toEqual([{ column: 'unit_cost', message: 'Line 1556, unit_cost: enter a number, not "cheap".' }]);
+  });
+
   it('takes a file larger than the API’s usual body limit, refuses one over 2 MB, and is for the quartermaster only', async () => {
     const many = csvOf(...Array.from({ length: 1500 }, (_, i) => `,screw,Screw #8-32 × ${i + 1}/16 pan head stainless,,,,,,,each,50,0.09,,10`));
     expect(many.length).toBeGreaterThan(100_000);
     const big = await post(qm, '/api/bins/import/preview', { csv: many });
     expect(big.status).toBe(200);
-    expect(importPreviewSchema.parse(big.body)).toMatchObject({ valid: 1500, invalid: 0, canImport: true });
+    expect(importPreviewSchema.parse(big.body)).toMatchObject({ counts: { new: 1500, problem: 0 }, canImport: true });
     expect(big.body.rows[1499]).toMatchObject({ line: 1501, code: 'B-1500' });
 
     const tooBig = await post(qm, '/api/bins/import/preview', { csv: 'x'.repeat(2_000_001) });
@@ -145,7 +165,7 @@ describe('POST /api/bins/import', () => {
     await addBinAs(qm, blindRivetBin());
     const res = await post(qm, '/api/bins/import', { csv: csvOf(GOOD_BLIND, 'B-0050' + GOOD_SCREW) });
     expect(res.status).toBe(201);
-    expect(importResultSchema.strict().parse(res.body)).toEqual({ created: 2, codes: ['B-0002', 'B-0050'] });
+    expect(importResultSchema.strict().parse(res.body)).toEqual({ created: ['B-0002', 'B-0050'], updated: [], unchanged: 0 });
 
     const blind = await qm.agent.get('/api/bins/B-0002');
     expect(blind.body).toMatchObject({ onHand: 500, unitCost: 0.12, packSize: 100, designation: 'Blind, structural, dome, 5056, steel stem · 1/8 in · grip −2 (0.063–0.125 in)' });
@@ -153,10 +173,12 @@ describe('POST /api/bins/import', () => {
     expect(ledger.body.data).toEqual([expect.objectContaining({ kind: 'receive', quantity: 120, balanceAfter: 120, note: 'Opening stock', actor: expect.objectContaining({ name: 'Quinn Quartermaster' }) })]);
     expect(await binCount()).toBe(3);
 
-    // The same file again: its named code is now taken, so nothing more is created.
-    const again = await post(qm, '/api/bins/import', { csv: csvOf(GOOD_BLIND, 'B-0050' + GOOD_SCREW) });
-    expect(again.status).toBe(400);
-    expect(again.body.error.issues).toEqual([{ path: 'line 3.code', message: expect.stringContaining('B-0050 is already on a bin') }]);
+    // The same file again: the row with a code finds its bin unchanged; the row without one would be a second bin of B-0002.
+    const again = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: csvOf(GOOD_BLIND, 'B-0050' + GOOD_SCREW) })).body);
+    expect(again.rows.map((r) => [r.code, r.status, r.warnings.length])).toEqual([
+      ['B-0051', 'new', 1],
+      ['B-0050', 'unchanged', 0],
+    ]);
     expect(await binCount()).toBe(3);
   });
 });
@@ -187,7 +209,7 @@ describe('GET /api/bins/export.csv', () => {
       const freshQm = await fresh.signIn('qm@example.org');
       const imported = await post(freshQm, '/api/bins/import', { csv: res.text });
       expect(imported.status).toBe(201);
-      expect(imported.body.codes).toEqual(['B-0001', 'B-0002', 'B-0003', 'B-0200']);
+      expect(imported.body.created).toEqual(['B-0001', 'B-0002', 'B-0003', 'B-0200']);
       const after = (await freshQm.agent.get('/api/bins')).body.data as Record<string, unknown>[];
       const same = (bins: Record<string, unknown>[]) => bins.map(({ id: _id, lastCountedAt: _counted, ...rest }) => rest);
       expect(same(after)).toEqual(same(before));
@@ -264,7 +286,7 @@ describe('GET /api/bins/import/template.csv', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
     const preview = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: res.text })).body);
-    expect(preview).toMatchObject({ valid: 2, invalid: 0, canImport: true });
+    expect(preview).toMatchObject({ counts: { new: 2, problem: 0 }, canImport: true });
     expect(preview.rows.map((r) => r.designation)).toEqual(['Blind, structural, dome, 5056, steel stem · 1/8 in · grip −2 (0.063–0.125 in)', 'Screw #8-32 × 1/2 pan head, stainless']);
   });
 });
@@ -295,5 +317,119 @@ describe('a CSV file that is not UTF-8', () => {
     const { error } = errorEnvelopeSchema.parse(res.body);
     expect(error.code).toBe('CSV_NOT_UTF8');
     expect(error.message).toContain('Line 3');
+  });
+});
+
+describe('re-importing bins by code', () => {
+  /** The crib's export, read back as records, and written again with `edit` applied to each record. */
+  async function editedExport(edit: (r: Record<string, string>) => void = () => {}): Promise<string> {
+    const rows = records((await qm.agent.get('/api/bins/export.csv')).text);
+    rows.forEach(edit);
+    return Papa.unparse(rows, { newline: '\r\n' });
+  }
+  const twoBins = async () => {
+    await addBinAs(qm, blindRivetBin({ initialQuantity: 500, supplier: 'Cedar Valley Fastener Supply', location: 'Shelf A2' }));
+    await addBinAs(qm, { kind: 'screw', name: 'Screw #8-32 × 1/2 pan head', unit: 'each', packSize: 50, unitCost: 0.09, initialQuantity: 120, notes: 'Keep dry.\nSecond line' });
+    expect((await post(member, '/api/bins/B-0001/draw', { quantity: 20 })).status).toBe(201);
+  };
+
+  it('reports every row of an untouched export as unchanged and writes nothing', async () => {
+    await twoBins();
+    const before = (await qm.agent.get('/api/bins')).body.data;
+    const csv = await editedExport();
+    const res = await post(qm, '/api/bins/import/preview', { csv });
+    expect(res.status).toBe(200);
+    const preview = importPreviewSchema.strict().parse(res.body);
+    expect(preview.rows.map((r) => [r.line, r.code, r.status, r.changes, r.errors])).toEqual([
+      [2, 'B-0001', 'unchanged', [], []],
+      [3, 'B-0002', 'unchanged', [], []],
+    ]);
+    expect(preview.counts).toEqual({ new: 0, update: 0, unchanged: 2, problem: 0 });
+    expect(preview.canImport).toBe(false);
+    const res2 = await post(qm, '/api/bins/import', { csv });
+    expect(res2.status).toBe(409);
+    expect(errorEnvelopeSchema.parse(res2.body).error).toEqual({ code: 'NOTHING_TO_IMPORT', message: 'Nothing was imported: every row of the file already matches its bin.' });
+    expect((await qm.agent.get('/api/bins')).body.data).toEqual(before);
+  });
+
+  it('updates the descriptive fields of bins named by code, shows each change old → new, and never moves stock', async () => {
+    await twoBins();
+    const csv = await editedExport((r) => {
+      if (r.code === 'B-0001') Object.assign(r, { unit_cost: '0.15', location: 'Shelf B1', reorder_point: '250', opening_stock: '999', on_hand: '999' });
+    });
+    const preview = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv })).body);
+    expect(preview.counts).toEqual({ new: 0, update: 1, unchanged: 1, problem: 0 });
+    expect(preview.canImport).toBe(true);
+    const row = preview.rows[0]!;
+    expect(row).toMatchObject({ code: 'B-0001', status: 'update', errors: [] });
+    expect(row.changes).toEqual([
+      { column: 'unit_cost', from: '0.12', to: '0.15' },
+      { column: 'reorder_point', from: '200', to: '250' },
+      { column: 'location', from: 'Shelf A2', to: 'Shelf B1' },
+    ]);
+    expect(row.warnings).toEqual([
+      {
+        column: 'on_hand',
+        message: 'Line 2, on_hand: the file says 999 on hand and the bin holds 480. Stock moves only through the ledger, so this is ignored: count the bin to correct it.',
+      },
+    ]);
+    expect(await binCount()).toBe(2);
+    expect((await qm.agent.get('/api/bins/B-0001')).body).toMatchObject({ unitCost: 0.12, location: 'Shelf A2' });
+
+    const res = await post(qm, '/api/bins/import', { csv });
+    expect(res.status).toBe(201);
+    expect(importResultSchema.strict().parse(res.body)).toEqual({ created: [], updated: ['B-0001'], unchanged: 1 });
+    const bin = (await qm.agent.get('/api/bins/B-0001')).body;
+    expect(bin).toMatchObject({ unitCost: 0.15, location: 'Shelf B1', reorderPoint: 250, onHand: 480 });
+    const ledger = (await qm.agent.get('/api/bins/B-0001/ledger')).body.data as { kind: string }[];
+    expect(ledger.map((e) => e.kind)).toEqual(['draw', 'receive']);
+  });
+
+  it('keeps the values of columns the file leaves out, and checks the updated bin as a whole', async () => {
+    await twoBins();
+    const counted = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: 'code,kind,on_hand,opening_stock\r\nB-0001,blind_structural,480,500' })).body);
+    expect(counted.rows[0]).toMatchObject({ status: 'unchanged', warnings: [{ column: 'opening_stock', message: expect.stringContaining('the file says 500 on hand and the bin holds 480') }] });
+    const moved = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: 'code,kind,location\r\nB-0001,blind_structural,Shelf C3\r\nB-0002,screw,Drawer C4' })).body);
+    expect(moved.rows.map((r) => [r.status, r.changes])).toEqual([
+      ['update', [{ column: 'location', from: 'Shelf A2', to: 'Shelf C3' }]],
+      ['update', [{ column: 'location', from: '', to: 'Drawer C4' }]],
+    ]);
+    const broken = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: 'code,kind,grip_dash\r\nB-0001,blind_structural,' })).body);
+    expect(broken.rows[0]).toMatchObject({ status: 'problem', errors: [{ column: 'grip_dash', message: 'Line 2, grip_dash: a blind rivet bin needs its grip dash, like 2 for 0.063–0.125 in.' }] });
+    expect(broken.canImport).toBe(false);
+  });
+
+  it('warns, without refusing, when a new bin has the specification of a bin already in the crib', async () => {
+    await twoBins();
+    const preview = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: csvOf(GOOD_BLIND, GOOD_SCREW.replace('Screw #8-32 × 1/2 pan head', 'screw #8-32 × 1/2 PAN HEAD')) })).body);
+    expect(preview.rows.map((r) => [r.code, r.status, r.warnings.map((w) => w.message)])).toEqual([
+      ['B-0003', 'new', ['Line 2: bin B-0001 already holds this (Blind, structural, dome, 5056, steel stem · 1/8 in · grip −2 (0.063–0.125 in)). Import the row only if you mean a second bin of it.']],
+      ['B-0004', 'new', ['Line 3: bin B-0002 already holds this (Screw #8-32 × 1/2 pan head). Import the row only if you mean a second bin of it.']],
+    ]);
+    expect(preview.canImport).toBe(true);
+    expect((await post(qm, '/api/bins/import', { csv: csvOf(GOOD_BLIND) })).status).toBe(201);
+  });
+
+  it('reads the template and the export alike: the template imports, its bins export with the same columns and values, and read back unchanged', async () => {
+    const template = (await qm.agent.get('/api/bins/import/template.csv')).text;
+    const first = await post(qm, '/api/bins/import', { csv: template });
+    expect(first.status).toBe(201);
+    expect(first.body.created).toEqual(['B-0001', 'B-0002']);
+
+    const exported = (await qm.agent.get('/api/bins/export.csv')).text;
+    const header = (text: string) => Papa.parse<string[]>(text.replace(/^\uFEFF/, '')).data[0];
+    expect(header(exported)).toEqual([...header(template)!, 'designation', 'on_hand']);
+    // Every example value is written the way the export writes it (only the code is left empty).
+    const withoutCode = ({ code: _code, designation: _d, on_hand: _o, ...rest }: Record<string, string>) => rest;
+    expect(records(exported).map(withoutCode)).toEqual(records(template).map(withoutCode));
+
+    const roundTrip = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: exported })).body);
+    expect(roundTrip.rows.map((r) => [r.code, r.status])).toEqual([['B-0001', 'unchanged'], ['B-0002', 'unchanged']]);
+    // The template again makes new bins, each with a warning naming the bin that already holds it.
+    const twice = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: template })).body);
+    expect(twice.rows.map((r) => [r.code, r.status, r.warnings.map((w) => w.message.match(/B-\d+/)?.[0])])).toEqual([
+      ['B-0003', 'new', ['B-0001']],
+      ['B-0004', 'new', ['B-0002']],
+    ]);
   });
 });

@@ -1,4 +1,5 @@
 import PDFDocument from 'pdfkit';
+import { slicePauser } from '../../lib/event-loop';
 import { arrangeLabel } from '../../../labels/label-template';
 import type { SheetLayout } from '../../../labels/layouts';
 import { pageSizeInPoints, placeLabels, type Box } from '../../../labels/sheet-geometry';
@@ -22,8 +23,12 @@ export interface RenderOptions {
 const CODE_FONT = 'Courier-Bold';
 const TITLE_FONT = 'Helvetica';
 
-/** A PDF with one label per item, laid out on the layout's pages; resolves with the file's bytes. */
-export function renderLabelSheet(layout: SheetLayout, items: readonly LabelItem[], options: RenderOptions = {}): Promise<Buffer> {
+/**
+ * A PDF with one label per item, laid out on the layout's pages; resolves with the file's bytes.
+ * Drawing a few hundred labels takes a while, so it yields to the event loop between slices of
+ * labels: other requests are answered meanwhile.
+ */
+export async function renderLabelSheet(layout: SheetLayout, items: readonly LabelItem[], options: RenderOptions = {}): Promise<Buffer> {
   const page = pageSizeInPoints(layout);
   const doc = new PDFDocument({
     size: [page.width, page.height],
@@ -38,15 +43,19 @@ export function renderLabelSheet(layout: SheetLayout, items: readonly LabelItem[
     doc.on('end', () => resolve(Buffer.concat(chunks)));
     doc.on('error', reject);
   });
+  // Awaited below, after the slices; a failure while drawing must not count as unhandled meanwhile.
+  done.catch(() => undefined);
 
+  const pause = slicePauser();
   let currentPage = -1;
-  placeLabels(layout, items.length, options.skip ?? 0).forEach(({ page: pageIndex, box }, i) => {
+  for (const [i, { page: pageIndex, box }] of placeLabels(layout, items.length, options.skip ?? 0).entries()) {
     while (currentPage < pageIndex) {
       doc.addPage({ size: [page.width, page.height], margin: 0 });
       currentPage++;
     }
     drawLabel(doc, box, items[i]!);
-  });
+    await pause();
+  }
   doc.end();
   return done;
 }

@@ -1,4 +1,6 @@
 import Papa from 'papaparse';
+import { guardText, type CsvCell } from '../../lib/csv';
+import { slicePauser } from '../../lib/event-loop';
 import { MAX_IMPORT_ROWS, type ImportProblem } from '@shared/schemas/bin-import';
 import { createBinBodySchema, type CreateBinInput } from '@shared/schemas/bins';
 import { BIN_KIND_LABELS, BIN_KINDS, RIVET_HEAD_LABELS, RIVET_HEADS, RIVET_MATERIALS, STEM_MATERIALS } from '@shared/stock/kinds';
@@ -40,10 +42,18 @@ export const BIN_COLUMNS: readonly BinColumn[] = [
   col('notes', 'notes'),
   col('opening_stock', 'initialQuantity', 'number'),
 ];
+/** The columns that describe a bin: what an import may change on a bin that exists (never its code or stock). */
+export const DESCRIPTIVE_COLUMNS = BIN_COLUMNS.filter((c) => c.field !== 'code' && c.field !== 'initialQuantity');
 export const REQUIRED_COLUMNS = ['kind'] as const;
 /** Columns an export adds; an import reads past them. */
 export const EXPORT_ONLY_COLUMNS = ['designation', 'on_hand'] as const;
 export const isNumericColumn = (c: BinColumn) => ['number', 'money', 'dash', 'diameter'].includes(c.type);
+
+/** A field's value as a bins CSV writes it: numbers as numbers, text guarded against formulas, nothing as empty. */
+export function binCell(column: BinColumn, value: unknown): CsvCell {
+  if (isNumericColumn(column)) return typeof value === 'number' ? value : null;
+  return typeof value === 'string' || typeof value === 'number' ? (value === '' ? null : guardText(String(value))) : null;
+}
 
 const COLUMN_BY_NAME = new Map(BIN_COLUMNS.map((c) => [c.name, c]));
 const COLUMN_BY_FIELD = new Map(BIN_COLUMNS.map((c) => [c.field as string, c.name]));
@@ -109,45 +119,82 @@ export function problem(line: number, column: string, message: string): ImportPr
   return { column, message: column ? `Line ${line}, ${column}: ${said}` : `Line ${line}: ${message}` };
 }
 
-export interface CheckedRow {
+/** One data line read cell by cell: the values its cells give, by bin field, and the cells that could not be read. */
+export interface ReadRow {
   line: number;
   /** The code cell as written (upper-cased), or '' when empty. */
   code: string;
   name: string;
+  /** Only the cells that hold something; a present column with an empty cell leaves its field out. */
+  values: Record<string, unknown>;
   errors: ImportProblem[];
-  /** The bin to create, when the row is valid on its own. */
-  input?: CreateBinInput;
+  /** What the file says is on hand (the export's on_hand and opening_stock), for a bin that exists already. */
+  statedOnHand: { column: string; quantity: number }[];
 }
 
-/** Turns one data row (cells by header name) into a bin to create, or into problems in words. */
-export function checkBinRow(line: number, cells: ReadonlyMap<string, string>): CheckedRow {
+/** Reads one data line of the file into values by bin field, or into problems in words. */
+export function readBinRow(columns: readonly string[], record: CsvRecord): ReadRow {
+  const { line, cells, damage } = record;
   const values: Record<string, unknown> = {};
   const errors: ImportProblem[] = [];
-  for (const [name, raw] of cells) {
+  const cellOf = (name: string) => (cells[columns.indexOf(name)] ?? '').trim();
+  columns.forEach((name, i) => {
     const column = COLUMN_BY_NAME.get(name);
-    const cell = raw.trim();
-    if (!column || cell === '') continue;
+    const cell = (cells[i] ?? '').trim();
+    if (!column || cell === '') return;
     const converted = convert(column.type, cell);
     if ('error' in converted) errors.push(problem(line, name, converted.error));
     else values[column.field] = converted.value;
-  }
+  });
+  const stray = cells.findIndex((c, i) => c.trim() !== '' && !columns[i]);
+  if (stray >= 0) errors.push(problem(line, '', `cell ${stray + 1} has no column name in the header line. Name the column or clear the cell.`));
+  if (damage) errors.push(problem(line, '', `the CSV is damaged here (${damage}). Check the quotes on this line.`));
+  return {
+    line,
+    code: cellOf('code').toUpperCase(),
+    name: cellOf('name'),
+    values,
+    errors,
+    statedOnHand: ['on_hand', 'opening_stock'].flatMap((column) => {
+      const quantity = columns.includes(column) ? toNumber(cellOf(column)) : undefined;
+      return quantity === undefined ? [] : [{ column, quantity }];
+    }),
+  };
+}
+
+/** The bin the values describe, checked by the bin rules; problems name the file's columns. */
+export function binFromValues(row: Pick<ReadRow, 'line' | 'errors'>, values: Record<string, unknown>): { input?: CreateBinInput; errors: ImportProblem[] } {
   const result = createBinBodySchema.safeParse(values);
-  const code = (cells.get('code') ?? '').trim().toUpperCase();
-  const name = (cells.get('name') ?? '').trim();
-  if (result.success) return { line, code, name, errors, input: errors.length === 0 ? result.data : undefined };
+  if (result.success) return { input: row.errors.length === 0 ? result.data : undefined, errors: row.errors };
+  const errors = [...row.errors];
   const badColumns = new Set(errors.map((e) => e.column));
   for (const issue of result.error.issues) {
     const column = COLUMN_BY_FIELD.get(String(issue.path[0] ?? '')) ?? '';
     // A cell that could not be read already has its problem; the schema's "missing" would repeat it.
-    if (!badColumns.has(column)) errors.push(problem(line, column, issue.message));
+    if (!badColumns.has(column)) errors.push(problem(row.line, column, issue.message));
   }
-  return { line, code, name, errors };
+  return { errors };
+}
+
+/** The bin fields a file's header names: on a bin that exists, these are the ones the row sets. */
+export function fieldsOfColumns(columns: readonly string[]): Field[] {
+  return columns.flatMap((c) => {
+    const column = COLUMN_BY_NAME.get(c);
+    return column ? [column.field] : [];
+  });
+}
+
+export interface CsvRecord {
+  line: number;
+  cells: string[];
+  damage?: string;
 }
 
 export interface ParsedCsv {
   columns: string[];
   fileErrors: ImportProblem[];
-  rows: CheckedRow[];
+  /** The data lines, not yet read cell by cell (that is done a slice at a time). */
+  records: CsvRecord[];
 }
 
 const fileProblem = (message: string, column = ''): ImportProblem => ({ column, message });
@@ -158,44 +205,70 @@ function delimiterOf(text: string): string {
   return [',', ';', '\t'].reduce((best, d) => (header.split(d).length > header.split(best).length ? d : best), ',');
 }
 
-/** Reads a bins CSV: the first non-blank line is the header, every other non-blank line a bin. */
-export function parseBinCsv(csv: string): ParsedCsv {
+/** Characters parsed between two pauses for other requests (some 250 lines of a bins CSV). */
+const PIECE_CHARS = 32_000;
+
+/**
+ * Cuts CSV text into pieces of about `size` characters, each ending with a line break outside any
+ * quoted cell (a quote toggles quoting; a doubled quote toggles twice), so each piece holds whole
+ * records and parses on its own.
+ */
+export function splitAtRecordEnds(text: string, size: number): string[] {
+  const pieces: string[] = [];
+  let start = 0;
+  let quoted = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c === 34) quoted = !quoted;
+    else if (c === 10 && !quoted && i + 1 - start >= size) {
+      pieces.push(text.slice(start, i + 1));
+      start = i + 1;
+    }
+  }
+  if (start < text.length) pieces.push(text.slice(start));
+  return pieces;
+}
+
+/**
+ * Splits a bins CSV into lines: the first non-blank line is the header, every other non-blank line
+ * a bin. A piece at a time, pausing for other requests between pieces.
+ */
+export async function parseBinCsv(csv: string): Promise<ParsedCsv> {
   const text = csv.replace(/^\uFEFF/, '');
-  const empty = { columns: [], rows: [] };
+  const empty = { columns: [], records: [] };
   if (text.trim() === '') return { ...empty, fileErrors: [fileProblem('The file is empty: it needs a header line of column names and one line per bin.')] };
 
-  const records: { line: number; cells: string[]; damage?: string }[] = [];
-  let pos = 0;
+  const records: CsvRecord[] = [];
+  const delimiter = delimiterOf(text);
+  const pause = slicePauser();
   let line = 1;
   let tooMany = false;
-  Papa.parse<string[]>(text, {
-    delimiter: delimiterOf(text),
-    step: (step, parser) => {
-      const start = line;
-      line += text.slice(pos, step.meta.cursor).split('\n').length - 1;
-      pos = step.meta.cursor;
-      if (step.data.every((c) => c.trim() === '')) return;
-      if (records.length > MAX_IMPORT_ROWS) {
-        tooMany = true;
-        return parser.abort();
-      }
-      records.push({ line: start, cells: step.data, damage: step.errors[0]?.message });
-    },
-  });
-  if (tooMany) return { ...empty, fileErrors: [fileProblem(`The file has more than ${MAX_IMPORT_ROWS} bins. Split it into smaller files.`)] };
+  for (const piece of splitAtRecordEnds(text, PIECE_CHARS)) {
+    let pos = 0;
+    Papa.parse<string[]>(piece, {
+      delimiter,
+      step: (step, parser) => {
+        const start = line;
+        line += piece.slice(pos, step.meta.cursor).split('\n').length - 1;
+        pos = step.meta.cursor;
+        if (step.data.every((c) => c.trim() === '')) return;
+        if (records.length > MAX_IMPORT_ROWS) {
+          tooMany = true;
+          return parser.abort();
+        }
+        records.push({ line: start, cells: step.data, damage: step.errors[0]?.message });
+      },
+    });
+    if (tooMany) return { ...empty, fileErrors: [fileProblem(`The file has more than ${MAX_IMPORT_ROWS} bins. Split it into smaller files.`)] };
+    line += piece.slice(pos).split('\n').length - 1;
+    await pause();
+  }
 
   const [header, ...data] = records;
   const columns = header!.cells.map(normalizeHeader);
   const fileErrors = checkHeader(columns);
   if (data.length === 0) fileErrors.push(fileProblem('The file has a header line but no bins below it.'));
-  const rows = data.map(({ line: at, cells, damage }) => {
-    const row = checkBinRow(at, new Map(columns.flatMap((c, i) => (c ? [[c, cells[i] ?? ''] as const] : []))));
-    const stray = cells.findIndex((c, i) => c.trim() !== '' && !columns[i]);
-    if (stray >= 0) row.errors.push(problem(at, '', `cell ${stray + 1} has no column name in the header line. Name the column or clear the cell.`));
-    if (damage) row.errors.push(problem(at, '', `the CSV is damaged here (${damage}). Check the quotes on this line.`));
-    return row;
-  });
-  return { columns, fileErrors, rows };
+  return { columns, fileErrors, records: data };
 }
 
 function checkHeader(columns: readonly string[]): ImportProblem[] {

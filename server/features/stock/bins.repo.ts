@@ -1,6 +1,7 @@
 import { and, asc, count, eq, like, lte, max, ne, or, sql, type SQL } from 'drizzle-orm';
 import type { BinListQuery } from '@shared/schemas/bins';
 import type { Database, Executor } from '../../db/client';
+import { insertRows, updateRowsById } from '../../db/bulk-write';
 import { preparedPerDatabase } from '../../db/prepared';
 import { bins, stockMovements, type BinRow } from '../../db/schema/stock';
 
@@ -48,12 +49,18 @@ export function findBinById(db: Executor, id: number): BinRow | undefined {
   return db.select().from(bins).where(eq(bins.id, id)).get();
 }
 
-export function insertBin(db: Executor, values: NewBinRow): BinRow {
-  return db.insert(bins).values(values).returning().get();
-}
-
 export function updateBin(db: Executor, id: number, values: Partial<NewBinRow>): BinRow {
   return db.update(bins).set(values).where(eq(bins.id, id)).returning().get();
+}
+
+/** New bins in one go (an import writes thousands inside one transaction); answers their ids in order. */
+export function insertBins(db: Database, values: readonly NewBinRow[]): number[] {
+  return insertRows(db, bins, values);
+}
+
+/** Sets the same fields on many bins by id. */
+export function updateBins(db: Database, changes: readonly { id: number; set: Partial<NewBinRow> }[]): void {
+  updateRowsById(db, bins, changes);
 }
 
 /** The next free bin code: one more than the highest B-number in use, four digits at least. */
@@ -113,7 +120,9 @@ export function lastCountedAt(db: Database, binIds: readonly number[]): Map<numb
 }
 
 /** Other bins holding exactly the same thing (kind, spec and, for non-rivets, name): where stock may move. */
-export function sameSpecBins(db: Database, bin: BinRow): BinRow[] {
+export type BinSpec = Pick<BinRow, 'id' | 'kind' | 'head' | 'material' | 'stemMaterial' | 'diameter32' | 'grip16' | 'length16' | 'drillSize' | 'name'>;
+
+export function sameSpecBins(db: Database, bin: BinSpec): BinRow[] {
   const { id, kind, head, material, stemMaterial, diameter32, grip16, length16, drillSize, name } = bin;
   return binStatements(db).sameSpec.all({ id, kind, head, material, stemMaterial, diameter32, grip16, length16, drillSize, name });
 }

@@ -8,9 +8,9 @@ import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { parseInput } from '../../lib/validate';
 import { orderQuantity, toBinDto } from './bin-dto';
-import { findBinByCode, insertBin, lastCountedAt, listBins, listLowBins, nextBinCode, sameSpecBins, updateBin, type NewBinRow } from './bins.repo';
+import { findBinByCode, insertBins, lastCountedAt, listBins, listLowBins, nextBinCode, sameSpecBins, updateBin, updateBins, type NewBinRow } from './bins.repo';
 import { binOrThrow } from './ledger.service';
-import { insertMovement, netDrawnBy } from './ledger.repo';
+import { insertMovements, netDrawnBy } from './ledger.repo';
 import { dollarsToE4, valueCents } from '@shared/stock/money';
 
 function withCounts(ctx: ServiceContext, rows: BinRow[]): Bin[] {
@@ -57,23 +57,50 @@ const codeTaken = (code: string) =>
 
 /** A new bin; opening stock becomes its first ledger entry, so on hand is the ledger's sum from the start. */
 export function createBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): Bin {
-  return getBin(ctx, insertNewBin(ctx, actor, input).code);
+  return getBin(ctx, insertNewBin(ctx, actor, input));
 }
 
-/** Writes a new bin and its opening stock, and returns the row (an import needs no more than its code). */
-export function insertNewBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): BinRow {
-  const at = ctx.now();
+/** Writes a new bin and its opening stock, and answers its code. */
+export function insertNewBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): string {
   return ctx.db.$client
     .transaction(() => {
       const code = input.code ?? nextBinCode(ctx.db);
       if (findBinByCode(ctx.db, code)) throw codeTaken(code);
-      const bin = insertBin(ctx.db, { ...(rowValues(input) as NewBinRow), code, name: input.name, createdAt: at, updatedAt: at, onHand: input.initialQuantity });
-      if (input.initialQuantity > 0) {
-        insertMovement(ctx.db, { binId: bin.id, kind: 'receive', quantity: input.initialQuantity, balanceAfter: input.initialQuantity, unitCostE4: bin.unitCostE4, at, actorId: actor.id, note: 'Opening stock' });
-      }
-      return bin;
+      writeNewBins(ctx, actor, [{ ...newBinRow(input, ctx.now()), code }]);
+      return code;
     })
     .immediate();
+}
+
+/** A new bin as it is written: stock on hand is its opening stock. The code is set before writing. */
+export function newBinRow(input: CreateBinInput, at: Date): NewBinRow {
+  return { ...(rowValues(input) as NewBinRow), code: input.code ?? '', name: input.name, createdAt: at, updatedAt: at, onHand: input.initialQuantity };
+}
+
+/**
+ * Writes new bins (rows from `newBinRow`, codes set) inside the caller's transaction: each one's
+ * opening stock is its first ledger entry, so on hand is the ledger's sum from the start.
+ */
+export function writeNewBins(ctx: ServiceContext, actor: UserRow, rows: readonly NewBinRow[]): void {
+  const ids = insertBins(ctx.db, rows);
+  insertMovements(
+    ctx.db,
+    rows.flatMap((bin, i) => {
+      const quantity = bin.onHand ?? 0;
+      const at = bin.createdAt ?? ctx.now();
+      return quantity > 0 ? [{ binId: ids[i]!, kind: 'receive' as const, quantity, balanceAfter: quantity, unitCostE4: bin.unitCostE4 ?? 0, at, actorId: actor.id, note: 'Opening stock' }] : [];
+    }),
+  );
+}
+
+/** What an update of a bin's descriptive fields writes (on hand is never among them). */
+export function binFieldsRow(fields: Partial<CreateBinInput>, at: Date): Partial<NewBinRow> {
+  return { ...rowValues(fields), updatedAt: at };
+}
+
+/** Writes many bins' changed fields (rows from `binFieldsRow`), inside the caller's transaction. */
+export function writeBinFields(ctx: ServiceContext, changes: readonly { id: number; set: Partial<NewBinRow> }[]): void {
+  updateBins(ctx.db, changes);
 }
 
 /** Changes the fields sent; on hand changes only through the ledger. The result must still be a valid bin of its kind. */

@@ -1,6 +1,7 @@
 import { and, desc, eq, gte, lt, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
 import type { Database, Executor } from '../../db/client';
+import { insertRows } from '../../db/bulk-write';
 import { preparedPerDatabase } from '../../db/prepared';
 import { binAlerts } from '../../db/schema/builds';
 import { assemblies, builds } from '../../db/schema/builds';
@@ -11,6 +12,11 @@ export type NewMovementRow = typeof stockMovements.$inferInsert;
 
 export function insertMovement(db: Executor, values: NewMovementRow): MovementRow {
   return db.insert(stockMovements).values(values).returning().get();
+}
+
+/** Many entries at once (the opening stock of an import's new bins). */
+export function insertMovements(db: Database, values: readonly NewMovementRow[]): void {
+  insertRows(db, stockMovements, values);
 }
 
 /** Who owns the build an assembly belongs to; undefined when there is no such assembly. */

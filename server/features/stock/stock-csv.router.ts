@@ -53,12 +53,12 @@ export function binCsvRouter({ nameAssemblies }: { nameAssemblies: NameAssemblie
     sendCsv(res, 'gripline-bins-template.csv', templateCsv());
   });
 
-  router.post('/import/preview', quartermaster, (req, res) => {
-    res.json(previewImport(req.ctx, csvOf(req)));
+  router.post('/import/preview', quartermaster, async (req, res) => {
+    res.json(await previewImport(req.ctx, csvOf(req)));
   });
 
-  router.post('/import', quartermaster, (req, res) => {
-    res.status(201).json(commitImport(req.ctx, requireUser(req), csvOf(req)));
+  router.post('/import', quartermaster, async (req, res) => {
+    res.status(201).json(await commitImport(req.ctx, requireUser(req), csvOf(req)));
   });
 
   router.get('/export.csv', quartermaster, (req, res) => {

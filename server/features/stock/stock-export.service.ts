@@ -1,12 +1,12 @@
 import type { LedgerExportQuery } from '@shared/schemas/bin-import';
-import type { Bin } from '@shared/schemas/bins';
+import type { Bin, CreateBinInput } from '@shared/schemas/bins';
 import type { ServiceContext } from '../../context';
 import { centsCell, textCell as text, toCsv, type CsvCell as Cell } from '../../lib/csv';
 import { HttpError } from '../../lib/http-error';
 import { binDesignation } from '@shared/stock/fasteners';
 import { toBinDto } from './bin-dto';
-import { BIN_COLUMNS, isNumericColumn } from './bin-csv';
-import { ALL_BINS } from './bin-import.service';
+import { BIN_COLUMNS, binCell } from './bin-csv';
+import { ALL_BINS } from './bin-import-check';
 import { listBins } from './bins.repo';
 import { listMovements } from './ledger.repo';
 import type { NameAssemblies } from './assembly-names';
@@ -16,11 +16,7 @@ import { e4ToDollars, valueCents } from '@shared/stock/money';
 const BIN_EXPORT_FIELDS = [...BIN_COLUMNS.map((c) => c.name), 'designation', 'on_hand'];
 
 function binCells(bin: Bin): Cell[] {
-  const cells = BIN_COLUMNS.map((c): Cell => {
-    const value = c.field === 'initialQuantity' ? bin.onHand : bin[c.field];
-    if (isNumericColumn(c)) return typeof value === 'number' ? value : null;
-    return text(value === null || value === undefined ? null : String(value));
-  });
+  const cells = BIN_COLUMNS.map((c) => binCell(c, c.field === 'initialQuantity' ? bin.onHand : bin[c.field]));
   return [...cells, text(bin.designation), bin.onHand];
 }
 
@@ -69,14 +65,18 @@ export function ledgerCsv(ctx: ServiceContext, nameAssemblies: NameAssemblies, r
   return toCsv(LEDGER_FIELDS, rows);
 }
 
-/** A header and two example bins: a blind rivet by its spec, and a screw by its name. */
+/**
+ * A header and two example bins, without codes (an import gives them the next free ones): a blind
+ * rivet by its spec and a screw by its name. The cells are written as the export writes them, so a
+ * template filled in and a file exported read alike.
+ */
 export function templateCsv(): string {
-  const examples: Record<string, Cell>[] = [
-    { kind: 'blind_structural', head: 'dome', material: '5056', stem_material: 'steel', diameter_32nds: '1/8', grip_dash: 2, unit: 'each', pack_size: 100, unit_cost: 0.12, supplier: 'Cedar Valley Fastener Supply', lead_time_days: 10, reorder_point: 200, reorder_qty: 500, location: 'Shelf A2', opening_stock: 500 },
-    { kind: 'Screw', name: 'Screw #8-32 × 1/2 pan head, stainless', unit: 'each', pack_size: 50, unit_cost: 0.09, supplier: 'Cedar Valley Fastener Supply', supplier_part: 'PS832-8', lead_time_days: 14, reorder_point: 40, reorder_qty: 100, location: 'Drawer C4', opening_stock: 120 },
+  const examples: Partial<Record<keyof CreateBinInput, unknown>>[] = [
+    { kind: 'blind_structural', head: 'dome', material: '5056', stemMaterial: 'steel', diameter32: 4, grip16: 2, unit: 'each', packSize: 100, unitCost: 0.12, supplier: 'Cedar Valley Fastener Supply', leadTimeDays: 10, reorderPoint: 200, reorderQty: 500, location: 'Shelf A2', initialQuantity: 500 },
+    { kind: 'screw', name: 'Screw #8-32 × 1/2 pan head, stainless', unit: 'each', packSize: 50, unitCost: 0.09, supplier: 'Cedar Valley Fastener Supply', supplierPart: 'PS832-8', leadTimeDays: 14, reorderPoint: 40, reorderQty: 100, location: 'Drawer C4', initialQuantity: 120 },
   ];
   return toCsv(
     BIN_COLUMNS.map((c) => c.name),
-    examples.map((e) => BIN_COLUMNS.map((c) => e[c.name] ?? null)),
+    examples.map((e) => BIN_COLUMNS.map((c) => binCell(c, e[c.field]))),
   );
 }

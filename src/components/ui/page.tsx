@@ -5,7 +5,7 @@ export function PageHeader({ title, lead, actions }: { title: string; lead?: Rea
     <header className="mb-5 flex flex-wrap items-end justify-between gap-3">
       <div>
         <h1 className="text-2xl font-bold tracking-tight">{title}</h1>
-        {lead && <p className="mt-1 text-steel">{lead}</p>}
+        {lead && <p className="mt-1 text-ink-soft">{lead}</p>}
       </div>
       {actions}
     </header>

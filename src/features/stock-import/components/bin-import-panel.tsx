@@ -10,12 +10,29 @@ import { messageOf } from '@/lib/errors';
 import { useCommitImport } from '../api/commit-import';
 import { usePreviewImport } from '../api/preview-import';
 import { TEMPLATE_CSV_URL } from '../utils/csv-links';
+import { importLabel } from '../utils/preview-words';
 import { ImportPreviewTable } from './import-preview-table';
 
 const MAX_PROBLEMS_LISTED = 10;
 
-const listCodes = (codes: readonly string[]) =>
-  codes.length <= 6 ? `Codes ${codes.join(', ')}` : `Codes ${codes.slice(0, 5).join(', ')} and ${codes.length - 5} more`;
+const listCodes = (codes: readonly string[]) => (codes.length <= 6 ? codes.join(', ') : `${codes.slice(0, 5).join(', ')} and ${codes.length - 5} more`);
+const bins = (n: number) => `${n} ${n === 1 ? 'bin' : 'bins'}`;
+
+function Imported({ result }: { result: ImportResult }) {
+  const title = [result.created.length > 0 && `Added ${bins(result.created.length)}`, result.updated.length > 0 && `updated ${bins(result.updated.length)}`].filter(Boolean).join(', ');
+  return (
+    <Notice tone="ok" title={title.charAt(0).toUpperCase() + title.slice(1)}>
+      {result.created.length > 0 && <p>New: {listCodes(result.created)}.</p>}
+      {result.updated.length > 0 && <p>Updated: {listCodes(result.updated)}.</p>}
+      {result.unchanged > 0 && <p>{bins(result.unchanged)} in the file already matched and stayed as they were.</p>}
+      <p>
+        <Link to="/bins" className="font-semibold underline underline-offset-4">
+          Open the bins
+        </Link>
+      </p>
+    </Notice>
+  );
+}
 
 function ImportRefused({ error }: { error: unknown }) {
   const issues = error instanceof ApiError ? error.issues : [];
@@ -34,8 +51,9 @@ function ImportRefused({ error }: { error: unknown }) {
 }
 
 /**
- * Choose or paste a bins CSV, check it row by row, then import all of it in one go. Import is
- * offered only for the text that was checked, and only when every row is ready.
+ * Choose or paste a bins CSV, check it row by row, then import all of it in one go: new bins, and
+ * updates to the bins whose codes the file names. Import is offered only for the text that was
+ * checked, only when every row is ready, and only when something would change.
  */
 export function BinImportPanel({ onImported }: { onImported?: (result: ImportResult) => unknown }) {
   const ids = useId();
@@ -45,6 +63,7 @@ export function BinImportPanel({ onImported }: { onImported?: (result: ImportRes
   const check = usePreviewImport();
   const commit = useCommitImport(onImported);
   const preview = check.data && check.variables?.csv === csv ? check.data : undefined;
+  const nothingToDo = preview !== undefined && !preview.canImport && preview.fileErrors.length === 0 && preview.counts.problem === 0 && preview.rows.length > 0;
 
   const edit = (text: string) => {
     setCsv(text);
@@ -82,7 +101,9 @@ export function BinImportPanel({ onImported }: { onImported?: (result: ImportRes
         <a href={TEMPLATE_CSV_URL} download className="font-semibold underline underline-offset-4">
           Download a template
         </a>{' '}
-        with every column and two example bins. Leave the code empty to give a bin the next free code.
+        with every column and two example bins, or export the bins below, change them in a spreadsheet and bring the file back. A row
+        with the code of a bin updates that bin; leave the code empty to add a new bin with the next free code. Stock on hand never
+        changes here: count a bin to correct it.
       </p>
       <div className="flex flex-col gap-1.5">
         <label htmlFor={`${ids}-file`} className="text-sm font-semibold">
@@ -99,21 +120,16 @@ export function BinImportPanel({ onImported }: { onImported?: (result: ImportRes
           Check file
         </Button>
         <Button busy={commit.isPending} disabled={!preview?.canImport} onClick={runImport}>
-          {preview?.canImport ? `Import ${preview.valid} ${preview.valid === 1 ? 'bin' : 'bins'}` : 'Import bins'}
+          {preview?.canImport ? importLabel(preview) : 'Import bins'}
         </Button>
       </div>
-      {!preview?.canImport && csv.trim() !== '' && <p className="text-sm text-steel">Import opens once the file is checked and every row is ready.</p>}
-      {commit.error && <ImportRefused error={commit.error} />}
-      {commit.data && (
-        <Notice tone="ok" title={`Imported ${commit.data.created} ${commit.data.created === 1 ? 'bin' : 'bins'}`}>
-          <p>
-            {listCodes(commit.data.codes)}.{' '}
-            <Link to="/bins" className="font-semibold underline underline-offset-4">
-              Open the bins
-            </Link>
-          </p>
-        </Notice>
+      {nothingToDo ? (
+        <Notice title="Nothing to import">Every row of the file already matches its bin.</Notice>
+      ) : (
+        !preview?.canImport && csv.trim() !== '' && <p className="text-sm text-ink-soft">Import opens once the file is checked and every row is ready.</p>
       )}
+      {commit.error && <ImportRefused error={commit.error} />}
+      {commit.data && <Imported result={commit.data} />}
       {preview && preview.fileErrors.length > 0 && (
         <Notice tone="bad" title="Problems with the file">
           <ul className="list-disc pl-5">

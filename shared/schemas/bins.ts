@@ -258,14 +258,20 @@ export const binSchema = z.object({
   location: z.string(),
   notes: z.string(),
   onHand: z.number(),
-  /** On hand at or below the reorder point. */
+  /** The one reorder rule (shared/forecast/reorder.ts) calls for an order: on hand and on order at or below the reorder point in force, or projected below safety stock. */
   low: z.boolean(),
-  /** What to order when low: the reorder quantity rounded up to whole packs (0 when not low). */
+  /** What to order now, in whole packs, by the one reorder rule; 0 when nothing (or when the quartermaster dismissed the bin's alert). */
   toOrder: z.number(),
+  /** Ordered and not yet received. */
+  onOrder: z.number(),
+  /** The reorder point in force: the forecast's, never below the one typed on the bin (`reorderPoint`). */
+  reorderAt: z.number(),
   stockValueCents: z.number(),
   lastCountedAt: z.string().nullable(),
 });
 export type Bin = z.infer<typeof binSchema>;
+/** A bin's part of the one reorder computation, as the planning feature hands it to stock. */
+export type BinReorder = Pick<Bin, 'low' | 'toOrder' | 'onOrder' | 'reorderAt'> & { orderCostCents: number };
 
 export const binListSchema = z.object({
   data: z.array(binSchema),

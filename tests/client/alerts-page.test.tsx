@@ -38,12 +38,12 @@ const CLOSED: Alert[] = [alertFixture(4, { state: 'closed', bin: SOLID, orderedA
 // Quantities in whole packs at each bin's unit cost: 2,000 × $0.08 = $160.00, 500 × $0.03 = $15.00, 500 × $0.30 = $150.00.
 const PURCHASE: PurchaseList = {
   data: [
-    { supplier: 'Cedar Hollow Aircraft Parts', lines: [{ alertId: 2, bin: SCREWS, quantity: 500, packs: 5, costCents: 15000 }], totalCents: 15000 },
+    { supplier: 'Cedar Hollow Aircraft Parts', lines: [{ alertId: 2, bin: SCREWS, quantity: 500, packs: 5, costCents: 15000, onOrder: 0 }], totalCents: 15000 },
     {
       supplier: 'Prairie Aero Supply',
       lines: [
-        { alertId: 1, bin: binBrief('B-0001'), quantity: 2000, packs: 8, costCents: 16000 },
-        { alertId: 5, bin: SOLID, quantity: 500, packs: 5, costCents: 1500 },
+        { alertId: 1, bin: binBrief('B-0001'), quantity: 2000, packs: 8, costCents: 16000, onOrder: 0 },
+        { alertId: 5, bin: SOLID, quantity: 500, packs: 5, costCents: 1500, onOrder: 0 },
       ],
       totalCents: 17500,
     },

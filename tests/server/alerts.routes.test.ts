@@ -193,8 +193,9 @@ describe('the purchase list', () => {
   async function threeLowBins() {
     const dome = await binRunningLow();
     const fat = await binRunningLow({ diameter32: 5 }, { ...hundredRivetLine, rivet: { ...hundredRivetLine.rivet, diameter32: 5 } });
-    // 250 screws this week against 200 on hand (lead time 7 days): reorder point 250, shortfall 50;
-    // EOQ √(2 × 500 × $15 / (25 % × $0.09)) = 816.5 → 17 packs of 50 = 850, $76.50.
+    // 250 screws this week against 200 on hand (lead time 7 days): reorder point 250;
+    // EOQ √(2 × 500 × $15 / (25 % × $0.09)) = 816.5 → Q = 817; order up to 250 + 817 = 1,067:
+    // 1,067 − 200 = 867 → 18 packs of 50 = 900, $81.00.
     const screws = await addBinAs(qm, screwBin({ supplierPart: '=HYPERLINK("http://x.test")' }));
     await addAssembly(member, { name: 'Tool chest', plannedStart: '2026-12-01', plannedFinish: '2026-12-06', extraItems: [{ binCode: screws.code, quantity: 250 }] });
     const { data } = await refresh();
@@ -213,8 +214,8 @@ describe('the purchase list', () => {
     expect(list.data.map((g) => g.supplier)).toEqual(['Cedar Valley Fastener Supply', 'Harbour Hardware Co.']);
     expect(list.data[0]!.lines).toEqual([expect.objectContaining({ bin: expect.objectContaining({ code: dome.code }), quantity: 500, packs: 5, costCents: 6000 })]);
     expect(list.data[0]!.totalCents).toBe(6000);
-    expect(list.data[1]!.lines).toEqual([expect.objectContaining({ bin: expect.objectContaining({ code: screws.code }), quantity: 850, packs: 17, costCents: 7650 })]);
-    expect(list.data[1]!.totalCents).toBe(7650);
+    expect(list.data[1]!.lines).toEqual([expect.objectContaining({ bin: expect.objectContaining({ code: screws.code }), quantity: 900, packs: 18, costCents: 8100 })]);
+    expect(list.data[1]!.totalCents).toBe(8100);
   });
 
   it('exports the list as CSV with formula-like text made harmless', async () => {
@@ -224,11 +225,11 @@ describe('the purchase list', () => {
     expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
     expect(res.headers['content-disposition']).toBe('attachment; filename="gripline-purchase-list-2026-12-01.csv"');
     const lines = res.text.replace(/^\uFEFF/, '').trim().split('\r\n');
-    expect(lines[0]).toBe('supplier,supplier_part,bin_code,designation,quantity,unit,pack_size,packs,unit_cost,cost,alert_id');
+    expect(lines[0]).toBe('supplier,supplier_part,bin_code,designation,quantity,unit,pack_size,packs,unit_cost,cost,on_order,alert_id');
     expect(lines).toHaveLength(4);
-    expect(lines[1]).toMatch(new RegExp(`^Cedar Valley Fastener Supply,,${dome.code},.*,500,each,100,5,0.12,60.00,\\d+$`));
+    expect(lines[1]).toMatch(new RegExp(`^Cedar Valley Fastener Supply,,${dome.code},.*,500,each,100,5,0.12,60.00,0,\\d+$`));
     expect(lines[2]).toMatch(new RegExp(`^Cedar Valley Fastener Supply,,${fat.code},`));
     expect(lines[3]).toContain(`Harbour Hardware Co.,"'=HYPERLINK(""http://x.test"")",${screws.code},`);
-    expect(lines[3]).toMatch(/,850,each,50,17,0.09,76.50,\d+$/);
+    expect(lines[3]).toMatch(/,900,each,50,18,0.09,81.00,0,\d+$/);
   });
 });

@@ -6,7 +6,7 @@ import type { ServiceContext } from '../../server/context';
 import { migrateDatabase, openDatabase } from '../../server/db/client';
 import type { UserRow } from '../../server/db/schema/users';
 import { assemblyNames } from '../../server/features/planning/assembly-catalogue';
-import { createBin } from '../../server/features/stock/bins.service';
+import { insertNewBin } from '../../server/features/stock/bins.service';
 import { findBinByCode } from '../../server/features/stock/bins.repo';
 import { ledgerSum } from '../../server/features/stock/ledger.repo';
 import { count, draw, ledgerFor, receive, returnUnused, reverse, writeOff } from '../../server/features/stock/ledger.service';
@@ -95,7 +95,7 @@ describe('the ledger under random sequences of movements', () => {
     fc.assert(
       fc.property(fc.integer({ min: 0, max: 200 }), fc.array(opArb, { minLength: 10, maxLength: 40 }), (opening, ops) => {
         {
-          const bin = createBin(ctx, people[0]!, createBinBodySchema.parse(blindRivetBin({ initialQuantity: opening })));
+          const bin = insertNewBin(ctx, people[0]!, createBinBodySchema.parse(blindRivetBin({ initialQuantity: opening })));
           const model = { onHand: opening, entries: ledgerFor(ctx, assemblyNames, bin.code).map((e) => ({ id: e.id, qty: e.quantity, member: null, kind: e.kind, reversed: false })) };
           for (const op of ops) {
             const result = apply(ctx, people, bin.code, op, model);
@@ -137,7 +137,7 @@ describe('the ledger under random sequences of movements', () => {
 
   it('keeps every entry: the database refuses to change or delete one', () => {
     const { db, ctx, people } = freshChapter();
-    const bin = createBin(ctx, people[0]!, createBinBodySchema.parse(blindRivetBin()));
+    const bin = insertNewBin(ctx, people[0]!, createBinBodySchema.parse(blindRivetBin()));
     const entry = draw(ctx, people[1]!, bin.code, { quantity: 10 });
     expect(() => db.$client.prepare('update stock_movements set quantity = 0 where id = ?').run(entry.id)).toThrow(/append-only/);
     expect(() => db.$client.prepare('delete from stock_movements where id = ?').run(entry.id)).toThrow(/append-only/);

@@ -1,5 +1,4 @@
 import { binForecast, type BinForecast } from '@shared/forecast/bin-forecast';
-import { suggestedOrder } from '@shared/forecast/inventory';
 import {
   HORIZON_WEEKS,
   spreadAssemblyDemand,
@@ -105,29 +104,13 @@ export function forecastBins(ctx: ServiceContext): ForecastRun {
       orderCost: settings.orderCost,
       holdingRate: settings.holdingRate,
       horizonWeeks: HORIZON_WEEKS,
+      // The points typed on the bin stay floors: the forecast may raise them, never lower them.
+      binReorderPoint: bin.reorderPoint,
+      binReorderQty: bin.reorderQty,
     });
-    return { bin, forecast: withBinFloor(forecast, bin), receipts: binReceipts };
+    return { bin, forecast, receipts: binReceipts };
   });
   return { now, weeks, settings, plans };
-}
-
-/**
- * The reorder point typed on the bin stays a floor: the forecast may raise it, never lower it, so
- * a bin on the Restock list is also on the Alerts page.
- */
-function withBinFloor(f: BinForecast, bin: BinRow): BinForecast {
-  if (bin.reorderPoint <= f.reorderPoint) return f;
-  const low = bin.onHand <= bin.reorderPoint;
-  if (!low || f.needsAlert) return { ...f, reorderPoint: bin.reorderPoint };
-  const shortfall = Math.max(f.shortfall, bin.reorderPoint - bin.onHand);
-  return {
-    ...f,
-    reorderPoint: bin.reorderPoint,
-    needsAlert: true,
-    shortfall,
-    suggestedOrder: suggestedOrder({ eoq: f.eoq, shortfall: Math.max(shortfall, bin.reorderQty), packSize: bin.packSize }),
-    reason: `On hand ${bin.onHand} is at or below the bin's own reorder point ${bin.reorderPoint}.`,
-  };
 }
 
 const rounder = (places: number) => {

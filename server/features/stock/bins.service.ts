@@ -1,4 +1,4 @@
-import type { BinForYou, BinList, BinListQuery, CreateBinInput, RestockItem, UpdateBinBody, Bin, BinAction } from '@shared/schemas/bins';
+import type { BinForYou, BinList, BinListQuery, BinReorder, CreateBinInput, RestockItem, UpdateBinBody, Bin, BinAction } from '@shared/schemas/bins';
 import { hasRole } from '@shared/roles';
 import { z } from 'zod';
 import { binKindRules } from '@shared/schemas/bins';
@@ -7,27 +7,32 @@ import type { BinRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { parseInput } from '../../lib/validate';
-import { orderQuantity, toBinDto } from './bin-dto';
-import { findBinByCode, insertBin, lastCountedAt, listBins, listLowBins, nextBinCode, sameSpecBins, updateBin, type NewBinRow } from './bins.repo';
+import { toBinDto } from './bin-dto';
+import { nothingToOrder, type ReordersOf } from './bin-reorders';
+import { allBinsBySupplier, findBinByCode, insertBin, lastCountedAt, listBins, nextBinCode, sameSpecBins, updateBin, type NewBinRow } from './bins.repo';
 import { binOrThrow } from './ledger.service';
 import { insertMovement, netDrawnBy } from './ledger.repo';
-import { dollarsToE4, valueCents } from '@shared/stock/money';
+import { dollarsToE4 } from '@shared/stock/money';
 
-function withCounts(ctx: ServiceContext, rows: BinRow[]): Bin[] {
+/** Bins as the API shows them: with when each was last counted and what the one reorder rule orders now. */
+function withCounts(ctx: ServiceContext, reorders: ReadonlyMap<number, BinReorder>, rows: BinRow[]): Bin[] {
   const counted = lastCountedAt(ctx.db, rows.map((r) => r.id));
-  return rows.map((r) => toBinDto(r, counted.get(r.id)));
+  return rows.map((r) => toBinDto(r, reorders.get(r.id) ?? nothingToOrder(r.reorderPoint), counted.get(r.id)));
 }
 
-export function listBinPage(ctx: ServiceContext, query: BinListQuery): BinList {
-  const { rows, total } = listBins(ctx.db, query);
-  return { data: withCounts(ctx, rows), meta: { total, page: query.page, pageSize: query.pageSize } };
+/** A page of bins; "low only" means what the reorder rule calls low, as on Restock. */
+export function listBinPage(ctx: ServiceContext, reordersOf: ReordersOf, query: BinListQuery): BinList {
+  const reorders = reordersOf(ctx);
+  const lowIds = query.low ? [...reorders].filter(([, r]) => r.low).map(([id]) => id) : undefined;
+  const { rows, total } = listBins(ctx.db, query, lowIds);
+  return { data: withCounts(ctx, reorders, rows), meta: { total, page: query.page, pageSize: query.pageSize } };
 }
 
-export function getBin(ctx: ServiceContext, code: string): Bin {
-  return withCounts(ctx, [binOrThrow(ctx.db, code)])[0]!;
+export function getBin(ctx: ServiceContext, reordersOf: ReordersOf, code: string): Bin {
+  return withCounts(ctx, reordersOf(ctx), [binOrThrow(ctx.db, code)])[0]!;
 }
 
-export function getBinForYou(ctx: ServiceContext, user: UserRow, code: string): BinForYou {
+export function getBinForYou(ctx: ServiceContext, reordersOf: ReordersOf, user: UserRow, code: string): BinForYou {
   const bin = binOrThrow(ctx.db, code);
   const yourNetDrawn = netDrawnBy(ctx.db, bin.id, user.id);
   const quartermaster = hasRole(user.role, 'quartermaster');
@@ -39,7 +44,7 @@ export function getBinForYou(ctx: ServiceContext, user: UserRow, code: string): 
   if (quartermaster && bin.onHand > 0 && others.length > 0) actions.push('move');
   if (quartermaster && bin.onHand > 0) actions.push('write_off');
   return {
-    ...withCounts(ctx, [bin])[0]!,
+    ...withCounts(ctx, reordersOf(ctx), [bin])[0]!,
     forYou: { actions, yourNetDrawn, sameSpecBins: others.map((b) => ({ code: b.code, location: b.location, onHand: b.onHand })) },
   };
 }
@@ -56,8 +61,8 @@ const codeTaken = (code: string) =>
   new HttpError(409, 'BIN_CODE_TAKEN', `The code ${code} is already on another bin. Leave the code empty to get the next free one.`, [{ path: 'code', message: `${code} is taken.` }]);
 
 /** A new bin; opening stock becomes its first ledger entry, so on hand is the ledger's sum from the start. */
-export function createBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): Bin {
-  return getBin(ctx, insertNewBin(ctx, actor, input).code);
+export function createBin(ctx: ServiceContext, reordersOf: ReordersOf, actor: UserRow, input: CreateBinInput): Bin {
+  return getBin(ctx, reordersOf, insertNewBin(ctx, actor, input).code);
 }
 
 /** Writes a new bin and its opening stock, and returns the row (an import needs no more than its code). */
@@ -77,21 +82,23 @@ export function insertNewBin(ctx: ServiceContext, actor: UserRow, input: CreateB
 }
 
 /** Changes the fields sent; on hand changes only through the ledger. The result must still be a valid bin of its kind. */
-export function editBin(ctx: ServiceContext, code: string, change: UpdateBinBody): Bin {
+export function editBin(ctx: ServiceContext, reordersOf: ReordersOf, code: string, change: UpdateBinBody): Bin {
   const bin = binOrThrow(ctx.db, code);
   const values = rowValues(change);
   parseInput(wholeBin, { ...bin, ...values });
   updateBin(ctx.db, bin.id, { ...values, updatedAt: ctx.now() });
-  return getBin(ctx, code);
+  return getBin(ctx, reordersOf, code);
 }
 
 /** An edited bin must still be a valid bin of its kind (a rivet keeps its spec, a screw its name). */
 const wholeBin = z.looseObject({}).superRefine((b, ctx) => binKindRules(b, ctx));
 
-/** The quartermaster's Restock list: low bins with whole packs to order, by supplier. */
-export function restockList(ctx: ServiceContext): RestockItem[] {
-  return withCounts(ctx, listLowBins(ctx.db)).map((bin) => {
-    const quantity = orderQuantity(bin);
-    return { ...bin, toOrder: quantity, packsToOrder: quantity / bin.packSize, orderCostCents: valueCents(quantity, dollarsToE4(bin.unitCost)) };
+/** The quartermaster's Restock list: what the one reorder rule orders now, in whole packs, by supplier. */
+export function restockList(ctx: ServiceContext, reordersOf: ReordersOf): RestockItem[] {
+  const reorders = reordersOf(ctx);
+  const rows = allBinsBySupplier(ctx.db).filter((b) => (reorders.get(b.id)?.toOrder ?? 0) > 0);
+  return withCounts(ctx, reorders, rows).map((bin) => {
+    const { orderCostCents } = reorders.get(bin.id)!;
+    return { ...bin, packsToOrder: bin.toOrder / bin.packSize, orderCostCents };
   });
 }

@@ -7,10 +7,11 @@ import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { isUniqueViolation } from '../../lib/sqlite-errors';
 import { findBinByCode, findBinById, sameSpecBins, updateBin } from './bins.repo';
-import { assemblyOwnerId, closeActiveAlert, findMovement, findPairedWith, findReversalOf, insertMovement, listMovements, netDrawnBy, setOnHand, type LedgerRow } from './ledger.repo';
+import { assemblyOwnerId, findMovement, findPairedWith, findReversalOf, insertMovement, listMovements, netDrawnBy, setOnHand, type LedgerRow } from './ledger.repo';
 import { dollarsToE4, e4ToDollars, valueCents } from '@shared/stock/money';
 import { slipExists } from './slips.repo';
 import { withAssemblyNames, type NameAssemblies } from './assembly-names';
+import { receiptOnBin } from '../../reorder-alerts/alert-state';
 
 export function binOrThrow(db: Database, code: string): BinRow {
   const bin = findBinByCode(db, code);
@@ -153,7 +154,7 @@ export function receive(ctx: ServiceContext, actor: UserRow, code: string, body:
     const unitCostE4 = body.unitCost !== undefined ? dollarsToE4(body.unitCost) : bin.unitCostE4;
     if (unitCostE4 !== bin.unitCostE4) Object.assign(bin, updateBin(ctx.db, bin.id, { unitCostE4, updatedAt: at }));
     const row = post(ctx.db, bin, { kind: 'receive', quantity: body.quantity, actor, at, unitCostE4, note: body.note, slipId: body.slipId }, 'receive');
-    closeActiveAlert(ctx.db, bin.id, row.id, at);
+    receiptOnBin(ctx.db, bin.id, { event: 'receive', at, quantity: body.quantity, movementId: row.id });
     return row.id;
   });
   return loadMovement(ctx, id);

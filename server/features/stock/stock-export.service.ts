@@ -1,10 +1,9 @@
 import type { LedgerExportQuery } from '@shared/schemas/bin-import';
-import type { Bin } from '@shared/schemas/bins';
 import type { ServiceContext } from '../../context';
 import { centsCell, textCell as text, toCsv, type CsvCell as Cell } from '../../lib/csv';
 import { HttpError } from '../../lib/http-error';
 import { binDesignation } from '@shared/stock/fasteners';
-import { toBinDto } from './bin-dto';
+import { toBinFields, type BinFields } from './bin-dto';
 import { BIN_COLUMNS, isNumericColumn } from './bin-csv';
 import { ALL_BINS } from './bin-import.service';
 import { listBins } from './bins.repo';
@@ -15,7 +14,7 @@ import { e4ToDollars, valueCents } from '@shared/stock/money';
 /** The export's columns are the import's, so a file exported from one chapter imports into another. */
 const BIN_EXPORT_FIELDS = [...BIN_COLUMNS.map((c) => c.name), 'designation', 'on_hand'];
 
-function binCells(bin: Bin): Cell[] {
+function binCells(bin: BinFields): Cell[] {
   const cells = BIN_COLUMNS.map((c): Cell => {
     const value = c.field === 'initialQuantity' ? bin.onHand : bin[c.field];
     if (isNumericColumn(c)) return typeof value === 'number' ? value : null;
@@ -26,7 +25,7 @@ function binCells(bin: Bin): Cell[] {
 
 /** Every bin, opening stock set to what is on hand now. */
 export function binsCsv(ctx: ServiceContext): string {
-  const bins = listBins(ctx.db, ALL_BINS).rows.map((row) => toBinDto(row));
+  const bins = listBins(ctx.db, ALL_BINS).rows.map((row) => toBinFields(row));
   return toCsv(BIN_EXPORT_FIELDS, bins.map(binCells));
 }
 

@@ -86,6 +86,48 @@ describe('reorder alerts', () => {
     expect((await refresh()).raised).toBe(0);
   });
 
+  it('keeps the rest of a partly received order on order, and closes the alert when all of it has come', async () => {
+    const bin = await binRunningLow();
+    const alert = (await refresh()).data[0]!;
+    await post(qm, `/api/alerts/${alert.id}/ordered`, { quantity: 500, expectedAt: '2026-12-10' });
+
+    const first = await post(qm, `/api/bins/${bin.code}/receive`, { quantity: 200, note: 'first box of three' });
+    expect(first.status).toBe(201);
+    const [partly] = await alertsIn('active');
+    expect(partly).toMatchObject({ id: alert.id, state: 'ordered', orderedQty: 500, receivedQty: 200, onOrder: 300, toOrder: 0, closedAt: null });
+    // The rest counts as on order everywhere, so nothing is ordered twice.
+    const forecast = (await qm.agent.get(`/api/forecast?bins=${bin.code}`)).body.data[0];
+    expect(forecast.expectedReceipts).toEqual([{ week: 1, quantity: 300 }]);
+    expect((await qm.agent.get(`/api/bins/${bin.code}`)).body).toMatchObject({ onHand: 300, onOrder: 300, toOrder: 0 });
+    expect((await qm.agent.get('/api/bins/restock')).body.data).toEqual([]);
+    expect((await refresh()).raised).toBe(0);
+
+    const rest = await post(qm, `/api/bins/${bin.code}/receive`, { quantity: 300 });
+    const [closed] = await alertsIn('closed');
+    expect(closed).toMatchObject({ id: alert.id, state: 'closed', receivedQty: 500, onOrder: 0, closedAt: '2026-12-01T12:00:00.000Z' });
+    expect(t.db.select().from(binAlerts).where(eq(binAlerts.id, alert.id)).get()).toMatchObject({ closedByMovementId: rest.body.id, closedById: null });
+  });
+
+  it('lets the quartermaster close an order whose rest will not come, and only an ordered one', async () => {
+    const bin = await binRunningLow();
+    const alert = (await refresh()).data[0]!;
+    const notOrdered = await post(qm, `/api/alerts/${alert.id}/close`);
+    expect(notOrdered.status).toBe(409);
+    expect(notOrdered.body.error).toMatchObject({ code: 'ALERT_NOT_ORDERED', message: 'The alert for B-0001 is still to order: only an alert already ordered can be closed by hand.' });
+    await post(qm, `/api/alerts/${alert.id}/ordered`, { quantity: 500, expectedAt: '2026-12-10' });
+    await post(qm, `/api/bins/${bin.code}/receive`, { quantity: 200 });
+    expect((await post(member, `/api/alerts/${alert.id}/close`)).status).toBe(403);
+    expect((await post(qm, `/api/alerts/${alert.id}/close`, { reason: 'x' })).status).toBe(400);
+
+    const closed = await post(qm, `/api/alerts/${alert.id}/close`);
+    expect(closed.status).toBe(200);
+    expect(closed.body).toMatchObject({ state: 'closed', orderedQty: 500, receivedQty: 200, onOrder: 0, closedAt: '2026-12-01T12:00:00.000Z' });
+    expect(t.db.select().from(binAlerts).where(eq(binAlerts.id, alert.id)).get()?.closedById).toBe(closed.body.orderedBy.id);
+    // Nothing stays on order: the forecast expects no receipt, and the 300 on hand still cover the plan.
+    expect((await qm.agent.get(`/api/forecast?bins=${bin.code}`)).body.data[0].expectedReceipts).toEqual([]);
+    expect((await post(qm, `/api/alerts/${alert.id}/close`)).status).toBe(409);
+  });
+
   it('closes an open alert too when stock is received before anyone marked it ordered', async () => {
     const bin = await binRunningLow();
     const { data } = await refresh();

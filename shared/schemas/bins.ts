@@ -320,8 +320,20 @@ export type Movement = z.infer<typeof movementSchema>;
 export const assemblyNameSchema = z.strictObject({ name: z.string(), buildName: z.string() });
 export type AssemblyName = z.infer<typeof assemblyNameSchema>;
 
-/** A bin's ledger entry as listed: the movement with its assembly named (null when it names none). */
-export const ledgerEntrySchema = movementSchema.extend({ assembly: assemblyNameSchema.nullable() });
+/**
+ * A bin's ledger entry as listed: the movement with its assembly named (null when it names none).
+ * A member sees their own entries in full; another person's entry is `masked`: kind, quantity,
+ * balance, times and links stay, while who (actor, member), what it cost (unitCost, valueCents),
+ * the assembly and the note are null or empty, so no one's tab can be rebuilt from a bin.
+ * Quartermasters and leads see every entry in full.
+ */
+export const ledgerEntrySchema = movementSchema.extend({
+  assembly: assemblyNameSchema.nullable(),
+  masked: z.boolean(),
+  actor: person.nullable(),
+  unitCost: z.number().nullable(),
+  valueCents: z.number().nullable(),
+});
 export type LedgerEntry = z.infer<typeof ledgerEntrySchema>;
 
 export const ledgerSchema = z.object({ data: z.array(ledgerEntrySchema) });

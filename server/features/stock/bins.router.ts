@@ -75,7 +75,7 @@ export function binsRouter({ runQueuedAction, nameAssemblies, reordersOf }: { ru
   router.get('/:code/ledger', (req, res) => {
     const q = parseInput(ledgerQuerySchema, req.query, 'query');
     const to = q.to ? new Date(dayStart(q.to).getTime() + DAY_MS) : undefined;
-    res.json({ data: ledgerFor(req.ctx, nameAssemblies, code(req.params), q.from ? dayStart(q.from) : undefined, to, q.limit) });
+    res.json({ data: ledgerFor(req.ctx, nameAssemblies, requireUser(req), code(req.params), q.from ? dayStart(q.from) : undefined, to, q.limit) });
   });
 
   router.post('/:code/draw', (req, res) =>

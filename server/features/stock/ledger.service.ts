@@ -4,6 +4,7 @@ import type { ServiceContext } from '../../context';
 import type { Database, Executor } from '../../db/client';
 import type { BinRow, MovementRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
+import { hasRole } from '@shared/roles';
 import { HttpError } from '../../lib/http-error';
 import { isUniqueViolation } from '../../lib/sqlite-errors';
 import { findBinByCode, findBinById, sameSpecBins, updateBin } from './bins.repo';
@@ -270,7 +271,21 @@ function binById(db: Executor, id: number): BinRow {
   return bin;
 }
 
-export function ledgerFor(ctx: ServiceContext, nameAssemblies: NameAssemblies, code: string, from?: Date, to?: Date, limit?: number): LedgerEntry[] {
+/** A member's own entry: on their tab (member), or one they made that is on no one's tab. */
+const isOwnEntry = (m: Movement, viewer: UserRow) => (m.member ? m.member.id === viewer.id : m.actor.id === viewer.id);
+
+/** Another person's entry as a member sees it: what moved and when, not who, what for or what it cost. */
+function masked(m: Movement): LedgerEntry {
+  return { ...m, masked: true, actor: null, member: null, unitCost: null, valueCents: null, assemblyId: null, assembly: null, note: '' };
+}
+
+/** A bin's ledger, newest first; a member sees others' entries masked (see ledgerEntrySchema). */
+export function ledgerFor(ctx: ServiceContext, nameAssemblies: NameAssemblies, viewer: UserRow, code: string, from?: Date, to?: Date, limit?: number): LedgerEntry[] {
   const bin = binOrThrow(ctx.db, code);
-  return withAssemblyNames(ctx.db, nameAssemblies, listMovements(ctx.db, { binId: bin.id, from, to, limit }).map(movementDto));
+  const entries = listMovements(ctx.db, { binId: bin.id, from, to, limit }).map(movementDto);
+  const seesAll = hasRole(viewer.role, 'quartermaster');
+  const shown = seesAll ? entries : entries.filter((m) => isOwnEntry(m, viewer));
+  const names = withAssemblyNames(ctx.db, nameAssemblies, shown);
+  const full = new Map(names.map((e) => [e.id, { ...e, masked: false }]));
+  return entries.map((m) => full.get(m.id) ?? masked(m));
 }

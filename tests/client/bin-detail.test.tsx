@@ -73,12 +73,12 @@ const MY_ASSEMBLIES = [
  * A small fake of the bins API: GET answers the current bin, and a successful movement changes
  * its on hand, so the page is seen to refresh. `answer` may take over a POST.
  */
-function serve(role: Role, opts: { bin?: BinForYou; answer?: (call: FakeCall) => { status: number; body?: unknown } | undefined } = {}) {
+function serve(role: Role, opts: { bin?: BinForYou; ledger?: LedgerEntry[]; answer?: (call: FakeCall) => { status: number; body?: unknown } | undefined } = {}) {
   let bin = opts.bin ?? binFor(role);
   const calls = fakeFetch((call) => {
     if (call.path === '/api/auth/me') return { status: 200, body: { user: { ...PEOPLE[role], email: `${role}@example.org`, role } } };
     if (call.method === 'GET' && call.path === '/api/bins/B-0107') return { status: 200, body: bin };
-    if (call.method === 'GET' && call.path === '/api/bins/B-0107/ledger') return { status: 200, body: { data: LEDGER } };
+    if (call.method === 'GET' && call.path === '/api/bins/B-0107/ledger') return { status: 200, body: { data: opts.ledger ?? LEDGER } };
     if (call.method === 'GET' && call.path === '/api/assemblies?mine=true') return { status: 200, body: { data: MY_ASSEMBLIES } };
     if (call.method !== 'POST') return undefined;
     const taken = opts.answer?.(call);
@@ -255,6 +255,19 @@ describe('the ledger on the bin page', () => {
     // A draw for an assembly names it and its build; an entry for none says nothing of one.
     expect(draw.textContent).toContain('for Left aileron · Two-seat kit');
     expect(document.getElementById('entry-9')!.textContent).not.toContain(' for ');
+  });
+
+  it('shows a member another person’s entry as the server masks it: what moved, without a name or a value', async () => {
+    const other = entry({ id: 13, kind: 'draw', quantity: -25, balanceAfter: 95, masked: true, actor: null, member: null, unitCost: null, valueCents: null });
+    serve('member', { ledger: [other, ...LEDGER] });
+    await renderBinPage();
+    await screen.findByRole('link', { name: 'reverses #11' });
+    const text = document.getElementById('entry-13')!.textContent;
+    expect(text).toContain('Drawn −25');
+    expect(text).toContain('balance 95');
+    expect(text).toContain('another person');
+    expect(text).not.toContain('$');
+    expect(text).not.toContain(' at ');
   });
 
   it('lets the quartermaster reverse only entries that can be, with a reason', async () => {

@@ -242,6 +242,21 @@ describe('the bin page', () => {
   });
 });
 
+describe('what to order, on the bin page', () => {
+  it('shows the quartermaster the one reorder rule’s quantity and what is already on order', async () => {
+    const low = { ...binFor('quartermaster', {}, 40), low: true, toOrder: 300, onOrder: 200, reorderAt: 260 };
+    serve('quartermaster', { bin: low });
+    await renderBinPage();
+    expect(screen.getByTestId('bin-on-order').textContent).toBe('200 each on order');
+    const notice = screen.getByText(/^Only 40 each left/);
+    expect(notice.textContent).toBe(
+      'Only 40 each left, with 200 each on order, at or below the reorder point of 260 or short of what planned work needs. Order 300 each (3 packs of 100) from Prairie Aero Supply.',
+    );
+    // The point in force, and the bin's own when planned work raises it.
+    expect(screen.getByText(/planned work raises the bin’s own 50|planned work raises the bin's own 50/)).toBeTruthy();
+  });
+});
+
 describe('the ledger on the bin page', () => {
   it('links a reversal and the entry it reverses, and shows signed quantities and balances', async () => {
     serve('member');

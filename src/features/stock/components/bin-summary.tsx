@@ -4,13 +4,16 @@ import { Notice } from '@/components/ui/notice';
 import { Code } from '@/components/ui/page';
 import { formatCents, formatCount, formatDate, formatQuantity, formatUnitCost, gripRangeText } from '../utils/format';
 
+/** Why the bin needs ordering and, for the quartermaster, what to order: the one reorder rule's numbers, as on Restock. */
 function lowStockWords(bin: Bin, isQuartermaster: boolean): string {
   const level = bin.onHand === 0 ? `${bin.code} is empty` : `Only ${formatQuantity(bin.onHand, bin.unit)} left`;
-  const point = `, at or below the reorder point of ${formatCount(bin.reorderPoint)}.`;
-  if (!isQuartermaster) return `${level}${point} The quartermaster has it on the Restock list.`;
+  const onOrder = bin.onOrder > 0 ? `, with ${formatQuantity(bin.onOrder, bin.unit)} on order` : '';
+  const point = `${level}${onOrder}, at or below the reorder point of ${formatCount(bin.reorderAt)} or short of what planned work needs.`;
+  if (bin.toOrder === 0) return `${point} The quartermaster dismissed its reorder alert.`;
+  if (!isQuartermaster) return `${point} The quartermaster has it on the Restock list.`;
   const packs = bin.toOrder / bin.packSize;
   const order = bin.packSize > 1 ? `${formatQuantity(bin.toOrder, bin.unit)} (${formatCount(packs)} pack${packs === 1 ? '' : 's'} of ${formatCount(bin.packSize)})` : formatQuantity(bin.toOrder, bin.unit);
-  return `${level}${point} Order ${order}${bin.supplier ? ` from ${bin.supplier}` : ''}.`;
+  return `${point} Order ${order}${bin.supplier ? ` from ${bin.supplier}` : ''}.`;
 }
 
 /** The top of a scanned bin's screen: what it holds, how many, and whether it runs low. */
@@ -34,6 +37,7 @@ export function BinSummary({ bin, isQuartermaster }: { bin: Bin; isQuartermaster
           </span>
         </p>
         {bin.packSize > 1 && <p className="text-steel">packs of {formatCount(bin.packSize)}</p>}
+        {bin.onOrder > 0 && <p data-testid="bin-on-order">{formatQuantity(bin.onOrder, bin.unit)} on order</p>}
       </div>
       {bin.low && (
         <Notice tone="warn" title={bin.onHand === 0 ? 'Empty' : 'Low stock'}>
@@ -68,7 +72,10 @@ export function BinDetails({ bin, isQuartermaster }: { bin: Bin; isQuartermaster
           </>
         )}
         <dt className="text-steel">Reorder point</dt>
-        <dd>{formatCount(bin.reorderPoint)}</dd>
+        <dd>
+          {formatCount(bin.reorderAt)}
+          {bin.reorderAt > bin.reorderPoint && <span className="text-steel"> (planned work raises the bin&apos;s own {formatCount(bin.reorderPoint)})</span>}
+        </dd>
         <dt className="text-steel">Unit cost</dt>
         <dd>
           <Code>{formatUnitCost(bin.unitCost)}</Code> per {bin.unit === 'each' ? 'piece' : bin.unit}

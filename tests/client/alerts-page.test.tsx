@@ -107,7 +107,7 @@ describe('Alerts page', () => {
     expect(figures(b3)['On order']).toBe('200 each');
     expect(within(b3).queryByRole('button', { name: 'Mark ordered' })).toBeNull();
     // The rest of a partly received order can be closed by hand.
-    expect(within(b3).getByRole('button', { name: 'Close the order for B-0003: the rest will not come' })).toBeTruthy();
+    expect(within(b3).getByRole('button', { name: 'Close order for B-0003: the rest will not come' })).toBeTruthy();
     // An order that fell through may still be dismissed.
     expect(within(b3).getByRole('button', { name: 'Dismiss' })).toBeTruthy();
   });
@@ -173,7 +173,7 @@ describe('Alerts page', () => {
       method === 'POST' && path === '/api/alerts/3/close' ? { status: 200, body: { ...ACTIVE[2], state: 'closed', onOrder: 0, closedAt: '2027-01-05T10:00:00.000Z' } } : undefined,
     );
     await screen.findByRole('heading', { name: 'Reorder alerts', level: 1 });
-    await userEvent.click(within(alertCard('B-0003')).getByRole('button', { name: 'Close the order for B-0003: the rest will not come' }));
+    await userEvent.click(within(alertCard('B-0003')).getByRole('button', { name: 'Close order for B-0003: the rest will not come' }));
     await waitFor(() => expect(calls.filter((c) => c.method === 'POST')).toHaveLength(1));
     expect(calls.find((c) => c.method === 'POST')).toMatchObject({ path: '/api/alerts/3/close' });
   });

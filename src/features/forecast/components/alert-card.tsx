@@ -100,7 +100,7 @@ export function AlertCard({ alert }: { alert: Alert }) {
         <div className="flex flex-wrap gap-2">
           {alert.state === 'open' && <Button onClick={() => setOpen('ordered')}>Mark ordered</Button>}
           {alert.state === 'ordered' && (
-            <Button variant="secondary" onClick={closeByHand} busy={closeOrder.isPending} aria-label={`Close the order for ${bin.code}: the rest will not come`}>
+            <Button variant="secondary" onClick={closeByHand} busy={closeOrder.isPending} aria-label={`Close order for ${bin.code}: the rest will not come`}>
               Close order
             </Button>
           )}

@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { reorderDecision, type ReorderInput } from '@shared/forecast/reorder';
 
@@ -39,5 +40,30 @@ describe('the one reorder rule', () => {
 
   it('refuses a pack size that is not a whole number', () => {
     expect(() => reorderDecision({ ...bin, packSize: 2.5 })).toThrow(RangeError);
+  });
+
+  it('orders the fewest whole packs that bring the position up to S, and nothing above s', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 0, max: 20_000 }),
+        fc.integer({ min: 0, max: 5000 }),
+        fc.integer({ min: 1, max: 500 }),
+        fc.integer({ min: 0, max: 3000 }),
+        fc.integer({ min: 0, max: 3000 }),
+        fc.double({ min: 0, max: 5000, noNaN: true }),
+        (onHand, onOrder, packSize, forecastReorderPoint, binReorderQty, eoq) => {
+          const d = reorderDecision({ ...bin, onHand, onOrder, packSize, forecastReorderPoint, binReorderQty, eoq });
+          expect(d.quantity % packSize).toBe(0);
+          if (!d.order) {
+            expect(d.quantity).toBe(0);
+            expect(d.reorderPoint === 0 || d.inventoryPosition > d.reorderPoint).toBe(true);
+          } else {
+            expect(d.inventoryPosition).toBeLessThanOrEqual(d.reorderPoint);
+            expect(d.inventoryPosition + d.quantity).toBeGreaterThanOrEqual(d.orderUpTo);
+            expect(d.quantity === packSize || d.inventoryPosition + d.quantity - packSize < d.orderUpTo).toBe(true);
+          }
+        },
+      ),
+    );
   });
 });

@@ -2,7 +2,7 @@ import { QueryClient } from '@tanstack/react-query';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { beforeEach, describe, expect, it } from 'vitest';
-import type { BinForYou, LedgerEntry } from '@shared/schemas/bins';
+import type { BinForYou, BinReorder, LedgerEntry } from '@shared/schemas/bins';
 import { BinDetailRoute, binDetailLoader } from '@/app/routes/app/bin-detail';
 import { ScanRoute } from '@/app/routes/app/scan';
 import { authKeys } from '@/features/auth/api/keys';
@@ -73,11 +73,12 @@ const MY_ASSEMBLIES = [
  * A small fake of the bins API: GET answers the current bin, and a successful movement changes
  * its on hand, so the page is seen to refresh. `answer` may take over a POST.
  */
-function serve(role: Role, opts: { bin?: BinForYou; ledger?: LedgerEntry[]; answer?: (call: FakeCall) => { status: number; body?: unknown } | undefined } = {}) {
+function serve(role: Role, opts: { bin?: BinForYou; reorder?: BinReorder; ledger?: LedgerEntry[]; answer?: (call: FakeCall) => { status: number; body?: unknown } | undefined } = {}) {
   let bin = opts.bin ?? binFor(role);
   const calls = fakeFetch((call) => {
     if (call.path === '/api/auth/me') return { status: 200, body: { user: { ...PEOPLE[role], email: `${role}@example.org`, role } } };
     if (call.method === 'GET' && call.path === '/api/bins/B-0107') return { status: 200, body: bin };
+    if (call.method === 'GET' && call.path === '/api/bins/B-0107/reorder') return { status: 200, body: opts.reorder ?? { low: false, toOrder: 0, onOrder: 0, reorderAt: 50, orderCostCents: 0 } };
     if (call.method === 'GET' && call.path === '/api/bins/B-0107/ledger') return { status: 200, body: { data: opts.ledger ?? LEDGER } };
     if (call.method === 'GET' && call.path === '/api/assemblies?mine=true') return { status: 200, body: { data: MY_ASSEMBLIES } };
     if (call.method !== 'POST') return undefined;
@@ -244,11 +245,10 @@ describe('the bin page', () => {
 
 describe('what to order, on the bin page', () => {
   it('shows the quartermaster the one reorder rule’s quantity and what is already on order', async () => {
-    const low = { ...binFor('quartermaster', {}, 40), low: true, toOrder: 300, onOrder: 200, reorderAt: 260 };
-    serve('quartermaster', { bin: low });
+    serve('quartermaster', { bin: binFor('quartermaster', {}, 40), reorder: { low: true, toOrder: 300, onOrder: 200, reorderAt: 260, orderCostCents: 3900 } });
     await renderBinPage();
-    expect(screen.getByTestId('bin-on-order').textContent).toBe('200 each on order');
-    const notice = screen.getByText(/^Only 40 each left/);
+    expect((await screen.findByTestId('bin-on-order')).textContent).toBe('200 each on order');
+    const notice = await screen.findByText(/^Only 40 each left/);
     expect(notice.textContent).toBe(
       'Only 40 each left, with 200 each on order, at or below the reorder point of 260 or short of what planned work needs. Order 300 each (3 packs of 100) from Prairie Aero Supply.',
     );

@@ -36,6 +36,7 @@ export function binFixture(code: string, over: Partial<Bin> = {}): Bin {
     toOrder: 0,
     onOrder: 0,
     reorderAt: 100,
+    orderCostCents: 0,
     stockValueCents: 0,
     lastCountedAt: null,
     ...over,

@@ -98,7 +98,8 @@ describe('reorder alerts', () => {
     // The rest counts as on order everywhere, so nothing is ordered twice.
     const forecast = (await qm.agent.get(`/api/forecast?bins=${bin.code}`)).body.data[0];
     expect(forecast.expectedReceipts).toEqual([{ week: 1, quantity: 300 }]);
-    expect((await qm.agent.get(`/api/bins/${bin.code}`)).body).toMatchObject({ onHand: 300, onOrder: 300, toOrder: 0 });
+    expect((await qm.agent.get(`/api/bins/${bin.code}`)).body.onHand).toBe(300);
+    expect((await qm.agent.get(`/api/bins/${bin.code}/reorder`)).body).toMatchObject({ onOrder: 300, toOrder: 0 });
     expect((await qm.agent.get('/api/bins/restock')).body.data).toEqual([]);
     expect((await refresh()).raised).toBe(0);
 

@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { binForYouSchema, restockListSchema } from '@shared/schemas/bins';
+import { binReorderSchema, binSchema, restockListSchema } from '@shared/schemas/bins';
 import { forecastListSchema, purchaseListSchema } from '@shared/schemas/forecast';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
 import { addAssembly, hundredRivetLine, screwBin } from '../helpers/planning-fixture';
@@ -65,10 +65,12 @@ describe('one reorder rule', () => {
     expect(restock.map((l) => l.code)).toEqual([dome.code, fat.code, screws.code]);
     expect(purchase).toEqual(restock);
 
-    // The bin page and the forecast say the same quantity for each bin.
+    // The bin page, the bins list and the forecast say the same quantity for each bin.
+    const list = (await qm.agent.get('/api/bins?pageSize=500')).body.data.map((b: unknown) => binSchema.parse(b));
     for (const line of restock) {
-      const bin = binForYouSchema.parse((await qm.agent.get(`/api/bins/${line.code}`)).body);
-      expect({ code: line.code, low: bin.low, toOrder: bin.toOrder }).toEqual({ code: line.code, low: true, toOrder: line.quantity });
+      const reorder = binReorderSchema.parse((await member.agent.get(`/api/bins/${line.code}/reorder`)).body);
+      expect({ code: line.code, low: reorder.low, toOrder: reorder.toOrder, cost: reorder.orderCostCents }).toEqual({ code: line.code, low: true, toOrder: line.quantity, cost: line.costCents });
+      expect(list.find((b: { code: string }) => b.code === line.code)).toMatchObject({ low: true, toOrder: line.quantity });
     }
     const forecast = forecastListSchema.parse((await qm.agent.get('/api/forecast')).body).data;
     expect(forecast.filter((f) => f.needsAlert).map((f) => ({ code: f.bin.code, quantity: f.suggestedOrder })).sort((a, b) => a.code.localeCompare(b.code))).toEqual(

@@ -17,8 +17,8 @@ export function alertsRouter() {
 
   router.get('/', (req, res) => {
     const { state } = parseInput(alertListQuerySchema, req.query, 'query');
-    refreshIfStale(req.ctx);
-    res.json({ data: listAlertsIn(req.ctx, state) });
+    const plan = refreshIfStale(req.ctx);
+    res.json({ data: listAlertsIn(req.ctx, state, plan) });
   });
 
   router.post('/refresh', (req, res) => {

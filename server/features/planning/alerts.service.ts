@@ -71,9 +71,11 @@ export function refreshAlerts(ctx: ServiceContext): { raised: number[]; plan: Re
   return { raised, plan };
 }
 
-export function refreshIfStale(ctx: ServiceContext): void {
+/** Refreshes when the last refresh is over 5 minutes old; returns the plan it used, if it ran. */
+export function refreshIfStale(ctx: ServiceContext): ReorderPlan | undefined {
   const last = lastRefresh.get(ctx.db);
-  if (last === undefined || ctx.now().getTime() - last > REFRESH_AFTER_MS) refreshAlerts(ctx);
+  if (last === undefined || ctx.now().getTime() - last > REFRESH_AFTER_MS) return refreshAlerts(ctx).plan;
+  return undefined;
 }
 
 const STATES: Record<string, AlertState[] | null> = { active: ['open', 'ordered'], all: null };

@@ -1,17 +1,15 @@
-import type { Bin, BinReorder } from '@shared/schemas/bins';
+import type { Bin, BinFields, BinReorder } from '@shared/schemas/bins';
 import { binDesignation, blindGripRange } from '@shared/stock/fasteners';
 import { isBlindKind } from '@shared/stock/kinds';
 import type { BinRow } from '../../db/schema/stock';
 import { e4ToDollars, valueCents } from '@shared/stock/money';
 
-export type BinFields = Omit<Bin, 'low' | 'toOrder' | 'onOrder' | 'reorderAt'>;
-
 /** A bin as the API shows it, with its part of the one reorder computation (ReordersOf). */
 export function toBinDto(bin: BinRow, reorder: BinReorder, lastCounted?: Date): Bin {
-  return { ...toBinFields(bin, lastCounted), low: reorder.low, toOrder: reorder.toOrder, onOrder: reorder.onOrder, reorderAt: reorder.reorderAt };
+  return { ...toBinFields(bin, lastCounted), ...reorder };
 }
 
-/** What the bin's own row says, without the reorder computation (the CSV export needs no more). */
+/** What the bin's own row says, without the reorder computation (the scan answer and the CSV export need no more). */
 export function toBinFields(bin: BinRow, lastCounted?: Date): BinFields {
   return {
     id: bin.id,

@@ -20,7 +20,7 @@ import { requireRole, requireUser } from '../../middleware/auth';
 import { PRIVATE_FILE_CACHE } from '../../middleware/cache-control';
 import type { RunQueuedAction } from '../../lib/queued-action';
 import { parseInput } from '../../lib/validate';
-import { createBin, editBin, getBinForYou, listBinPage, restockList } from './bins.service';
+import { createBin, editBin, getBinForYou, getBinReorder, listBinPage, restockList } from './bins.service';
 import { count, draw, ledgerFor, move, receive, returnUnused, reverse, writeOff } from './ledger.service';
 import type { NameAssemblies } from './assembly-names';
 import type { ReordersOf } from './bin-reorders';
@@ -65,7 +65,11 @@ export function binsRouter({ runQueuedAction, nameAssemblies, reordersOf }: { ru
   });
 
   router.get('/:code', (req, res) => {
-    res.json(getBinForYou(req.ctx, reordersOf, requireUser(req), code(req.params)));
+    res.json(getBinForYou(req.ctx, requireUser(req), code(req.params)));
+  });
+
+  router.get('/:code/reorder', (req, res) => {
+    res.json(getBinReorder(req.ctx, reordersOf, code(req.params)));
   });
 
   router.patch('/:code', quartermaster, (req, res) => {

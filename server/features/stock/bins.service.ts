@@ -7,7 +7,7 @@ import type { BinRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { parseInput } from '../../lib/validate';
-import { toBinDto } from './bin-dto';
+import { toBinDto, toBinFields } from './bin-dto';
 import { nothingToOrder, type ReordersOf } from './bin-reorders';
 import { allBinsBySupplier, findBinByCode, insertBin, lastCountedAt, listBins, nextBinCode, sameSpecBins, updateBin, type NewBinRow } from './bins.repo';
 import { binOrThrow } from './ledger.service';
@@ -32,7 +32,14 @@ export function getBin(ctx: ServiceContext, reordersOf: ReordersOf, code: string
   return withCounts(ctx, reordersOf(ctx), [binOrThrow(ctx.db, code)])[0]!;
 }
 
-export function getBinForYou(ctx: ServiceContext, reordersOf: ReordersOf, user: UserRow, code: string): BinForYou {
+/** What the one reorder rule says of one bin now (the bin page reads it beside the scan answer). */
+export function getBinReorder(ctx: ServiceContext, reordersOf: ReordersOf, code: string): BinReorder {
+  const bin = binOrThrow(ctx.db, code);
+  return reordersOf(ctx).get(bin.id) ?? nothingToOrder(bin.reorderPoint);
+}
+
+/** The scan answer: hot, so it reads the bin's own row and the person's part only, never the forecast. */
+export function getBinForYou(ctx: ServiceContext, user: UserRow, code: string): BinForYou {
   const bin = binOrThrow(ctx.db, code);
   const yourNetDrawn = netDrawnBy(ctx.db, bin.id, user.id);
   const quartermaster = hasRole(user.role, 'quartermaster');
@@ -44,7 +51,7 @@ export function getBinForYou(ctx: ServiceContext, reordersOf: ReordersOf, user: 
   if (quartermaster && bin.onHand > 0 && others.length > 0) actions.push('move');
   if (quartermaster && bin.onHand > 0) actions.push('write_off');
   return {
-    ...withCounts(ctx, reordersOf(ctx), [bin])[0]!,
+    ...toBinFields(bin, lastCountedAt(ctx.db, [bin.id]).get(bin.id)),
     forYou: { actions, yourNetDrawn, sameSpecBins: others.map((b) => ({ code: b.code, location: b.location, onHand: b.onHand })) },
   };
 }
@@ -97,8 +104,5 @@ const wholeBin = z.looseObject({}).superRefine((b, ctx) => binKindRules(b, ctx))
 export function restockList(ctx: ServiceContext, reordersOf: ReordersOf): RestockItem[] {
   const reorders = reordersOf(ctx);
   const rows = allBinsBySupplier(ctx.db).filter((b) => (reorders.get(b.id)?.toOrder ?? 0) > 0);
-  return withCounts(ctx, reorders, rows).map((bin) => {
-    const { orderCostCents } = reorders.get(bin.id)!;
-    return { ...bin, packsToOrder: bin.toOrder / bin.packSize, orderCostCents };
-  });
+  return withCounts(ctx, reorders, rows).map((bin) => ({ ...bin, packsToOrder: bin.toOrder / bin.packSize }));
 }

@@ -82,4 +82,18 @@ describe('one reorder rule', () => {
     await disagreeingBins();
     expect(await purchaseLines()).toEqual(await restockLines());
   });
+
+  it('keeps a bin whose alert was dismissed off every list alike: Restock, the purchase list, the forecast and the bin page', async () => {
+    const { dome } = await disagreeingBins();
+    const alerts = (await post(qm, '/api/alerts/refresh')).body.data as { id: number; bin: { code: string } }[];
+    const domeAlert = alerts.find((a) => a.bin.code === dome.code)!;
+    expect((await post(qm, `/api/alerts/${domeAlert.id}/dismiss`, { reason: 'The kit ships with a bag of these' })).status).toBe(200);
+
+    const restock = await restockLines();
+    expect(restock.map((l) => l.code)).not.toContain(dome.code);
+    expect(await purchaseLines()).toEqual(restock);
+    const forecast = forecastListSchema.parse((await qm.agent.get(`/api/forecast?bins=${dome.code}`)).body).data[0]!;
+    expect(forecast.suggestedOrder).toBe(0);
+    expect((await qm.agent.get(`/api/bins/${dome.code}/reorder`)).body).toMatchObject({ toOrder: 0, orderCostCents: 0 });
+  });
 });

@@ -8,6 +8,7 @@ import { healthRouter } from './features/health/health.router';
 import { runQueuedAction } from './features/idempotency/queued-action';
 import { offlineRouter } from './features/offline/offline.router';
 import { assemblyNames, openAssembliesOf } from './features/planning/assembly-catalogue';
+import { binReorders } from './features/planning/reorder-plan';
 import { catalogueBins } from './features/stock/bin-catalogue';
 import { catalogueTools, signoffIdsOf } from './features/tools/tool-catalogue';
 import { invitationsRouter } from './features/invitations/invitations.router';
@@ -114,7 +115,7 @@ export function createApp(config: AppConfig) {
   api.use('/labels', labelsRouter());
   // Assemblies belong to planning: the app hands stock the way to name them.
   api.use('/bins', binCsvRouter({ nameAssemblies: assemblyNames }));
-  api.use('/bins', binsRouter({ runQueuedAction, nameAssemblies: assemblyNames }));
+  api.use('/bins', binsRouter({ runQueuedAction, nameAssemblies: assemblyNames, reordersOf: binReorders }));
   api.use('/stock', stockMoneyRouter({ nameAssemblies: assemblyNames }));
   api.use('/estimate', estimateRouter());
   api.use('/builds', buildsRouter());

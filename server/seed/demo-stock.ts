@@ -6,7 +6,7 @@ import { findUserByEmail } from '../accounts/users.repo';
 import type { ServiceContext } from '../context';
 import type { Database } from '../db/client';
 import type { UserRow } from '../db/schema/users';
-import { createBin } from '../features/stock/bins.service';
+import { insertNewBin } from '../features/stock/bins.service';
 import { count, draw, receive, returnUnused, writeOff } from '../features/stock/ledger.service';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
@@ -259,7 +259,7 @@ export function seedDemoStock(db: Database, now: Date = new Date()): DemoStockSu
   db.$client.transaction(() => {
     clock = dayAt(HISTORY_DAYS, 9);
     for (const demo of spec.values()) {
-      const bin = createBin(ctx, quartermaster, demo.parsed);
+      const bin = insertNewBin(ctx, quartermaster, demo.parsed);
       codes.set(demo.key, bin.code);
       onHand.set(demo.key, bin.onHand);
       if (bin.onHand > 0) entries++;

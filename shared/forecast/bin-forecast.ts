@@ -4,7 +4,8 @@
  */
 import { HORIZON_WEEKS, meanAndStdDev, projectOnHand, type ExpectedReceipt } from './demand';
 import { inverseNormal } from './inverse-normal';
-import { ceilWhole, eoq, reorderPoint, safetyStock, suggestedOrder } from './inventory';
+import { ceilWhole, eoq, reorderPoint, safetyStock } from './inventory';
+import { reorderDecision } from './reorder';
 
 export const DEFAULT_SERVICE_LEVEL = 0.95;
 const WEEKS_PER_YEAR = 52;
@@ -29,6 +30,10 @@ export type BinForecastInput = {
   holdingRate: number;
   /** Weeks to forecast when there is no plan to take the length from. */
   horizonWeeks?: number;
+  /** The reorder point typed on the bin: a floor under the forecast's (0 when none). */
+  binReorderPoint?: number;
+  /** The reorder quantity typed on the bin: a floor under the order size (0 when none). */
+  binReorderQty?: number;
 };
 
 export type BinForecast = {
@@ -49,6 +54,9 @@ export type BinForecast = {
   annualDemand: number;
   eoq: number;
   shortfall: number;
+  /** Ordered and not yet received: the expected receipts summed. */
+  onOrder: number;
+  /** The one reorder rule's answer (shared/forecast/reorder.ts), in whole packs; 0 when not to order. */
   suggestedOrder: number;
   needsAlert: boolean;
   /** Index of the first week inside the lead time whose projected on hand is below safety stock (0 = this week). */
@@ -106,21 +114,40 @@ export function binForecast(input: BinForecastInput): BinForecast {
     lowestInLeadTime = Math.min(lowestInLeadTime, level);
     if (weekBelowSafetyStock === null && level < safety) weekBelowSafetyStock = w;
   }
-  // A bin nothing draws from has a reorder point of 0: an empty one is not a reason to order.
-  const atReorderPoint = reorder > 0 && onHand <= reorder;
-  const shortfall = Math.max(0, atReorderPoint ? reorder - onHand : 0, weekBelowSafetyStock === null ? 0 : safety - lowestInLeadTime);
-  const needsAlert = atReorderPoint || weekBelowSafetyStock !== null;
+  const onOrder = expectedReceipts.reduce((sum, r) => sum + r.quantity, 0);
+  // A fall below safety stock before an order placed now could arrive is a reason to order, unless
+  // what is already on order, arriving after that week, covers it as well as a new order would.
+  const dipBelowSafety = weekBelowSafetyStock === null ? 0 : safety - lowestInLeadTime;
+  const dipWeek = weekBelowSafetyStock ?? Infinity;
+  const onOrderAfterDip = expectedReceipts.filter((r) => r.week > dipWeek).reduce((sum, r) => sum + r.quantity, 0);
+  const dip = Math.max(0, dipBelowSafety - onOrderAfterDip);
+  const decision = reorderDecision({
+    onHand,
+    onOrder,
+    packSize,
+    forecastReorderPoint: reorder,
+    binReorderPoint: input.binReorderPoint ?? 0,
+    binReorderQty: input.binReorderQty ?? 0,
+    eoq: economic,
+    projectedShortfall: dip,
+  });
+  const point = decision.reorderPoint;
+  const { atReorderPoint } = decision;
+  const shortfall = Math.max(0, atReorderPoint ? point - decision.inventoryPosition : 0, dip);
+  const weekBelow = dip > 0 ? weekBelowSafetyStock : null;
+  const needsAlert = decision.order;
 
   const lead = leadTimeWords(leadTimeDays);
+  const level = onOrder > 0 ? `On hand ${units(onHand)} and ${units(onOrder)} on order are` : `On hand ${units(onHand)} is`;
+  const whosePoint = point > reorder ? `the bin's own reorder point ${point}` : `the reorder point ${point}`;
   const reasons: string[] = [];
-  if (atReorderPoint) reasons.push(`On hand ${units(onHand)} is at or below the reorder point ${reorder}`);
-  if (weekBelowSafetyStock !== null) {
-    const when = weekBelowSafetyStock === 0 ? 'this week' : `in week ${weekBelowSafetyStock + 1}`;
+  if (atReorderPoint) reasons.push(`${level} at or below ${whosePoint}`);
+  if (weekBelow !== null) {
+    const when = weekBelow === 0 ? 'this week' : `in week ${weekBelow + 1}`;
     reasons.push(`Projected to fall below safety stock (${safety}) ${when}, inside the ${lead} lead time`);
   }
-  const reason =
-    reasons.join('; ') ||
-    `On hand ${units(onHand)} is above the reorder point ${reorder} and stays at or above safety stock (${safety}) through the ${lead} lead time`;
+  const stays = `stays at or above safety stock (${safety}) through the ${lead} lead time`;
+  const reason = reasons.join('; ') || (onOrder > 0 ? `${level} above ${whosePoint}; on hand ${stays}` : `${level} above ${whosePoint} and ${stays}`);
 
   return {
     weeklyDemand,
@@ -133,12 +160,13 @@ export function binForecast(input: BinForecastInput): BinForecast {
     leadTimeDemand,
     safetyStock: safety,
     safetyStockExact,
-    reorderPoint: reorder,
+    reorderPoint: point,
     reorderPointExact,
     annualDemand,
     eoq: economic,
     shortfall,
-    suggestedOrder: suggestedOrder({ eoq: economic, shortfall, packSize }),
+    onOrder,
+    suggestedOrder: decision.quantity,
     needsAlert,
     weekBelowSafetyStock,
     reason,

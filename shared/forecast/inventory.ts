@@ -1,4 +1,4 @@
-/** The textbook inventory formulas behind a bin's reorder point and suggested order. */
+/** The textbook inventory formulas behind a bin's reorder point and order size (the rule that uses them: reorder.ts). */
 
 function requireNonNegative(name: string, value: number): void {
   if (!(Number.isFinite(value) && value >= 0)) throw new RangeError(`${name} must be a finite number ≥ 0, got ${value}`);
@@ -38,16 +38,4 @@ export function reorderPoint({ leadTimeDemand, safetyStock }: ReorderPointInput)
   requireNonNegative('leadTimeDemand', leadTimeDemand);
   if (!Number.isFinite(safetyStock)) throw new RangeError(`safetyStock must be finite, got ${safetyStock}`);
   return leadTimeDemand + safetyStock;
-}
-
-export type SuggestedOrderInput = { eoq: number; shortfall: number; packSize: number };
-
-/** max(EOQ, shortfall) rounded up to whole packs: at least one pack when anything is needed, 0 when nothing is. */
-export function suggestedOrder({ eoq: economic, shortfall, packSize }: SuggestedOrderInput): number {
-  requireNonNegative('eoq', economic);
-  requireNonNegative('shortfall', shortfall);
-  if (!(Number.isInteger(packSize) && packSize >= 1)) throw new RangeError(`packSize must be a whole number ≥ 1, got ${packSize}`);
-  const need = Math.max(economic, shortfall);
-  if (need <= 0) return 0;
-  return Math.max(1, ceilWhole(need / packSize)) * packSize;
 }

@@ -229,7 +229,8 @@ const person = z.object({ id: z.number(), name: z.string() });
 export const BIN_ACTIONS = ['draw', 'return_unused', 'receive', 'count', 'move', 'write_off'] as const;
 export type BinAction = (typeof BIN_ACTIONS)[number];
 
-export const binSchema = z.object({
+/** What a bin's own row says, as the API shows it. */
+export const binFieldsSchema = z.object({
   id: z.number(),
   code: z.string(),
   kind: z.enum(BIN_KINDS),
@@ -258,13 +259,30 @@ export const binSchema = z.object({
   location: z.string(),
   notes: z.string(),
   onHand: z.number(),
-  /** On hand at or below the reorder point. */
-  low: z.boolean(),
-  /** What to order when low: the reorder quantity rounded up to whole packs (0 when not low). */
-  toOrder: z.number(),
   stockValueCents: z.number(),
   lastCountedAt: z.string().nullable(),
 });
+export type BinFields = z.infer<typeof binFieldsSchema>;
+
+/**
+ * A bin's part of the one reorder computation (shared/forecast/reorder.ts, fed by the planning
+ * feature): on every bin in lists and on Restock, and for one bin at GET /api/bins/:code/reorder.
+ */
+export const binReorderSchema = z.object({
+  /** The rule calls for an order: on hand and on order at or below the reorder point in force, or projected below safety stock. */
+  low: z.boolean(),
+  /** What to order now, in whole packs; 0 when nothing (or when the quartermaster dismissed the bin's alert). */
+  toOrder: z.number(),
+  /** Ordered and not yet received. */
+  onOrder: z.number(),
+  /** The reorder point in force: the forecast's, never below the one typed on the bin (`reorderPoint`). */
+  reorderAt: z.number(),
+  /** toOrder at the bin's unit cost. */
+  orderCostCents: z.number(),
+});
+export type BinReorder = z.infer<typeof binReorderSchema>;
+
+export const binSchema = binFieldsSchema.extend(binReorderSchema.shape);
 export type Bin = z.infer<typeof binSchema>;
 
 export const binListSchema = z.object({
@@ -273,8 +291,12 @@ export const binListSchema = z.object({
 });
 export type BinList = z.infer<typeof binListSchema>;
 
-/** A bin as the signed-in person sees it: what they may do, and bins it may move to. */
-export const binForYouSchema = binSchema.extend({
+/**
+ * A bin as the signed-in person sees it when they scan it: what they may do, and bins it may move
+ * to. The scan answer stays fast, so it leaves the reorder computation out: the bin page reads that
+ * from GET /api/bins/:code/reorder.
+ */
+export const binForYouSchema = binFieldsSchema.extend({
   forYou: z.object({
     actions: z.array(z.enum(BIN_ACTIONS)),
     /** What this person has drawn from the bin, less what they returned: the most they may return. */
@@ -314,8 +336,20 @@ export type Movement = z.infer<typeof movementSchema>;
 export const assemblyNameSchema = z.strictObject({ name: z.string(), buildName: z.string() });
 export type AssemblyName = z.infer<typeof assemblyNameSchema>;
 
-/** A bin's ledger entry as listed: the movement with its assembly named (null when it names none). */
-export const ledgerEntrySchema = movementSchema.extend({ assembly: assemblyNameSchema.nullable() });
+/**
+ * A bin's ledger entry as listed: the movement with its assembly named (null when it names none).
+ * A member sees their own entries in full; another person's entry is `masked`: kind, quantity,
+ * balance, times and links stay, while who (actor, member), what it cost (unitCost, valueCents),
+ * the assembly and the note are null or empty, so no one's tab can be rebuilt from a bin.
+ * Quartermasters and leads see every entry in full.
+ */
+export const ledgerEntrySchema = movementSchema.extend({
+  assembly: assemblyNameSchema.nullable(),
+  masked: z.boolean(),
+  actor: person.nullable(),
+  unitCost: z.number().nullable(),
+  valueCents: z.number().nullable(),
+});
 export type LedgerEntry = z.infer<typeof ledgerEntrySchema>;
 
 export const ledgerSchema = z.object({ data: z.array(ledgerEntrySchema) });
@@ -332,6 +366,6 @@ export type CountResult = z.infer<typeof countResultSchema>;
 export const slipSchema = z.object({ id: z.number(), contentType: z.string(), filename: z.string(), size: z.number() });
 export type Slip = z.infer<typeof slipSchema>;
 
-export const restockItemSchema = binSchema.extend({ packsToOrder: z.number(), orderCostCents: z.number() });
+export const restockItemSchema = binSchema.extend({ packsToOrder: z.number() });
 export const restockListSchema = z.object({ data: z.array(restockItemSchema) });
 export type RestockItem = z.infer<typeof restockItemSchema>;

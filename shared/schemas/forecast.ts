@@ -68,10 +68,17 @@ export const alertSchema = z.object({
   onHandAtRaise: z.number(),
   reorderPoint: z.number(),
   safetyStock: z.number(),
+  /** What the alert asked for when it was raised. */
   suggestedQty: z.number(),
+  /** What the one reorder rule orders now (the Restock list's and the purchase list's quantity); 0 once closed or dismissed. */
+  toOrder: z.number(),
   orderedAt: z.string().nullable(),
   orderedBy: z.object({ id: z.number(), name: z.string() }).nullable(),
   orderedQty: z.number().nullable(),
+  /** Received against the order so far. */
+  receivedQty: z.number(),
+  /** Ordered and not yet received (0 unless ordered). */
+  onOrder: z.number(),
   expectedAt: z.string().nullable(),
   closedAt: z.string().nullable(),
   dismissedAt: z.string().nullable(),
@@ -98,12 +105,12 @@ export const dismissBodySchema = z
   .object({ reason: z.string({ error: 'Say why the alert is dismissed.' }).trim().min(1, { error: 'Say why the alert is dismissed.' }).max(500) })
   .strict();
 
-/** The purchase list: open alerts grouped by supplier. */
+/** The purchase list: what the one reorder rule orders now, by supplier; each line names the bin's active alert and what is already on order. */
 export const purchaseListSchema = z.object({
   data: z.array(
     z.object({
       supplier: z.string(),
-      lines: z.array(z.object({ alertId: z.number(), bin: binBrief, quantity: z.number(), packs: z.number(), costCents: z.number() })),
+      lines: z.array(z.object({ alertId: z.number(), bin: binBrief, quantity: z.number(), packs: z.number(), costCents: z.number(), onOrder: z.number() })),
       totalCents: z.number(),
     }),
   ),

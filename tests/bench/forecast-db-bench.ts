@@ -13,7 +13,7 @@ import { migrateDatabase, openDatabase, type Database } from '../../server/db/cl
 import { assemblies, binAlerts, builds } from '../../server/db/schema/builds';
 import { bins, stockMovements } from '../../server/db/schema/stock';
 import { users } from '../../server/db/schema/users';
-import { forecastList } from '../../server/features/planning/forecast.service';
+import { forecastList } from '../../server/features/planning/forecast-list';
 import { median } from './median';
 
 const ASSEMBLIES = 200;

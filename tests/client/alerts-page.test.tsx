@@ -30,20 +30,23 @@ const ACTIVE: Alert[] = [
     orderedAt: '2026-12-28T16:00:00.000Z',
     orderedBy: { id: 3, name: 'Quinn Quartermaster' },
     orderedQty: 300,
+    receivedQty: 100,
+    onOrder: 200,
+    toOrder: 0,
     expectedAt: '2027-01-11',
   }),
 ];
-const CLOSED: Alert[] = [alertFixture(4, { state: 'closed', bin: SOLID, orderedAt: '2026-11-02T10:00:00.000Z', orderedQty: 500, expectedAt: '2026-11-16', closedAt: '2026-11-15T10:00:00.000Z' })];
+const CLOSED: Alert[] = [alertFixture(4, { state: 'closed', bin: SOLID, orderedAt: '2026-11-02T10:00:00.000Z', orderedQty: 500, receivedQty: 500, toOrder: 0, expectedAt: '2026-11-16', closedAt: '2026-11-15T10:00:00.000Z' })];
 
 // Quantities in whole packs at each bin's unit cost: 2,000 × $0.08 = $160.00, 500 × $0.03 = $15.00, 500 × $0.30 = $150.00.
 const PURCHASE: PurchaseList = {
   data: [
-    { supplier: 'Cedar Hollow Aircraft Parts', lines: [{ alertId: 2, bin: SCREWS, quantity: 500, packs: 5, costCents: 15000 }], totalCents: 15000 },
+    { supplier: 'Cedar Hollow Aircraft Parts', lines: [{ alertId: 2, bin: SCREWS, quantity: 500, packs: 5, costCents: 15000, onOrder: 0 }], totalCents: 15000 },
     {
       supplier: 'Prairie Aero Supply',
       lines: [
-        { alertId: 1, bin: binBrief('B-0001'), quantity: 2000, packs: 8, costCents: 16000 },
-        { alertId: 5, bin: SOLID, quantity: 500, packs: 5, costCents: 1500 },
+        { alertId: 1, bin: binBrief('B-0001'), quantity: 2000, packs: 8, costCents: 16000, onOrder: 0 },
+        { alertId: 5, bin: SOLID, quantity: 500, packs: 5, costCents: 1500, onOrder: 0 },
       ],
       totalCents: 17500,
     },
@@ -92,7 +95,7 @@ describe('Alerts page', () => {
       'On hand when raised': '140 each',
       'Reorder point': '155 each',
       'Safety stock': '35 each',
-      'Suggested order': '2,000 each8 packs of 250',
+      'Order now': '2,000 each8 packs of 250',
     });
     expect(within(b1).getByText('On hand 140 is at or below the reorder point 155.')).toBeTruthy();
     expect(within(b1).getByText('Prairie Aero Supply')).toBeTruthy();
@@ -100,8 +103,11 @@ describe('Alerts page', () => {
 
     const b3 = alertCard('B-0003');
     expect(within(b3).getByText('Ordered')).toBeTruthy();
-    expect(within(b3).getByText('Ordered 300 each on Dec 28, 2026 by Quinn Quartermaster, expected by Jan 11, 2027.')).toBeTruthy();
+    expect(within(b3).getByText('Ordered 300 each on Dec 28, 2026 by Quinn Quartermaster, expected by Jan 11, 2027. 100 each received so far, 200 each still to come.')).toBeTruthy();
+    expect(figures(b3)['On order']).toBe('200 each');
     expect(within(b3).queryByRole('button', { name: 'Mark ordered' })).toBeNull();
+    // The rest of a partly received order can be closed by hand.
+    expect(within(b3).getByRole('button', { name: 'Close order for B-0003: the rest will not come' })).toBeTruthy();
     // An order that fell through may still be dismissed.
     expect(within(b3).getByRole('button', { name: 'Dismiss' })).toBeTruthy();
   });
@@ -160,6 +166,16 @@ describe('Alerts page', () => {
     await userEvent.click(within(form).getByRole('button', { name: 'Dismiss alert' }));
     await waitFor(() => expect(calls.filter((c) => c.method === 'POST')).toHaveLength(1));
     expect(calls.find((c) => c.method === 'POST')).toMatchObject({ path: '/api/alerts/2/dismiss', body: { reason: 'Bin being merged into B-0012' } });
+  });
+
+  it('closes a partly received order by hand and says nothing more is on order', async () => {
+    const calls = renderAlerts(({ method, path }) =>
+      method === 'POST' && path === '/api/alerts/3/close' ? { status: 200, body: { ...ACTIVE[2], state: 'closed', onOrder: 0, closedAt: '2027-01-05T10:00:00.000Z' } } : undefined,
+    );
+    await screen.findByRole('heading', { name: 'Reorder alerts', level: 1 });
+    await userEvent.click(within(alertCard('B-0003')).getByRole('button', { name: 'Close order for B-0003: the rest will not come' }));
+    await waitFor(() => expect(calls.filter((c) => c.method === 'POST')).toHaveLength(1));
+    expect(calls.find((c) => c.method === 'POST')).toMatchObject({ path: '/api/alerts/3/close' });
   });
 
   it('shows the server’s refusal on the form', async () => {

@@ -2,7 +2,7 @@ import { QueryClient } from '@tanstack/react-query';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { beforeEach, describe, expect, it } from 'vitest';
-import type { BinForYou, LedgerEntry } from '@shared/schemas/bins';
+import type { BinForYou, BinReorder, LedgerEntry } from '@shared/schemas/bins';
 import { BinDetailRoute, binDetailLoader } from '@/app/routes/app/bin-detail';
 import { ScanRoute } from '@/app/routes/app/scan';
 import { authKeys } from '@/features/auth/api/keys';
@@ -50,6 +50,7 @@ const entry = (over: Partial<LedgerEntry> & Pick<LedgerEntry, 'id' | 'kind' | 'q
   reversedById: null,
   otherBinCode: null,
   slipId: null,
+  masked: false,
   ...over,
 });
 
@@ -72,12 +73,13 @@ const MY_ASSEMBLIES = [
  * A small fake of the bins API: GET answers the current bin, and a successful movement changes
  * its on hand, so the page is seen to refresh. `answer` may take over a POST.
  */
-function serve(role: Role, opts: { bin?: BinForYou; answer?: (call: FakeCall) => { status: number; body?: unknown } | undefined } = {}) {
+function serve(role: Role, opts: { bin?: BinForYou; reorder?: BinReorder; ledger?: LedgerEntry[]; answer?: (call: FakeCall) => { status: number; body?: unknown } | undefined } = {}) {
   let bin = opts.bin ?? binFor(role);
   const calls = fakeFetch((call) => {
     if (call.path === '/api/auth/me') return { status: 200, body: { user: { ...PEOPLE[role], email: `${role}@example.org`, role } } };
     if (call.method === 'GET' && call.path === '/api/bins/B-0107') return { status: 200, body: bin };
-    if (call.method === 'GET' && call.path === '/api/bins/B-0107/ledger') return { status: 200, body: { data: LEDGER } };
+    if (call.method === 'GET' && call.path === '/api/bins/B-0107/reorder') return { status: 200, body: opts.reorder ?? { low: false, toOrder: 0, onOrder: 0, reorderAt: 50, orderCostCents: 0 } };
+    if (call.method === 'GET' && call.path === '/api/bins/B-0107/ledger') return { status: 200, body: { data: opts.ledger ?? LEDGER } };
     if (call.method === 'GET' && call.path === '/api/assemblies?mine=true') return { status: 200, body: { data: MY_ASSEMBLIES } };
     if (call.method !== 'POST') return undefined;
     const taken = opts.answer?.(call);
@@ -241,6 +243,20 @@ describe('the bin page', () => {
   });
 });
 
+describe('what to order, on the bin page', () => {
+  it('shows the quartermaster the one reorder rule’s quantity and what is already on order', async () => {
+    serve('quartermaster', { bin: binFor('quartermaster', {}, 40), reorder: { low: true, toOrder: 300, onOrder: 200, reorderAt: 260, orderCostCents: 3900 } });
+    await renderBinPage();
+    expect((await screen.findByTestId('bin-on-order')).textContent).toBe('200 each on order');
+    const notice = await screen.findByText(/^Only 40 each left/);
+    expect(notice.textContent).toBe(
+      'Only 40 each left, with 200 each on order, at or below the reorder point of 260 or short of what planned work needs. Order 300 each (3 packs of 100) from Prairie Aero Supply.',
+    );
+    // The point in force, and the bin's own when planned work raises it.
+    expect(screen.getByText(/planned work raises the bin’s own 50|planned work raises the bin's own 50/)).toBeTruthy();
+  });
+});
+
 describe('the ledger on the bin page', () => {
   it('links a reversal and the entry it reverses, and shows signed quantities and balances', async () => {
     serve('member');
@@ -254,6 +270,19 @@ describe('the ledger on the bin page', () => {
     // A draw for an assembly names it and its build; an entry for none says nothing of one.
     expect(draw.textContent).toContain('for Left aileron · Two-seat kit');
     expect(document.getElementById('entry-9')!.textContent).not.toContain(' for ');
+  });
+
+  it('shows a member another person’s entry as the server masks it: what moved, without a name or a value', async () => {
+    const other = entry({ id: 13, kind: 'draw', quantity: -25, balanceAfter: 95, masked: true, actor: null, member: null, unitCost: null, valueCents: null });
+    serve('member', { ledger: [other, ...LEDGER] });
+    await renderBinPage();
+    await screen.findByRole('link', { name: 'reverses #11' });
+    const text = document.getElementById('entry-13')!.textContent;
+    expect(text).toContain('Drawn −25');
+    expect(text).toContain('balance 95');
+    expect(text).toContain('another person');
+    expect(text).not.toContain('$');
+    expect(text).not.toContain(' at ');
   });
 
   it('lets the quartermaster reverse only entries that can be, with a reason', async () => {

@@ -16,7 +16,7 @@ const ITEMS = [
   restockFixture('B-0001', {
     kind: 'blind_structural', head: 'dome', material: '5056', stemMaterial: 'steel', diameter32: 4, grip16: 2,
     supplier: 'Prairie Aero Supply', supplierPart: 'PAS-B42', packSize: 250, reorderQty: 500, onHand: 80, reorderPoint: 200, unitCost: 0.0825,
-    toOrder: 500, packsToOrder: 2, orderCostCents: 4125,
+    toOrder: 500, packsToOrder: 2, orderCostCents: 4125, onOrder: 250, reorderAt: 240,
   }),
   restockFixture('B-0020', {
     kind: 'sealant_primer', name: 'Two-part fuel tank sealant, 6 oz', unit: 'tube',
@@ -38,7 +38,7 @@ describe('RestockList', () => {
     // 900 + 4125 cents
     expect(within(prairie).getByText('$50.25')).toBeTruthy();
     expect(within(prairie).getAllByRole('listitem').map((li) => within(li).getAllByRole('link')[0]!.textContent)).toEqual(['B-0001', 'B-0003']);
-    expect(screen.getByText(/4 bins are at or below the reorder point, from 3 suppliers/)).toBeTruthy();
+    expect(screen.getByText(/4 bins need ordering, from 3 suppliers/)).toBeTruthy();
     // 5025 + 7700 + 2400 cents
     expect(screen.getByText('$151.25')).toBeTruthy();
   });
@@ -59,10 +59,16 @@ describe('RestockList', () => {
     expect(within(sealant).queryByText(/pack/)).toBeNull();
   });
 
+  it('shows what is already on order and the reorder point in force beside each bin', () => {
+    renderWithProviders(<RestockList items={ITEMS} />);
+    const row = screen.getByRole('link', { name: 'B-0001' }).closest('li')!;
+    expect(row.textContent).toContain('80 each on hand, 250 each on order; reorder at 240');
+  });
+
   it('says in words when nothing needs ordering', () => {
     renderWithProviders(<RestockList items={[]} />);
     expect(screen.getByText('Nothing to order.')).toBeTruthy();
-    expect(screen.getByText('Every bin has more on hand than its reorder point.')).toBeTruthy();
+    expect(screen.getByText('Every bin has more on hand and on order than its reorder point.')).toBeTruthy();
     expect(screen.queryAllByRole('region')).toEqual([]);
   });
 });

@@ -34,13 +34,16 @@ export function binFixture(code: string, over: Partial<Bin> = {}): Bin {
     onHand: 400,
     low: false,
     toOrder: 0,
+    onOrder: 0,
+    reorderAt: 100,
+    orderCostCents: 0,
     stockValueCents: 0,
     lastCountedAt: null,
     ...over,
   };
   const designation = fastenerDesignation(base) ?? base.name;
   const gripRange = isBlindKind(base.kind) && base.grip16 !== null ? (blindGripRange(base.grip16) ?? null) : null;
-  return { ...base, designation, gripRange, low: base.onHand <= base.reorderPoint, ...over };
+  return { ...base, designation, gripRange, reorderAt: base.reorderPoint, low: base.onHand <= base.reorderPoint, ...over };
 }
 
 /** A Restock line: the numbers the server works out are given, so a test reads them as data. */

@@ -64,8 +64,10 @@ describe('the daily alert digest', () => {
     // Suppliers by name, each with its bins and the suggested order in whole packs.
     expect(text.indexOf('Cedar Valley Fastener Supply:')).toBeLessThan(text.indexOf('Harbour Hardware Co.:'));
     expect(text).toContain(`- ${rivets.code} `);
-    expect(text).toContain('100 each on hand; order 500 (5 packs of 100, about $60.00)');
-    expect(text).toContain(`- ${screws.code} Screw #8-32 × 1/2 pan head, stainless, part PS832-8: 200 each on hand; order 850 (17 packs of 50, about $76.50)`);
+    // The one reorder rule: rivets up to 200 (the bin's own point) + 459 (EOQ 458.3 over the typed 450) = 659, less 100 → 6 packs;
+    // screws up to 250 + 817 = 1,067, less 200 → 18 packs of 50. The same quantities as Restock and the purchase list.
+    expect(text).toContain('100 each on hand; order 600 (6 packs of 100, about $72.00)');
+    expect(text).toContain(`- ${screws.code} Screw #8-32 × 1/2 pan head, stainless, part PS832-8: 200 each on hand; order 900 (18 packs of 50, about $81.00)`);
     expect(await t.lastMailTo('qm-old@example.org')).toBeUndefined();
     expect(await t.lastMailTo('lead@example.org')).toBeUndefined();
     expect(await t.lastMailTo('member@example.org')).toBeUndefined();
@@ -87,7 +89,7 @@ describe('the daily alert digest', () => {
     const text = (await t.lastMailTo('qm@example.org'))!.text;
     expect((await t.lastMailTo('qm@example.org'))!.subject).toBe('Reorder: 1 bin needs ordering');
     expect(text).toContain(`- ${rivets.code} `);
-    expect(text).toContain('ordered 500 on 2026-12-01, expected 2026-12-09');
+    expect(text).toContain('ordered 500 on 2026-12-01, 500 still to come, expected 2026-12-09');
 
     await post(qm, `/api/alerts/${idOf(screws.code)}/dismiss`, { reason: 'Borrowing from the chapter next door' });
     const before = mailCount();

@@ -86,6 +86,49 @@ describe('reorder alerts', () => {
     expect((await refresh()).raised).toBe(0);
   });
 
+  it('keeps the rest of a partly received order on order, and closes the alert when all of it has come', async () => {
+    const bin = await binRunningLow();
+    const alert = (await refresh()).data[0]!;
+    await post(qm, `/api/alerts/${alert.id}/ordered`, { quantity: 500, expectedAt: '2026-12-10' });
+
+    const first = await post(qm, `/api/bins/${bin.code}/receive`, { quantity: 200, note: 'first box of three' });
+    expect(first.status).toBe(201);
+    const [partly] = await alertsIn('active');
+    expect(partly).toMatchObject({ id: alert.id, state: 'ordered', orderedQty: 500, receivedQty: 200, onOrder: 300, toOrder: 0, closedAt: null });
+    // The rest counts as on order everywhere, so nothing is ordered twice.
+    const forecast = (await qm.agent.get(`/api/forecast?bins=${bin.code}`)).body.data[0];
+    expect(forecast.expectedReceipts).toEqual([{ week: 1, quantity: 300 }]);
+    expect((await qm.agent.get(`/api/bins/${bin.code}`)).body.onHand).toBe(300);
+    expect((await qm.agent.get(`/api/bins/${bin.code}/reorder`)).body).toMatchObject({ onOrder: 300, toOrder: 0 });
+    expect((await qm.agent.get('/api/bins/restock')).body.data).toEqual([]);
+    expect((await refresh()).raised).toBe(0);
+
+    const rest = await post(qm, `/api/bins/${bin.code}/receive`, { quantity: 300 });
+    const [closed] = await alertsIn('closed');
+    expect(closed).toMatchObject({ id: alert.id, state: 'closed', receivedQty: 500, onOrder: 0, closedAt: '2026-12-01T12:00:00.000Z' });
+    expect(t.db.select().from(binAlerts).where(eq(binAlerts.id, alert.id)).get()).toMatchObject({ closedByMovementId: rest.body.id, closedById: null });
+  });
+
+  it('lets the quartermaster close an order whose rest will not come, and only an ordered one', async () => {
+    const bin = await binRunningLow();
+    const alert = (await refresh()).data[0]!;
+    const notOrdered = await post(qm, `/api/alerts/${alert.id}/close`);
+    expect(notOrdered.status).toBe(409);
+    expect(notOrdered.body.error).toMatchObject({ code: 'ALERT_NOT_ORDERED', message: 'The alert for B-0001 is still to order: only an alert already ordered can be closed by hand.' });
+    await post(qm, `/api/alerts/${alert.id}/ordered`, { quantity: 500, expectedAt: '2026-12-10' });
+    await post(qm, `/api/bins/${bin.code}/receive`, { quantity: 200 });
+    expect((await post(member, `/api/alerts/${alert.id}/close`)).status).toBe(403);
+    expect((await post(qm, `/api/alerts/${alert.id}/close`, { reason: 'x' })).status).toBe(400);
+
+    const closed = await post(qm, `/api/alerts/${alert.id}/close`);
+    expect(closed.status).toBe(200);
+    expect(closed.body).toMatchObject({ state: 'closed', orderedQty: 500, receivedQty: 200, onOrder: 0, closedAt: '2026-12-01T12:00:00.000Z' });
+    expect(t.db.select().from(binAlerts).where(eq(binAlerts.id, alert.id)).get()?.closedById).toBe(closed.body.orderedBy.id);
+    // Nothing stays on order: the forecast expects no receipt, and the 300 on hand still cover the plan.
+    expect((await qm.agent.get(`/api/forecast?bins=${bin.code}`)).body.data[0].expectedReceipts).toEqual([]);
+    expect((await post(qm, `/api/alerts/${alert.id}/close`)).status).toBe(409);
+  });
+
   it('closes an open alert too when stock is received before anyone marked it ordered', async () => {
     const bin = await binRunningLow();
     const { data } = await refresh();
@@ -193,8 +236,9 @@ describe('the purchase list', () => {
   async function threeLowBins() {
     const dome = await binRunningLow();
     const fat = await binRunningLow({ diameter32: 5 }, { ...hundredRivetLine, rivet: { ...hundredRivetLine.rivet, diameter32: 5 } });
-    // 250 screws this week against 200 on hand (lead time 7 days): reorder point 250, shortfall 50;
-    // EOQ √(2 × 500 × $15 / (25 % × $0.09)) = 816.5 → 17 packs of 50 = 850, $76.50.
+    // 250 screws this week against 200 on hand (lead time 7 days): reorder point 250;
+    // EOQ √(2 × 500 × $15 / (25 % × $0.09)) = 816.5 → Q = 817; order up to 250 + 817 = 1,067:
+    // 1,067 − 200 = 867 → 18 packs of 50 = 900, $81.00.
     const screws = await addBinAs(qm, screwBin({ supplierPart: '=HYPERLINK("http://x.test")' }));
     await addAssembly(member, { name: 'Tool chest', plannedStart: '2026-12-01', plannedFinish: '2026-12-06', extraItems: [{ binCode: screws.code, quantity: 250 }] });
     const { data } = await refresh();
@@ -213,8 +257,8 @@ describe('the purchase list', () => {
     expect(list.data.map((g) => g.supplier)).toEqual(['Cedar Valley Fastener Supply', 'Harbour Hardware Co.']);
     expect(list.data[0]!.lines).toEqual([expect.objectContaining({ bin: expect.objectContaining({ code: dome.code }), quantity: 500, packs: 5, costCents: 6000 })]);
     expect(list.data[0]!.totalCents).toBe(6000);
-    expect(list.data[1]!.lines).toEqual([expect.objectContaining({ bin: expect.objectContaining({ code: screws.code }), quantity: 850, packs: 17, costCents: 7650 })]);
-    expect(list.data[1]!.totalCents).toBe(7650);
+    expect(list.data[1]!.lines).toEqual([expect.objectContaining({ bin: expect.objectContaining({ code: screws.code }), quantity: 900, packs: 18, costCents: 8100 })]);
+    expect(list.data[1]!.totalCents).toBe(8100);
   });
 
   it('exports the list as CSV with formula-like text made harmless', async () => {
@@ -224,11 +268,11 @@ describe('the purchase list', () => {
     expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
     expect(res.headers['content-disposition']).toBe('attachment; filename="gripline-purchase-list-2026-12-01.csv"');
     const lines = res.text.replace(/^\uFEFF/, '').trim().split('\r\n');
-    expect(lines[0]).toBe('supplier,supplier_part,bin_code,designation,quantity,unit,pack_size,packs,unit_cost,cost,alert_id');
+    expect(lines[0]).toBe('supplier,supplier_part,bin_code,designation,quantity,unit,pack_size,packs,unit_cost,cost,on_order,alert_id');
     expect(lines).toHaveLength(4);
-    expect(lines[1]).toMatch(new RegExp(`^Cedar Valley Fastener Supply,,${dome.code},.*,500,each,100,5,0.12,60.00,\\d+$`));
+    expect(lines[1]).toMatch(new RegExp(`^Cedar Valley Fastener Supply,,${dome.code},.*,500,each,100,5,0.12,60.00,0,\\d+$`));
     expect(lines[2]).toMatch(new RegExp(`^Cedar Valley Fastener Supply,,${fat.code},`));
     expect(lines[3]).toContain(`Harbour Hardware Co.,"'=HYPERLINK(""http://x.test"")",${screws.code},`);
-    expect(lines[3]).toMatch(/,850,each,50,17,0.09,76.50,\d+$/);
+    expect(lines[3]).toMatch(/,900,each,50,18,0.09,81.00,0,\d+$/);
   });
 });

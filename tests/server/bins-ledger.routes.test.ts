@@ -200,6 +200,7 @@ describe('what a scan offers', () => {
   it('lists low bins on the Restock list with whole packs to order', async () => {
     await addBinAs(qm, blindRivetBin({ initialQuantity: 150, reorderPoint: 200, reorderQty: 450, packSize: 100 }));
     await addBinAs(qm, blindRivetBin({ initialQuantity: 900 }));
+    // Nothing draws from it, so its own point (200) and quantity (450) rule: order up to 650, less 150 on hand = 500.
     const list = await qm.agent.get('/api/bins/restock');
     expect(list.body.data).toHaveLength(1);
     expect(list.body.data[0]).toMatchObject({ code: 'B-0001', onHand: 150, toOrder: 500, packsToOrder: 5, orderCostCents: 6000 });

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { binListSchema, restockListSchema, type Bin } from '@shared/schemas/bins';
+import { purchaseListSchema } from '@shared/schemas/forecast';
 import { insertUser } from '../../server/accounts/users.repo';
 import { migrateDatabase, openDatabase } from '../../server/db/client';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemoChapter } from '../../server/seed/demo-chapter';
@@ -111,15 +112,24 @@ describe('the demo chapter’s stock', () => {
     }
   });
 
-  it('leaves three to five bins at or below their reorder point on the Restock list', async () => {
+  it('leaves a few bins to order, every one at or below its own reorder point among them, and the purchase list agrees', async () => {
     const low = bins.filter((b) => b.onHand <= b.reorderPoint);
     expect(low.length).toBeGreaterThanOrEqual(3);
     expect(low.length).toBeLessThanOrEqual(5);
     const res = await qm.agent.get('/api/bins/restock');
     expect(res.status).toBe(200);
     const restock = restockListSchema.parse(res.body).data;
-    expect(restock.map((b) => b.code).sort()).toEqual(low.map((b) => b.code).sort());
+    // The bin's own point is a floor under the forecast's: every bin at or below it is on the list, with any the forecast adds.
+    expect(restock.map((b) => b.code)).toEqual(expect.arrayContaining(low.map((b) => b.code)));
+    expect(restock.length).toBeLessThanOrEqual(low.length + 2);
+    expect(restock.map((b) => b.code).sort()).toEqual(bins.filter((b) => b.toOrder > 0).map((b) => b.code).sort());
     for (const item of restock) expect(item.packsToOrder).toBeGreaterThanOrEqual(1);
+    // The case found in use on this chapter: Restock and the purchase list now list the same bins, quantities and costs.
+    const purchase = purchaseListSchema.parse((await qm.agent.get('/api/alerts/purchase-list')).body).data.flatMap((g) => g.lines);
+    const line = (code: string, quantity: number, costCents: number) => ({ code, quantity, costCents });
+    expect(purchase.map((l) => line(l.bin.code, l.quantity, l.costCents)).sort((a, b) => a.code.localeCompare(b.code))).toEqual(
+      restock.map((i) => line(i.code, i.toOrder, i.orderCostCents)).sort((a, b) => a.code.localeCompare(b.code)),
+    );
   });
 
   it('is the same history every time it is seeded for the same day', () => {

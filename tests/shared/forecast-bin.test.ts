@@ -54,18 +54,28 @@ describe('binForecast from draw history', () => {
     );
   });
 
-  it('counts an open order arriving this week in the projection', () => {
+  it('counts an open order arriving this week in the projection, and in the inventory position: nothing more to order', () => {
     const ordered = binForecast({ ...historyBin, expectedReceipts: [{ week: 0, quantity: 100 }] });
     expect(ordered.projected.slice(0, 2)).toEqual([115, 105]);
     expect(ordered.weekBelowSafetyStock).toBeNull();
-    expect(ordered.reason).toBe('On hand 25 is at or below the reorder point 27');
+    expect(ordered.onOrder).toBe(100);
+    expect(ordered.needsAlert).toBe(false);
+    expect(ordered.suggestedOrder).toBe(0);
+    expect(ordered.reason).toBe('On hand 25 and 100 on order are above the reorder point 27; on hand stays at or above safety stock (7) through the 2-week lead time');
+  });
+
+  it('does not order again for a fall that an order already on its way, arriving later, covers', () => {
+    // The 100 arrive in week 2, after on hand falls below safety stock in week 1: a new order would come later still.
+    const late = binForecast({ ...historyBin, expectedReceipts: [{ week: 2, quantity: 100 }] });
+    expect(late.weekBelowSafetyStock).toBe(1);
+    expect(late).toMatchObject({ onOrder: 100, needsAlert: false, suggestedOrder: 0 });
   });
 
   it('stays quiet when on hand covers the reorder point and the lead time', () => {
     const stocked = binForecast({ ...historyBin, onHand: 300 });
     expect(stocked.needsAlert).toBe(false);
     expect(stocked.shortfall).toBe(0);
-    expect(stocked.suggestedOrder).toBe(700); // what to order when it is time, still the EOQ
+    expect(stocked.suggestedOrder).toBe(0); // nothing to order now
     expect(stocked.reason).toBe('On hand 300 is above the reorder point 27 and stays at or above safety stock (7) through the 2-week lead time');
   });
 });

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { inverseNormal } from '@shared/forecast/inverse-normal';
-import { eoq, reorderPoint, safetyStock, suggestedOrder } from '@shared/forecast/inventory';
+import { eoq, reorderPoint, safetyStock } from '@shared/forecast/inventory';
 
 describe('eoq', () => {
   it('gives Q* = 200 for D = 1,000/yr, S = $10, H = $0.50 (Heizer & Render, Operations Management, ch. 12, Example 3)', () => {
@@ -91,43 +91,6 @@ describe('safety stock and reorder point', () => {
           expect(rop(Math.min(a, b))).toBeLessThanOrEqual(rop(Math.max(a, b)));
         },
       ),
-    );
-  });
-});
-
-describe('suggestedOrder', () => {
-  it.each([
-    // [eoq, shortfall, packSize, expected] worked by hand
-    [200, 0, 50, 200], // EOQ is already 4 packs
-    [201, 0, 50, 250], // just over 4 packs → 5
-    [120, 310, 100, 400], // the shortfall is larger: 3.1 packs → 4
-    [0, 0.3, 100, 100], // anything needed is at least one pack
-    [644.98, 2, 100, 700], // 6.45 packs → 7
-    [0, 0, 100, 0], // nothing needed, nothing ordered
-    [10, 0, 1, 10],
-  ])('EOQ %s, shortfall %s, packs of %s → %s', (economic, shortfall, packSize, expected) => {
-    expect(suggestedOrder({ eoq: economic, shortfall, packSize })).toBe(expected);
-  });
-
-  it('refuses a pack size that is not a whole number ≥ 1 and negative quantities', () => {
-    expect(() => suggestedOrder({ eoq: 10, shortfall: 0, packSize: 0 })).toThrow(RangeError);
-    expect(() => suggestedOrder({ eoq: 10, shortfall: 0, packSize: 2.5 })).toThrow(RangeError);
-    expect(() => suggestedOrder({ eoq: -1, shortfall: 0, packSize: 10 })).toThrow(RangeError);
-  });
-
-  it('orders the fewest whole packs that cover both the EOQ and the shortfall', () => {
-    fc.assert(
-      fc.property(fc.double({ min: 0, max: 1e5, noNaN: true }), fc.double({ min: 0, max: 1e5, noNaN: true }), fc.integer({ min: 1, max: 5000 }), (economic, shortfall, packSize) => {
-        const order = suggestedOrder({ eoq: economic, shortfall, packSize });
-        const need = Math.max(economic, shortfall);
-        expect(order % packSize).toBe(0);
-        if (need === 0) expect(order).toBe(0);
-        else {
-          expect(order).toBeGreaterThanOrEqual(packSize);
-          expect(order).toBeGreaterThanOrEqual(need - 1e-9 * packSize); // ceilWhole ignores dust below 1e-9 pack
-          expect(order - packSize).toBeLessThan(need);
-        }
-      }),
     );
   });
 });

@@ -73,9 +73,13 @@ export const binAlerts = sqliteTable(
     orderedAt: integer({ mode: 'timestamp_ms' }),
     orderedById: integer().references(() => users.id),
     orderedQty: integer(),
+    /** Received against the order so far: a partial receipt keeps the rest on order. */
+    receivedQty: integer().notNull().default(0),
     expectedAt: integer({ mode: 'timestamp_ms' }),
     closedAt: integer({ mode: 'timestamp_ms' }),
     closedByMovementId: integer().references(() => stockMovements.id),
+    /** The quartermaster who closed an order by hand (the rest will not come); null when a receipt closed it. */
+    closedById: integer().references(() => users.id),
     dismissedAt: integer({ mode: 'timestamp_ms' }),
     dismissedById: integer().references(() => users.id),
     dismissReason: text(),

@@ -21,14 +21,16 @@ function alertLine(a: Alert): string {
   const { bin } = a;
   const part = bin.supplierPart ? `, part ${bin.supplierPart}` : '';
   const head = `- ${bin.code} ${bin.designation}${part}: ${bin.onHand} ${bin.unit} on hand`;
-  if (a.state === 'ordered') return `${head}; ordered ${a.orderedQty} on ${a.orderedAt?.slice(0, 10)}, expected ${a.expectedAt}`;
-  const packs = Math.ceil(a.suggestedQty / bin.packSize);
-  return `${head}; order ${a.suggestedQty} (${plural(packs, 'pack', 'packs')} of ${bin.packSize}, about ${valueWords(valueAtCost(a.suggestedQty, bin.unitCost))})\n  ${a.reason}`;
+  const onOrder = a.state === 'ordered' ? `; ordered ${a.orderedQty} on ${a.orderedAt?.slice(0, 10)}, ${a.onOrder} still to come, expected ${a.expectedAt}` : '';
+  if (a.toOrder === 0) return `${head}${onOrder}`;
+  // The quantity is the one reorder rule's, as on Restock and the purchase list.
+  const packs = a.toOrder / bin.packSize;
+  return `${head}${onOrder}; order ${a.state === 'ordered' ? 'another ' : ''}${a.toOrder} (${plural(packs, 'pack', 'packs')} of ${bin.packSize}, about ${valueWords(valueAtCost(a.toOrder, bin.unitCost))})\n  ${a.reason}`;
 }
 
 /** The quartermaster's morning list: alerts still to order and orders on their way, by supplier. */
 export function alertDigestMail(to: string, name: string, alerts: Alert[], publicUrl: string): OutgoingMail {
-  const open = alerts.filter((a) => a.state === 'open').length;
+  const open = alerts.filter((a) => a.toOrder > 0).length;
   const bySupplier = new Map<string, Alert[]>();
   for (const a of alerts) bySupplier.set(a.bin.supplier, [...(bySupplier.get(a.bin.supplier) ?? []), a]);
   const suppliers = [...bySupplier.keys()].sort((a, b) => a.localeCompare(b));
@@ -55,9 +57,9 @@ export function alertDigestMail(to: string, name: string, alerts: Alert[], publi
 export function runAlertDigest(ctx: ServiceContext): AlertDigestResult {
   const runId = startJobRun(ctx.db, ALERT_DIGEST_JOB, ctx.now());
   try {
-    const { raised } = refreshAlerts(ctx);
-    const alerts = listAlertsIn(ctx, 'active');
-    const open = alerts.filter((a) => a.state === 'open').length;
+    const { raised, plan } = refreshAlerts(ctx);
+    const alerts = listAlertsIn(ctx, 'active', plan);
+    const open = alerts.filter((a) => a.toOrder > 0).length;
     let digestsSent = 0;
     if (open > 0) {
       const now = ctx.now();

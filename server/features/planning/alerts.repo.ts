@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, gte, inArray, min } from 'drizzle-orm';
+import { and, desc, eq, gte, inArray, min } from 'drizzle-orm';
 import type { AlertState } from '@shared/schemas/forecast';
 import type { Executor } from '../../db/client';
 import { activePeopleWithRole } from '../../jobs/job-runs.repo';
@@ -6,7 +6,6 @@ import { binAlerts, type BinAlertRow } from '../../db/schema/builds';
 import { bins, type BinRow } from '../../db/schema/stock';
 import { users } from '../../db/schema/users';
 
-export type NewAlertRow = typeof binAlerts.$inferInsert;
 export interface AlertWithBin {
   alert: BinAlertRow;
   bin: BinRow;
@@ -31,35 +30,14 @@ export function listAlerts(db: Executor, states: AlertState[] | null): AlertWith
     .all();
 }
 
-/** Open alerts by supplier and bin code: the purchase list's order. */
-export function openAlertsBySupplier(db: Executor): AlertWithBin[] {
-  return withBin(db).where(eq(binAlerts.state, 'open')).orderBy(asc(bins.supplier), asc(bins.code)).all();
-}
-
 export function findAlert(db: Executor, id: number): AlertWithBin | undefined {
   return withBin(db).where(eq(binAlerts.id, id)).get();
 }
 
-export function activeAlertBinIds(db: Executor): Set<number> {
-  const rows = db.select({ binId: binAlerts.binId }).from(binAlerts).where(inArray(binAlerts.state, ACTIVE)).all();
-  return new Set(rows.map((r) => r.binId));
-}
-
-/** Inserts open alerts; the partial unique index turns a second active alert for a bin into a no-op. Returns the new ids. */
-export function insertOpenAlerts(db: Executor, rows: NewAlertRow[]): number[] {
-  if (rows.length === 0) return [];
-  return db.insert(binAlerts).values(rows).onConflictDoNothing().returning({ id: binAlerts.id }).all().map((r) => r.id);
-}
-
-/** Moves an alert on only from the states given: false when it was in none of them (someone else moved it first). */
-export function updateAlertFrom(db: Executor, id: number, from: AlertState[], values: Partial<NewAlertRow>): boolean {
-  const changed = db
-    .update(binAlerts)
-    .set(values)
-    .where(and(eq(binAlerts.id, id), inArray(binAlerts.state, from)))
-    .returning({ id: binAlerts.id })
-    .all();
-  return changed.length > 0;
+/** The active (open or ordered) alert of each bin that has one: bin id → alert id. */
+export function activeAlertBinIds(db: Executor): Map<number, number> {
+  const rows = db.select({ binId: binAlerts.binId, id: binAlerts.id }).from(binAlerts).where(inArray(binAlerts.state, ACTIVE)).all();
+  return new Map(rows.map((r) => [r.binId, r.id]));
 }
 
 export const activeQuartermasters = (db: Executor) => activePeopleWithRole(db, 'quartermaster');

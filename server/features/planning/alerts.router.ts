@@ -4,7 +4,7 @@ import { alertIdParams, alertListQuerySchema, dismissBodySchema, markOrderedBody
 import { sendCsv } from '../../lib/csv';
 import { parseInput } from '../../lib/validate';
 import { requireRole, requireUser } from '../../middleware/auth';
-import { dismissAlert, listAlertsIn, markOrdered, refreshAlerts, refreshIfStale } from './alerts.service';
+import { closeAlert, dismissAlert, listAlertsIn, markOrdered, refreshAlerts, refreshIfStale } from './alerts.service';
 import { purchaseList, purchaseListCsv } from './purchase-list';
 
 /**
@@ -17,14 +17,14 @@ export function alertsRouter() {
 
   router.get('/', (req, res) => {
     const { state } = parseInput(alertListQuerySchema, req.query, 'query');
-    refreshIfStale(req.ctx);
-    res.json({ data: listAlertsIn(req.ctx, state) });
+    const plan = refreshIfStale(req.ctx);
+    res.json({ data: listAlertsIn(req.ctx, state, plan) });
   });
 
   router.post('/refresh', (req, res) => {
     parseInput(noFieldsBodySchema, req.body);
-    const { raised } = refreshAlerts(req.ctx);
-    res.json({ raised: raised.length, data: listAlertsIn(req.ctx, 'active') });
+    const { raised, plan } = refreshAlerts(req.ctx);
+    res.json({ raised: raised.length, data: listAlertsIn(req.ctx, 'active', plan) });
   });
 
   router.get('/purchase-list', (req, res) => {
@@ -39,6 +39,12 @@ export function alertsRouter() {
     const { id } = parseInput(alertIdParams, req.params, 'path');
     const body = parseInput(markOrderedBodySchema, req.body);
     res.json(markOrdered(req.ctx, requireUser(req), id, body));
+  });
+
+  router.post('/:id/close', (req, res) => {
+    const { id } = parseInput(alertIdParams, req.params, 'path');
+    parseInput(noFieldsBodySchema, req.body);
+    res.json(closeAlert(req.ctx, requireUser(req), id));
   });
 
   router.post('/:id/dismiss', (req, res) => {

@@ -1,17 +1,19 @@
 import type { Alert, AlertState, MarkOrderedBody } from '@shared/schemas/forecast';
 import type { ServiceContext } from '../../context';
 import type { Database } from '../../db/client';
-import type { BinRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
-import { activeAlertBinIds, findAlert, insertOpenAlerts, listAlerts, recentDismissals, updateAlertFrom, type AlertWithBin, type NewAlertRow } from './alerts.repo';
+import { moveAlert, raiseAlerts, statesAllowing, type AlertEvent } from '../../reorder-alerts/alert-state';
+import { activeAlertBinIds, findAlert, listAlerts, type AlertWithBin } from './alerts.repo';
 import { binBrief } from './bin-brief';
-import { forecastBins } from './forecast.service';
+import { reorderPlan, type PlannedOrder, type ReorderPlan } from './reorder-plan';
 
 const day = (d: Date) => d.toISOString().slice(0, 10);
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
-export function toAlertDto({ alert: a, bin, orderedByName }: AlertWithBin): Alert {
+/** An alert with what the one reorder rule says now: still to order (0 once closed or dismissed) and still on order. */
+export function toAlertDto({ alert: a, bin, orderedByName }: AlertWithBin, now: Pick<PlannedOrder, 'toOrder'> | undefined): Alert {
+  const active = a.state === 'open' || a.state === 'ordered';
   return {
     id: a.id,
     state: a.state,
@@ -25,6 +27,9 @@ export function toAlertDto({ alert: a, bin, orderedByName }: AlertWithBin): Aler
     orderedAt: iso(a.orderedAt),
     orderedBy: a.orderedById !== null ? { id: a.orderedById, name: orderedByName ?? '' } : null,
     orderedQty: a.orderedQty,
+    receivedQty: a.receivedQty,
+    onOrder: a.state === 'ordered' ? Math.max(0, (a.orderedQty ?? 0) - a.receivedQty) : 0,
+    toOrder: active ? (now?.toOrder ?? 0) : 0,
     // The day the quartermaster was told, as entered (YYYY-MM-DD).
     expectedAt: a.expectedAt ? day(a.expectedAt) : null,
     closedAt: iso(a.closedAt),
@@ -36,54 +41,53 @@ export function toAlertDto({ alert: a, bin, orderedByName }: AlertWithBin): Aler
 /** When alerts were last refreshed, per database: kept in memory, so a restarted server refreshes on its first look. */
 const lastRefresh = new WeakMap<Database, number>();
 export const REFRESH_AFTER_MS = 5 * 60_000;
-/** A dismissed alert keeps its bin quiet this long, unless on hand falls below what it was raised at. */
-export const DISMISSAL_QUIET_MS = 14 * 24 * 60 * 60_000;
 
 /**
- * Raises an open alert for every bin whose forecast calls for one and that has no open or ordered
- * alert yet. The partial unique index keeps it to one active alert per bin even when two refreshes
- * race. After a dismissal the bin stays quiet for 14 days unless its on hand drops below the
- * level that alert was raised at (the quartermaster's reason holds until things get worse). Runs in the daily job, on POST /api/alerts/refresh, and when a quartermaster opens the
- * alerts and the last refresh is over 5 minutes old.
+ * Raises an open alert for every bin the one reorder rule orders now (a recent dismissal keeps a
+ * bin quiet, see reorder-plan.ts) that has no open or ordered alert yet. The partial unique index
+ * keeps it to one active alert per bin even when two refreshes race. Runs in the daily job, on
+ * POST /api/alerts/refresh, before the purchase list, and when a quartermaster opens the alerts
+ * and the last refresh is over 5 minutes old. Returns the plan it used.
  */
-export function refreshAlerts(ctx: ServiceContext): { raised: number[] } {
-  const run = forecastBins(ctx);
-  const raisedAt = ctx.now();
+export function refreshAlerts(ctx: ServiceContext): { raised: number[]; plan: ReorderPlan } {
+  const plan = reorderPlan(ctx);
+  const raisedAt = plan.run.now;
   const raised = ctx.db.transaction((tx) => {
     const active = activeAlertBinIds(tx);
-    const dismissed = recentDismissals(tx, new Date(raisedAt.getTime() - DISMISSAL_QUIET_MS));
-    const quiet = (bin: BinRow) => bin.onHand >= (dismissed.get(bin.id) ?? Infinity);
-    const rows = run.plans
-      .filter(({ bin, forecast }) => forecast.needsAlert && !active.has(bin.id) && !quiet(bin))
-      .map(
-        ({ bin, forecast: f }): NewAlertRow => ({
-          binId: bin.id,
-          state: 'open',
-          raisedAt,
-          reason: f.reason,
-          onHandAtRaise: bin.onHand,
-          reorderPoint: f.reorderPoint,
-          safetyStock: f.safetyStock,
-          // An alert always asks for something: at least one pack.
-          suggestedQty: Math.max(f.suggestedOrder, bin.packSize),
-        }),
-      );
-    return insertOpenAlerts(tx, rows);
+    const rows = [...plan.orders.values()]
+      .filter((o) => o.toOrder > 0 && !active.has(o.plan.bin.id))
+      .map(({ plan: { bin, forecast: f }, toOrder }) => ({
+        binId: bin.id,
+        raisedAt,
+        reason: f.reason,
+        onHandAtRaise: bin.onHand,
+        reorderPoint: f.reorderPoint,
+        safetyStock: f.safetyStock,
+        suggestedQty: toOrder,
+      }));
+    return raiseAlerts(tx, rows);
   });
   lastRefresh.set(ctx.db, raisedAt.getTime());
-  return { raised };
+  return { raised, plan };
 }
 
-export function refreshIfStale(ctx: ServiceContext): void {
+/** Refreshes when the last refresh is over 5 minutes old; returns the plan it used, if it ran. */
+export function refreshIfStale(ctx: ServiceContext): ReorderPlan | undefined {
   const last = lastRefresh.get(ctx.db);
-  if (last === undefined || ctx.now().getTime() - last > REFRESH_AFTER_MS) refreshAlerts(ctx);
+  if (last === undefined || ctx.now().getTime() - last > REFRESH_AFTER_MS) return refreshAlerts(ctx).plan;
+  return undefined;
 }
 
 const STATES: Record<string, AlertState[] | null> = { active: ['open', 'ordered'], all: null };
 
-export function listAlertsIn(ctx: ServiceContext, state: AlertState | 'active' | 'all'): Alert[] {
+export function listAlertsIn(ctx: ServiceContext, state: AlertState | 'active' | 'all', plan: ReorderPlan = reorderPlan(ctx)): Alert[] {
   const states = state in STATES ? STATES[state]! : [state as AlertState];
-  return listAlerts(ctx.db, states).map(toAlertDto);
+  return listAlerts(ctx.db, states).map((found) => toAlertDto(found, plan.orders.get(found.bin.id)));
+}
+
+function alertDto(ctx: ServiceContext, id: number): Alert {
+  const found = alertOrThrow(ctx, id);
+  return toAlertDto(found, reorderPlan(ctx).orders.get(found.bin.id));
 }
 
 function alertOrThrow(ctx: ServiceContext, id: number): AlertWithBin {
@@ -92,9 +96,26 @@ function alertOrThrow(ctx: ServiceContext, id: number): AlertWithBin {
   return found;
 }
 
-const STATE_WORDS: Record<AlertState, string> = { open: 'still to order', ordered: 'already ordered', closed: 'closed by a receipt', dismissed: 'dismissed' };
+const STATE_WORDS: Record<AlertState, string> = { open: 'still to order', ordered: 'already ordered', closed: 'closed', dismissed: 'dismissed' };
+const EVENT_WORDS: Record<AlertEvent['event'], string> = { order: 'marked ordered', receive: 'received against', close: 'closed by hand', dismiss: 'dismissed' };
+const REFUSAL_CODES: Record<AlertEvent['event'], string> = { order: 'ALERT_NOT_OPEN', receive: 'ALERT_NOT_ACTIVE', close: 'ALERT_NOT_ORDERED', dismiss: 'ALERT_NOT_ACTIVE' };
 
-/** open → ordered: the quantity and expected day then count as an expected receipt in the forecast. */
+/** Moves the alert by the event through the one writer, or says in words why it cannot. */
+function moveOrRefuse(ctx: ServiceContext, id: number, e: AlertEvent): Alert {
+  const found = alertOrThrow(ctx, id);
+  if (!moveAlert(ctx.db, found.alert, e)) {
+    const state = alertOrThrow(ctx, id).alert.state;
+    const allowed = statesAllowing(e.event).map((s) => STATE_WORDS[s]);
+    throw new HttpError(
+      409,
+      REFUSAL_CODES[e.event],
+      `The alert for ${found.bin.code} is ${STATE_WORDS[state]}: only an alert ${allowed.join(' or ')} can be ${EVENT_WORDS[e.event]}.`,
+    );
+  }
+  return alertDto(ctx, id);
+}
+
+/** open → ordered: the quantity and expected day then count as on order (an expected receipt in the forecast). */
 export function markOrdered(ctx: ServiceContext, actor: UserRow, id: number, body: MarkOrderedBody): Alert {
   const found = alertOrThrow(ctx, id);
   const now = ctx.now();
@@ -104,28 +125,15 @@ export function markOrdered(ctx: ServiceContext, actor: UserRow, id: number, bod
   }
   // The table has no note column: an order note is kept with the alert's reason.
   const reason = body.note ? `${found.alert.reason}. Order note: ${body.note}` : undefined;
-  const moved = updateAlertFrom(ctx.db, id, ['open'], {
-    state: 'ordered',
-    orderedAt: now,
-    orderedById: actor.id,
-    orderedQty: body.quantity,
-    expectedAt: new Date(`${body.expectedAt}T00:00:00Z`),
-    ...(reason && { reason }),
-  });
-  if (!moved) {
-    const state = alertOrThrow(ctx, id).alert.state;
-    throw new HttpError(409, 'ALERT_NOT_OPEN', `The alert for ${found.bin.code} is ${STATE_WORDS[state]}: only an alert still to order can be marked ordered.`);
-  }
-  return toAlertDto(alertOrThrow(ctx, id));
+  return moveOrRefuse(ctx, id, { event: 'order', at: now, byId: actor.id, quantity: body.quantity, expectedAt: new Date(`${body.expectedAt}T00:00:00Z`), reason });
+}
+
+/** ordered → closed by the quartermaster: the rest of the order will not come. */
+export function closeAlert(ctx: ServiceContext, actor: UserRow, id: number): Alert {
+  return moveOrRefuse(ctx, id, { event: 'close', at: ctx.now(), byId: actor.id });
 }
 
 /** open or ordered → dismissed, with the reason in words. */
 export function dismissAlert(ctx: ServiceContext, actor: UserRow, id: number, reason: string): Alert {
-  const found = alertOrThrow(ctx, id);
-  const moved = updateAlertFrom(ctx.db, id, ['open', 'ordered'], { state: 'dismissed', dismissedAt: ctx.now(), dismissedById: actor.id, dismissReason: reason });
-  if (!moved) {
-    const state = alertOrThrow(ctx, id).alert.state;
-    throw new HttpError(409, 'ALERT_NOT_ACTIVE', `The alert for ${found.bin.code} is ${STATE_WORDS[state]}: only an open or ordered alert can be dismissed.`);
-  }
-  return toAlertDto(alertOrThrow(ctx, id));
+  return moveOrRefuse(ctx, id, { event: 'dismiss', at: ctx.now(), byId: actor.id, reason });
 }

@@ -85,10 +85,10 @@ export function drawnForAssemblies(db: Executor, statuses: AssemblyStatus[]): Ma
   return new Map(rows.map((r) => [`${r.assemblyId}:${r.binId}`, r.n]));
 }
 
-/** Orders placed on alerts and not yet received: the expected receipts. */
+/** Orders placed on alerts and not yet received (the rest of a partly received one): the expected receipts. */
 export function orderedAlerts(db: Executor): { binId: number; quantity: number; expectedAt: Date }[] {
   return db
-    .select({ binId: binAlerts.binId, quantity: sql<number>`${binAlerts.orderedQty}`, expectedAt: sql<number>`${binAlerts.expectedAt}` })
+    .select({ binId: binAlerts.binId, quantity: sql<number>`max(0, ${binAlerts.orderedQty} - ${binAlerts.receivedQty})`, expectedAt: sql<number>`${binAlerts.expectedAt}` })
     .from(binAlerts)
     .where(eq(binAlerts.state, 'ordered'))
     .all()

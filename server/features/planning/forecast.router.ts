@@ -4,7 +4,7 @@ import { parseInput } from '../../lib/validate';
 import { requireRole } from '../../middleware/auth';
 import { readPlanningSettings, writePlanningSettings } from '../../settings/planning-settings';
 import { actualWaste } from './actual-waste';
-import { forecastList } from './forecast.service';
+import { forecastList } from './forecast-list';
 
 /** GET /api/forecast: each bin's next 26 weeks, for quartermasters and leads. */
 export function forecastRouter() {

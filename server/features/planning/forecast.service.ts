@@ -1,5 +1,4 @@
 import { binForecast, type BinForecast } from '@shared/forecast/bin-forecast';
-import { suggestedOrder } from '@shared/forecast/inventory';
 import {
   HORIZON_WEEKS,
   spreadAssemblyDemand,
@@ -11,14 +10,11 @@ import {
   type ExpectedReceipt,
   type PlannedAssembly,
 } from '@shared/forecast/demand';
-import type { BinForecastDto, ForecastList } from '@shared/schemas/forecast';
 import type { ServiceContext } from '../../context';
 import type { Executor } from '../../db/client';
 import type { BinRow } from '../../db/schema/stock';
-import { HttpError } from '../../lib/http-error';
 import { readPlanningSettings, type PlanningSettings } from '../../settings/planning-settings';
 import { assemblyBinNeeds, binIndex } from './assembly-needs';
-import { binBrief } from './bin-brief';
 import { allBins, assembliesIn, drawnForAssemblies, orderedAlerts, weeklyConsumption } from './forecast.repo';
 
 export interface BinPlan {
@@ -105,76 +101,11 @@ export function forecastBins(ctx: ServiceContext): ForecastRun {
       orderCost: settings.orderCost,
       holdingRate: settings.holdingRate,
       horizonWeeks: HORIZON_WEEKS,
+      // The points typed on the bin stay floors: the forecast may raise them, never lower them.
+      binReorderPoint: bin.reorderPoint,
+      binReorderQty: bin.reorderQty,
     });
-    return { bin, forecast: withBinFloor(forecast, bin), receipts: binReceipts };
+    return { bin, forecast, receipts: binReceipts };
   });
   return { now, weeks, settings, plans };
-}
-
-/**
- * The reorder point typed on the bin stays a floor: the forecast may raise it, never lower it, so
- * a bin on the Restock list is also on the Alerts page.
- */
-function withBinFloor(f: BinForecast, bin: BinRow): BinForecast {
-  if (bin.reorderPoint <= f.reorderPoint) return f;
-  const low = bin.onHand <= bin.reorderPoint;
-  if (!low || f.needsAlert) return { ...f, reorderPoint: bin.reorderPoint };
-  const shortfall = Math.max(f.shortfall, bin.reorderPoint - bin.onHand);
-  return {
-    ...f,
-    reorderPoint: bin.reorderPoint,
-    needsAlert: true,
-    shortfall,
-    suggestedOrder: suggestedOrder({ eoq: f.eoq, shortfall: Math.max(shortfall, bin.reorderQty), packSize: bin.packSize }),
-    reason: `On hand ${bin.onHand} is at or below the bin's own reorder point ${bin.reorderPoint}.`,
-  };
-}
-
-const rounder = (places: number) => {
-  const factor = 10 ** places;
-  return (x: number) => Math.round(x * factor) / factor + 0;
-};
-const round1 = rounder(1);
-const round2 = rounder(2);
-const round3 = rounder(3);
-const round4 = rounder(4);
-
-function toForecastDto({ bin, forecast: f, receipts }: BinPlan, weeks: Date[]): BinForecastDto {
-  return {
-    bin: binBrief(bin),
-    weeks: weeks.map((w) => w.toISOString().slice(0, 10)),
-    weeklyDemand: f.weeklyDemand.map(round2),
-    demandSource: f.demandSource,
-    projected: f.projected.map(round2),
-    // As the projection counts them: an overdue order in this week, orders after the horizon left out.
-    expectedReceipts: receipts.filter((r) => r.week < weeks.length).map((r) => ({ week: Math.max(0, r.week), quantity: r.quantity })),
-    sigmaWeekly: round3(f.sigmaWeekly),
-    z: round4(f.z),
-    leadTimeWeeks: round3(f.leadTimeWeeks),
-    leadTimeDemand: round2(f.leadTimeDemand),
-    safetyStock: f.safetyStock,
-    reorderPoint: f.reorderPoint,
-    eoq: round1(f.eoq),
-    suggestedOrder: f.suggestedOrder,
-    needsAlert: f.needsAlert,
-    reason: f.reason,
-  };
-}
-
-/** GET /api/forecast: every bin, or the listed ones (an unknown code is a 404 that names it). */
-export function forecastList(ctx: ServiceContext, codes?: string[]): ForecastList {
-  const run = forecastBins(ctx);
-  let plans = run.plans;
-  if (codes) {
-    const wanted = new Set(codes);
-    plans = plans.filter((p) => wanted.has(p.bin.code));
-    const found = new Set(plans.map((p) => p.bin.code));
-    const missing = [...wanted].filter((c) => !found.has(c));
-    if (missing.length === 1) throw new HttpError(404, 'BIN_NOT_FOUND', `No bin has the code ${missing[0]}. Check the label, or type the code.`);
-    if (missing.length > 1) throw new HttpError(404, 'BIN_NOT_FOUND', `No bins have the codes ${missing.join(', ')}. Check the codes and try again.`);
-  }
-  return {
-    data: plans.map((p) => toForecastDto(p, run.weeks)),
-    meta: { generatedAt: run.now.toISOString(), serviceLevel: run.settings.serviceLevel, horizonWeeks: run.weeks.length },
-  };
 }

@@ -1,25 +1,36 @@
 import type { PurchaseList } from '@shared/schemas/forecast';
-import { valueCents } from '@shared/stock/money';
 import type { ServiceContext } from '../../context';
 import { centsCell, textCell, toCsv, type CsvCell } from '../../lib/csv';
-import { openAlertsBySupplier } from './alerts.repo';
+import { activeAlertBinIds } from './alerts.repo';
+import { refreshAlerts } from './alerts.service';
 import { binBrief } from './bin-brief';
 
-/** Open alerts grouped by supplier (by name, bins by code); each line orders the suggested quantity in whole packs. */
+/** SQLite's own order for text (binary), so this list runs in the Restock list's order. */
+const byText = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
+
+/**
+ * What the one reorder rule orders now (the Restock list's bins and quantities), by supplier (by
+ * name, bins by code). Alerts are raised first for bins that lack one, so every line names the
+ * bin's active alert; a line whose alert is already ordered asks for more on top of what is on order.
+ */
 export function purchaseList(ctx: ServiceContext): PurchaseList {
+  const { plan } = refreshAlerts(ctx);
+  const alertOf = activeAlertBinIds(ctx.db);
+  const orders = [...plan.orders.values()]
+    .filter((o) => o.toOrder > 0 && alertOf.has(o.plan.bin.id))
+    .sort((a, b) => byText(a.plan.bin.supplier, b.plan.bin.supplier) || byText(a.plan.bin.code, b.plan.bin.code));
   const groups = new Map<string, PurchaseList['data'][number]>();
-  for (const { alert, bin } of openAlertsBySupplier(ctx.db)) {
+  for (const o of orders) {
+    const { bin } = o.plan;
     const group = groups.get(bin.supplier) ?? { supplier: bin.supplier, lines: [], totalCents: 0 };
-    const quantity = alert.suggestedQty;
-    const costCents = valueCents(quantity, bin.unitCostE4);
-    group.lines.push({ alertId: alert.id, bin: binBrief(bin), quantity, packs: Math.ceil(quantity / bin.packSize), costCents });
-    group.totalCents += costCents;
+    group.lines.push({ alertId: alertOf.get(bin.id)!, bin: binBrief(bin), quantity: o.toOrder, packs: o.packs, costCents: o.orderCostCents, onOrder: o.onOrder });
+    group.totalCents += o.orderCostCents;
     groups.set(bin.supplier, group);
   }
   return { data: [...groups.values()] };
 }
 
-const FIELDS = ['supplier', 'supplier_part', 'bin_code', 'designation', 'quantity', 'unit', 'pack_size', 'packs', 'unit_cost', 'cost', 'alert_id'];
+const FIELDS = ['supplier', 'supplier_part', 'bin_code', 'designation', 'quantity', 'unit', 'pack_size', 'packs', 'unit_cost', 'cost', 'on_order', 'alert_id'];
 
 /** The same list as a spreadsheet, one row per bin; text cells guarded against formulas. */
 export function purchaseListCsv(ctx: ServiceContext): string {
@@ -35,6 +46,7 @@ export function purchaseListCsv(ctx: ServiceContext): string {
       l.packs,
       l.bin.unitCost,
       centsCell(l.costCents),
+      l.onOrder,
       l.alertId,
     ]),
   );

@@ -1,20 +1,16 @@
-import type { Bin } from '@shared/schemas/bins';
+import type { Bin, BinFields, BinReorder } from '@shared/schemas/bins';
 import { binDesignation, blindGripRange } from '@shared/stock/fasteners';
 import { isBlindKind } from '@shared/stock/kinds';
 import type { BinRow } from '../../db/schema/stock';
 import { e4ToDollars, valueCents } from '@shared/stock/money';
 
-/** The reorder quantity rounded up to whole packs; a bin with no reorder quantity set orders one pack. */
-export function orderQuantity(bin: Pick<BinRow, 'reorderQty' | 'packSize'>): number {
-  return Math.max(1, Math.ceil(bin.reorderQty / bin.packSize)) * bin.packSize;
+/** A bin as the API shows it, with its part of the one reorder computation (ReordersOf). */
+export function toBinDto(bin: BinRow, reorder: BinReorder, lastCounted?: Date): Bin {
+  return { ...toBinFields(bin, lastCounted), ...reorder };
 }
 
-export function isLow(bin: Pick<BinRow, 'onHand' | 'reorderPoint'>): boolean {
-  return bin.onHand <= bin.reorderPoint;
-}
-
-export function toBinDto(bin: BinRow, lastCounted?: Date): Bin {
-  const low = isLow(bin);
+/** What the bin's own row says, without the reorder computation (the scan answer and the CSV export need no more). */
+export function toBinFields(bin: BinRow, lastCounted?: Date): BinFields {
   return {
     id: bin.id,
     code: bin.code,
@@ -41,8 +37,6 @@ export function toBinDto(bin: BinRow, lastCounted?: Date): Bin {
     location: bin.location,
     notes: bin.notes,
     onHand: bin.onHand,
-    low,
-    toOrder: low ? orderQuantity(bin) : 0,
     stockValueCents: valueCents(bin.onHand, bin.unitCostE4),
     lastCountedAt: lastCounted?.toISOString() ?? null,
   };

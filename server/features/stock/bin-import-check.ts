@@ -1,5 +1,5 @@
 import type { ImportChange, ImportProblem, ImportRowStatus } from '@shared/schemas/bin-import';
-import type { Bin, BinListQuery, CreateBinInput } from '@shared/schemas/bins';
+import type { BinFields, BinListQuery, CreateBinInput } from '@shared/schemas/bins';
 import { binDesignation } from '@shared/stock/fasteners';
 import { BIN_CODE_PATTERN, BIN_KIND_LABELS, type BinKind } from '@shared/stock/kinds';
 import { dollarsToE4 } from '@shared/stock/money';
@@ -7,7 +7,7 @@ import type { ServiceContext } from '../../context';
 import type { Database } from '../../db/client';
 import type { BinRow } from '../../db/schema/stock';
 import { mapInSlices } from '../../lib/event-loop';
-import { toBinDto } from './bin-dto';
+import { toBinFields } from './bin-dto';
 import { binFromValues, DESCRIPTIVE_COLUMNS, fieldsOfColumns, parseBinCsv, problem, readBinRow, type ReadRow } from './bin-csv';
 import { listBins, nextBinCode, sameSpecBins, type BinSpec } from './bins.repo';
 
@@ -37,8 +37,8 @@ export interface CheckedFile {
 
 /** What a bin's descriptive fields say, in the import's terms (dollars, not hundredths of a cent). */
 export function descriptiveFields(row: BinRow): Record<string, unknown> {
-  const dto: Bin = toBinDto(row);
-  return Object.fromEntries(DESCRIPTIVE_COLUMNS.map((c) => [c.field, dto[c.field as keyof Bin]]));
+  const fields: BinFields = toBinFields(row);
+  return Object.fromEntries(DESCRIPTIVE_COLUMNS.map((c) => [c.field, fields[c.field as keyof BinFields]]));
 }
 
 const shown = (value: unknown) => (typeof value === 'string' || typeof value === 'number' ? String(value) : '');

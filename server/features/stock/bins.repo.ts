@@ -1,4 +1,4 @@
-import { and, asc, count, eq, like, lte, max, ne, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, count, eq, inArray, like, max, ne, or, sql, type SQL } from 'drizzle-orm';
 import type { BinListQuery } from '@shared/schemas/bins';
 import type { Database, Executor } from '../../db/client';
 import { insertRows, updateRowsById } from '../../db/bulk-write';
@@ -69,11 +69,11 @@ export function nextBinCode(db: Executor): string {
   return `B-${String((row?.n ?? 0) + 1).padStart(4, '0')}`;
 }
 
-function listFilter(q: BinListQuery): SQL | undefined {
+function listFilter(q: BinListQuery, lowIds?: readonly number[]): SQL | undefined {
   const text = q.q ? `%${q.q}%` : undefined;
   return and(
     q.kind ? eq(bins.kind, q.kind) : undefined,
-    q.low ? lte(bins.onHand, bins.reorderPoint) : undefined,
+    lowIds ? inArray(bins.id, [...lowIds]) : undefined,
     q.diameter32 ? eq(bins.diameter32, q.diameter32) : undefined,
     q.grip16 ? eq(bins.grip16, q.grip16) : undefined,
     q.material ? eq(bins.material, q.material) : undefined,
@@ -84,8 +84,9 @@ function listFilter(q: BinListQuery): SQL | undefined {
   );
 }
 
-export function listBins(db: Executor, q: BinListQuery): { rows: BinRow[]; total: number } {
-  const where = listFilter(q);
+/** A page of bins; `lowIds`, when given, keeps only those bins (the ones the reorder rule calls low). */
+export function listBins(db: Executor, q: BinListQuery, lowIds?: readonly number[]): { rows: BinRow[]; total: number } {
+  const where = listFilter(q, lowIds);
   const total = db.select({ n: count() }).from(bins).where(where).get()?.n ?? 0;
   const rows = db
     .select()
@@ -98,9 +99,9 @@ export function listBins(db: Executor, q: BinListQuery): { rows: BinRow[]; total
   return { rows, total };
 }
 
-/** Bins at or below their reorder point. */
-export function listLowBins(db: Executor): BinRow[] {
-  return db.select().from(bins).where(lte(bins.onHand, bins.reorderPoint)).orderBy(asc(bins.supplier), asc(bins.code)).all();
+/** Every bin by supplier and code: the Restock list's order. */
+export function allBinsBySupplier(db: Executor): BinRow[] {
+  return db.select().from(bins).orderBy(asc(bins.supplier), asc(bins.code)).all();
 }
 
 /** When each bin was last counted. */

@@ -20,9 +20,10 @@ import { requireRole, requireUser } from '../../middleware/auth';
 import { PRIVATE_FILE_CACHE } from '../../middleware/cache-control';
 import type { RunQueuedAction } from '../../lib/queued-action';
 import { parseInput } from '../../lib/validate';
-import { createBin, editBin, getBinForYou, listBinPage, restockList } from './bins.service';
+import { createBin, editBin, getBinForYou, getBinReorder, listBinPage, restockList } from './bins.service';
 import { count, draw, ledgerFor, move, receive, returnUnused, reverse, writeOff } from './ledger.service';
 import type { NameAssemblies } from './assembly-names';
+import type { ReordersOf } from './bin-reorders';
 import { readSlip, receiveSlipUpload, storeSlip } from './slips.service';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
@@ -31,24 +32,25 @@ const dayStart = (day: string) => new Date(`${day}T00:00:00Z`);
 /**
  * /api/bins: the bins, their ledger, and the movements members and the quartermaster make by scan.
  * `runQueuedAction` (from the app) lets a phone replay a draw or return queued offline;
- * `nameAssemblies` (from the planning feature) names the assembly each ledger entry was for.
+ * `nameAssemblies` (from the planning feature) names the assembly each ledger entry was for;
+ * `reordersOf` (from the planning feature too) is the one reorder computation: what to order now.
  */
-export function binsRouter({ runQueuedAction, nameAssemblies }: { runQueuedAction: RunQueuedAction; nameAssemblies: NameAssemblies }) {
+export function binsRouter({ runQueuedAction, nameAssemblies, reordersOf }: { runQueuedAction: RunQueuedAction; nameAssemblies: NameAssemblies; reordersOf: ReordersOf }) {
   const router = Router();
   const quartermaster = requireRole('quartermaster');
   const code = (params: unknown) => parseInput(binCodeParams, params, 'path').code;
   router.use(requireRole('member'));
 
   router.get('/', (req, res) => {
-    res.json(listBinPage(req.ctx, parseInput(binListQuerySchema, req.query, 'query')));
+    res.json(listBinPage(req.ctx, reordersOf, parseInput(binListQuerySchema, req.query, 'query')));
   });
 
   router.post('/', quartermaster, (req, res) => {
-    res.status(201).json(createBin(req.ctx, requireUser(req), parseInput(createBinBodySchema, req.body)));
+    res.status(201).json(createBin(req.ctx, reordersOf, requireUser(req), parseInput(createBinBodySchema, req.body)));
   });
 
   router.get('/restock', quartermaster, (req, res) => {
-    res.json({ data: restockList(req.ctx) });
+    res.json({ data: restockList(req.ctx, reordersOf) });
   });
 
   router.post('/slips', quartermaster, receiveSlipUpload, async (req, res) => {
@@ -66,14 +68,18 @@ export function binsRouter({ runQueuedAction, nameAssemblies }: { runQueuedActio
     res.json(getBinForYou(req.ctx, requireUser(req), code(req.params)));
   });
 
+  router.get('/:code/reorder', (req, res) => {
+    res.json(getBinReorder(req.ctx, reordersOf, code(req.params)));
+  });
+
   router.patch('/:code', quartermaster, (req, res) => {
-    res.json(editBin(req.ctx, code(req.params), parseInput(updateBinBodySchema, req.body)));
+    res.json(editBin(req.ctx, reordersOf, code(req.params), parseInput(updateBinBodySchema, req.body)));
   });
 
   router.get('/:code/ledger', (req, res) => {
     const q = parseInput(ledgerQuerySchema, req.query, 'query');
     const to = q.to ? new Date(dayStart(q.to).getTime() + DAY_MS) : undefined;
-    res.json({ data: ledgerFor(req.ctx, nameAssemblies, code(req.params), q.from ? dayStart(q.from) : undefined, to, q.limit) });
+    res.json({ data: ledgerFor(req.ctx, nameAssemblies, requireUser(req), code(req.params), q.from ? dayStart(q.from) : undefined, to, q.limit) });
   });
 
   router.post('/:code/draw', (req, res) =>

@@ -1,4 +1,4 @@
-import type { BinForYou, BinList, BinListQuery, CreateBinInput, RestockItem, UpdateBinBody, Bin, BinAction } from '@shared/schemas/bins';
+import type { BinForYou, BinList, BinListQuery, BinReorder, CreateBinInput, RestockItem, UpdateBinBody, Bin, BinAction } from '@shared/schemas/bins';
 import { hasRole } from '@shared/roles';
 import { z } from 'zod';
 import { binKindRules } from '@shared/schemas/bins';
@@ -7,26 +7,38 @@ import type { BinRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { parseInput } from '../../lib/validate';
-import { orderQuantity, toBinDto } from './bin-dto';
-import { findBinByCode, insertBins, lastCountedAt, listBins, listLowBins, nextBinCode, sameSpecBins, updateBin, updateBins, type NewBinRow } from './bins.repo';
+import { toBinDto, toBinFields } from './bin-dto';
+import { nothingToOrder, type ReordersOf } from './bin-reorders';
+import { allBinsBySupplier, findBinByCode, insertBins, lastCountedAt, listBins, nextBinCode, sameSpecBins, updateBin, updateBins, type NewBinRow } from './bins.repo';
 import { binOrThrow } from './ledger.service';
 import { insertMovements, netDrawnBy } from './ledger.repo';
-import { dollarsToE4, valueCents } from '@shared/stock/money';
+import { dollarsToE4 } from '@shared/stock/money';
 
-function withCounts(ctx: ServiceContext, rows: BinRow[]): Bin[] {
+/** Bins as the API shows them: with when each was last counted and what the one reorder rule orders now. */
+function withCounts(ctx: ServiceContext, reorders: ReadonlyMap<number, BinReorder>, rows: BinRow[]): Bin[] {
   const counted = lastCountedAt(ctx.db, rows.map((r) => r.id));
-  return rows.map((r) => toBinDto(r, counted.get(r.id)));
+  return rows.map((r) => toBinDto(r, reorders.get(r.id) ?? nothingToOrder(r.reorderPoint), counted.get(r.id)));
 }
 
-export function listBinPage(ctx: ServiceContext, query: BinListQuery): BinList {
-  const { rows, total } = listBins(ctx.db, query);
-  return { data: withCounts(ctx, rows), meta: { total, page: query.page, pageSize: query.pageSize } };
+/** A page of bins; "low only" means what the reorder rule calls low, as on Restock. */
+export function listBinPage(ctx: ServiceContext, reordersOf: ReordersOf, query: BinListQuery): BinList {
+  const reorders = reordersOf(ctx);
+  const lowIds = query.low ? [...reorders].filter(([, r]) => r.low).map(([id]) => id) : undefined;
+  const { rows, total } = listBins(ctx.db, query, lowIds);
+  return { data: withCounts(ctx, reorders, rows), meta: { total, page: query.page, pageSize: query.pageSize } };
 }
 
-export function getBin(ctx: ServiceContext, code: string): Bin {
-  return withCounts(ctx, [binOrThrow(ctx.db, code)])[0]!;
+export function getBin(ctx: ServiceContext, reordersOf: ReordersOf, code: string): Bin {
+  return withCounts(ctx, reordersOf(ctx), [binOrThrow(ctx.db, code)])[0]!;
 }
 
+/** What the one reorder rule says of one bin now (the bin page reads it beside the scan answer). */
+export function getBinReorder(ctx: ServiceContext, reordersOf: ReordersOf, code: string): BinReorder {
+  const bin = binOrThrow(ctx.db, code);
+  return reordersOf(ctx).get(bin.id) ?? nothingToOrder(bin.reorderPoint);
+}
+
+/** The scan answer: hot, so it reads the bin's own row and the person's part only, never the forecast. */
 export function getBinForYou(ctx: ServiceContext, user: UserRow, code: string): BinForYou {
   const bin = binOrThrow(ctx.db, code);
   const yourNetDrawn = netDrawnBy(ctx.db, bin.id, user.id);
@@ -39,7 +51,7 @@ export function getBinForYou(ctx: ServiceContext, user: UserRow, code: string): 
   if (quartermaster && bin.onHand > 0 && others.length > 0) actions.push('move');
   if (quartermaster && bin.onHand > 0) actions.push('write_off');
   return {
-    ...withCounts(ctx, [bin])[0]!,
+    ...toBinFields(bin, lastCountedAt(ctx.db, [bin.id]).get(bin.id)),
     forYou: { actions, yourNetDrawn, sameSpecBins: others.map((b) => ({ code: b.code, location: b.location, onHand: b.onHand })) },
   };
 }
@@ -56,18 +68,18 @@ const codeTaken = (code: string) =>
   new HttpError(409, 'BIN_CODE_TAKEN', `The code ${code} is already on another bin. Leave the code empty to get the next free one.`, [{ path: 'code', message: `${code} is taken.` }]);
 
 /** A new bin; opening stock becomes its first ledger entry, so on hand is the ledger's sum from the start. */
-export function createBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): Bin {
-  return getBin(ctx, insertNewBin(ctx, actor, input));
+export function createBin(ctx: ServiceContext, reordersOf: ReordersOf, actor: UserRow, input: CreateBinInput): Bin {
+  return getBin(ctx, reordersOf, insertNewBin(ctx, actor, input).code);
 }
 
-/** Writes a new bin and its opening stock, and answers its code. */
-export function insertNewBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): string {
+/** Writes a new bin and its opening stock, and answers the bin as written. */
+export function insertNewBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): BinRow {
   return ctx.db.$client
     .transaction(() => {
       const code = input.code ?? nextBinCode(ctx.db);
       if (findBinByCode(ctx.db, code)) throw codeTaken(code);
       writeNewBins(ctx, actor, [{ ...newBinRow(input, ctx.now()), code }]);
-      return code;
+      return findBinByCode(ctx.db, code)!;
     })
     .immediate();
 }
@@ -104,21 +116,20 @@ export function writeBinFields(ctx: ServiceContext, changes: readonly { id: numb
 }
 
 /** Changes the fields sent; on hand changes only through the ledger. The result must still be a valid bin of its kind. */
-export function editBin(ctx: ServiceContext, code: string, change: UpdateBinBody): Bin {
+export function editBin(ctx: ServiceContext, reordersOf: ReordersOf, code: string, change: UpdateBinBody): Bin {
   const bin = binOrThrow(ctx.db, code);
   const values = rowValues(change);
   parseInput(wholeBin, { ...bin, ...values });
   updateBin(ctx.db, bin.id, { ...values, updatedAt: ctx.now() });
-  return getBin(ctx, code);
+  return getBin(ctx, reordersOf, code);
 }
 
 /** An edited bin must still be a valid bin of its kind (a rivet keeps its spec, a screw its name). */
 const wholeBin = z.looseObject({}).superRefine((b, ctx) => binKindRules(b, ctx));
 
-/** The quartermaster's Restock list: low bins with whole packs to order, by supplier. */
-export function restockList(ctx: ServiceContext): RestockItem[] {
-  return withCounts(ctx, listLowBins(ctx.db)).map((bin) => {
-    const quantity = orderQuantity(bin);
-    return { ...bin, toOrder: quantity, packsToOrder: quantity / bin.packSize, orderCostCents: valueCents(quantity, dollarsToE4(bin.unitCost)) };
-  });
+/** The quartermaster's Restock list: what the one reorder rule orders now, in whole packs, by supplier. */
+export function restockList(ctx: ServiceContext, reordersOf: ReordersOf): RestockItem[] {
+  const reorders = reordersOf(ctx);
+  const rows = allBinsBySupplier(ctx.db).filter((b) => (reorders.get(b.id)?.toOrder ?? 0) > 0);
+  return withCounts(ctx, reorders, rows).map((bin) => ({ ...bin, packsToOrder: bin.toOrder / bin.packSize }));
 }

@@ -3,7 +3,6 @@ import { alias } from 'drizzle-orm/sqlite-core';
 import type { Database, Executor } from '../../db/client';
 import { insertRows } from '../../db/bulk-write';
 import { preparedPerDatabase } from '../../db/prepared';
-import { binAlerts } from '../../db/schema/builds';
 import { assemblies, builds } from '../../db/schema/builds';
 import { bins, stockMovements, type MovementRow } from '../../db/schema/stock';
 import { users } from '../../db/schema/users';
@@ -35,14 +34,6 @@ export function findPairedWith(db: Executor, id: number): MovementRow | undefine
 
 export function findReversalOf(db: Executor, id: number): MovementRow | undefined {
   return db.select().from(stockMovements).where(eq(stockMovements.reversesId, id)).get();
-}
-
-/** A receipt ends the bin's reorder alert (open or ordered): the stock it asked for has come in. */
-export function closeActiveAlert(db: Executor, binId: number, movementId: number, at: Date): void {
-  db.update(binAlerts)
-    .set({ state: 'closed', closedAt: at, closedByMovementId: movementId })
-    .where(and(eq(binAlerts.binId, binId), sql`${binAlerts.state} in ('open', 'ordered')`))
-    .run();
 }
 
 /** Sets the bin's balance; the caller has already checked it stays at or above zero. */

@@ -4,13 +4,15 @@ import type { ServiceContext } from '../../context';
 import type { Database, Executor } from '../../db/client';
 import type { BinRow, MovementRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
+import { hasRole } from '@shared/roles';
 import { HttpError } from '../../lib/http-error';
 import { isUniqueViolation } from '../../lib/sqlite-errors';
 import { findBinByCode, findBinById, sameSpecBins, updateBin } from './bins.repo';
-import { assemblyOwnerId, closeActiveAlert, findMovement, findPairedWith, findReversalOf, insertMovement, listMovements, netDrawnBy, setOnHand, type LedgerRow } from './ledger.repo';
+import { assemblyOwnerId, findMovement, findPairedWith, findReversalOf, insertMovement, listMovements, netDrawnBy, setOnHand, type LedgerRow } from './ledger.repo';
 import { dollarsToE4, e4ToDollars, valueCents } from '@shared/stock/money';
 import { slipExists } from './slips.repo';
 import { withAssemblyNames, type NameAssemblies } from './assembly-names';
+import { receiptOnBin } from '../../reorder-alerts/alert-state';
 
 export function binOrThrow(db: Database, code: string): BinRow {
   const bin = findBinByCode(db, code);
@@ -153,7 +155,7 @@ export function receive(ctx: ServiceContext, actor: UserRow, code: string, body:
     const unitCostE4 = body.unitCost !== undefined ? dollarsToE4(body.unitCost) : bin.unitCostE4;
     if (unitCostE4 !== bin.unitCostE4) Object.assign(bin, updateBin(ctx.db, bin.id, { unitCostE4, updatedAt: at }));
     const row = post(ctx.db, bin, { kind: 'receive', quantity: body.quantity, actor, at, unitCostE4, note: body.note, slipId: body.slipId }, 'receive');
-    closeActiveAlert(ctx.db, bin.id, row.id, at);
+    receiptOnBin(ctx.db, bin.id, { event: 'receive', at, quantity: body.quantity, movementId: row.id });
     return row.id;
   });
   return loadMovement(ctx, id);
@@ -269,7 +271,21 @@ function binById(db: Executor, id: number): BinRow {
   return bin;
 }
 
-export function ledgerFor(ctx: ServiceContext, nameAssemblies: NameAssemblies, code: string, from?: Date, to?: Date, limit?: number): LedgerEntry[] {
+/** A member's own entry: on their tab (member), or one they made that is on no one's tab. */
+const isOwnEntry = (m: Movement, viewer: UserRow) => (m.member ? m.member.id === viewer.id : m.actor.id === viewer.id);
+
+/** Another person's entry as a member sees it: what moved and when, not who, what for or what it cost. */
+function masked(m: Movement): LedgerEntry {
+  return { ...m, masked: true, actor: null, member: null, unitCost: null, valueCents: null, assemblyId: null, assembly: null, note: '' };
+}
+
+/** A bin's ledger, newest first; a member sees others' entries masked (see ledgerEntrySchema). */
+export function ledgerFor(ctx: ServiceContext, nameAssemblies: NameAssemblies, viewer: UserRow, code: string, from?: Date, to?: Date, limit?: number): LedgerEntry[] {
   const bin = binOrThrow(ctx.db, code);
-  return withAssemblyNames(ctx.db, nameAssemblies, listMovements(ctx.db, { binId: bin.id, from, to, limit }).map(movementDto));
+  const entries = listMovements(ctx.db, { binId: bin.id, from, to, limit }).map(movementDto);
+  const seesAll = hasRole(viewer.role, 'quartermaster');
+  const shown = seesAll ? entries : entries.filter((m) => isOwnEntry(m, viewer));
+  const names = withAssemblyNames(ctx.db, nameAssemblies, shown);
+  const full = new Map(names.map((e) => [e.id, { ...e, masked: false }]));
+  return entries.map((m) => full.get(m.id) ?? masked(m));
 }

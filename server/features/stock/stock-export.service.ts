@@ -1,10 +1,10 @@
 import type { LedgerExportQuery } from '@shared/schemas/bin-import';
-import type { Bin, CreateBinInput } from '@shared/schemas/bins';
+import type { BinFields, CreateBinInput } from '@shared/schemas/bins';
 import type { ServiceContext } from '../../context';
 import { centsCell, textCell as text, toCsv, type CsvCell as Cell } from '../../lib/csv';
 import { HttpError } from '../../lib/http-error';
 import { binDesignation } from '@shared/stock/fasteners';
-import { toBinDto } from './bin-dto';
+import { toBinFields } from './bin-dto';
 import { BIN_COLUMNS, binCell } from './bin-csv';
 import { ALL_BINS } from './bin-import-check';
 import { listBins } from './bins.repo';
@@ -15,14 +15,14 @@ import { e4ToDollars, valueCents } from '@shared/stock/money';
 /** The export's columns are the import's, so a file exported from one chapter imports into another. */
 const BIN_EXPORT_FIELDS = [...BIN_COLUMNS.map((c) => c.name), 'designation', 'on_hand'];
 
-function binCells(bin: Bin): Cell[] {
+function binCells(bin: BinFields): Cell[] {
   const cells = BIN_COLUMNS.map((c) => binCell(c, c.field === 'initialQuantity' ? bin.onHand : bin[c.field]));
   return [...cells, text(bin.designation), bin.onHand];
 }
 
 /** Every bin, opening stock set to what is on hand now. */
 export function binsCsv(ctx: ServiceContext): string {
-  const bins = listBins(ctx.db, ALL_BINS).rows.map((row) => toBinDto(row));
+  const bins = listBins(ctx.db, ALL_BINS).rows.map((row) => toBinFields(row));
   return toCsv(BIN_EXPORT_FIELDS, bins.map(binCells));
 }
 

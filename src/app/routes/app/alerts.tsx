@@ -61,7 +61,7 @@ export function AlertsRoute() {
           <h2 id="purchase-heading" className="text-xl font-bold">
             Purchase list
           </h2>
-          <p className="text-steel">Alerts still to order, grouped by supplier, with the suggested quantities in whole packs.</p>
+          <p className="text-steel">What to order now, by supplier, in whole packs: the same bins and quantities as the Restock list.</p>
         </div>
         <PurchaseList groups={purchase} />
       </section>

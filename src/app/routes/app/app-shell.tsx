@@ -6,7 +6,7 @@ import { hasRole, ROLE_LABELS, type Role } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { useLogout } from '@/features/auth/api/logout';
 import type { QueuedAction } from '@/features/offline/db';
-import { binKeys } from '@/features/stock/api/keys';
+import { invalidateReorderFamily } from '@/lib/reorder-queries';
 import { stockMoneyKeys } from '@/features/stock-money/api/keys';
 import { toolKeys } from '@/features/tools/api/keys';
 import { messageOf } from '@/lib/errors';
@@ -58,7 +58,7 @@ function useRefreshAfterQueue() {
       if (entry.kind === 'check_out' || entry.kind === 'return') {
         void queryClient.invalidateQueries({ queryKey: toolKeys.all });
       } else {
-        void queryClient.invalidateQueries({ queryKey: binKeys.all });
+        void invalidateReorderFamily(queryClient);
         void queryClient.invalidateQueries({ queryKey: stockMoneyKeys.all });
       }
     },

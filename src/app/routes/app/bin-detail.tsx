@@ -1,9 +1,10 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { useSuspenseQuery } from '@tanstack/react-query';
+import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { Link, useLoaderData, useParams, type LoaderFunctionArgs } from 'react-router';
 import { hasRole } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { OfflineBinView } from '@/features/offline/components/offline-bin-view';
+import { binReorderQueryOptions } from '@/features/stock/api/get-bin-reorder';
 import { binQueryOptions } from '@/features/stock/api/get-bins';
 import { ledgerQueryOptions } from '@/features/stock/api/get-ledger';
 import { BinActionsPanel } from '@/features/stock/components/bin-actions-panel';
@@ -22,6 +23,7 @@ export const binDetailLoader =
     const code = codeOf(params);
     return loadOrOffline(() => {
       void queryClient.prefetchQuery(ledgerQueryOptions(code));
+      void queryClient.prefetchQuery(binReorderQueryOptions(code));
       return queryClient.ensureQueryData(binQueryOptions(code));
     });
   };
@@ -39,12 +41,14 @@ export function BinDetailRoute() {
 function OnlineBinDetail({ code }: { code: string }) {
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const { data: bin } = useSuspenseQuery(binQueryOptions(code));
+  // What to order comes from the forecast: read beside the scan answer, never holding it up.
+  const { data: reorder } = useQuery(binReorderQueryOptions(code));
   const isQuartermaster = !!me && hasRole(me.role, 'quartermaster');
   return (
     // On a phone: what it is and how many, then the actions, then the details; side by side on a wide screen.
     <div className="grid items-start gap-4 lg:grid-cols-[3fr_2fr]">
       <Card className="lg:col-start-1">
-        <BinSummary bin={bin} isQuartermaster={isQuartermaster} />
+        <BinSummary bin={bin} reorder={reorder} isQuartermaster={isQuartermaster} />
       </Card>
       <div className="flex flex-col gap-4 lg:col-start-2 lg:row-span-2 lg:row-start-1">
         <BinActionsPanel bin={bin} />
@@ -53,7 +57,7 @@ function OnlineBinDetail({ code }: { code: string }) {
         </Link>
       </div>
       <Card className="lg:col-start-1">
-        <BinDetails bin={bin} isQuartermaster={isQuartermaster} />
+        <BinDetails bin={bin} reorder={reorder} isQuartermaster={isQuartermaster} />
       </Card>
       <div className="lg:col-span-2">
         <LedgerList code={bin.code} isQuartermaster={isQuartermaster} />

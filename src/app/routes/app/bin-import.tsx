@@ -1,6 +1,6 @@
 import { useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
-import { binKeys } from '@/features/stock/api/keys';
+import { invalidateReorderFamily } from '@/lib/reorder-queries';
 import { BinImportPanel } from '@/features/stock-import/components/bin-import-panel';
 import { StockExportPanel } from '@/features/stock-import/components/stock-export-panel';
 import { Card, PageHeader } from '@/components/ui/page';
@@ -18,7 +18,7 @@ export function BinImportRoute() {
       <PageHeader title="Import and export bins" lead="Bring a list of bins in from a spreadsheet, or take the bins and the ledger out to one." />
       <div className="flex flex-col gap-5">
         <Card title="Import bins from a CSV file">
-          <BinImportPanel onImported={() => queryClient.invalidateQueries({ queryKey: binKeys.all })} />
+          <BinImportPanel onImported={() => invalidateReorderFamily(queryClient)} />
         </Card>
         <Card title="Export">
           <StockExportPanel />

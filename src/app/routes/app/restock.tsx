@@ -16,7 +16,7 @@ export function RestockRoute() {
   const { data } = useSuspenseQuery(restockQueryOptions());
   return (
     <>
-      <PageHeader title="Restock" lead="Bins at or below their reorder point, with the reorder quantity rounded up to whole packs." />
+      <PageHeader title="Restock" lead="Bins to order now, in whole packs: the same bins and quantities as the purchase list on Reorder alerts." />
       <RestockList items={data} />
     </>
   );

@@ -1,22 +1,24 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Alert, MarkOrderedBody } from '@shared/schemas/forecast';
 import { api } from '@/lib/api-client';
-import { alertKeys, forecastKeys } from './keys';
+import { invalidateReorderFamily } from '@/lib/reorder-queries';
 
-/** An alert's state moves the alert lists, the purchase list and the forecast (an order is an expected receipt). */
+/**
+ * An alert's state moves the alert lists, the purchase list, the forecast (an order is an expected
+ * receipt) and the bins (on order, to order, the Restock list).
+ */
 function useAlertMutation<V, R>(send: (v: V) => Promise<R>) {
   const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: send,
-    onSettled: () =>
-      Promise.all([queryClient.invalidateQueries({ queryKey: alertKeys.all }), queryClient.invalidateQueries({ queryKey: forecastKeys.all })]),
-  });
+  return useMutation({ mutationFn: send, onSettled: () => invalidateReorderFamily(queryClient) });
 }
 
 export const useMarkOrdered = () =>
   useAlertMutation(({ id, body }: { id: number; body: MarkOrderedBody }) =>
     api.post<Alert>(`/api/alerts/${id}/ordered`, body.note?.trim() ? body : { ...body, note: undefined }),
   );
+
+/** An ordered alert whose rest will not come: closed by hand, nothing stays on order. */
+export const useCloseAlert = () => useAlertMutation(({ id }: { id: number }) => api.post<Alert>(`/api/alerts/${id}/close`));
 
 export const useDismissAlert = () => useAlertMutation(({ id, reason }: { id: number; reason: string }) => api.post<Alert>(`/api/alerts/${id}/dismiss`, { reason }));
 

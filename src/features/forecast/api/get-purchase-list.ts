@@ -3,7 +3,7 @@ import type { PurchaseList } from '@shared/schemas/forecast';
 import { api } from '@/lib/api-client';
 import { alertKeys } from './keys';
 
-/** Alerts still to order, grouped by supplier. */
+/** What to order now (the Restock list's bins and quantities), grouped by supplier. */
 export const purchaseListQueryOptions = () =>
   queryOptions({
     queryKey: alertKeys.purchaseList(),

@@ -1,7 +1,11 @@
 import { useId, useState } from 'react';
+import { toast } from 'sonner';
 import { Link } from 'react-router';
 import type { Alert } from '@shared/schemas/forecast';
 import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { messageOf } from '@/lib/errors';
+import { useCloseAlert } from '../api/alert-actions';
 import { asSentence, formatDay, formatQuantity, packWords } from '../utils/format';
 import { AlertStateBadge } from './alert-state-badge';
 import { DismissForm } from './dismiss-form';
@@ -18,8 +22,9 @@ function historyWords(alert: Alert): string | null {
       const when = alert.orderedAt ? ` on ${formatDay(alert.orderedAt)}` : '';
       const who = alert.orderedBy ? ` by ${alert.orderedBy.name}` : '';
       const expected = alert.expectedAt ? `, expected by ${formatDay(alert.expectedAt)}` : '';
-      const received = alert.state === 'closed' && alert.closedAt ? ` Received on ${formatDay(alert.closedAt)}.` : '';
-      return `${ordered}${when}${who}${expected}.${received}`;
+      const sofar = alert.receivedQty > 0 && alert.state === 'ordered' ? ` ${formatQuantity(alert.receivedQty, u)} received so far, ${formatQuantity(alert.onOrder, u)} still to come.` : '';
+      const closed = alert.state === 'closed' && alert.closedAt ? closedWords(alert, formatDay(alert.closedAt)) : '';
+      return `${ordered}${when}${who}${expected}.${sofar}${closed}`;
     }
     case 'dismissed':
       return `Dismissed${alert.dismissedAt ? ` on ${formatDay(alert.dismissedAt)}` : ''}: ${alert.dismissReason ?? 'no reason given'}`;
@@ -28,9 +33,16 @@ function historyWords(alert: Alert): string | null {
   }
 }
 
+/** A closed order: all of it came, or the quartermaster closed it with part (or none) received. */
+function closedWords(alert: Alert, day: string): string {
+  const u = alert.bin.unit;
+  if (alert.orderedQty === null || alert.receivedQty >= alert.orderedQty) return ` Received on ${day}.`;
+  return ` Closed on ${day} with ${formatQuantity(alert.receivedQty, u)} of ${formatQuantity(alert.orderedQty, u)} received.`;
+}
+
 type Open = 'none' | 'ordered' | 'dismiss';
 
-/** One alert: the bin, the levels it was raised against, the suggested order, and what the quartermaster can do with it. */
+/** One alert: the bin, the levels it was raised against, what to order now (the one reorder rule, as on Restock), and what the quartermaster can do with it. */
 export function AlertCard({ alert }: { alert: Alert }) {
   const { bin } = alert;
   const headingId = useId();
@@ -38,6 +50,9 @@ export function AlertCard({ alert }: { alert: Alert }) {
   const u = bin.unit;
   const history = historyWords(alert);
   const close = () => setOpen('none');
+  const closeOrder = useCloseAlert();
+  const closeByHand = () =>
+    closeOrder.mutate({ id: alert.id }, { onSuccess: () => toast.success(`${bin.code}: order closed; nothing more is on order.`) });
   return (
     <article aria-labelledby={headingId} className="flex flex-col gap-3 py-4">
       <header className="flex flex-wrap items-start justify-between gap-2">
@@ -57,7 +72,13 @@ export function AlertCard({ alert }: { alert: Alert }) {
         <Figure label="On hand when raised" value={formatQuantity(alert.onHandAtRaise, u)} />
         <Figure label="Reorder point" value={formatQuantity(alert.reorderPoint, u)} />
         <Figure label="Safety stock" value={formatQuantity(alert.safetyStock, u)} />
-        <Figure label="Suggested order" value={formatQuantity(alert.suggestedQty, u)} extra={packWords(alert.suggestedQty, bin.packSize)} />
+        {alert.state === 'ordered' ? (
+          <Figure label="On order" value={formatQuantity(alert.onOrder, u)} extra={alert.toOrder > 0 ? `order ${formatQuantity(alert.toOrder, u)} more` : undefined} />
+        ) : alert.state === 'open' ? (
+          <Figure label="Order now" value={formatQuantity(alert.toOrder, u)} extra={packWords(alert.toOrder, bin.packSize)} />
+        ) : (
+          <Figure label="Suggested when raised" value={formatQuantity(alert.suggestedQty, u)} extra={packWords(alert.suggestedQty, bin.packSize)} />
+        )}
       </dl>
       <p className="text-sm">
         {bin.supplier ? (
@@ -78,11 +99,17 @@ export function AlertCard({ alert }: { alert: Alert }) {
       {(alert.state === 'open' || alert.state === 'ordered') && open === 'none' && (
         <div className="flex flex-wrap gap-2">
           {alert.state === 'open' && <Button onClick={() => setOpen('ordered')}>Mark ordered</Button>}
+          {alert.state === 'ordered' && (
+            <Button variant="secondary" onClick={closeByHand} busy={closeOrder.isPending} aria-label={`Close order for ${bin.code}: the rest will not come`}>
+              Close order
+            </Button>
+          )}
           <Button variant="secondary" onClick={() => setOpen('dismiss')}>
             Dismiss
           </Button>
         </div>
       )}
+      {closeOrder.isError && <Notice tone="bad">{messageOf(closeOrder.error)}</Notice>}
       {open === 'ordered' && <MarkOrderedForm alert={alert} onDone={close} />}
       {open === 'dismiss' && <DismissForm alert={alert} onDone={close} />}
     </article>

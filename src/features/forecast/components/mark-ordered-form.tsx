@@ -13,13 +13,13 @@ import { dayAfter, formatQuantity, leadTimeWords, packWords } from '../utils/for
 type Input = z.input<typeof markOrderedBodySchema>;
 type Output = z.output<typeof markOrderedBodySchema>;
 
-/** Records an order placed with the supplier: the quantity starts at the suggestion, the date at today plus the bin's lead time. */
+/** Records an order placed with the supplier: the quantity starts at what the reorder rule orders now, the date at today plus the bin's lead time. */
 export function MarkOrderedForm({ alert, onDone }: { alert: Alert; onDone: () => void }) {
   const { bin } = alert;
   const markOrdered = useMarkOrdered();
   const form = useForm<Input, unknown, Output>({
     resolver: zodResolver(markOrderedBodySchema),
-    defaultValues: { quantity: alert.suggestedQty, expectedAt: dayAfter(new Date(), bin.leadTimeDays), note: '' },
+    defaultValues: { quantity: alert.toOrder || alert.suggestedQty, expectedAt: dayAfter(new Date(), bin.leadTimeDays), note: '' },
   });
   const { errors } = form.formState;
   const quantity = useWatch({ control: form.control, name: 'quantity' });

@@ -39,6 +39,7 @@ function SupplierOrder({ group }: { group: Group }) {
                 </span>
               )}
               <span className="font-mono text-sm">{formatCents(line.costCents)}</span>
+              {line.onOrder > 0 && <span className="text-sm text-steel">{formatQuantity(line.onOrder, line.bin.unit)} already on order</span>}
             </div>
           </li>
         ))}
@@ -47,7 +48,7 @@ function SupplierOrder({ group }: { group: Group }) {
   );
 }
 
-/** Alerts still to order, one block per supplier with its total, and the whole list as CSV. */
+/** What to order now (the Restock list's bins and quantities), one block per supplier with its total, and the whole list as CSV. */
 export function PurchaseList({ groups }: { groups: PurchaseListDto['data'] }) {
   const lines = groups.reduce((n, g) => n + g.lines.length, 0);
   const total = groups.reduce((sum, g) => sum + g.totalCents, 0);

@@ -1,12 +1,17 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Assembly, CreateAssemblyBody, UpdateAssemblyBody } from '@shared/schemas/builds';
 import { api } from '@/lib/api-client';
+import { invalidateReorderFamily } from '@/lib/reorder-queries';
 import { assemblyKeys, buildKeys } from './keys';
 
-/** An assembly shows on its build, in the assembly lists and in its own estimate: refresh them all. */
+/**
+ * An assembly shows on its build, in the assembly lists and in its own estimate, and its planned
+ * need moves the forecast and with it what to order (Restock, alerts, bins): refresh them all.
+ */
 function useRefreshPlans() {
   const queryClient = useQueryClient();
-  return () => Promise.all([queryClient.invalidateQueries({ queryKey: buildKeys.all }), queryClient.invalidateQueries({ queryKey: assemblyKeys.all })]);
+  return () =>
+    Promise.all([queryClient.invalidateQueries({ queryKey: buildKeys.all }), queryClient.invalidateQueries({ queryKey: assemblyKeys.all }), invalidateReorderFamily(queryClient)]);
 }
 
 export function useCreateAssembly(buildId: number) {
@@ -32,7 +37,7 @@ export function useDeleteAssembly(id: number) {
     onSuccess: () => {
       queryClient.removeQueries({ queryKey: assemblyKeys.detail(id) });
       queryClient.removeQueries({ queryKey: assemblyKeys.estimate(id) });
-      return Promise.all([queryClient.invalidateQueries({ queryKey: buildKeys.all }), queryClient.invalidateQueries({ queryKey: assemblyKeys.all })]);
+      return Promise.all([queryClient.invalidateQueries({ queryKey: buildKeys.all }), queryClient.invalidateQueries({ queryKey: assemblyKeys.all }), invalidateReorderFamily(queryClient)]);
     },
   });
 }

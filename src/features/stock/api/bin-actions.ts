@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { CountBody, CountResult, DrawBody, MoveBody, Movement, ReceiveBody, ReturnUnusedBody, ReverseBody, WriteOffBody } from '@shared/schemas/bins';
 import { api } from '@/lib/api-client';
-import { binKeys } from './keys';
+import { invalidateReorderFamily } from '@/lib/reorder-queries';
 
 const path = (code: string, rest: string) => `/api/bins/${encodeURIComponent(code)}/${rest}`;
 
@@ -12,13 +12,14 @@ function withoutEmptyNote<T extends { note?: string }>(body: T): T {
 
 /**
  * A movement changes the bin's on-hand, its ledger, the bins list and the Restock list (a move
- * changes two bins): refresh the whole stock family so every figure on screen agrees at once.
+ * changes two bins), and with them the bin's alert (a receipt counts against its order) and the
+ * forecast: refresh the whole reorder family so every figure on screen agrees at once.
  */
 function useStockMutation<B extends { note?: string }, R>(rest: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ code, body }: { code: string; body: B }) => api.post<R>(path(code, rest), withoutEmptyNote(body)),
-    onSettled: () => queryClient.invalidateQueries({ queryKey: binKeys.all }),
+    onSettled: () => invalidateReorderFamily(queryClient),
   });
 }
 
@@ -33,6 +34,6 @@ export function useReverse() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ code, id, body }: { code: string; id: number; body: ReverseBody }) => api.post<Movement>(path(code, `ledger/${id}/reverse`), body),
-    onSettled: () => queryClient.invalidateQueries({ queryKey: binKeys.all }),
+    onSettled: () => invalidateReorderFamily(queryClient),
   });
 }

@@ -75,7 +75,8 @@ export const binColumns = helper.columns([
       </div>
     ),
   }),
-  helper.accessor('reorderPoint', {
+  // The point in force (the forecast's, never below the bin's own), as Restock and the Low badge use it.
+  helper.accessor('reorderAt', {
     header: 'Reorder at',
     enableGlobalFilter: false,
     cell: ({ getValue }) => <span className="font-mono">{formatCount(getValue())}</span>,

@@ -3,7 +3,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch, type Resolver } from 'react-hook-form';
 import { z } from 'zod';
 import { ALL_DRILLS } from '@shared/drills/drill-sizes';
-import { binKindRules, createBinBodySchema, type Bin } from '@shared/schemas/bins';
+import { binKindRules, createBinBodySchema, type BinFields } from '@shared/schemas/bins';
 import { BLIND_GRIP_RANGES, fastenerDesignation } from '@shared/stock/fasteners';
 import { BIN_KIND_LABELS, BIN_KINDS, isBlindKind, isRivetKind, RIVET_HEAD_LABELS, RIVET_HEADS, RIVET_MATERIALS, STEM_MATERIALS } from '@shared/stock/kinds';
 import { Button } from '@/components/ui/button';
@@ -52,7 +52,7 @@ const resolver: Resolver<FormInput, unknown, BinFormOutput> = async (values, con
   return { values: {}, errors: { ...rules.errors, ...result.errors } };
 };
 
-function defaults(bin?: Bin): FormInput {
+function defaults(bin?: BinFields): FormInput {
   if (!bin) {
     return {
       kind: 'blind_structural',
@@ -112,7 +112,7 @@ const lengthOptions = (current: number | null | undefined) =>
     'Choose the length',
   );
 
-export function BinForm({ bin, submitLabel, onSubmit }: { bin?: Bin; submitLabel: string; onSubmit: (body: BinFormOutput) => Promise<unknown> }) {
+export function BinForm({ bin, submitLabel, onSubmit }: { bin?: BinFields; submitLabel: string; onSubmit: (body: BinFormOutput) => Promise<unknown> }) {
   const [initial] = useState(() => defaults(bin));
   const form = useForm<FormInput, unknown, BinFormOutput>({ resolver, defaultValues: initial });
   const { errors, isSubmitting } = form.formState;

@@ -1,20 +1,23 @@
-import type { Bin } from '@shared/schemas/bins';
+import type { BinFields, BinReorder } from '@shared/schemas/bins';
 import { BIN_KIND_LABELS, isRivetKind } from '@shared/stock/kinds';
 import { Notice } from '@/components/ui/notice';
 import { Code } from '@/components/ui/page';
 import { formatCents, formatCount, formatDate, formatQuantity, formatUnitCost, gripRangeText } from '../utils/format';
 
-function lowStockWords(bin: Bin, isQuartermaster: boolean): string {
+/** Why the bin needs ordering and, for the quartermaster, what to order: the one reorder rule's numbers, as on Restock. */
+function lowStockWords(bin: BinFields, r: BinReorder, isQuartermaster: boolean): string {
   const level = bin.onHand === 0 ? `${bin.code} is empty` : `Only ${formatQuantity(bin.onHand, bin.unit)} left`;
-  const point = `, at or below the reorder point of ${formatCount(bin.reorderPoint)}.`;
-  if (!isQuartermaster) return `${level}${point} The quartermaster has it on the Restock list.`;
-  const packs = bin.toOrder / bin.packSize;
-  const order = bin.packSize > 1 ? `${formatQuantity(bin.toOrder, bin.unit)} (${formatCount(packs)} pack${packs === 1 ? '' : 's'} of ${formatCount(bin.packSize)})` : formatQuantity(bin.toOrder, bin.unit);
-  return `${level}${point} Order ${order}${bin.supplier ? ` from ${bin.supplier}` : ''}.`;
+  const onOrder = r.onOrder > 0 ? `, with ${formatQuantity(r.onOrder, bin.unit)} on order` : '';
+  const point = `${level}${onOrder}, at or below the reorder point of ${formatCount(r.reorderAt)} or short of what planned work needs.`;
+  if (r.toOrder === 0) return `${point} The quartermaster dismissed its reorder alert.`;
+  if (!isQuartermaster) return `${point} The quartermaster has it on the Restock list.`;
+  const packs = r.toOrder / bin.packSize;
+  const order = bin.packSize > 1 ? `${formatQuantity(r.toOrder, bin.unit)} (${formatCount(packs)} pack${packs === 1 ? '' : 's'} of ${formatCount(bin.packSize)})` : formatQuantity(r.toOrder, bin.unit);
+  return `${point} Order ${order}${bin.supplier ? ` from ${bin.supplier}` : ''}.`;
 }
 
-/** The top of a scanned bin's screen: what it holds, how many, and whether it runs low. */
-export function BinSummary({ bin, isQuartermaster }: { bin: Bin; isQuartermaster: boolean }) {
+/** The top of a scanned bin's screen: what it holds, how many, and (once the reorder rule has answered) whether it runs low. */
+export function BinSummary({ bin, reorder, isQuartermaster }: { bin: BinFields; reorder?: BinReorder; isQuartermaster: boolean }) {
   return (
     <section aria-labelledby="bin-designation" className="flex flex-col gap-3">
       <div>
@@ -34,10 +37,11 @@ export function BinSummary({ bin, isQuartermaster }: { bin: Bin; isQuartermaster
           </span>
         </p>
         {bin.packSize > 1 && <p className="text-steel">packs of {formatCount(bin.packSize)}</p>}
+        {reorder && reorder.onOrder > 0 && <p data-testid="bin-on-order">{formatQuantity(reorder.onOrder, bin.unit)} on order</p>}
       </div>
-      {bin.low && (
+      {reorder?.low && (
         <Notice tone="warn" title={bin.onHand === 0 ? 'Empty' : 'Low stock'}>
-          {lowStockWords(bin, isQuartermaster)}
+          {lowStockWords(bin, reorder, isQuartermaster)}
         </Notice>
       )}
     </section>
@@ -45,7 +49,7 @@ export function BinSummary({ bin, isQuartermaster }: { bin: Bin; isQuartermaster
 }
 
 /** Where the bin lives, its spec details, cost and (for the quartermaster) its supplier, with the usual caution for rivets. */
-export function BinDetails({ bin, isQuartermaster }: { bin: Bin; isQuartermaster: boolean }) {
+export function BinDetails({ bin, reorder, isQuartermaster }: { bin: BinFields; reorder?: BinReorder; isQuartermaster: boolean }) {
   return (
     <section aria-label={`About ${bin.code}`} className="flex flex-col gap-3">
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1.5">
@@ -68,7 +72,10 @@ export function BinDetails({ bin, isQuartermaster }: { bin: Bin; isQuartermaster
           </>
         )}
         <dt className="text-steel">Reorder point</dt>
-        <dd>{formatCount(bin.reorderPoint)}</dd>
+        <dd>
+          {formatCount(reorder?.reorderAt ?? bin.reorderPoint)}
+          {reorder && reorder.reorderAt > bin.reorderPoint && <span className="text-steel"> (planned work raises the bin&apos;s own {formatCount(bin.reorderPoint)})</span>}
+        </dd>
         <dt className="text-steel">Unit cost</dt>
         <dd>
           <Code>{formatUnitCost(bin.unitCost)}</Code> per {bin.unit === 'each' ? 'piece' : bin.unit}

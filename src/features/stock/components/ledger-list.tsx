@@ -16,7 +16,7 @@ import { formatCount, formatDateTime, formatSigned, formatUnitCost } from '../ut
 import { formatSignedCents } from '../utils/value';
 
 /** A reversal undoes an entry once; a reversal is not itself reversed, and a count that changed nothing has nothing to undo. */
-export const canReverse = (m: Movement) => m.kind !== 'reversal' && m.reversedById === null && !(m.kind === 'count' && m.quantity === 0);
+export const canReverse = (m: Pick<Movement, 'kind' | 'reversedById' | 'quantity'>) => m.kind !== 'reversal' && m.reversedById === null && !(m.kind === 'count' && m.quantity === 0);
 
 const entryAnchor = (id: number) => `entry-${id}`;
 
@@ -28,7 +28,7 @@ function EntryLink({ id, words }: { id: number; words: string }) {
   );
 }
 
-function ReverseEntry({ code, entry }: { code: string; entry: Movement }) {
+function ReverseEntry({ code, entry }: { code: string; entry: Pick<Movement, 'id' | 'quantity'> }) {
   const reverse = useReverse();
   const [open, setOpen] = useState(false);
   const [note, setNote] = useState('');
@@ -72,8 +72,14 @@ function ReverseEntry({ code, entry }: { code: string; entry: Movement }) {
   );
 }
 
-function LedgerItem({ code, entry: m, isQuartermaster }: { code: string; entry: LedgerEntry; isQuartermaster: boolean }) {
+/** Who made the entry and for whom; another person's entry, as a member sees it, names no one. */
+function whoWords(m: LedgerEntry): string {
+  if (!m.actor) return 'another person';
   const forSomeoneElse = m.member && m.member.id !== m.actor.id;
+  return `${m.actor.name}${forSomeoneElse ? ` for ${m.member!.name}` : ''}`;
+}
+
+function LedgerItem({ code, entry: m, isQuartermaster }: { code: string; entry: LedgerEntry; isQuartermaster: boolean }) {
   return (
     <li id={entryAnchor(m.id)} className="flex flex-col gap-0.5 py-3">
       <div className="flex flex-wrap items-baseline justify-between gap-x-3">
@@ -90,13 +96,14 @@ function LedgerItem({ code, entry: m, isQuartermaster }: { code: string; entry: 
           )}
         </p>
         <p className="font-mono text-sm">
-          balance {formatCount(m.balanceAfter)} · {formatSignedCents(m.valueCents)}
+          balance {formatCount(m.balanceAfter)}
+          {m.valueCents !== null && <> · {formatSignedCents(m.valueCents)}</>}
         </p>
       </div>
       <p className="text-sm text-steel">
-        #{m.id} · {formatDateTime(m.at)} · {m.actor.name}
-        {forSomeoneElse && ` for ${m.member!.name}`}
-        {m.assembly && ` for ${formatAssembly(m.assembly)}`} · at {formatUnitCost(m.unitCost)}
+        #{m.id} · {formatDateTime(m.at)} · {whoWords(m)}
+        {m.assembly && ` for ${formatAssembly(m.assembly)}`}
+        {m.unitCost !== null && ` · at ${formatUnitCost(m.unitCost)}`}
       </p>
       {m.note && <p className="text-sm">{m.note}</p>}
       {(m.reversesId !== null || m.reversedById !== null || (m.slipId !== null && isQuartermaster)) && (
@@ -115,7 +122,7 @@ function LedgerItem({ code, entry: m, isQuartermaster }: { code: string; entry: 
   );
 }
 
-/** The bin's ledger, newest first: every change of quantity with who, when, why and its value. */
+/** The bin's ledger, newest first: every change of quantity with who, when, why and its value (a member sees only their own entries' who and value). */
 export function LedgerList({ code, isQuartermaster }: { code: string; isQuartermaster: boolean }) {
   const ledger = useQuery(ledgerQueryOptions(code));
   return (

@@ -16,7 +16,7 @@ function RestockRow({ item }: { item: RestockItem }) {
       <div className="flex flex-col gap-1">
         <span className="font-medium">{item.designation}</span>
         <span className="text-sm text-steel">
-          {formatQuantity(item.onHand, item.unit)} on hand; reorder at {formatCount(item.reorderPoint)}
+          {formatQuantity(item.onHand, item.unit)} on hand{item.onOrder > 0 && `, ${formatQuantity(item.onOrder, item.unit)} on order`}; reorder at {formatCount(item.reorderAt)}
         </span>
         {item.supplierPart && (
           <span className="text-sm">
@@ -43,7 +43,7 @@ export function RestockList({ items }: { items: RestockItem[] }) {
     return (
       <Card>
         <p className="font-semibold">Nothing to order.</p>
-        <p className="mt-1 text-steel">Every bin has more on hand than its reorder point.</p>
+        <p className="mt-1 text-steel">Every bin has more on hand and on order than its reorder point.</p>
       </Card>
     );
   }
@@ -52,7 +52,7 @@ export function RestockList({ items }: { items: RestockItem[] }) {
   return (
     <div className="flex flex-col gap-4">
       <p aria-live="polite">
-        {formatCount(items.length)} {items.length === 1 ? 'bin is' : 'bins are'} at or below the reorder point, from {orders.length}{' '}
+        {formatCount(items.length)} {items.length === 1 ? 'bin needs' : 'bins need'} ordering, from {orders.length}{' '}
         {orders.length === 1 ? 'supplier' : 'suppliers'}. Estimated total <span className="font-mono font-semibold">{formatCents(grandTotal)}</span>.
       </p>
       {orders.map((order) => (

@@ -10,9 +10,15 @@ export function listPeople(ctx: ServiceContext): Person[] {
   return listUsers(ctx.db).map(toPerson);
 }
 
+/**
+ * The crib's rule for a person who leaves: their holds and queue places end in the same transaction
+ * (a tool set aside for them passes on). Returns the e-mails to send after commit. The app hands it in.
+ */
+export type EndHoldsOf = (ctx: ServiceContext, personId: number, now: Date) => (() => Promise<void>)[];
+
 /** Role changes and (de)activation; the chapter always keeps at least one active lead. */
-export function updatePerson(ctx: ServiceContext, actor: UserRow, id: number, change: UpdatePersonBody): Person {
-  return ctx.db.transaction((db) => {
+export async function updatePerson(ctx: ServiceContext, actor: UserRow, id: number, change: UpdatePersonBody, endHoldsOf: EndHoldsOf): Promise<Person> {
+  const { person, notes } = ctx.db.transaction((db) => {
     const person = findUserById(db, id);
     if (!person) throw new HttpError(404, 'PERSON_NOT_FOUND', `No person has id ${id}.`);
     const deactivating = change.active === false && person.deactivatedAt === null;
@@ -28,6 +34,9 @@ export function updatePerson(ctx: ServiceContext, actor: UserRow, id: number, ch
       ...(change.active !== undefined && { deactivatedAt: change.active ? null : (person.deactivatedAt ?? ctx.now()) }),
     });
     if (deactivating) endSessionsOf(ctx.db, id);
-    return toPerson(updated ?? person);
+    const notes = deactivating ? endHoldsOf(ctx, id, ctx.now()) : [];
+    return { person: toPerson(updated ?? person), notes };
   });
+  await Promise.allSettled(notes.map((n) => n()));
+  return person;
 }

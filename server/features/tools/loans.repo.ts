@@ -2,7 +2,7 @@ import { and, eq, isNull, sql } from 'drizzle-orm';
 import type { Database } from '../../db/client';
 import { preparedPerDatabase } from '../../db/prepared';
 import { memberSignoffs, signoffs } from '../../db/schema/signoffs';
-import { holds, loans, toolEvents, tools } from '../../db/schema/tools';
+import { holds, loans, tools } from '../../db/schema/tools';
 import { users } from '../../db/schema/users';
 
 const p = sql.placeholder;
@@ -44,11 +44,6 @@ function prepareLoanStatements(db: Database) {
       .values({ toolId: p('toolId'), userId: p('userId'), checkedOutAt: p('checkedOutAt'), dueAt: p('dueAt'), checkoutArrivedAt: p('arrivedAt') })
       .returning({ id: loans.id })
       .prepare(),
-    setToolStatus: db
-      .update(tools)
-      .set({ status: sql`${p('status')}`, statusNote: sql`${p('statusNote')}`, updatedAt: sql`${p('updatedAt')}` })
-      .where(eq(tools.id, p('toolId')))
-      .prepare(),
     fulfilHold: db
       .update(holds)
       .set({ status: 'fulfilled', closedAt: sql`${p('at')}` })
@@ -67,18 +62,6 @@ function prepareLoanStatements(db: Database) {
         returnPhotoId: sql`${p('returnPhotoId')}`,
       })
       .where(and(eq(loans.id, p('loanId')), isNull(loans.returnedAt)))
-      .prepare(),
-    insertEvent: db
-      .insert(toolEvents)
-      .values({
-        toolId: p('toolId'),
-        actorId: p('actorId'),
-        at: p('at'),
-        action: p('action'),
-        fromStatus: p('fromStatus'),
-        toStatus: p('toStatus'),
-        detail: p('detail'),
-      })
       .prepare(),
   };
 }

@@ -4,17 +4,20 @@ import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { isUniqueViolation } from '../../lib/sqlite-errors';
-import { offerToNextInQueue } from './holds.service';
+import { dayInWords } from '@shared/time/chapter-time';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
+import { offerToNextInQueue, type Notify } from './holds.service';
 import { loanStatements } from './loans.repo';
 import { checkReturnPhoto } from './photos.service';
-import { signOffAdvice } from './signoffs.service';
+import { refuseWithoutSignoff } from './signoffs.service';
 import { effectiveLoanDays } from './tool-dto';
+import { moveTool } from './tool-state';
+import { heldWords, loanWords } from './tool-words';
 import type { ToolRow } from './tools.repo';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 const MAX_LOAN_MS = 365 * DAY_MS;
 
-const dateWords = (d: Date) => d.toISOString().slice(0, 10);
 
 export interface LoanResult {
   id: number;
@@ -56,14 +59,14 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
     const tool = toolOrThrow(ctx, code);
     if (tool.status === 'on_loan') {
       const loan = s.openLoan.get({ toolId: tool.id });
-      const who = loan ? (loan.userId === user.id ? 'you' : loan.holderName) : 'someone';
-      throw new HttpError(409, 'TOOL_ON_LOAN', `${tool.code} is on loan: held by ${who} until ${loan ? dateWords(loan.dueAt) : 'its return'}.`);
+      const who = loan ? loanWords({ name: loan.holderName, you: loan.userId === user.id }, loan.dueAt, now, readChapterTimeZone(ctx.db)) : '';
+      throw new HttpError(409, 'TOOL_ON_LOAN', `${tool.code} is on loan. ${who}`.trim());
     }
     let holdId: number | undefined;
     if (tool.status === 'held') {
       const offer = s.offeredHold.get({ toolId: tool.id });
       if (offer && offer.userId !== user.id) {
-        throw new HttpError(409, 'TOOL_HELD', `${tool.code} is held for ${offer.name} until ${offer.offerExpiresAt?.toISOString().slice(0, 16).replace('T', ' ') ?? 'they collect it'}.`);
+        throw new HttpError(409, 'TOOL_HELD', `${tool.code} is not free. ${heldWords(offer.name, offer.offerExpiresAt, readChapterTimeZone(ctx.db))}`);
       }
       holdId = offer?.id;
     } else if (tool.status === 'out_of_service') {
@@ -71,14 +74,7 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
     } else if (tool.status !== 'available') {
       throw new HttpError(403, 'TOOL_UNAVAILABLE', `${tool.code} is ${tool.status === 'lost' ? 'marked lost' : 'retired'} and cannot be checked out.`);
     }
-    if (tool.requiredSignoffId !== null && !s.hasSignoff.get({ signoffId: tool.requiredSignoffId, userId: user.id })) {
-      const name = s.signoffName.get({ id: tool.requiredSignoffId })?.name ?? 'a sign-off';
-      throw new HttpError(
-        403,
-        'SIGNOFF_REQUIRED',
-        `${tool.code} needs the "${name}" sign-off, which you do not have yet. ${signOffAdvice(ctx.db)}`,
-      );
-    }
+    refuseWithoutSignoff(ctx, tool, user);
     const due = dueDate(tool, body, at);
     let loanId: number;
     try {
@@ -89,17 +85,14 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
       }
       throw err;
     }
-    s.setToolStatus.run({ toolId: tool.id, status: 'on_loan', statusNote: null, updatedAt: now.getTime() });
-    if (holdId !== undefined) s.fulfilHold.run({ holdId, at: at.getTime() });
-    s.insertEvent.run({
-      toolId: tool.id,
+    moveTool(ctx.db, tool, 'check_out', {
       actorId: user.id,
       at,
-      action: 'checked_out',
-      fromStatus: tool.status,
-      toStatus: 'on_loan',
-      detail: `Due ${dateWords(due)}`,
+      now,
+      detail: `Due ${dayInWords(due, readChapterTimeZone(ctx.db), at)}`,
+      facts: { offeredToActor: holdId !== undefined },
     });
+    if (holdId !== undefined) s.fulfilHold.run({ holdId, at: at.getTime() });
     return {
       id: loanId,
       toolId: tool.id,
@@ -188,18 +181,16 @@ export function returnToolNow(
       .join('; ');
     let status: ToolRow['status'];
     let offeredTo: ReturnResult['offeredTo'] = null;
-    let notify: (() => Promise<void>) | undefined;
+    let notify: Notify | undefined;
     if (body.condition === 'needs_attention') {
-      status = 'out_of_service';
-      s.setToolStatus.run({ toolId: tool.id, status, statusNote: body.note ?? 'Needs attention', updatedAt: now.getTime() });
+      status = moveTool(ctx.db, tool, 'return_needs_attention', { actorId: user.id, at, now, detail, note: body.note ?? 'Needs attention' }).status;
     } else {
-      const offer = s.anyoneWaiting.get({ toolId: tool.id }) ? offerToNextInQueue(ctx, tool, now) : undefined;
-      status = offer ? 'held' : 'available';
+      const back = moveTool(ctx.db, tool, 'return', { actorId: user.id, at, now, detail });
+      const offer = s.anyoneWaiting.get({ toolId: tool.id }) ? offerToNextInQueue(ctx, { ...tool, status: back.status }, now) : undefined;
+      status = offer ? 'held' : back.status;
       offeredTo = offer ? { id: offer.userId, name: offer.name } : null;
       notify = offer?.notify;
-      if (!offer) s.setToolStatus.run({ toolId: tool.id, status, statusNote: null, updatedAt: now.getTime() });
     }
-    s.insertEvent.run({ toolId: tool.id, actorId: user.id, at, action: 'returned', fromStatus: 'on_loan', toStatus: status, detail });
     const result = { loanId: loan.id, code: tool.code, status, shortfall, offeredTo, returnedAt: at.toISOString(), recordedAt: now.toISOString() };
     return { result, notify };
   })();

@@ -8,19 +8,23 @@ import { users } from '../../db/schema/users';
 import { loanStatements } from './loans.repo';
 
 export type ToolRow = typeof tools.$inferSelect;
-export type NewToolRow = typeof tools.$inferInsert;
+/** A tool's fields other than its state: the state has one writer, `tool-state.ts`. */
+export type NewToolRow = Omit<typeof tools.$inferInsert, 'status' | 'statusNote'>;
 
 /** Every scan starts here, so the lookup is the checkout's own prepared statement. */
 export function findToolByCode(db: Database, code: string): ToolRow | undefined {
   return loanStatements(db).toolByCode.get({ code });
 }
 
+/** A new tool starts on the shelf (the column's default). */
 export function insertTool(db: Executor, values: NewToolRow): ToolRow {
-  return db.insert(tools).values(values).returning().get();
+  const { status: _status, statusNote: _note, ...fields } = values as typeof tools.$inferInsert;
+  return db.insert(tools).values(fields).returning().get();
 }
 
 export function updateTool(db: Executor, id: number, values: Partial<NewToolRow>): ToolRow {
-  return db.update(tools).set(values).where(eq(tools.id, id)).returning().get();
+  const { status: _status, statusNote: _note, ...fields } = values as Partial<typeof tools.$inferInsert>;
+  return db.update(tools).set(fields).where(eq(tools.id, id)).returning().get();
 }
 
 /** The next free label code: one more than the highest T-number in use, four digits at least. */

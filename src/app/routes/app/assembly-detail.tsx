@@ -86,7 +86,7 @@ export function AssemblyDetailRoute() {
       <Card title="From the crib">
         <div className="flex flex-col gap-4">
           <KitList kit={estimate.kit} />
-          {mine && estimate.kit.length > 0 && <HoldKit assemblyId={id} />}
+          {mine && estimate.kit.length > 0 && <HoldKit assemblyId={id} plannedStart={assembly.plannedStart} />}
         </div>
       </Card>
       <Card title="Rivet lines">

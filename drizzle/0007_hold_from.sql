@@ -1,0 +1,1 @@
+ALTER TABLE `holds` ADD `starts_at` integer;

@@ -33,6 +33,11 @@ describe('tools.status has one writer', () => {
     expect(offenders).toEqual([]);
   });
 
+  it('leaves missing accessories to their one module too', () => {
+    const writers = sourceFiles('server').filter((file) => /(insert|update|delete)\(missingAccessories\)/.test(readFileSync(join(ROOT, file), 'utf8')));
+    expect(writers).toEqual(['server/features/tools/missing-accessories.ts']);
+  });
+
   it('finds such a write when one is there (the scan itself can fail)', () => {
     expect(toolWrites("ctx.db.update(tools).set({ status: 'available' }).where(eq(tools.id, 1)).run();")).toHaveLength(1);
     expect(toolWrites("db.prepare('UPDATE tools SET status = ? WHERE id = ?')")).toHaveLength(1);

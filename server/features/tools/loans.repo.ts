@@ -2,7 +2,7 @@ import { and, eq, isNull, sql } from 'drizzle-orm';
 import type { Database } from '../../db/client';
 import { preparedPerDatabase } from '../../db/prepared';
 import { memberSignoffs, signoffs } from '../../db/schema/signoffs';
-import { holds, loans, tools } from '../../db/schema/tools';
+import { holds, loans, missingAccessories, tools } from '../../db/schema/tools';
 import { users } from '../../db/schema/users';
 
 const p = sql.placeholder;
@@ -15,7 +15,7 @@ function prepareLoanStatements(db: Database) {
   return {
     toolByCode: db.select().from(tools).where(eq(tools.code, p('code'))).prepare(),
     openLoan: db
-      .select({ id: loans.id, userId: loans.userId, holderName: users.name, checkedOutAt: loans.checkedOutAt, dueAt: loans.dueAt })
+      .select({ id: loans.id, userId: loans.userId, holderName: users.name, checkedOutAt: loans.checkedOutAt, dueAt: loans.dueAt, accessoriesOut: loans.accessoriesOut })
       .from(loans)
       .innerJoin(users, eq(users.id, loans.userId))
       .where(and(eq(loans.toolId, p('toolId')), isNull(loans.returnedAt)))
@@ -24,6 +24,11 @@ function prepareLoanStatements(db: Database) {
       .select({ id: memberSignoffs.id })
       .from(memberSignoffs)
       .where(and(eq(memberSignoffs.signoffId, p('signoffId')), eq(memberSignoffs.userId, p('userId')), isNull(memberSignoffs.revokedAt)))
+      .prepare(),
+    openMissing: db
+      .select({ accessory: missingAccessories.accessory })
+      .from(missingAccessories)
+      .where(and(eq(missingAccessories.toolId, p('toolId')), isNull(missingAccessories.resolvedAt)))
       .prepare(),
     signoffName: db.select({ name: signoffs.name }).from(signoffs).where(eq(signoffs.id, p('id'))).prepare(),
     offeredHold: db
@@ -41,7 +46,7 @@ function prepareLoanStatements(db: Database) {
       .prepare(),
     insertLoan: db
       .insert(loans)
-      .values({ toolId: p('toolId'), userId: p('userId'), checkedOutAt: p('checkedOutAt'), dueAt: p('dueAt'), checkoutArrivedAt: p('arrivedAt') })
+      .values({ toolId: p('toolId'), userId: p('userId'), checkedOutAt: p('checkedOutAt'), dueAt: p('dueAt'), checkoutArrivedAt: p('arrivedAt'), accessoriesOut: p('accessoriesOut') })
       .returning({ id: loans.id })
       .prepare(),
     fulfilHold: db

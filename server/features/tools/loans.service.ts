@@ -8,6 +8,7 @@ import { dayInWords } from '@shared/time/chapter-time';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { offerToNextInQueue, type Notify } from './holds.service';
 import { loanStatements } from './loans.repo';
+import { accessoryList, recordMissingAccessories } from './missing-accessories';
 import { checkReturnPhoto } from './photos.service';
 import { refuseWithoutSignoff } from './signoffs.service';
 import { effectiveLoanDays } from './tool-dto';
@@ -76,9 +77,10 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
     }
     refuseWithoutSignoff(ctx, tool, user);
     const due = dueDate(tool, body, at);
+    const taken = accessoriesTaken(ctx, tool, body.accessories);
     let loanId: number;
     try {
-      loanId = s.insertLoan.get({ toolId: tool.id, userId: user.id, checkedOutAt: at, dueAt: due, arrivedAt: now }).id;
+      loanId = s.insertLoan.get({ toolId: tool.id, userId: user.id, checkedOutAt: at, dueAt: due, arrivedAt: now, accessoriesOut: taken ? JSON.stringify(taken) : null }).id;
     } catch (err) {
       if (isUniqueViolation(err)) {
         throw new HttpError(409, 'TOOL_ON_LOAN', `${tool.code} was just checked out by someone else.`);
@@ -101,9 +103,45 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
       checkedOutAt: at.toISOString(),
       dueAt: due.toISOString(),
       recordedAt: now.toISOString(),
-      accessories: JSON.parse(tool.accessories) as string[],
+      accessories: taken ?? [],
     };
   })();
+}
+
+/**
+ * The accessories ticked at checkout, checked against the tool's list (less any still missing):
+ * the loan records exactly what went out. Undefined when the checkout did not say.
+ */
+function accessoriesTaken(ctx: ServiceContext, tool: ToolRow, ticked: string[] | undefined): string[] | undefined {
+  if (ticked === undefined) return undefined;
+  const own = JSON.parse(tool.accessories) as string[];
+  const missing = new Set(loanStatements(ctx.db).openMissing.all({ toolId: tool.id }).map((m) => m.accessory));
+  const issues = ticked.flatMap((a, i) => {
+    if (!own.includes(a)) return [{ path: `accessories.${i}`, message: `${tool.code} has no accessory called "${a}". It has: ${own.join(', ') || 'none'}.` }];
+    if (missing.has(a)) return [{ path: `accessories.${i}`, message: `${a} is missing from ${tool.code}; the quartermaster has not marked it found yet.` }];
+    if (ticked.indexOf(a) !== i) return [{ path: `accessories.${i}`, message: `${a} is listed twice.` }];
+    return [];
+  });
+  if (issues.length > 0) throw new HttpError(400, 'UNKNOWN_ACCESSORY', issues.map((i) => i.message).join(' '), issues);
+  return own.filter((a) => ticked.includes(a));
+}
+
+/** Of what went out with the loan, what did not come back; refuses a return that does not say, or names something that never went out. */
+function accessoriesNotBack(tool: ToolRow, out: string[] | null, back: string[] | undefined): string[] {
+  if (out === null || out.length === 0) {
+    if (back && back.length > 0) throw new HttpError(400, 'UNKNOWN_ACCESSORY', `Nothing was recorded going out with ${tool.code}, so nothing can be ticked back.`, [{ path: 'accessoriesBack', message: 'Leave it out.' }]);
+    return [];
+  }
+  if (back === undefined) {
+    throw new HttpError(400, 'ACCESSORIES_UNCHECKED', `Tick what came back with ${tool.code}: ${out.join(', ')} went out with it.`, [
+      { path: 'accessoriesBack', message: `Tick each of ${out.join(', ')} that came back.` },
+    ]);
+  }
+  const strays = back.filter((a) => !out.includes(a));
+  if (strays.length > 0) {
+    throw new HttpError(400, 'UNKNOWN_ACCESSORY', `${strays.join(', ')} did not go out with this loan of ${tool.code}; it took ${out.join(', ')}.`, [{ path: 'accessoriesBack', message: 'Tick only what went out.' }]);
+  }
+  return out.filter((a) => !back.includes(a));
 }
 
 export interface ReturnResult {
@@ -111,6 +149,8 @@ export interface ReturnResult {
   code: string;
   status: ToolRow['status'];
   shortfall: number | null;
+  /** What went out with the loan and did not come back. */
+  accessoriesMissing: string[];
   offeredTo: { id: number; name: string } | null;
   /** When it came back (a return queued offline: when it was done, never before the checkout). */
   returnedAt: string;
@@ -160,6 +200,7 @@ export function returnToolNow(
       shortfall = tool.trayCapacity !== null ? tool.trayCapacity - body.returnedCount : null;
     }
     if (body.photoId !== undefined) checkReturnPhoto(ctx, tool, body.photoId);
+    const notBack = accessoriesNotBack(tool, accessoryList(loan.accessoriesOut), body.accessoriesBack);
     const at = performedAt && performedAt < loan.checkedOutAt ? loan.checkedOutAt : (performedAt ?? now);
     s.closeLoan.run({
       loanId: loan.id,
@@ -175,10 +216,12 @@ export function returnToolNow(
     const detail = [
       body.condition === 'ok' ? 'Came back ok' : `Needs attention: ${body.note}`,
       shortfall ? `${shortfall} temporary fasteners short` : '',
+      notBack.length > 0 ? `did not come back: ${notBack.join(', ')}` : '',
       loan.userId !== user.id ? `returned for ${loan.holderName}` : '',
     ]
       .filter(Boolean)
       .join('; ');
+    recordMissingAccessories(ctx.db, { toolId: tool.id, loanId: loan.id, accessories: notBack, at });
     let status: ToolRow['status'];
     let offeredTo: ReturnResult['offeredTo'] = null;
     let notify: Notify | undefined;
@@ -191,7 +234,7 @@ export function returnToolNow(
       offeredTo = offer ? { id: offer.userId, name: offer.name } : null;
       notify = offer?.notify;
     }
-    const result = { loanId: loan.id, code: tool.code, status, shortfall, offeredTo, returnedAt: at.toISOString(), recordedAt: now.toISOString() };
+    const result = { loanId: loan.id, code: tool.code, status, shortfall, accessoriesMissing: notBack, offeredTo, returnedAt: at.toISOString(), recordedAt: now.toISOString() };
     return { result, notify };
   })();
 }

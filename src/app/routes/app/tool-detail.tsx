@@ -8,6 +8,7 @@ import { ReturnPhotoPicker } from '@/features/photos/components/return-photo-pic
 import { ToolPhotos } from '@/features/photos/components/tool-photos';
 import { toolQueryOptions } from '@/features/tools/api/get-tool';
 import { toolKeys } from '@/features/tools/api/keys';
+import { MissingAccessories } from '@/features/tools/components/missing-accessories';
 import { QuartermasterCommands } from '@/features/tools/components/quartermaster-commands';
 import { ToolActionsPanel } from '@/features/tools/components/tool-actions-panel';
 import { ToolHistory } from '@/features/tools/components/tool-history';
@@ -48,6 +49,11 @@ function OnlineToolDetail({ code }: { code: string }) {
         <Card>
           <ToolSummary tool={tool} />
         </Card>
+        {tool.missingAccessories.length > 0 && (
+          <Card>
+            <MissingAccessories tool={tool} canResolve={isQuartermaster} />
+          </Card>
+        )}
         {tool.notes && <Card title="Notes">{tool.notes}</Card>}
         {(tool.photoIds.length > 0 || isQuartermaster) && (
           <Card title="Photos">

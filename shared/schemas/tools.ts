@@ -174,7 +174,8 @@ export const toolForYouSchema = toolSchema.extend({
     actions: z.array(z.enum(TOOL_ACTIONS)),
     reason: z.string().nullable(),
     defaultDueAt: z.string(),
-    yourHold: z.object({ status: z.enum(['waiting', 'offered']), position: z.number(), offerExpiresAt: z.string().nullable() }).nullable(),
+    /** `startsAt`: a hold placed ahead (a kit for an assembly starting later) begins then; null once begun. */
+    yourHold: z.object({ status: z.enum(['waiting', 'offered']), position: z.number(), offerExpiresAt: z.string().nullable(), startsAt: z.string().nullable() }).nullable(),
   }),
 });
 export type ToolForYou = z.infer<typeof toolForYouSchema>;

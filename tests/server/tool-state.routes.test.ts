@@ -225,6 +225,7 @@ describe('"Hold the kit" holds from the planned start', () => {
     expect(res.status).toBe(201);
     expect(kitHoldsResultSchema.strict().parse(res.body)).toEqual({ placed: [{ code: tool.code, name: 'Bucking bar' }], skipped: [], holdsFrom: '2027-01-05' });
     expect(await statusOf(tool.code)).toBe('available');
+    expect((await member.agent.get(`/api/tools/${tool.code}`)).body.forYou.yourHold).toMatchObject({ status: 'waiting', startsAt: '2027-01-05T07:00:00.000Z' });
     expect((await post(other, `/api/tools/${tool.code}/checkout`)).status).toBe(201);
     await post(other, `/api/tools/${tool.code}/return`, { condition: 'ok' }).expect(200);
     expect(await statusOf(tool.code)).toBe('available');

@@ -97,6 +97,7 @@ export function getToolForYou(ctx: ServiceContext, user: UserRow, code: string):
             status: myHold.status as 'waiting' | 'offered',
             position: queuePosition(ctx.db, tool.id, myHold.id),
             offerExpiresAt: myHold.offerExpiresAt?.toISOString() ?? null,
+            startsAt: myHold.startsAt && myHold.startsAt > now ? myHold.startsAt.toISOString() : null,
           }
         : null,
     },

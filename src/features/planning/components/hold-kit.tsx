@@ -9,7 +9,7 @@ import { useHoldKit } from '../api/hold-kit';
  * One tap asks the crib to hold every tool of the kit from the assembly's planned start; what could
  * not be held says why.
  */
-export function HoldKit({ assemblyId, plannedStart }: { assemblyId: number; plannedStart: string | null }) {
+export function HoldKit({ assemblyId, plannedStart, onHeld }: { assemblyId: number; plannedStart: string | null; onHeld?: () => void }) {
   const hold = useHoldKit(assemblyId);
   const result: KitHoldsResult | undefined = hold.data;
   return (
@@ -19,7 +19,7 @@ export function HoldKit({ assemblyId, plannedStart }: { assemblyId: number; plan
           ? `Holds start on the planned start, ${formatDay(plannedStart)}: you join each tool's queue now, and the tools are set aside for you from that morning (at once if it has come). Until then they stay on the shelf for others.`
           : 'With no planned start, tools on the shelf are set aside for you at once, for the chapter’s hold time.'}
       </p>
-      <Button onClick={() => hold.mutate()} busy={hold.isPending} aria-describedby="hold-kit-hint" className="w-full sm:w-auto sm:self-start">
+      <Button onClick={() => hold.mutate(undefined, { onSuccess: () => onHeld?.() })} busy={hold.isPending} aria-describedby="hold-kit-hint" className="w-full sm:w-auto sm:self-start">
         Hold the kit
       </Button>
       {hold.isError && <Notice tone="bad">{messageOf(hold.error)}</Notice>}

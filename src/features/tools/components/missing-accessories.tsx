@@ -10,13 +10,13 @@ import { useResolveAccessory } from '../api/tool-actions';
  * Accessories that did not come back with a loan: who had it and when it came back without them.
  * The quartermaster marks each found or replaced, which takes it off this list and the Service list.
  */
-export function MissingAccessories({ tool, canResolve }: { tool: Tool; canResolve: boolean }) {
+export function MissingAccessories({ tool, canResolve, onResolved }: { tool: Tool; canResolve: boolean; onResolved?: () => void }) {
   const resolve = useResolveAccessory();
   const [problem, setProblem] = useState<string>();
   if (tool.missingAccessories.length === 0) return null;
   const mark = (accessory: string, resolution: 'found' | 'replaced') => {
     setProblem(undefined);
-    resolve.mutate({ code: tool.code, body: { accessory, resolution } }, { onError: (err) => setProblem(messageOf(err)) });
+    resolve.mutate({ code: tool.code, body: { accessory, resolution } }, { onSuccess: () => onResolved?.(), onError: (err) => setProblem(messageOf(err)) });
   };
   return (
     <section aria-labelledby="missing-accessories" className="flex flex-col gap-2">

@@ -55,6 +55,24 @@ export function holdOfferedMail(to: string, name: string, tool: { code: string; 
   };
 }
 
+/** A hold that ended because the tool went out of use; `stillQueued` when the person keeps their place. */
+export function holdEndedMail(to: string, name: string, tool: { code: string; name: string }, why: string, stillQueued: boolean, link: string): OutgoingMail {
+  return {
+    to,
+    subject: stillQueued ? `${tool.code} ${tool.name} is not ready for you after all` : `Your hold on ${tool.code} ${tool.name} has ended`,
+    text: [
+      `Hello ${name},`,
+      ``,
+      `${tool.name} (${tool.code}) ${why}.`,
+      stillQueued
+        ? `You keep your place in the queue: Gripline writes again when it is back for you.`
+        : `Your hold has ended, as the tool will not come back to the crib. Ask the quartermaster about another one.`,
+      ``,
+      link,
+    ].join('\n'),
+  };
+}
+
 export interface OverdueMailLine {
   tool: { code: string; name: string; location: string; replacementValueCents: number };
   holder: { name: string; email: string; phone: string | null };

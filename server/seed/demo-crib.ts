@@ -124,7 +124,7 @@ export function seedDemoCrib(db: Database, now: Date = new Date()): void {
   at(21);
   checkOut(ctx, kelechi, code('Temporary fasteners 1/8, tray'), {});
   at(10);
-  checkOut(ctx, ines, code('Pneumatic rivet puller'), {});
+  checkOut(ctx, ines, code('Pneumatic rivet puller'), { accessories: ['Nosepiece 1/8', 'Nosepiece 5/32'] });
   at(9);
   checkOut(ctx, marco, code('Drill bit #30, jobber'), {});
   checkOut(ctx, marco, code('Temporary fasteners 3/32, tray'), {});
@@ -134,8 +134,9 @@ export function seedDemoCrib(db: Database, now: Date = new Date()): void {
   checkOut(ctx, marco, code('Drill bit #40, jobber'), {});
   returnTool(ctx, marco, code('Drill bit #40, jobber'), { condition: 'ok' });
   at(3);
-  checkOut(ctx, tomasz, code('Rivet gun, 3X'), {});
-  returnTool(ctx, tomasz, code('Rivet gun, 3X'), { condition: 'needs_attention', note: 'Throttle valve leaks air' });
+  checkOut(ctx, tomasz, code('Rivet gun, 3X'), { accessories: ['Universal-head rivet set', 'Flush set'] });
+  // The flush set did not come back: it waits on the Service list until it turns up or is replaced.
+  returnTool(ctx, tomasz, code('Rivet gun, 3X'), { condition: 'needs_attention', note: 'Throttle valve leaks air', accessoriesBack: ['Universal-head rivet set'] });
   at(2);
   checkOut(ctx, quartermaster, code('Air drill, 90° angle head'), {});
   checkOut(ctx, tomasz, code('Rivet spacing fan, 12 hole'), {});

@@ -167,6 +167,11 @@ export type AssemblyEstimate = z.infer<typeof assemblyEstimateSchema>;
 export const kitHoldsResultSchema = z.object({
   placed: z.array(z.object({ code: z.string(), name: z.string() })),
   skipped: z.array(z.object({ code: z.string(), reason: z.string() })),
+  /**
+   * The assembly's planned start ("2027-01-05") when it is after today: the holds wait in the queue
+   * and the tools are set aside from that morning, not now. Null: set aside at once.
+   */
+  holdsFrom: z.string().nullable(),
 });
 export type KitHoldsResult = z.infer<typeof kitHoldsResultSchema>;
 

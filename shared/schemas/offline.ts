@@ -59,6 +59,8 @@ export const catalogueToolSchema = z.object({
   /** Who has it and until when, when it is on loan. */
   holder: person.nullable(),
   dueAt: z.string().nullable(),
+  /** What went out with the loan, to tick back at return (null: not recorded). */
+  accessoriesOut: z.array(z.string()).nullable(),
   /** Whom it is set aside for, when held. */
   heldFor: person.nullable(),
   traySize: z.string().nullable(),

@@ -34,7 +34,7 @@ export type ReminderSent = z.infer<typeof reminderSentSchema>;
 
 /** Service and calibration: how close a tool is to needing it, most urgent first. */
 export const SERVICE_DUE_WITHIN_DAYS = 14;
-export const SERVICE_URGENCIES = ['overdue', 'out_of_service', 'due_soon'] as const;
+export const SERVICE_URGENCIES = ['overdue', 'out_of_service', 'accessory_missing', 'due_soon'] as const;
 export type ServiceUrgency = (typeof SERVICE_URGENCIES)[number];
 
 /** Torque wrenches and measuring tools are calibrated; everything else is serviced. */
@@ -56,6 +56,8 @@ export const serviceDueItemSchema = z.strictObject({
   /** Whole days until service is due; negative when overdue; null without an interval. */
   daysUntilDue: z.number().nullable(),
   urgency: z.enum(SERVICE_URGENCIES),
+  /** Accessories that did not come back with a loan and are not yet found or replaced. */
+  missingAccessories: z.array(z.string()),
   /** The state in words, e.g. "Calibration overdue by 12 days". */
   words: z.string(),
 });

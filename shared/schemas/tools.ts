@@ -86,7 +86,15 @@ export type ToolListQuery = z.infer<typeof toolListQuerySchema>;
 
 export const toolCodeParams = z.object({ code: toolCodeField });
 
-export const checkoutBodySchema = z.object({ dueAt: isoDate.optional() }).strict();
+const accessoryName = z.string({ error: 'Name each accessory as the tool lists it.' }).trim().min(1).max(80);
+
+export const checkoutBodySchema = z
+  .object({
+    dueAt: isoDate.optional(),
+    /** The tool's accessories that go out with it (ticked on the checklist); left out, nothing is recorded. */
+    accessories: z.array(accessoryName).max(30).optional(),
+  })
+  .strict();
 export type CheckoutBody = z.infer<typeof checkoutBodySchema>;
 
 export const returnBodySchema = z
@@ -95,6 +103,8 @@ export const returnBodySchema = z
     note: z.string().trim().max(1000).optional(),
     returnedCount: z.number({ error: 'Count the temporary fasteners that came back.' }).int().min(0).optional(),
     photoId: z.number({ error: 'A photo id is a whole number.' }).int({ error: 'A photo id is a whole number.' }).positive({ error: 'A photo id is a whole number.' }).optional(),
+    /** Of the accessories that went out with the loan, those that came back (ticked); the rest are recorded missing. */
+    accessoriesBack: z.array(accessoryName).max(30).optional(),
   })
   .strict()
   .refine((b) => b.condition === 'ok' || (b.note ?? '').length > 0, {
@@ -102,6 +112,21 @@ export const returnBodySchema = z
     error: 'Say what needs attention, so the quartermaster knows what to look at.',
   });
 export type ReturnBody = z.infer<typeof returnBodySchema>;
+
+/** The quartermaster closes a missing accessory: it turned up, or a new one took its place. */
+export const resolveAccessoryBodySchema = z.strictObject({
+  accessory: accessoryName,
+  resolution: z.enum(['found', 'replaced'], { error: 'Say whether it was found or replaced.' }),
+});
+export type ResolveAccessoryBody = z.infer<typeof resolveAccessoryBodySchema>;
+
+export const missingAccessorySchema = z.object({
+  accessory: z.string(),
+  reportedAt: z.string(),
+  /** Who had the loan it did not come back from. */
+  lastHolder: z.object({ id: z.number(), name: z.string() }),
+});
+export type MissingAccessory = z.infer<typeof missingAccessorySchema>;
 
 export const statusChangeBodySchema = z.strictObject({
   note: z.string({ error: 'Give the reason.' }).trim().min(1, { error: 'Give the reason.' }).max(500),
@@ -134,7 +159,10 @@ export const toolSchema = z.object({
   trayCapacity: z.number().nullable(),
   accessories: z.array(z.string()),
   notes: z.string(),
-  loan: z.object({ id: z.number(), holder: person, checkedOutAt: z.string(), dueAt: z.string() }).nullable(),
+  /** `accessoriesOut`: what went out with the loan; null when the checkout did not say. */
+  loan: z.object({ id: z.number(), holder: person, checkedOutAt: z.string(), dueAt: z.string(), accessoriesOut: z.array(z.string()).nullable() }).nullable(),
+  /** Accessories that did not come back, until the quartermaster marks them found or replaced. */
+  missingAccessories: z.array(missingAccessorySchema),
   holds: z.object({ waiting: z.number(), offeredTo: person.nullable(), offerExpiresAt: z.string().nullable() }),
   photoIds: z.array(z.number()),
 });
@@ -146,7 +174,8 @@ export const toolForYouSchema = toolSchema.extend({
     actions: z.array(z.enum(TOOL_ACTIONS)),
     reason: z.string().nullable(),
     defaultDueAt: z.string(),
-    yourHold: z.object({ status: z.enum(['waiting', 'offered']), position: z.number(), offerExpiresAt: z.string().nullable() }).nullable(),
+    /** `startsAt`: a hold placed ahead (a kit for an assembly starting later) begins then; null once begun. */
+    yourHold: z.object({ status: z.enum(['waiting', 'offered']), position: z.number(), offerExpiresAt: z.string().nullable(), startsAt: z.string().nullable() }).nullable(),
   }),
 });
 export type ToolForYou = z.infer<typeof toolForYouSchema>;
@@ -169,6 +198,9 @@ export const loanSchema = z.object({
   returnedCount: z.number().nullable(),
   shortfall: z.number().nullable(),
   returnPhotoId: z.number().nullable(),
+  /** What went out with the loan (null: not recorded at checkout), and what did not come back. */
+  accessoriesOut: z.array(z.string()).nullable(),
+  accessoriesMissing: z.array(z.string()),
   /**
    * When the checkout and the return reached the server: later than checkedOutAt / returnedAt
    * when they were queued offline; null when not kept (older loans, or not returned yet).

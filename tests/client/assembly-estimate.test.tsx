@@ -69,7 +69,11 @@ const ESTIMATE: AssemblyEstimate = estimateFixture(7, {
 
 const HOLDS: KitHoldsResult = {
   placed: [{ code: 'T-0012', name: 'Hand rivet puller' }],
-  skipped: [{ code: 'T-0031', reason: 'It is on loan; you are next in its queue.' }],
+  skipped: [
+    { code: 'T-0031', reason: 'It is on loan; you are next in its queue.' },
+    { code: 'T-0040', reason: 'T-0040 needs the "Rivet gun" sign-off, which you do not have yet. Ask Dana Okafor (chapter lead) to sign you off.' },
+  ],
+  holdsFrom: '2027-01-05',
 };
 
 function serve(me = OWNER, hold: { status: number; body: unknown } = { status: 201, body: HOLDS }) {
@@ -134,12 +138,15 @@ describe('the assembly estimate page', () => {
     const calls = serve();
     await renderPage();
     expect(estimateGets(calls)).toHaveLength(1);
+    expect(screen.getByText(/you join each tool's queue now, and the tools are set aside for you from that morning/)).toBeTruthy();
     await userEvent.click(screen.getByRole('button', { name: 'Hold the kit' }));
     const result = await screen.findByText('Holds placed');
     const box = within(result.closest('[role="status"]') as HTMLElement);
     expect(box.getByText('T-0012').parentElement!.textContent).toBe('T-0012 Hand rivet puller');
     expect(box.getByText('Not held')).toBeTruthy();
     expect(box.getByText('T-0031').parentElement!.textContent).toBe('T-0031: It is on loan; you are next in its queue.');
+    expect(box.getByText('T-0040').parentElement!.textContent).toMatch(/^T-0040: T-0040 needs the "Rivet gun" sign-off/);
+    expect(box.getByText('Set aside for you from Jan 5, 2027; you are in each queue now.')).toBeTruthy();
     expect(calls.filter((c) => c.method === 'POST').map((c) => c.path)).toEqual(['/api/assemblies/7/kit/holds']);
     // The kit's statuses changed: the estimate is asked for again.
     await waitFor(() => expect(estimateGets(calls)).toHaveLength(2));

@@ -69,6 +69,14 @@ describe('what the copy offers', () => {
     expect(offlineTool(catalogue, 'T-0042', [queued({})])).toMatchObject({ canCheckOut: false, canReturn: true, yours: true });
   });
 
+  it('asks to tick back what a waiting check out took, and what the copy says went out with a loan', () => {
+    const catalogue = catalogueFixture({ tools: [catalogueTool('T-0042', { accessories: ['Nosepiece 1/8', 'Nosepiece 5/32'] })] });
+    expect(offlineTool(catalogue, 'T-0042', [queued({ body: { accessories: ['Nosepiece 5/32'] } })])?.tool.accessoriesOut).toEqual(['Nosepiece 5/32']);
+    expect(offlineTool(catalogue, 'T-0042', [queued({ body: {} })])?.tool.accessoriesOut).toBeNull();
+    const lent = catalogueFixture({ tools: [catalogueTool('T-0042', { status: 'on_loan', accessoriesOut: ['Nosepiece 1/8'] })], yourLoans: [{ code: 'T-0042', dueAt: '2026-12-17T12:00:00.000Z' }] });
+    expect(offlineTool(lent, 'T-0042', [])?.tool.accessoriesOut).toEqual(['Nosepiece 1/8']);
+  });
+
   it('refuses check out without the required sign-off, and of a tool someone else has', () => {
     const catalogue = catalogueFixture({
       tools: [

@@ -74,6 +74,20 @@ describe('a scanned tool with no connection', () => {
     expect(fetchSpy).not.toHaveBeenCalled();
   });
 
+  it('queues the check out with the accessories ticked, and asks for them back at return', async () => {
+    await offlineDb.catalogues.put({
+      memberId: MARCO.id,
+      catalogue: catalogueFixture({ takenAt: TEN_MIN_AGO(), tools: [catalogueTool('T-0042', { name: 'Hand rivet puller', accessories: ['Nosepiece 1/8', 'Nosepiece 5/32'] })] }),
+    });
+    renderOffline('/tools/T-0042');
+    await userEvent.click(await screen.findByRole('checkbox', { name: 'Nosepiece 5/32' }));
+    await userEvent.click(screen.getByRole('button', { name: 'Check out T-0042' }));
+    expect(await screen.findByRole('group', { name: 'Tick what came back with it' })).toBeTruthy();
+    const [entry] = await waitingOf(MARCO.id);
+    expect(entry).toMatchObject({ kind: 'check_out', body: { accessories: ['Nosepiece 5/32'] } });
+    expect(fetchSpy).not.toHaveBeenCalled();
+  });
+
   it('offers no check out without the sign-off, and says what needs a connection', async () => {
     renderOffline('/tools/T-0043');
     expect(await screen.findByText('Needs the "Air tools" sign-off, which you do not have yet.')).toBeTruthy();

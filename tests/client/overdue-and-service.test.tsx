@@ -69,6 +69,7 @@ const item = (code: string, status: ServiceDueItem['status'], urgency: ServiceDu
   serviceDueAt: '2026-11-20T12:00:00.000Z',
   daysUntilDue: -11,
   urgency,
+  missingAccessories: [],
   words,
 });
 

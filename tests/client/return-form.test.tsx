@@ -25,7 +25,8 @@ const tray: ToolForYou = {
   trayCapacity: 50,
   accessories: ['Temporary fastener pliers'],
   notes: '',
-  loan: { id: 7, holder: { id: 3, name: 'Marco Bellweather' }, checkedOutAt: '2026-12-01T09:00:00.000Z', dueAt: '2026-12-15T09:00:00.000Z' },
+  loan: { id: 7, holder: { id: 3, name: 'Marco Bellweather' }, checkedOutAt: '2026-12-01T09:00:00.000Z', dueAt: '2026-12-15T09:00:00.000Z', accessoriesOut: null },
+  missingAccessories: [],
   holds: { waiting: 0, offeredTo: null, offerExpiresAt: null },
   photoIds: [],
   forYou: { actions: ['return'], reason: null, defaultDueAt: '2026-12-17T09:00:00.000Z', yourHold: null },
@@ -45,7 +46,7 @@ describe('returning a temporary fastener tray', () => {
 
   it('sends the count typed, and refuses more than a full tray before sending', async () => {
     const calls = fakeFetch((call) =>
-      call.method === 'POST' ? { status: 200, body: { returnedAt: '2026-12-03T10:00:00.000Z', shortfall: 4, offeredTo: null } } : { status: 200, body: { token: 'csrf' } },
+      call.method === 'POST' ? { status: 200, body: { returnedAt: '2026-12-03T10:00:00.000Z', shortfall: 4, accessoriesMissing: [], offeredTo: null } } : { status: 200, body: { token: 'csrf' } },
     );
     renderWithProviders(<ReturnForm tool={tray} />);
     const count = await screen.findByLabelText('Temporary fasteners in the tray now');

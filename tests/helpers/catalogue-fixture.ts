@@ -14,6 +14,7 @@ export function catalogueTool(code: string, over: Partial<CatalogueTool> = {}): 
     requiredSignoffName: null,
     holder: null,
     dueAt: null,
+    accessoriesOut: null,
     heldFor: null,
     traySize: null,
     trayCapacity: null,

@@ -66,6 +66,7 @@ describe('GET /api/offline/catalogue', () => {
       requiredSignoffName: 'Air tools',
       holder: { id: crew.member.id, name: 'Mia Member' },
       dueAt: out.dueAt,
+      accessoriesOut: null,
       heldFor: null,
       traySize: null,
       trayCapacity: null,

@@ -133,7 +133,7 @@ describe('POST /api/overdue/:loanId/remind', () => {
     const early = await post(lead, `/api/overdue/${loanId}/remind`);
     expect(early.status).toBe(409);
     expect(early.body.error.code).toBe('LOAN_NOT_OVERDUE');
-    expect(early.body.error.message).toMatch(/not due back until 2026-12-03/);
+    expect(early.body.error.message).toMatch(/not due back until Thursday, December 3;/);
 
     later(5 * DAY_MS);
     await post(member, `/api/tools/${code}/return`, { condition: 'ok' }).expect(200);

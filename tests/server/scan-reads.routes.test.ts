@@ -91,7 +91,7 @@ describe('GET /api/tools/:code in each state', () => {
     await lend(t, other, 'T-0003', 3 * DAY);
     const lent = await openTool(member, 'T-0003');
     expect(lent.loan).toMatchObject({ holder: { name: 'Otto Other' }, dueAt: iso(now + 3 * DAY) });
-    expect(lent.forYou).toEqual({ actions: ['place_hold'], reason: `On loan to Otto Other until ${iso(now + 3 * DAY).slice(0, 10)}.`, defaultDueAt: iso(now + 5 * DAY), yourHold: null });
+    expect(lent.forYou).toEqual({ actions: ['place_hold'], reason: 'Otto Other has it until Friday, December 4.', defaultDueAt: iso(now + 5 * DAY), yourHold: null });
     expect((await openTool(other, 'T-0003')).forYou).toMatchObject({ actions: ['return'], reason: null });
     expect((await openTool(qm, 'T-0003')).forYou.actions).toEqual(['return', 'place_hold']);
     await expectSameAsInList('tools', lent);
@@ -111,7 +111,7 @@ describe('GET /api/tools/:code in each state', () => {
     const heldForSomeoneElse = await openTool(qm, 'T-0003');
     expect(heldForSomeoneElse.forYou).toMatchObject({
       actions: ['cancel_hold'],
-      reason: `Held for Mia Member until ${offerEnds.slice(0, 16).replace('T', ' ')}.`,
+      reason: 'It is set aside for Mia Member until Dec 3, 2026, 12:00 PM.',
       yourHold: { status: 'waiting', position: 2 },
     });
     expect((await openTool(other, 'T-0003')).forYou.actions).toEqual(['place_hold']);

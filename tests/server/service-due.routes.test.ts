@@ -47,6 +47,7 @@ describe('GET /api/service-due', () => {
         serviceDueAt: new Date(t.clock.now.getTime() + 5 * DAY_MS).toISOString(),
         daysUntilDue: 5,
         urgency: 'due_soon',
+        missingAccessories: [],
         words: 'Calibration due in 5 days',
       },
     ]);

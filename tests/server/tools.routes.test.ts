@@ -62,7 +62,7 @@ describe('POST /api/tools/:code/checkout and /return', () => {
     const again = await post(qm, '/api/tools/T-0001/checkout');
     expect(again.status).toBe(409);
     expect(again.body.error.code).toBe('TOOL_ON_LOAN');
-    expect(again.body.error.message).toMatch(/held by Mia Member until 2026-12-08/);
+    expect(again.body.error.message).toBe('T-0001 is on loan. Mia Member has it until Tuesday, December 8.');
   });
 
   it('lets exactly one of many simultaneous checkouts win', async () => {

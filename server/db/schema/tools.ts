@@ -72,6 +72,8 @@ export const loans = sqliteTable(
     returnedCount: integer(),
     shortfall: integer(),
     returnPhotoId: integer(),
+    /** JSON array of the tool's accessories that went out with this loan; null when the checkout did not say (older loans). */
+    accessoriesOut: text(),
     /** When the checkout and the return reached the server (later than the times above when queued offline; null before these were kept). */
     checkoutArrivedAt: integer({ mode: 'timestamp_ms' }),
     returnArrivedAt: integer({ mode: 'timestamp_ms' }),
@@ -100,6 +102,8 @@ export const holds = sqliteTable(
     offeredAt: integer({ mode: 'timestamp_ms' }),
     offerExpiresAt: integer({ mode: 'timestamp_ms' }),
     closedAt: integer({ mode: 'timestamp_ms' }),
+    /** A hold placed ahead (a kit for an assembly that starts later): nobody offers the tool to this person before then. */
+    startsAt: integer({ mode: 'timestamp_ms' }),
   },
   (t) => [
     uniqueIndex('holds_one_active_per_person')
@@ -126,6 +130,32 @@ export const toolEvents = sqliteTable(
     detail: text().notNull().default(''),
   },
   (t) => [index('tool_events_tool_idx').on(t.toolId, t.at)],
+);
+
+/**
+ * An accessory that did not come back with a loan (a puller's nosepiece, a gun's rivet set). Open
+ * until the quartermaster marks it found or replaced; one open row per tool and accessory.
+ */
+export const missingAccessories = sqliteTable(
+  'missing_accessories',
+  {
+    id: integer().primaryKey({ autoIncrement: true }),
+    toolId: integer()
+      .notNull()
+      .references(() => tools.id),
+    loanId: integer()
+      .notNull()
+      .references(() => loans.id),
+    accessory: text().notNull(),
+    reportedAt: integer({ mode: 'timestamp_ms' }).notNull(),
+    resolvedAt: integer({ mode: 'timestamp_ms' }),
+    resolvedById: integer().references(() => users.id),
+    resolution: text({ enum: ['found', 'replaced'] }),
+  },
+  (t) => [
+    uniqueIndex('missing_accessories_one_open').on(t.toolId, t.accessory).where(sql`${t.resolvedAt} is null`),
+    check('missing_accessories_resolution_check', sql`(${t.resolvedAt} is null) = (${t.resolution} is null)`),
+  ],
 );
 
 /** Photos of tools and of returns, stored in the database with a small thumbnail. */

@@ -10,8 +10,14 @@ export function listPeople(ctx: ServiceContext): Person[] {
   return listUsers(ctx.db).map(toPerson);
 }
 
+/**
+ * The crib's rule for a person who leaves: their holds and queue places end in the same transaction
+ * (a tool set aside for them passes on), writing any e-mail to the outbox. The app hands it in.
+ */
+export type EndHoldsOf = (ctx: ServiceContext, personId: number, now: Date) => void;
+
 /** Role changes and (de)activation; the chapter always keeps at least one active lead. */
-export function updatePerson(ctx: ServiceContext, actor: UserRow, id: number, change: UpdatePersonBody): Person {
+export function updatePerson(ctx: ServiceContext, actor: UserRow, id: number, change: UpdatePersonBody, endHoldsOf: EndHoldsOf): Person {
   return ctx.db.transaction((db) => {
     const person = findUserById(db, id);
     if (!person) throw new HttpError(404, 'PERSON_NOT_FOUND', `No person has id ${id}.`);
@@ -28,6 +34,7 @@ export function updatePerson(ctx: ServiceContext, actor: UserRow, id: number, ch
       ...(change.active !== undefined && { deactivatedAt: change.active ? null : (person.deactivatedAt ?? ctx.now()) }),
     });
     if (deactivating) endSessionsOf(ctx.db, id);
+    if (deactivating) endHoldsOf(ctx, id, ctx.now());
     return toPerson(updated ?? person);
   });
 }

@@ -3,9 +3,32 @@ import type { Loan } from '@shared/schemas/tools';
 import type { Executor } from '../../db/client';
 import { loans, tools } from '../../db/schema/tools';
 import { users } from '../../db/schema/users';
+import { accessoryList, missingPerLoan } from './missing-accessories';
 
 /** Loans with their tool and holder: open ones soonest due first, returned ones newest first. */
 export function listLoans(db: Executor, filter: { userId?: number; open?: boolean }, limit = 500): Loan[] {
+  const found = loanRows(db, filter, limit);
+  const missing = missingPerLoan(db, found.map((r) => r.loan.id));
+  return found.map(({ loan, tool, holderName }) => ({
+    id: loan.id,
+    tool: { ...tool, accessories: JSON.parse(tool.accessories) as string[] },
+    holder: { id: loan.userId, name: holderName },
+    checkedOutAt: loan.checkedOutAt.toISOString(),
+    dueAt: loan.dueAt.toISOString(),
+    returnedAt: loan.returnedAt?.toISOString() ?? null,
+    returnCondition: loan.returnCondition,
+    returnNote: loan.returnNote,
+    returnedCount: loan.returnedCount,
+    shortfall: loan.shortfall,
+    returnPhotoId: loan.returnPhotoId,
+    accessoriesOut: accessoryList(loan.accessoriesOut),
+    accessoriesMissing: missing.get(loan.id) ?? [],
+    checkoutRecordedAt: loan.checkoutArrivedAt?.toISOString() ?? null,
+    returnRecordedAt: loan.returnArrivedAt?.toISOString() ?? null,
+  }));
+}
+
+function loanRows(db: Executor, filter: { userId?: number; open?: boolean }, limit: number) {
   const parts: SQL[] = [];
   if (filter.userId !== undefined) parts.push(eq(loans.userId, filter.userId));
   if (filter.open) parts.push(isNull(loans.returnedAt));
@@ -17,20 +40,5 @@ export function listLoans(db: Executor, filter: { userId?: number; open?: boolea
     .where(and(...parts))
     .orderBy(desc(isNull(loans.returnedAt)), asc(loans.dueAt), desc(loans.returnedAt))
     .limit(limit)
-    .all()
-    .map(({ loan, tool, holderName }) => ({
-      id: loan.id,
-      tool: { ...tool, accessories: JSON.parse(tool.accessories) as string[] },
-      holder: { id: loan.userId, name: holderName },
-      checkedOutAt: loan.checkedOutAt.toISOString(),
-      dueAt: loan.dueAt.toISOString(),
-      returnedAt: loan.returnedAt?.toISOString() ?? null,
-      returnCondition: loan.returnCondition,
-      returnNote: loan.returnNote,
-      returnedCount: loan.returnedCount,
-      shortfall: loan.shortfall,
-      returnPhotoId: loan.returnPhotoId,
-      checkoutRecordedAt: loan.checkoutArrivedAt?.toISOString() ?? null,
-      returnRecordedAt: loan.returnArrivedAt?.toISOString() ?? null,
-    }));
+    .all();
 }

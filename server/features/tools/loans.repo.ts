@@ -2,7 +2,7 @@ import { and, eq, isNull, sql } from 'drizzle-orm';
 import type { Database } from '../../db/client';
 import { preparedPerDatabase } from '../../db/prepared';
 import { memberSignoffs, signoffs } from '../../db/schema/signoffs';
-import { holds, loans, toolEvents, tools } from '../../db/schema/tools';
+import { holds, loans, missingAccessories, tools } from '../../db/schema/tools';
 import { users } from '../../db/schema/users';
 
 const p = sql.placeholder;
@@ -15,7 +15,7 @@ function prepareLoanStatements(db: Database) {
   return {
     toolByCode: db.select().from(tools).where(eq(tools.code, p('code'))).prepare(),
     openLoan: db
-      .select({ id: loans.id, userId: loans.userId, holderName: users.name, checkedOutAt: loans.checkedOutAt, dueAt: loans.dueAt })
+      .select({ id: loans.id, userId: loans.userId, holderName: users.name, checkedOutAt: loans.checkedOutAt, dueAt: loans.dueAt, accessoriesOut: loans.accessoriesOut })
       .from(loans)
       .innerJoin(users, eq(users.id, loans.userId))
       .where(and(eq(loans.toolId, p('toolId')), isNull(loans.returnedAt)))
@@ -24,6 +24,11 @@ function prepareLoanStatements(db: Database) {
       .select({ id: memberSignoffs.id })
       .from(memberSignoffs)
       .where(and(eq(memberSignoffs.signoffId, p('signoffId')), eq(memberSignoffs.userId, p('userId')), isNull(memberSignoffs.revokedAt)))
+      .prepare(),
+    openMissing: db
+      .select({ accessory: missingAccessories.accessory })
+      .from(missingAccessories)
+      .where(and(eq(missingAccessories.toolId, p('toolId')), isNull(missingAccessories.resolvedAt)))
       .prepare(),
     signoffName: db.select({ name: signoffs.name }).from(signoffs).where(eq(signoffs.id, p('id'))).prepare(),
     offeredHold: db
@@ -41,13 +46,8 @@ function prepareLoanStatements(db: Database) {
       .prepare(),
     insertLoan: db
       .insert(loans)
-      .values({ toolId: p('toolId'), userId: p('userId'), checkedOutAt: p('checkedOutAt'), dueAt: p('dueAt'), checkoutArrivedAt: p('arrivedAt') })
+      .values({ toolId: p('toolId'), userId: p('userId'), checkedOutAt: p('checkedOutAt'), dueAt: p('dueAt'), checkoutArrivedAt: p('arrivedAt'), accessoriesOut: p('accessoriesOut') })
       .returning({ id: loans.id })
-      .prepare(),
-    setToolStatus: db
-      .update(tools)
-      .set({ status: sql`${p('status')}`, statusNote: sql`${p('statusNote')}`, updatedAt: sql`${p('updatedAt')}` })
-      .where(eq(tools.id, p('toolId')))
       .prepare(),
     fulfilHold: db
       .update(holds)
@@ -67,18 +67,6 @@ function prepareLoanStatements(db: Database) {
         returnPhotoId: sql`${p('returnPhotoId')}`,
       })
       .where(and(eq(loans.id, p('loanId')), isNull(loans.returnedAt)))
-      .prepare(),
-    insertEvent: db
-      .insert(toolEvents)
-      .values({
-        toolId: p('toolId'),
-        actorId: p('actorId'),
-        at: p('at'),
-        action: p('action'),
-        fromStatus: p('fromStatus'),
-        toStatus: p('toStatus'),
-        detail: p('detail'),
-      })
       .prepare(),
   };
 }

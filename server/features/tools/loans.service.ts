@@ -4,17 +4,21 @@ import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { isUniqueViolation } from '../../lib/sqlite-errors';
+import { dayInWords } from '@shared/time/chapter-time';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { offerToNextInQueue } from './holds.service';
 import { loanStatements } from './loans.repo';
+import { accessoryList, recordMissingAccessories } from './missing-accessories';
 import { checkReturnPhoto } from './photos.service';
-import { signOffAdvice } from './signoffs.service';
+import { refuseWithoutSignoff } from './signoffs.service';
 import { effectiveLoanDays } from './tool-dto';
+import { moveTool } from './tool-state';
+import { heldWords, loanWords } from './tool-words';
 import type { ToolRow } from './tools.repo';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 const MAX_LOAN_MS = 365 * DAY_MS;
 
-const dateWords = (d: Date) => d.toISOString().slice(0, 10);
 
 export interface LoanResult {
   id: number;
@@ -56,14 +60,14 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
     const tool = toolOrThrow(ctx, code);
     if (tool.status === 'on_loan') {
       const loan = s.openLoan.get({ toolId: tool.id });
-      const who = loan ? (loan.userId === user.id ? 'you' : loan.holderName) : 'someone';
-      throw new HttpError(409, 'TOOL_ON_LOAN', `${tool.code} is on loan: held by ${who} until ${loan ? dateWords(loan.dueAt) : 'its return'}.`);
+      const who = loan ? loanWords({ name: loan.holderName, you: loan.userId === user.id }, loan.dueAt, now, readChapterTimeZone(ctx.db)) : '';
+      throw new HttpError(409, 'TOOL_ON_LOAN', `${tool.code} is on loan. ${who}`.trim());
     }
     let holdId: number | undefined;
     if (tool.status === 'held') {
       const offer = s.offeredHold.get({ toolId: tool.id });
       if (offer && offer.userId !== user.id) {
-        throw new HttpError(409, 'TOOL_HELD', `${tool.code} is held for ${offer.name} until ${offer.offerExpiresAt?.toISOString().slice(0, 16).replace('T', ' ') ?? 'they collect it'}.`);
+        throw new HttpError(409, 'TOOL_HELD', `${tool.code} is not free. ${heldWords(offer.name, offer.offerExpiresAt, readChapterTimeZone(ctx.db))}`);
       }
       holdId = offer?.id;
     } else if (tool.status === 'out_of_service') {
@@ -71,35 +75,26 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
     } else if (tool.status !== 'available') {
       throw new HttpError(403, 'TOOL_UNAVAILABLE', `${tool.code} is ${tool.status === 'lost' ? 'marked lost' : 'retired'} and cannot be checked out.`);
     }
-    if (tool.requiredSignoffId !== null && !s.hasSignoff.get({ signoffId: tool.requiredSignoffId, userId: user.id })) {
-      const name = s.signoffName.get({ id: tool.requiredSignoffId })?.name ?? 'a sign-off';
-      throw new HttpError(
-        403,
-        'SIGNOFF_REQUIRED',
-        `${tool.code} needs the "${name}" sign-off, which you do not have yet. ${signOffAdvice(ctx.db)}`,
-      );
-    }
+    refuseWithoutSignoff(ctx, tool, user);
     const due = dueDate(tool, body, at);
+    const taken = accessoriesTaken(ctx, tool, body.accessories);
     let loanId: number;
     try {
-      loanId = s.insertLoan.get({ toolId: tool.id, userId: user.id, checkedOutAt: at, dueAt: due, arrivedAt: now }).id;
+      loanId = s.insertLoan.get({ toolId: tool.id, userId: user.id, checkedOutAt: at, dueAt: due, arrivedAt: now, accessoriesOut: taken ? JSON.stringify(taken) : null }).id;
     } catch (err) {
       if (isUniqueViolation(err)) {
         throw new HttpError(409, 'TOOL_ON_LOAN', `${tool.code} was just checked out by someone else.`);
       }
       throw err;
     }
-    s.setToolStatus.run({ toolId: tool.id, status: 'on_loan', statusNote: null, updatedAt: now.getTime() });
-    if (holdId !== undefined) s.fulfilHold.run({ holdId, at: at.getTime() });
-    s.insertEvent.run({
-      toolId: tool.id,
+    moveTool(ctx.db, tool, 'check_out', {
       actorId: user.id,
       at,
-      action: 'checked_out',
-      fromStatus: tool.status,
-      toStatus: 'on_loan',
-      detail: `Due ${dateWords(due)}`,
+      now,
+      detail: `Due ${dayInWords(due, readChapterTimeZone(ctx.db), at)}`,
+      facts: { offeredToActor: holdId !== undefined },
     });
+    if (holdId !== undefined) s.fulfilHold.run({ holdId, at: at.getTime() });
     return {
       id: loanId,
       toolId: tool.id,
@@ -108,9 +103,45 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
       checkedOutAt: at.toISOString(),
       dueAt: due.toISOString(),
       recordedAt: now.toISOString(),
-      accessories: JSON.parse(tool.accessories) as string[],
+      accessories: taken ?? [],
     };
   })();
+}
+
+/**
+ * The accessories ticked at checkout, checked against the tool's list (less any still missing):
+ * the loan records exactly what went out. Undefined when the checkout did not say.
+ */
+function accessoriesTaken(ctx: ServiceContext, tool: ToolRow, ticked: string[] | undefined): string[] | undefined {
+  if (ticked === undefined) return undefined;
+  const own = JSON.parse(tool.accessories) as string[];
+  const missing = new Set(loanStatements(ctx.db).openMissing.all({ toolId: tool.id }).map((m) => m.accessory));
+  const issues = ticked.flatMap((a, i) => {
+    if (!own.includes(a)) return [{ path: `accessories.${i}`, message: `${tool.code} has no accessory called "${a}". It has: ${own.join(', ') || 'none'}.` }];
+    if (missing.has(a)) return [{ path: `accessories.${i}`, message: `${a} is missing from ${tool.code}; the quartermaster has not marked it found yet.` }];
+    if (ticked.indexOf(a) !== i) return [{ path: `accessories.${i}`, message: `${a} is listed twice.` }];
+    return [];
+  });
+  if (issues.length > 0) throw new HttpError(400, 'UNKNOWN_ACCESSORY', issues.map((i) => i.message).join(' '), issues);
+  return own.filter((a) => ticked.includes(a));
+}
+
+/** Of what went out with the loan, what did not come back; refuses a return that does not say, or names something that never went out. */
+function accessoriesNotBack(tool: ToolRow, out: string[] | null, back: string[] | undefined): string[] {
+  if (out === null || out.length === 0) {
+    if (back && back.length > 0) throw new HttpError(400, 'UNKNOWN_ACCESSORY', `Nothing was recorded going out with ${tool.code}, so nothing can be ticked back.`, [{ path: 'accessoriesBack', message: 'Leave it out.' }]);
+    return [];
+  }
+  if (back === undefined) {
+    throw new HttpError(400, 'ACCESSORIES_UNCHECKED', `Tick what came back with ${tool.code}: ${out.join(', ')} went out with it.`, [
+      { path: 'accessoriesBack', message: `Tick each of ${out.join(', ')} that came back.` },
+    ]);
+  }
+  const strays = back.filter((a) => !out.includes(a));
+  if (strays.length > 0) {
+    throw new HttpError(400, 'UNKNOWN_ACCESSORY', `${strays.join(', ')} did not go out with this loan of ${tool.code}; it took ${out.join(', ')}.`, [{ path: 'accessoriesBack', message: 'Tick only what went out.' }]);
+  }
+  return out.filter((a) => !back.includes(a));
 }
 
 export interface ReturnResult {
@@ -118,6 +149,8 @@ export interface ReturnResult {
   code: string;
   status: ToolRow['status'];
   shortfall: number | null;
+  /** What went out with the loan and did not come back. */
+  accessoriesMissing: string[];
   offeredTo: { id: number; name: string } | null;
   /** When it came back (a return queued offline: when it was done, never before the checkout). */
   returnedAt: string;
@@ -155,6 +188,7 @@ export function returnTool(ctx: ServiceContext, user: UserRow, code: string, bod
       shortfall = tool.trayCapacity !== null ? tool.trayCapacity - body.returnedCount : null;
     }
     if (body.photoId !== undefined) checkReturnPhoto(ctx, tool, body.photoId);
+    const notBack = accessoriesNotBack(tool, accessoryList(loan.accessoriesOut), body.accessoriesBack);
     const at = performedAt && performedAt < loan.checkedOutAt ? loan.checkedOutAt : (performedAt ?? now);
     s.closeLoan.run({
       loanId: loan.id,
@@ -170,22 +204,22 @@ export function returnTool(ctx: ServiceContext, user: UserRow, code: string, bod
     const detail = [
       body.condition === 'ok' ? 'Came back ok' : `Needs attention: ${body.note}`,
       shortfall ? `${shortfall} temporary fasteners short` : '',
+      notBack.length > 0 ? `did not come back: ${notBack.join(', ')}` : '',
       loan.userId !== user.id ? `returned for ${loan.holderName}` : '',
     ]
       .filter(Boolean)
       .join('; ');
+    recordMissingAccessories(ctx.db, { toolId: tool.id, loanId: loan.id, accessories: notBack, at });
     let status: ToolRow['status'];
     let offeredTo: ReturnResult['offeredTo'] = null;
     if (body.condition === 'needs_attention') {
-      status = 'out_of_service';
-      s.setToolStatus.run({ toolId: tool.id, status, statusNote: body.note ?? 'Needs attention', updatedAt: now.getTime() });
+      status = moveTool(ctx.db, tool, 'return_needs_attention', { actorId: user.id, at, now, detail, note: body.note ?? 'Needs attention' }).status;
     } else {
-      const offer = s.anyoneWaiting.get({ toolId: tool.id }) ? offerToNextInQueue(ctx, tool, now) : undefined;
-      status = offer ? 'held' : 'available';
+      const back = moveTool(ctx.db, tool, 'return', { actorId: user.id, at, now, detail });
+      const offer = s.anyoneWaiting.get({ toolId: tool.id }) ? offerToNextInQueue(ctx, { ...tool, status: back.status }, now) : undefined;
+      status = offer ? 'held' : back.status;
       offeredTo = offer ? { id: offer.userId, name: offer.name } : null;
-      if (!offer) s.setToolStatus.run({ toolId: tool.id, status, statusNote: null, updatedAt: now.getTime() });
     }
-    s.insertEvent.run({ toolId: tool.id, actorId: user.id, at, action: 'returned', fromStatus: 'on_loan', toStatus: status, detail });
-    return { loanId: loan.id, code: tool.code, status, shortfall, offeredTo, returnedAt: at.toISOString(), recordedAt: now.toISOString() };
+    return { loanId: loan.id, code: tool.code, status, shortfall, accessoriesMissing: notBack, offeredTo, returnedAt: at.toISOString(), recordedAt: now.toISOString() };
   })();
 }

@@ -1,5 +1,7 @@
 import { daysLate, type JobRun, type OverdueList, type OverdueLoan, type ReminderSent } from '@shared/schemas/overdue';
+import { dayInWords } from '@shared/time/chapter-time';
 import type { ServiceContext } from '../../context';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { overdueReminderMail, type OverdueMailLine } from '../../mail/messages';
@@ -58,7 +60,7 @@ export function sendReminderNow(ctx: ServiceContext, lead: UserRow, loanId: numb
   if (!row) throw new HttpError(404, 'LOAN_NOT_FOUND', `No loan has the id ${loanId}.`);
   if (row.returnedAt) throw new HttpError(409, 'LOAN_RETURNED', `${row.tool.code} has already come back, so there is nothing to remind ${row.holder.name} about.`);
   if (row.dueAt.getTime() >= now.getTime()) {
-    throw new HttpError(409, 'LOAN_NOT_OVERDUE', `${row.tool.code} is not due back until ${row.dueAt.toISOString().slice(0, 10)}; a reminder can go once it is late.`);
+    throw new HttpError(409, 'LOAN_NOT_OVERDUE', `${row.tool.code} is not due back until ${dayInWords(row.dueAt, readChapterTimeZone(ctx.db), now)}; a reminder can go once it is late.`);
   }
   const day = calendarDay(now);
   ctx.db.transaction((db) => {

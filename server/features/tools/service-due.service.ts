@@ -7,7 +7,9 @@ import {
   type ServiceDueList,
   type ServiceUrgency,
 } from '@shared/schemas/overdue';
+import type { MissingAccessory } from '@shared/schemas/tools';
 import type { ServiceContext } from '../../context';
+import { openMissingAccessories } from './missing-accessories';
 import { listServiceCandidates } from './service-due.repo';
 import { serviceDueAt, toolIdentity } from './tool-dto';
 import type { ToolRow } from './tools.repo';
@@ -20,23 +22,25 @@ function wholeDaysUntil(dueAt: Date, now: Date): number {
   return ms > 0 ? Math.floor(ms / DAY_MS) : -Math.max(1, Math.floor(-ms / DAY_MS));
 }
 
-function urgencyOf(row: ToolRow, daysUntilDue: number | null): ServiceUrgency | undefined {
+function urgencyOf(row: ToolRow, daysUntilDue: number | null, missing: readonly MissingAccessory[]): ServiceUrgency | undefined {
   if (daysUntilDue !== null && daysUntilDue < 0) return 'overdue';
   if (row.status === 'out_of_service') return 'out_of_service';
+  if (missing.length > 0) return 'accessory_missing';
   if (daysUntilDue !== null && daysUntilDue <= SERVICE_DUE_WITHIN_DAYS) return 'due_soon';
   return undefined;
 }
 
-function toItem(row: ToolRow, now: Date): ServiceDueItem | undefined {
+function toItem(row: ToolRow, now: Date, missing: readonly MissingAccessory[]): ServiceDueItem | undefined {
   const dueAt = serviceDueAt(row);
   const daysUntilDue = dueAt ? wholeDaysUntil(dueAt, now) : null;
-  const urgency = urgencyOf(row, daysUntilDue);
+  const urgency = urgencyOf(row, daysUntilDue, missing);
   if (!urgency) return undefined;
   const kind = serviceKindOf(row.category);
   const outOfService = row.status === 'out_of_service';
   const words = [
     outOfService ? `Out of service: ${row.statusNote ?? 'no reason given'}` : undefined,
     daysUntilDue !== null && daysUntilDue <= SERVICE_DUE_WITHIN_DAYS ? serviceDueWords(kind, daysUntilDue) : undefined,
+    ...missing.map((m) => `Missing: ${m.accessory} (not back from ${m.lastHolder.name})`),
   ].filter(Boolean);
   return {
     ...toolIdentity(row),
@@ -47,19 +51,23 @@ function toItem(row: ToolRow, now: Date): ServiceDueItem | undefined {
     serviceDueAt: dueAt?.toISOString() ?? null,
     daysUntilDue,
     urgency,
+    missingAccessories: missing.map((m) => m.accessory),
     words: words.join('; '),
   };
 }
 
 /**
  * The quartermaster's service list, most urgent first: tools past their service or calibration
- * date (they may still be lent out), then tools out of service, then those due within 14 days.
+ * date (they may still be lent out), then tools out of service, then tools missing an accessory
+ * that did not come back with a loan, then those due within 14 days.
  */
 export function listServiceDue(ctx: ServiceContext): ServiceDueList {
   const now = ctx.now();
   const rank = (u: ServiceUrgency) => SERVICE_URGENCIES.indexOf(u);
-  const data = listServiceCandidates(ctx.db)
-    .map((row) => toItem(row, now))
+  const rows = listServiceCandidates(ctx.db);
+  const missing = openMissingAccessories(ctx.db, rows.map((r) => r.id));
+  const data = rows
+    .map((row) => toItem(row, now, missing.get(row.id) ?? []))
     .filter((item): item is ServiceDueItem => item !== undefined)
     .sort((a, b) => rank(a.urgency) - rank(b.urgency) || (a.daysUntilDue ?? Infinity) - (b.daysUntilDue ?? Infinity) || a.code.localeCompare(b.code));
   return { data, meta: { dueWithinDays: SERVICE_DUE_WITHIN_DAYS } };

@@ -5,6 +5,7 @@ import type { Database, Executor } from '../../db/client';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { isUniqueViolation } from '../../lib/sqlite-errors';
+import { loanStatements } from './loans.repo';
 import {
   activeLeadNames,
   countToolsPerSignoff,
@@ -138,4 +139,16 @@ export function mySignoffs(ctx: ServiceContext, user: UserRow): MySignoff[] {
     if (!g) return [];
     return [{ id: s.id, name: s.name, description: s.description, grantedAt: g.grantedAt.toISOString(), grantedBy: { id: g.grantedById, name: g.grantedByName } }];
   });
+}
+
+/**
+ * A tool that needs a sign-off goes out, and is held, only for a person who has it: checkout, a
+ * hold and "Hold the kit" refuse alike with 403 SIGNOFF_REQUIRED.
+ */
+export function refuseWithoutSignoff(ctx: ServiceContext, tool: { code: string; requiredSignoffId: number | null }, user: UserRow): void {
+  if (tool.requiredSignoffId === null) return;
+  const s = loanStatements(ctx.db);
+  if (s.hasSignoff.get({ signoffId: tool.requiredSignoffId, userId: user.id })) return;
+  const name = s.signoffName.get({ id: tool.requiredSignoffId })?.name ?? 'a sign-off';
+  throw new HttpError(403, 'SIGNOFF_REQUIRED', `${tool.code} needs the "${name}" sign-off, which you do not have yet. ${signOffAdvice(ctx.db)}`);
 }

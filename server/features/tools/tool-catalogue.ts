@@ -4,6 +4,7 @@ import type { Database, Executor } from '../../db/client';
 import { tools } from '../../db/schema/tools';
 import { listActiveGrants } from './signoffs.repo';
 import { effectiveLoanDays, toolIdentity } from './tool-dto';
+import { accessoryList } from './missing-accessories';
 import { loadToolExtras } from './tools.repo';
 
 /** Every tool a scan may find (all but retired ones), as a phone keeps it for offline use: four queries in all (no photo ids). */
@@ -20,6 +21,7 @@ export function catalogueTools(db: Database): CatalogueTool[] {
       requiredSignoffName: row.requiredSignoffId !== null ? (extras.signoffNames.get(row.requiredSignoffId) ?? null) : null,
       holder: loan ? { id: loan.holderId, name: loan.holderName } : null,
       dueAt: loan ? loan.dueAt.toISOString() : null,
+      accessoriesOut: loan ? accessoryList(loan.accessoriesOut) : null,
       heldFor: row.status === 'held' ? (extras.holds.get(row.id)?.offeredTo ?? null) : null,
       traySize: row.traySize,
       trayCapacity: row.trayCapacity,

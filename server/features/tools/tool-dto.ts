@@ -1,6 +1,7 @@
 import { findDrill } from '@shared/drills/drill-sizes';
 import type { Tool } from '@shared/schemas/tools';
 import { DEFAULT_LOAN_DAYS } from '@shared/tools/categories';
+import { accessoryList } from './missing-accessories';
 import type { ToolExtras, ToolRow } from './tools.repo';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
@@ -44,8 +45,15 @@ export function toTool(row: ToolRow, extras: ToolExtras): Tool {
     accessories: JSON.parse(row.accessories) as string[],
     notes: row.notes,
     loan: loan
-      ? { id: loan.id, holder: { id: loan.holderId, name: loan.holderName }, checkedOutAt: loan.checkedOutAt.toISOString(), dueAt: loan.dueAt.toISOString() }
+      ? {
+          id: loan.id,
+          holder: { id: loan.holderId, name: loan.holderName },
+          checkedOutAt: loan.checkedOutAt.toISOString(),
+          dueAt: loan.dueAt.toISOString(),
+          accessoriesOut: accessoryList(loan.accessoriesOut),
+        }
       : null,
+    missingAccessories: extras.missingAccessories.get(row.id) ?? [],
     holds: {
       waiting: hold?.waiting ?? 0,
       offeredTo: hold?.offeredTo ?? null,

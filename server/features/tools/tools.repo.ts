@@ -5,22 +5,28 @@ import { preparedPerDatabase } from '../../db/prepared';
 import { signoffs } from '../../db/schema/signoffs';
 import { holds, loans, photos, tools } from '../../db/schema/tools';
 import { users } from '../../db/schema/users';
+import type { MissingAccessory } from '@shared/schemas/tools';
 import { loanStatements } from './loans.repo';
+import { openMissingAccessories } from './missing-accessories';
 
 export type ToolRow = typeof tools.$inferSelect;
-export type NewToolRow = typeof tools.$inferInsert;
+/** A tool's fields other than its state: the state has one writer, `tool-state.ts`. */
+export type NewToolRow = Omit<typeof tools.$inferInsert, 'status' | 'statusNote'>;
 
 /** Every scan starts here, so the lookup is the checkout's own prepared statement. */
 export function findToolByCode(db: Database, code: string): ToolRow | undefined {
   return loanStatements(db).toolByCode.get({ code });
 }
 
+/** A new tool starts on the shelf (the column's default). */
 export function insertTool(db: Executor, values: NewToolRow): ToolRow {
-  return db.insert(tools).values(values).returning().get();
+  const { status: _status, statusNote: _note, ...fields } = values as typeof tools.$inferInsert;
+  return db.insert(tools).values(fields).returning().get();
 }
 
 export function updateTool(db: Executor, id: number, values: Partial<NewToolRow>): ToolRow {
-  return db.update(tools).set(values).where(eq(tools.id, id)).returning().get();
+  const { status: _status, statusNote: _note, ...fields } = values as Partial<typeof tools.$inferInsert>;
+  return db.update(tools).set(fields).where(eq(tools.id, id)).returning().get();
 }
 
 /** The next free label code: one more than the highest T-number in use, four digits at least. */
@@ -56,14 +62,15 @@ export function listTools(db: Executor, q: ToolListQuery): { rows: ToolRow[]; to
 }
 
 export interface ToolExtras {
-  loans: Map<number, { id: number; holderId: number; holderName: string; checkedOutAt: Date; dueAt: Date }>;
+  loans: Map<number, { id: number; holderId: number; holderName: string; checkedOutAt: Date; dueAt: Date; accessoriesOut: string | null }>;
   holds: Map<number, { waiting: number; offeredTo: { id: number; name: string } | null; offerExpiresAt: Date | null }>;
   signoffNames: Map<number, string>;
   photoIds: Map<number, number[]>;
+  missingAccessories: Map<number, MissingAccessory[]>;
 }
 
 interface ExtrasRows {
-  loans: { id: number; toolId: number; holderId: number; holderName: string; checkedOutAt: Date; dueAt: Date }[];
+  loans: { id: number; toolId: number; holderId: number; holderName: string; checkedOutAt: Date; dueAt: Date; accessoriesOut: string | null }[];
   holds: { toolId: number; status: string; userId: number; name: string; offerExpiresAt: Date | null }[];
   signoffs: { id: number; name: string }[];
   photos: { id: number; toolId: number }[];
@@ -75,7 +82,7 @@ const p = sql.placeholder;
 /** The same four queries for one tool (a scan opens one), prepared once per database. */
 const oneToolStatements = preparedPerDatabase((db) => ({
   loans: db
-    .select({ id: loans.id, toolId: loans.toolId, holderId: loans.userId, holderName: users.name, checkedOutAt: loans.checkedOutAt, dueAt: loans.dueAt })
+    .select({ id: loans.id, toolId: loans.toolId, holderId: loans.userId, holderName: users.name, checkedOutAt: loans.checkedOutAt, dueAt: loans.dueAt, accessoriesOut: loans.accessoriesOut })
     .from(loans)
     .innerJoin(users, eq(users.id, loans.userId))
     .where(and(eq(loans.toolId, p('toolId')), isNull(loans.returnedAt)))
@@ -116,7 +123,7 @@ function pageRows(db: Database, rows: ToolRow[], withPhotos: boolean): ExtrasRow
   const signoffIds = [...new Set(rows.map((r) => r.requiredSignoffId).filter((id): id is number => id !== null))];
   return {
     loans: db
-      .select({ id: loans.id, toolId: loans.toolId, holderId: loans.userId, holderName: users.name, checkedOutAt: loans.checkedOutAt, dueAt: loans.dueAt })
+      .select({ id: loans.id, toolId: loans.toolId, holderId: loans.userId, holderName: users.name, checkedOutAt: loans.checkedOutAt, dueAt: loans.dueAt, accessoriesOut: loans.accessoriesOut })
       .from(loans)
       .innerJoin(users, eq(users.id, loans.userId))
       .where(and(inArray(loans.toolId, ids), isNull(loans.returnedAt)))
@@ -137,8 +144,9 @@ function pageRows(db: Database, rows: ToolRow[], withPhotos: boolean): ExtrasRow
  * four queries; `withPhotos: false` skips the photo ids (the offline copy has no use for them).
  */
 export function loadToolExtras(db: Database, rows: ToolRow[], { withPhotos = true } = {}): ToolExtras {
-  const extras: ToolExtras = { loans: new Map(), holds: new Map(), signoffNames: new Map(), photoIds: new Map() };
+  const extras: ToolExtras = { loans: new Map(), holds: new Map(), signoffNames: new Map(), photoIds: new Map(), missingAccessories: new Map() };
   if (rows.length === 0) return extras;
+  extras.missingAccessories = openMissingAccessories(db, rows.map((r) => r.id));
   const found = rows.length === 1 ? oneToolRows(db, rows[0]!) : pageRows(db, rows, withPhotos);
   for (const l of found.loans) extras.loans.set(l.toolId, l);
   for (const h of found.holds) {

@@ -4,6 +4,7 @@ import { z } from 'zod';
 import {
   checkoutBodySchema,
   createToolBodySchema,
+  resolveAccessoryBodySchema,
   returnBodySchema,
   statusChangeBodySchema,
   toolCodeParams,
@@ -15,6 +16,7 @@ import type { RunQueuedAction } from '../../lib/queued-action';
 import { parseInput } from '../../lib/validate';
 import { cancelHold, placeHold } from './holds.service';
 import { checkOut, returnTool } from './loans.service';
+import { resolveMissingAccessory } from './missing-accessories';
 import { listToolEvents } from './tool-events.repo';
 import { changeToolStatus, type StatusCommand } from './tool-status.service';
 import { createTool, editTool, getToolForYou, getToolRow, listToolPage } from './tools.service';
@@ -79,6 +81,12 @@ export function toolsRouter({ runQueuedAction }: { runQueuedAction: RunQueuedAct
   router.delete('/:code/holds/mine', (req, res) => {
     cancelHold(req.ctx, requireUser(req), code(req.params));
     res.status(204).end();
+  });
+
+  /** The quartermaster marks an accessory that did not come back found or replaced; answers what is still missing. */
+  router.post('/:code/missing-accessories/resolve', quartermaster, (req, res) => {
+    const toolCode = code(req.params);
+    res.json({ data: resolveMissingAccessory(req.ctx, requireUser(req), toolCode, parseInput(resolveAccessoryBodySchema, req.body)) });
   });
 
   router.post('/:code/:command', quartermaster, (req, res, next) => {

@@ -8,6 +8,8 @@ import { loanStatements } from './loans.repo';
 import { signOffAdvice } from './signoffs.service';
 import { recordToolEvent } from './tool-events.repo';
 import { toTool } from './tool-dto';
+import { heldWords, loanWords } from './tool-words';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import {
   findActiveHold,
   findToolByCode,
@@ -47,6 +49,8 @@ export function getToolForYou(ctx: ServiceContext, user: UserRow, code: string):
   const actions: ToolAction[] = [];
   let reason: string | null = null;
   const mine = tool.loan?.holder.id === user.id;
+  const now = ctx.now();
+  const zone = readChapterTimeZone(ctx.db);
   switch (tool.status) {
     case 'available':
       actions.push('check_out');
@@ -54,14 +58,14 @@ export function getToolForYou(ctx: ServiceContext, user: UserRow, code: string):
     case 'on_loan':
       if (mine || hasRole(user.role, 'quartermaster')) actions.push('return');
       if (!mine) {
-        reason = `On loan to ${tool.loan?.holder.name ?? 'someone'} until ${tool.loan?.dueAt.slice(0, 10) ?? 'its return'}.`;
+        reason = tool.loan ? loanWords({ name: tool.loan.holder.name, you: false }, new Date(tool.loan.dueAt), now, zone) : 'On loan.';
         if (!myHold) actions.push('place_hold');
       }
       break;
     case 'held':
       if (tool.holds.offeredTo?.id === user.id) actions.push('check_out');
       else {
-        reason = `Held for ${tool.holds.offeredTo?.name ?? 'the next person'} until ${tool.holds.offerExpiresAt?.slice(0, 16).replace('T', ' ') ?? 'they collect it'}.`;
+        reason = heldWords(tool.holds.offeredTo?.name ?? 'the next person', tool.holds.offerExpiresAt ? new Date(tool.holds.offerExpiresAt) : null, zone);
         if (!myHold) actions.push('place_hold');
       }
       break;
@@ -77,23 +81,23 @@ export function getToolForYou(ctx: ServiceContext, user: UserRow, code: string):
       break;
   }
   if (myHold) actions.push('cancel_hold');
-  if (actions.includes('check_out') && tool.requiredSignoff) {
-    if (!loanStatements(ctx.db).hasSignoff.get({ signoffId: tool.requiredSignoff.id, userId: user.id })) {
-      actions.splice(actions.indexOf('check_out'), 1);
-      reason = `Needs the "${tool.requiredSignoff.name}" sign-off, which you do not have yet. ${signOffAdvice(ctx.db)}`;
-    }
+  if (tool.requiredSignoff && !loanStatements(ctx.db).hasSignoff.get({ signoffId: tool.requiredSignoff.id, userId: user.id })) {
+    const before = actions.length;
+    for (const needsIt of ['check_out', 'place_hold'] as const) if (actions.includes(needsIt)) actions.splice(actions.indexOf(needsIt), 1);
+    if (actions.length < before) reason = `Needs the "${tool.requiredSignoff.name}" sign-off, which you do not have yet. ${signOffAdvice(ctx.db)}`;
   }
   return {
     ...tool,
     forYou: {
       actions,
       reason,
-      defaultDueAt: new Date(ctx.now().getTime() + tool.loanDays * DAY_MS).toISOString(),
+      defaultDueAt: new Date(now.getTime() + tool.loanDays * DAY_MS).toISOString(),
       yourHold: myHold
         ? {
             status: myHold.status as 'waiting' | 'offered',
             position: queuePosition(ctx.db, tool.id, myHold.id),
             offerExpiresAt: myHold.offerExpiresAt?.toISOString() ?? null,
+            startsAt: myHold.startsAt && myHold.startsAt > now ? myHold.startsAt.toISOString() : null,
           }
         : null,
     },

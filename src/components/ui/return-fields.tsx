@@ -1,4 +1,5 @@
 import { useState, type ReactNode } from 'react';
+import { AccessoryChecklist } from '@/components/ui/accessory-checklist';
 import { ConditionField, type ReturnCondition } from '@/components/ui/condition-field';
 import { TextField } from '@/components/ui/field';
 import { returnBodySchema, type ReturnBody } from '@shared/schemas/tools';
@@ -7,6 +8,8 @@ import { returnBodySchema, type ReturnBody } from '@shared/schemas/tools';
 export interface ReturnedTool {
   category: string;
   trayCapacity: number | null;
+  /** What went out with the loan, to tick back (null or empty: nothing to tick). */
+  accessoriesOut: string[] | null;
 }
 
 /** The return fields as typed: the tray count stays a string until the form sends it. */
@@ -14,6 +17,8 @@ export interface ReturnFieldValues {
   condition: ReturnCondition;
   note: string;
   count: string;
+  /** The accessories ticked as back. */
+  back: string[];
 }
 
 export const isTray = (tool: ReturnedTool): boolean => tool.category === 'temporary_fastener_tray';
@@ -22,13 +27,14 @@ export const isTray = (tool: ReturnedTool): boolean => tool.category === 'tempor
  * The return's body from the fields, or the sentence that says what to fix. A tray with its count
  * cleared is asked for a count, never sent as 0 (which would record every fastener as lost).
  */
-export function returnBodyFrom(tool: ReturnedTool, { condition, note, count }: ReturnFieldValues): { body: ReturnBody } | { problem: string } {
+export function returnBodyFrom(tool: ReturnedTool, { condition, note, count, back }: ReturnFieldValues): { body: ReturnBody } | { problem: string } {
   const tray = isTray(tool);
   if (tray && count.trim() === '') return { problem: 'Count the temporary fasteners that came back.' };
   const parsed = returnBodySchema.safeParse({
     condition,
     ...(note.trim() && { note: note.trim() }),
     ...(tray && { returnedCount: Number(count) }),
+    ...((tool.accessoriesOut?.length ?? 0) > 0 && { accessoriesBack: back }),
   });
   if (!parsed.success) return { problem: parsed.error.issues[0]?.message ?? 'Check the return.' };
   const counted = parsed.data.returnedCount;
@@ -44,6 +50,7 @@ export function useReturnFieldValues(tool: ReturnedTool) {
     condition: 'ok',
     note: '',
     count: isTray(tool) && tool.trayCapacity ? String(tool.trayCapacity) : '',
+    back: [],
   }));
 }
 
@@ -80,6 +87,11 @@ export function ReturnFields({
           onChange={(e) => onChange({ ...values, count: e.target.value })}
           hint={`A full tray holds ${tool.trayCapacity}.`}
         />
+      )}
+      {tool.accessoriesOut && tool.accessoriesOut.length > 0 && (
+        <AccessoryChecklist legend="Tick what came back with it" items={tool.accessoriesOut} ticked={values.back} onChange={(back) => onChange({ ...values, back })}>
+          <p className="text-sm text-steel">Anything not ticked is recorded as missing, for the quartermaster.</p>
+        </AccessoryChecklist>
       )}
       {values.condition === 'needs_attention' && (
         <>

@@ -5,9 +5,11 @@ import { hasRole } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { OfflineToolView } from '@/features/offline/components/offline-tool-view';
 import { ReturnPhotoPicker } from '@/features/photos/components/return-photo-picker';
+import { serviceKeys } from '@/features/service/api/keys';
 import { ToolPhotos } from '@/features/photos/components/tool-photos';
 import { toolQueryOptions } from '@/features/tools/api/get-tool';
 import { toolKeys } from '@/features/tools/api/keys';
+import { MissingAccessories } from '@/features/tools/components/missing-accessories';
 import { QuartermasterCommands } from '@/features/tools/components/quartermaster-commands';
 import { ToolActionsPanel } from '@/features/tools/components/tool-actions-panel';
 import { ToolHistory } from '@/features/tools/components/tool-history';
@@ -42,12 +44,19 @@ function OnlineToolDetail({ code }: { code: string }) {
   const queryClient = useQueryClient();
   const isQuartermaster = !!me && hasRole(me.role, 'quartermaster');
   const holdsIt = tool.loan?.holder.id === me?.id;
+  // A return can leave an accessory missing, and marking it found or replaced closes it: both change the Service list.
+  const serviceChanged = () => void queryClient.invalidateQueries({ queryKey: serviceKeys.all });
   return (
     <div className="grid gap-4 lg:grid-cols-[3fr_2fr]">
       <div className="flex flex-col gap-4">
         <Card>
           <ToolSummary tool={tool} />
         </Card>
+        {tool.missingAccessories.length > 0 && (
+          <Card>
+            <MissingAccessories tool={tool} canResolve={isQuartermaster} onResolved={serviceChanged} />
+          </Card>
+        )}
         {tool.notes && <Card title="Notes">{tool.notes}</Card>}
         {(tool.photoIds.length > 0 || isQuartermaster) && (
           <Card title="Photos">
@@ -65,7 +74,10 @@ function OnlineToolDetail({ code }: { code: string }) {
         <ToolActionsPanel
           tool={tool}
           photoSlot={holdsIt || isQuartermaster ? (onUploaded) => <ReturnPhotoPicker code={tool.code} onUploaded={onUploaded} /> : undefined}
-          onDone={() => void navigate(`/tools/${tool.code}`, { replace: true })}
+          onDone={() => {
+            serviceChanged();
+            void navigate(`/tools/${tool.code}`, { replace: true });
+          }}
         />
         <Link to="/scan" className="inline-flex min-h-12 items-center justify-center rounded-lg border-2 border-ink bg-card px-5 font-semibold">
           Scan another label

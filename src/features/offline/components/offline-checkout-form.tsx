@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import type { CatalogueTool } from '@shared/schemas/offline';
+import { AccessoryChecklist } from '@/components/ui/accessory-checklist';
 import { Button } from '@/components/ui/button';
 import { formatDate } from '@/lib/format';
 import { queueFromCopy } from '../api/queue-from-copy';
@@ -7,15 +8,16 @@ import type { StoredCatalogue } from '../db';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 
-/** Check out from the copy: the loan period's due date, the accessories to take along. */
+/** Check out from the copy: the loan period's due date, and the accessories taken along, ticked so the loan records them. */
 export function OfflineCheckoutForm({ copy, tool }: { copy: StoredCatalogue; tool: CatalogueTool }) {
   const [busy, setBusy] = useState(false);
   // The loan period counts from now, when the member takes it off the shelf.
   const [due] = useState(() => new Date(Date.now() + tool.loanDays * DAY_MS).toISOString());
+  const [ticked, setTicked] = useState<string[]>([]);
   const submit = async () => {
     setBusy(true);
     try {
-      await queueFromCopy(copy, 'check_out', tool.code, tool.name, {});
+      await queueFromCopy(copy, 'check_out', tool.code, tool.name, tool.accessories.length > 0 ? { accessories: ticked } : {});
     } finally {
       setBusy(false);
     }
@@ -25,7 +27,9 @@ export function OfflineCheckoutForm({ copy, tool }: { copy: StoredCatalogue; too
       <p>
         Bring it back by <strong>{formatDate(due)}</strong> ({tool.loanDays} days).
       </p>
-      {tool.accessories.length > 0 && <p>Take these with it: {tool.accessories.join(', ')}.</p>}
+      {tool.accessories.length > 0 && (
+        <AccessoryChecklist legend="Tick what you take with it" items={tool.accessories} ticked={ticked} onChange={setTicked} />
+      )}
       <Button onClick={() => void submit()} busy={busy} className="w-full text-lg">
         Check out {tool.code}
       </Button>

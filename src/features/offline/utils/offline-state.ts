@@ -1,5 +1,5 @@
 import type { Catalogue, CatalogueBin, CatalogueTool } from '@shared/schemas/offline';
-import type { ReturnBody } from '@shared/schemas/tools';
+import type { CheckoutBody, ReturnBody } from '@shared/schemas/tools';
 import { STATUS_LABELS } from '@shared/tools/categories';
 import { formatDate } from '@/lib/format';
 import type { QueuedAction } from '../db';
@@ -27,9 +27,12 @@ export function offlineTool(catalogue: Catalogue, code: string, waiting: QueuedA
   const mine = waiting.filter((a) => a.code === code && (a.kind === 'check_out' || a.kind === 'return'));
   let status = tool.status;
   let yours = catalogue.yourLoans.some((l) => l.code === code);
+  // What went out with the loan, to tick back at return: a waiting check out says what it took.
+  let accessoriesOut = tool.accessoriesOut;
   for (const action of mine) {
     yours = action.kind === 'check_out';
     status = yours ? 'on_loan' : (action.body as ReturnBody).condition === 'needs_attention' ? 'out_of_service' : 'available';
+    accessoriesOut = yours ? ((action.body as CheckoutBody).accessories ?? null) : null;
   }
   const heldForYou = status === 'held' && mine.length === 0 && tool.heldFor?.id === catalogue.you.id;
   const signedOff = tool.requiredSignoffId === null || catalogue.yourSignoffs.includes(tool.requiredSignoffId);
@@ -40,7 +43,7 @@ export function offlineTool(catalogue: Catalogue, code: string, waiting: QueuedA
   else if (status === 'on_loan' && tool.holder) reason = `On loan to ${tool.holder.name}${tool.dueAt ? ` until ${formatDate(tool.dueAt)}` : ''}.`;
   else if (status === 'held' && !heldForYou) reason = `Held for ${tool.heldFor?.name ?? 'the next person'}.`;
   else if (!free) reason = `${STATUS_LABELS[status]}.`;
-  return { tool, yours, canCheckOut: !yours && free && signedOff, canReturn: yours, reason, waiting: mine };
+  return { tool: { ...tool, accessoriesOut }, yours, canCheckOut: !yours && free && signedOff, canReturn: yours, reason, waiting: mine };
 }
 
 export interface OfflineBin {

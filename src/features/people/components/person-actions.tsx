@@ -42,7 +42,7 @@ export function PersonActions({ person, isSelf }: { person: Person; isSelf: bool
       {person.active ? (
         isSelf ? null : confirming ? (
           <>
-            <Button variant="danger" busy={update.isPending} onClick={() => change({ active: false }, `${person.name} can no longer sign in.`)}>
+            <Button variant="danger" busy={update.isPending} onClick={() => change({ active: false }, `${person.name} can no longer sign in; their holds and queue places have ended.`)}>
               Confirm deactivate
             </Button>
             <Button variant="quiet" onClick={() => setConfirming(false)}>

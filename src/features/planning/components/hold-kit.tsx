@@ -2,15 +2,24 @@ import type { KitHoldsResult } from '@shared/schemas/builds';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { messageOf } from '@/lib/errors';
+import { formatDay } from '@/lib/format';
 import { useHoldKit } from '../api/hold-kit';
 
-/** One tap asks the crib to hold every tool of the kit; what could not be held says why. */
-export function HoldKit({ assemblyId }: { assemblyId: number }) {
+/**
+ * One tap asks the crib to hold every tool of the kit from the assembly's planned start; what could
+ * not be held says why.
+ */
+export function HoldKit({ assemblyId, plannedStart, onHeld }: { assemblyId: number; plannedStart: string | null; onHeld?: () => void }) {
   const hold = useHoldKit(assemblyId);
   const result: KitHoldsResult | undefined = hold.data;
   return (
     <div className="flex flex-col gap-3">
-      <Button onClick={() => hold.mutate()} busy={hold.isPending} className="w-full sm:w-auto sm:self-start">
+      <p id="hold-kit-hint" className="text-sm text-ink-soft">
+        {plannedStart
+          ? `Holds start on the planned start, ${formatDay(plannedStart)}: you join each tool's queue now, and the tools are set aside for you from that morning (at once if it has come). Until then they stay on the shelf for others.`
+          : 'With no planned start, tools on the shelf are set aside for you at once, for the chapter’s hold time.'}
+      </p>
+      <Button onClick={() => hold.mutate(undefined, { onSuccess: () => onHeld?.() })} busy={hold.isPending} aria-describedby="hold-kit-hint" className="w-full sm:w-auto sm:self-start">
         Hold the kit
       </Button>
       {hold.isError && <Notice tone="bad">{messageOf(hold.error)}</Notice>}
@@ -19,6 +28,7 @@ export function HoldKit({ assemblyId }: { assemblyId: number }) {
           {result.placed.length > 0 ? (
             <div>
               <p className="font-semibold">Holds placed</p>
+              {result.holdsFrom && <p>Set aside for you from {formatDay(result.holdsFrom)}; you are in each queue now.</p>}
               <ul className="mt-1 list-disc pl-5">
                 {result.placed.map((t) => (
                   <li key={t.code}>

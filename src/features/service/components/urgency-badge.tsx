@@ -3,6 +3,7 @@ import type { ServiceUrgency } from '@shared/schemas/overdue';
 const TONES: Record<ServiceUrgency, string> = {
   overdue: 'bg-bad-soft text-bad',
   out_of_service: 'bg-warn-soft text-warn',
+  accessory_missing: 'bg-warn-soft text-warn',
   due_soon: 'bg-paper text-ink-soft',
 };
 

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { CheckoutBody, ReturnBody } from '@shared/schemas/tools';
+import type { CheckoutBody, ResolveAccessoryBody, ReturnBody } from '@shared/schemas/tools';
 import { api } from '@/lib/api-client';
 import { toolKeys } from './keys';
 
@@ -26,8 +26,12 @@ export const useCheckOut = () =>
 
 export const useReturnTool = () =>
   useToolMutation(({ code, body }: { code: string; body: ReturnBody }) =>
-    api.post<{ status: string; shortfall: number | null; offeredTo: { name: string } | null }>(path(code, 'return'), body),
+    api.post<{ status: string; shortfall: number | null; accessoriesMissing: string[]; offeredTo: { name: string } | null }>(path(code, 'return'), body),
   );
+
+/** The quartermaster marks an accessory that did not come back found or replaced. */
+export const useResolveAccessory = () =>
+  useToolMutation(({ code, body }: { code: string; body: ResolveAccessoryBody }) => api.post<{ data: unknown[] }>(path(code, 'missing-accessories/resolve'), body));
 
 export const usePlaceHold = () => useToolMutation((code: string) => api.post<{ position: number }>(path(code, 'holds')));
 

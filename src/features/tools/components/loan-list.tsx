@@ -3,7 +3,7 @@ import type { Loan } from '@shared/schemas/tools';
 import { dateTime, shortDate } from '../due-words';
 import { DueBadge } from './due-badge';
 
-/** Open loans, soonest due first, each with due words (and colour) and the accessories to bring back. */
+/** Open loans, soonest due first, each with due words (and colour) and the accessories that went out with it, to bring back. */
 export function OpenLoanList({ loans, showHolder = false, empty }: { loans: Loan[]; showHolder?: boolean; empty: string }) {
   if (loans.length === 0) return <p className="text-steel">{empty}</p>;
   return (
@@ -19,7 +19,7 @@ export function OpenLoanList({ loans, showHolder = false, empty }: { loans: Loan
             <span>back by {shortDate.format(new Date(l.dueAt))}</span>
             <DueBadge dueAt={l.dueAt} />
           </div>
-          {l.tool.accessories.length > 0 && <p className="mt-1 text-sm text-steel">With: {l.tool.accessories.join(', ')}</p>}
+          {l.accessoriesOut && l.accessoriesOut.length > 0 && <p className="mt-1 text-sm text-steel">With: {l.accessoriesOut.join(', ')}</p>}
         </li>
       ))}
     </ul>
@@ -39,6 +39,7 @@ export function LoanHistoryList({ loans }: { loans: Loan[] }) {
             {shortDate.format(new Date(l.checkedOutAt))} – {l.returnedAt ? dateTime.format(new Date(l.returnedAt)) : ''}
             {l.returnCondition === 'needs_attention' ? ' · reported: needs attention' : ''}
             {l.shortfall ? ` · ${l.shortfall} temporary fasteners short` : ''}
+            {l.accessoriesMissing.length > 0 ? ` · did not come back: ${l.accessoriesMissing.join(', ')}` : ''}
           </p>
         </li>
       ))}

@@ -15,13 +15,14 @@ export type PhotoSlot = (onUploaded: (photoId: number | undefined) => void) => R
  */
 export function ReturnForm({ tool, photoSlot, onDone }: { tool: ToolForYou; photoSlot?: PhotoSlot; onDone?: () => void }) {
   const giveBack = useReturnTool();
-  const [fields, setFields] = useReturnFieldValues(tool);
+  const returned = { category: tool.category, trayCapacity: tool.trayCapacity, accessoriesOut: tool.loan?.accessoriesOut ?? null };
+  const [fields, setFields] = useReturnFieldValues(returned);
   const [photoId, setPhotoId] = useState<number>();
   const [problem, setProblem] = useState<string>();
 
   const submit = () => {
     setProblem(undefined);
-    const made = returnBodyFrom(tool, fields);
+    const made = returnBodyFrom(returned, fields);
     if ('problem' in made) return setProblem(made.problem);
     const body = { ...made.body, ...(photoId !== undefined && { photoId }) };
     giveBack.mutate(
@@ -30,6 +31,7 @@ export function ReturnForm({ tool, photoSlot, onDone }: { tool: ToolForYou; phot
         onSuccess: (r) => {
           const parts = [`${tool.code} is back.`];
           if (r.shortfall) parts.push(`${r.shortfall} temporary fasteners short: noted for the quartermaster.`);
+          if (r.accessoriesMissing.length > 0) parts.push(`Not back: ${r.accessoriesMissing.join(', ')}; noted for the quartermaster.`);
           if (r.offeredTo) parts.push(`It is now held for ${r.offeredTo.name}.`);
           toast.success(parts.join(' '));
           onDone?.();
@@ -42,7 +44,7 @@ export function ReturnForm({ tool, photoSlot, onDone }: { tool: ToolForYou; phot
   return (
     <div className="flex flex-col gap-4">
       {problem && <Notice tone="bad">{problem}</Notice>}
-      <ReturnFields name="condition" tool={tool} values={fields} onChange={setFields} noteHint="It goes out of service until the quartermaster looks at it.">
+      <ReturnFields name="condition" tool={returned} values={fields} onChange={setFields} noteHint="It goes out of service until the quartermaster looks at it.">
         {photoSlot?.(setPhotoId)}
       </ReturnFields>
       <Button onClick={submit} busy={giveBack.isPending} className="w-full text-lg">

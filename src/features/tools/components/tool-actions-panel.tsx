@@ -4,6 +4,7 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Card } from '@/components/ui/page';
 import { messageOf } from '@/lib/errors';
+import { formatDate } from '@/lib/format';
 import { useCancelHold, usePlaceHold } from '../api/tool-actions';
 import { CheckoutForm } from './checkout-form';
 import { ReturnForm, type PhotoSlot } from './return-form';
@@ -26,7 +27,9 @@ export function ToolActionsPanel({ tool, photoSlot, onDone }: { tool: ToolForYou
           <p>
             {yourHold.status === 'offered'
               ? 'It is held for you: check it out before the hold ends.'
-              : `You are number ${yourHold.position} in the queue. We e-mail you when it is your turn.`}
+              : yourHold.startsAt
+                ? `Your hold starts on ${formatDate(yourHold.startsAt)}, the planned start of your assembly: it is set aside for you then, or when it comes back after that. We e-mail you.`
+                : `You are number ${yourHold.position} in the queue. We e-mail you when it is your turn.`}
           </p>
         )}
         {actions.includes('check_out') && <CheckoutForm tool={tool} onDone={onDone} />}

@@ -1,9 +1,12 @@
 import type { CheckoutBody, ReturnBody } from '@shared/schemas/tools';
 import { hasRole } from '@shared/roles';
+import { dayInWords, loanDueAt } from '@shared/time/chapter-time';
+import { DAY_MS } from '@shared/time/durations';
 import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { isUniqueViolation } from '../../lib/sqlite-errors';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { offerToNextInQueue } from './holds.service';
 import { loanStatements } from './loans.repo';
 import { checkReturnPhoto } from './photos.service';
@@ -11,10 +14,7 @@ import { signOffAdvice } from './signoffs.service';
 import { effectiveLoanDays } from './tool-dto';
 import type { ToolRow } from './tools.repo';
 
-const DAY_MS = 24 * 60 * 60 * 1000;
 const MAX_LOAN_MS = 365 * DAY_MS;
-
-const dateWords = (d: Date) => d.toISOString().slice(0, 10);
 
 export interface LoanResult {
   id: number;
@@ -34,8 +34,8 @@ function toolOrThrow(ctx: ServiceContext, code: string): ToolRow {
   return tool;
 }
 
-function dueDate(tool: ToolRow, body: CheckoutBody, now: Date): Date {
-  if (!body.dueAt) return new Date(now.getTime() + effectiveLoanDays(tool) * DAY_MS);
+function dueDate(tool: ToolRow, body: CheckoutBody, now: Date, zone: string): Date {
+  if (!body.dueAt) return loanDueAt(now, effectiveLoanDays(tool), zone);
   const due = new Date(body.dueAt);
   if (due.getTime() <= now.getTime()) throw new HttpError(400, 'DUE_DATE_PAST', 'The due date must be in the future.');
   if (due.getTime() - now.getTime() > MAX_LOAN_MS) throw new HttpError(400, 'DUE_DATE_TOO_FAR', 'A loan lasts at most a year.');
@@ -52,6 +52,8 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
   const s = loanStatements(ctx.db);
   const now = ctx.now();
   const at = performedAt ?? now;
+  const zone = readChapterTimeZone(ctx.db);
+  const dateWords = (d: Date) => dayInWords(d, zone, now);
   return ctx.db.$client.transaction(() => {
     const tool = toolOrThrow(ctx, code);
     if (tool.status === 'on_loan') {
@@ -79,7 +81,7 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
         `${tool.code} needs the "${name}" sign-off, which you do not have yet. ${signOffAdvice(ctx.db)}`,
       );
     }
-    const due = dueDate(tool, body, at);
+    const due = dueDate(tool, body, at, zone);
     let loanId: number;
     try {
       loanId = s.insertLoan.get({ toolId: tool.id, userId: user.id, checkedOutAt: at, dueAt: due, arrivedAt: now }).id;

@@ -1,9 +1,11 @@
 import { hasRole } from '@shared/roles';
+import { loanDueAt } from '@shared/time/chapter-time';
 import type { CreateToolInput, Tool, ToolAction, ToolForYou, ToolList, ToolListQuery, UpdateToolBody } from '@shared/schemas/tools';
 import { createToolBodySchema } from '@shared/schemas/tools';
 import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { loanStatements } from './loans.repo';
 import { signOffAdvice } from './signoffs.service';
 import { recordToolEvent } from './tool-events.repo';
@@ -21,7 +23,6 @@ import {
   type ToolRow,
 } from './tools.repo';
 
-const DAY_MS = 24 * 60 * 60 * 1000;
 
 export function listToolPage(ctx: ServiceContext, query: ToolListQuery): ToolList {
   const { rows, total } = listTools(ctx.db, query);
@@ -88,7 +89,7 @@ export function getToolForYou(ctx: ServiceContext, user: UserRow, code: string):
     forYou: {
       actions,
       reason,
-      defaultDueAt: new Date(ctx.now().getTime() + tool.loanDays * DAY_MS).toISOString(),
+      defaultDueAt: loanDueAt(ctx.now(), tool.loanDays, readChapterTimeZone(ctx.db)).toISOString(),
       yourHold: myHold
         ? {
             status: myHold.status as 'waiting' | 'offered',

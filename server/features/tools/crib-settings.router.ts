@@ -1,12 +1,12 @@
 import { Router } from 'express';
 import { updateCribSettingsBodySchema, type CribSettingsView } from '@shared/schemas/signoffs';
-import type { Executor } from '../../db/client';
+import type { Database } from '../../db/client';
 import { requireRole } from '../../middleware/auth';
 import { parseInput } from '../../lib/validate';
 import { readChapterTimeZone, writeChapterTimeZone } from '../../settings/chapter-time-zone';
 import { readCribSettings, writeCribSetting } from '../../settings/crib-settings';
 
-const cribSettingsView = (db: Executor): CribSettingsView => ({ ...readCribSettings(db), timeZone: readChapterTimeZone(db) });
+const cribSettingsView = (db: Database): CribSettingsView => ({ ...readCribSettings(db), timeZone: readChapterTimeZone(db) });
 
 /** The chapter's crib settings: everyone may read them, a chapter lead changes them. */
 export function cribSettingsRouter() {

@@ -4,6 +4,7 @@ import { holds, tools } from '../../db/schema/tools';
 import { users, type UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { holdOfferedMail } from '../../mail/messages';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { readCribSettings } from '../../settings/crib-settings';
 import { recordToolEvent } from './tool-events.repo';
 import { findActiveHold, findToolByCode, openLoanHolderId, queuePosition, type ToolRow } from './tools.repo';
@@ -38,7 +39,7 @@ export function offerToNextInQueue(ctx: ServiceContext, tool: ToolRow, now: Date
   return {
     userId: next.userId,
     name: next.name,
-    notify: () => ctx.mailer.send(holdOfferedMail(next.email, next.name, tool, until, link)),
+    notify: () => ctx.mailer.send(holdOfferedMail(next.email, next.name, tool, until, link, { zone: readChapterTimeZone(ctx.db), now })),
   };
 }
 

@@ -3,7 +3,8 @@ import { overdueDigestMail, overdueReminderMail, plural } from '../../mail/messa
 import { expireHoldOffers } from './holds.service';
 import { finishJobRun, startJobRun } from '../../jobs/job-runs.repo';
 import { activeLeads, claimReminder, releaseReminder } from './overdue.repo';
-import { calendarDay, OVERDUE_JOB, overdueLoans, toMailLine } from './overdue.service';
+import { chapterDay } from '@shared/time/chapter-time';
+import { chapterCalendar, OVERDUE_JOB, overdueLoans, toMailLine } from './overdue.service';
 
 export interface OverdueRunResult {
   summary: string;
@@ -33,13 +34,14 @@ export async function runOverdueReminders(ctx: ServiceContext): Promise<OverdueR
   const counts = { remindersSent: 0, digestsSent: 0, holdOffersExpired: 0 };
   try {
     counts.holdOffersExpired = await expireHoldOffers(ctx);
-    const now = ctx.now();
-    const day = calendarDay(now);
-    const overdue = overdueLoans(ctx);
+    const calendar = chapterCalendar(ctx);
+    const { now } = calendar;
+    const day = chapterDay(now, calendar.zone);
+    const overdue = overdueLoans(ctx, calendar);
     for (const row of overdue) {
       if (!claimReminder(ctx.db, { loanId: row.loanId, day, sentAt: now, sentById: null })) continue;
       try {
-        await ctx.mailer.send(overdueReminderMail(toMailLine(row, now), ctx.publicUrl));
+        await ctx.mailer.send(overdueReminderMail(toMailLine(row, calendar), ctx.publicUrl, calendar));
         counts.remindersSent++;
       } catch (err) {
         releaseReminder(ctx.db, row.loanId, day);
@@ -47,10 +49,10 @@ export async function runOverdueReminders(ctx: ServiceContext): Promise<OverdueR
       }
     }
     if (overdue.length > 0) {
-      const lines = overdue.map((row) => toMailLine(row, now));
+      const lines = overdue.map((row) => toMailLine(row, calendar));
       for (const lead of activeLeads(ctx.db)) {
         try {
-          await ctx.mailer.send(overdueDigestMail(lead.email, lead.name, lines, ctx.publicUrl));
+          await ctx.mailer.send(overdueDigestMail(lead.email, lead.name, lines, ctx.publicUrl, calendar));
           counts.digestsSent++;
         } catch (err) {
           failures.push(`digest to ${lead.email}: ${(err as Error).message}`);

@@ -1,3 +1,4 @@
+import { DAY_MS } from '../time/durations';
 /**
  * Weekly demand per bin: planned assemblies spread over their dates, draw history by week, and the
  * projected on hand. Weeks are UTC calendar weeks starting Monday 00:00; week 0 is the week that
@@ -6,7 +7,7 @@
  */
 
 export const HORIZON_WEEKS = 26;
-export const WEEK_MS = 7 * 24 * 60 * 60 * 1000;
+export const WEEK_MS = 7 * DAY_MS;
 
 /** Monday 00:00 UTC on or before `at`. */
 export function startOfUtcWeek(at: Date): Date {

@@ -1,4 +1,4 @@
-import { tz } from '@date-fns/tz';
+import { TZDate, tz } from '@date-fns/tz';
 import { addDays, differenceInCalendarDays, endOfDay, format, startOfDay } from 'date-fns';
 
 /**
@@ -38,11 +38,22 @@ export const addChapterDays = (at: Date, days: number, zone: string): Date => in
 /** Calendar days from one moment's chapter day to another's: Monday 23:00 → Tuesday 01:00 is 1. */
 export const chapterDaysBetween = (from: Date, to: Date, zone: string): number => differenceInCalendarDays(to, from, zoned(zone));
 
-/** The chapter's midnight starting a calendar day "2026-11-29". */
+/** The chapter's midnight starting a calendar day "2026-11-29" (built on the chapter's wall clock, so any zone's). */
 export function startOfDayNamed(day: string, zone: string): Date {
   const [y, m, d] = day.split('-').map(Number);
-  return instant(startOfDay(new Date(Date.UTC(y!, m! - 1, d, 12)), zoned(zone)));
+  return instant(new TZDate(y!, m! - 1, d!, zone));
 }
+
+/**
+ * The moments from the chapter's midnight starting `from` to the one ending `to` ("2026-11-01" to
+ * "2026-11-30", both whole days), for a range a person typed as days: start included, end excluded.
+ */
+export function chapterDaySpan(from: string, to: string, zone: string): { start: Date; end: Date } {
+  return { start: startOfDayNamed(from, zone), end: instant(startOfDay(addDays(startOfDayNamed(to, zone), 1, zoned(zone)), zoned(zone))) };
+}
+
+/** The hour (0–23) on the chapter's wall clock: the daily jobs run at 07:00 chapter time. */
+export const chapterHour = (at: Date, zone: string): number => Number(format(at, 'H', zoned(zone)));
 
 /**
  * When a loan is due back: by the end of the chapter day `loanDays` days after the day it went
@@ -71,6 +82,9 @@ export function dayInWords(at: Date, zone: string, now: Date = new Date()): stri
   const sameYear = format(at, 'yyyy', zoned(zone)) === format(now, 'yyyy', zoned(zone));
   return format(at, sameYear ? 'EEEE, MMMM d' : 'EEEE, MMMM d, yyyy', zoned(zone));
 }
+
+/** A chapter day as a date in words, for planned days and weeks: "Nov 29, 2026". */
+export const dateInWords = (at: Date, zone: string): string => format(at, 'MMM d, yyyy', zoned(zone));
 
 /** A chapter day in short words for tables: "Sun, Nov 29, 2026". */
 export const shortDayInWords = (at: Date, zone: string): string => format(at, 'EEE, MMM d, yyyy', zoned(zone));

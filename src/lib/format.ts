@@ -1,3 +1,6 @@
+import { dateInWords, dayInWords, dueState, momentInWords, shortDayInWords, startOfDayNamed, type DueState } from '@shared/time/chapter-time';
+import { chapterTimeZone } from './chapter-zone';
+
 /** Money, counts and days as every page shows them; a feature's own format module adds its trade words. */
 const cents = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' });
 /** Unit costs run to a hundredth of a cent (a rivet costs $0.0825). */
@@ -19,14 +22,23 @@ export const formatCount = (n: number): string => count.format(n);
 /** A quantity with its unit: (250, "each") → "250 each". */
 export const formatQuantity = (n: number, unit: string): string => `${formatCount(n)} ${unit}`;
 
-const utcDay = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' });
-const localDay = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric' });
+/** A chapter day "2027-01-15", or the chapter day a timestamp fell on, as a date in words: "Jan 15, 2027". */
+export const formatDay = (iso: string): string => {
+  const zone = chapterTimeZone();
+  return dateInWords(iso.length === 10 ? startOfDayNamed(iso, zone) : new Date(iso), zone);
+};
 
-/** A calendar day "2027-01-15" (or a timestamp, read for its UTC day) as "Jan 15, 2027": days carry no time zone. */
-export const formatDay = (iso: string): string => utcDay.format(new Date(iso.length === 10 ? `${iso}T00:00:00Z` : iso));
+/** A moment as the chapter day it fell on, in short words: "Tue, Dec 1, 2026". */
+export const formatDate = (iso: string | Date): string => shortDayInWords(new Date(iso), chapterTimeZone());
 
-/** A moment (ISO timestamp) as the day it fell on where the viewer is: "Jan 15, 2027". */
-export const formatDate = (iso: string): string => localDay.format(new Date(iso));
+/** A moment on the chapter's clock: "Dec 1, 2026, 6:05 PM". */
+export const formatDateTime = (iso: string | Date): string => momentInWords(new Date(iso), chapterTimeZone());
+
+/** A due day in words on the chapter's calendar: "Tuesday, December 8" (with the year when not this year). */
+export const formatDueDay = (iso: string | Date, now: Date = new Date()): string => dayInWords(new Date(iso), chapterTimeZone(), now);
+
+/** "due today", "due in 3 days", "2 days late": chapter days, by the one rule the Overdue page and reminders use. */
+export const dueStateOf = (dueAt: string | Date, now: Date = new Date()): DueState => dueState(new Date(dueAt), now, chapterTimeZone());
 
 const relative = new Intl.RelativeTimeFormat('en-US', { numeric: 'auto' });
 

@@ -195,6 +195,7 @@ describe('holds', () => {
     const mail = t.lastMailTo('qm@example.org');
     expect(mail?.subject).toMatch(/T-0001 Torque wrench is back and held for you/);
     expect(mail?.links[0]).toBe('http://gripline.test/tools/T-0001');
+    expect(mail?.text.replace(/\s+/g, ' ')).toContain('held for you until Dec 3, 2026, 12:00 PM. After that'); // 48 hours, on the chapter's clock
     const refused = await post(member, '/api/tools/T-0001/checkout');
     expect(refused.body.error.code).toBe('TOOL_HELD');
     expect((await post(qm, '/api/tools/T-0001/checkout')).status).toBe(201);

@@ -7,6 +7,7 @@ import { HttpError } from '../../lib/http-error';
 import { activeAlertBinIds, findAlert, insertOpenAlerts, listAlerts, recentDismissals, updateAlertFrom, type AlertWithBin, type NewAlertRow } from './alerts.repo';
 import { binBrief } from './bin-brief';
 import { forecastBins } from './forecast.service';
+import { DAY_MS } from '@shared/time/durations';
 
 const day = (d: Date) => d.toISOString().slice(0, 10);
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
@@ -37,7 +38,7 @@ export function toAlertDto({ alert: a, bin, orderedByName }: AlertWithBin): Aler
 const lastRefresh = new WeakMap<Database, number>();
 export const REFRESH_AFTER_MS = 5 * 60_000;
 /** A dismissed alert keeps its bin quiet this long, unless on hand falls below what it was raised at. */
-export const DISMISSAL_QUIET_MS = 14 * 24 * 60 * 60_000;
+export const DISMISSAL_QUIET_MS = 14 * DAY_MS;
 
 /**
  * Raises an open alert for every bin whose forecast calls for one and that has no open or ordered

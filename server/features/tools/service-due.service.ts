@@ -11,8 +11,8 @@ import type { ServiceContext } from '../../context';
 import { listServiceCandidates } from './service-due.repo';
 import { serviceDueAt, toolIdentity } from './tool-dto';
 import type { ToolRow } from './tools.repo';
+import { DAY_MS } from '@shared/time/durations';
 
-const DAY_MS = 24 * 60 * 60 * 1000;
 
 /** Whole days left, counted down; once the date has passed, whole days overdue as a negative, at least 1. */
 function wholeDaysUntil(dueAt: Date, now: Date): number {

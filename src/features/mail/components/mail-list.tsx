@@ -1,7 +1,7 @@
 import type { CaughtMail } from '@shared/schemas/mail';
 import { Code } from '@/components/ui/page';
+import { formatDateTime } from '@/lib/format';
 
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 const LINK_WORDS: Record<string, string> = {
   invite: 'Open the invitation link',
@@ -23,7 +23,7 @@ export function MailList({ messages }: { messages: CaughtMail[] }) {
             <summary className="flex min-h-11 cursor-pointer list-none flex-col gap-0.5">
               <span className="font-semibold">{m.subject}</span>
               <span className="text-sm text-steel">
-                to <Code>{m.to.join(', ')}</Code> · {dateFormat.format(new Date(m.receivedAt))}
+                to <Code>{m.to.join(', ')}</Code> · {formatDateTime(m.receivedAt)}
               </span>
               <span className="text-sm font-medium underline underline-offset-4">Show the whole message</span>
             </summary>

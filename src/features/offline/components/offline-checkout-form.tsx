@@ -1,17 +1,17 @@
 import { useState } from 'react';
 import type { CatalogueTool } from '@shared/schemas/offline';
+import { loanDueAt } from '@shared/time/chapter-time';
 import { Button } from '@/components/ui/button';
-import { formatDate } from '@/lib/format';
+import { chapterTimeZone } from '@/lib/chapter-zone';
+import { formatDueDay } from '@/lib/format';
 import { queueFromCopy } from '../api/queue-from-copy';
 import type { StoredCatalogue } from '../db';
-
-const DAY_MS = 24 * 60 * 60 * 1000;
 
 /** Check out from the copy: the loan period's due date, the accessories to take along. */
 export function OfflineCheckoutForm({ copy, tool }: { copy: StoredCatalogue; tool: CatalogueTool }) {
   const [busy, setBusy] = useState(false);
-  // The loan period counts from now, when the member takes it off the shelf.
-  const [due] = useState(() => new Date(Date.now() + tool.loanDays * DAY_MS).toISOString());
+  // The loan period counts from now, when the member takes it off the shelf, by the server's one rule.
+  const [due] = useState(() => loanDueAt(new Date(), tool.loanDays, chapterTimeZone()));
   const submit = async () => {
     setBusy(true);
     try {
@@ -23,7 +23,7 @@ export function OfflineCheckoutForm({ copy, tool }: { copy: StoredCatalogue; too
   return (
     <div className="flex flex-col gap-3">
       <p>
-        Bring it back by <strong>{formatDate(due)}</strong> ({tool.loanDays} days).
+        Bring it back by <strong>{formatDueDay(due)}</strong> ({tool.loanDays} days).
       </p>
       {tool.accessories.length > 0 && <p>Take these with it: {tool.accessories.join(', ')}.</p>}
       <Button onClick={() => void submit()} busy={busy} className="w-full text-lg">

@@ -6,7 +6,7 @@ import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { messageOf } from '@/lib/errors';
 import { useCheckOut } from '../api/tool-actions';
-import { shortDate } from '../due-words';
+import { formatDueDay } from '@/lib/format';
 
 const toDateInput = (iso: string) => iso.slice(0, 10);
 
@@ -25,7 +25,7 @@ export function CheckoutForm({ tool, onDone }: { tool: ToolForYou; onDone?: () =
       { code: tool.code, body: dueAt ? { dueAt } : {} },
       {
         onSuccess: (loan) => {
-          toast.success(`${tool.code} is yours until ${shortDate.format(new Date(loan.dueAt))}.`);
+          toast.success(`${tool.code} is yours until ${formatDueDay(loan.dueAt)}.`);
           onDone?.();
         },
         onError: (err) => setProblem(messageOf(err)),

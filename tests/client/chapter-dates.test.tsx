@@ -1,11 +1,14 @@
 import { screen } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { CatalogueTool } from '@shared/schemas/offline';
+import type { ToolForYou } from '@shared/schemas/tools';
 import { OfflineCheckoutForm } from '@/features/offline/components/offline-checkout-form';
+import { CheckoutForm } from '@/features/tools/components/checkout-form';
 import type { StoredCatalogue } from '@/features/offline/db';
 import { chapterTimeZone, setChapterTimeZone } from '@/lib/chapter-zone';
 import { dueStateOf, formatDate, formatDateTime, formatDay, formatDueDay } from '@/lib/format';
-import { renderWithProviders } from '../helpers/render';
+import { fakeFetch, renderWithProviders } from '../helpers/render';
 
 // The test runs in UTC; the chapter is in Chicago (UTC−6 in December). Tuesday, December 1, 10:00 there.
 const now = new Date('2026-12-01T16:00:00Z');
@@ -57,5 +60,30 @@ describe('OfflineCheckoutForm', () => {
     const tool = { code: 'T-0007', name: 'Air drill', loanDays: 7, accessories: [] } as unknown as CatalogueTool;
     renderWithProviders(<OfflineCheckoutForm copy={{} as StoredCatalogue} tool={tool} />);
     expect(screen.getByText('Tuesday, December 8')).toBeTruthy();
+  });
+});
+
+describe('CheckoutForm', () => {
+  const tool = (defaultDueAt: string) => ({ code: 'T-0007', accessories: [], forYou: { defaultDueAt } }) as unknown as ToolForYou;
+  const csrf = { status: 200, body: { token: 'csrf-token' } };
+
+  it('offers the due day of the chapter, not the UTC date of the due moment, and sends no date when it is kept', async () => {
+    setChapterTimeZone('America/Chicago');
+    const calls = fakeFetch((call) => (call.path === '/api/auth/csrf' ? csrf : call.path.endsWith('/checkout') ? { status: 201, body: { id: 1, code: 'T-0007', dueAt: '2026-12-09T05:59:59.999Z', accessories: [] } } : undefined));
+    renderWithProviders(<CheckoutForm tool={tool('2026-12-09T05:59:59.999Z')} />); // the end of Tuesday, December 8 in Chicago
+    expect((screen.getByLabelText('Bring it back by') as HTMLInputElement).value).toBe('2026-12-08');
+    await userEvent.click(screen.getByRole('button', { name: 'Check out T-0007' }));
+    expect(calls.find((c) => c.path.endsWith('/checkout'))?.body).toEqual({});
+  });
+
+  it('makes a chosen day due at the end of that chapter day', async () => {
+    setChapterTimeZone('America/Chicago');
+    const calls = fakeFetch((call) => (call.path === '/api/auth/csrf' ? csrf : call.path.endsWith('/checkout') ? { status: 201, body: { id: 1, code: 'T-0007', dueAt: '2026-12-11T05:59:59.999Z', accessories: [] } } : undefined));
+    renderWithProviders(<CheckoutForm tool={tool('2026-12-09T05:59:59.999Z')} />);
+    const field = screen.getByLabelText('Bring it back by');
+    await userEvent.clear(field);
+    await userEvent.type(field, '2026-12-10');
+    await userEvent.click(screen.getByRole('button', { name: 'Check out T-0007' }));
+    expect(calls.find((c) => c.path.endsWith('/checkout'))?.body).toEqual({ dueAt: '2026-12-11T05:59:59.999Z' });
   });
 });

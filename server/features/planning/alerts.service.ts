@@ -1,15 +1,18 @@
 import type { Alert, AlertState, MarkOrderedBody } from '@shared/schemas/forecast';
+import { chapterDay } from '@shared/time/chapter-time';
+import { DAY_MS } from '@shared/time/durations';
 import type { ServiceContext } from '../../context';
 import type { Database } from '../../db/client';
 import type { BinRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { activeAlertBinIds, findAlert, insertOpenAlerts, listAlerts, recentDismissals, updateAlertFrom, type AlertWithBin, type NewAlertRow } from './alerts.repo';
 import { binBrief } from './bin-brief';
 import { forecastBins } from './forecast.service';
-import { DAY_MS } from '@shared/time/durations';
 
-const day = (d: Date) => d.toISOString().slice(0, 10);
+/** An expected day is stored by its name, at the UTC midnight of "2026-12-09". */
+const dayName = (d: Date) => chapterDay(d, 'UTC');
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
 export function toAlertDto({ alert: a, bin, orderedByName }: AlertWithBin): Alert {
@@ -27,7 +30,7 @@ export function toAlertDto({ alert: a, bin, orderedByName }: AlertWithBin): Aler
     orderedBy: a.orderedById !== null ? { id: a.orderedById, name: orderedByName ?? '' } : null,
     orderedQty: a.orderedQty,
     // The day the quartermaster was told, as entered (YYYY-MM-DD).
-    expectedAt: a.expectedAt ? day(a.expectedAt) : null,
+    expectedAt: a.expectedAt ? dayName(a.expectedAt) : null,
     closedAt: iso(a.closedAt),
     dismissedAt: iso(a.dismissedAt),
     dismissReason: a.dismissReason,
@@ -99,7 +102,7 @@ const STATE_WORDS: Record<AlertState, string> = { open: 'still to order', ordere
 export function markOrdered(ctx: ServiceContext, actor: UserRow, id: number, body: MarkOrderedBody): Alert {
   const found = alertOrThrow(ctx, id);
   const now = ctx.now();
-  if (body.expectedAt < day(now)) {
+  if (body.expectedAt < chapterDay(now, readChapterTimeZone(ctx.db))) {
     const message = `The expected day (${body.expectedAt}) is in the past. Enter the day the order should arrive.`;
     throw new HttpError(400, 'VALIDATION_FAILED', message, [{ path: 'expectedAt', message }]);
   }

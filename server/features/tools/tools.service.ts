@@ -1,5 +1,5 @@
 import { hasRole } from '@shared/roles';
-import { loanDueAt } from '@shared/time/chapter-time';
+import { dayInWords, loanDueAt } from '@shared/time/chapter-time';
 import type { CreateToolInput, Tool, ToolAction, ToolForYou, ToolList, ToolListQuery, UpdateToolBody } from '@shared/schemas/tools';
 import { createToolBodySchema } from '@shared/schemas/tools';
 import type { ServiceContext } from '../../context';
@@ -55,7 +55,7 @@ export function getToolForYou(ctx: ServiceContext, user: UserRow, code: string):
     case 'on_loan':
       if (mine || hasRole(user.role, 'quartermaster')) actions.push('return');
       if (!mine) {
-        reason = `On loan to ${tool.loan?.holder.name ?? 'someone'} until ${tool.loan?.dueAt.slice(0, 10) ?? 'its return'}.`;
+        reason = `On loan to ${tool.loan?.holder.name ?? 'someone'} until ${tool.loan ? dayInWords(new Date(tool.loan.dueAt), readChapterTimeZone(ctx.db), ctx.now()) : 'its return'}.`;
         if (!myHold) actions.push('place_hold');
       }
       break;

@@ -89,10 +89,10 @@ describe('TimeZoneCard', () => {
     );
     renderWithProviders(<TimeZoneCard timeZone="America/Chicago" />);
     expect(screen.getByText('America/Chicago', { selector: 'strong' })).toBeTruthy();
-    const select = screen.getByLabelText("The chapter's time zone") as HTMLSelectElement;
+    const select = screen.getByLabelText<HTMLSelectElement>("The chapter's time zone");
     expect(select.value).toBe('America/Chicago');
     expect([...select.options].map((o) => o.value)).toContain('Pacific/Auckland');
-    expect((screen.getByRole('button', { name: 'Save time zone' }) as HTMLButtonElement).disabled).toBe(true);
+    expect(screen.getByRole<HTMLButtonElement>('button', { name: 'Save time zone' }).disabled).toBe(true);
     await userEvent.selectOptions(select, 'Europe/Oslo');
     await userEvent.click(screen.getByRole('button', { name: 'Save time zone' }));
     await waitFor(() => expect(calls.find((c) => c.method === 'PATCH')).toMatchObject({ path: '/api/settings/crib', body: { timeZone: 'Europe/Oslo' } }));

@@ -86,6 +86,9 @@ export function dayInWords(at: Date, zone: string, now: Date = new Date()): stri
 /** A chapter day as a date in words, for planned days and weeks: "Nov 29, 2026". */
 export const dateInWords = (at: Date, zone: string): string => format(at, 'MMM d, yyyy', zoned(zone));
 
+/** A chapter day as a chart axis names it: "Nov 29". */
+export const monthDayInWords = (at: Date, zone: string): string => format(at, 'MMM d', zoned(zone));
+
 /** A chapter day in short words for tables: "Sun, Nov 29, 2026". */
 export const shortDayInWords = (at: Date, zone: string): string => format(at, 'EEE, MMM d, yyyy', zoned(zone));
 

@@ -8,6 +8,7 @@ import {
   dateInWords,
   daysLate,
   dayInWords,
+  monthDayInWords,
   dueState,
   endOfChapterDay,
   isTimeZone,
@@ -90,6 +91,7 @@ describe('loans by the chapter day', () => {
     expect(dayInWords(new Date('2025-12-05T18:00:00Z'), CHICAGO, now)).toBe('Friday, December 5, 2025');
     expect(dateInWords(new Date('2026-11-29T05:59:59.999Z'), CHICAGO)).toBe('Nov 28, 2026');
     expect(dateInWords(new Date('2026-11-29T05:59:59.999Z'), AUCKLAND)).toBe('Nov 29, 2026');
+    expect(monthDayInWords(new Date('2026-11-29T05:59:59.999Z'), CHICAGO)).toBe('Nov 28');
   });
 
   it('spans typed days from the chapter midnight that starts the first to the one that ends the last', () => {

@@ -7,17 +7,16 @@ import {
   type ServiceDueList,
   type ServiceUrgency,
 } from '@shared/schemas/overdue';
+import { chapterDaysBetween, daysLate } from '@shared/time/chapter-time';
 import type { ServiceContext } from '../../context';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { listServiceCandidates } from './service-due.repo';
 import { serviceDueAt, toolIdentity } from './tool-dto';
 import type { ToolRow } from './tools.repo';
-import { DAY_MS } from '@shared/time/durations';
 
-
-/** Whole days left, counted down; once the date has passed, whole days overdue as a negative, at least 1. */
-function wholeDaysUntil(dueAt: Date, now: Date): number {
-  const ms = dueAt.getTime() - now.getTime();
-  return ms > 0 ? Math.floor(ms / DAY_MS) : -Math.max(1, Math.floor(-ms / DAY_MS));
+/** Chapter days left (0: due today); once the moment has passed, chapter days overdue as a negative, at least 1. */
+function chapterDaysUntil(dueAt: Date, now: Date, zone: string): number {
+  return dueAt.getTime() > now.getTime() ? chapterDaysBetween(now, dueAt, zone) : -daysLate(dueAt, now, zone);
 }
 
 function urgencyOf(row: ToolRow, daysUntilDue: number | null): ServiceUrgency | undefined {
@@ -27,9 +26,9 @@ function urgencyOf(row: ToolRow, daysUntilDue: number | null): ServiceUrgency | 
   return undefined;
 }
 
-function toItem(row: ToolRow, now: Date): ServiceDueItem | undefined {
+function toItem(row: ToolRow, now: Date, zone: string): ServiceDueItem | undefined {
   const dueAt = serviceDueAt(row);
-  const daysUntilDue = dueAt ? wholeDaysUntil(dueAt, now) : null;
+  const daysUntilDue = dueAt ? chapterDaysUntil(dueAt, now, zone) : null;
   const urgency = urgencyOf(row, daysUntilDue);
   if (!urgency) return undefined;
   const kind = serviceKindOf(row.category);
@@ -57,9 +56,10 @@ function toItem(row: ToolRow, now: Date): ServiceDueItem | undefined {
  */
 export function listServiceDue(ctx: ServiceContext): ServiceDueList {
   const now = ctx.now();
+  const zone = readChapterTimeZone(ctx.db);
   const rank = (u: ServiceUrgency) => SERVICE_URGENCIES.indexOf(u);
   const data = listServiceCandidates(ctx.db)
-    .map((row) => toItem(row, now))
+    .map((row) => toItem(row, now, zone))
     .filter((item): item is ServiceDueItem => item !== undefined)
     .sort((a, b) => rank(a.urgency) - rank(b.urgency) || (a.daysUntilDue ?? Infinity) - (b.daysUntilDue ?? Infinity) || a.code.localeCompare(b.code));
   return { data, meta: { dueWithinDays: SERVICE_DUE_WITHIN_DAYS } };

@@ -1,5 +1,5 @@
 import { TZDate, tz } from '@date-fns/tz';
-import { addDays, differenceInCalendarDays, endOfDay, format, startOfDay } from 'date-fns';
+import { addDays, addMonths, differenceInCalendarDays, endOfDay, format, startOfDay, startOfMonth } from 'date-fns';
 
 /**
  * The chapter's calendar: every "day" Gripline speaks of (a due date, days late, today's digest)
@@ -25,6 +25,15 @@ export function isTimeZone(zone: string): boolean {
 
 /** The chapter day a moment falls on, as "2026-11-29". */
 export const chapterDay = (at: Date, zone: string): string => format(at, 'yyyy-MM-dd', zoned(zone));
+
+/** The chapter month a moment falls in, as "2026-11". */
+export const chapterMonth = (at: Date, zone: string): string => format(at, 'yyyy-MM', zoned(zone));
+
+/** The first instants of the last `count` chapter months, oldest first, up to and including the month of `now`. */
+export function chapterMonthStarts(now: Date, count: number, zone: string): Date[] {
+  const current = startOfMonth(now, zoned(zone));
+  return Array.from({ length: count }, (_, i) => instant(startOfMonth(addMonths(current, i - (count - 1), zoned(zone)), zoned(zone))));
+}
 
 /** The first instant of the chapter day a moment falls on. */
 export const startOfChapterDay = (at: Date, zone: string): Date => instant(startOfDay(at, zoned(zone)));

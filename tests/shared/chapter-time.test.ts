@@ -4,6 +4,8 @@ import {
   chapterDay,
   chapterDaySpan,
   chapterHour,
+  chapterMonth,
+  chapterMonthStarts,
   chapterDaysBetween,
   dateInWords,
   daysLate,
@@ -106,5 +108,12 @@ describe('loans by the chapter day', () => {
     expect(chapterHour(new Date('2026-12-01T13:00:00Z'), CHICAGO)).toBe(7);
     expect(chapterHour(new Date('2026-12-01T13:00:00Z'), 'UTC')).toBe(13);
     expect(chapterHour(new Date('2026-06-01T12:00:00Z'), CHICAGO)).toBe(7); // daylight time, UTC−5
+  });
+
+  it('puts a moment in the chapter month, and lists the chapter months up to now', () => {
+    const evening = new Date('2026-12-01T02:00:00Z'); // November 30, 20:00 in Chicago
+    expect(chapterMonth(evening, CHICAGO)).toBe('2026-11');
+    expect(chapterMonth(evening, 'UTC')).toBe('2026-12');
+    expect(chapterMonthStarts(evening, 3, CHICAGO).map((d) => d.toISOString())).toEqual(['2026-09-01T05:00:00.000Z', '2026-10-01T05:00:00.000Z', '2026-11-01T05:00:00.000Z']);
   });
 });

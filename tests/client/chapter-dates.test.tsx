@@ -71,7 +71,7 @@ describe('CheckoutForm', () => {
     setChapterTimeZone('America/Chicago');
     const calls = fakeFetch((call) => (call.path === '/api/auth/csrf' ? csrf : call.path.endsWith('/checkout') ? { status: 201, body: { id: 1, code: 'T-0007', dueAt: '2026-12-09T05:59:59.999Z', accessories: [] } } : undefined));
     renderWithProviders(<CheckoutForm tool={tool('2026-12-09T05:59:59.999Z')} />); // the end of Tuesday, December 8 in Chicago
-    expect((screen.getByLabelText('Bring it back by') as HTMLInputElement).value).toBe('2026-12-08');
+    expect(screen.getByLabelText<HTMLInputElement>('Bring it back by').value).toBe('2026-12-08');
     await userEvent.click(screen.getByRole('button', { name: 'Check out T-0007' }));
     expect(calls.find((c) => c.path.endsWith('/checkout'))?.body).toEqual({});
   });

@@ -15,9 +15,9 @@ afterEach(() => t.close());
 describe('atChapterHour', () => {
   it('runs a daily job in the hour it is due on the chapter’s clock, whatever the server’s zone, and follows a new zone at once', async () => {
     const runs: string[] = [];
-    const tick = atChapterHour(ctx, 7, async () => {
+    const tick = atChapterHour(ctx, 7, () => {
       runs.push(t.clock.now.toISOString());
-      return 'ran';
+      return Promise.resolve('ran');
     });
     writeChapterTimeZone(t.db, 'America/Denver'); // UTC−7 in December
     t.clock.now = new Date('2026-12-01T07:00:00Z'); // 00:00 in Denver

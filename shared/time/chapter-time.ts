@@ -1,5 +1,8 @@
 import { TZDate, tz } from '@date-fns/tz';
-import { addDays, addMonths, differenceInCalendarDays, endOfDay, format, startOfDay, startOfMonth } from 'date-fns';
+import { addDays, addMonths, differenceInCalendarDays, endOfDay, startOfDay, startOfMonth } from 'date-fns';
+import { daysLateWords } from './words';
+
+export * from './words';
 
 /**
  * The chapter's calendar: every "day" Gripline speaks of (a due date, days late, today's digest)
@@ -9,25 +12,6 @@ import { addDays, addMonths, differenceInCalendarDays, endOfDay, format, startOf
 
 const instant = (d: Date): Date => new Date(d.getTime());
 const zoned = (zone: string) => ({ in: tz(zone) });
-
-/** The zone the server runs in, the chapter's default until a lead chooses one. */
-export const serverTimeZone = (): string => Intl.DateTimeFormat().resolvedOptions().timeZone;
-
-/** Whether the runtime knows this IANA zone name ("America/Denver" yes, "Mars/Base" no). */
-export function isTimeZone(zone: string): boolean {
-  try {
-    new Intl.DateTimeFormat('en-US', { timeZone: zone });
-    return zone.length > 0;
-  } catch {
-    return false;
-  }
-}
-
-/** The chapter day a moment falls on, as "2026-11-29". */
-export const chapterDay = (at: Date, zone: string): string => format(at, 'yyyy-MM-dd', zoned(zone));
-
-/** The chapter month a moment falls in, as "2026-11". */
-export const chapterMonth = (at: Date, zone: string): string => format(at, 'yyyy-MM', zoned(zone));
 
 /** The first instants of the last `count` chapter months, oldest first, up to and including the month of `now`. */
 export function chapterMonthStarts(now: Date, count: number, zone: string): Date[] {
@@ -61,9 +45,6 @@ export function chapterDaySpan(from: string, to: string, zone: string): { start:
   return { start: startOfDayNamed(from, zone), end: instant(startOfDay(addDays(startOfDayNamed(to, zone), 1, zoned(zone)), zoned(zone))) };
 }
 
-/** The hour (0–23) on the chapter's wall clock: the daily jobs run at 07:00 chapter time. */
-export const chapterHour = (at: Date, zone: string): number => Number(format(at, 'H', zoned(zone)));
-
 /**
  * When a loan is due back: by the end of the chapter day `loanDays` days after the day it went
  * out. A week's loan taken on a Saturday morning is due by the end of the next Saturday.
@@ -76,33 +57,6 @@ export const loanDueAt = (takenAt: Date, loanDays: number, zone: string): Date =
  * past due. The one rule for the Overdue page, the reminders, the badges and refusals.
  */
 export const daysLate = (dueAt: Date, now: Date, zone: string): number => Math.max(1, chapterDaysBetween(dueAt, now, zone));
-
-/** "1 day", "3 days". */
-export const dayCount = (n: number): string => `${n} ${Math.abs(n) === 1 ? 'day' : 'days'}`;
-
-/** "1 day late", "5 days late". */
-export const daysLateWords = (days: number): string => `${dayCount(days)} late`;
-
-/**
- * A chapter day in words: "Sunday, November 29", with the year when it is not this year
- * ("Friday, December 4, 2025").
- */
-export function dayInWords(at: Date, zone: string, now: Date = new Date()): string {
-  const sameYear = format(at, 'yyyy', zoned(zone)) === format(now, 'yyyy', zoned(zone));
-  return format(at, sameYear ? 'EEEE, MMMM d' : 'EEEE, MMMM d, yyyy', zoned(zone));
-}
-
-/** A chapter day as a date in words, for planned days and weeks: "Nov 29, 2026". */
-export const dateInWords = (at: Date, zone: string): string => format(at, 'MMM d, yyyy', zoned(zone));
-
-/** A chapter day as a chart axis names it: "Nov 29". */
-export const monthDayInWords = (at: Date, zone: string): string => format(at, 'MMM d', zoned(zone));
-
-/** A chapter day in short words for tables: "Sun, Nov 29, 2026". */
-export const shortDayInWords = (at: Date, zone: string): string => format(at, 'EEE, MMM d, yyyy', zoned(zone));
-
-/** A moment on the chapter's clock: "Nov 29, 2026, 6:05 PM". */
-export const momentInWords = (at: Date, zone: string): string => format(at, 'MMM d, yyyy, h:mm a', zoned(zone));
 
 export interface DueState {
   /** "due today", "due tomorrow", "due in 3 days", "2 days late". */

@@ -1,4 +1,4 @@
-import { isTimeZone } from '@shared/time/chapter-time';
+import { isTimeZone } from '@shared/time/words';
 
 /**
  * The chapter's time zone, in which the client writes every day and moment. The server says it at

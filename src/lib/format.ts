@@ -1,4 +1,5 @@
-import { dateInWords, dayInWords, dueState, momentInWords, shortDayInWords, startOfDayNamed, type DueState } from '@shared/time/chapter-time';
+// The dependency-free half of shared/time: these formatters are on the pages every member opens first.
+import { dateInWords, dayInWords, momentInWords, shortDayInWords } from '@shared/time/words';
 import { chapterTimeZone } from './chapter-zone';
 
 /** Money, counts and days as every page shows them; a feature's own format module adds its trade words. */
@@ -23,10 +24,8 @@ export const formatCount = (n: number): string => count.format(n);
 export const formatQuantity = (n: number, unit: string): string => `${formatCount(n)} ${unit}`;
 
 /** A chapter day "2027-01-15", or the chapter day a timestamp fell on, as a date in words: "Jan 15, 2027". */
-export const formatDay = (iso: string): string => {
-  const zone = chapterTimeZone();
-  return dateInWords(iso.length === 10 ? startOfDayNamed(iso, zone) : new Date(iso), zone);
-};
+export const formatDay = (iso: string): string =>
+  iso.length === 10 ? dateInWords(new Date(`${iso}T00:00:00Z`), 'UTC') : dateInWords(new Date(iso), chapterTimeZone());
 
 /** A moment as the chapter day it fell on, in short words: "Tue, Dec 1, 2026". */
 export const formatDate = (iso: string | Date): string => shortDayInWords(new Date(iso), chapterTimeZone());
@@ -36,9 +35,6 @@ export const formatDateTime = (iso: string | Date): string => momentInWords(new 
 
 /** A due day in words on the chapter's calendar: "Tuesday, December 8" (with the year when not this year). */
 export const formatDueDay = (iso: string | Date, now: Date = new Date()): string => dayInWords(new Date(iso), chapterTimeZone(), now);
-
-/** "due today", "due in 3 days", "2 days late": chapter days, by the one rule the Overdue page and reminders use. */
-export const dueStateOf = (dueAt: string | Date, now: Date = new Date()): DueState => dueState(new Date(dueAt), now, chapterTimeZone());
 
 const relative = new Intl.RelativeTimeFormat('en-US', { numeric: 'auto' });
 

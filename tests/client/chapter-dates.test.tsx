@@ -7,7 +7,8 @@ import { OfflineCheckoutForm } from '@/features/offline/components/offline-check
 import { CheckoutForm } from '@/features/tools/components/checkout-form';
 import type { StoredCatalogue } from '@/features/offline/db';
 import { chapterTimeZone, setChapterTimeZone } from '@/lib/chapter-zone';
-import { dueStateOf, formatDate, formatDateTime, formatDay, formatDueDay } from '@/lib/format';
+import { dueStateOf } from '@/lib/due-state';
+import { formatDate, formatDateTime, formatDay, formatDueDay } from '@/lib/format';
 import { fakeFetch, renderWithProviders } from '../helpers/render';
 
 // The test runs in UTC; the chapter is in Chicago (UTC−6 in December). Tuesday, December 1, 10:00 there.

@@ -1,4 +1,4 @@
-import { dueStateOf } from '@/lib/format';
+import { dueStateOf } from '@/lib/due-state';
 
 export function DueBadge({ dueAt, now }: { dueAt: string; now?: Date }) {
   const due = dueStateOf(dueAt, now);

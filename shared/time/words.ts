@@ -69,6 +69,12 @@ export const dateInWords = (at: Date, zone: string): string => formatter(zone, '
 /** A chapter day as a chart axis names it: "Nov 29". */
 export const monthDayInWords = (at: Date, zone: string): string => formatter(zone, 'month-day', { month: 'short', day: 'numeric' }).format(at);
 
+/** A chapter month in words: "November 2026"; `short` for chart axes: "Nov 26". */
+export const monthInWords = (at: Date, zone: string, short = false): string =>
+  short
+    ? formatter(zone, 'month-short', { month: 'short', year: '2-digit' }).format(at)
+    : formatter(zone, 'month', { month: 'long', year: 'numeric' }).format(at);
+
 /** A chapter day in short words for tables: "Sun, Nov 29, 2026". */
 export const shortDayInWords = (at: Date, zone: string): string =>
   formatter(zone, 'short-day', { weekday: 'short', month: 'short', day: 'numeric', year: 'numeric' }).format(at);

@@ -11,6 +11,9 @@ import {
   daysLate,
   dayInWords,
   monthDayInWords,
+  monthInWords,
+  momentInWords,
+  shortDayInWords,
   dueState,
   endOfChapterDay,
   isTimeZone,
@@ -94,6 +97,10 @@ describe('loans by the chapter day', () => {
     expect(dateInWords(new Date('2026-11-29T05:59:59.999Z'), CHICAGO)).toBe('Nov 28, 2026');
     expect(dateInWords(new Date('2026-11-29T05:59:59.999Z'), AUCKLAND)).toBe('Nov 29, 2026');
     expect(monthDayInWords(new Date('2026-11-29T05:59:59.999Z'), CHICAGO)).toBe('Nov 28');
+    expect(monthInWords(new Date('2026-12-01T02:00:00Z'), CHICAGO)).toBe('November 2026');
+    expect(monthInWords(new Date('2026-12-01T02:00:00Z'), 'UTC', true)).toBe('Dec 26');
+    expect(momentInWords(new Date('2026-12-02T03:05:00Z'), CHICAGO)).toBe('Dec 1, 2026, 9:05 PM');
+    expect(shortDayInWords(new Date('2026-12-02T03:05:00Z'), CHICAGO)).toBe('Tue, Dec 1, 2026');
   });
 
   it('spans typed days from the chapter midnight that starts the first to the one that ends the last', () => {

@@ -1,3 +1,4 @@
+import { DAY_MS } from '@shared/time/durations';
 /** Backups are named by the server's local date and time to the minute: gripline-2026-12-03T0230.db. */
 const PREFIX = 'gripline-';
 const NAME = /^gripline-(\d{4})-(\d{2})-(\d{2})T(\d{2})(\d{2})\.db$/;
@@ -36,8 +37,8 @@ export function parseBackupName(name: string): BackupName | undefined {
 /** ISO week of a calendar day given as UTC midnight: the week belongs to the year of its Thursday. */
 function isoWeek(day: Date): string {
   const weekday = day.getUTCDay() || 7;
-  const thursday = new Date(day.getTime() + (4 - weekday) * 86_400_000);
+  const thursday = new Date(day.getTime() + (4 - weekday) * DAY_MS);
   const year = thursday.getUTCFullYear();
-  const week = 1 + Math.floor((thursday.getTime() - Date.UTC(year, 0, 1)) / (7 * 86_400_000));
+  const week = 1 + Math.floor((thursday.getTime() - Date.UTC(year, 0, 1)) / (7 * DAY_MS));
   return `${year}-W${pad(week)}`;
 }

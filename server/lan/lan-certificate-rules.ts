@@ -1,7 +1,8 @@
 import type { KeyObject, X509Certificate } from 'node:crypto';
+import { DAY_MS } from '@shared/time/durations';
 
 /** A certificate is made again this long before it runs out, so a phone never meets an expired one. */
-export const RENEW_BEFORE_MS = 30 * 24 * 60 * 60_000;
+export const RENEW_BEFORE_MS = 30 * DAY_MS;
 
 export interface WantedNames {
   hostNames: string[];

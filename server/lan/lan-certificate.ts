@@ -3,8 +3,8 @@ import { chmodSync, existsSync, mkdirSync, readFileSync, writeFileSync } from 'n
 import { join } from 'node:path';
 import { generate } from 'selfsigned';
 import { authorityRenewalReason, serverRenewalReason, type StoredCertificate, type WantedNames } from './lan-certificate-rules';
+import { DAY_MS } from '@shared/time/durations';
 
-const DAY_MS = 24 * 60 * 60_000;
 const AUTHORITY_DAYS = 10 * 365;
 /** Apple devices refuse server certificates valid for more than 825 days. */
 const SERVER_DAYS = 365;

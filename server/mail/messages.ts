@@ -1,6 +1,13 @@
 import type { Role } from '@shared/roles';
 import { ROLE_LABELS } from '@shared/roles';
+import { dayInWords, daysLateWords, momentInWords } from '@shared/time/chapter-time';
 import type { OutgoingMail } from './mailer';
+
+/** The chapter's calendar a message is written in: its time zone and the moment it is written. */
+export interface MailCalendar {
+  zone: string;
+  now: Date;
+}
 
 export function invitationMail(to: string, role: Role, invitedBy: string, link: string): OutgoingMail {
   return {
@@ -36,7 +43,14 @@ export function passwordResetMail(to: string, name: string, link: string): Outgo
   };
 }
 
-export function holdOfferedMail(to: string, name: string, tool: { code: string; name: string; location: string }, until: Date, link: string): OutgoingMail {
+export function holdOfferedMail(
+  to: string,
+  name: string,
+  tool: { code: string; name: string; location: string },
+  until: Date,
+  link: string,
+  calendar: MailCalendar,
+): OutgoingMail {
   return {
     to,
     subject: `${tool.code} ${tool.name} is back and held for you`,
@@ -44,7 +58,7 @@ export function holdOfferedMail(to: string, name: string, tool: { code: string; 
       `Hello ${name},`,
       ``,
       `${tool.name} (${tool.code}) has come back to the crib and is held for you until`,
-      `${until.toISOString().slice(0, 16).replace('T', ' ')} UTC. After that it goes to the next person waiting.`,
+      `${momentInWords(until, calendar.zone)}. After that it goes to the next person waiting.`,
       tool.location ? `It lives at: ${tool.location}.` : '',
       ``,
       `Scan its label or open it here to check it out:`,
@@ -80,24 +94,23 @@ export interface OverdueMailLine {
   daysLate: number;
 }
 
-const dayWords = (d: Date) => d.toISOString().slice(0, 10);
-const lateWords = (n: number) => `${n} ${n === 1 ? 'day' : 'days'} late`;
+const dayWords = (d: Date, calendar: MailCalendar) => dayInWords(d, calendar.zone, calendar.now);
 /** An amount in cents as the mails write it: $12.50. */
 export const valueWords = (cents: number) => `$${(cents / 100).toFixed(2)}`;
 /** A count with its noun: 1 pack, 3 packs. */
 export const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 const toolLink = (publicUrl: string, code: string) => `${publicUrl.replace(/\/$/, '')}/tools/${code}`;
 
-export function overdueReminderMail(line: OverdueMailLine, publicUrl: string): OutgoingMail {
+export function overdueReminderMail(line: OverdueMailLine, publicUrl: string, calendar: MailCalendar): OutgoingMail {
   const { tool, holder } = line;
   return {
     to: holder.email,
-    subject: `Reminder: ${tool.code} ${tool.name} was due back on ${dayWords(line.dueAt)}`,
+    subject: `Reminder: ${tool.code} ${tool.name} was due back on ${dayWords(line.dueAt, calendar)}`,
     text: [
       `Hello ${holder.name},`,
       ``,
       `A friendly reminder from the chapter's tool crib: you have ${tool.name} (${tool.code}) on loan.`,
-      `It was due back on ${dayWords(line.dueAt)} and is now ${lateWords(line.daysLate)}.`,
+      `It was due back on ${dayWords(line.dueAt, calendar)} and is now ${daysLateWords(line.daysLate)}.`,
       tool.location ? `It lives at: ${tool.location}.` : `Please bring it back to the tool crib.`,
       ``,
       `Others may be waiting for it. If you still need it, please talk to the quartermaster.`,
@@ -109,7 +122,7 @@ export function overdueReminderMail(line: OverdueMailLine, publicUrl: string): O
   };
 }
 
-export function overdueDigestMail(to: string, name: string, lines: OverdueMailLine[], publicUrl: string): OutgoingMail {
+export function overdueDigestMail(to: string, name: string, lines: OverdueMailLine[], publicUrl: string, calendar: MailCalendar): OutgoingMail {
   const total = lines.reduce((sum, l) => sum + l.tool.replacementValueCents, 0);
   return {
     to,
@@ -122,7 +135,7 @@ export function overdueDigestMail(to: string, name: string, lines: OverdueMailLi
       ...lines.map(
         (l) =>
           `- ${l.tool.code} ${l.tool.name}: ${l.holder.name} (${l.holder.email}${l.holder.phone ? `, ${l.holder.phone}` : ''}), ` +
-          `due ${dayWords(l.dueAt)}, ${lateWords(l.daysLate)}, value ${valueWords(l.tool.replacementValueCents)}\n  ${toolLink(publicUrl, l.tool.code)}`,
+          `due ${dayWords(l.dueAt, calendar)}, ${daysLateWords(l.daysLate)}, value ${valueWords(l.tool.replacementValueCents)}\n  ${toolLink(publicUrl, l.tool.code)}`,
       ),
       ``,
       `Each holder gets at most one reminder a day. The full list is on the Overdue page:`,

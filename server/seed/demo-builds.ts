@@ -10,9 +10,10 @@ import { assemblyBill } from '../features/planning/assembly-estimate.service';
 import { createBuild } from '../features/planning/builds.service';
 import { findBinByCode } from '../features/stock/bins.repo';
 import { draw } from '../features/stock/ledger.service';
+import { addChapterDays, chapterDay, startOfChapterDay } from '@shared/time/chapter-time';
+import { DAY_MS, HOUR_MS, MINUTE_MS } from '@shared/time/durations';
+import { readChapterTimeZone } from '../settings/chapter-time-zone';
 
-const DAY_MS = 24 * 60 * 60 * 1000;
-const MINUTE_MS = 60_000;
 
 type Rivet = { kind: 'blind-structural' | 'blind-general' | 'solid'; head: 'dome' | 'countersunk' | 'flange'; diameter32: number; material: string };
 const blind = (diameter32: number, head: Rivet['head'] = 'dome'): Rivet => ({ kind: 'blind-structural', head, diameter32, material: '5056' });
@@ -145,8 +146,9 @@ export interface DemoBuildsSummary {
 export function seedDemoBuilds(db: Database, now: Date = new Date()): DemoBuildsSummary {
   let clock = new Date(now.getTime() - 60 * DAY_MS);
   const ctx: ServiceContext = { db, publicUrl: 'http://localhost', now: () => clock };
-  const today = Math.floor(now.getTime() / DAY_MS) * DAY_MS;
-  const day = (offset: number) => new Date(today + offset * DAY_MS).toISOString().slice(0, 10);
+  const zone = readChapterTimeZone(db);
+  const today = startOfChapterDay(now, zone);
+  const day = (offset: number) => chapterDay(addChapterDays(today, offset, zone), zone);
   const binCode = (name: string) => db.select({ code: bins.code }).from(bins).where(eq(bins.name, name)).get()?.code;
   const lastEntryAt = (binId: number) => db.select({ at: max(stockMovements.at) }).from(stockMovements).where(eq(stockMovements.binId, binId)).get()?.at?.getTime() ?? 0;
   const summary: DemoBuildsSummary = { builds: 0, assemblies: 0, draws: 0 };
@@ -167,7 +169,7 @@ export function seedDemoBuilds(db: Database, now: Date = new Date()): DemoBuilds
         summary.assemblies++;
         const share = DRAWN_SHARE[a.status];
         if (!share) continue;
-        const begun = today + a.days[0] * DAY_MS + 9 * 60 * MINUTE_MS;
+        const begun = addChapterDays(today, a.days[0], zone).getTime() + 9 * HOUR_MS;
         for (const need of assemblyBill(db, findAssembly(db, assembly.id)!)) {
           if (!need.bin || need.lines.length === 0) continue;
           const bin = findBinByCode(db, need.bin.code)!;

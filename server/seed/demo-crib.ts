@@ -9,8 +9,8 @@ import { checkOut, returnTool } from '../features/tools/loans.service';
 import { defineSignoff, grantSignoff } from '../features/tools/signoffs.service';
 import { changeToolStatus } from '../features/tools/tool-status.service';
 import { createTool } from '../features/tools/tools.service';
+import { DAY_MS } from '@shared/time/durations';
 
-const DAY_MS = 24 * 60 * 60 * 1000;
 
 type DemoTool = Partial<CreateToolInput> & Pick<CreateToolInput, 'name' | 'category'> & { signoff?: 'air' | 'gun' };
 

@@ -8,8 +8,10 @@ import type { Database } from '../db/client';
 import type { UserRow } from '../db/schema/users';
 import { insertNewBin } from '../features/stock/bins.service';
 import { count, draw, receive, returnUnused, writeOff } from '../features/stock/ledger.service';
+import { addChapterDays, startOfChapterDay } from '@shared/time/chapter-time';
+import { DAY_MS, MINUTE_MS } from '@shared/time/durations';
+import { readChapterTimeZone } from '../settings/chapter-time-zone';
 
-const DAY_MS = 24 * 60 * 60 * 1000;
 /** The history starts this many days before today: six months. */
 const HISTORY_DAYS = 183;
 
@@ -218,8 +220,9 @@ export interface DemoStockSummary {
 export function seedDemoStock(db: Database, now: Date = new Date()): DemoStockSummary {
   let clock = now;
   const ctx: ServiceContext = { db, publicUrl: 'http://localhost', now: () => clock };
-  const today = Math.floor(now.getTime() / DAY_MS) * DAY_MS;
-  const dayAt = (daysAgo: number, hour: number) => new Date(today - daysAgo * DAY_MS + Math.round(hour * 60) * 60_000);
+  const zone = readChapterTimeZone(db);
+  const today = startOfChapterDay(now, zone);
+  const dayAt = (daysAgo: number, hour: number) => new Date(addChapterDays(today, -daysAgo, zone).getTime() + Math.round(hour * 60) * MINUTE_MS);
   const people = new Map<string, UserRow>();
   const person = (email: string): UserRow => people.get(email) ?? people.set(email, findUserByEmail(db, email)!).get(email)!;
   const quartermaster = person(RUTH);

@@ -1,12 +1,15 @@
+import { DAY_MS } from '../time/durations';
+
 /**
  * Weekly demand per bin: planned assemblies spread over their dates, draw history by week, and the
- * projected on hand. Weeks are UTC calendar weeks starting Monday 00:00; week 0 is the week that
- * holds `now`, so the chart's weeks line up with the ones people plan in, and a week's demand is
- * whole even when `now` falls mid-week.
+ * projected on hand. Weeks start on a Monday and run on day names (planned days are stored at the
+ * UTC midnight of their name; the forecast service passes the chapter's today by name, so these are
+ * the chapter's weeks); week 0 is the week that holds `now`, so the chart's weeks line up with the
+ * ones people plan in, and a week's demand is whole even when `now` falls mid-week.
  */
 
 export const HORIZON_WEEKS = 26;
-export const WEEK_MS = 7 * 24 * 60 * 60 * 1000;
+export const WEEK_MS = 7 * DAY_MS;
 
 /** Monday 00:00 UTC on or before `at`. */
 export function startOfUtcWeek(at: Date): Date {

@@ -16,8 +16,11 @@ export const loginBodySchema = z.strictObject({
 });
 export type LoginBody = z.infer<typeof loginBodySchema>;
 
-export const loginResponseSchema = z.strictObject({ user: userSchema, csrfToken: z.string() });
-export const meResponseSchema = z.strictObject({ user: userSchema });
+/** Who is signed in, with the chapter's time zone: the client writes every day and moment in it. */
+export const meResponseSchema = z.strictObject({ user: userSchema, timeZone: z.string() });
+export type MeResponse = z.infer<typeof meResponseSchema>;
+export const loginResponseSchema = meResponseSchema.extend({ csrfToken: z.string() });
+export type LoginResponse = z.infer<typeof loginResponseSchema>;
 export const csrfResponseSchema = z.strictObject({ token: z.string() });
 
 export const resetRequestBodySchema = z.strictObject({ email: emailField });

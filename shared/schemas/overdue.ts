@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { dayCount } from '../time/chapter-time';
 import { TOOL_CATEGORIES, TOOL_STATUSES, type ToolCategory } from '../tools/categories';
 import { idParam } from './fields';
 
@@ -18,10 +19,10 @@ export const overdueLoanSchema = z.strictObject({
   tool: z.strictObject({ code: z.string(), name: z.string(), location: z.string(), replacementValueCents: z.number() }),
   holder: z.strictObject({ id: z.number(), name: z.string(), email: z.string(), phone: z.string().nullable() }),
   dueAt: z.string(),
-  /** Whole days past due, counted down; less than a day late counts as 1. */
+  /** Chapter days from the due day to today (shared/time daysLate); less than a day late counts as 1. */
   daysLate: z.number(),
   lastReminderAt: z.string().nullable(),
-  /** A reminder went out on the chapter's calendar day (server time), so no other may go today. */
+  /** A reminder went out on the chapter's calendar day, so no other may go today. */
   remindedToday: z.boolean(),
 });
 export type OverdueLoan = z.infer<typeof overdueLoanSchema>;
@@ -66,27 +67,10 @@ export type ServiceDueItem = z.infer<typeof serviceDueItemSchema>;
 export const serviceDueListSchema = z.strictObject({ data: z.array(serviceDueItemSchema), meta: z.strictObject({ dueWithinDays: z.number() }) });
 export type ServiceDueList = z.infer<typeof serviceDueListSchema>;
 
-const days = (n: number) => `${n} ${n === 1 ? 'day' : 'days'}`;
-
-const DAY_MS = 24 * 60 * 60 * 1000;
-
-/**
- * How late a loan is: whole days elapsed since the due moment, at least 1 once it is past due.
- * The one rule for the Overdue page, the reminder e-mails and the badges members see.
- */
-export function daysLate(dueAt: Date, now: Date): number {
-  return Math.max(1, Math.floor((now.getTime() - dueAt.getTime()) / DAY_MS));
-}
-
-/** "1 day late", "5 days late". */
-export function daysLateWords(daysLate: number): string {
-  return `${days(daysLate)} late`;
-}
-
 /** "Calibration overdue by 12 days", "Service due today", "Calibration due in 5 days". */
 export function serviceDueWords(kind: 'calibration' | 'service', daysUntilDue: number): string {
   const what = kind === 'calibration' ? 'Calibration' : 'Service';
-  if (daysUntilDue < 0) return `${what} overdue by ${days(-daysUntilDue)}`;
+  if (daysUntilDue < 0) return `${what} overdue by ${dayCount(-daysUntilDue)}`;
   if (daysUntilDue === 0) return `${what} due today`;
-  return `${what} due in ${days(daysUntilDue)}`;
+  return `${what} due in ${dayCount(daysUntilDue)}`;
 }

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { idParam } from './fields';
+import { isTimeZone } from '../time/chapter-time';
 
 const signoffName = z
   .string({ error: 'Enter a name for the sign-off.' })
@@ -78,16 +79,28 @@ export const mySignoffListSchema = z.strictObject({ data: z.array(mySignoffSchem
 export const HOLD_HOURS_MIN = 1;
 export const HOLD_HOURS_MAX = 336;
 
-export const cribSettingsSchema = z.strictObject({ holdHours: z.number() });
+export const cribSettingsSchema = z.strictObject({
+  holdHours: z.number(),
+  /** The chapter's IANA time zone: every due date, "days late", digest and reminder counts its days there. */
+  timeZone: z.string(),
+});
 export type CribSettingsView = z.infer<typeof cribSettingsSchema>;
 
+export const chapterTimeZoneSchema = z
+  .string({ error: 'Choose the chapter time zone from the list, such as America/Denver.' })
+  .refine(isTimeZone, { error: 'That is not a time zone this server knows; choose one from the list, such as America/Denver.' });
+
+/** The lead changes one setting at a time, or both. */
 export const updateCribSettingsBodySchema = z
   .object({
     holdHours: z
       .number({ error: 'Enter the hold time in whole hours.' })
       .int({ error: 'Enter the hold time in whole hours.' })
       .min(HOLD_HOURS_MIN, { error: `Hold a tool for at least ${HOLD_HOURS_MIN} hour.` })
-      .max(HOLD_HOURS_MAX, { error: `Hold a tool for at most ${HOLD_HOURS_MAX} hours (two weeks).` }),
+      .max(HOLD_HOURS_MAX, { error: `Hold a tool for at most ${HOLD_HOURS_MAX} hours (two weeks).` })
+      .optional(),
+    timeZone: chapterTimeZoneSchema.optional(),
   })
-  .strict();
+  .strict()
+  .refine((body) => body.holdHours !== undefined || body.timeZone !== undefined, { error: 'Change the hold time or the time zone.' });
 export type UpdateCribSettingsBody = z.output<typeof updateCribSettingsBodySchema>;

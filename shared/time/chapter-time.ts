@@ -1,5 +1,8 @@
-import { tz } from '@date-fns/tz';
-import { addDays, differenceInCalendarDays, endOfDay, format, startOfDay } from 'date-fns';
+import { TZDate, tz } from '@date-fns/tz';
+import { addDays, addMonths, differenceInCalendarDays, endOfDay, startOfDay, startOfMonth } from 'date-fns';
+import { daysLateWords } from './words';
+
+export * from './words';
 
 /**
  * The chapter's calendar: every "day" Gripline speaks of (a due date, days late, today's digest)
@@ -10,21 +13,11 @@ import { addDays, differenceInCalendarDays, endOfDay, format, startOfDay } from 
 const instant = (d: Date): Date => new Date(d.getTime());
 const zoned = (zone: string) => ({ in: tz(zone) });
 
-/** The zone the server runs in, the chapter's default until a lead chooses one. */
-export const serverTimeZone = (): string => Intl.DateTimeFormat().resolvedOptions().timeZone;
-
-/** Whether the runtime knows this IANA zone name ("America/Denver" yes, "Mars/Base" no). */
-export function isTimeZone(zone: string): boolean {
-  try {
-    new Intl.DateTimeFormat('en-US', { timeZone: zone });
-    return zone.length > 0;
-  } catch {
-    return false;
-  }
+/** The first instants of the last `count` chapter months, oldest first, up to and including the month of `now`. */
+export function chapterMonthStarts(now: Date, count: number, zone: string): Date[] {
+  const current = startOfMonth(now, zoned(zone));
+  return Array.from({ length: count }, (_, i) => instant(startOfMonth(addMonths(current, i - (count - 1), zoned(zone)), zoned(zone))));
 }
-
-/** The chapter day a moment falls on, as "2026-11-29". */
-export const chapterDay = (at: Date, zone: string): string => format(at, 'yyyy-MM-dd', zoned(zone));
 
 /** The first instant of the chapter day a moment falls on. */
 export const startOfChapterDay = (at: Date, zone: string): Date => instant(startOfDay(at, zoned(zone)));
@@ -38,10 +31,18 @@ export const addChapterDays = (at: Date, days: number, zone: string): Date => in
 /** Calendar days from one moment's chapter day to another's: Monday 23:00 → Tuesday 01:00 is 1. */
 export const chapterDaysBetween = (from: Date, to: Date, zone: string): number => differenceInCalendarDays(to, from, zoned(zone));
 
-/** The chapter's midnight starting a calendar day "2026-11-29". */
+/** The chapter's midnight starting a calendar day "2026-11-29" (built on the chapter's wall clock, so any zone's). */
 export function startOfDayNamed(day: string, zone: string): Date {
   const [y, m, d] = day.split('-').map(Number);
-  return instant(startOfDay(new Date(Date.UTC(y!, m! - 1, d, 12)), zoned(zone)));
+  return instant(new TZDate(y!, m! - 1, d!, zone));
+}
+
+/**
+ * The moments from the chapter's midnight starting `from` to the one ending `to` ("2026-11-01" to
+ * "2026-11-30", both whole days), for a range a person typed as days: start included, end excluded.
+ */
+export function chapterDaySpan(from: string, to: string, zone: string): { start: Date; end: Date } {
+  return { start: startOfDayNamed(from, zone), end: instant(startOfDay(addDays(startOfDayNamed(to, zone), 1, zoned(zone)), zoned(zone))) };
 }
 
 /**
@@ -56,27 +57,6 @@ export const loanDueAt = (takenAt: Date, loanDays: number, zone: string): Date =
  * past due. The one rule for the Overdue page, the reminders, the badges and refusals.
  */
 export const daysLate = (dueAt: Date, now: Date, zone: string): number => Math.max(1, chapterDaysBetween(dueAt, now, zone));
-
-/** "1 day", "3 days". */
-export const dayCount = (n: number): string => `${n} ${Math.abs(n) === 1 ? 'day' : 'days'}`;
-
-/** "1 day late", "5 days late". */
-export const daysLateWords = (days: number): string => `${dayCount(days)} late`;
-
-/**
- * A chapter day in words: "Sunday, November 29", with the year when it is not this year
- * ("Friday, December 4, 2025").
- */
-export function dayInWords(at: Date, zone: string, now: Date = new Date()): string {
-  const sameYear = format(at, 'yyyy', zoned(zone)) === format(now, 'yyyy', zoned(zone));
-  return format(at, sameYear ? 'EEEE, MMMM d' : 'EEEE, MMMM d, yyyy', zoned(zone));
-}
-
-/** A chapter day in short words for tables: "Sun, Nov 29, 2026". */
-export const shortDayInWords = (at: Date, zone: string): string => format(at, 'EEE, MMM d, yyyy', zoned(zone));
-
-/** A moment on the chapter's clock: "Nov 29, 2026, 6:05 PM". */
-export const momentInWords = (at: Date, zone: string): string => format(at, 'MMM d, yyyy, h:mm a', zoned(zone));
 
 export interface DueState {
   /** "due today", "due tomorrow", "due in 3 days", "2 days late". */

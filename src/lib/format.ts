@@ -1,3 +1,7 @@
+// The dependency-free half of shared/time: these formatters are on the pages every member opens first.
+import { dateInWords, dayInWords, momentInWords, shortDayInWords } from '@shared/time/words';
+import { chapterTimeZone } from './chapter-zone';
+
 /** Money, counts and days as every page shows them; a feature's own format module adds its trade words. */
 const cents = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' });
 /** Unit costs run to a hundredth of a cent (a rivet costs $0.0825). */
@@ -19,14 +23,18 @@ export const formatCount = (n: number): string => count.format(n);
 /** A quantity with its unit: (250, "each") → "250 each". */
 export const formatQuantity = (n: number, unit: string): string => `${formatCount(n)} ${unit}`;
 
-const utcDay = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric', timeZone: 'UTC' });
-const localDay = new Intl.DateTimeFormat('en-US', { year: 'numeric', month: 'short', day: 'numeric' });
+/** A chapter day "2027-01-15", or the chapter day a timestamp fell on, as a date in words: "Jan 15, 2027". */
+export const formatDay = (iso: string): string =>
+  iso.length === 10 ? dateInWords(new Date(`${iso}T00:00:00Z`), 'UTC') : dateInWords(new Date(iso), chapterTimeZone());
 
-/** A calendar day "2027-01-15" (or a timestamp, read for its UTC day) as "Jan 15, 2027": days carry no time zone. */
-export const formatDay = (iso: string): string => utcDay.format(new Date(iso.length === 10 ? `${iso}T00:00:00Z` : iso));
+/** A moment as the chapter day it fell on, in short words: "Tue, Dec 1, 2026". */
+export const formatDate = (iso: string | Date): string => shortDayInWords(new Date(iso), chapterTimeZone());
 
-/** A moment (ISO timestamp) as the day it fell on where the viewer is: "Jan 15, 2027". */
-export const formatDate = (iso: string): string => localDay.format(new Date(iso));
+/** A moment on the chapter's clock: "Dec 1, 2026, 6:05 PM". */
+export const formatDateTime = (iso: string | Date): string => momentInWords(new Date(iso), chapterTimeZone());
+
+/** A due day in words on the chapter's calendar: "Tuesday, December 8" (with the year when not this year). */
+export const formatDueDay = (iso: string | Date, now: Date = new Date()): string => dayInWords(new Date(iso), chapterTimeZone(), now);
 
 const relative = new Intl.RelativeTimeFormat('en-US', { numeric: 'auto' });
 

@@ -5,6 +5,7 @@ import type { ImportPreview } from '@shared/schemas/bin-import';
 import { BinImportPanel } from '@/features/stock-import/components/bin-import-panel';
 import { StockExportPanel } from '@/features/stock-import/components/stock-export-panel';
 import { defaultLedgerRange } from '@/features/stock-import/utils/csv-links';
+import { setChapterTimeZone } from '@/lib/chapter-zone';
 import { setCsrfToken } from '@/lib/api-client';
 import { fakeFetch, renderWithProviders } from '../helpers/render';
 
@@ -155,6 +156,9 @@ describe('StockExportPanel', () => {
   it('links the bins and the ledger for the chosen days, and refuses an end before the start', async () => {
     renderWithProviders(<StockExportPanel now={new Date(2026, 11, 14, 9, 30)} />);
     expect(defaultLedgerRange(new Date(2026, 11, 14, 9, 30))).toEqual({ from: '2026-12-01', to: '2026-12-14' });
+    setChapterTimeZone('Pacific/Auckland'); // 12:00 UTC on November 30 is already December 1 there
+    expect(defaultLedgerRange(new Date('2026-11-30T12:00:00Z'))).toEqual({ from: '2026-12-01', to: '2026-12-01' });
+    setChapterTimeZone('UTC');
     expect(screen.getByRole('link', { name: 'Export bins (CSV)' }).getAttribute('href')).toBe('/api/bins/export.csv');
     expect(screen.getByRole('link', { name: 'Export ledger (CSV)' }).getAttribute('href')).toBe('/api/bins/ledger.csv?from=2026-12-01&to=2026-12-14');
 

@@ -4,6 +4,8 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import type { Signoff } from '@shared/schemas/signoffs';
 import { setCsrfToken } from '@/lib/api-client';
 import { HoldTimeCard } from '@/features/signoffs/components/hold-time-card';
+import { TimeZoneCard } from '@/features/signoffs/components/time-zone-card';
+import { chapterTimeZone } from '@/lib/chapter-zone';
 import { MySignoffs } from '@/features/signoffs/components/my-signoffs';
 import { SignoffCard } from '@/features/signoffs/components/signoff-card';
 import { fakeFetch, renderWithProviders } from '../helpers/render';
@@ -72,6 +74,33 @@ describe('HoldTimeCard', () => {
     await userEvent.type(input, '24');
     await userEvent.click(screen.getByRole('button', { name: 'Save hold time' }));
     await waitFor(() => expect(calls[0]).toMatchObject({ method: 'PATCH', path: '/api/settings/crib', body: { holdHours: 24 } }));
+  });
+});
+
+describe('TimeZoneCard', () => {
+  it('shows the chapter zone, saves another from the list, and shows the server’s refusal in words', async () => {
+    let refuse = false;
+    const calls = fakeFetch(({ method, body }) =>
+      method !== 'PATCH'
+        ? undefined
+        : refuse
+          ? { status: 400, body: { error: { code: 'VALIDATION_FAILED', message: 'The request body is not valid. timeZone: That is not a time zone this server knows.', issues: [{ path: 'timeZone', message: 'That is not a time zone this server knows.' }] } } }
+          : { status: 200, body: { holdHours: 48, ...(body as object) } },
+    );
+    renderWithProviders(<TimeZoneCard timeZone="America/Chicago" />);
+    expect(screen.getByText('America/Chicago', { selector: 'strong' })).toBeTruthy();
+    const select = screen.getByLabelText<HTMLSelectElement>("The chapter's time zone");
+    expect(select.value).toBe('America/Chicago');
+    expect([...select.options].map((o) => o.value)).toContain('Pacific/Auckland');
+    expect(screen.getByRole<HTMLButtonElement>('button', { name: 'Save time zone' }).disabled).toBe(true);
+    await userEvent.selectOptions(select, 'Europe/Oslo');
+    await userEvent.click(screen.getByRole('button', { name: 'Save time zone' }));
+    await waitFor(() => expect(calls.find((c) => c.method === 'PATCH')).toMatchObject({ path: '/api/settings/crib', body: { timeZone: 'Europe/Oslo' } }));
+    expect(chapterTimeZone()).toBe('Europe/Oslo');
+    refuse = true;
+    await userEvent.selectOptions(select, 'Asia/Tokyo');
+    await userEvent.click(screen.getByRole('button', { name: 'Save time zone' }));
+    expect(await screen.findByText(/not a time zone this server knows/)).toBeTruthy();
   });
 });
 

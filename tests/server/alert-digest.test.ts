@@ -89,7 +89,7 @@ describe('the daily alert digest', () => {
     const text = (await t.lastMailTo('qm@example.org'))!.text;
     expect((await t.lastMailTo('qm@example.org'))!.subject).toBe('Reorder: 1 bin needs ordering');
     expect(text).toContain(`- ${rivets.code} `);
-    expect(text).toContain('ordered 500 on 2026-12-01, 500 still to come, expected 2026-12-09');
+    expect(text).toContain('ordered 500 on Tuesday, December 1, 500 still to come, expected Wednesday, December 9');
 
     await post(qm, `/api/alerts/${idOf(screws.code)}/dismiss`, { reason: 'Borrowing from the chapter next door' });
     const before = mailCount();

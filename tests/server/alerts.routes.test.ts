@@ -4,6 +4,7 @@ import { alertListSchema, purchaseListSchema, type Alert } from '@shared/schemas
 import { binAlerts } from '../../server/db/schema/builds';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
 import { addAssembly, DAY_MS, drawFrom, hundredRivetLine, screwBin } from '../helpers/planning-fixture';
+import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
@@ -218,6 +219,19 @@ describe('reorder alerts', () => {
     expect(missing.status).toBe(404);
     expect(missing.body.error.code).toBe('ALERT_NOT_FOUND');
     expect((await alertsIn('open')).map((a) => a.id)).toEqual([id]);
+  });
+
+  it('takes “today” from the chapter’s calendar for the expected day and the purchase list’s file name', async () => {
+    await binRunningLow();
+    const { data } = await refresh();
+    // Tuesday 20:00 in Chicago is already Wednesday in UTC: the chapter's today is still Tuesday, December 1.
+    writeChapterTimeZone(t.db, 'America/Chicago');
+    t.clock.now = new Date('2026-12-02T02:00:00Z');
+    const csv = await qm.agent.get('/api/alerts/purchase-list.csv');
+    expect(csv.headers['content-disposition']).toBe('attachment; filename="gripline-purchase-list-2026-12-01.csv"');
+    const today = await post(qm, `/api/alerts/${data[0]!.id}/ordered`, { quantity: 100, expectedAt: '2026-12-01' });
+    expect(today.status).toBe(200);
+    expect(today.body.expectedAt).toBe('2026-12-01');
   });
 
   it('is for quartermasters and leads', async () => {

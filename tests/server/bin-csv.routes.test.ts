@@ -5,6 +5,7 @@ import { errorEnvelopeSchema } from '@shared/schemas/errors';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
 import { giveAssemblies } from '../helpers/planning';
 import { findUserByEmail } from '../../server/accounts/users.repo';
+import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
@@ -195,6 +196,8 @@ describe('GET /api/bins/export.csv', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
     expect(res.headers['content-disposition']).toBe('attachment; filename="gripline-bins-2026-12-01.csv"');
+    writeChapterTimeZone(t.db, 'Pacific/Auckland'); // 12:00 UTC is already 01:00 on Wednesday there
+    expect((await qm.agent.get('/api/bins/export.csv')).headers['content-disposition']).toBe('attachment; filename="gripline-bins-2026-12-02.csv"');
     const rows = records(res.text);
     expect(rows.map((r) => r.code)).toEqual(['B-0001', 'B-0002', 'B-0003', 'B-0200']);
     // MS20426AD4-3.5: 100° countersunk, 2117-T4, 1/8 in, half length written .5 (AC 43.13-1B para 4-57a).

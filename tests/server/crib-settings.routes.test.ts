@@ -1,6 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { cribSettingsSchema } from '@shared/schemas/signoffs';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { buildTestApp, PASSWORD, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { serverTimeZone } from '@shared/time/chapter-time';
 import { post } from '../helpers/crib';
 
 let t: TestApp;
@@ -25,7 +26,7 @@ describe('GET /api/settings/crib', () => {
     const res = await member.agent.get('/api/settings/crib');
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/application\/json/);
-    expect(cribSettingsSchema.parse(res.body)).toEqual({ holdHours: 48 });
+    expect(cribSettingsSchema.parse(res.body)).toEqual({ holdHours: 48, timeZone: serverTimeZone() });
   });
 
   it('answers 401 when signed out', async () => {
@@ -39,21 +40,25 @@ describe('PATCH /api/settings/crib', () => {
   it('lets the lead change the hold time, which everyone then reads', async () => {
     const res = await patch(lead, { holdHours: 24 });
     expect(res.status).toBe(200);
-    expect(res.body).toEqual({ holdHours: 24 });
-    expect((await qm.agent.get('/api/settings/crib')).body).toEqual({ holdHours: 24 });
+    expect(res.body).toEqual({ holdHours: 24, timeZone: serverTimeZone() });
+    expect((await qm.agent.get('/api/settings/crib')).body).toEqual({ holdHours: 24, timeZone: serverTimeZone() });
   });
 
-  it('accepts 1 and 336 hours and refuses 0, 337, a fraction, text or a missing value with 400', async () => {
+  it('accepts 1 and 336 hours and refuses 0, 337, a fraction, text or null with 400', async () => {
     expect((await patch(lead, { holdHours: 1 })).status).toBe(200);
     expect((await patch(lead, { holdHours: 336 })).status).toBe(200);
-    for (const body of [{ holdHours: 0 }, { holdHours: 337 }, { holdHours: 2.5 }, { holdHours: 'two days' }, {}]) {
+    for (const body of [{ holdHours: 0 }, { holdHours: 337 }, { holdHours: 2.5 }, { holdHours: 'two days' }, { holdHours: null }]) {
       const res = await patch(lead, body);
       expect(res.status).toBe(400);
       expect(res.body.error.code).toBe('VALIDATION_FAILED');
       expect(res.body.error.issues[0].path).toBe('holdHours');
     }
     expect((await patch(lead, { holdHours: 12, loanDays: 3 })).status).toBe(400);
-    expect((await member.agent.get('/api/settings/crib')).body).toEqual({ holdHours: 336 });
+    expect((await member.agent.get('/api/settings/crib')).body.holdHours).toBe(336);
+    const empty = await patch(lead, {});
+    expect(empty.status).toBe(400);
+    expect(empty.body.error.code).toBe('VALIDATION_FAILED');
+    expect(empty.body.error.message).toMatch(/hold time or the time zone/);
   });
 
   it('answers 403 to a member and a quartermaster, 401 when signed out', async () => {
@@ -64,7 +69,7 @@ describe('PATCH /api/settings/crib', () => {
     }
     const anon = await patch(await t.anonymous(), { holdHours: 2 });
     expect(anon.status).toBe(401);
-    expect((await member.agent.get('/api/settings/crib')).body).toEqual({ holdHours: 48 });
+    expect((await member.agent.get('/api/settings/crib')).body).toEqual({ holdHours: 48, timeZone: serverTimeZone() });
   });
 
   it('uses the new hold time for the next hold offer', async () => {
@@ -79,5 +84,45 @@ describe('PATCH /api/settings/crib', () => {
     const tool = await qm.agent.get('/api/tools/T-0001');
     expect(tool.body.holds.offerExpiresAt).toBe(new Date(t.clock.now.getTime() + 6 * HOUR_MS).toISOString());
     expect(tool.body.forYou.yourHold).toMatchObject({ status: 'offered', offerExpiresAt: '2026-12-03T14:15:00.000Z' });
+  });
+});
+
+describe('PATCH /api/settings/crib with a time zone', () => {
+  it('lets the lead set the chapter time zone, which everyone then reads and the hold time keeps', async () => {
+    await patch(lead, { holdHours: 12 }).expect(200);
+    const res = await patch(lead, { timeZone: 'America/Denver' });
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ holdHours: 12, timeZone: 'America/Denver' });
+    expect((await member.agent.get('/api/settings/crib')).body).toEqual({ holdHours: 12, timeZone: 'America/Denver' });
+  });
+
+  it('refuses a zone the server does not know, an empty one or a number with 400 naming timeZone, and keeps the old one', async () => {
+    await patch(lead, { timeZone: 'Europe/Oslo' }).expect(200);
+    for (const timeZone of ['Mars/Olympus_Mons', '', 'GMT+25', 3]) {
+      const res = await patch(lead, { timeZone });
+      expect(res.status).toBe(400);
+      expect(res.body.error.code).toBe('VALIDATION_FAILED');
+      expect(res.body.error.issues[0].path).toBe('timeZone');
+      expect(res.body.error.issues[0].message).toMatch(/time zone/i);
+    }
+    expect((await member.agent.get('/api/settings/crib')).body.timeZone).toBe('Europe/Oslo');
+  });
+
+  it('answers 403 to a member who tries to change the zone', async () => {
+    const res = await patch(member, { timeZone: 'Asia/Tokyo' });
+    expect(res.status).toBe(403);
+    expect((await member.agent.get('/api/settings/crib')).body.timeZone).toBe(serverTimeZone());
+  });
+
+  it('tells the signed-in person the chapter zone with who they are, at sign-in and after', async () => {
+    await patch(lead, { timeZone: 'Pacific/Auckland' }).expect(200);
+    const me = await member.agent.get('/api/auth/me');
+    expect(me.body.timeZone).toBe('Pacific/Auckland');
+    const anon = await t.anonymous();
+    const login = await anon.agent.post('/api/auth/login').set('X-CSRF-Token', anon.csrf).send({ email: 'qm@example.org', password: PASSWORD });
+    expect(login.status).toBe(200);
+    expect(login.body.timeZone).toBe('Pacific/Auckland');
+    const fresh = await t.signIn('qm@example.org');
+    expect((await fresh.agent.get('/api/auth/me')).body).toMatchObject({ user: { email: 'qm@example.org' }, timeZone: 'Pacific/Auckland' });
   });
 });

@@ -3,6 +3,7 @@ import { binForecast } from '@shared/forecast/bin-forecast';
 import { forecastListSchema, type BinForecastDto } from '@shared/schemas/forecast';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
 import { addAssembly, drawFrom, hundredRivetLine, screwBin } from '../helpers/planning-fixture';
+import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
@@ -33,6 +34,23 @@ async function forecastOf(code: string): Promise<BinForecastDto> {
 }
 
 describe('GET /api/forecast', () => {
+  it('counts weeks on the chapter’s calendar: week 0 is the chapter week holding now, and draws fall in the chapter week they were made', async () => {
+    writeChapterTimeZone(t.db, 'Pacific/Auckland');
+    at('2026-11-10T12:00:00Z');
+    const bin = await addBinAs(qm, blindRivetBin({ reorderPoint: 0, initialQuantity: 1000, leadTimeDays: 14, unitCost: 0.05 }));
+    at('2026-11-29T12:30:00Z'); // Monday, November 30, 01:30 in Auckland: this week, not last week's history
+    await drawFrom(member, bin.code, 40);
+    at('2026-11-29T10:00:00Z'); // Sunday 23:00 in Auckland: last week
+    await drawFrom(member, bin.code, 26);
+    at('2026-12-06T12:00:00Z'); // Monday, December 7, 01:00 in Auckland; still Sunday in UTC
+    const f = await forecastOf(bin.code);
+    expect(f.weeks[0]).toBe('2026-12-07');
+    expect(f.weeks[1]).toBe('2026-12-14');
+    expect(f.demandSource).toBe('history');
+    // The last full chapter week (Nov 30 – Dec 6) holds the 40; the one before it the 26: 66 over 26 weeks.
+    expect(f.weeklyDemand[0]).toBeCloseTo(66 / 26, 2);
+  });
+
   it('forecasts a bin nobody plans from its weekly draws, net of returns and reversals', async () => {
     at('2026-10-01T12:00:00Z');
     const bin = await addBinAs(qm, blindRivetBin({ reorderPoint: 0, initialQuantity: 1000, leadTimeDays: 14, unitCost: 0.05 }));

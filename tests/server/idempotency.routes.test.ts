@@ -169,14 +169,15 @@ describe('Idempotency-Key on check out, return, draw and return unused', () => {
 describe('X-Performed-At and X-Catalogue-At', () => {
   it('records a check out at the member’s time, with the due date counted from it and the arrival beside it', async () => {
     const tool = await addToolAs(qm, { name: 'Air drill, angle', category: 'other', loanDays: 3 });
-    const performed = now() - 2 * HOUR;
-    const res = await send(member, `/api/tools/${tool.code}/checkout`, {}, { 'X-Performed-At': iso(performed), 'X-Catalogue-At': iso(now() - 3 * HOUR) });
+    const performed = now() - 13 * HOUR; // Monday 23:00, the chapter day before it reached the server
+    const res = await send(member, `/api/tools/${tool.code}/checkout`, {}, { 'X-Performed-At': iso(performed), 'X-Catalogue-At': iso(now() - 14 * HOUR) });
     expect(res.status).toBe(201);
     expect(res.body.checkedOutAt).toBe(iso(performed));
-    expect(res.body.dueAt).toBe(iso(performed + 3 * DAY));
+    const due = '2026-12-03T23:59:59.999Z'; // the end of the chapter day 3 days after Monday, not after Tuesday
+    expect(res.body.dueAt).toBe(due);
     expect(res.body.recordedAt).toBe(iso(now()));
     const mine = (await member.agent.get('/api/loans/mine')).body.data as { checkedOutAt: string; checkoutRecordedAt: string }[];
-    expect(mine[0]).toMatchObject({ checkedOutAt: iso(performed), dueAt: iso(performed + 3 * DAY), checkoutRecordedAt: iso(now()) });
+    expect(mine[0]).toMatchObject({ checkedOutAt: iso(performed), dueAt: due, checkoutRecordedAt: iso(now()) });
   });
 
   it('records a time in the future as the arrival time', async () => {

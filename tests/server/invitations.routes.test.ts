@@ -1,5 +1,6 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { Role } from '@shared/roles';
+import { serverTimeZone } from '@shared/time/chapter-time';
 import { buildTestApp, tokenFromLink, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 const NEW_PASSWORD = 'a rivet in every hole';
@@ -131,13 +132,14 @@ describe('GET /api/invitations/by-token/:token', () => {
 });
 
 describe('POST /api/invitations/accept', () => {
-  it('creates the account with the invited role, answers 201 { user, csrfToken } and signs the person in', async () => {
+  it('creates the account with the invited role, answers 201 { user, timeZone, csrfToken } and signs the person in', async () => {
     const token = await inviteAndReadToken('newcomer@example.org', 'quartermaster');
     const { agent, res } = await accept(token, '  Nia Newcomer  ');
     expect(res.status).toBe(201);
     expect(res.headers['content-type']).toMatch(/json/);
     expect(res.body).toEqual({
       user: { id: expect.any(Number), email: 'newcomer@example.org', name: 'Nia Newcomer', role: 'quartermaster' },
+      timeZone: serverTimeZone(),
       csrfToken: expect.any(String),
     });
     const me = await agent.get('/api/auth/me');

@@ -3,6 +3,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { overdueListSchema, reminderSentSchema } from '@shared/schemas/overdue';
 import { users } from '../../server/db/schema/users';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { addToolAs, lend, post } from '../helpers/crib';
 
 let t: TestApp;
@@ -74,6 +75,21 @@ describe('GET /api/overdue', () => {
     expect(await daysLate()).toEqual([2]);
   });
 
+  it('counts days late in chapter days, whatever the server’s zone', async () => {
+    writeChapterTimeZone(t.db, 'America/Chicago');
+    const code = await addTool({ name: 'Deburring tool', category: 'deburring_tool', loanDays: 1 });
+    await post(member, `/api/tools/${code}/checkout`).expect(201); // Tuesday 06:00 in Chicago: due by the end of Wednesday
+    const late = async () => ((await lead.agent.get('/api/overdue')).body.data as { daysLate: number; dueAt: string }[]).map((l) => l.daysLate);
+    t.clock.now = new Date('2026-12-03T05:30:00Z'); // Wednesday 23:30 in Chicago: not late yet
+    expect(await late()).toEqual([]);
+    t.clock.now = new Date('2026-12-03T06:30:00Z'); // Thursday 00:30
+    expect(await late()).toEqual([1]);
+    t.clock.now = new Date('2026-12-04T05:30:00Z'); // Thursday 23:30: still the first day late, though Friday in UTC
+    expect(await late()).toEqual([1]);
+    t.clock.now = new Date('2026-12-04T06:30:00Z'); // Friday 00:30, barely a day after the due moment: 2 chapter days
+    expect(await late()).toEqual([2]);
+  });
+
   it('answers 403 to a member and a quartermaster, and 401 when signed out', async () => {
     for (const who of [member, qm]) {
       const res = await who.agent.get('/api/overdue');
@@ -98,7 +114,7 @@ describe('POST /api/overdue/:loanId/remind', () => {
     expect(res.headers['content-type']).toMatch(/application\/json/);
     expect(reminderSentSchema.parse(res.body)).toEqual({ loanId, sentTo: 'member@example.org', sentAt: t.clock.now.toISOString(), day: '2026-12-07' });
     const mail = await t.lastMailTo('member@example.org');
-    expect(mail?.subject).toBe(`Reminder: ${code} Torque wrench was due back on 2026-12-02`);
+    expect(mail?.subject).toBe(`Reminder: ${code} Torque wrench was due back on Wednesday, December 2`);
     expect(mail?.text).toContain('Hello Mia Member,');
     expect(mail?.text).toContain('is now 5 days late');
     expect(mail?.text).toContain('It lives at: Cabinet B, shelf 2.');
@@ -106,6 +122,21 @@ describe('POST /api/overdue/:loanId/remind', () => {
 
     const list = await lead.agent.get('/api/overdue');
     expect(list.body.data[0]).toMatchObject({ loanId, lastReminderAt: t.clock.now.toISOString(), remindedToday: true });
+  });
+
+  it('writes the reminder in the chapter’s days: its day, the due day in words and the days late', async () => {
+    writeChapterTimeZone(t.db, 'Pacific/Auckland');
+    const code = await addTool({ name: 'Torque wrench', category: 'torque_wrench', loanDays: 1 });
+    const out = await post(member, `/api/tools/${code}/checkout`); // Wednesday 01:00 in Auckland
+    expect(out.body.dueAt).toBe('2026-12-03T10:59:59.999Z'); // the end of Thursday, December 3 there
+    t.clock.now = new Date('2026-12-05T12:00:00Z'); // Sunday, December 6, 01:00 in Auckland; still Saturday in UTC
+    const res = await post(lead, `/api/overdue/${out.body.id}/remind`);
+    expect(res.status).toBe(201);
+    expect(res.body.day).toBe('2026-12-06');
+    const mail = await t.lastMailTo('member@example.org');
+    expect(mail?.subject).toBe(`Reminder: ${code} Torque wrench was due back on Thursday, December 3`);
+    expect(mail?.text).toContain('It was due back on Thursday, December 3 and is now 3 days late.');
+    expect((await lead.agent.get('/api/overdue')).body.data[0]).toMatchObject({ daysLate: 3, remindedToday: true });
   });
 
   it('sends at most one reminder per loan per day: a second the same day answers 409 REMINDER_ALREADY_SENT, the next day works', async () => {

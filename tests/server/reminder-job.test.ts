@@ -6,6 +6,7 @@ import { jobRuns } from '../../server/db/schema/crib-jobs';
 import { outboxMail } from '../../server/db/schema/mail';
 import { users } from '../../server/db/schema/users';
 import { runOverdueReminders } from '../../server/features/tools/reminder-job';
+import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { buildTestApp, type Crew, type SignedInAgent, type TestApp } from '../helpers/test-app';
 import { addToolAs, lend, post } from '../helpers/crib';
 
@@ -61,15 +62,15 @@ describe('runOverdueReminders', () => {
     const result = runOverdueReminders(ctx);
     expect(result).toEqual({ summary: '2 reminders, digest to 2 leads', remindersSent: 2, digestsSent: 2, holdOffersExpired: 0, error: null });
 
-    expect((await t.lastMailTo('member@example.org'))?.subject).toBe(`Reminder: ${wrench} Torque wrench was due back on 2026-12-02`);
+    expect((await t.lastMailTo('member@example.org'))?.subject).toBe(`Reminder: ${wrench} Torque wrench was due back on Wednesday, December 2`);
     expect((await t.lastMailTo('qm@example.org'))?.text).toContain('is now 6 days late');
     expect(mailsTo('member@example.org')).toHaveLength(1);
 
     const digest = await t.lastMailTo('lead@example.org');
     expect(digest?.subject).toBe('Overdue tools: 2 tools are late back');
     expect(digest?.text).toContain('replacement value $430.50 in all');
-    expect(digest?.text).toContain(`- ${wrench} Torque wrench: Mia Member (member@example.org, 555-0100), due 2026-12-02, 9 days late, value $250.00`);
-    expect(digest?.text).toContain(`- ${drill} Air drill: Quinn Quartermaster (qm@example.org), due 2026-12-05, 6 days late, value $180.50`);
+    expect(digest?.text).toContain(`- ${wrench} Torque wrench: Mia Member (member@example.org, 555-0100), due Wednesday, December 2, 9 days late, value $250.00`);
+    expect(digest?.text).toContain(`- ${drill} Air drill: Quinn Quartermaster (qm@example.org), due Saturday, December 5, 6 days late, value $180.50`);
     expect(digest!.text.indexOf(wrench)).toBeLessThan(digest!.text.indexOf(drill));
     expect(digest?.links).toContain('http://gripline.test/overdue');
     expect((await t.lastMailTo('second-lead@example.org'))?.subject).toBe('Overdue tools: 2 tools are late back');
@@ -103,6 +104,20 @@ describe('runOverdueReminders', () => {
     expect(nextDay.summary).toBe('2 reminders, digest to 1 lead');
     expect(mailsTo('member@example.org')).toHaveLength(2);
     expect((await t.lastMailTo('member@example.org'))?.text).toContain('is now 10 days late'); // 10 days and 6 hours past due: whole days count
+  });
+
+  it('counts “today” on the chapter’s calendar: a run after midnight in the chapter reminds again though the server’s day has not turned', async () => {
+    writeChapterTimeZone(t.db, 'Pacific/Auckland');
+    await twoOverdueLoans(); // now 2026-12-11T12:00Z, Saturday 01:00 in Auckland
+    t.clock.now = new Date('2026-12-11T10:30:00Z'); // Friday 23:30 in Auckland
+    expect(runOverdueReminders(ctx).remindersSent).toBe(2);
+    t.clock.now = new Date('2026-12-11T11:30:00Z'); // Saturday 00:30 there, the same UTC day
+    expect(runOverdueReminders(ctx).remindersSent).toBe(2);
+    t.clock.now = new Date('2026-12-12T10:00:00Z'); // Saturday 23:00 there: the same chapter day, the next UTC day
+    expect(runOverdueReminders(ctx).remindersSent).toBe(0);
+    expect(mailsTo('member@example.org')).toHaveLength(2);
+    // The wrench was due by 12:00 UTC on Wednesday, December 2 (Thursday 01:00 in Auckland): 9 chapter days before Saturday.
+    expect((await t.lastMailTo('member@example.org'))?.text).toContain('It was due back on Thursday, December 3 and is now 9 days late.');
   });
 
   it('sends no reminder for a loan the lead already reminded by hand that day', async () => {

@@ -2,6 +2,7 @@ import sharp from 'sharp';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { binForYouSchema, binListSchema, type BinForYou } from '@shared/schemas/bins';
 import { toolForYouSchema, toolListSchema, type ToolForYou } from '@shared/schemas/tools';
+import { loanDueAt } from '@shared/time/chapter-time';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
 import { addBinAs, addToolAs, blindRivetBin, lend, post } from '../helpers/crib';
 import { screwBin } from '../helpers/planning-fixture';
@@ -77,7 +78,7 @@ describe('GET /api/tools/:code in each state', () => {
 
     const shelf = await openTool(member, 'T-0001');
     expect(shelf).toMatchObject({ status: 'available', accessories: ['leather pad'], photoIds: [photo.body.id], loan: null, holds: { waiting: 0, offeredTo: null, offerExpiresAt: null } });
-    expect(shelf.forYou).toEqual({ actions: ['check_out'], reason: null, defaultDueAt: iso(now + shelf.loanDays * DAY), yourHold: null });
+    expect(shelf.forYou).toEqual({ actions: ['check_out'], reason: null, defaultDueAt: loanDueAt(new Date(now), shelf.loanDays, 'UTC').toISOString(), yourHold: null });
     await expectSameAsInList('tools', shelf);
 
     const gated = await openTool(member, 'T-0002');
@@ -91,7 +92,7 @@ describe('GET /api/tools/:code in each state', () => {
     await lend(t, other, 'T-0003', 3 * DAY);
     const lent = await openTool(member, 'T-0003');
     expect(lent.loan).toMatchObject({ holder: { name: 'Otto Other' }, dueAt: iso(now + 3 * DAY) });
-    expect(lent.forYou).toEqual({ actions: ['place_hold'], reason: 'Otto Other has it until Friday, December 4.', defaultDueAt: iso(now + 5 * DAY), yourHold: null });
+    expect(lent.forYou).toEqual({ actions: ['place_hold'], reason: 'Otto Other has it until Friday, December 4.', defaultDueAt: '2026-12-06T23:59:59.999Z', yourHold: null });
     expect((await openTool(other, 'T-0003')).forYou).toMatchObject({ actions: ['return'], reason: null });
     expect((await openTool(qm, 'T-0003')).forYou.actions).toEqual(['return', 'place_hold']);
     await expectSameAsInList('tools', lent);

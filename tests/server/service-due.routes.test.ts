@@ -1,6 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { serviceDueListSchema } from '@shared/schemas/overdue';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { addToolAs, post } from '../helpers/crib';
 
 let t: TestApp;
@@ -26,6 +27,17 @@ const addTool = async (body: Record<string, unknown>) => (await addToolAs(qm, bo
 const wrench = (name: string, lastServiceAt: string) => ({ name, category: 'torque_wrench', serviceIntervalDays: 365, lastServiceAt });
 
 describe('GET /api/service-due', () => {
+  it('counts the days to a calibration in chapter days: due tomorrow 01:00 in the chapter is due in 1 day, not today', async () => {
+    writeChapterTimeZone(t.db, 'America/Chicago'); // now: Tuesday 06:00 there
+    const hours = (n: number) => new Date(t.clock.now.getTime() - 365 * DAY_MS + n * 60 * 60 * 1000).toISOString();
+    const code = await addTool(wrench('Torque wrench, 1/2 drive', hours(19))); // due Wednesday 01:00 in Chicago, 19 hours on
+    const late = await addTool(wrench('Torque wrench, 3/8 drive', hours(-7))); // due Monday 23:00 there, 7 hours ago
+    const res = await qm.agent.get('/api/service-due');
+    const item = (c: string) => (res.body.data as { code: string; daysUntilDue: number; words: string }[]).find((i) => i.code === c);
+    expect(item(code)).toMatchObject({ daysUntilDue: 1, words: 'Calibration due in 1 day' });
+    expect(item(late)).toMatchObject({ daysUntilDue: -1, words: 'Calibration overdue by 1 day' });
+  });
+
   it('lists a torque wrench due within 14 days but not one serviced yesterday', async () => {
     const due = await addTool(wrench('Torque wrench, 1/4 drive', daysAgo(360)));
     await addTool(wrench('Torque wrench, 3/8 drive', daysAgo(1)));

@@ -1,5 +1,6 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { paymentSchema, spendSchema, tabListSchema, tabSchema } from '@shared/schemas/stock-money';
+import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
 import { giveAssemblies } from '../helpers/planning';
 import { buildTestApp, type Crew, type SignedInAgent, type TestApp } from '../helpers/test-app';
@@ -215,6 +216,20 @@ describe('GET /api/stock/spend', () => {
     expect(defaultWindow.body.months).toHaveLength(12);
     expect(defaultWindow.body.months[0].month).toBe('2026-01');
     expect(defaultWindow.body.months[7]).toMatchObject({ month: '2026-08', purchasedCents: 200 * 10 });
+  });
+
+  it('counts months on the chapter’s calendar: a draw on the evening of November 30 in Chicago is November’s', async () => {
+    writeChapterTimeZone(t.db, 'America/Chicago');
+    at('2026-11-10T12:00:00Z');
+    const screws = await addBinAs(qm, screwBin());
+    at('2026-12-01T02:00:00Z'); // Monday, November 30, 20:00 in Chicago; December in UTC
+    await created(post(member, `/api/bins/${screws.code}/draw`, { quantity: 5 }));
+    at('2026-12-01T05:30:00Z'); // still November 30 there (23:30)
+    const spend = await lead.agent.get('/api/stock/spend?months=2');
+    expect(spend.body.months.map((m: { month: string }) => m.month)).toEqual(['2026-10', '2026-11']);
+    expect(spend.body.months[1]).toMatchObject({ month: '2026-11', consumedCents: 5 * SCREW });
+    const tab = await member.agent.get('/api/stock/tab');
+    expect(tab.body.byMonth).toEqual([expect.objectContaining({ month: '2026-11', chargedCents: 5 * SCREW })]);
   });
 
   it('is for the chapter lead only, and checks the window', async () => {

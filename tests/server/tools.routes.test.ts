@@ -1,12 +1,12 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { memberSignoffs, signoffs } from '../../server/db/schema/signoffs';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { addToolAs, post } from '../helpers/crib';
 
 let t: TestApp;
 let qm: SignedInAgent;
 let member: SignedInAgent;
-const DAY_MS = 24 * 60 * 60 * 1000;
 
 beforeEach(async () => {
   t = await buildTestApp();
@@ -58,11 +58,35 @@ describe('POST /api/tools/:code/checkout and /return', () => {
     await addTool({ name: 'Pneumatic rivet puller', category: 'pneumatic_rivet_puller' });
     const out = await post(member, '/api/tools/T-0001/checkout');
     expect(out.status).toBe(201);
-    expect(out.body.dueAt).toBe(new Date(t.clock.now.getTime() + 7 * DAY_MS).toISOString());
+    // Tuesday 12:00 in a chapter on UTC: due by the end of the next Tuesday.
+    expect(out.body.dueAt).toBe('2026-12-08T23:59:59.999Z');
     const again = await post(qm, '/api/tools/T-0001/checkout');
     expect(again.status).toBe(409);
     expect(again.body.error.code).toBe('TOOL_ON_LOAN');
     expect(again.body.error.message).toBe('T-0001 is on loan. Mia Member has it until Tuesday, December 8.');
+  });
+
+  it('makes a loan taken at 23:30 chapter time, on a server running in UTC, due at the end of the chapter day 7 days on', async () => {
+    writeChapterTimeZone(t.db, 'America/Chicago');
+    await addTool({ name: 'Pneumatic rivet puller', category: 'pneumatic_rivet_puller' });
+    t.clock.now = new Date('2026-12-02T05:30:00Z'); // Tuesday, December 1, 23:30 in Chicago; already Wednesday in UTC
+    const before = await member.agent.get('/api/tools/T-0001');
+    expect(before.body.forYou.defaultDueAt).toBe('2026-12-09T05:59:59.999Z');
+    const out = await post(member, '/api/tools/T-0001/checkout');
+    expect(out.status).toBe(201);
+    expect(out.body.dueAt).toBe('2026-12-09T05:59:59.999Z'); // Tuesday, December 8, 23:59:59.999 in Chicago
+    const again = await post(qm, '/api/tools/T-0001/checkout');
+    expect(again.body.error.message).toMatch(/Tuesday, December 8/);
+    const history = await qm.agent.get('/api/tools/T-0001/events');
+    expect(JSON.stringify(history.body)).toContain('Due Tuesday, December 8');
+  });
+
+  it('keeps the due date a week on in chapter days across the change of clocks', async () => {
+    writeChapterTimeZone(t.db, 'Europe/Berlin');
+    await addTool({ name: 'Air drill', category: 'air_drill', loanDays: 7 });
+    t.clock.now = new Date('2027-03-25T09:00:00Z'); // Thursday 10:00 CET; the clocks go forward on Sunday the 28th
+    const out = await post(member, '/api/tools/T-0001/checkout');
+    expect(out.body.dueAt).toBe('2027-04-01T21:59:59.999Z'); // Thursday, April 1, 23:59:59.999 CEST
   });
 
   it('lets exactly one of many simultaneous checkouts win', async () => {
@@ -170,6 +194,7 @@ describe('holds', () => {
     const mail = await t.lastMailTo('qm@example.org');
     expect(mail?.subject).toMatch(/T-0001 Torque wrench is back and held for you/);
     expect(mail?.links[0]).toBe('http://gripline.test/tools/T-0001');
+    expect(mail?.text.replace(/\s+/g, ' ')).toContain('held for you until Dec 3, 2026, 12:00 PM. After that'); // 48 hours, on the chapter's clock
     const refused = await post(member, '/api/tools/T-0001/checkout');
     expect(refused.body.error.code).toBe('TOOL_HELD');
     expect((await post(qm, '/api/tools/T-0001/checkout')).status).toBe(201);

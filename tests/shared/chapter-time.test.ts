@@ -2,9 +2,18 @@ import { describe, expect, it } from 'vitest';
 import {
   addChapterDays,
   chapterDay,
+  chapterDaySpan,
+  chapterHour,
+  chapterMonth,
+  chapterMonthStarts,
   chapterDaysBetween,
+  dateInWords,
   daysLate,
   dayInWords,
+  monthDayInWords,
+  monthInWords,
+  momentInWords,
+  shortDayInWords,
   dueState,
   endOfChapterDay,
   isTimeZone,
@@ -30,6 +39,7 @@ describe('the chapter calendar', () => {
     expect(startOfChapterDay(at, CHICAGO).toISOString()).toBe('2026-11-28T06:00:00.000Z');
     expect(endOfChapterDay(at, CHICAGO).toISOString()).toBe('2026-11-29T05:59:59.999Z');
     expect(startOfDayNamed('2026-11-28', CHICAGO).toISOString()).toBe('2026-11-28T06:00:00.000Z');
+    expect(startOfDayNamed('2026-12-01', AUCKLAND).toISOString()).toBe('2026-11-30T11:00:00.000Z'); // UTC+13: the day starts the evening before in UTC
   });
 
   // US daylight saving time starts on the second Sunday of March and ends on the first Sunday of
@@ -84,5 +94,33 @@ describe('loans by the chapter day', () => {
     const now = new Date('2026-12-01T16:00:00Z');
     expect(dayInWords(new Date('2026-11-29T05:59:59.999Z'), CHICAGO, now)).toBe('Saturday, November 28');
     expect(dayInWords(new Date('2025-12-05T18:00:00Z'), CHICAGO, now)).toBe('Friday, December 5, 2025');
+    expect(dateInWords(new Date('2026-11-29T05:59:59.999Z'), CHICAGO)).toBe('Nov 28, 2026');
+    expect(dateInWords(new Date('2026-11-29T05:59:59.999Z'), AUCKLAND)).toBe('Nov 29, 2026');
+    expect(monthDayInWords(new Date('2026-11-29T05:59:59.999Z'), CHICAGO)).toBe('Nov 28');
+    expect(monthInWords(new Date('2026-12-01T02:00:00Z'), CHICAGO)).toBe('November 2026');
+    expect(monthInWords(new Date('2026-12-01T02:00:00Z'), 'UTC', true)).toBe('Dec 26');
+    expect(momentInWords(new Date('2026-12-02T03:05:00Z'), CHICAGO)).toBe('Dec 1, 2026, 9:05 PM');
+    expect(shortDayInWords(new Date('2026-12-02T03:05:00Z'), CHICAGO)).toBe('Tue, Dec 1, 2026');
+  });
+
+  it('spans typed days from the chapter midnight that starts the first to the one that ends the last', () => {
+    // Days named in Chicago (UTC−6), a span across the autumn clock change (25-hour day on November 1).
+    const span = chapterDaySpan('2026-10-31', '2026-11-01', CHICAGO);
+    expect(span.start.toISOString()).toBe('2026-10-31T05:00:00.000Z');
+    expect(span.end.toISOString()).toBe('2026-11-02T06:00:00.000Z');
+    expect(chapterDaySpan('2026-12-01', '2026-12-01', AUCKLAND)).toEqual({ start: new Date('2026-11-30T11:00:00.000Z'), end: new Date('2026-12-01T11:00:00.000Z') });
+  });
+
+  it('tells the hour on the chapter’s wall clock', () => {
+    expect(chapterHour(new Date('2026-12-01T13:00:00Z'), CHICAGO)).toBe(7);
+    expect(chapterHour(new Date('2026-12-01T13:00:00Z'), 'UTC')).toBe(13);
+    expect(chapterHour(new Date('2026-06-01T12:00:00Z'), CHICAGO)).toBe(7); // daylight time, UTC−5
+  });
+
+  it('puts a moment in the chapter month, and lists the chapter months up to now', () => {
+    const evening = new Date('2026-12-01T02:00:00Z'); // November 30, 20:00 in Chicago
+    expect(chapterMonth(evening, CHICAGO)).toBe('2026-11');
+    expect(chapterMonth(evening, 'UTC')).toBe('2026-12');
+    expect(chapterMonthStarts(evening, 3, CHICAGO).map((d) => d.toISOString())).toEqual(['2026-09-01T05:00:00.000Z', '2026-10-01T05:00:00.000Z', '2026-11-01T05:00:00.000Z']);
   });
 });

@@ -8,6 +8,7 @@ import { csrf } from '../../middleware/csrf';
 import { SESSION_COOKIE } from '../../middleware/session';
 import { endSession, signInSession } from '../../lib/session-helpers';
 import { parseInput } from '../../lib/validate';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { authenticate } from './auth.service';
 
 export function authRouter(loginLimiters: RequestHandler[]) {
@@ -21,11 +22,11 @@ export function authRouter(loginLimiters: RequestHandler[]) {
     const body = parseInput(loginBodySchema, req.body);
     const user = await authenticate(req.ctx, body.email, body.password);
     const csrfToken = await signInSession(req, user.id);
-    res.json({ user: toUser(user), csrfToken });
+    res.json({ user: toUser(user), timeZone: readChapterTimeZone(req.ctx.db), csrfToken });
   });
 
   router.get('/me', (req, res) => {
-    res.json({ user: toUser(requireUser(req)) });
+    res.json({ user: toUser(requireUser(req)), timeZone: readChapterTimeZone(req.ctx.db) });
   });
 
   router.post('/logout', async (req, res) => {

@@ -6,8 +6,8 @@ import type { ActionAnswer } from '../../lib/queued-action';
 import { isUniqueViolation } from '../../lib/sqlite-errors';
 import { httpErrorBody } from '../../middleware/error-handler';
 import { deleteKeysCreatedBefore, findKey, insertKey } from './idempotency.repo';
+import { DAY_MS } from '@shared/time/durations';
 
-const DAY_MS = 24 * 60 * 60 * 1000;
 
 /** JSON with object keys sorted at every level, so the same body always hashes the same. */
 function canonicalJson(value: unknown): string {

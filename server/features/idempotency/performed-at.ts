@@ -1,6 +1,6 @@
 import { OLDEST_PERFORMED_AT_DAYS } from '@shared/schemas/offline';
+import { DAY_MS } from '@shared/time/durations';
 
-const DAY_MS = 24 * 60 * 60 * 1000;
 
 /**
  * When a queued action is recorded as done: the phone's time, but never after the request arrived

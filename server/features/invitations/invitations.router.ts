@@ -7,6 +7,7 @@ import { toUser } from '../../accounts/public-user';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { signInSession } from '../../lib/session-helpers';
 import { parseInput } from '../../lib/validate';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import * as invitations from './invitations.service';
 
 const tokenParams = z.object({ token: linkTokenField });
@@ -40,7 +41,7 @@ export function invitationsRouter() {
     const body = parseInput(acceptInvitationBodySchema, req.body);
     const user = await invitations.acceptInvitation(req.ctx, body.token, body.name, body.password);
     const csrfToken = await signInSession(req, user.id);
-    res.status(201).json({ user: toUser(user), csrfToken });
+    res.status(201).json({ user: toUser(user), timeZone: readChapterTimeZone(req.ctx.db), csrfToken });
   });
 
   return router;

@@ -17,8 +17,9 @@ import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { invitationMail } from '../../mail/messages';
 import { queueMail } from '../../mail/outbox';
+import { DAY_MS } from '@shared/time/durations';
 
-export const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
+export const INVITATION_LIFETIME_MS = 7 * DAY_MS;
 
 function alreadyHasAccount(email: string): HttpError {
   return new HttpError(409, 'ALREADY_HAS_ACCOUNT', `${email} already has a Gripline account; change its role on the People page instead.`);

@@ -1,10 +1,12 @@
 import type { Alert } from '@shared/schemas/forecast';
 import { valueAtCost } from '@shared/stock/money';
+import { dayInWords, startOfDayNamed } from '@shared/time/chapter-time';
 import type { ServiceContext } from '../../context';
 import type { OutgoingMail } from '../../mail/mailer';
-import { plural, valueWords } from '../../mail/messages';
+import { plural, valueWords, type MailCalendar } from '../../mail/messages';
 import { queueMail } from '../../mail/outbox';
 import { finishJobRun, startJobRun } from '../../jobs/job-runs.repo';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { activeQuartermasters } from './alerts.repo';
 import { listAlertsIn, refreshAlerts } from './alerts.service';
 
@@ -17,11 +19,13 @@ export interface AlertDigestResult {
   error: string | null;
 }
 
-function alertLine(a: Alert): string {
+function alertLine(a: Alert, calendar: MailCalendar): string {
   const { bin } = a;
   const part = bin.supplierPart ? `, part ${bin.supplierPart}` : '';
   const head = `- ${bin.code} ${bin.designation}${part}: ${bin.onHand} ${bin.unit} on hand`;
-  const onOrder = a.state === 'ordered' ? `; ordered ${a.orderedQty} on ${a.orderedAt?.slice(0, 10)}, ${a.onOrder} still to come, expected ${a.expectedAt}` : '';
+  const ordered = a.orderedAt ? ` on ${dayInWords(new Date(a.orderedAt), calendar.zone, calendar.now)}` : '';
+  const expected = a.expectedAt ? `, expected ${dayInWords(startOfDayNamed(a.expectedAt, calendar.zone), calendar.zone, calendar.now)}` : '';
+  const onOrder = a.state === 'ordered' ? `; ordered ${a.orderedQty}${ordered}, ${a.onOrder} still to come${expected}` : '';
   if (a.toOrder === 0) return `${head}${onOrder}`;
   // The quantity is the one reorder rule's, as on Restock and the purchase list.
   const packs = a.toOrder / bin.packSize;
@@ -29,7 +33,7 @@ function alertLine(a: Alert): string {
 }
 
 /** The quartermaster's morning list: alerts still to order and orders on their way, by supplier. */
-export function alertDigestMail(to: string, name: string, alerts: Alert[], publicUrl: string): OutgoingMail {
+export function alertDigestMail(to: string, name: string, alerts: Alert[], publicUrl: string, calendar: MailCalendar): OutgoingMail {
   const open = alerts.filter((a) => a.toOrder > 0).length;
   const bySupplier = new Map<string, Alert[]>();
   for (const a of alerts) bySupplier.set(a.bin.supplier, [...(bySupplier.get(a.bin.supplier) ?? []), a]);
@@ -41,7 +45,7 @@ export function alertDigestMail(to: string, name: string, alerts: Alert[], publi
       `Hello ${name},`,
       ``,
       `These bins are at or near their reorder point, by supplier. Suggested quantities are in whole packs.`,
-      ...suppliers.flatMap((s) => [``, `${s || 'No supplier set'}:`, ...bySupplier.get(s)!.sort((x, y) => x.bin.code.localeCompare(y.bin.code)).map(alertLine)]),
+      ...suppliers.flatMap((s) => [``, `${s || 'No supplier set'}:`, ...bySupplier.get(s)!.sort((x, y) => x.bin.code.localeCompare(y.bin.code)).map((a) => alertLine(a, calendar))]),
       ``,
       `Mark each one ordered (with the expected day) or dismiss it on the Alerts page, where the`,
       `purchase list groups them by supplier and exports a CSV:`,
@@ -63,9 +67,10 @@ export function runAlertDigest(ctx: ServiceContext): AlertDigestResult {
     let digestsSent = 0;
     if (open > 0) {
       const now = ctx.now();
+      const calendar = { zone: readChapterTimeZone(ctx.db), now };
       ctx.db.transaction((db) => {
         for (const qm of activeQuartermasters(db)) {
-          queueMail(db, alertDigestMail(qm.email, qm.name, alerts, ctx.publicUrl), now);
+          queueMail(db, alertDigestMail(qm.email, qm.name, alerts, ctx.publicUrl, calendar), now);
           digestsSent++;
         }
       });

@@ -1,9 +1,11 @@
 import { Router } from 'express';
 import { noFieldsBodySchema } from '@shared/schemas/fields';
 import { alertIdParams, alertListQuerySchema, dismissBodySchema, markOrderedBodySchema } from '@shared/schemas/forecast';
+import { chapterDay } from '@shared/time/chapter-time';
 import { sendCsv } from '../../lib/csv';
 import { parseInput } from '../../lib/validate';
 import { requireRole, requireUser } from '../../middleware/auth';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { closeAlert, dismissAlert, listAlertsIn, markOrdered, refreshAlerts, refreshIfStale } from './alerts.service';
 import { purchaseList, purchaseListCsv } from './purchase-list';
 
@@ -32,7 +34,7 @@ export function alertsRouter() {
   });
 
   router.get('/purchase-list.csv', (req, res) => {
-    sendCsv(res, `gripline-purchase-list-${req.ctx.now().toISOString().slice(0, 10)}.csv`, purchaseListCsv(req.ctx));
+    sendCsv(res, `gripline-purchase-list-${chapterDay(req.ctx.now(), readChapterTimeZone(req.ctx.db))}.csv`, purchaseListCsv(req.ctx));
   });
 
   router.post('/:id/ordered', (req, res) => {

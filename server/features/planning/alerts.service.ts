@@ -1,14 +1,17 @@
 import type { Alert, AlertState, MarkOrderedBody } from '@shared/schemas/forecast';
+import { chapterDay } from '@shared/time/chapter-time';
 import type { ServiceContext } from '../../context';
 import type { Database } from '../../db/client';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { moveAlert, raiseAlerts, statesAllowing, type AlertEvent } from '../../reorder-alerts/alert-state';
 import { activeAlertBinIds, findAlert, listAlerts, type AlertWithBin } from './alerts.repo';
 import { binBrief } from './bin-brief';
 import { reorderPlan, type PlannedOrder, type ReorderPlan } from './reorder-plan';
 
-const day = (d: Date) => d.toISOString().slice(0, 10);
+/** An expected day is stored by its name, at the UTC midnight of "2026-12-09". */
+const dayName = (d: Date) => chapterDay(d, 'UTC');
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
 /** An alert with what the one reorder rule says now: still to order (0 once closed or dismissed) and still on order. */
@@ -31,7 +34,7 @@ export function toAlertDto({ alert: a, bin, orderedByName }: AlertWithBin, now: 
     onOrder: a.state === 'ordered' ? Math.max(0, (a.orderedQty ?? 0) - a.receivedQty) : 0,
     toOrder: active ? (now?.toOrder ?? 0) : 0,
     // The day the quartermaster was told, as entered (YYYY-MM-DD).
-    expectedAt: a.expectedAt ? day(a.expectedAt) : null,
+    expectedAt: a.expectedAt ? dayName(a.expectedAt) : null,
     closedAt: iso(a.closedAt),
     dismissedAt: iso(a.dismissedAt),
     dismissReason: a.dismissReason,
@@ -119,7 +122,7 @@ function moveOrRefuse(ctx: ServiceContext, id: number, e: AlertEvent): Alert {
 export function markOrdered(ctx: ServiceContext, actor: UserRow, id: number, body: MarkOrderedBody): Alert {
   const found = alertOrThrow(ctx, id);
   const now = ctx.now();
-  if (body.expectedAt < day(now)) {
+  if (body.expectedAt < chapterDay(now, readChapterTimeZone(ctx.db))) {
     const message = `The expected day (${body.expectedAt}) is in the past. Enter the day the order should arrive.`;
     throw new HttpError(400, 'VALIDATION_FAILED', message, [{ path: 'expectedAt', message }]);
   }

@@ -1,3 +1,4 @@
+import { chapterDay } from '@shared/time/chapter-time';
 import type { BinForecastDto, ForecastList } from '@shared/schemas/forecast';
 import type { ServiceContext } from '../../context';
 import { HttpError } from '../../lib/http-error';
@@ -16,7 +17,7 @@ const round4 = rounder(4);
 function toForecastDto({ plan: { bin, forecast: f, receipts }, toOrder, quiet }: PlannedOrder, weeks: Date[]): BinForecastDto {
   return {
     bin: binBrief(bin),
-    weeks: weeks.map((w) => w.toISOString().slice(0, 10)),
+    weeks: weeks.map((w) => chapterDay(w, 'UTC')),
     weeklyDemand: f.weeklyDemand.map(round2),
     demandSource: f.demandSource,
     projected: f.projected.map(round2),

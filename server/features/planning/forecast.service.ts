@@ -10,9 +10,11 @@ import {
   type ExpectedReceipt,
   type PlannedAssembly,
 } from '@shared/forecast/demand';
+import { chapterDay, startOfDayNamed } from '@shared/time/chapter-time';
 import type { ServiceContext } from '../../context';
 import type { Executor } from '../../db/client';
 import type { BinRow } from '../../db/schema/stock';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { readPlanningSettings, type PlanningSettings } from '../../settings/planning-settings';
 import { assemblyBinNeeds, binIndex } from './assembly-needs';
 import { allBins, assembliesIn, drawnForAssemblies, orderedAlerts, weeklyConsumption } from './forecast.repo';
@@ -59,13 +61,24 @@ function plannedDemand(db: Executor, settings: PlanningSettings, bins: readonly 
   return spreadAssemblyDemand(planned, weeks);
 }
 
-/** The last 26 full weeks of net draws per bin, bucketed by week in the database. */
-function drawHistory(db: Executor, now: Date): Map<number, number[]> {
-  const current = startOfUtcWeek(now);
+/**
+ * Today on the chapter's calendar, as the forecast's weeks count it. Planned and expected days are
+ * stored by their names (at the UTC midnight of the name), so the weeks run on day names: week 0 is
+ * the chapter week holding now, whatever the server's zone.
+ */
+const chapterToday = (now: Date, zone: string): Date => new Date(`${chapterDay(now, zone)}T00:00:00Z`);
+
+/**
+ * The last 26 full chapter weeks of net draws per bin, bucketed by week in the database from the
+ * chapter's Monday midnight (a week with a clock change is an hour off at its edge).
+ */
+function drawHistory(db: Executor, today: Date, zone: string): Map<number, number[]> {
+  const current = startOfUtcWeek(today);
   const from = new Date(current.getTime() - HORIZON_WEEKS * WEEK_MS);
-  const rows = weeklyConsumption(db, from, current, WEEK_MS);
+  const midnight = (named: Date) => startOfDayNamed(chapterDay(named, 'UTC'), zone);
+  const rows = weeklyConsumption(db, midnight(from), midnight(current), WEEK_MS);
   const entries = rows.map((r) => ({ binId: r.binId, at: new Date(from.getTime() + r.week * WEEK_MS), quantity: r.quantity }));
-  return weeklyDrawHistory(entries, now, HORIZON_WEEKS);
+  return weeklyDrawHistory(entries, today, HORIZON_WEEKS);
 }
 
 function expectedReceipts(db: Executor, weeks: Date[]): Map<number, ExpectedReceipt[]> {
@@ -81,11 +94,13 @@ function expectedReceipts(db: Executor, weeks: Date[]): Map<number, ExpectedRece
 /** Every bin's forecast from four queries: bins, assemblies, draws naming them, the draw history, open orders. */
 export function forecastBins(ctx: ServiceContext): ForecastRun {
   const now = ctx.now();
+  const zone = readChapterTimeZone(ctx.db);
+  const today = chapterToday(now, zone);
   const settings = readPlanningSettings(ctx.db);
-  const weeks = weekStarts(now, HORIZON_WEEKS);
+  const weeks = weekStarts(today, HORIZON_WEEKS);
   const bins = allBins(ctx.db);
   const planned = plannedDemand(ctx.db, settings, bins, weeks);
-  const history = drawHistory(ctx.db, now);
+  const history = drawHistory(ctx.db, today, zone);
   const receipts = expectedReceipts(ctx.db, weeks);
   const plans = bins.map((bin): BinPlan => {
     const binReceipts = receipts.get(bin.id) ?? [];

@@ -1,11 +1,16 @@
+import { chapterDay } from '@shared/time/chapter-time';
 import type { Assembly, AssemblyLine, Build, ExtraItem } from '@shared/schemas/builds';
 import type { BuildRow } from '../../db/schema/builds';
 import type { AssemblyInBuild } from './assemblies.repo';
 import type { AssemblySummaryRow } from './builds.repo';
 
-/** Planned dates are whole days: stored as midnight UTC, shown as 2027-01-15. */
+/**
+ * Planned dates are chapter days by name: stored at the UTC midnight of the name (a label, not a
+ * moment), read back as 2027-01-15, and compared with the chapter's today by name (the forecast
+ * counts its weeks on these names).
+ */
 export const dayToDate = (day: string | null): Date | null => (day === null ? null : new Date(`${day}T00:00:00Z`));
-export const dateToDay = (date: Date | null): string | null => (date === null ? null : date.toISOString().slice(0, 10));
+export const dateToDay = (date: Date | null): string | null => (date === null ? null : chapterDay(date, 'UTC'));
 
 /** Lines and extra items were checked by the shared schemas before they were stored. */
 export const parseLines = (json: string) => JSON.parse(json) as AssemblyLine[];

@@ -1,17 +1,19 @@
 import { Cron } from 'croner';
 import type { ServiceContext } from '../../context';
+import { atChapterHour, HOURLY } from '../../jobs/chapter-hour';
 import type { Logger } from '../../lib/logger';
 import { ALERT_DIGEST_JOB, runAlertDigest } from './alert-digest';
 
-/** Daily at 07:00 server local time, with the crib's overdue run: the morning's list before the hangar opens. */
-const ALERT_DIGEST_SCHEDULE = '0 7 * * *';
+/** Daily at 07:00 on the chapter's clock, with the crib's overdue run: the morning's list before the hangar opens. */
+const ALERT_DIGEST_HOUR = 7;
 
 /** Starts planning's timed job. A failing run is logged and the schedule goes on; `protect` skips overlapping ticks. */
 export function startPlanningScheduler(ctx: ServiceContext, logger: Logger): { stop(): void } {
-  const job = new Cron(ALERT_DIGEST_SCHEDULE, { name: ALERT_DIGEST_JOB, protect: true, unref: true }, () => {
+  const digest = atChapterHour(ctx, ALERT_DIGEST_HOUR, () => runAlertDigest(ctx));
+  const job = new Cron(HOURLY, { name: ALERT_DIGEST_JOB, protect: true, unref: true }, async () => {
     try {
-      const result = runAlertDigest(ctx);
-      logger.info({ job: ALERT_DIGEST_JOB, result }, 'scheduled job finished');
+      const result = await digest();
+      if (result) logger.info({ job: ALERT_DIGEST_JOB, result }, 'scheduled job finished');
     } catch (err) {
       logger.error({ job: ALERT_DIGEST_JOB, err }, 'scheduled job failed');
     }

@@ -15,19 +15,19 @@ import {
   writeOffBodySchema,
 } from '@shared/schemas/bins';
 import { idParam } from '@shared/schemas/fields';
+import { chapterDaySpan, startOfDayNamed } from '@shared/time/chapter-time';
 import { z } from 'zod';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { PRIVATE_FILE_CACHE } from '../../middleware/cache-control';
 import type { RunQueuedAction } from '../../lib/queued-action';
 import { parseInput } from '../../lib/validate';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { createBin, editBin, getBinForYou, getBinReorder, listBinPage, restockList } from './bins.service';
 import { count, draw, ledgerFor, move, receive, returnUnused, reverse, writeOff } from './ledger.service';
 import type { NameAssemblies } from './assembly-names';
 import type { ReordersOf } from './bin-reorders';
 import { readSlip, receiveSlipUpload, storeSlip } from './slips.service';
 
-const DAY_MS = 24 * 60 * 60 * 1000;
-const dayStart = (day: string) => new Date(`${day}T00:00:00Z`);
 
 /**
  * /api/bins: the bins, their ledger, and the movements members and the quartermaster make by scan.
@@ -78,8 +78,10 @@ export function binsRouter({ runQueuedAction, nameAssemblies, reordersOf }: { ru
 
   router.get('/:code/ledger', (req, res) => {
     const q = parseInput(ledgerQuerySchema, req.query, 'query');
-    const to = q.to ? new Date(dayStart(q.to).getTime() + DAY_MS) : undefined;
-    res.json({ data: ledgerFor(req.ctx, nameAssemblies, requireUser(req), code(req.params), q.from ? dayStart(q.from) : undefined, to, q.limit) });
+    const zone = readChapterTimeZone(req.ctx.db);
+    const from = q.from ? startOfDayNamed(q.from, zone) : undefined;
+    const to = q.to ? chapterDaySpan(q.to, q.to, zone).end : undefined;
+    res.json({ data: ledgerFor(req.ctx, nameAssemblies, requireUser(req), code(req.params), from, to, q.limit) });
   });
 
   router.post('/:code/draw', (req, res) =>

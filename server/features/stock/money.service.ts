@@ -6,15 +6,15 @@ import type { ServiceContext } from '../../context';
 import type { MovementRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { binDesignation } from '@shared/stock/fasteners';
 import { e4ToDollars, valueCents } from '@shared/stock/money';
+import { chapterMonth, chapterMonthStarts } from '@shared/time/chapter-time';
 import { namesFor, withNames, type NameAssemblies } from './assembly-names';
 import { insertPayment, namesOf, paidByPerson, paymentById, paymentsOf, spendEntries, tabEntries, type PaymentRow, type TabEntryRow } from './money.repo';
 
 const RECENT_ENTRIES = 25;
 
-/** A UTC calendar month, like 2026-11. */
-const monthOf = (at: number | Date) => new Date(at).toISOString().slice(0, 7);
 
 /**
  * What an entry adds to a member's tab, valued entry by entry at the unit cost it was taken at:
@@ -57,6 +57,8 @@ export function readTab(ctx: ServiceContext, nameAssemblies: NameAssemblies, vie
   const entries = tabEntries(ctx.db, member.id);
   const payments = paymentsOf(ctx.db, member.id);
 
+  const zone = readChapterTimeZone(ctx.db);
+  const monthOf = (at: number | Date) => chapterMonth(new Date(at), zone);
   const months = new Map<string, { chargedCents: number; paidCents: number }>();
   const monthRow = (month: string) => months.get(month) ?? months.set(month, { chargedCents: 0, paidCents: 0 }).get(month)!;
   const assemblies = new Map<number | null, { quantity: number; chargedCents: number }>();
@@ -119,13 +121,6 @@ export function recordPayment(ctx: ServiceContext, actor: UserRow, body: RecordP
   return paymentDto(paymentById(ctx.db, row.id)!);
 }
 
-/** The first instant of each of the last `count` UTC months, up to and including the month of `now`. */
-function lastMonths(now: Date, count: number): Date[] {
-  const y = now.getUTCFullYear();
-  const m = now.getUTCMonth();
-  return Array.from({ length: count }, (_, i) => new Date(Date.UTC(y, m - (count - 1) + i, 1)));
-}
-
 const noKinds = () => Object.fromEntries(BIN_KINDS.map((k) => [k, 0])) as Record<BinKind, number>;
 
 /**
@@ -134,7 +129,9 @@ const noKinds = () => Object.fromEntries(BIN_KINDS.map((k) => [k, 0])) as Record
  * Every month in the window is present, empty ones included, oldest first.
  */
 export function chapterSpend(ctx: ServiceContext, monthCount: number): Spend {
-  const starts = lastMonths(ctx.now(), monthCount);
+  const zone = readChapterTimeZone(ctx.db);
+  const monthOf = (at: number | Date) => chapterMonth(new Date(at), zone);
+  const starts = chapterMonthStarts(ctx.now(), monthCount, zone);
   const months = new Map<string, SpendMonth>(
     starts.map((d) => [monthOf(d), { month: monthOf(d), consumedCents: 0, byKind: noKinds(), purchasedCents: 0, countAdjustmentCents: 0 }]),
   );

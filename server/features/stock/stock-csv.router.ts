@@ -1,10 +1,12 @@
 import express, { Router, type Request } from 'express';
 import { binImportBodySchema, ledgerExportQuerySchema } from '@shared/schemas/bin-import';
 import { decodeCsvBytes, lineWithReplacementCharacter } from '@shared/stock/csv-text';
+import { chapterDay } from '@shared/time/chapter-time';
 import { HttpError } from '../../lib/http-error';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { sendCsv } from '../../lib/csv';
 import { parseInput } from '../../lib/validate';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { commitImport, previewImport } from './bin-import.service';
 import { binsCsv, ledgerCsv, templateCsv } from './stock-export.service';
 import type { NameAssemblies } from './assembly-names';
@@ -62,7 +64,7 @@ export function binCsvRouter({ nameAssemblies }: { nameAssemblies: NameAssemblie
   });
 
   router.get('/export.csv', quartermaster, (req, res) => {
-    sendCsv(res, `gripline-bins-${req.ctx.now().toISOString().slice(0, 10)}.csv`, binsCsv(req.ctx));
+    sendCsv(res, `gripline-bins-${chapterDay(req.ctx.now(), readChapterTimeZone(req.ctx.db))}.csv`, binsCsv(req.ctx));
   });
 
   router.get('/ledger.csv', quartermaster, (req, res) => {

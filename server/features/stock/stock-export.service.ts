@@ -3,7 +3,9 @@ import type { BinFields, CreateBinInput } from '@shared/schemas/bins';
 import type { ServiceContext } from '../../context';
 import { centsCell, textCell as text, toCsv, type CsvCell as Cell } from '../../lib/csv';
 import { HttpError } from '../../lib/http-error';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { binDesignation } from '@shared/stock/fasteners';
+import { chapterDaySpan } from '@shared/time/chapter-time';
 import { toBinFields } from './bin-dto';
 import { BIN_COLUMNS, binCell } from './bin-csv';
 import { ALL_BINS } from './bin-import-check';
@@ -28,12 +30,10 @@ export function binsCsv(ctx: ServiceContext): string {
 
 const LEDGER_FIELDS = ['id', 'at', 'bin_code', 'designation', 'kind', 'quantity', 'balance_after', 'unit_cost', 'value', 'by', 'for_member', 'assembly_id', 'assembly', 'build', 'note', 'reverses_id'];
 const LEDGER_EXPORT_LIMIT = 500_000;
-const DAY_MS = 24 * 60 * 60 * 1000;
 
-/** Every ledger entry from the first day to the last, whole days in UTC, oldest first. */
+/** Every ledger entry from the first day to the last, whole chapter days, oldest first. */
 export function ledgerCsv(ctx: ServiceContext, nameAssemblies: NameAssemblies, range: LedgerExportQuery): string {
-  const from = new Date(`${range.from}T00:00:00Z`);
-  const to = new Date(new Date(`${range.to}T00:00:00Z`).getTime() + DAY_MS);
+  const { start: from, end: to } = chapterDaySpan(range.from, range.to, readChapterTimeZone(ctx.db));
   const entries = listMovements(ctx.db, { from, to, limit: LEDGER_EXPORT_LIMIT + 1 });
   if (entries.length > LEDGER_EXPORT_LIMIT) {
     throw new HttpError(400, 'RANGE_TOO_LARGE', `More than ${LEDGER_EXPORT_LIMIT} ledger entries fall in that range. Export a shorter range.`);

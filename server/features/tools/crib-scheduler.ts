@@ -1,11 +1,12 @@
 import { Cron } from 'croner';
 import type { ServiceContext } from '../../context';
+import { atChapterHour, HOURLY } from '../../jobs/chapter-hour';
 import type { Logger } from '../../lib/logger';
 import { expireHoldOffers } from './holds.service';
 import { runOverdueReminders } from './reminder-job';
 
-/** Daily at 07:00 server local time: before the hangar opens, after the night. */
-const OVERDUE_SCHEDULE = '0 7 * * *';
+/** Daily at 07:00 on the chapter's clock: before the hangar opens, after the night. */
+const OVERDUE_HOUR = 7;
 /** Every 5 minutes, so a held tool goes to the next person soon after its offer runs out. */
 const HOLD_OFFER_SCHEDULE = '*/5 * * * *';
 /** Daily at 03:30 server local time, when nobody is at the bench. */
@@ -32,7 +33,7 @@ export function startCribScheduler(ctx: ServiceContext, logger: Logger, housekee
     }
   };
   const jobs = [
-    new Cron(OVERDUE_SCHEDULE, { name: 'overdue-reminders', protect: true, unref: true }, guarded('overdue-reminders', () => Promise.resolve().then(() => runOverdueReminders(ctx)))),
+    new Cron(HOURLY, { name: 'overdue-reminders', protect: true, unref: true }, guarded('overdue-reminders', atChapterHour(ctx, OVERDUE_HOUR, () => runOverdueReminders(ctx)))),
     new Cron(HOLD_OFFER_SCHEDULE, { name: 'expire-hold-offers', protect: true, unref: true }, guarded('expire-hold-offers', () => Promise.resolve().then(() => expireHoldOffers(ctx)))),
     ...housekeeping.map((job) => new Cron(HOUSEKEEPING_SCHEDULE, { name: job.name, protect: true, unref: true }, guarded(job.name, () => Promise.resolve().then(job.run)))),
   ];

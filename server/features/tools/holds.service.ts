@@ -43,8 +43,9 @@ export function offerToNextInQueue(ctx: ServiceContext, tool: ToolRow, now: Date
   const until = offerEnds(ctx, now);
   ctx.db.update(holds).set({ status: 'offered', offeredAt: now, offerExpiresAt: until }).where(eq(holds.id, next.id)).run();
   const event: ToolStateEvent = tool.status === 'held' ? 'pass_offer' : 'offer';
-  moveTool(ctx.db, tool, event, { actorId: null, at: now, detail: `Set aside for ${next.name} until ${momentInWords(until, readChapterTimeZone(ctx.db))}` });
-  queueMail(ctx.db, holdOfferedMail(next.email, next.name, tool, until, toolLink(ctx, tool.code)), now);
+  const zone = readChapterTimeZone(ctx.db);
+  moveTool(ctx.db, tool, event, { actorId: null, at: now, detail: `Set aside for ${next.name} until ${momentInWords(until, zone)}` });
+  queueMail(ctx.db, holdOfferedMail(next.email, next.name, tool, until, toolLink(ctx, tool.code), { zone, now }), now);
   return { userId: next.userId, name: next.name };
 }
 

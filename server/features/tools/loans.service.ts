@@ -1,10 +1,11 @@
 import type { CheckoutBody, ReturnBody } from '@shared/schemas/tools';
 import { hasRole } from '@shared/roles';
+import { dayInWords, loanDueAt } from '@shared/time/chapter-time';
+import { DAY_MS } from '@shared/time/durations';
 import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { isUniqueViolation } from '../../lib/sqlite-errors';
-import { dayInWords } from '@shared/time/chapter-time';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { offerToNextInQueue } from './holds.service';
 import { loanStatements } from './loans.repo';
@@ -16,9 +17,7 @@ import { moveTool } from './tool-state';
 import { heldWords, loanWords } from './tool-words';
 import type { ToolRow } from './tools.repo';
 
-const DAY_MS = 24 * 60 * 60 * 1000;
 const MAX_LOAN_MS = 365 * DAY_MS;
-
 
 export interface LoanResult {
   id: number;
@@ -38,8 +37,8 @@ function toolOrThrow(ctx: ServiceContext, code: string): ToolRow {
   return tool;
 }
 
-function dueDate(tool: ToolRow, body: CheckoutBody, now: Date): Date {
-  if (!body.dueAt) return new Date(now.getTime() + effectiveLoanDays(tool) * DAY_MS);
+function dueDate(tool: ToolRow, body: CheckoutBody, now: Date, zone: string): Date {
+  if (!body.dueAt) return loanDueAt(now, effectiveLoanDays(tool), zone);
   const due = new Date(body.dueAt);
   if (due.getTime() <= now.getTime()) throw new HttpError(400, 'DUE_DATE_PAST', 'The due date must be in the future.');
   if (due.getTime() - now.getTime() > MAX_LOAN_MS) throw new HttpError(400, 'DUE_DATE_TOO_FAR', 'A loan lasts at most a year.');
@@ -56,18 +55,19 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
   const s = loanStatements(ctx.db);
   const now = ctx.now();
   const at = performedAt ?? now;
+  const zone = readChapterTimeZone(ctx.db);
   return ctx.db.$client.transaction(() => {
     const tool = toolOrThrow(ctx, code);
     if (tool.status === 'on_loan') {
       const loan = s.openLoan.get({ toolId: tool.id });
-      const who = loan ? loanWords({ name: loan.holderName, you: loan.userId === user.id }, loan.dueAt, now, readChapterTimeZone(ctx.db)) : '';
+      const who = loan ? loanWords({ name: loan.holderName, you: loan.userId === user.id }, loan.dueAt, now, zone) : '';
       throw new HttpError(409, 'TOOL_ON_LOAN', `${tool.code} is on loan. ${who}`.trim());
     }
     let holdId: number | undefined;
     if (tool.status === 'held') {
       const offer = s.offeredHold.get({ toolId: tool.id });
       if (offer && offer.userId !== user.id) {
-        throw new HttpError(409, 'TOOL_HELD', `${tool.code} is not free. ${heldWords(offer.name, offer.offerExpiresAt, readChapterTimeZone(ctx.db))}`);
+        throw new HttpError(409, 'TOOL_HELD', `${tool.code} is not free. ${heldWords(offer.name, offer.offerExpiresAt, zone)}`);
       }
       holdId = offer?.id;
     } else if (tool.status === 'out_of_service') {
@@ -76,7 +76,7 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
       throw new HttpError(403, 'TOOL_UNAVAILABLE', `${tool.code} is ${tool.status === 'lost' ? 'marked lost' : 'retired'} and cannot be checked out.`);
     }
     refuseWithoutSignoff(ctx, tool, user);
-    const due = dueDate(tool, body, at);
+    const due = dueDate(tool, body, at, zone);
     const taken = accessoriesTaken(ctx, tool, body.accessories);
     let loanId: number;
     try {
@@ -91,7 +91,7 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
       actorId: user.id,
       at,
       now,
-      detail: `Due ${dayInWords(due, readChapterTimeZone(ctx.db), at)}`,
+      detail: `Due ${dayInWords(due, zone, at)}`,
       facts: { offeredToActor: holdId !== undefined },
     });
     if (holdId !== undefined) s.fulfilHold.run({ holdId, at: at.getTime() });

@@ -4,7 +4,8 @@ import { queueMail } from '../../mail/outbox';
 import { expireHoldOffers } from './holds.service';
 import { finishJobRun, startJobRun } from '../../jobs/job-runs.repo';
 import { activeLeads, claimReminder } from './overdue.repo';
-import { calendarDay, OVERDUE_JOB, overdueLoans, toMailLine } from './overdue.service';
+import { chapterDay } from '@shared/time/chapter-time';
+import { chapterCalendar, OVERDUE_JOB, overdueLoans, toMailLine } from './overdue.service';
 
 export interface OverdueRunResult {
   summary: string;
@@ -34,19 +35,20 @@ export function runOverdueReminders(ctx: ServiceContext): OverdueRunResult {
   const counts = { remindersSent: 0, digestsSent: 0, holdOffersExpired: 0 };
   try {
     counts.holdOffersExpired = expireHoldOffers(ctx);
-    const now = ctx.now();
-    const day = calendarDay(now);
-    const overdue = overdueLoans(ctx);
+    const calendar = chapterCalendar(ctx);
+    const { now } = calendar;
+    const day = chapterDay(now, calendar.zone);
+    const overdue = overdueLoans(ctx, calendar);
     ctx.db.transaction((db) => {
       for (const row of overdue) {
         if (!claimReminder(db, { loanId: row.loanId, day, sentAt: now, sentById: null })) continue;
-        queueMail(db, overdueReminderMail(toMailLine(row, now), ctx.publicUrl), now);
+        queueMail(db, overdueReminderMail(toMailLine(row, calendar), ctx.publicUrl, calendar), now);
         counts.remindersSent++;
       }
       if (overdue.length === 0) return;
-      const lines = overdue.map((row) => toMailLine(row, now));
+      const lines = overdue.map((row) => toMailLine(row, calendar));
       for (const lead of activeLeads(db)) {
-        queueMail(db, overdueDigestMail(lead.email, lead.name, lines, ctx.publicUrl), now);
+        queueMail(db, overdueDigestMail(lead.email, lead.name, lines, ctx.publicUrl, calendar), now);
         counts.digestsSent++;
       }
     });

@@ -8,18 +8,17 @@ import {
   type ServiceUrgency,
 } from '@shared/schemas/overdue';
 import type { MissingAccessory } from '@shared/schemas/tools';
+import { chapterDaysBetween, daysLate } from '@shared/time/chapter-time';
 import type { ServiceContext } from '../../context';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { openMissingAccessories } from './missing-accessories';
 import { listServiceCandidates } from './service-due.repo';
 import { serviceDueAt, toolIdentity } from './tool-dto';
 import type { ToolRow } from './tools.repo';
 
-const DAY_MS = 24 * 60 * 60 * 1000;
-
-/** Whole days left, counted down; once the date has passed, whole days overdue as a negative, at least 1. */
-function wholeDaysUntil(dueAt: Date, now: Date): number {
-  const ms = dueAt.getTime() - now.getTime();
-  return ms > 0 ? Math.floor(ms / DAY_MS) : -Math.max(1, Math.floor(-ms / DAY_MS));
+/** Chapter days left (0: due today); once the moment has passed, chapter days overdue as a negative, at least 1. */
+function chapterDaysUntil(dueAt: Date, now: Date, zone: string): number {
+  return dueAt.getTime() > now.getTime() ? chapterDaysBetween(now, dueAt, zone) : -daysLate(dueAt, now, zone);
 }
 
 function urgencyOf(row: ToolRow, daysUntilDue: number | null, missing: readonly MissingAccessory[]): ServiceUrgency | undefined {
@@ -30,9 +29,9 @@ function urgencyOf(row: ToolRow, daysUntilDue: number | null, missing: readonly 
   return undefined;
 }
 
-function toItem(row: ToolRow, now: Date, missing: readonly MissingAccessory[]): ServiceDueItem | undefined {
+function toItem(row: ToolRow, now: Date, zone: string, missing: readonly MissingAccessory[]): ServiceDueItem | undefined {
   const dueAt = serviceDueAt(row);
-  const daysUntilDue = dueAt ? wholeDaysUntil(dueAt, now) : null;
+  const daysUntilDue = dueAt ? chapterDaysUntil(dueAt, now, zone) : null;
   const urgency = urgencyOf(row, daysUntilDue, missing);
   if (!urgency) return undefined;
   const kind = serviceKindOf(row.category);
@@ -63,11 +62,12 @@ function toItem(row: ToolRow, now: Date, missing: readonly MissingAccessory[]): 
  */
 export function listServiceDue(ctx: ServiceContext): ServiceDueList {
   const now = ctx.now();
+  const zone = readChapterTimeZone(ctx.db);
   const rank = (u: ServiceUrgency) => SERVICE_URGENCIES.indexOf(u);
   const rows = listServiceCandidates(ctx.db);
   const missing = openMissingAccessories(ctx.db, rows.map((r) => r.id));
   const data = rows
-    .map((row) => toItem(row, now, missing.get(row.id) ?? []))
+    .map((row) => toItem(row, now, zone, missing.get(row.id) ?? []))
     .filter((item): item is ServiceDueItem => item !== undefined)
     .sort((a, b) => rank(a.urgency) - rank(b.urgency) || (a.daysUntilDue ?? Infinity) - (b.daysUntilDue ?? Infinity) || a.code.localeCompare(b.code));
   return { data, meta: { dueWithinDays: SERVICE_DUE_WITHIN_DAYS } };

@@ -3,8 +3,8 @@ import type { Tool } from '@shared/schemas/tools';
 import { DEFAULT_LOAN_DAYS } from '@shared/tools/categories';
 import { accessoryList } from './missing-accessories';
 import type { ToolExtras, ToolRow } from './tools.repo';
+import { DAY_MS } from '@shared/time/durations';
 
-const DAY_MS = 24 * 60 * 60 * 1000;
 
 export function effectiveLoanDays(row: Pick<ToolRow, 'loanDays' | 'category'>): number {
   return row.loanDays ?? DEFAULT_LOAN_DAYS[row.category];

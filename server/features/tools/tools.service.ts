@@ -1,15 +1,16 @@
 import { hasRole } from '@shared/roles';
+import { loanDueAt } from '@shared/time/chapter-time';
 import type { CreateToolInput, Tool, ToolAction, ToolForYou, ToolList, ToolListQuery, UpdateToolBody } from '@shared/schemas/tools';
 import { createToolBodySchema } from '@shared/schemas/tools';
 import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
+import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { loanStatements } from './loans.repo';
 import { signOffAdvice } from './signoffs.service';
 import { recordToolEvent } from './tool-events.repo';
 import { toTool } from './tool-dto';
 import { heldWords, loanWords } from './tool-words';
-import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import {
   findActiveHold,
   findToolByCode,
@@ -23,7 +24,6 @@ import {
   type ToolRow,
 } from './tools.repo';
 
-const DAY_MS = 24 * 60 * 60 * 1000;
 
 export function listToolPage(ctx: ServiceContext, query: ToolListQuery): ToolList {
   const { rows, total } = listTools(ctx.db, query);
@@ -91,7 +91,7 @@ export function getToolForYou(ctx: ServiceContext, user: UserRow, code: string):
     forYou: {
       actions,
       reason,
-      defaultDueAt: new Date(now.getTime() + tool.loanDays * DAY_MS).toISOString(),
+      defaultDueAt: loanDueAt(now, tool.loanDays, zone).toISOString(),
       yourHold: myHold
         ? {
             status: myHold.status as 'waiting' | 'offered',

@@ -8,6 +8,7 @@ import { HoldTimeCard } from '@/features/signoffs/components/hold-time-card';
 import { SignoffCaution } from '@/features/signoffs/components/signoff-caution';
 import { SignoffForm } from '@/features/signoffs/components/signoff-form';
 import { SignoffList } from '@/features/signoffs/components/signoff-list';
+import { TimeZoneCard } from '@/features/signoffs/components/time-zone-card';
 import { Card, PageHeader } from '@/components/ui/page';
 import { requireRole } from './guards';
 
@@ -28,7 +29,7 @@ export function SignoffsRoute() {
   const active = people.filter((p) => p.active).map((p) => ({ id: p.id, name: p.name }));
   return (
     <>
-      <PageHeader title="Sign-offs" lead="Who may use which powered tools, and how long a returned tool is held for the next person." />
+      <PageHeader title="Sign-offs" lead="Who may use which powered tools, how long a returned tool is held for the next person, and the chapter's time zone." />
       <div className="flex flex-col gap-4">
         <SignoffCaution />
         <Card title="Define a sign-off">
@@ -36,6 +37,7 @@ export function SignoffsRoute() {
         </Card>
         <SignoffList signoffs={signoffs} people={active} />
         <HoldTimeCard holdHours={settings.holdHours} />
+        <TimeZoneCard timeZone={settings.timeZone} />
       </div>
     </>
   );

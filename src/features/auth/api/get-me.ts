@@ -1,12 +1,15 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { User } from '@shared/schemas/auth';
+import type { MeResponse, User } from '@shared/schemas/auth';
 import { api, ApiError } from '@/lib/api-client';
+import { setChapterTimeZone } from '@/lib/chapter-zone';
 import { authKeys } from './keys';
 
-/** The signed-in person, or null when signed out. */
+/** The signed-in person, or null when signed out; the answer also says the chapter's time zone. */
 export async function getMe(): Promise<User | null> {
   try {
-    return (await api.getOrGiveUp<{ user: User }>('/api/auth/me')).user;
+    const me = await api.getOrGiveUp<MeResponse>('/api/auth/me');
+    setChapterTimeZone(me.timeZone);
+    return me.user;
   } catch (err) {
     if (err instanceof ApiError && err.status === 401) return null;
     throw err;

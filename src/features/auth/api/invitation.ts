@@ -1,6 +1,7 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
-import type { AcceptInvitationBody, InvitationPreview, User } from '@shared/schemas/auth';
+import type { AcceptInvitationBody, InvitationPreview, LoginResponse } from '@shared/schemas/auth';
 import { api, setCsrfToken } from '@/lib/api-client';
+import { setChapterTimeZone } from '@/lib/chapter-zone';
 import { authKeys } from './keys';
 
 export const invitationQueryOptions = (token: string) =>
@@ -14,8 +15,9 @@ export function useAcceptInvitation() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async (body: AcceptInvitationBody) => {
-      const res = await api.post<{ user: User; csrfToken: string }>('/api/invitations/accept', body);
+      const res = await api.post<LoginResponse>('/api/invitations/accept', body);
       setCsrfToken(res.csrfToken);
+      setChapterTimeZone(res.timeZone);
       return res.user;
     },
     onSuccess: (user) => {

@@ -1,11 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { LoginBody, User } from '@shared/schemas/auth';
+import type { LoginBody, LoginResponse, User } from '@shared/schemas/auth';
 import { api, setCsrfToken } from '@/lib/api-client';
+import { setChapterTimeZone } from '@/lib/chapter-zone';
 import { authKeys } from './keys';
 
 export async function login(body: LoginBody): Promise<User> {
-  const res = await api.post<{ user: User; csrfToken: string }>('/api/auth/login', body);
+  const res = await api.post<LoginResponse>('/api/auth/login', body);
   setCsrfToken(res.csrfToken);
+  setChapterTimeZone(res.timeZone);
   return res.user;
 }
 

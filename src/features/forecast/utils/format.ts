@@ -1,9 +1,10 @@
+import { addChapterDays, chapterDay, monthDayInWords } from '@shared/time/chapter-time';
+import { chapterTimeZone } from '@/lib/chapter-zone';
 import { formatCount } from '@/lib/format';
 
 export { formatCents, formatCount, formatDay, formatQuantity, formatUnitCost } from '@/lib/format';
 
 const oneDecimal = new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 });
-const shortDay = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', timeZone: 'UTC' });
 
 /** 47.25 → "47.3": weekly averages and σ. */
 export const formatTenth = (n: number): string => oneDecimal.format(n);
@@ -14,13 +15,12 @@ export const formatLevel = (n: number): string => (n < 0 ? `−${oneDecimal.form
 export const asSentence = (text: string): string => (/[.!?]$/.test(text) ? text : `${text}.`);
 
 /** A week's Monday for a chart axis: "Jan 11". */
-export const formatWeek = (iso: string): string => shortDay.format(new Date(`${iso}T00:00:00Z`));
+export const formatWeek = (iso: string): string => monthDayInWords(new Date(`${iso}T00:00:00Z`), 'UTC');
 
-/** The day `days` after `from` in the viewer's own calendar, as YYYY-MM-DD for a date field. */
+/** The chapter day `days` after `from`'s, as YYYY-MM-DD for a date field. */
 export function dayAfter(from: Date, days: number): string {
-  const d = new Date(from.getFullYear(), from.getMonth(), from.getDate() + Math.ceil(days));
-  const pad = (n: number) => String(n).padStart(2, '0');
-  return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`;
+  const zone = chapterTimeZone();
+  return chapterDay(addChapterDays(from, Math.ceil(days), zone), zone);
 }
 
 /** Whole packs an order makes: 600 in packs of 250 → 3 (orders are rounded up to packs). */

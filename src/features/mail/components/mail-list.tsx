@@ -4,10 +4,10 @@ import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { Code } from '@/components/ui/page';
 import { messageOf } from '@/lib/errors';
+import { formatDateTime } from '@/lib/format';
 import { useRetryMail } from '../api/retry-mail';
 
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
-const when = (iso: string) => dateFormat.format(new Date(iso));
+const when = (iso: string) => formatDateTime(iso);
 
 const LINK_WORDS: Record<string, string> = {
   invite: 'Open the invitation link',

@@ -1,18 +1,18 @@
 import { useState } from 'react';
 import type { CatalogueTool } from '@shared/schemas/offline';
 import { AccessoryChecklist } from '@/components/ui/accessory-checklist';
+import { loanDueAt } from '@shared/time/chapter-time';
 import { Button } from '@/components/ui/button';
-import { formatDate } from '@/lib/format';
+import { chapterTimeZone } from '@/lib/chapter-zone';
+import { formatDueDay } from '@/lib/format';
 import { queueFromCopy } from '../api/queue-from-copy';
 import type { StoredCatalogue } from '../db';
-
-const DAY_MS = 24 * 60 * 60 * 1000;
 
 /** Check out from the copy: the loan period's due date, and the accessories taken along, ticked so the loan records them. */
 export function OfflineCheckoutForm({ copy, tool }: { copy: StoredCatalogue; tool: CatalogueTool }) {
   const [busy, setBusy] = useState(false);
-  // The loan period counts from now, when the member takes it off the shelf.
-  const [due] = useState(() => new Date(Date.now() + tool.loanDays * DAY_MS).toISOString());
+  // The loan period counts from now, when the member takes it off the shelf, by the server's one rule.
+  const [due] = useState(() => loanDueAt(new Date(), tool.loanDays, chapterTimeZone()));
   const [ticked, setTicked] = useState<string[]>([]);
   const submit = async () => {
     setBusy(true);
@@ -25,7 +25,7 @@ export function OfflineCheckoutForm({ copy, tool }: { copy: StoredCatalogue; too
   return (
     <div className="flex flex-col gap-3">
       <p>
-        Bring it back by <strong>{formatDate(due)}</strong> ({tool.loanDays} days).
+        Bring it back by <strong>{formatDueDay(due)}</strong> ({tool.loanDays} days).
       </p>
       {tool.accessories.length > 0 && (
         <AccessoryChecklist legend="Tick what you take with it" items={tool.accessories} ticked={ticked} onChange={setTicked} />

@@ -1,13 +1,13 @@
 import type { JobRun } from '@shared/schemas/overdue';
 import { Notice } from '@/components/ui/notice';
-import { dateTime } from './formats';
+import { formatDateTime } from '@/lib/format';
 
 /** When the daily reminder job last ran, what it did, and whether something went wrong. */
 export function LastRunNote({ run }: { run: JobRun | null }) {
   if (!run) {
     return <Notice title="No automatic reminders yet">Gripline reminds holders of overdue tools every morning at 07:00 and e-mails the leads a digest.</Notice>;
   }
-  const when = dateTime.format(new Date(run.finishedAt ?? run.startedAt));
+  const when = formatDateTime(run.finishedAt ?? run.startedAt);
   if (run.error) {
     return (
       <Notice tone="warn" title={`The automatic reminders on ${when} had a problem`}>

@@ -1,4 +1,4 @@
-import { daysLateWords } from '@shared/schemas/overdue';
+import { daysLateWords } from '@shared/time/chapter-time';
 
 /** A week or more late reads as a problem, less as a caution; the words say it either way. */
 export function LateBadge({ daysLate }: { daysLate: number }) {

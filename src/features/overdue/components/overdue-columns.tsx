@@ -2,7 +2,7 @@ import { createColumnHelper } from '@tanstack/react-table';
 import type { OverdueLoan } from '@shared/schemas/overdue';
 import type { ListFeatures } from '@/components/ui/data-table';
 import { Code } from '@/components/ui/page';
-import { dateOnly, money } from './formats';
+import { formatCents, formatDueDay } from '@/lib/format';
 import { LateBadge } from './late-badge';
 import { ReminderButton } from './reminder-button';
 
@@ -30,7 +30,7 @@ export const overdueColumns = helper.columns([
     cell: ({ row }) => (
       <div className="flex flex-col items-start gap-0.5">
         <LateBadge daysLate={row.original.daysLate} />
-        <span className="text-sm text-steel">due {dateOnly.format(new Date(row.original.dueAt))}</span>
+        <span className="text-sm text-steel">due {formatDueDay(row.original.dueAt)}</span>
       </div>
     ),
   }),
@@ -61,7 +61,7 @@ export const overdueColumns = helper.columns([
     header: 'Value',
     sortFn: (a, b) => a.original.tool.replacementValueCents - b.original.tool.replacementValueCents,
     enableGlobalFilter: false,
-    cell: ({ getValue }) => <span className="font-mono whitespace-nowrap">{money.format(getValue() / 100)}</span>,
+    cell: ({ getValue }) => <span className="font-mono whitespace-nowrap">{formatCents(getValue())}</span>,
   }),
   helper.display({
     id: 'reminder',

@@ -2,7 +2,7 @@ import { useTable } from '@tanstack/react-table';
 import type { OverdueLoan } from '@shared/schemas/overdue';
 import { DataTable, listFeatures } from '@/components/ui/data-table';
 import { TextField } from '@/components/ui/field';
-import { money } from './formats';
+import { formatCents } from '@/lib/format';
 import { overdueColumns } from './overdue-columns';
 
 /** Overdue loans, the latest back first, with a search over tool and holder. */
@@ -24,7 +24,7 @@ export function OverdueTable({ loans }: { loans: OverdueLoan[] }) {
         onChange={(e) => table.setGlobalFilter(e.target.value)}
       />
       <p className="text-sm text-steel" aria-live="polite">
-        {loans.length === 1 ? '1 tool is' : `${loans.length} tools are`} overdue, worth {money.format(total / 100)} to replace.
+        {loans.length === 1 ? '1 tool is' : `${loans.length} tools are`} overdue, worth {formatCents(total)} to replace.
       </p>
       <DataTable table={table} caption="Overdue tools" empty={loans.length === 0 ? 'Nothing is overdue. Every tool on loan is within its time.' : 'Nothing matches this search.'} />
     </div>

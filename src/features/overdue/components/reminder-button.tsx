@@ -3,7 +3,7 @@ import type { OverdueLoan } from '@shared/schemas/overdue';
 import { Button } from '@/components/ui/button';
 import { messageOf } from '@/lib/errors';
 import { useSendReminder } from '../api/send-reminder';
-import { dateTime } from './formats';
+import { formatDateTime } from '@/lib/format';
 
 /** One reminder a day per loan: once sent, the button stays disabled and says why. */
 export function ReminderButton({ loan }: { loan: OverdueLoan }) {
@@ -30,7 +30,7 @@ export function ReminderButton({ loan }: { loan: OverdueLoan }) {
         {loan.remindedToday
           ? 'Already reminded today; the next one can go tomorrow.'
           : loan.lastReminderAt
-            ? `Last reminded ${dateTime.format(new Date(loan.lastReminderAt))}.`
+            ? `Last reminded ${formatDateTime(loan.lastReminderAt)}.`
             : 'Not reminded yet.'}
       </p>
     </div>

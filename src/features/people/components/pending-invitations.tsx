@@ -4,9 +4,9 @@ import type { PendingInvitation } from '@shared/schemas/people';
 import { Button } from '@/components/ui/button';
 import { Code } from '@/components/ui/page';
 import { messageOf } from '@/lib/errors';
+import { formatDateTime } from '@/lib/format';
 import { useWithdrawInvitation } from '../api/withdraw-invitation';
 
-const dateFormat = new Intl.DateTimeFormat(undefined, { month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' });
 
 export function PendingInvitations({ invitations }: { invitations: PendingInvitation[] }) {
   const withdraw = useWithdrawInvitation();
@@ -18,7 +18,7 @@ export function PendingInvitations({ invitations }: { invitations: PendingInvita
           <div>
             <Code>{inv.email}</Code>
             <div className="text-sm text-steel">
-              {ROLE_LABELS[inv.role]} · invited by {inv.invitedBy} · link works until {dateFormat.format(new Date(inv.expiresAt))}
+              {ROLE_LABELS[inv.role]} · invited by {inv.invitedBy} · link works until {formatDateTime(inv.expiresAt)}
             </div>
           </div>
           <Button

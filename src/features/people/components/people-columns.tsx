@@ -3,10 +3,10 @@ import { ROLE_LABELS } from '@shared/roles';
 import type { Person } from '@shared/schemas/people';
 import type { ListFeatures } from '@/components/ui/data-table';
 import { Code } from '@/components/ui/page';
+import { formatDate } from '@/lib/format';
 import { PersonActions } from './person-actions';
 
 const helper = createColumnHelper<ListFeatures, Person>();
-const dateFormat = new Intl.DateTimeFormat(undefined, { year: 'numeric', month: 'short', day: 'numeric' });
 
 export function peopleColumns(selfId: number) {
   return helper.columns([
@@ -45,7 +45,7 @@ export function peopleColumns(selfId: number) {
       header: 'Joined',
       sortFn: 'datetime',
       enableGlobalFilter: false,
-      cell: ({ getValue }) => <span className="whitespace-nowrap">{dateFormat.format(new Date(getValue()))}</span>,
+      cell: ({ getValue }) => <span className="whitespace-nowrap">{formatDate(getValue())}</span>,
     }),
     helper.display({
       id: 'actions',

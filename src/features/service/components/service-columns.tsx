@@ -2,11 +2,11 @@ import { createColumnHelper } from '@tanstack/react-table';
 import { SERVICE_URGENCIES, type ServiceDueItem } from '@shared/schemas/overdue';
 import type { ListFeatures } from '@/components/ui/data-table';
 import { Code } from '@/components/ui/page';
+import { formatDate } from '@/lib/format';
 import { ServiceAction } from './service-action';
 import { UrgencyBadge } from './urgency-badge';
 
 const helper = createColumnHelper<ListFeatures, ServiceDueItem>();
-const dateOnly = new Intl.DateTimeFormat(undefined, { year: 'numeric', month: 'short', day: 'numeric' });
 const rank = (i: ServiceDueItem) => SERVICE_URGENCIES.indexOf(i.urgency) * 100_000 + (i.daysUntilDue ?? 50_000);
 
 export const serviceColumns = helper.columns([
@@ -36,7 +36,7 @@ export const serviceColumns = helper.columns([
     enableGlobalFilter: false,
     cell: ({ row }) => (
       <span className="whitespace-nowrap">
-        {row.original.lastServiceAt ? dateOnly.format(new Date(row.original.lastServiceAt)) : 'Not on record'}
+        {row.original.lastServiceAt ? formatDate(row.original.lastServiceAt) : 'Not on record'}
         {row.original.serviceIntervalDays && <span className="block text-sm text-steel">every {row.original.serviceIntervalDays} days</span>}
       </span>
     ),

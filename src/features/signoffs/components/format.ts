@@ -1,5 +1,3 @@
-const dateFormat = new Intl.DateTimeFormat(undefined, { year: 'numeric', month: 'short', day: 'numeric' });
-
-export const formatGrantDate = (iso: string) => dateFormat.format(new Date(iso));
+export { formatDate as formatGrantDate } from '@/lib/format';
 
 export const toolCountWords = (n: number) => (n === 0 ? 'No tool needs it yet' : n === 1 ? 'Needed by 1 tool' : `Needed by ${n} tools`);

@@ -1,15 +1,15 @@
 import { ledgerExportQuerySchema } from '@shared/schemas/bin-import';
+import { chapterDay } from '@shared/time/chapter-time';
+import { chapterTimeZone } from '@/lib/chapter-zone';
 
 /** Plain GET downloads: the browser sends the session cookie and saves the file under the server's name. */
 export const TEMPLATE_CSV_URL = '/api/bins/import/template.csv';
 export const BINS_CSV_URL = '/api/bins/export.csv';
 export const ledgerCsvUrl = (from: string, to: string) => `/api/bins/ledger.csv?${new URLSearchParams({ from, to }).toString()}`;
 
-const day = (d: Date) => `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
-
-/** This month so far: the first of the month to today. */
+/** This month so far on the chapter's calendar: the first of the month to today. */
 export function defaultLedgerRange(now: Date = new Date()): { from: string; to: string } {
-  const to = day(now);
+  const to = chapterDay(now, chapterTimeZone());
   return { from: `${to.slice(0, 8)}01`, to };
 }
 

@@ -1,9 +1,8 @@
 import { inchFraction } from '@shared/stock/fasteners';
 import { formatCount } from '@/lib/format';
 
-export { formatCents, formatCount, formatDate, formatQuantity, formatUnitCost } from '@/lib/format';
+export { formatCents, formatCount, formatDate, formatDateTime, formatQuantity, formatUnitCost } from '@/lib/format';
 
-const dateTime = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
 
 /** A signed ledger quantity: +500, −25 (a real minus sign), 0. */
 export const formatSigned = (n: number): string => (n > 0 ? `+${formatCount(n)}` : n < 0 ? `−${formatCount(-n)}` : '0');
@@ -17,8 +16,6 @@ export const lengthText = (length16: number): string => `${inchFraction(length16
 /** A grip range in inches to the thousandth: (0.063, 0.125) → "0.063–0.125 in". */
 export const gripRangeText = (range: { min: number; max: number }): string => `${range.min.toFixed(3)}–${range.max.toFixed(3)} in`;
 
-/** An ISO timestamp as a date and time for people. */
-export const formatDateTime = (iso: string): string => dateTime.format(new Date(iso));
 
 /** A blind rivet grip dash with the sheet stack it takes: (2, {0.063, 0.125}) → "−2 (0.063–0.125 in)". */
 export const gripDashText = (dash: number, range: { min: number; max: number }): string => `−${dash} (${gripRangeText(range)})`;

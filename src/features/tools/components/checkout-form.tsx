@@ -2,14 +2,17 @@ import { useState } from 'react';
 import { toast } from 'sonner';
 import type { ToolForYou } from '@shared/schemas/tools';
 import { AccessoryChecklist } from '@/components/ui/accessory-checklist';
+import { chapterDay, endOfChapterDay, startOfDayNamed } from '@shared/time/chapter-time';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { messageOf } from '@/lib/errors';
+import { chapterTimeZone } from '@/lib/chapter-zone';
+import { formatDueDay } from '@/lib/format';
 import { useCheckOut } from '../api/tool-actions';
-import { shortDate } from '../due-words';
 
-const toDateInput = (iso: string) => iso.slice(0, 10);
+/** The chapter day a moment falls on, as a date field holds it. */
+const toDateInput = (at: string | Date) => chapterDay(new Date(at), chapterTimeZone());
 
 /** Check out with the loan period's due date (editable) and the accessories listed so nothing stays behind. */
 export function CheckoutForm({ tool, onDone }: { tool: ToolForYou; onDone?: () => void }) {
@@ -22,13 +25,14 @@ export function CheckoutForm({ tool, onDone }: { tool: ToolForYou; onDone?: () =
 
   const submit = () => {
     setProblem(undefined);
-    // The due moment is the end of the chosen day, local time.
-    const dueAt = due === toDateInput(tool.forYou.defaultDueAt) ? undefined : new Date(`${due}T23:59:00`).toISOString();
+    // A chosen day is due by its end on the chapter's calendar, as the loan period's default is.
+    const zone = chapterTimeZone();
+    const dueAt = due === toDateInput(tool.forYou.defaultDueAt) ? undefined : endOfChapterDay(startOfDayNamed(due, zone), zone).toISOString();
     checkOut.mutate(
       { code: tool.code, body: { ...(dueAt && { dueAt }), ...(takeable.length > 0 && { accessories: ticked }) } },
       {
         onSuccess: (loan) => {
-          toast.success(`${tool.code} is yours until ${shortDate.format(new Date(loan.dueAt))}.`);
+          toast.success(`${tool.code} is yours until ${formatDueDay(loan.dueAt)}.`);
           onDone?.();
         },
         onError: (err) => setProblem(messageOf(err)),
@@ -39,7 +43,7 @@ export function CheckoutForm({ tool, onDone }: { tool: ToolForYou; onDone?: () =
   return (
     <div className="flex flex-col gap-4">
       {problem && <Notice tone="bad">{problem}</Notice>}
-      <TextField label="Bring it back by" type="date" value={due} min={toDateInput(new Date().toISOString())} onChange={(e) => setDue(e.target.value)} />
+      <TextField label="Bring it back by" type="date" value={due} min={toDateInput(new Date())} onChange={(e) => setDue(e.target.value)} />
       {takeable.length > 0 && (
         <AccessoryChecklist legend="Tick what you take with it" items={takeable} ticked={ticked} onChange={setTicked} />
       )}

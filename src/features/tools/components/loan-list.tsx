@@ -1,6 +1,6 @@
 import { Link } from 'react-router';
 import type { Loan } from '@shared/schemas/tools';
-import { dateTime, shortDate } from '../due-words';
+import { formatDate, formatDateTime, formatDueDay } from '@/lib/format';
 import { DueBadge } from './due-badge';
 
 /** Open loans, soonest due first, each with due words (and colour) and the accessories that went out with it, to bring back. */
@@ -16,7 +16,7 @@ export function OpenLoanList({ loans, showHolder = false, empty }: { loans: Loan
           </Link>
           <div className="mt-1 flex flex-wrap items-center gap-2 text-sm">
             {showHolder && <span className="font-medium">{l.holder.name}</span>}
-            <span>back by {shortDate.format(new Date(l.dueAt))}</span>
+            <span>back by {formatDueDay(l.dueAt)}</span>
             <DueBadge dueAt={l.dueAt} />
           </div>
           {l.accessoriesOut && l.accessoriesOut.length > 0 && <p className="mt-1 text-sm text-steel">With: {l.accessoriesOut.join(', ')}</p>}
@@ -36,7 +36,7 @@ export function LoanHistoryList({ loans }: { loans: Loan[] }) {
             <span className="font-mono">{l.tool.code}</span> {l.tool.name}
           </Link>
           <p className="text-sm text-steel">
-            {shortDate.format(new Date(l.checkedOutAt))} – {l.returnedAt ? dateTime.format(new Date(l.returnedAt)) : ''}
+            {formatDate(l.checkedOutAt)} – {l.returnedAt ? formatDateTime(l.returnedAt) : ''}
             {l.returnCondition === 'needs_attention' ? ' · reported: needs attention' : ''}
             {l.shortfall ? ` · ${l.shortfall} temporary fasteners short` : ''}
             {l.accessoriesMissing.length > 0 ? ` · did not come back: ${l.accessoriesMissing.join(', ')}` : ''}

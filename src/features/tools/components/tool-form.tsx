@@ -3,10 +3,13 @@ import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import { ALL_DRILLS } from '@shared/drills/drill-sizes';
 import type { CreateToolBody, Tool } from '@shared/schemas/tools';
+import { chapterDay, startOfDayNamed } from '@shared/time/chapter-time';
+import { HOUR_MS } from '@shared/time/durations';
 import { CATEGORY_LABELS, DEFAULT_LOAN_DAYS, TEMPORARY_FASTENER_SIZES, TOOL_CATEGORIES } from '@shared/tools/categories';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
+import { chapterTimeZone } from '@/lib/chapter-zone';
 import { applyServerErrors } from '@/lib/errors';
 
 const optionalWhole = (label: string) =>
@@ -47,7 +50,7 @@ function toBody(v: FormValues): CreateToolBody {
     loanDays: toNumber(v.loanDays),
     requiredSignoffId: v.requiredSignoffId ? Number(v.requiredSignoffId) : null,
     serviceIntervalDays: toNumber(v.serviceIntervalDays),
-    lastServiceAt: v.lastServiceAt ? new Date(`${v.lastServiceAt}T12:00:00`).toISOString() : null,
+    lastServiceAt: v.lastServiceAt ? new Date(startOfDayNamed(v.lastServiceAt, chapterTimeZone()).getTime() + 12 * HOUR_MS).toISOString() : null,
     drillSize: v.category === 'drill_bit' && v.drillSize ? v.drillSize : null,
     traySize: v.category === 'temporary_fastener_tray' && v.traySize ? (v.traySize as CreateToolBody['traySize']) : null,
     trayCapacity: v.category === 'temporary_fastener_tray' ? toNumber(v.trayCapacity) : null,
@@ -68,7 +71,7 @@ function toForm(tool?: Tool): FormValues {
     loanDays: tool?.loanDaysOverride?.toString() ?? '',
     requiredSignoffId: tool?.requiredSignoff?.id.toString() ?? '',
     serviceIntervalDays: tool?.serviceIntervalDays?.toString() ?? '',
-    lastServiceAt: tool?.lastServiceAt?.slice(0, 10) ?? '',
+    lastServiceAt: tool?.lastServiceAt ? chapterDay(new Date(tool.lastServiceAt), chapterTimeZone()) : '',
     drillSize: tool?.drillSize?.name ?? '',
     traySize: tool?.traySize ?? '',
     trayCapacity: tool?.trayCapacity?.toString() ?? '',

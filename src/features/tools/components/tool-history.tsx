@@ -2,7 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { STATUS_LABELS, type ToolStatus } from '@shared/tools/categories';
 import { Card } from '@/components/ui/page';
 import { toolEventsQueryOptions } from '../api/get-tool';
-import { dateTime } from '../due-words';
+import { formatDateTime } from '@/lib/format';
 
 const ACTION_WORDS: Record<string, string> = {
   added: 'Added to the crib',
@@ -48,7 +48,7 @@ export function ToolHistory({ code }: { code: string }) {
               )}
             </p>
             <p className="text-sm text-steel">
-              {dateTime.format(new Date(e.at))} · {e.actor?.name ?? 'Gripline'}
+              {formatDateTime(e.at)} · {e.actor?.name ?? 'Gripline'}
             </p>
             {e.detail && <p className="text-sm">{e.detail}</p>}
           </li>

@@ -2,7 +2,7 @@ import { CATEGORY_LABELS, POWERED_CATEGORIES } from '@shared/tools/categories';
 import type { Tool } from '@shared/schemas/tools';
 import { Notice } from '@/components/ui/notice';
 import { Code } from '@/components/ui/page';
-import { shortDate } from '../due-words';
+import { formatDueDay } from '@/lib/format';
 import { DueBadge } from './due-badge';
 import { ToolStatusBadge } from './tool-status-badge';
 
@@ -45,7 +45,7 @@ export function ToolSummary({ tool }: { tool: Tool }) {
             <dt className="text-steel">With</dt>
             <dd className="flex flex-wrap items-center gap-2">
               <span className="font-medium">{tool.loan.holder.name}</span>
-              <span>until {shortDate.format(new Date(tool.loan.dueAt))}</span>
+              <span>until {formatDueDay(tool.loan.dueAt)}</span>
               <DueBadge dueAt={tool.loan.dueAt} />
             </dd>
           </>

@@ -65,7 +65,7 @@ describe('OfflineCheckoutForm', () => {
 });
 
 describe('CheckoutForm', () => {
-  const tool = (defaultDueAt: string) => ({ code: 'T-0007', accessories: [], forYou: { defaultDueAt } }) as unknown as ToolForYou;
+  const tool = (defaultDueAt: string) => ({ code: 'T-0007', accessories: [], missingAccessories: [], forYou: { defaultDueAt } }) as unknown as ToolForYou;
   const csrf = { status: 200, body: { token: 'csrf-token' } };
 
   it('offers the due day of the chapter, not the UTC date of the due moment, and sends no date when it is kept', async () => {

@@ -1,12 +1,13 @@
 import type { BinReorder } from '@shared/schemas/bins';
 import { valueCents } from '@shared/stock/money';
+import { DAY_MS } from '@shared/time/durations';
 import type { ServiceContext } from '../../context';
 import type { Executor } from '../../db/client';
 import { recentDismissals } from './alerts.repo';
 import { forecastBins, type BinPlan, type ForecastRun } from './forecast.service';
 
 /** A dismissed alert keeps its bin quiet this long, unless on hand falls below what it was raised at. */
-export const DISMISSAL_QUIET_MS = 14 * 24 * 60 * 60_000;
+export const DISMISSAL_QUIET_MS = 14 * DAY_MS;
 
 export interface PlannedOrder extends BinReorder {
   plan: BinPlan;

@@ -15,6 +15,7 @@ export type AlertEvent =
   | { event: 'order'; at: Date; byId: number; quantity: number; expectedAt: Date; reason?: string }
   | { event: 'receive'; at: Date; quantity: number; movementId: number }
   | { event: 'close'; at: Date; byId: number }
+  | { event: 'no_longer_needed'; at: Date }
   | { event: 'dismiss'; at: Date; byId: number; reason: string };
 
 type EventOf<K extends AlertEvent['event']> = Extract<AlertEvent, { event: K }>;
@@ -52,6 +53,8 @@ const TRANSITIONS: readonly Transition<AlertEvent['event']>[] = [
   { from: 'ordered', event: 'receive', to: 'ordered', set: (a, e: EventOf<'receive'>) => ({ receivedQty: arrived(a, e) }) },
   // The quartermaster closes an order whose rest will not come.
   { from: 'ordered', event: 'close', to: 'closed', set: (_a, e: EventOf<'close'>) => ({ closedAt: e.at, closedById: e.byId }) },
+  // Nobody ordered it and the reorder rule no longer asks for it (a count found stock, demand fell): it ends.
+  { from: 'open', event: 'no_longer_needed', to: 'closed', set: (_a, e: EventOf<'no_longer_needed'>) => ({ closedAt: e.at }) },
   { from: 'open', event: 'dismiss', to: 'dismissed', set: dismissal },
   { from: 'ordered', event: 'dismiss', to: 'dismissed', set: dismissal },
 ] as Transition<AlertEvent['event']>[];

@@ -5,7 +5,7 @@ import { idParam } from './fields';
 
 export const ALERT_STATES = ['open', 'ordered', 'closed', 'dismissed'] as const;
 export type AlertState = (typeof ALERT_STATES)[number];
-export const ALERT_STATE_LABELS: Record<AlertState, string> = { open: 'To order', ordered: 'Ordered', closed: 'Received', dismissed: 'Dismissed' };
+export const ALERT_STATE_LABELS: Record<AlertState, string> = { open: 'To order', ordered: 'Ordered', closed: 'Closed', dismissed: 'Dismissed' };
 
 export const alertIdParams = z.object({ id: idParam });
 

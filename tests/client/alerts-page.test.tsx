@@ -205,8 +205,8 @@ describe('Alerts page', () => {
   it('filters to received alerts', async () => {
     const calls = renderAlerts();
     await screen.findByRole('heading', { name: 'Reorder alerts', level: 1 });
-    await userEvent.selectOptions(screen.getByRole('combobox', { name: 'Show' }), 'Received');
-    const received = await screen.findByRole('region', { name: 'Received' });
+    await userEvent.selectOptions(screen.getByRole('combobox', { name: 'Show' }), 'Closed');
+    const received = await screen.findByRole('region', { name: 'Closed' });
     expect(calls.map((c) => c.path)).toContain('/api/alerts?state=closed');
     expect(codesIn(received)).toEqual(['B-0003']);
     expect(within(received).getByText('Ordered 500 each on Nov 2, 2026, expected by Nov 16, 2026. Received on Nov 15, 2026.')).toBeTruthy();

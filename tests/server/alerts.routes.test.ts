@@ -137,6 +137,20 @@ describe('reorder alerts', () => {
     expect((await alertsIn('closed')).map((a) => a.id)).toEqual([data[0]!.id]);
   });
 
+  it('closes an open alert the reorder rule no longer asks for, so no screen shows an alert with nothing to order', async () => {
+    const bin = await binRunningLow();
+    const [alert] = (await refresh()).data;
+    expect(alert).toMatchObject({ state: 'open', toOrder: 500 });
+    // A count finds a forgotten carton: 1,100 on hand covers the week's 105 and the reorder point.
+    expect((await post(qm, `/api/bins/${bin.code}/count`, { counted: 1100 })).status).toBe(201);
+    await refresh();
+    expect(await alertsIn('active')).toEqual([]);
+    const [closed] = await alertsIn('closed');
+    expect(closed).toMatchObject({ id: alert!.id, state: 'closed', toOrder: 0, closedAt: '2026-12-01T12:00:00.000Z' });
+    expect((await qm.agent.get('/api/alerts/purchase-list')).body.data).toEqual([]);
+    expect((await qm.agent.get('/api/bins/restock')).body.data).toEqual([]);
+  });
+
   it('dismisses an open or ordered alert with a reason, and keeps the bin quiet until stock falls or two weeks pass', async () => {
     const bin = await binRunningLow();
     const { data } = await refresh();

@@ -1,7 +1,7 @@
 import type { Alert, AlertState, MarkOrderedBody } from '@shared/schemas/forecast';
 import { chapterDay } from '@shared/time/chapter-time';
 import type { ServiceContext } from '../../context';
-import type { Database } from '../../db/client';
+import type { Database, Executor } from '../../db/client';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
@@ -68,10 +68,18 @@ export function refreshAlerts(ctx: ServiceContext): { raised: number[]; plan: Re
         safetyStock: f.safetyStock,
         suggestedQty: toOrder,
       }));
+    closeAlertsNoLongerNeeded(tx, plan, raisedAt);
     return raiseAlerts(tx, rows);
   });
   lastRefresh.set(ctx.db, raisedAt.getTime());
   return { raised, plan };
+}
+
+/** Open alerts whose bin the reorder rule no longer orders are closed, so none shows "order 0". Ordered ones wait for their delivery. */
+function closeAlertsNoLongerNeeded(tx: Executor, plan: ReorderPlan, at: Date): void {
+  for (const { alert } of listAlerts(tx, ['open'])) {
+    if ((plan.orders.get(alert.binId)?.toOrder ?? 0) === 0) moveAlert(tx, alert, { event: 'no_longer_needed', at });
+  }
 }
 
 /** Refreshes when the last refresh is over 5 minutes old; returns the plan it used, if it ran. */
@@ -100,8 +108,8 @@ function alertOrThrow(ctx: ServiceContext, id: number): AlertWithBin {
 }
 
 const STATE_WORDS: Record<AlertState, string> = { open: 'still to order', ordered: 'already ordered', closed: 'closed', dismissed: 'dismissed' };
-const EVENT_WORDS: Record<AlertEvent['event'], string> = { order: 'marked ordered', receive: 'received against', close: 'closed by hand', dismiss: 'dismissed' };
-const REFUSAL_CODES: Record<AlertEvent['event'], string> = { order: 'ALERT_NOT_OPEN', receive: 'ALERT_NOT_ACTIVE', close: 'ALERT_NOT_ORDERED', dismiss: 'ALERT_NOT_ACTIVE' };
+const EVENT_WORDS: Record<AlertEvent['event'], string> = { order: 'marked ordered', receive: 'received against', close: 'closed by hand', dismiss: 'dismissed', no_longer_needed: 'closed as no longer needed' };
+const REFUSAL_CODES: Record<AlertEvent['event'], string> = { order: 'ALERT_NOT_OPEN', receive: 'ALERT_NOT_ACTIVE', close: 'ALERT_NOT_ORDERED', dismiss: 'ALERT_NOT_ACTIVE', no_longer_needed: 'ALERT_NOT_OPEN' };
 
 /** Moves the alert by the event through the one writer, or says in words why it cannot. */
 function moveOrRefuse(ctx: ServiceContext, id: number, e: AlertEvent): Alert {

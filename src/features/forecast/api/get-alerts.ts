@@ -6,7 +6,7 @@ import { alertKeys } from './keys';
 /** The filters the Alerts page offers: what still needs doing, what came in, what was set aside, or everything. */
 export const ALERT_FILTERS = [
   { value: 'active', label: 'To order and on order' },
-  { value: 'closed', label: 'Received' },
+  { value: 'closed', label: 'Closed' },
   { value: 'dismissed', label: 'Dismissed' },
   { value: 'all', label: 'All alerts' },
 ] as const satisfies readonly { value: 'active' | 'all' | AlertState; label: string }[];

@@ -14,7 +14,7 @@ import { checkReturnPhoto } from './photos.service';
 import { refuseWithoutSignoff } from './signoffs.service';
 import { effectiveLoanDays } from './tool-dto';
 import { moveTool } from './tool-state';
-import { heldWords, loanWords } from './tool-words';
+import { heldWords, loanWords } from '@shared/tools/tool-words';
 import type { ToolRow } from './tools.repo';
 
 const MAX_LOAN_MS = 365 * DAY_MS;

@@ -10,7 +10,7 @@ import { loanStatements } from './loans.repo';
 import { signOffAdvice } from './signoffs.service';
 import { recordToolEvent } from './tool-events.repo';
 import { toTool } from './tool-dto';
-import { heldWords, loanWords } from './tool-words';
+import { heldWords, loanWords } from '@shared/tools/tool-words';
 import {
   findActiveHold,
   findToolByCode,

@@ -1,7 +1,8 @@
 import type { Catalogue, CatalogueBin, CatalogueTool } from '@shared/schemas/offline';
 import type { CheckoutBody, ReturnBody } from '@shared/schemas/tools';
 import { STATUS_LABELS } from '@shared/tools/categories';
-import { formatDate } from '@/lib/format';
+import { heldWords, loanWords } from '@shared/tools/tool-words';
+import { chapterTimeZone } from '@/lib/chapter-zone';
 import type { QueuedAction } from '../db';
 
 export interface OfflineTool {
@@ -40,8 +41,8 @@ export function offlineTool(catalogue: Catalogue, code: string, waiting: QueuedA
   let reason: string | null = null;
   if (yours) reason = null;
   else if (free && !signedOff) reason = `Needs the "${tool.requiredSignoffName ?? 'required'}" sign-off, which you do not have yet.`;
-  else if (status === 'on_loan' && tool.holder) reason = `On loan to ${tool.holder.name}${tool.dueAt ? ` until ${formatDate(tool.dueAt)}` : ''}.`;
-  else if (status === 'held' && !heldForYou) reason = `Held for ${tool.heldFor?.name ?? 'the next person'}.`;
+  else if (status === 'on_loan' && tool.holder) reason = tool.dueAt ? loanWords({ name: tool.holder.name, you: false }, new Date(tool.dueAt), new Date(), chapterTimeZone()) : `${tool.holder.name} has it.`;
+  else if (status === 'held' && !heldForYou) reason = tool.heldFor ? heldWords(tool.heldFor.name, null, chapterTimeZone()) : 'It is set aside for the next person.';
   else if (!free) reason = `${STATUS_LABELS[status]}.`;
   return { tool: { ...tool, accessoriesOut }, yours, canCheckOut: !yours && free && signedOff, canReturn: yours, reason, waiting: mine };
 }

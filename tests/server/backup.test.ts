@@ -155,7 +155,8 @@ describe('takeBackup', () => {
       await done;
       db.$client.close();
     }
-  });
+    // Seeding the demo chapter takes ≈ 3.5 s alone; a full run on two shared cores needs room.
+  }, 20_000);
 
   it('is needed because a copy of the database file alone misses the writes still in the -wal file', () => {
     const live = makeDatabase();

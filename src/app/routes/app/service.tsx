@@ -19,7 +19,7 @@ export function ServiceRoute() {
     <>
       <PageHeader
         title="Service"
-        lead={`Tools out of service, and tools whose service or calibration is overdue or due within ${data.meta.dueWithinDays} days.`}
+        lead={`Tools out of service, tools missing an accessory that did not come back, and tools whose service or calibration is overdue or due within ${data.meta.dueWithinDays} days.`}
       />
       <div className="flex flex-col gap-4">
         <Notice tone="warn" title="Service to the maker's instructions">

@@ -19,6 +19,18 @@ describe('SignInForm', () => {
     expect(calls).toHaveLength(0);
   });
 
+  it('puts the cursor in the first field to fix, and clears a message once the field is right', async () => {
+    fakeFetch(() => undefined);
+    renderWithProviders(<SignInForm onSignedIn={vi.fn()} />);
+    await userEvent.type(screen.getByLabelText('Password'), 'gripline-demo');
+    await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
+    expect(await screen.findByText(/valid e-mail address/)).toBeTruthy();
+    expect(document.activeElement).toBe(screen.getByLabelText('E-mail'));
+    expect(screen.queryByText('Enter your password.')).toBeNull();
+    await userEvent.type(screen.getByLabelText('E-mail'), 'lead@example.org');
+    expect(screen.queryByText(/valid e-mail address/)).toBeNull();
+  });
+
   it('fetches a CSRF token, sends it with the sign-in and reports success', async () => {
     const calls = fakeFetch(({ path }) => {
       if (path === '/api/auth/csrf') return { status: 200, body: { token: 'tok-1' } };

@@ -1,6 +1,4 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
-import { useForm } from 'react-hook-form';
+import { useState, type FormEvent } from 'react';
 import { Link } from 'react-router';
 import type { z } from 'zod';
 import { loginBodySchema } from '@shared/schemas/auth';
@@ -11,35 +9,72 @@ import { applyServerErrors } from '@/lib/errors';
 import { useLogin } from '../api/login';
 
 type Input = z.input<typeof loginBodySchema>;
-type Output = z.output<typeof loginBodySchema>;
+type Field = keyof Input;
+type Errors = Partial<Record<Field, string>>;
+const FIELDS: readonly Field[] = ['email', 'password'];
 
+/** The first message the shared schema gives for each field; none when the body is valid. */
+function fieldErrors(values: Input): Errors {
+  const result = loginBodySchema.safeParse(values);
+  const errors: Errors = {};
+  for (const issue of result.error?.issues ?? []) {
+    const field = issue.path[0] as Field;
+    errors[field] ??= issue.message;
+  }
+  return errors;
+}
+
+/**
+ * Two fields checked by the same schema as the server, written without a form library: the sign-in
+ * page is the first load on a phone, and this form is all it has (every other form loads with its page).
+ */
 export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   const login = useLogin();
+  const [values, setValues] = useState<Input>({ email: '', password: '' });
+  const [errors, setErrors] = useState<Errors>({});
+  const [tried, setTried] = useState(false);
   const [problem, setProblem] = useState<string>();
   const [showPassword, setShowPassword] = useState(false);
-  const form = useForm<Input, unknown, Output>({ resolver: zodResolver(loginBodySchema), defaultValues: { email: '', password: '' } });
-  const { errors } = form.formState;
 
-  const submit = form.handleSubmit(async (body) => {
+  const change = (field: Field) => (e: { target: { value: string } }) => {
+    const next = { ...values, [field]: e.target.value };
+    setValues(next);
+    if (tried) setErrors(fieldErrors(next));
+  };
+
+  const submit = async (e: FormEvent<HTMLFormElement>) => {
+    e.preventDefault();
+    setTried(true);
     setProblem(undefined);
+    const found = fieldErrors(values);
+    setErrors(found);
+    const first = FIELDS.find((f) => found[f]);
+    if (first) {
+      (e.currentTarget.elements.namedItem(first) as HTMLInputElement | null)?.focus();
+      return;
+    }
     try {
-      await login.mutateAsync(body);
+      await login.mutateAsync(loginBodySchema.parse(values));
       onSignedIn();
     } catch (err) {
-      setProblem(applyServerErrors(err, form.setError, ['email', 'password']));
+      const fromServer: Errors = {};
+      setProblem(applyServerErrors<Input>(err, (name, { message }) => (fromServer[name as Field] = message), FIELDS));
+      setErrors(fromServer);
     }
-  });
+  };
 
   return (
-    <form onSubmit={submit} noValidate className="flex flex-col gap-4">
+    <form onSubmit={(e) => void submit(e)} noValidate className="flex flex-col gap-4">
       {problem && <Notice tone="bad">{problem}</Notice>}
-      <TextField label="E-mail" type="email" autoComplete="username" inputMode="email" error={errors.email?.message} {...form.register('email')} />
+      <TextField label="E-mail" name="email" type="email" autoComplete="username" inputMode="email" value={values.email} onChange={change('email')} error={errors.email} />
       <TextField
         label="Password"
+        name="password"
         type={showPassword ? 'text' : 'password'}
         autoComplete="current-password"
-        error={errors.password?.message}
-        {...form.register('password')}
+        value={values.password}
+        onChange={change('password')}
+        error={errors.password}
       />
       <label className="flex min-h-12 items-center gap-3 text-sm">
         <input type="checkbox" className="size-5 accent-ink" checked={showPassword} onChange={(e) => setShowPassword(e.target.checked)} />

@@ -40,6 +40,13 @@ const TRANSITIONS: readonly Transition<AlertEvent['event']>[] = [
     to: 'ordered',
     set: (a, e: EventOf<'order'>) => ({ orderedAt: e.at, orderedById: e.byId, orderedQty: e.quantity, receivedQty: 0, expectedAt: e.expectedAt, reason: e.reason ?? a.reason }),
   },
+  // More ordered on top of an order on its way (the purchase list asked for it): one order, the later day.
+  {
+    from: 'ordered',
+    event: 'order',
+    to: 'ordered',
+    set: (a, e: EventOf<'order'>) => ({ orderedQty: (a.orderedQty ?? 0) + e.quantity, expectedAt: e.expectedAt, reason: e.reason ?? a.reason }),
+  },
   // A delivery nobody marked ordered ends the alert; the next refresh raises a new one if the bin still needs it.
   { from: 'open', event: 'receive', to: 'closed', set: (_a, e: EventOf<'receive'>) => ({ closedAt: e.at, closedByMovementId: e.movementId }) },
   {

@@ -168,6 +168,22 @@ describe('Alerts page', () => {
     expect(calls.find((c) => c.method === 'POST')).toMatchObject({ path: '/api/alerts/2/dismiss', body: { reason: 'Bin being merged into B-0012' } });
   });
 
+  it('offers Order more on an order that does not cover what the rule asks for, prefilled with the rest', async () => {
+    const short = { ...ACTIVE[2]!, toOrder: 300 };
+    const calls = renderAlerts(({ method, path }) => {
+      if (method === 'GET' && path === '/api/alerts?state=active') return { status: 200, body: { data: [ACTIVE[0], ACTIVE[1], short] } };
+      if (method === 'POST' && path === '/api/alerts/3/ordered') return { status: 200, body: { ...short, orderedQty: 600, onOrder: 500, toOrder: 0 } };
+      return undefined;
+    });
+    await screen.findByRole('heading', { name: 'Reorder alerts', level: 1 });
+    expect(within(alertCard('B-0001')).queryByRole('button', { name: /^Order more/ })).toBeNull();
+    await userEvent.click(within(alertCard('B-0003')).getByRole('button', { name: 'Order more for B-0003: 300 each on top of what is on order' }));
+    const form = screen.getByRole('form', { name: 'Mark B-0003 ordered' });
+    expect(within(form).getByRole<HTMLInputElement>('spinbutton', { name: 'Quantity ordered (each)' }).value).toBe('300');
+    await userEvent.click(within(form).getByRole('button', { name: 'Save order' }));
+    await waitFor(() => expect(calls.find((c) => c.method === 'POST')).toMatchObject({ path: '/api/alerts/3/ordered', body: { quantity: 300 } }));
+  });
+
   it('closes a partly received order by hand and says nothing more is on order', async () => {
     const calls = renderAlerts(({ method, path }) =>
       method === 'POST' && path === '/api/alerts/3/close' ? { status: 200, body: { ...ACTIVE[2], state: 'closed', onOrder: 0, closedAt: '2027-01-05T10:00:00.000Z' } } : undefined,

@@ -109,7 +109,7 @@ function alertOrThrow(ctx: ServiceContext, id: number): AlertWithBin {
 
 const STATE_WORDS: Record<AlertState, string> = { open: 'still to order', ordered: 'already ordered', closed: 'closed', dismissed: 'dismissed' };
 const EVENT_WORDS: Record<AlertEvent['event'], string> = { order: 'marked ordered', receive: 'received against', close: 'closed by hand', dismiss: 'dismissed', no_longer_needed: 'closed as no longer needed' };
-const REFUSAL_CODES: Record<AlertEvent['event'], string> = { order: 'ALERT_NOT_OPEN', receive: 'ALERT_NOT_ACTIVE', close: 'ALERT_NOT_ORDERED', dismiss: 'ALERT_NOT_ACTIVE', no_longer_needed: 'ALERT_NOT_OPEN' };
+const REFUSAL_CODES: Record<AlertEvent['event'], string> = { order: 'ALERT_NOT_ACTIVE', receive: 'ALERT_NOT_ACTIVE', close: 'ALERT_NOT_ORDERED', dismiss: 'ALERT_NOT_ACTIVE', no_longer_needed: 'ALERT_NOT_OPEN' };
 
 /** Moves the alert by the event through the one writer, or says in words why it cannot. */
 function moveOrRefuse(ctx: ServiceContext, id: number, e: AlertEvent): Alert {

@@ -99,6 +99,11 @@ export function AlertCard({ alert }: { alert: Alert }) {
       {(alert.state === 'open' || alert.state === 'ordered') && open === 'none' && (
         <div className="flex flex-wrap gap-2">
           {alert.state === 'open' && <Button onClick={() => setOpen('ordered')}>Mark ordered</Button>}
+          {alert.state === 'ordered' && alert.toOrder > 0 && (
+            <Button onClick={() => setOpen('ordered')} aria-label={`Order more for ${bin.code}: ${formatQuantity(alert.toOrder, u)} on top of what is on order`}>
+              Order more
+            </Button>
+          )}
           {alert.state === 'ordered' && (
             <Button variant="secondary" onClick={closeByHand} busy={closeOrder.isPending} aria-label={`Close order for ${bin.code}: the rest will not come`}>
               Close order

@@ -23,12 +23,15 @@ export function createQueryClient(): QueryClient {
  */
 const Toaster = lazy(() => import('sonner').then(({ Toaster }) => ({ default: Toaster })));
 
+/** On a phone toasts sit above the bottom bar (3.5 rem) and never cover the header or the bar. */
+const TOASTS_ABOVE_NAV = { bottom: 'calc(4.5rem + env(safe-area-inset-bottom))' };
+
 export function AppProvider({ queryClient, children }: { queryClient: QueryClient; children: ReactNode }) {
   return (
     <QueryClientProvider client={queryClient}>
       {children}
       <Suspense fallback={null}>
-        <Toaster position="top-center" richColors closeButton toastOptions={{ className: 'text-base' }} />
+        <Toaster position="bottom-center" mobileOffset={TOASTS_ABOVE_NAV} richColors closeButton toastOptions={{ className: 'text-base' }} />
       </Suspense>
     </QueryClientProvider>
   );

@@ -34,7 +34,7 @@ export function FieldShell({ label, hint, error, children }: FieldShellProps) {
 }
 
 const CONTROL =
-  'min-h-12 w-full rounded-lg border-2 bg-card px-3 text-base text-ink placeholder:text-steel/70 focus:border-ink aria-[invalid=true]:border-bad';
+  'min-h-12 w-full rounded-lg border-2 bg-card px-3 text-base text-ink placeholder:text-steel focus:border-ink aria-[invalid=true]:border-bad';
 
 type TextFieldProps = InputHTMLAttributes<HTMLInputElement> & { label: string; hint?: ReactNode; error?: string };
 
@@ -46,7 +46,7 @@ export function TextField({ label, hint, error, className = '', ...input }: Text
           id={id}
           aria-invalid={error ? true : undefined}
           aria-describedby={describedBy}
-          className={`${CONTROL} border-rule ${className}`}
+          className={`${CONTROL} border-edge ${className}`}
           {...input}
         />
       )}
@@ -66,7 +66,7 @@ export function TextAreaField({ label, hint, error, className = '', rows = 3, ..
           rows={rows}
           aria-invalid={error ? true : undefined}
           aria-describedby={describedBy}
-          className={`w-full rounded-lg border-2 border-rule bg-card p-3 text-base text-ink placeholder:text-steel/70 focus:border-ink aria-[invalid=true]:border-bad ${className}`}
+          className={`w-full rounded-lg border-2 border-edge bg-card p-3 text-base text-ink placeholder:text-steel focus:border-ink aria-[invalid=true]:border-bad ${className}`}
           {...textarea}
         />
       )}
@@ -89,7 +89,7 @@ export function SelectField({ label, hint, error, options, className = '', ...se
           id={id}
           aria-invalid={error ? true : undefined}
           aria-describedby={describedBy}
-          className={`${CONTROL} border-rule ${className}`}
+          className={`${CONTROL} border-edge ${className}`}
           {...select}
         >
           {options.map((o) => (

@@ -45,7 +45,7 @@ export function QuantityField({ label, value, onChange, onBlur, min = 0, max, st
             onBlur={onBlur}
             aria-invalid={error ? true : undefined}
             aria-describedby={describedBy}
-            className="min-h-14 w-full min-w-0 rounded-lg border-2 border-rule bg-card px-3 text-center font-mono text-2xl text-ink focus:border-ink aria-[invalid=true]:border-bad"
+            className="min-h-14 w-full min-w-0 rounded-lg border-2 border-edge bg-card px-3 text-center font-mono text-2xl text-ink focus:border-ink aria-[invalid=true]:border-bad"
           />
           <button type="button" className={STEPPER} aria-label={`${step} more`} disabled={max !== undefined && current !== undefined && current >= max} onClick={() => bump(step)}>
             +

@@ -16,7 +16,7 @@ export const alertsLoader = (queryClient: QueryClient) => async ({ request }: Lo
   return null;
 };
 
-const JUMP = 'inline-flex min-h-12 items-center rounded-lg border-2 border-rule bg-card px-4 font-semibold hover:bg-paper';
+const JUMP = 'inline-flex min-h-12 items-center rounded-lg border-2 border-edge bg-card px-4 font-semibold hover:bg-paper';
 
 export function AlertsRoute() {
   const [params, setParams] = useSearchParams();

@@ -40,7 +40,7 @@ export function ForecastList({ list }: { list: ForecastListDto }) {
             }}
           />
         </div>
-        <label className="flex min-h-12 items-center gap-3 rounded-lg border-2 border-rule bg-card px-3 font-semibold">
+        <label className="flex min-h-12 items-center gap-3 rounded-lg border-2 border-edge bg-card px-3 font-semibold">
           <input
             type="checkbox"
             className="size-5 accent-ink"

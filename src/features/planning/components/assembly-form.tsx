@@ -23,7 +23,7 @@ const resolver: Resolver<AssemblyFormValues, unknown, CreateAssemblyInput> = (va
 };
 
 const STATUS_OPTIONS = ASSEMBLY_STATUSES.map((s) => ({ value: s, label: ASSEMBLY_STATUS_LABELS[s] }));
-const UNIT_CHOICE = 'flex min-h-12 flex-1 cursor-pointer items-center gap-3 rounded-lg border-2 border-rule bg-card px-3 font-semibold has-[:checked]:border-ink has-[:checked]:bg-paper';
+const UNIT_CHOICE = 'flex min-h-12 flex-1 cursor-pointer items-center gap-3 rounded-lg border-2 border-edge bg-card px-3 font-semibold has-[:checked]:border-ink has-[:checked]:bg-paper';
 
 export interface AssemblyFormProps {
   assembly?: Assembly;

@@ -15,7 +15,7 @@ const HEAD_OPTIONS = RIVET_HEADS.map((h) => ({ value: h, label: RIVET_HEAD_LABEL
 const MATERIAL_OPTIONS = [{ value: '', label: 'Not stated' }, ...RIVET_MATERIALS.map((m) => ({ value: m, label: m }))];
 const DIAMETER_OPTIONS = ESTIMATE_DIAMETERS.map((d) => ({ value: String(d), label: `${diameterText(d)} (−${d})` }));
 
-const RADIO = 'flex min-h-12 flex-1 cursor-pointer items-center gap-3 rounded-lg border-2 border-rule bg-card px-3 font-semibold has-[:checked]:border-ink has-[:checked]:bg-paper';
+const RADIO = 'flex min-h-12 flex-1 cursor-pointer items-center gap-3 rounded-lg border-2 border-edge bg-card px-3 font-semibold has-[:checked]:border-ink has-[:checked]:bg-paper';
 
 /** One rivet line: where it runs, how it is spaced, what it fastens, with the rivet; its estimate beneath. */
 export function RivetLineFields({ index, unit, live, onRemove }: { index: number; unit: LengthUnit; live: LiveLine | undefined; onRemove: () => void }) {

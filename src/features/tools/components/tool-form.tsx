@@ -157,11 +157,11 @@ export function ToolForm({
       </div>
       <label className="flex flex-col gap-1.5">
         <span className="text-sm font-semibold">Travels with it (one per line)</span>
-        <textarea rows={3} className="rounded-lg border-2 border-rule bg-card p-3" placeholder={'Nosepiece 1/8\nNosepiece 5/32'} {...form.register('accessories')} />
+        <textarea rows={3} className="rounded-lg border-2 border-edge bg-card p-3" placeholder={'Nosepiece 1/8\nNosepiece 5/32'} {...form.register('accessories')} />
       </label>
       <label className="flex flex-col gap-1.5">
         <span className="text-sm font-semibold">Notes</span>
-        <textarea rows={3} className="rounded-lg border-2 border-rule bg-card p-3" {...form.register('notes')} />
+        <textarea rows={3} className="rounded-lg border-2 border-edge bg-card p-3" {...form.register('notes')} />
       </label>
       <Button type="submit" busy={isSubmitting} className="self-start">
         {submitLabel}

@@ -49,7 +49,10 @@ describe('the builds page', () => {
     expect(assemblies.getByText('Jan 10, 2027 to Feb 1, 2027')).toBeTruthy();
     expect(assemblies.getByText('no dates planned')).toBeTruthy();
     expect(screen.getByText('Edge distance floor 0.375 in')).toBeTruthy();
-    expect(screen.getByRole('link', { name: 'Add an assembly to Two-seat low wing' }).getAttribute('href')).toBe('/builds/1/assemblies/new');
+    // Its name starts with the words it shows (WCAG 2.2, success criterion 2.5.3, label in name).
+    const add = screen.getByRole('link', { name: 'Add assembly to Two-seat low wing' });
+    expect(add.getAttribute('href')).toBe('/builds/1/assemblies/new');
+    expect(add.getAttribute('aria-label')).toBeNull();
     expect(screen.queryByLabelText('Show every member’s builds')).toBeNull();
   });
 
@@ -74,6 +77,6 @@ describe('the builds page', () => {
     await userEvent.click(screen.getByLabelText('Show every member’s builds'));
     expect(await screen.findByText('Ines Okafor’s build')).toBeTruthy();
     expect(screen.getByRole('heading', { level: 1 }).textContent).toBe('All builds');
-    expect(screen.queryByRole('link', { name: 'Add an assembly to Tool chest' })).toBeNull();
+    expect(screen.queryByRole('link', { name: 'Add assembly to Tool chest' })).toBeNull();
   });
 });

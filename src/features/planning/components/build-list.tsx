@@ -26,8 +26,8 @@ export function BuildList({ builds, unit, meId }: { builds: Build[]; unit: Lengt
                   )}
                 </div>
                 {mine && (
-                  <Link to={`/builds/${build.id}/assemblies/new`} className={LINK_BUTTON} aria-label={`Add an assembly to ${build.name}`}>
-                    Add assembly
+                  <Link to={`/builds/${build.id}/assemblies/new`} className={LINK_BUTTON}>
+                    Add assembly<span className="sr-only"> to {build.name}</span>
                   </Link>
                 )}
               </div>

@@ -62,6 +62,8 @@ describe('Planning settings', () => {
     expect(screen.getByRole('spinbutton', { name: 'Service level (%)' }).getAttribute('aria-describedby')).toBeTruthy();
     expect(within(form).getByText(/runs short about one lead time in twenty/)).toBeTruthy();
     expect(within(form).getByText(/Measured on finished assemblies:/).textContent).toContain('7.3 %');
+    // A table that scrolls sideways on a phone can be reached and scrolled with the keyboard.
+    expect(screen.getByRole('region', { name: 'Waste by member' }).getAttribute('tabindex')).toBe('0');
     const rows = within(screen.getByRole('table', { name: 'Waste by member' })).getAllByRole('row').slice(1);
     expect(rows.map((r) => [...r.children].map((c) => c.textContent))).toEqual([
       ['Mia Member', '1,200', '1,260', '5 %'],

@@ -1,4 +1,5 @@
 import type { BinForecastDto } from '@shared/schemas/forecast';
+import { ScrollTable } from '@/components/ui/scroll-table';
 import { formatDay, formatLevel } from '../utils/format';
 import { receiptsByWeek } from '../utils/forecast-words';
 
@@ -7,7 +8,7 @@ export function ForecastWeeksTable({ forecast, id }: { forecast: BinForecastDto;
   const receipts = receiptsByWeek(forecast);
   const { reorderPoint, safetyStock } = forecast;
   return (
-    <div id={id} className="overflow-x-auto rounded-lg border border-rule">
+    <ScrollTable id={id} label={`${forecast.bin.code} week by week`}>
       <table className="w-full border-collapse text-left text-sm">
         <caption className="sr-only">{forecast.bin.code} week by week</caption>
         <thead className="bg-paper">
@@ -53,6 +54,6 @@ export function ForecastWeeksTable({ forecast, id }: { forecast: BinForecastDto;
           })}
         </tbody>
       </table>
-    </div>
+    </ScrollTable>
   );
 }

@@ -1,6 +1,7 @@
 import { toast } from 'sonner';
 import type { ActualWaste } from '@shared/schemas/forecast';
 import { Button } from '@/components/ui/button';
+import { ScrollTable } from '@/components/ui/scroll-table';
 import { messageOf } from '@/lib/errors';
 import { useUpdatePlanningSettings } from '../api/planning-settings';
 import { formatCount, formatTenth } from '../utils/format';
@@ -46,7 +47,7 @@ export function MeasuredWaste({ waste, onApplied }: { waste: ActualWaste; onAppl
 export function WasteByMember({ waste }: { waste: ActualWaste }) {
   if (waste.members.length === 0) return <p className="text-steel">No member has finished an assembly with draws yet.</p>;
   return (
-    <div className="overflow-x-auto rounded-lg border border-rule">
+    <ScrollTable label="Waste by member">
       <table className="w-full border-collapse text-left text-sm">
         <caption className="sr-only">Waste by member</caption>
         <thead className="bg-paper">
@@ -78,6 +79,6 @@ export function WasteByMember({ waste }: { waste: ActualWaste }) {
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollTable>
   );
 }

@@ -53,6 +53,17 @@ const posts = (calls: FakeCall[]) => calls.filter((c) => c.method === 'POST' || 
 beforeEach(() => setCsrfToken('tok'));
 
 describe('the assembly editor', () => {
+  it('has headings that go down one level at a time, each rivet line a heading of its own', async () => {
+    serve();
+    renderEditor();
+    await screen.findByLabelText('Assembly name');
+    const levels = screen.getAllByRole('heading').map((h) => Number(h.tagName.slice(1)));
+    expect(screen.getByRole('heading', { name: 'Rivet line 1' }).tagName).toBe('H3');
+    levels.forEach((level, i) => {
+      if (i > 0) expect(level, `heading ${i + 1} of ${levels.join(', ')}`).toBeLessThanOrEqual(levels[i - 1] + 1);
+    });
+  });
+
   it('works out a typed rivet line as the member types, then saves it and opens the estimate', async () => {
     const calls = serve();
     const router = renderEditor();

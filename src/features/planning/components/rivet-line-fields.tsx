@@ -28,7 +28,7 @@ export function RivetLineFields({ index, unit, live, onRemove }: { index: number
     <fieldset className="flex flex-col gap-4 rounded-xl border border-rule bg-card p-4 shadow-sm">
       <legend className="sr-only">Rivet line {n}</legend>
       <div className="flex items-center justify-between gap-2">
-        <h3 className="text-lg font-semibold" aria-hidden>
+        <h3 className="text-lg font-semibold">
           Rivet line {n}
         </h3>
         <button type="button" className="min-h-12 rounded-lg px-3 font-semibold text-bad underline underline-offset-4" aria-label={`Remove line ${n}`} onClick={onRemove}>

@@ -1,4 +1,5 @@
 import { isRouteErrorResponse, Link, useRouteError } from 'react-router';
+import { MainLandmark } from '@/components/ui/main-landmark';
 import { messageOf } from '@/lib/errors';
 
 export function RouteError() {
@@ -11,13 +12,13 @@ export function RouteError() {
     message = typeof body === 'string' ? body : (body?.message ?? 'There is nothing at this address.');
   }
   return (
-    <main className="mx-auto flex max-w-md flex-col gap-4 px-4 py-10">
+    <MainLandmark className="mx-auto flex max-w-md flex-col gap-4 px-4 py-10">
       <h1 className="text-2xl font-bold">{title}</h1>
       <p role="alert">{message}</p>
       <Link to="/" className="inline-flex min-h-12 items-center self-start rounded-lg bg-ink px-5 font-semibold text-card">
         Go to home
       </Link>
-    </main>
+    </MainLandmark>
   );
 }
 
@@ -35,12 +36,12 @@ export function LoadingRoute() {
 
 export function NotFoundRoute() {
   return (
-    <main className="mx-auto flex max-w-md flex-col gap-4 px-4 py-10">
+    <MainLandmark className="mx-auto flex max-w-md flex-col gap-4 px-4 py-10">
       <h1 className="text-2xl font-bold">Page not found</h1>
       <p>There is nothing at this address.</p>
       <Link to="/" className="inline-flex min-h-12 items-center self-start rounded-lg bg-ink px-5 font-semibold text-card">
         Go to home
       </Link>
-    </main>
+    </MainLandmark>
   );
 }

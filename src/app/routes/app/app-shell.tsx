@@ -5,6 +5,7 @@ import { NavLink, Outlet, useNavigate, type LoaderFunctionArgs } from 'react-rou
 import { hasRole, ROLE_LABELS, type Role } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { useLogout } from '@/features/auth/api/logout';
+import { MainLandmark } from '@/components/ui/main-landmark';
 import type { QueuedAction } from '@/features/offline/db';
 import { invalidateReorderFamily } from '@/lib/reorder-queries';
 import { stockMoneyKeys } from '@/features/stock-money/api/keys';
@@ -156,9 +157,9 @@ export function AppShell() {
           ))}
         </div>
       </nav>
-      <main id="main" className="mx-auto max-w-5xl px-4 py-5">
+      <MainLandmark id="main" className="mx-auto max-w-5xl px-4 py-5">
         <Outlet />
-      </main>
+      </MainLandmark>
     </div>
   );
 }

@@ -61,7 +61,7 @@ export function DataTable<T extends RowData>({ table, caption, empty }: { table:
                       <button
                         type="button"
                         onClick={header.column.getToggleSortingHandler()}
-                        className="inline-flex min-h-11 items-center gap-1 underline-offset-4 hover:underline"
+                        className="inline-flex min-h-11 min-w-11 items-center gap-1 underline-offset-4 hover:underline"
                       >
                         <table.FlexRender header={header} />
                         <span aria-hidden className="font-mono text-steel">

@@ -98,7 +98,7 @@ export function BinImportPanel({ onImported }: { onImported?: (result: ImportRes
     <div className="flex flex-col gap-4">
       <p>
         One line per bin, with a header line of column names.{' '}
-        <a href={TEMPLATE_CSV_URL} download className="font-semibold underline underline-offset-4">
+        <a href={TEMPLATE_CSV_URL} download className="inline-target font-semibold underline underline-offset-4">
           Download a template
         </a>{' '}
         with every column and two example bins, or export the bins below, change them in a spreadsheet and bring the file back. A row

@@ -32,7 +32,7 @@ export function LoanHistoryList({ loans }: { loans: Loan[] }) {
     <ul className="divide-y divide-rule">
       {loans.map((l) => (
         <li key={l.id} className="py-2">
-          <Link to={`/tools/${l.tool.code}`} className="font-medium underline-offset-4 hover:underline">
+          <Link to={`/tools/${l.tool.code}`} className="inline-flex min-h-11 items-center gap-1 font-medium underline-offset-4 hover:underline">
             <span className="font-mono">{l.tool.code}</span> {l.tool.name}
           </Link>
           <p className="text-sm text-steel">

@@ -11,22 +11,22 @@ const css = readFileSync(new URL('../../src/index.css', import.meta.url), 'utf8'
 const theme = css.slice(css.indexOf('@theme'), css.indexOf('}', css.indexOf('@theme')));
 
 function token(name: string): string {
-  const match = new RegExp(`--color-${name}:\\s*(#[0-9a-f]{6});`, 'i').exec(theme);
-  if (!match) throw new Error(`--color-${name} is not a six-digit hex colour in src/index.css`);
-  return match[1];
+  const hex = new RegExp(`--color-${name}:\\s*(#[0-9a-f]{6});`, 'i').exec(theme)?.[1];
+  if (!hex) throw new Error(`--color-${name} is not a six-digit hex colour in src/index.css`);
+  return hex;
 }
 
 function relativeLuminance(hex: string): number {
-  const [r, g, b] = [1, 3, 5].map((i) => {
+  const channel = (i: number) => {
     const c = parseInt(hex.slice(i, i + 2), 16) / 255;
     return c <= 0.04045 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4;
-  });
-  return 0.2126 * r + 0.7152 * g + 0.0722 * b;
+  };
+  return 0.2126 * channel(1) + 0.7152 * channel(3) + 0.0722 * channel(5);
 }
 
 function contrastRatio(a: string, b: string): number {
-  const [light, dark] = [relativeLuminance(a), relativeLuminance(b)].sort((x, y) => y - x);
-  return (light + 0.05) / (dark + 0.05);
+  const [la, lb] = [relativeLuminance(a), relativeLuminance(b)];
+  return (Math.max(la, lb) + 0.05) / (Math.min(la, lb) + 0.05);
 }
 
 const PAGE_BACKGROUNDS = ['paper', 'card'];

@@ -59,8 +59,8 @@ describe('the assembly editor', () => {
     await screen.findByLabelText('Assembly name');
     const levels = screen.getAllByRole('heading').map((h) => Number(h.tagName.slice(1)));
     expect(screen.getByRole('heading', { name: 'Rivet line 1' }).tagName).toBe('H3');
-    levels.forEach((level, i) => {
-      if (i > 0) expect(level, `heading ${i + 1} of ${levels.join(', ')}`).toBeLessThanOrEqual(levels[i - 1] + 1);
+    levels.slice(1).forEach((level, i) => {
+      expect(level, `heading ${i + 2} of ${levels.join(', ')}`).toBeLessThanOrEqual((levels[i] ?? 1) + 1);
     });
   });
 

@@ -209,4 +209,37 @@ describe('accessibility (axe-core, WCAG 2.2 AA)', () => {
       }
     });
   }
+
+  it('a toast on a phone sits between the header and the bottom bar, with a 44 px close button, and passes axe-core', async () => {
+    const context = await suite.browser.newContext({ viewport: SIZES[0].viewport, bypassCSP: true });
+    try {
+      const page = await context.newPage();
+      await page.goto(`${suite.app.url}/sign-in`);
+      await page.getByLabel('E-mail').fill('member@example.org');
+      await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD);
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await page.getByRole('heading', { name: /Hello/ }).waitFor();
+      await page.addScriptTag({ path: AXE });
+      await openInApp(page, '/builds');
+      await page.getByRole('button', { name: 'New build' }).click();
+      await page.getByLabel('Build name').fill('Trailer skin');
+      await page.getByRole('button', { name: 'Start the build' }).click();
+      const toast = page.locator('[data-sonner-toast]').filter({ hasText: 'Trailer skin is started' });
+      await toast.waitFor();
+      await page.waitForTimeout(500); // the toast slides in
+      const [toastBox, headerBox, navBox, closeBox] = await Promise.all([
+        toast.boundingBox(),
+        page.locator('header').first().boundingBox(),
+        page.getByRole('navigation', { name: 'Main' }).boundingBox(),
+        toast.getByRole('button', { name: /close/i }).boundingBox(),
+      ]);
+      expect(toastBox!.y).toBeGreaterThanOrEqual(headerBox!.y + headerBox!.height);
+      expect(toastBox!.y + toastBox!.height).toBeLessThanOrEqual(navBox!.y);
+      expect(Math.round(closeBox!.width)).toBeGreaterThanOrEqual(44);
+      expect(Math.round(closeBox!.height)).toBeGreaterThanOrEqual(44);
+      expect(report(new Map([['/builds with a toast (phone)', await axeFindings(page)]]))).toBe('');
+    } finally {
+      await context.close();
+    }
+  });
 });

@@ -24,7 +24,7 @@ describe('a member planning an assembly on a phone', () => {
     await page.getByRole('button', { name: 'New build' }).click();
     await page.getByLabel('Build name').fill('Baggage door');
     await page.getByRole('button', { name: 'Start the build' }).click();
-    await page.getByRole('link', { name: 'Add an assembly to Baggage door' }).click();
+    await page.getByRole('link', { name: 'Add assembly to Baggage door' }).click();
 
     await page.getByLabel('Assembly name').fill('Door skin');
     const first = page.getByRole('group', { name: 'Rivet line 1' });

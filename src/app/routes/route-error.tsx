@@ -1,4 +1,5 @@
 import { isRouteErrorResponse, Link, useRouteError } from 'react-router';
+import { PageHeading } from '@/components/ui/page';
 import { messageOf } from '@/lib/errors';
 
 export function RouteError() {
@@ -12,7 +13,7 @@ export function RouteError() {
   }
   return (
     <main className="mx-auto flex max-w-md flex-col gap-4 px-4 py-10">
-      <h1 className="text-2xl font-bold">{title}</h1>
+      <PageHeading title={title} />
       <p role="alert">{message}</p>
       <Link to="/" className="inline-flex min-h-12 items-center self-start rounded-lg bg-ink px-5 font-semibold text-card">
         Go to home
@@ -36,7 +37,7 @@ export function LoadingRoute() {
 export function NotFoundRoute() {
   return (
     <main className="mx-auto flex max-w-md flex-col gap-4 px-4 py-10">
-      <h1 className="text-2xl font-bold">Page not found</h1>
+      <PageHeading title="Page not found" />
       <p>There is nothing at this address.</p>
       <Link to="/" className="inline-flex min-h-12 items-center self-start rounded-lg bg-ink px-5 font-semibold text-card">
         Go to home

@@ -109,7 +109,7 @@ async function open(page: Page, base: string, path: string): Promise<{ title: st
   await page
     .waitForFunction(() => document.querySelector('h1:not([data-left])') !== null && document.title !== 'Gripline', undefined, { timeout: 10_000 })
     .catch(async (e: unknown) => {
-      throw new Error(`${path} did not render a page: at ${page.url()}, heading ${await page.locator('h1').first().textContent()}; ${String(e)}`);
+      throw new Error(`${path} did not render a page with a heading and a title of its own: at ${page.url()}, heading ${await page.locator('h1').first().textContent()}; ${String(e)}`);
     });
   return { title: await page.title(), heading: (await page.locator('h1').first().textContent()) ?? '' };
 }

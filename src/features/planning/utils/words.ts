@@ -1,4 +1,5 @@
 import type { LengthUnit } from '@shared/schemas/builds';
+import { lengthWords } from '@shared/estimate/length-words';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import { blindGripRange, inchFraction } from '@shared/stock/fasteners';
 import { RIVET_HEAD_LABELS, type RivetHead } from '@shared/stock/kinds';
@@ -12,11 +13,8 @@ export const RIVET_KIND_LABELS: Record<EstimateRivetKind, string> = {
 
 export const UNIT_WORDS: Record<LengthUnit, string> = { in: 'inches', mm: 'millimetres' };
 
-const inchNumber = new Intl.NumberFormat('en-US', { maximumFractionDigits: 4, useGrouping: false });
-const mmNumber = new Intl.NumberFormat('en-US', { maximumFractionDigits: 2, useGrouping: false });
-
-/** A length in its unit: inches to 0.0001 in, millimetres to 0.01 mm. */
-export const lengthText = (x: number, unit: LengthUnit): string => `${(unit === 'in' ? inchNumber : mmNumber).format(x)} ${unit}`;
+/** A length in its unit: inches to 0.0001 in, millimetres to 0.01 mm (the estimator's cautions use the same). */
+export const lengthText = lengthWords;
 
 /** A rivet diameter dash in 32nds: 5 → "5/32 in". */
 export const diameterText = (diameter32: number): string => `${inchFraction(diameter32, 32)} in`;

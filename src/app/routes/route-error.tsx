@@ -1,9 +1,22 @@
+import { lazy, Suspense } from 'react';
 import { isRouteErrorResponse, Link, useRouteError } from 'react-router';
 import { PageHeading } from '@/components/ui/page';
+import { ApiError } from '@/lib/api-client';
 import { messageOf } from '@/lib/errors';
+
+// Loaded only when a code is not found, so the first load stays small.
+const UnknownCode = lazy(() => import('./unknown-code').then((m) => ({ default: m.UnknownCode })));
+const UNKNOWN_CODE_ERRORS = ['TOOL_NOT_FOUND', 'BIN_NOT_FOUND'];
 
 export function RouteError() {
   const error = useRouteError();
+  if (error instanceof ApiError && UNKNOWN_CODE_ERRORS.includes(error.code)) {
+    return (
+      <Suspense fallback={<LoadingRoute />}>
+        <UnknownCode message={error.message} />
+      </Suspense>
+    );
+  }
   let title = 'Something went wrong';
   let message = messageOf(error);
   if (isRouteErrorResponse(error)) {

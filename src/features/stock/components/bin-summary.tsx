@@ -1,5 +1,6 @@
 import type { BinFields, BinReorder } from '@shared/schemas/bins';
 import { BIN_KIND_LABELS, isRivetKind } from '@shared/stock/kinds';
+import { unitWord } from '@shared/stock/quantity-words';
 import { Notice } from '@/components/ui/notice';
 import { Code, PageHeading } from '@/components/ui/page';
 import { formatCents, formatCount, formatDate, formatQuantity, formatUnitCost, gripRangeText } from '../utils/format';
@@ -31,7 +32,7 @@ export function BinSummary({ bin, reorder, isQuartermaster }: { bin: BinFields; 
             {formatCount(bin.onHand)}
           </span>{' '}
           <span className="text-lg">
-            {bin.unit} on hand
+            {unitWord(bin.onHand, bin.unit)} on hand
           </span>
         </p>
         {bin.packSize > 1 && <p className="text-steel">packs of {formatCount(bin.packSize)}</p>}

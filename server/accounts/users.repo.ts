@@ -31,7 +31,7 @@ export function listUsers(db: Executor): UserRow[] {
 
 export function insertUser(
   db: Executor,
-  values: { email: string; name: string; role: Role; passwordHash: string; phone?: string | null },
+  values: { email: string; name: string; role: Role; passwordHash: string; phone?: string | null; createdAt?: Date },
 ): UserRow {
   return db.insert(users).values(values).returning().get();
 }

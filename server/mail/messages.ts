@@ -1,5 +1,7 @@
 import type { Role } from '@shared/roles';
 import { ROLE_LABELS } from '@shared/roles';
+import { centsWords } from '@shared/stock/money';
+import { countWords } from '@shared/stock/quantity-words';
 import { dayInWords, daysLateWords, momentInWords } from '@shared/time/chapter-time';
 import type { OutgoingMail } from './mailer';
 
@@ -96,9 +98,9 @@ export interface OverdueMailLine {
 
 const dayWords = (d: Date, calendar: MailCalendar) => dayInWords(d, calendar.zone, calendar.now);
 /** An amount in cents as the mails write it: $12.50. */
-export const valueWords = (cents: number) => `$${(cents / 100).toFixed(2)}`;
-/** A count with its noun: 1 pack, 3 packs. */
-export const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+export const valueWords = centsWords;
+/** A count with its noun: 1 pack, 3 packs, 1,206 packs. */
+export const plural = (n: number, one: string, many: string) => `${countWords(n)} ${n === 1 ? one : many}`;
 const toolLink = (publicUrl: string, code: string) => `${publicUrl.replace(/\/$/, '')}/tools/${code}`;
 
 export function overdueReminderMail(line: OverdueMailLine, publicUrl: string, calendar: MailCalendar): OutgoingMail {

@@ -1,5 +1,6 @@
 import { BLIND_GRIP_RANGES, blindGripForStack, inchFraction, solidLengthDash } from '../stock/fasteners';
 import type { RivetHead } from '../stock/kinds';
+import { lengthWords } from './length-words';
 import {
   DEFAULT_MAX_PITCH_DIAMETERS,
   drillSequence,
@@ -58,9 +59,6 @@ export interface LineError extends EstimateNotice {
 function clean(x: number): number {
   return Math.round(x * 1e6) / 1e6;
 }
-function fmt(x: number, unit: LengthUnit): string {
-  return `${clean(x)} ${unit}`;
-}
 const NO_WARNINGS: readonly EstimateNotice[] = Object.freeze([]);
 
 /**
@@ -112,7 +110,7 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
     if (edge < minEdge - 1e-9) {
       warnings.push({
         code: 'EDGE_BELOW_MINIMUM',
-        message: `Edge distance ${fmt(edge, unit)} is below the published minimum of ${minEdgeDiameters(head)}D = ${fmt(minEdge, unit)} for a ${diaWords(diameter32)} ${head === 'countersunk' ? 'countersunk ' : ''}rivet.`,
+        message: `Edge distance ${lengthWords(edge, unit)} is below the published minimum of ${minEdgeDiameters(head)}D = ${lengthWords(minEdge, unit)} for a ${diaWords(diameter32)} ${head === 'countersunk' ? 'countersunk ' : ''}rivet.`,
       });
     }
   } else {
@@ -124,7 +122,7 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
     return {
       error: true,
       code: 'LINE_TOO_SHORT',
-      message: `A line of ${fmt(line.length, unit)} is too short for two holes ${fmt(edge, unit)} from each end; it needs more than ${fmt(2 * edge, unit)}.`,
+      message: `A line of ${lengthWords(line.length, unit)} is too short for two holes ${lengthWords(edge, unit)} from each end; it needs more than ${lengthWords(2 * edge, unit)}.`,
     };
   }
   const holesPerRow = line.holesPerRow ?? Math.ceil(span / line.pitch! - 1e-9) + 1;
@@ -134,12 +132,12 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
     return {
       error: true,
       code: 'PITCH_BELOW_MINIMUM',
-      message: `${holesPerRow} holes give a pitch of ${fmt(pitch, unit)}, below the published minimum of 3D = ${fmt(minPitch, unit)} for a ${diaWords(diameter32)} rivet. Use fewer holes or a wider pitch.`,
+      message: `${holesPerRow} holes give a pitch of ${lengthWords(pitch, unit)}, below the published minimum of 3D = ${lengthWords(minPitch, unit)} for a ${diaWords(diameter32)} rivet. Use fewer holes or a wider pitch.`,
     };
   }
   const maxD = options.maxPitchDiameters ?? DEFAULT_MAX_PITCH_DIAMETERS;
   if (pitch > maxD * d + 1e-9) {
-    warnings.push({ code: 'PITCH_ABOVE_MAXIMUM', message: `The pitch of ${fmt(pitch, unit)} is above the chapter's maximum of ${maxD}D = ${fmt(maxD * d, unit)}.` });
+    warnings.push({ code: 'PITCH_ABOVE_MAXIMUM', message: `The pitch of ${lengthWords(pitch, unit)} is above the chapter's maximum of ${maxD}D = ${lengthWords(maxD * d, unit)}.` });
   }
 
   let stackSum = 0;

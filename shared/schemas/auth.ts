@@ -16,10 +16,13 @@ export const loginBodySchema = z.strictObject({
 });
 export type LoginBody = z.infer<typeof loginBodySchema>;
 
-/** Who is signed in, with the chapter's time zone: the client writes every day and moment in it. */
-export const meResponseSchema = z.strictObject({ user: userSchema, timeZone: z.string() });
+/**
+ * Who is signed in, with the chapter's time zone: the client writes every day and moment in it. A
+ * visitor who is signed out is no error: the answer is 200 with `user: null`.
+ */
+export const meResponseSchema = z.strictObject({ user: userSchema.nullable(), timeZone: z.string() });
 export type MeResponse = z.infer<typeof meResponseSchema>;
-export const loginResponseSchema = meResponseSchema.extend({ csrfToken: z.string() });
+export const loginResponseSchema = meResponseSchema.extend({ user: userSchema, csrfToken: z.string() });
 export type LoginResponse = z.infer<typeof loginResponseSchema>;
 export const csrfResponseSchema = z.strictObject({ token: z.string() });
 

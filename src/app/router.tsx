@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { createBrowserRouter } from 'react-router';
+import { createBrowserRouter, type RouteObject } from 'react-router';
 import { AppShell, appShellLoader } from './routes/app/app-shell';
 import { HomeRoute } from './routes/app/home';
 import { SignInRoute, signInLoader } from './routes/auth/sign-in';
@@ -12,7 +12,12 @@ import { LoadingRoute, NotFoundRoute, RouteError } from './routes/route-error';
  * (tests/build/first-load-budget.test.ts).
  */
 export function createAppRouter(queryClient: QueryClient) {
-  return createBrowserRouter([
+  return createBrowserRouter(appRoutes(queryClient));
+}
+
+/** Every page of the client, with its loader. */
+export function appRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
     { path: '/sign-in', loader: signInLoader(queryClient), Component: SignInRoute, ErrorBoundary: RouteError, HydrateFallback: LoadingRoute },
     {
       path: '/reset-password',
@@ -263,5 +268,5 @@ export function createAppRouter(queryClient: QueryClient) {
       ],
     },
     { path: '*', Component: NotFoundRoute },
-  ]);
+  ];
 }

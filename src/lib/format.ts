@@ -1,15 +1,15 @@
 // The dependency-free half of shared/time: these formatters are on the pages every member opens first.
+import { centsWords } from '@shared/stock/money';
+import { countWords, quantityWords } from '@shared/stock/quantity-words';
 import { dateInWords, dayInWords, momentInWords, shortDayInWords } from '@shared/time/words';
 import { chapterTimeZone } from './chapter-zone';
 
 /** Money, counts and days as every page shows them; a feature's own format module adds its trade words. */
-const cents = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' });
 /** Unit costs run to a hundredth of a cent (a rivet costs $0.0825). */
 const unitCost = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD', minimumFractionDigits: 2, maximumFractionDigits: 4 });
-const count = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
 
 /** Whole cents as money: 1240 → "$12.40". */
-export const formatCents = (valueCents: number): string => cents.format(valueCents / 100);
+export const formatCents = centsWords;
 
 /** A unit cost in dollars, keeping up to 4 decimals: 0.0825 → "$0.0825", 3 → "$3.00". */
 export const formatUnitCost = (dollars: number): string => unitCost.format(dollars);
@@ -18,10 +18,10 @@ export const formatUnitCost = (dollars: number): string => unitCost.format(dolla
 export const formatAssembly = (a: { name: string; buildName: string }): string => `${a.name} · ${a.buildName}`;
 
 /** A whole quantity with thousands separators: 12000 → "12,000"; a fraction is rounded to a whole unit. */
-export const formatCount = (n: number): string => count.format(n);
+export const formatCount = countWords;
 
-/** A quantity with its unit: (250, "each") → "250 each". */
-export const formatQuantity = (n: number, unit: string): string => `${formatCount(n)} ${unit}`;
+/** A quantity with its unit, the unit in the plural for many: (250, "each") → "250 each", (4, "tube") → "4 tubes". */
+export const formatQuantity = quantityWords;
 
 /** A chapter day "2027-01-15", or the chapter day a timestamp fell on, as a date in words: "Jan 15, 2027". */
 export const formatDay = (iso: string): string =>

@@ -146,14 +146,29 @@ describe('the bin page', () => {
     expect(screen.getByText(/Goes on your tab/).textContent).toContain('$4.13');
   });
 
-  it('shows the server’s sentence when the bin holds fewer than the member draws', async () => {
-    const message = 'You cannot draw 500 from B-0107: only 120 on hand.';
-    const calls = serve('member', { answer: () => ({ status: 409, body: { error: { code: 'INSUFFICIENT_STOCK', message } } }) });
+  it('warns while typing when the quantity is more than the bin holds, and sends nothing', async () => {
+    const calls = serve('member');
     await renderBinPage();
     await userEvent.type(screen.getByLabelText('Quantity to draw'), '500');
+    const warning = 'Only 120 each on hand in B-0107: draw 120 or fewer, or ask the quartermaster.';
+    expect(screen.getByText(warning)).toBeTruthy();
+    expect(screen.queryByText(/Goes on your tab/)).toBeNull();
+    await userEvent.click(screen.getByRole('button', { name: 'Draw from B-0107' }));
+    expect(screen.getAllByText(warning).length).toBeGreaterThan(0);
+    expect(posts(calls)).toHaveLength(0);
+    await userEvent.clear(screen.getByLabelText('Quantity to draw'));
+    await userEvent.type(screen.getByLabelText('Quantity to draw'), '120');
+    expect(screen.queryByText(warning)).toBeNull();
+  });
+
+  it('shows the server’s sentence when the bin was drawn down meanwhile', async () => {
+    const message = 'You cannot draw 100 from B-0107: only 20 on hand.';
+    const calls = serve('member', { answer: () => ({ status: 409, body: { error: { code: 'INSUFFICIENT_STOCK', message } } }) });
+    await renderBinPage();
+    await userEvent.type(screen.getByLabelText('Quantity to draw'), '100');
     await userEvent.click(screen.getByRole('button', { name: 'Draw from B-0107' }));
     expect((await screen.findByRole('alert')).textContent).toContain(message);
-    expect(posts(calls)[0]).toMatchObject({ path: '/api/bins/B-0107/draw', body: { quantity: 500 } });
+    expect(posts(calls)[0]).toMatchObject({ path: '/api/bins/B-0107/draw', body: { quantity: 100 } });
     expect(onHand()).toBe('120');
   });
 

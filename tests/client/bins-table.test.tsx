@@ -30,7 +30,7 @@ describe('BinTable', () => {
     expect(within(first).getByText('80 each')).toBeTruthy();
     expect(within(first).getByText('Low stock')).toBeTruthy();
     expect(within(rows()[2]!).queryByText('Low stock')).toBeNull();
-    expect(within(rows()[4]!).getByText('30 bit')).toBeTruthy();
+    expect(within(rows()[4]!).getByText('30 bits')).toBeTruthy();
     expect(within(first).getByRole('link', { name: 'B-0001' }).getAttribute('href')).toBe('/bins/B-0001');
   });
 

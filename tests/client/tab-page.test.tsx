@@ -40,13 +40,13 @@ const TAB: Tab = {
   ],
   byAssembly: [
     { assemblyId: 7, assembly: LEFT_AILERON, quantity: 170, chargedCents: 2090 },
-    { assemblyId: null, assembly: null, quantity: 10, chargedCents: 350 },
+    { assemblyId: null, assembly: null, quantity: 1206, chargedCents: 42210 },
   ],
   recent: [
     entry({ id: 5, kind: 'reversal', at: '2026-11-03T10:00:00.000Z', quantity: 30, unitCost: 0.13, chargeCents: -390, assemblyId: 8, assembly: RIGHT_FLAP, note: 'drawn on the wrong member' }),
     entry({ id: 4, at: '2026-10-28T18:00:00.000Z', quantity: -30, unitCost: 0.13, chargeCents: 390, assemblyId: 8, assembly: RIGHT_FLAP }),
     entry({ id: 3, at: '2026-10-05T09:00:00.000Z', quantity: -50, unitCost: 0.13, chargeCents: 650 }),
-    entry({ id: 2, binCode: 'B-0002', designation: 'Screw #8-32 × 1/2 pan head', quantity: -10, unitCost: 0.35, chargeCents: 350, assemblyId: null, assembly: null }),
+    entry({ id: 2, binCode: 'B-0002', designation: 'Screw #8-32 × 1/2 pan head', quantity: -1206, unitCost: 0.35, chargeCents: 42210, assemblyId: null, assembly: null }),
     entry({ id: 1 }),
   ],
   payments: [{ id: 1, userId: 2, amountCents: 1000, at: '2026-12-02T12:00:00.000Z', note: 'cash at the bench', recordedBy: { id: 1, name: 'Lee Lead' } }],
@@ -88,7 +88,7 @@ describe('My tab page', () => {
     ]);
     expect(tableRows('Charged by assembly').map(cellTexts)).toEqual([
       ['Left aileron · Two-seat kit', '170', '$20.90'],
-      ['Not tied to an assembly', '10', '$3.50'],
+      ['Not tied to an assembly', '1,206', '$422.10'],
     ]);
 
     const recent = tableRows('Recent draws, returns and corrections').map(cellTexts);
@@ -97,6 +97,7 @@ describe('My tab page', () => {
     expect(recent[4]).toEqual([expect.any(String), expect.stringContaining('B-0001'), 'Drawn', '120 × $0.12', 'Left aileron · Two-seat kit', '$14.40']);
     expect(recent[3]![1]).toContain('Screw #8-32 × 1/2 pan head');
     expect(recent[3]![4]).toBe('Not tied to an assembly');
+    expect(recent[3]![3]).toBe('1,206 × $0.35');
 
     expect(screen.getByText(/cash at the bench/)).toBeTruthy();
   });

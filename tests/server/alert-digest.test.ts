@@ -66,8 +66,8 @@ describe('the daily alert digest', () => {
     expect(text).toContain(`- ${rivets.code} `);
     // The one reorder rule: rivets up to 200 (the bin's own point) + 459 (EOQ 458.3 over the typed 450) = 659, less 100 → 6 packs;
     // screws up to 250 + 817 = 1,067, less 200 → 18 packs of 50. The same quantities as Restock and the purchase list.
-    expect(text).toContain('100 each on hand; order 600 (6 packs of 100, about $72.00)');
-    expect(text).toContain(`- ${screws.code} Screw #8-32 × 1/2 pan head, stainless, part PS832-8: 200 each on hand; order 900 (18 packs of 50, about $81.00)`);
+    expect(text).toContain('100 each on hand; order 600 each (6 packs of 100, about $72.00)');
+    expect(text).toContain(`- ${screws.code} Screw #8-32 × 1/2 pan head, stainless, part PS832-8: 200 each on hand; order 900 each (18 packs of 50, about $81.00)`);
     expect(await t.lastMailTo('qm-old@example.org')).toBeUndefined();
     expect(await t.lastMailTo('lead@example.org')).toBeUndefined();
     expect(await t.lastMailTo('member@example.org')).toBeUndefined();
@@ -89,7 +89,7 @@ describe('the daily alert digest', () => {
     const text = (await t.lastMailTo('qm@example.org'))!.text;
     expect((await t.lastMailTo('qm@example.org'))!.subject).toBe('Reorder: 1 bin needs ordering');
     expect(text).toContain(`- ${rivets.code} `);
-    expect(text).toContain('ordered 500 on Tuesday, December 1, 500 still to come, expected Wednesday, December 9');
+    expect(text).toContain('ordered 500 each on Tuesday, December 1, 500 each still to come, expected Wednesday, December 9');
 
     await post(qm, `/api/alerts/${idOf(screws.code)}/dismiss`, { reason: 'Borrowing from the chapter next door' });
     const before = mailCount();

@@ -1,4 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { meResponseSchema } from '@shared/schemas/auth';
 import { buildTestApp, PASSWORD, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
@@ -104,17 +105,22 @@ describe('POST /api/auth/login', () => {
 });
 
 describe('GET /api/auth/me and POST /api/auth/logout', () => {
-  it('answers 401 when signed out', async () => {
-    const res = await (await t.anonymous()).agent.get('/api/auth/me');
-    expect(res.status).toBe(401);
-    expect(res.body.error.code).toBe('NOT_SIGNED_IN');
+  it('answers 200 with no one for a signed-out visitor (not an error), while the other routes still answer 401', async () => {
+    const { agent } = await t.anonymous();
+    const res = await agent.get('/api/auth/me');
+    expect(res.status).toBe(200);
+    expect(meResponseSchema.parse(res.body)).toEqual({ user: null, timeZone: expect.any(String) });
+    const tools = await agent.get('/api/tools');
+    expect(tools.status).toBe(401);
+    expect(tools.body.error.code).toBe('NOT_SIGNED_IN');
   });
 
   it('signs out with 204 and the session no longer works', async () => {
     const { agent, csrf } = await t.signIn('member@example.org');
     const res = await agent.post('/api/auth/logout').set('X-CSRF-Token', csrf);
     expect(res.status).toBe(204);
-    expect((await agent.get('/api/auth/me')).status).toBe(401);
+    expect((await agent.get('/api/auth/me')).body.user).toBeNull();
+    expect((await agent.get('/api/tools')).status).toBe(401);
   });
 });
 
@@ -146,7 +152,7 @@ describe('a session whose person was deactivated or removed outside the People s
     expect(res.status).toBe(401);
     expect(res.body.error?.code).toBe('NOT_SIGNED_IN');
     expect(sessionsOf('member@example.org')).toBe(0);
-    expect((await phone.agent.get('/api/auth/me')).status).toBe(401);
+    expect((await phone.agent.get('/api/auth/me')).body.user).toBeNull();
   });
 
   it.each(requests)('%s answers 401 NOT_SIGNED_IN once the person’s row is deleted', async (_name, send) => {

@@ -28,7 +28,7 @@ describe('response contracts', () => {
     const login = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'lead@example.org', password: PASSWORD });
     expect(loginResponseSchema.parse(login.body).user.role).toBe('lead');
     const me = await agent.get('/api/auth/me');
-    expect(meResponseSchema.parse(me.body).user.email).toBe('lead@example.org');
+    expect(meResponseSchema.parse(me.body).user?.email).toBe('lead@example.org');
     expect(JSON.stringify(login.body) + JSON.stringify(me.body)).not.toMatch(/argon2|password/i);
   });
 

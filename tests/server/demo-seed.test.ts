@@ -47,4 +47,35 @@ describe('the demo chapter', () => {
     expect(await seedDemoChapter(db)).toBe(false);
     db.$client.close();
   }, SEEDING_MS);
+
+  it('has people who joined before anything they did: no sign-off, loan, draw or other dated row of theirs is older', async () => {
+    const db = openDatabase(':memory:');
+    migrateDatabase(db);
+    const now = Date.now();
+    await seedDemoChapter(db);
+    const sqlite = db.$client;
+    const people = sqlite.prepare('select id, name, created_at as joined from users').all() as { id: number; name: string; joined: number }[];
+    // Joined over the chapter's years, not all on the day the demo was seeded.
+    expect(new Set(people.map((p) => p.joined)).size).toBe(people.length);
+    for (const p of people) expect(p.joined).toBeLessThan(now - 30 * 86_400_000);
+    const tables = (sqlite.prepare("select name from sqlite_master where type = 'table' and name not like 'sqlite_%' and name not like '__drizzle%'").all() as { name: string }[]).map((t) => t.name);
+    const early: string[] = [];
+    let checked = 0;
+    for (const table of tables) {
+      const byPerson = (sqlite.prepare(`pragma foreign_key_list("${table}")`).all() as { table: string; from: string }[]).filter((k) => k.table === 'users').map((k) => k.from);
+      const dated = (sqlite.prepare(`pragma table_info("${table}")`).all() as { name: string }[]).map((c) => c.name).filter((c) => c.endsWith('_at'));
+      for (const who of byPerson) {
+        for (const when of dated) {
+          checked += 1;
+          const rows = sqlite
+            .prepare(`select u.name as name, t."${when}" as at, u.created_at as joined from "${table}" t join users u on u.id = t."${who}" where t."${when}" is not null and t."${when}" < u.created_at`)
+            .all() as { name: string; at: number; joined: number }[];
+          for (const r of rows) early.push(`${table}.${when} by ${who}: ${r.name} on ${new Date(r.at).toISOString()}, joined ${new Date(r.joined).toISOString()}`);
+        }
+      }
+    }
+    expect(checked).toBeGreaterThan(10);
+    expect(early.slice(0, 5)).toEqual([]);
+    db.$client.close();
+  }, SEEDING_MS);
 });

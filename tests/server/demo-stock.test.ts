@@ -137,7 +137,7 @@ describe('the demo chapter’s stock', () => {
     const histories = [1, 2].map(() => {
       const db = openDatabase(':memory:');
       migrateDatabase(db);
-      for (const p of DEMO_PEOPLE) insertUser(db, { ...p, passwordHash: 'not-used' });
+      for (const { email, name, role } of DEMO_PEOPLE) insertUser(db, { email, name, role, passwordHash: 'not-used' });
       seedDemoStock(db, now);
       const rows = db.$client.prepare('select bin_id, kind, quantity, balance_after, unit_cost_e_4, at, actor_id, member_id, note from stock_movements order by id').all();
       db.$client.close();

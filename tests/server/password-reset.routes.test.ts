@@ -104,17 +104,19 @@ describe('POST /api/auth/password-reset', () => {
     };
     // Spread over several accounts so the hourly cap never turns a known address into a cheap one.
     const known: string[] = [];
-    for (let i = 0; i < 5; i++) known.push((await t.addUser({ email: `builder${i}@example.org` })).email);
+    for (let i = 0; i < 9; i++) known.push((await t.addUser({ email: `builder${i}@example.org` })).email);
     const knownTimes: number[] = [];
     const unknownTimes: number[] = [];
-    for (let i = 0; i < 15; i++) {
+    for (let i = 0; i < 27; i++) {
       knownTimes.push(await timed(known[i % known.length]!));
       unknownTimes.push(await timed(`nobody${i}@example.org`));
     }
-    expect(mailCount()).toBe(15);
+    expect(mailCount()).toBe(27);
+    // Before the outbox the known address took ≈ 34 times as long; the bounds leave room for a busy
+    // machine (requests of a few ms each) while any real difference in work shows far outside them.
     const ratio = median(knownTimes) / median(unknownTimes);
-    expect(ratio).toBeGreaterThan(0.5);
-    expect(ratio).toBeLessThan(2);
+    expect(ratio).toBeGreaterThan(1 / 3);
+    expect(ratio).toBeLessThan(3);
   });
 
   it('answers 400 VALIDATION_FAILED for an address that is not one', async () => {
@@ -145,7 +147,7 @@ describe('POST /api/auth/password-reset/confirm', () => {
     const token = await resetToken('member@example.org');
     const { agent, csrf } = await t.anonymous();
     await agent.post('/api/auth/password-reset/confirm').set('X-CSRF-Token', csrf).send({ token, password: NEW_PASSWORD }).expect(200);
-    expect((await agent.get('/api/auth/me')).status).toBe(401);
+    expect((await agent.get('/api/auth/me')).body.user).toBeNull();
   });
 
   it('works once: a second confirm answers 410 LINK_USED and the first password stands', async () => {
@@ -190,9 +192,10 @@ describe('POST /api/auth/password-reset/confirm', () => {
     expect((await memberBefore.agent.get('/api/auth/me')).status).toBe(200);
     const token = await resetToken('member@example.org');
     expect((await confirm(token)).status).toBe(200);
-    const me = await memberBefore.agent.get('/api/auth/me');
-    expect(me.status).toBe(401);
-    expect(me.body.error.code).toBe('NOT_SIGNED_IN');
+    expect((await memberBefore.agent.get('/api/auth/me')).body.user).toBeNull();
+    const tools = await memberBefore.agent.get('/api/tools');
+    expect(tools.status).toBe(401);
+    expect(tools.body.error.code).toBe('NOT_SIGNED_IN');
     expect((await lead.agent.get('/api/auth/me')).status).toBe(200);
   });
 

@@ -75,9 +75,10 @@ describe('PATCH /api/users/:id', () => {
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ id: memberRow.id, active: false, deactivatedAt: t.clock.now.toISOString() });
     expect(sessionCount()).toBe(before - 1);
-    const me = await member.agent.get('/api/auth/me');
-    expect(me.status).toBe(401);
-    expect(me.body.error.code).toBe('NOT_SIGNED_IN');
+    expect((await member.agent.get('/api/auth/me')).body.user).toBeNull();
+    const tools = await member.agent.get('/api/tools');
+    expect(tools.status).toBe(401);
+    expect(tools.body.error.code).toBe('NOT_SIGNED_IN');
     const { agent, csrf } = await t.anonymous();
     const login = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'member@example.org', password: PASSWORD });
     expect(login.status).toBe(403);
@@ -158,7 +159,7 @@ describe('PATCH /api/users/:id', () => {
     const deactivated = await patch(leadRow.id, { active: false }, second);
     expect(deactivated.status).toBe(200);
     expect(deactivated.body.active).toBe(false);
-    expect((await lead.agent.get('/api/auth/me')).status).toBe(401);
+    expect((await lead.agent.get('/api/auth/me')).body.user).toBeNull();
     // Quinn is the last active lead now.
     const last = await patch(qmRow.id, { role: 'member' }, second);
     expect(last.status).toBe(409);

@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { estimate, isEstimateErrors, type EstimateResult } from '@shared/estimate/estimate';
 import { estimateLine, type LineEstimate, type RivetLineInput } from '@shared/estimate/estimate-line';
+import { lengthWords } from '@shared/estimate/length-words';
 import { drillSequence } from '@shared/estimate/rivet-rules';
 import { blindGripRange } from '@shared/stock/fasteners';
 
@@ -60,6 +61,14 @@ describe('pitch limits (minimum 3D: AC 43.13-1B, NAVEDTRA 14018; maximum a setti
     expect(ok(estimateLine(wide, { unit: 'in' })).warnings.map((w) => w.code)).toEqual(['PITCH_ABOVE_MAXIMUM']);
     expect(ok(estimateLine(line({ pitch: 1.1 }), { unit: 'in', maxPitchDiameters: 8 })).warnings.map((w) => w.code)).toEqual(['PITCH_ABOVE_MAXIMUM']);
     expect(ok(estimateLine(line({ pitch: 1.1 }), { unit: 'in' })).warnings).toEqual([]);
+  });
+  it('writes lengths in its cautions at the precision of the tables: inches to 0.0001, millimetres to 0.01', () => {
+    const inches = ok(estimateLine(line({ length: 9.453125, pitch: undefined, holesPerRow: 3, edgeDistance: 0.5 }), { unit: 'in' })); // pitch 4.2265625 in
+    expect(inches.warnings[0]!.message).toContain('The pitch of 4.2266 in is above');
+    expect(lengthWords(inches.pitch, 'in')).toBe('4.2266 in');
+    const mm = ok(estimateLine(line({ length: 240.1234, pitch: undefined, holesPerRow: 3, edgeDistance: 12.7, stack: [0.8, 0.8] }), { unit: 'mm' }));
+    expect(mm.warnings[0]!.message).toContain('The pitch of 107.36 mm is above');
+    expect(mm.warnings.map((w) => w.message).join(' ')).not.toMatch(/\d\.\d{3,} mm/);
   });
   it('says plainly when a line is too short for two holes', () => {
     const r = estimateLine(line({ length: 0.5 }), { unit: 'in' });

@@ -3,7 +3,6 @@ import type { RequestHandler } from 'express';
 import { loginBodySchema } from '@shared/schemas/auth';
 import { noFieldsBodySchema } from '@shared/schemas/fields';
 import { toUser } from '../../accounts/public-user';
-import { requireUser } from '../../middleware/auth';
 import { csrf } from '../../middleware/csrf';
 import { SESSION_COOKIE } from '../../middleware/session';
 import { endSession, signInSession } from '../../lib/session-helpers';
@@ -26,7 +25,7 @@ export function authRouter(loginLimiters: RequestHandler[]) {
   });
 
   router.get('/me', (req, res) => {
-    res.json({ user: toUser(requireUser(req)), timeZone: readChapterTimeZone(req.ctx.db) });
+    res.json({ user: req.user ? toUser(req.user) : null, timeZone: readChapterTimeZone(req.ctx.db) });
   });
 
   router.post('/logout', async (req, res) => {

@@ -1,5 +1,6 @@
 import type { Alert } from '@shared/schemas/forecast';
 import { valueAtCost } from '@shared/stock/money';
+import { countWords, quantityWords } from '@shared/stock/quantity-words';
 import { dayInWords, startOfDayNamed } from '@shared/time/chapter-time';
 import type { ServiceContext } from '../../context';
 import type { OutgoingMail } from '../../mail/mailer';
@@ -22,14 +23,14 @@ export interface AlertDigestResult {
 function alertLine(a: Alert, calendar: MailCalendar): string {
   const { bin } = a;
   const part = bin.supplierPart ? `, part ${bin.supplierPart}` : '';
-  const head = `- ${bin.code} ${bin.designation}${part}: ${bin.onHand} ${bin.unit} on hand`;
+  const head = `- ${bin.code} ${bin.designation}${part}: ${quantityWords(bin.onHand, bin.unit)} on hand`;
   const ordered = a.orderedAt ? ` on ${dayInWords(new Date(a.orderedAt), calendar.zone, calendar.now)}` : '';
   const expected = a.expectedAt ? `, expected ${dayInWords(startOfDayNamed(a.expectedAt, calendar.zone), calendar.zone, calendar.now)}` : '';
-  const onOrder = a.state === 'ordered' ? `; ordered ${a.orderedQty}${ordered}, ${a.onOrder} still to come${expected}` : '';
+  const onOrder = a.state === 'ordered' ? `; ordered ${quantityWords(a.orderedQty ?? 0, bin.unit)}${ordered}, ${quantityWords(a.onOrder, bin.unit)} still to come${expected}` : '';
   if (a.toOrder === 0) return `${head}${onOrder}`;
   // The quantity is the one reorder rule's, as on Restock and the purchase list.
   const packs = a.toOrder / bin.packSize;
-  return `${head}${onOrder}; order ${a.state === 'ordered' ? 'another ' : ''}${a.toOrder} (${plural(packs, 'pack', 'packs')} of ${bin.packSize}, about ${valueWords(valueAtCost(a.toOrder, bin.unitCost))})\n  ${a.reason}`;
+  return `${head}${onOrder}; order ${a.state === 'ordered' ? 'another ' : ''}${quantityWords(a.toOrder, bin.unit)} (${plural(packs, 'pack', 'packs')} of ${countWords(bin.packSize)}, about ${valueWords(valueAtCost(a.toOrder, bin.unitCost))})\n  ${a.reason}`;
 }
 
 /** The quartermaster's morning list: alerts still to order and orders on their way, by supplier. */

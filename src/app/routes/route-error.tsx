@@ -1,9 +1,23 @@
+import { lazy, Suspense } from 'react';
 import { isRouteErrorResponse, Link, useRouteError } from 'react-router';
 import { MainLandmark } from '@/components/ui/main-landmark';
+import { PageHeading } from '@/components/ui/page';
+import { ApiError } from '@/lib/api-client';
 import { messageOf } from '@/lib/errors';
+
+// Loaded only when a code is not found, so the first load stays small.
+const UnknownCode = lazy(() => import('./unknown-code').then((m) => ({ default: m.UnknownCode })));
+const UNKNOWN_CODE_ERRORS = ['TOOL_NOT_FOUND', 'BIN_NOT_FOUND'];
 
 export function RouteError() {
   const error = useRouteError();
+  if (error instanceof ApiError && UNKNOWN_CODE_ERRORS.includes(error.code)) {
+    return (
+      <Suspense fallback={<LoadingRoute />}>
+        <UnknownCode message={error.message} />
+      </Suspense>
+    );
+  }
   let title = 'Something went wrong';
   let message = messageOf(error);
   if (isRouteErrorResponse(error)) {
@@ -13,7 +27,7 @@ export function RouteError() {
   }
   return (
     <MainLandmark className="mx-auto flex max-w-md flex-col gap-4 px-4 py-10">
-      <h1 className="text-2xl font-bold">{title}</h1>
+      <PageHeading title={title} />
       <p role="alert">{message}</p>
       <Link to="/" className="inline-flex min-h-12 items-center self-start rounded-lg bg-ink px-5 font-semibold text-card">
         Go to home
@@ -25,19 +39,19 @@ export function RouteError() {
 /** Shown while the first loaders run (a slow hangar network can take a while). */
 export function LoadingRoute() {
   return (
-    <main className="mx-auto flex min-h-dvh max-w-md flex-col justify-center gap-2 px-4" aria-busy="true">
+    <MainLandmark className="mx-auto flex min-h-dvh max-w-md flex-col justify-center gap-2 px-4" aria-busy="true">
       <p className="font-mono text-sm font-medium tracking-widest text-brass-deep uppercase">Gripline</p>
       <p role="status" className="text-steel">
         Loading…
       </p>
-    </main>
+    </MainLandmark>
   );
 }
 
 export function NotFoundRoute() {
   return (
     <MainLandmark className="mx-auto flex max-w-md flex-col gap-4 px-4 py-10">
-      <h1 className="text-2xl font-bold">Page not found</h1>
+      <PageHeading title="Page not found" />
       <p>There is nothing at this address.</p>
       <Link to="/" className="inline-flex min-h-12 items-center self-start rounded-lg bg-ink px-5 font-semibold text-card">
         Go to home

@@ -1,4 +1,4 @@
-import type { ButtonHTMLAttributes } from 'react';
+import type { ComponentProps } from 'react';
 
 type Variant = 'primary' | 'secondary' | 'danger' | 'quiet';
 
@@ -9,7 +9,7 @@ const VARIANTS: Record<Variant, string> = {
   quiet: 'bg-transparent text-ink underline underline-offset-4 hover:text-ink-soft',
 };
 
-export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
+export interface ButtonProps extends ComponentProps<'button'> {
   variant?: Variant;
   busy?: boolean;
 }

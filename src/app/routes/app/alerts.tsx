@@ -7,6 +7,7 @@ import { AlertList } from '@/features/forecast/components/alert-list';
 import { CheckNowButton } from '@/features/forecast/components/check-now-button';
 import { PurchaseList } from '@/features/forecast/components/purchase-list';
 import { SelectField } from '@/components/ui/field';
+import { PageHeading } from '@/components/ui/page';
 import { requireRole } from './guards';
 
 export const alertsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
@@ -28,7 +29,7 @@ export function AlertsRoute() {
       <header className="mb-5 flex flex-col gap-3">
         <div className="flex flex-wrap items-end justify-between gap-3">
           <div>
-            <h1 className="text-2xl font-bold tracking-tight">Reorder alerts</h1>
+            <PageHeading title="Reorder alerts" className="tracking-tight" />
             <p className="mt-1 text-steel">Bins at or below their reorder point, or projected to dip under safety stock before an order could arrive.</p>
           </div>
           <CheckNowButton />

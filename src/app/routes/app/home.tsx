@@ -59,7 +59,7 @@ export function HomeRoute() {
   if (!me) return null;
   return (
     <>
-      <PageHeader title={`Hello, ${me.name.split(' ')[0]}`} lead="Here is what Gripline can do for you today." />
+      <PageHeader title={`Hello, ${me.name.split(' ')[0]}`} tabTitle="Home" lead="Here is what Gripline can do for you today." />
       <div className="grid gap-4 lg:grid-cols-2">
         <RoleSummary user={me} />
         {hasRole(me.role, 'lead') ? <ChapterAtAGlance /> : null}

@@ -17,7 +17,6 @@ export function MyMailRoute() {
   const { data } = useSuspenseQuery(myMailQueryOptions());
   return (
     <>
-      <title>My mail · Gripline</title>
       <PageHeader title="My mail" lead="The messages Gripline has sent you, newest first." />
       {data.catching ? (
         <MailList messages={data.data} empty="Gripline has not written to you yet." />

@@ -9,7 +9,6 @@ export function QueueRoute() {
   if (!me) return null;
   return (
     <>
-      <title>Waiting to send · Gripline</title>
       <PageHeader title="Waiting to send" lead="What you did on this phone without a connection, and what Gripline could not accept." />
       <QueueList memberId={me.id} />
     </>

@@ -17,7 +17,6 @@ export function SentMailRoute() {
   const { data } = useSuspenseQuery(mailQueryOptions());
   return (
     <>
-      <title>Sent mail · Gripline</title>
       <PageHeader title="Sent mail" lead="Every message Gripline has written, newest first: waiting, sent or failed." />
       <div className="flex flex-col gap-4">
         {data.catching ? (

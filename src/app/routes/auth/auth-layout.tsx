@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { PageHeading } from '@/components/ui/page';
 
 /** The frame of the signed-out screens: the name, one card, the safety line. */
 export function AuthLayout({ title, children }: { title: string; children: ReactNode }) {
@@ -9,7 +10,7 @@ export function AuthLayout({ title, children }: { title: string; children: React
         <p className="text-steel">The chapter's tool crib and fastener stock</p>
       </div>
       <section className="rounded-xl border border-rule bg-card p-5 shadow-sm">
-        <h1 className="mb-4 text-2xl font-bold">{title}</h1>
+        <PageHeading title={title} className="mb-4" />
         {children}
       </section>
     </main>

@@ -11,6 +11,7 @@ export async function getMe(): Promise<User | null> {
     setChapterTimeZone(me.timeZone);
     return me.user;
   } catch (err) {
+    // A session that ended on the server (the person was deactivated) still answers 401 once.
     if (err instanceof ApiError && err.status === 401) return null;
     throw err;
   }

@@ -1,4 +1,5 @@
 import { ApiError, api, isNoConnection, sessionGeneration } from '@/lib/api-client';
+import type { MeResponse } from '@shared/schemas/auth';
 import type { QueuedAction } from '../db';
 import { nextStepFor } from '../utils/next-step';
 import { markRefused, markSent, nextWaiting } from './queue';
@@ -27,8 +28,8 @@ function isRefusal(err: unknown): err is ApiError {
 /** The server applies an action to whoever the session belongs to: send only when that is this member. */
 async function sessionIsMember(memberId: number): Promise<boolean> {
   try {
-    const { user } = await api.getOrGiveUp<{ user: { id: number } }>('/api/auth/me');
-    return user.id === memberId;
+    const { user } = await api.getOrGiveUp<MeResponse>('/api/auth/me');
+    return user?.id === memberId;
   } catch (err) {
     if (err instanceof ApiError) return false;
     throw err;

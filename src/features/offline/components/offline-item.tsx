@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import type { Catalogue } from '@shared/schemas/offline';
-import { Card } from '@/components/ui/page';
+import { Card, PageHeading } from '@/components/ui/page';
 import type { QueuedAction, StoredCatalogue } from '../db';
 import { useCatalogueCopy, useWaiting } from '../hooks';
 import { NeedsConnection, NoOfflineCopy, NotInOfflineCopy, OfflineCopyNote } from './offline-copy-note';
@@ -64,7 +64,7 @@ export function OfflineItemPage({
       <OfflineCopyNote takenAt={takenAt} />
       <Card>
         <p className="font-mono text-lg font-medium text-brass-deep">{code}</p>
-        <h1 className="text-2xl leading-tight font-bold">{title}</h1>
+        <PageHeading title={title} tabTitle={`${code} ${title}`} className="leading-tight" />
         <p className="text-steel">{subtitle}</p>
         <dl className="mt-3 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1.5">
           <dt className="text-steel">Lives at</dt>

@@ -7,6 +7,7 @@ import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { Card } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
+import { formatCount } from '@/lib/format';
 import { convertLine, emptyLine, errorAt, formDefaults, formPath, schemaErrors, type AssemblyFormValues } from '../utils/form-values';
 import { liveEstimate } from '../utils/live-estimate';
 import { useDebounced } from '../utils/use-debounced';
@@ -169,7 +170,7 @@ export function AssemblyForm({ assembly, build, defaultUnit, onPreferUnit, prefe
               <strong className="text-bad">Fix {plural(live.errors, 'line')} before saving.</strong>
             ) : live.result ? (
               <>
-                <strong className="font-mono">{live.result.totals.rivets}</strong> rivets · <strong className="font-mono">{live.result.totals.rivetsWithWaste}</strong> with {live.result.wastePercent} % waste
+                <strong className="font-mono">{formatCount(live.result.totals.rivets)}</strong> rivets · <strong className="font-mono">{formatCount(live.result.totals.rivetsWithWaste)}</strong> with {live.result.wastePercent} % waste
               </>
             ) : (
               <span className="text-steel">No complete rivet line yet.</span>

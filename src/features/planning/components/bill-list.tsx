@@ -1,6 +1,7 @@
 import { Link } from 'react-router';
 import type { BillLine } from '@shared/schemas/builds';
 import { BIN_KIND_LABELS } from '@shared/stock/kinds';
+import { formatCount } from '@/lib/format';
 
 /**
  * What the assembly takes from the bins: each need with the bin that stocks it, on hand against
@@ -20,12 +21,12 @@ export function BillList({ bill, wastePercent }: { bill: BillLine[]; wastePercen
           <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-1">
             <dt className="text-sm text-steel">Need</dt>
             <dd className="font-mono">
-              {item.estimated}
-              {item.withWaste !== item.estimated && ` (${item.withWaste} with ${wastePercent} % waste)`}
+              {formatCount(item.estimated)}
+              {item.withWaste !== item.estimated && ` (${formatCount(item.withWaste)} with ${wastePercent} % waste)`}
             </dd>
             <dt className="text-sm text-steel">Drawn so far</dt>
             <dd className="font-mono">
-              {item.drawn} of {item.estimated} estimated
+              {formatCount(item.drawn)} of {formatCount(item.estimated)} estimated
             </dd>
             {item.bin && (
               <>
@@ -37,7 +38,7 @@ export function BillList({ bill, wastePercent }: { bill: BillLine[]; wastePercen
                   {item.bin.location && <span className="text-sm text-steel">· {item.bin.location}</span>}
                 </dd>
                 <dt className="text-sm text-steel">On hand</dt>
-                <dd className="font-mono">{item.bin.onHand}</dd>
+                <dd className="font-mono">{formatCount(item.bin.onHand)}</dd>
               </>
             )}
           </dl>
@@ -47,7 +48,7 @@ export function BillList({ bill, wastePercent }: { bill: BillLine[]; wastePercen
             </p>
           ) : item.shortBy > 0 ? (
             <p className="mt-2 rounded-md border-l-4 border-bad bg-bad-soft px-3 py-2 text-sm">
-              <strong>Short by {item.shortBy}:</strong> the bin has {item.bin?.onHand ?? 0} on hand, the assembly needs {item.withWaste}.
+              <strong>Short by {formatCount(item.shortBy)}:</strong> the bin has {formatCount(item.bin?.onHand ?? 0)} on hand, the assembly needs {formatCount(item.withWaste)}.
             </p>
           ) : (
             item.bin && <p className="mt-2 text-sm text-ok">Enough on hand.</p>

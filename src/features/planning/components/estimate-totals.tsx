@@ -1,13 +1,14 @@
 import type { ReactNode } from 'react';
 import type { EstimateTotals } from '@shared/estimate/estimate';
+import { formatCount } from '@/lib/format';
 import { drillHolesText, tempFastenersText } from '../utils/words';
 import { FactList } from './fact-list';
 
 /** The assembly's totals: rivets with the waste allowance, holes per drill, temporary fasteners by size. */
 export function EstimateTotalsView({ totals, wastePercent, children }: { totals: EstimateTotals; wastePercent: number; children?: ReactNode }) {
   const facts: [string, string][] = [
-    ['Rivets', String(totals.rivets)],
-    [`With ${wastePercent} % waste`, String(totals.rivetsWithWaste)],
+    ['Rivets', formatCount(totals.rivets)],
+    [`With ${wastePercent} % waste`, formatCount(totals.rivetsWithWaste)],
     ['Holes per drill', drillHolesText(totals.drillHoles)],
     ['Temporary fasteners', tempFastenersText(totals.tempFasteners)],
   ];

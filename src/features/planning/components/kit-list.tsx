@@ -1,6 +1,7 @@
 import { Link } from 'react-router';
 import type { KitItem } from '@shared/schemas/builds';
 import { STATUS_LABELS, TOOL_STATUSES, type ToolStatus } from '@shared/tools/categories';
+import { formatCount } from '@/lib/format';
 
 const ROLE_LABELS: Record<KitItem['role'], string> = {
   puller: 'Rivet puller',
@@ -24,7 +25,7 @@ export function KitList({ kit }: { kit: KitItem[] }) {
         <li key={i} className="flex flex-col gap-1 rounded-lg border border-rule bg-card p-3">
           <p>
             <span className="font-semibold">{ROLE_LABELS[item.role]}</span>: {item.need}
-            {item.count !== null && <span className="font-mono"> · {item.count}</span>}
+            {item.count !== null && <span className="font-mono"> · {formatCount(item.count)}</span>}
           </p>
           {item.tool ? (
             <p className="text-sm">

@@ -1,6 +1,7 @@
 import type { LineEstimate } from '@shared/estimate/estimate-line';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import type { LengthUnit } from '@shared/schemas/builds';
+import { formatCount } from '@/lib/format';
 import { drillStepsText, gripText, lengthText, tempFastenersText } from '../utils/words';
 import { FactList } from './fact-list';
 
@@ -8,7 +9,7 @@ import { FactList } from './fact-list';
 export function LineEstimateView({ line, unit, kind }: { line: LineEstimate; unit: LengthUnit; kind: EstimateRivetKind }) {
   const rows = line.holesPerRow > 0 ? line.holes / line.holesPerRow : 1;
   const facts: [string, string][] = [
-    ['Holes', rows > 1 ? `${line.holes} (${line.holesPerRow} a row × ${rows} rows)` : String(line.holes)],
+    ['Holes', rows > 1 ? `${formatCount(line.holes)} (${formatCount(line.holesPerRow)} a row × ${rows} rows)` : formatCount(line.holes)],
     ['Pitch', lengthText(line.pitch, unit)],
     ['Edge distance', lengthText(line.edgeDistance, unit)],
     [kind === 'solid' ? 'Rivet length' : 'Grip', gripText(kind, line.grip)],

@@ -1,8 +1,9 @@
 import type { LengthUnit } from '@shared/schemas/builds';
+import { lengthWords } from '@shared/estimate/length-words';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import { blindGripRange, inchFraction } from '@shared/stock/fasteners';
 import { RIVET_HEAD_LABELS, type RivetHead } from '@shared/stock/kinds';
-import { formatDay } from '@/lib/format';
+import { formatCount, formatDay } from '@/lib/format';
 
 export const RIVET_KIND_LABELS: Record<EstimateRivetKind, string> = {
   'blind-structural': 'Structural blind rivet',
@@ -12,11 +13,8 @@ export const RIVET_KIND_LABELS: Record<EstimateRivetKind, string> = {
 
 export const UNIT_WORDS: Record<LengthUnit, string> = { in: 'inches', mm: 'millimetres' };
 
-const inchNumber = new Intl.NumberFormat('en-US', { maximumFractionDigits: 4, useGrouping: false });
-const mmNumber = new Intl.NumberFormat('en-US', { maximumFractionDigits: 2, useGrouping: false });
-
-/** A length in its unit: inches to 0.0001 in, millimetres to 0.01 mm. */
-export const lengthText = (x: number, unit: LengthUnit): string => `${(unit === 'in' ? inchNumber : mmNumber).format(x)} ${unit}`;
+/** A length in its unit: inches to 0.0001 in, millimetres to 0.01 mm (the estimator's cautions use the same). */
+export const lengthText = lengthWords;
 
 /** A rivet diameter dash in 32nds: 5 → "5/32 in". */
 export const diameterText = (diameter32: number): string => `${inchFraction(diameter32, 32)} in`;
@@ -37,13 +35,13 @@ export const drillStepsText = (steps: readonly string[]): string => steps.join('
 /** Temporary fasteners by size: "3/32 in × 7, 1/8 in × 7". */
 export const tempFastenersText = (bySize: Record<string, number>): string =>
   Object.entries(bySize)
-    .map(([size, n]) => `${size} in × ${n}`)
+    .map(([size, n]) => `${size} in × ${formatCount(n)}`)
     .join(', ') || 'none';
 
 /** Holes per drill step: "#40: 21, #30: 21". */
 export const drillHolesText = (byDrill: Record<string, number>): string =>
   Object.entries(byDrill)
-    .map(([drill, n]) => `${drill}: ${n}`)
+    .map(([drill, n]) => `${drill}: ${formatCount(n)}`)
     .join(', ') || 'none';
 
 export const headText = (head: RivetHead): string => RIVET_HEAD_LABELS[head];
@@ -58,4 +56,4 @@ export function plannedDatesText(start: string | null, finish: string | null): s
   return 'no dates planned';
 }
 
-export const plural = (n: number, one: string, many = `${one}s`): string => `${n} ${n === 1 ? one : many}`;
+export const plural = (n: number, one: string, many = `${one}s`): string => `${formatCount(n)} ${n === 1 ? one : many}`;

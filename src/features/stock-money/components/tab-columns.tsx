@@ -3,6 +3,7 @@ import type { Tab, TabEntry } from '@shared/schemas/stock-money';
 import { MOVEMENT_LABELS } from '@shared/stock/kinds';
 import type { ListFeatures } from '@/components/ui/data-table';
 import { Code } from '@/components/ui/page';
+import { formatCount } from '@/lib/format';
 import { assemblyName, dayOf, dollars, monthName, unitCost } from './format';
 
 type MonthRow = Tab['byMonth'][number];
@@ -21,7 +22,7 @@ export const tabMonthColumns = month.columns([
 const assembly = createColumnHelper<ListFeatures, AssemblyRow>();
 export const tabAssemblyColumns = assembly.columns([
   assembly.accessor((r) => assemblyName(r.assembly), { id: 'assembly', header: 'Assembly', enableSorting: false }),
-  assembly.accessor('quantity', { header: 'Units', sortFn: byNumber((r) => r.quantity), cell: ({ getValue }) => <span className="font-mono">{getValue()}</span> }),
+  assembly.accessor('quantity', { header: 'Units', sortFn: byNumber((r) => r.quantity), cell: ({ getValue }) => <span className="font-mono">{formatCount(getValue())}</span> }),
   assembly.accessor('chargedCents', { header: 'Charged', sortFn: byNumber((r) => r.chargedCents), cell: ({ getValue }) => <Cents cents={getValue()} /> }),
 ]);
 
@@ -48,7 +49,7 @@ export const tabEntryColumns = entry.columns([
     enableSorting: false,
     cell: ({ row }) => (
       <span className="font-mono whitespace-nowrap">
-        {-row.original.quantity} × {unitCost(row.original.unitCost)}
+        {formatCount(-row.original.quantity)} × {unitCost(row.original.unitCost)}
       </span>
     ),
   }),

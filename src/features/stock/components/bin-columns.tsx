@@ -3,7 +3,7 @@ import { Link } from 'react-router';
 import type { Bin } from '@shared/schemas/bins';
 import { BIN_KIND_LABELS } from '@shared/stock/kinds';
 import type { ListFeatures } from '@/components/ui/data-table';
-import { formatCount, gripRangeText } from '../utils/format';
+import { formatCount, formatQuantity, gripRangeText } from '../utils/format';
 import { LowStockBadge } from './low-stock-badge';
 
 /** The fastener spec filters (diameter, grip dash, material) ride on the Designation column; '' means any. */
@@ -69,7 +69,7 @@ export const binColumns = helper.columns([
     cell: ({ row }) => (
       <div className="flex flex-wrap items-center gap-2">
         <span className="font-mono whitespace-nowrap">
-          {formatCount(row.original.onHand)} {row.original.unit}
+          {formatQuantity(row.original.onHand, row.original.unit)}
         </span>
         {row.original.low && <LowStockBadge />}
       </div>

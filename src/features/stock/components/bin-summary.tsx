@@ -1,7 +1,8 @@
 import type { BinFields, BinReorder } from '@shared/schemas/bins';
 import { BIN_KIND_LABELS, isRivetKind } from '@shared/stock/kinds';
+import { unitWord } from '@shared/stock/quantity-words';
 import { Notice } from '@/components/ui/notice';
-import { Code } from '@/components/ui/page';
+import { Code, PageHeading } from '@/components/ui/page';
 import { formatCents, formatCount, formatDate, formatQuantity, formatUnitCost, gripRangeText } from '../utils/format';
 
 /** Why the bin needs ordering and, for the quartermaster, what to order: the one reorder rule's numbers, as on Restock. */
@@ -22,9 +23,7 @@ export function BinSummary({ bin, reorder, isQuartermaster }: { bin: BinFields; 
     <section aria-labelledby="bin-designation" className="flex flex-col gap-3">
       <div>
         <p className="font-mono text-lg font-medium text-brass-deep">{bin.code}</p>
-        <h1 id="bin-designation" className="text-2xl font-bold leading-tight">
-          {bin.designation}
-        </h1>
+        <PageHeading id="bin-designation" title={bin.designation} tabTitle={`${bin.code} ${bin.designation}`} className="leading-tight" />
         <p className="text-steel">{BIN_KIND_LABELS[bin.kind]}</p>
       </div>
       <div className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
@@ -33,7 +32,7 @@ export function BinSummary({ bin, reorder, isQuartermaster }: { bin: BinFields; 
             {formatCount(bin.onHand)}
           </span>{' '}
           <span className="text-lg">
-            {bin.unit} on hand
+            {unitWord(bin.onHand, bin.unit)} on hand
           </span>
         </p>
         {bin.packSize > 1 && <p className="text-steel">packs of {formatCount(bin.packSize)}</p>}

@@ -6,7 +6,7 @@ import { countBodySchema, type BinForYou, type CountBody } from '@shared/schemas
 import { TextField } from '@/components/ui/field';
 import { applyServerErrors } from '@/lib/errors';
 import { useCount } from '../api/bin-actions';
-import { formatCount, formatSigned, formatUnitCost } from '../utils/format';
+import { formatCount, formatQuantity, formatSigned, formatUnitCost } from '../utils/format';
 import { formatSignedCents, valueAtCost } from '../utils/value';
 import { ActionForm, Preview, QuantityInput } from './action-form';
 
@@ -40,7 +40,7 @@ export function CountForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void
 
   return (
     <ActionForm label="Count" onSubmit={submit} problem={form.formState.errors.root?.message} submitLabel="Save count" busy={count.isPending}>
-      <QuantityInput control={form.control} name="counted" min={0} label="Counted quantity" hint={`The ledger says ${formatCount(bin.onHand)} ${bin.unit}.`} />
+      <QuantityInput control={form.control} name="counted" min={0} label="Counted quantity" hint={`The ledger says ${formatQuantity(bin.onHand, bin.unit)}.`} />
       {variance !== undefined && (
         <Preview>
           <strong>{adjustmentWords(variance, valueAtCost(variance, bin.unitCost))}</strong>

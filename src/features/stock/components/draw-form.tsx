@@ -1,15 +1,17 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
+import { useMemo } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { toast } from 'sonner';
 import type { z } from 'zod';
 import { drawBodySchema, type BinForYou, type DrawBody } from '@shared/schemas/bins';
 import { SelectField, TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
 import { applyServerErrors } from '@/lib/errors';
 import { useDraw } from '../api/bin-actions';
 import { myAssembliesQueryOptions } from '../api/get-my-assemblies';
 import { formatAssembly } from '@/lib/format';
-import { formatCents, formatQuantity, formatUnitCost } from '../utils/format';
+import { formatCents, formatCount, formatQuantity, formatUnitCost } from '../utils/format';
 import { valueAtCost } from '../utils/value';
 import { ActionForm, Preview, QuantityInput } from './action-form';
 
@@ -19,9 +21,16 @@ import { ActionForm, Preview, QuantityInput } from './action-form';
  */
 export function DrawForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void }) {
   const draw = useDraw();
-  const form = useForm<z.input<typeof drawBodySchema>, unknown, DrawBody>({ resolver: zodResolver(drawBodySchema), defaultValues: { note: '' } });
+  // Said while typing and again on Draw, so a quantity the bin cannot give is never sent.
+  const tooMany =
+    bin.onHand === 0
+      ? `${bin.code} is empty: there is nothing to draw. Ask the quartermaster.`
+      : `Only ${formatQuantity(bin.onHand, bin.unit)} on hand in ${bin.code}: draw ${formatCount(bin.onHand)} or fewer, or ask the quartermaster.`;
+  const schema = useMemo(() => drawBodySchema.extend({ quantity: drawBodySchema.shape.quantity.max(bin.onHand, { error: tooMany }) }), [bin.onHand, tooMany]);
+  const form = useForm<z.input<typeof schema>, unknown, DrawBody>({ resolver: zodResolver(schema), defaultValues: { note: '' } });
   const quantity = useWatch({ control: form.control, name: 'quantity' });
   const wanted = Number.isInteger(quantity) && quantity > 0 ? quantity : undefined;
+  const overOnHand = wanted !== undefined && wanted > bin.onHand;
   const openAssemblies = useQuery(myAssembliesQueryOptions()).data?.filter((a) => a.status !== 'done') ?? [];
 
   const submit = form.handleSubmit(async (body) => {
@@ -38,7 +47,8 @@ export function DrawForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void 
   return (
     <ActionForm label="Draw" onSubmit={submit} problem={form.formState.errors.root?.message} submitLabel={`Draw from ${bin.code}`} busy={draw.isPending}>
       <QuantityInput control={form.control} name="quantity" label="Quantity to draw" max={bin.onHand} hint={`${formatQuantity(bin.onHand, bin.unit)} on hand.`} />
-      {wanted !== undefined && (
+      {overOnHand && <Notice tone="warn">{tooMany}</Notice>}
+      {wanted !== undefined && !overOnHand && (
         <Preview>
           Goes on your tab: <strong>{formatCents(valueAtCost(wanted, bin.unitCost))}</strong> ({formatQuantity(wanted, bin.unit)} at {formatUnitCost(bin.unitCost)})
         </Preview>

@@ -1,7 +1,7 @@
 import { CATEGORY_LABELS, POWERED_CATEGORIES } from '@shared/tools/categories';
 import type { Tool } from '@shared/schemas/tools';
 import { Notice } from '@/components/ui/notice';
-import { Code } from '@/components/ui/page';
+import { Code, PageHeading } from '@/components/ui/page';
 import { formatDueDay } from '@/lib/format';
 import { DueBadge } from './due-badge';
 import { ToolStatusBadge } from './tool-status-badge';
@@ -14,9 +14,7 @@ export function ToolSummary({ tool }: { tool: Tool }) {
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div>
           <p className="font-mono text-lg font-medium text-brass-deep">{tool.code}</p>
-          <h1 id="tool-name" className="text-2xl font-bold leading-tight">
-            {tool.name}
-          </h1>
+          <PageHeading id="tool-name" title={tool.name} tabTitle={`${tool.code} ${tool.name}`} className="leading-tight" />
           <p className="text-steel">{CATEGORY_LABELS[tool.category]}</p>
         </div>
         <ToolStatusBadge status={tool.status} />

@@ -33,6 +33,7 @@ import { photosRouter, toolPhotosRouter } from './features/tools/photos.router';
 import { signoffsRouter } from './features/tools/signoffs.router';
 import { toolsRouter } from './features/tools/tools.router';
 import { certificateRouter } from './lan/certificate.router';
+import { todayRouter } from './today/today.router';
 import { loadUser, requireRole } from './middleware/auth';
 import { csrf } from './middleware/csrf';
 import { noStore } from './middleware/cache-control';
@@ -125,6 +126,7 @@ export function createApp(config: AppConfig) {
   api.use('/forecast', forecastRouter());
   api.use('/alerts', alertsRouter());
   api.use('/waste', wasteRouter());
+  api.use('/today', todayRouter());
   api.use('/offline', offlineRouter({ tools: catalogueTools, signoffIds: signoffIdsOf, bins: catalogueBins, assemblies: openAssembliesOf }));
   api.use(apiNotFound);
   app.use('/api', api);

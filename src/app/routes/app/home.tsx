@@ -1,4 +1,5 @@
 import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
+import { lazy, Suspense } from 'react';
 import { Link } from 'react-router';
 import { hasRole, ROLE_LABELS, ROLES } from '@shared/roles';
 import type { User } from '@shared/schemas/auth';
@@ -9,6 +10,11 @@ import { invitationsQueryOptions } from '@/features/people/api/get-invitations';
 import { peopleQueryOptions } from '@/features/people/api/get-people';
 import { Notice } from '@/components/ui/notice';
 import { Card, PageHeader } from '@/components/ui/page';
+
+// Each role's "what needs you today" loads with its own chunk, outside the first-load budget.
+const MemberToday = lazy(() => import('./home/member-today').then((m) => ({ default: m.MemberToday })));
+const QuartermasterToday = lazy(() => import('./home/quartermaster-today').then((m) => ({ default: m.QuartermasterToday })));
+const LeadToday = lazy(() => import('./home/lead-today').then((m) => ({ default: m.LeadToday })));
 
 function ChapterAtAGlance() {
   const people = useQuery(peopleQueryOptions());
@@ -60,6 +66,11 @@ export function HomeRoute() {
   return (
     <>
       <PageHeader title={`Hello, ${me.name.split(' ')[0]}`} tabTitle="Home" lead="Here is what Gripline can do for you today." />
+      <Suspense fallback={null}>
+        {me.role === 'lead' && <LeadToday />}
+        {me.role === 'quartermaster' && <QuartermasterToday />}
+        <MemberToday />
+      </Suspense>
       <div className="grid gap-4 lg:grid-cols-2">
         <RoleSummary user={me} />
         {hasRole(me.role, 'lead') ? <ChapterAtAGlance /> : null}

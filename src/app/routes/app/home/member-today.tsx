@@ -1,0 +1,4 @@
+/** The member's part of home: what needs them today. */
+export function MemberToday() {
+  return null;
+}

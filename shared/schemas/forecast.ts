@@ -105,12 +105,12 @@ export const dismissBodySchema = z
   .object({ reason: z.string({ error: 'Say why the alert is dismissed.' }).trim().min(1, { error: 'Say why the alert is dismissed.' }).max(500) })
   .strict();
 
-/** The purchase list: what the one reorder rule orders now, by supplier; each line names the bin's active alert and what is already on order. */
+/** The purchase list: what the one reorder rule orders now, by supplier; each line names the bin's active alert (null until a refresh raises one) and what is already on order. */
 export const purchaseListSchema = z.object({
   data: z.array(
     z.object({
       supplier: z.string(),
-      lines: z.array(z.object({ alertId: z.number(), bin: binBrief, quantity: z.number(), packs: z.number(), costCents: z.number(), onOrder: z.number() })),
+      lines: z.array(z.object({ alertId: z.number().nullable(), bin: binBrief, quantity: z.number(), packs: z.number(), costCents: z.number(), onOrder: z.number() })),
       totalCents: z.number(),
     }),
   ),

@@ -5,6 +5,7 @@ import { binAlerts } from '../../server/db/schema/builds';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
 import { addAssembly, DAY_MS, drawFrom, hundredRivetLine, screwBin } from '../helpers/planning-fixture';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
+import { dataSnapshot } from '../helpers/db-snapshot';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
@@ -291,6 +292,23 @@ describe('the purchase list', () => {
     expect(data).toHaveLength(3);
     return { dome, fat, screws, alerts: data };
   }
+
+  it('is a pure read: opening it raises no alert, and after a refresh it lists the same lines, each naming its alert', async () => {
+    const dome = await binRunningLow();
+    const before = dataSnapshot(t.db);
+    const read = await qm.agent.get('/api/alerts/purchase-list');
+    expect(read.status).toBe(200);
+    expect(dataSnapshot(t.db)).toEqual(before);
+    expect(activeRows()).toEqual([]);
+    const unraised = purchaseListSchema.parse(read.body).data.flatMap((g) => g.lines);
+    expect(unraised).toEqual([expect.objectContaining({ alertId: null, bin: expect.objectContaining({ code: dome.code }), quantity: 500, costCents: 6000 })]);
+    expect((await qm.agent.get('/api/alerts/purchase-list.csv')).status).toBe(200);
+    expect(dataSnapshot(t.db)).toEqual(before);
+
+    const [alert] = (await refresh()).data;
+    const raised = purchaseListSchema.parse((await qm.agent.get('/api/alerts/purchase-list')).body).data.flatMap((g) => g.lines);
+    expect(raised).toEqual(unraised.map((l) => ({ ...l, alertId: alert!.id })));
+  });
 
   it('groups open alerts by supplier with packs and cost, leaving ordered ones out', async () => {
     const { dome, fat, screws, alerts } = await threeLowBins();

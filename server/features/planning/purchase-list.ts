@@ -2,28 +2,29 @@ import type { PurchaseList } from '@shared/schemas/forecast';
 import type { ServiceContext } from '../../context';
 import { centsCell, textCell, toCsv, type CsvCell } from '../../lib/csv';
 import { activeAlertBinIds } from './alerts.repo';
-import { refreshAlerts } from './alerts.service';
 import { binBrief } from './bin-brief';
+import { reorderPlan } from './reorder-plan';
 
 /** SQLite's own order for text (binary), so this list runs in the Restock list's order. */
 const byText = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
 
 /**
  * What the one reorder rule orders now (the Restock list's bins and quantities), by supplier (by
- * name, bins by code). Alerts are raised first for bins that lack one, so every line names the
- * bin's active alert; a line whose alert is already ordered asks for more on top of what is on order.
+ * name, bins by code). A pure read: each line names the bin's active alert, or null until the next
+ * refresh raises one (raising is the refresh's job, never a read's); a line whose alert is already
+ * ordered asks for more on top of what is on order.
  */
 export function purchaseList(ctx: ServiceContext): PurchaseList {
-  const { plan } = refreshAlerts(ctx);
+  const plan = reorderPlan(ctx);
   const alertOf = activeAlertBinIds(ctx.db);
   const orders = [...plan.orders.values()]
-    .filter((o) => o.toOrder > 0 && alertOf.has(o.plan.bin.id))
+    .filter((o) => o.toOrder > 0)
     .sort((a, b) => byText(a.plan.bin.supplier, b.plan.bin.supplier) || byText(a.plan.bin.code, b.plan.bin.code));
   const groups = new Map<string, PurchaseList['data'][number]>();
   for (const o of orders) {
     const { bin } = o.plan;
     const group = groups.get(bin.supplier) ?? { supplier: bin.supplier, lines: [], totalCents: 0 };
-    group.lines.push({ alertId: alertOf.get(bin.id)!, bin: binBrief(bin), quantity: o.toOrder, packs: o.packs, costCents: o.orderCostCents, onOrder: o.onOrder });
+    group.lines.push({ alertId: alertOf.get(bin.id) ?? null, bin: binBrief(bin), quantity: o.toOrder, packs: o.packs, costCents: o.orderCostCents, onOrder: o.onOrder });
     group.totalCents += o.orderCostCents;
     groups.set(bin.supplier, group);
   }

@@ -17,7 +17,7 @@ function SupplierOrder({ group }: { group: Group }) {
       </header>
       <ul className="divide-y divide-rule">
         {group.lines.map((line) => (
-          <li key={line.alertId} className="grid gap-x-4 gap-y-1 py-3 sm:grid-cols-[7rem_1fr_auto]">
+          <li key={line.bin.code} className="grid gap-x-4 gap-y-1 py-3 sm:grid-cols-[7rem_1fr_auto]">
             <Link to={`/bins/${line.bin.code}`} className="inline-flex min-h-12 items-center self-start font-mono font-medium underline underline-offset-4">
               {line.bin.code}
             </Link>

@@ -3,7 +3,7 @@ import type { ServiceContext } from '../../context';
 import { centsCell, textCell, toCsv, type CsvCell } from '../../lib/csv';
 import { activeAlertBinIds } from './alerts.repo';
 import { binBrief } from './bin-brief';
-import { reorderPlan } from './reorder-plan';
+import { reorderPlan, type ReorderPlan } from './reorder-plan';
 
 /** SQLite's own order for text (binary), so this list runs in the Restock list's order. */
 const byText = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
@@ -14,8 +14,7 @@ const byText = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
  * refresh raises one (raising is the refresh's job, never a read's); a line whose alert is already
  * ordered asks for more on top of what is on order.
  */
-export function purchaseList(ctx: ServiceContext): PurchaseList {
-  const plan = reorderPlan(ctx);
+export function purchaseList(ctx: ServiceContext, plan: ReorderPlan = reorderPlan(ctx)): PurchaseList {
   const alertOf = activeAlertBinIds(ctx.db);
   const orders = [...plan.orders.values()]
     .filter((o) => o.toOrder > 0)

@@ -1,5 +1,6 @@
 import { and, desc, eq, gte, lt, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
+import type { MovementKind } from '@shared/stock/kinds';
 import type { Database, Executor } from '../../db/client';
 import { insertRows } from '../../db/bulk-write';
 import { preparedPerDatabase } from '../../db/prepared';
@@ -87,6 +88,7 @@ const otherBinCode = sql<string | null>`(select b.code from stock_movements p jo
 export interface LedgerFilter {
   id?: number;
   binId?: number;
+  kind?: MovementKind;
   from?: Date;
   to?: Date;
   limit?: number;
@@ -112,6 +114,7 @@ export function listMovements(db: Executor, f: LedgerFilter) {
       and(
         f.id !== undefined ? eq(stockMovements.id, f.id) : undefined,
         f.binId !== undefined ? eq(stockMovements.binId, f.binId) : undefined,
+        f.kind ? eq(stockMovements.kind, f.kind) : undefined,
         f.from ? gte(stockMovements.at, f.from) : undefined,
         f.to ? lt(stockMovements.at, f.to) : undefined,
       ),

@@ -3,7 +3,7 @@ import type { MissingAccessory, ResolveAccessoryBody } from '@shared/schemas/too
 import type { ServiceContext } from '../../context';
 import type { Database, Executor } from '../../db/client';
 import { preparedPerDatabase } from '../../db/prepared';
-import { loans, missingAccessories } from '../../db/schema/tools';
+import { loans, missingAccessories, tools } from '../../db/schema/tools';
 import { users, type UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { recordToolEvent } from './tool-events.repo';
@@ -60,6 +60,19 @@ export function openMissingAccessories(db: Database, toolIds: readonly number[])
     byTool.set(r.toolId, [...(byTool.get(r.toolId) ?? []), { accessory: r.accessory, reportedAt: r.reportedAt.toISOString(), lastHolder: { id: r.holderId, name: r.holderName } }]);
   }
   return byTool;
+}
+
+/** Every tool with an accessory still missing, by code, with what is missing and who last had it. A read only. */
+export function toolsMissingAccessories(db: Database): { code: string; name: string; missing: MissingAccessory[] }[] {
+  const withMissing = db
+    .selectDistinct({ id: tools.id, code: tools.code, name: tools.name })
+    .from(missingAccessories)
+    .innerJoin(tools, eq(tools.id, missingAccessories.toolId))
+    .where(isNull(missingAccessories.resolvedAt))
+    .orderBy(asc(tools.code))
+    .all();
+  const open = openMissingAccessories(db, withMissing.map((t) => t.id));
+  return withMissing.map((t) => ({ code: t.code, name: t.name, missing: open.get(t.id) ?? [] }));
 }
 
 /** What did not come back with each of these loans (found or replaced since, or not). */

@@ -6,6 +6,7 @@ import type { Database } from '../db/client';
 import { deliverDueMail } from '../mail/outbox';
 import { seedDemoBuilds } from './demo-builds';
 import { seedDemoCrib } from './demo-crib';
+import { seedDemoOrders } from './demo-orders';
 import { seedDemoStock } from './demo-stock';
 
 export const DEMO_PASSWORD = 'gripline-demo';
@@ -33,6 +34,7 @@ export async function seedDemoChapter(db: Database): Promise<boolean> {
   seedDemoCrib(db);
   seedDemoStock(db);
   seedDemoBuilds(db);
+  seedDemoOrders(db);
   // The mail of the invented past counts as sent long ago: it must not reach the mail catcher or a real server.
   await deliverDueMail({ db, mailer: { send: async () => {}, close: () => {} }, now: () => new Date() });
   return true;

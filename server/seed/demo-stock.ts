@@ -202,6 +202,7 @@ function plan(dayAt: (daysAgo: number, hour: number) => Date): Planned[] {
   }
   events.push({ at: dayAt(61, 10.25), type: 'count', key: 's426ad3_35', short: 40, note: 'Shelf count: a bag had split behind the drawer' });
   events.push({ at: dayAt(44, 11), type: 'write_off', key: 'sealant', quantity: 1, note: 'Past its shelf-life date; skinned over in the tube' });
+  events.push({ at: dayAt(5, 15.5), type: 'write_off', key: 'primer', quantity: 1, note: 'Can dented at the seam and leaking; not safe to spray' });
   return events.sort((a, b) => a.at.getTime() - b.at.getTime());
 }
 

@@ -1,6 +1,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { purchaseListSchema } from '@shared/schemas/forecast';
 import { quartermasterTodaySchema, type QuartermasterToday } from '@shared/schemas/today-quartermaster';
+import { DEMO_PASSWORD, seedDemoChapter } from '../../server/seed/demo-chapter';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { addBinAs, addToolAs, blindRivetBin, post } from '../helpers/crib';
 import { dataSnapshot } from '../helpers/db-snapshot';
@@ -190,4 +191,37 @@ describe('GET /api/today/quartermaster', () => {
       { id: expect.any(Number), code: sealant.code, designation: 'Fuel tank sealant, 3.5 oz', unit: 'tube', quantity: 2, by: 'Quinn Quartermaster', at: '2026-11-25T10:00:00.000Z', note: 'Past its shelf-life date' },
     ]);
   });
+});
+
+describe('the quartermaster’s today in the demo chapter', () => {
+  it('shows the demo’s real work: its purchase list, the late and coming orders, the gun back needing attention, the calibration due, a write-off', async () => {
+    const demo = await buildTestApp({ now: () => new Date() });
+    try {
+      expect(await seedDemoChapter(demo.db)).toBe(true);
+      const ruth = await demo.signIn('quartermaster@example.org', DEMO_PASSWORD);
+      const before = dataSnapshot(demo.db);
+      const res = await ruth.agent.get('/api/today/quartermaster');
+      expect(res.status).toBe(200);
+      expect(dataSnapshot(demo.db)).toEqual(before);
+      const home = quartermasterTodaySchema.parse(res.body);
+
+      const purchase = purchaseListSchema.parse((await ruth.agent.get('/api/alerts/purchase-list')).body).data.flatMap((g) => g.lines);
+      expect(purchase.length).toBeGreaterThan(0);
+      expect(home.toOrder.bins).toBe(purchase.length);
+      expect(home.toOrder.totalCents).toBe(purchase.reduce((s, l) => s + l.costCents, 0));
+
+      expect(home.deliveries.late).toEqual([expect.objectContaining({ words: '1 day late' })]);
+      expect(home.deliveries.expected).toEqual([expect.objectContaining({ words: 'expected in 3 days' })]);
+      expect(home.returnsNeedingAttention).toEqual([expect.objectContaining({ name: 'Rivet gun, 3X', returnedBy: 'Tomasz Wren', note: 'Throttle valve leaks air' })]);
+      expect(home.missingAccessories).toEqual([expect.objectContaining({ name: 'Rivet gun, 3X', items: [{ accessory: 'Flush set', lastHolder: 'Tomasz Wren' }] })]);
+      expect(home.serviceDue.top).toContainEqual(expect.objectContaining({ name: 'Torque wrench, 20–150 in-lb', overdue: true }));
+      expect(home.binsToCount.bins).toHaveLength(5);
+      expect(home.binsToCount.bins.every((b) => b.lastCountedAt === null)).toBe(true);
+      const values = home.binsToCount.bins.map((b) => b.valueCents);
+      expect(values).toEqual([...values].sort((a, b) => b - a));
+      expect(home.writeOffs.entries).toEqual([expect.objectContaining({ designation: 'Self-etching primer, 12 oz spray can', quantity: 1, unit: 'can', by: 'Ruth Lindqvist' })]);
+    } finally {
+      await demo.close();
+    }
+  }, 60_000);
 });

@@ -18,13 +18,13 @@ export interface CountSuggestion {
 
 const countedMs = (s: CountSuggestion) => s.lastCountedAt?.getTime() ?? -Infinity;
 
-/** Bins to count today by COUNT_RULE; ties keep the bin code's order. A read only. */
+/** Bins to count today by COUNT_RULE; bins last counted alike (never, say) enter the pool by value, then code. A read only. */
 export function suggestBinsToCount(db: Database): CountSuggestion[] {
   const all = allBinsBySupplier(db);
   const counted = lastCountedAt(db, all.map((b) => b.id));
   return all
     .map((bin) => ({ bin, designation: binDesignation(bin), lastCountedAt: counted.get(bin.id) ?? null, valueCents: valueCents(bin.onHand, bin.unitCostE4) }))
-    .sort((a, b) => countedMs(a) - countedMs(b) || a.bin.code.localeCompare(b.bin.code))
+    .sort((a, b) => countedMs(a) - countedMs(b) || b.valueCents - a.valueCents || a.bin.code.localeCompare(b.bin.code))
     .slice(0, COUNT_POOL)
     .sort((a, b) => b.valueCents - a.valueCents || a.bin.code.localeCompare(b.bin.code))
     .slice(0, COUNT_SUGGESTIONS);

@@ -49,7 +49,7 @@ export const REFRESH_AFTER_MS = 5 * 60_000;
  * Raises an open alert for every bin the one reorder rule orders now (a recent dismissal keeps a
  * bin quiet, see reorder-plan.ts) that has no open or ordered alert yet. The partial unique index
  * keeps it to one active alert per bin even when two refreshes race. Runs in the daily job, on
- * POST /api/alerts/refresh, before the purchase list, and when a quartermaster opens the alerts
+ * POST /api/alerts/refresh, and when a quartermaster opens the alerts
  * and the last refresh is over 5 minutes old. Returns the plan it used.
  */
 export function refreshAlerts(ctx: ServiceContext): { raised: number[]; plan: ReorderPlan } {

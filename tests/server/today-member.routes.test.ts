@@ -1,5 +1,6 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it, onTestFinished } from 'vitest';
 import { memberTodaySchema, type MemberToday } from '@shared/schemas/today-member';
+import { DEMO_PASSWORD, seedDemoChapter } from '../../server/seed/demo-chapter';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { addBinAs, addToolAs, blindRivetBin, lend, post } from '../helpers/crib';
 import { addAssembly, setAssemblyStatus } from '../helpers/planning-fixture';
@@ -157,4 +158,42 @@ describe('GET /api/today/member', () => {
     expect(res.status).toBe(401);
     expect(res.body.error.code).toBe('NOT_SIGNED_IN');
   });
+});
+
+describe('GET /api/today/member on the demo chapter', () => {
+  it('shows each demo member their own real work: loans, a tool set aside, a queue place, assemblies short of kit, tabs, a return for attention', async () => {
+    // The demo seeds an empty chapter, at today's date.
+    const demo = await buildTestApp();
+    onTestFinished(() => demo.close());
+    demo.clock.now = new Date();
+    expect(await seedDemoChapter(demo.db)).toBe(true);
+    const as = async (email: string) => today(await demo.signIn(email, DEMO_PASSWORD));
+
+    const marco = await as('member@example.org');
+    expect(marco.loans.items.map((l) => [l.tool.name, l.overdue])).toEqual([
+      ['Drill bit #30, jobber', false],
+      ['Temporary fasteners 3/32, tray', false],
+    ]);
+    expect(marco.loans.items[0]!.dueWords).toMatch(/^due in \d+ days$/);
+    expect(marco.setAside.items).toEqual([expect.objectContaining({ tool: expect.objectContaining({ name: 'Hand rivet squeezer' }), words: expect.stringMatching(/^Set aside for you until /) })]);
+    expect(marco.assemblies.items.map((a) => a.name)).toEqual(['Right flap']);
+    // His own 3/32 tray is out with him: the kit lacks only what others have or the crib does not own.
+    const flapLacks = marco.assemblies.items[0]!.tools;
+    expect(flapLacks.length).toBeGreaterThan(0);
+    expect(flapLacks.map((k) => k.tool?.name)).not.toContain('Temporary fasteners 3/32, tray');
+    const marcoTab = await (await demo.signIn('member@example.org', DEMO_PASSWORD)).agent.get('/api/stock/tab');
+    expect(marco.tab.balanceCents).toBe(marcoTab.body.balanceCents);
+    expect(marco.tab.balanceCents).toBeGreaterThan(0);
+    expect(marco.attention.total).toBe(0);
+
+    const tomasz = await as('tomasz.wren@example.org');
+    expect(tomasz.queue.items).toEqual([expect.objectContaining({ tool: expect.objectContaining({ name: 'Pneumatic rivet puller' }), words: '1st in line' })]);
+    expect(tomasz.attention.items).toEqual([expect.objectContaining({ tool: expect.objectContaining({ name: 'Rivet gun, 3X' }), note: 'Throttle valve leaks air' })]);
+    expect(tomasz.assemblies.items.map((a) => a.name)).toEqual(['Rudder']);
+
+    // The pneumatic puller Ines has is one of the demo's two overdue loans: it comes first.
+    const ines = await as('ines.parra@example.org');
+    expect(ines.loans.items[0]).toMatchObject({ tool: { name: 'Pneumatic rivet puller' }, overdue: true, dueWords: expect.stringMatching(/days? late$/) });
+    expect(ines.loans.items[1]).toMatchObject({ overdue: false });
+  }, 30_000);
 });

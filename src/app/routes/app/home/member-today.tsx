@@ -27,7 +27,7 @@ function Section({ title, empty, total, shown, all, children }: { title: string;
 function ToolLink({ tool }: { tool: { code: string; name: string } }) {
   return (
     <Link to={`/tools/${tool.code}`} className={ITEM_LINK}>
-      <span className="font-mono text-brass-deep">{tool.code}</span>
+      <span className="font-mono whitespace-nowrap text-brass-deep">{tool.code}</span>
       <span>{tool.name}</span>
     </Link>
   );
@@ -126,15 +126,15 @@ function Attention({ attention }: { attention: Today['attention'] }) {
 }
 
 function tabWords(balanceCents: number): string {
-  if (balanceCents > 0) return `You owe ${formatCents(balanceCents)}.`;
-  if (balanceCents < 0) return `You have paid ${formatCents(-balanceCents)} ahead.`;
+  if (balanceCents > 0) return `You owe ${formatCents(balanceCents)} on your tab.`;
+  if (balanceCents < 0) return `You have paid ${formatCents(-balanceCents)} ahead on your tab.`;
   return 'Your tab is settled.';
 }
 
 function TabLine({ balanceCents }: { balanceCents: number }) {
   return (
     <Link to="/tab" className={ITEM_LINK}>
-      My tab: {tabWords(balanceCents)}
+      {tabWords(balanceCents)}
     </Link>
   );
 }

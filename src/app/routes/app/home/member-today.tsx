@@ -62,33 +62,31 @@ function Holds({ title, empty, holds }: { title: string; empty: string; holds: T
   );
 }
 
+/** One thing an assembly lacks, linked to the page where it is dealt with when there is one. */
+function LackLine({ what, to, words }: { what: string; to: string | null; words: string }) {
+  return (
+    <li>
+      {to ? (
+        <Link to={to} className="inline-flex min-h-11 items-center font-medium underline underline-offset-4">
+          {what}
+        </Link>
+      ) : (
+        <span className="font-medium">{what}</span>
+      )}
+      : {words}
+    </li>
+  );
+}
+
 function Lacks({ assembly }: { assembly: MemberTodayAssembly }) {
   if (assembly.tools.length === 0 && assembly.bins.length === 0) return <p className="text-sm text-ok">Its kit is ready: every tool free for you, every bin stocked.</p>;
   return (
     <ul className="mt-1 flex flex-col gap-1 text-sm">
       {assembly.tools.map((k) => (
-        <li key={`tool ${k.need}`}>
-          {k.tool ? (
-            <Link to={`/tools/${k.tool.code}`} className="inline-flex min-h-11 items-center font-medium underline underline-offset-4">
-              {k.need}
-            </Link>
-          ) : (
-            <span className="font-medium">{k.need}</span>
-          )}
-          : {k.words}
-        </li>
+        <LackLine key={`tool ${k.need}`} what={k.need} to={k.tool && `/tools/${k.tool.code}`} words={k.words} />
       ))}
       {assembly.bins.map((b) => (
-        <li key={`bin ${b.description}`}>
-          {b.binCode ? (
-            <Link to={`/bins/${b.binCode}`} className="inline-flex min-h-11 items-center font-medium underline underline-offset-4">
-              {b.description}
-            </Link>
-          ) : (
-            <span className="font-medium">{b.description}</span>
-          )}
-          : {b.words}
-        </li>
+        <LackLine key={`bin ${b.description}`} what={b.description} to={b.binCode && `/bins/${b.binCode}`} words={b.words} />
       ))}
     </ul>
   );

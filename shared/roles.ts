@@ -20,13 +20,17 @@ export const ROLE_ABILITIES: Record<Role, readonly string[]> = {
     'Sign in and keep your own password',
     'Borrow and return crib tools by scanning their labels',
     'Join the queue for a tool someone else has',
-    'Draw fasteners for the assembly you are building (when stock opens)',
+    'Plan your assemblies: the fasteners they take and the crib tools to hold for them',
+    'Draw fasteners from the bins for your assembly, and return what you did not use',
+    'Read your tab: what you drew, what it cost, what you have paid',
   ],
   quartermaster: [
     'Everything a member can do',
     'Add, edit, service and retire crib tools, and print their labels',
     'See who holds what',
-    'Keep the bins stocked and count them (when stock opens)',
+    'Add bins, count them, receive deliveries and write off what is spoiled',
+    'Act on reorder alerts and the purchase list, and see the stock forecast',
+    'Read members’ tabs and record their payments',
   ],
   lead: [
     'Everything a quartermaster can do',
@@ -34,5 +38,6 @@ export const ROLE_ABILITIES: Record<Role, readonly string[]> = {
     'Read the mail Gripline has sent',
     'Decide who may use which powered tools (sign-offs)',
     'See what is overdue and send reminders',
+    'See the chapter’s consumable spend by month and kind',
   ],
 };

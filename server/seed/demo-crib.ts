@@ -142,5 +142,7 @@ export function seedDemoCrib(db: Database, now: Date = new Date()): void {
   checkOut(ctx, tomasz, code('Rivet spacing fan, 12 hole'), {});
   at(1);
   checkOut(ctx, ines, code('Deburring tool, swivel blade'), {});
+  // Set aside for Marco's right flap: his to collect within the chapter's hold time.
+  placeHold(ctx, marco, code('Hand rivet squeezer'));
   changeToolStatus(ctx, quartermaster, code('Edge deburring tool'), 'lost', 'Not in the drawer at the monthly count');
 }

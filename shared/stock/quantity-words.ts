@@ -25,3 +25,9 @@ export function unitWord(n: number, unit: string): string {
 
 /** A quantity with its unit: (4, "tube") → "4 tubes", (1206, "each") → "1,206 each". */
 export const quantityWords = (n: number, unit: string): string => `${countWords(n)} ${unitWord(n, unit)}`;
+
+const ordinalRules = new Intl.PluralRules('en-US', { type: 'ordinal' });
+const ORDINAL_SUFFIX: Partial<Record<Intl.LDMLPluralRule, string>> = { one: 'st', two: 'nd', few: 'rd' };
+
+/** A place in a line: 1 → "1st", 2 → "2nd", 11 → "11th", 22 → "22nd". */
+export const ordinalWords = (n: number): string => `${countWords(n)}${ORDINAL_SUFFIX[ordinalRules.select(n)] ?? 'th'}`;

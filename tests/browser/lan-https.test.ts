@@ -71,7 +71,7 @@ describe('Gripline on a certificate made by npm run start:lan, opened by name on
     const session = (await page.context().cookies()).find((c) => c.name === 'gripline.sid');
     expect(session?.secure).toBe(true);
 
-    await page.getByRole('link', { name: 'Scan' }).click();
+    await page.getByRole('link', { name: 'Scan', exact: true }).click();
     await page.waitForURL(new RegExp(`/tools/${code}$`), { timeout: 15_000 });
     await page.getByRole('heading', { name: TOOL }).waitFor();
     expect(await page.getByRole('button', { name: `Check out ${code}` }).isVisible()).toBe(true);
@@ -111,7 +111,7 @@ describe('Gripline on a certificate made by npm run start:lan, opened by name on
       const page = await signedInPhone(trusting, app.url, 'member@example.org', DEMO_PASSWORD);
       await page.evaluate(() => navigator.serviceWorker.ready.then(() => undefined));
       await page.waitForFunction(() => navigator.serviceWorker.controller !== null);
-      await page.getByRole('link', { name: 'Scan' }).click();
+      await page.getByRole('link', { name: 'Scan', exact: true }).click();
       await page.getByText(/^Offline copy on this phone, from just now/).waitFor({ timeout: 15_000 });
 
       await page.context().setOffline(true);

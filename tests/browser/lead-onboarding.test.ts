@@ -68,7 +68,7 @@ describe('the demo lead on a phone', () => {
     await invitee.getByLabel('Choose a password').fill('rivet lines all day');
     await invitee.getByRole('button', { name: 'Join and sign in' }).click();
     await invitee.getByRole('heading', { name: 'Hello, Noor' }).waitFor();
-    expect(await invitee.getByRole('link', { name: 'Scan' }).isVisible()).toBe(true);
+    expect(await invitee.getByRole('link', { name: 'Scan', exact: true }).isVisible()).toBe(true);
     // A member's Menu holds the bins and their tab, and none of the lead's pages.
     await invitee.getByText('Menu', { exact: true }).click();
     expect(await invitee.getByRole('link', { name: 'Bins' }).isVisible()).toBe(true);

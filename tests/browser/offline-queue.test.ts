@@ -36,14 +36,14 @@ const onHandOf = (code: string) => query<{ onHand: number }>('select on_hand as 
 /** Signed in, with the phone's offline copy taken (the Scan screen says so). */
 async function memberWithOfflineCopy(): Promise<Page> {
   const page = await signedInPhone(browser, app.url, 'member@example.org', DEMO_PASSWORD);
-  await page.getByRole('link', { name: 'Scan' }).click();
+  await page.getByRole('link', { name: 'Scan', exact: true }).click();
   await page.getByText(/^Offline copy on this phone, from just now/).waitFor({ timeout: 15_000 });
   return page;
 }
 
 /** Types a label's code on the Scan screen, as a USB scanner would. */
 async function scan(page: Page, code: string): Promise<void> {
-  await page.getByRole('link', { name: 'Scan' }).click();
+  await page.getByRole('link', { name: 'Scan', exact: true }).click();
   await page.getByLabel('Or type the code on the label').fill(code);
   await page.getByRole('button', { name: 'Open' }).click();
 }

@@ -164,7 +164,7 @@ describe('focus after a route change', () => {
     await page.keyboard.press('Tab');
     expect(await page.evaluate(() => !!document.activeElement?.closest('main'))).toBe(true);
 
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Scan' }).click();
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Scan', exact: true }).click();
     await page.getByRole('heading', { name: 'Scan' }).waitFor();
     expect((await activeElement(page)).tag).toBe('input');
     await page.context().close();

@@ -38,7 +38,7 @@ describe('a member scanning a tool label with the phone camera', () => {
     const decoded = firstDecode(page);
     const scripts = scriptsFetched(page);
 
-    await page.getByRole('link', { name: 'Scan' }).click();
+    await page.getByRole('link', { name: 'Scan', exact: true }).click();
     await page.waitForURL(new RegExp(`/tools/${code}$`), { timeout: 15_000 });
     await page.getByRole('heading', { name: 'Rivet spacing fan, 10 hole' }).waitFor();
     expect(await page.getByText('Wall rack').isVisible()).toBe(true);
@@ -66,7 +66,7 @@ describe('a member scanning a tool label with the phone camera', () => {
     const decoded = firstDecode(page);
     const scripts = scriptsFetched(page);
 
-    await page.getByRole('link', { name: 'Scan' }).click();
+    await page.getByRole('link', { name: 'Scan', exact: true }).click();
     await page.waitForURL(new RegExp(`/tools/${code}$`), { timeout: 15_000 });
     await page.getByRole('heading', { name: 'Rivet spacing fan, 10 hole' }).waitFor();
 

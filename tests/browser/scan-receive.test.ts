@@ -32,7 +32,7 @@ describe('the quartermaster scanning a bin label with the phone camera', () => {
   it('opens the bin, receives a delivery, and sees on hand go up at once', async () => {
     const page = await signedInPhone(browser, app.url, 'quartermaster@example.org', DEMO_PASSWORD);
 
-    await page.getByRole('link', { name: 'Scan' }).click();
+    await page.getByRole('link', { name: 'Scan', exact: true }).click();
     await page.waitForURL(new RegExp(`/bins/${bin.code}$`), { timeout: 15_000 });
     const onHand = page.getByTestId('bin-on-hand');
     await onHand.waitFor();

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { countWords, quantityWords, unitWord } from '@shared/stock/quantity-words';
+import { countWords, quantityWords, unitWord, ordinalWords } from '@shared/stock/quantity-words';
 
 describe('unitWord: one plural rule for the units bins are counted in', () => {
   it.each([
@@ -47,5 +47,11 @@ describe('quantityWords and countWords', () => {
   it('takes a fraction that rounds to one as one', () => {
     expect(quantityWords(1.2, 'box')).toBe('1 box');
     expect(quantityWords(-1, 'box')).toBe('-1 box');
+  });
+});
+
+describe('ordinalWords', () => {
+  it('writes a place in line as English does: 1st, 2nd, 3rd, 4th, 11th, 12th, 13th, 21st, 102nd', () => {
+    expect([1, 2, 3, 4, 11, 12, 13, 21, 102].map(ordinalWords)).toEqual(['1st', '2nd', '3rd', '4th', '11th', '12th', '13th', '21st', '102nd']);
   });
 });

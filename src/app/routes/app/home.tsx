@@ -65,7 +65,15 @@ export function HomeRoute() {
   if (!me) return null;
   return (
     <>
-      <PageHeader title={`Hello, ${me.name.split(' ')[0]}`} tabTitle="Home" lead="Here is what Gripline can do for you today." />
+      <PageHeader title={`Hello, ${me.name.split(' ')[0]}`} tabTitle="Home" lead="What needs you today, then the way in." />
+      <p className="mb-5">
+        <Link
+          to="/scan"
+          className="flex min-h-14 w-full items-center justify-center rounded-xl bg-ink px-8 text-lg font-bold text-card shadow-sm hover:bg-ink-soft sm:inline-flex sm:w-auto sm:min-w-72"
+        >
+          Scan a label
+        </Link>
+      </p>
       <Suspense fallback={null}>
         {me.role === 'lead' && <LeadToday />}
         {me.role === 'quartermaster' && <QuartermasterToday />}

@@ -1,4 +1,168 @@
-/** The member's part of home: what needs them today. */
+import { useQuery } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
+import { Link } from 'react-router';
+import type { MemberToday as Today, MemberTodayAssembly, MemberTodayHold } from '@shared/schemas/today-member';
+import { memberTodayQueryOptions } from '@/features/today/api/get-member-today';
+import { DueStateBadge } from '@/features/tools/components/due-badge';
+import { Card } from '@/components/ui/page';
+import { formatAssembly, formatCents, formatCount, formatDateTime } from '@/lib/format';
+
+const ITEM_LINK = 'inline-flex min-h-11 items-center gap-2 font-semibold underline underline-offset-4';
+const ALL_LINK = 'mt-2 inline-flex min-h-11 items-center font-semibold underline underline-offset-4';
+
+/** A home section: a heading, a short list or one sentence when there is nothing, and a link to all of them. */
+function Section({ title, empty, total, shown, all, children }: { title: string; empty: string; total: number; shown: number; all?: { to: string; words: (n: string) => string }; children: ReactNode }) {
+  return (
+    <Card title={title}>
+      {total === 0 ? <p className="text-steel">{empty}</p> : <ul className="flex flex-col divide-y divide-rule">{children}</ul>}
+      {all && total > shown && (
+        <Link to={all.to} className={ALL_LINK}>
+          {all.words(formatCount(total))}
+        </Link>
+      )}
+    </Card>
+  );
+}
+
+function ToolLink({ tool }: { tool: { code: string; name: string } }) {
+  return (
+    <Link to={`/tools/${tool.code}`} className={ITEM_LINK}>
+      <span className="font-mono whitespace-nowrap text-brass-deep">{tool.code}</span>
+      <span>{tool.name}</span>
+    </Link>
+  );
+}
+
+function Loans({ loans }: { loans: Today['loans'] }) {
+  return (
+    <Section title="Out with you" empty="You have nothing from the crib." total={loans.total} shown={loans.items.length} all={{ to: '/loans', words: (n) => `All ${n} of your loans` }}>
+      {loans.items.map((l) => (
+        <li key={l.loanId} className="py-2">
+          <ToolLink tool={l.tool} />
+          <p className="flex flex-wrap items-center gap-2 text-sm">
+            <span>back by {l.dueDay}</span>
+            <DueStateBadge due={{ words: l.dueWords, overdue: l.overdue, soon: l.soon }} />
+          </p>
+        </li>
+      ))}
+    </Section>
+  );
+}
+
+function Holds({ title, empty, holds }: { title: string; empty: string; holds: Today['setAside'] }) {
+  return (
+    <Section title={title} empty={empty} total={holds.total} shown={holds.items.length}>
+      {holds.items.map((h: MemberTodayHold) => (
+        <li key={h.tool.code} className="py-2">
+          <ToolLink tool={h.tool} />
+          <p className="text-sm">{h.words}</p>
+        </li>
+      ))}
+    </Section>
+  );
+}
+
+/** One thing an assembly lacks, linked to the page where it is dealt with when there is one. */
+function LackLine({ what, to, words }: { what: string; to: string | null; words: string }) {
+  return (
+    <li>
+      {to ? (
+        <Link to={to} className="inline-flex min-h-11 items-center font-medium underline underline-offset-4">
+          {what}
+        </Link>
+      ) : (
+        <span className="font-medium">{what}</span>
+      )}
+      : {words}
+    </li>
+  );
+}
+
+function Lacks({ assembly }: { assembly: MemberTodayAssembly }) {
+  if (assembly.tools.length === 0 && assembly.bins.length === 0) return <p className="text-sm text-ok">Its kit is ready: every tool free for you, every bin stocked.</p>;
+  return (
+    <ul className="mt-1 flex flex-col gap-1 text-sm">
+      {assembly.tools.map((k) => (
+        <LackLine key={`tool ${k.need}`} what={k.need} to={k.tool && `/tools/${k.tool.code}`} words={k.words} />
+      ))}
+      {assembly.bins.map((b) => (
+        <LackLine key={`bin ${b.description}`} what={b.description} to={b.binCode && `/bins/${b.binCode}`} words={b.words} />
+      ))}
+    </ul>
+  );
+}
+
+function Assemblies({ assemblies }: { assemblies: Today['assemblies'] }) {
+  return (
+    <Section title="Your assemblies in progress" empty="No assembly of yours is in progress." total={assemblies.total} shown={assemblies.items.length} all={{ to: '/builds', words: (n) => `All ${n} in My builds` }}>
+      {assemblies.items.map((a) => (
+        <li key={a.id} className="py-2">
+          <Link to={`/assemblies/${a.id}`} className={ITEM_LINK}>
+            {formatAssembly(a)}
+          </Link>
+          <Lacks assembly={a} />
+        </li>
+      ))}
+    </Section>
+  );
+}
+
+function Attention({ attention }: { attention: Today['attention'] }) {
+  return (
+    <Section title="Returned for attention" empty="Nothing you returned for attention is still waiting." total={attention.total} shown={attention.items.length}>
+      {attention.items.map((r) => (
+        <li key={r.loanId} className="py-2">
+          <ToolLink tool={r.tool} />
+          <p className="text-sm">
+            You returned it {formatDateTime(r.returnedAt)}
+            {r.note ? `: ${r.note}` : ''}. Still out of service.
+          </p>
+        </li>
+      ))}
+    </Section>
+  );
+}
+
+function tabWords(balanceCents: number): string {
+  if (balanceCents > 0) return `You owe ${formatCents(balanceCents)} on your tab.`;
+  if (balanceCents < 0) return `You have paid ${formatCents(-balanceCents)} ahead on your tab.`;
+  return 'Your tab is settled.';
+}
+
+function TabLine({ balanceCents }: { balanceCents: number }) {
+  return (
+    <Link to="/tab" className={ITEM_LINK}>
+      {tabWords(balanceCents)}
+    </Link>
+  );
+}
+
+const quietDay = (t: Today) => t.loans.total + t.setAside.total + t.queue.total + t.assemblies.total + t.attention.total === 0;
+
+/** The member's part of home: what needs them today. Every role borrows, so every role sees it. */
 export function MemberToday() {
-  return null;
+  const today = useQuery(memberTodayQueryOptions());
+  if (today.isPending) return <p className="mb-4 text-steel">Looking at your loans and holds…</p>;
+  if (today.isError) return <p className="mb-4 text-steel">Your loans and holds could not be loaded just now: {today.error.message}</p>;
+  const t = today.data;
+  if (quietDay(t)) {
+    return (
+      <Card title="Your day" className="mb-4">
+        <p>A clear bench: nothing from the crib is out with you and nothing waits for you.</p>
+        <TabLine balanceCents={t.tab.balanceCents} />
+      </Card>
+    );
+  }
+  return (
+    <div className="mb-4 grid gap-4 lg:grid-cols-2">
+      <Loans loans={t.loans} />
+      <Holds title="Set aside for you" empty="Nothing is set aside for you." holds={t.setAside} />
+      <Holds title="Your places in line" empty="You are not in line for any tool." holds={t.queue} />
+      <Assemblies assemblies={t.assemblies} />
+      <Attention attention={t.attention} />
+      <Card title="My tab">
+        <TabLine balanceCents={t.tab.balanceCents} />
+      </Card>
+    </div>
+  );
 }

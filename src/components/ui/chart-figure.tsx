@@ -23,11 +23,14 @@ export function ChartFigure({ label, caption, children }: { label: string; capti
   );
 }
 
-/** A chart with the table of its figures: side by side on a wide screen, the table under it on a phone and on paper. */
+/**
+ * A chart with the table of its figures: side by side on a wide screen (the chart stays in view
+ * while a long table scrolls past), the table under it on a phone and on paper.
+ */
 export function ChartBesideTable({ chart, table }: { chart: ReactNode; table: ReactNode }) {
   return (
     <div className="grid gap-4 lg:grid-cols-2 lg:items-start print:grid-cols-1">
-      {chart}
+      <div className="min-w-0 lg:sticky lg:top-4 print:static">{chart}</div>
       <div className="min-w-0">{table}</div>
     </div>
   );

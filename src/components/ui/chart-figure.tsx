@@ -29,7 +29,7 @@ export function ChartFigure({ label, caption, children }: { label: string; capti
  */
 export function ChartBesideTable({ chart, table }: { chart: ReactNode; table: ReactNode }) {
   return (
-    <div className="grid gap-4 lg:grid-cols-2 lg:items-start print:grid-cols-1">
+    <div className="grid grid-cols-1 gap-4 lg:grid-cols-2 lg:items-start print:grid-cols-1">
       <div className="min-w-0 lg:sticky lg:top-4 print:static">{chart}</div>
       <div className="min-w-0">{table}</div>
     </div>

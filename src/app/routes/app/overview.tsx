@@ -3,7 +3,7 @@ import { useSuspenseQuery } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
 import { spendQueryOptions } from '@/features/stock-money/api/get-spend';
 import { SpendChart } from '@/features/stock-money/components/spend-chart';
-import { SpendTable } from '@/features/stock-money/components/spend-table';
+import { SpendFigures } from '@/features/stock-money/components/spend-figures';
 import { kindsUsed } from '@/features/stock-money/utils/kinds-used';
 import { loanStatsQueryOptions } from '@/features/tools/api/get-loan-stats';
 import { LoansPerWeek } from '@/features/tools/components/overview/loans-per-week';
@@ -37,7 +37,7 @@ export function OverviewRoute() {
         <Card title="Days overdue per week">
           <OverdueDaysPerWeek weeks={stats.weeks} />
         </Card>
-        <div className="grid gap-4 xl:grid-cols-2 print:grid-cols-1">
+        <div className="grid grid-cols-1 gap-4 xl:grid-cols-2 print:grid-cols-1">
           <Card title="Tools used most">
             <MostUsedTools tools={stats.mostUsed} weeks={stats.weeks.length} />
           </Card>
@@ -48,7 +48,7 @@ export function OverviewRoute() {
         </div>
         <Card title="Consumables used by month">
           {binKinds.length > 0 ? (
-            <ChartBesideTable chart={<SpendChart months={months} kinds={binKinds} />} table={<SpendTable months={months} kinds={binKinds} />} />
+            <ChartBesideTable chart={<SpendChart months={months} kinds={binKinds} />} table={<SpendFigures months={months} kinds={binKinds} />} />
           ) : (
             <p className="text-steel">No stock was used in these months.</p>
           )}

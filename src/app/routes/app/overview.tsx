@@ -37,15 +37,13 @@ export function OverviewRoute() {
         <Card title="Days overdue per week">
           <OverdueDaysPerWeek weeks={stats.weeks} />
         </Card>
-        <div className="grid grid-cols-1 gap-4 xl:grid-cols-2 print:grid-cols-1">
-          <Card title="Tools used most">
-            <MostUsedTools tools={stats.mostUsed} weeks={stats.weeks.length} />
-          </Card>
-          <Card title="Not lent in six months">
-            <p className="mb-3 text-sm text-ink-soft">Candidates to sell, or to move where builders would use them.</p>
-            <IdleTools tools={stats.idle} since={stats.idleSince} />
-          </Card>
-        </div>
+        <Card title="Tools used most">
+          <MostUsedTools tools={stats.mostUsed} weeks={stats.weeks.length} />
+        </Card>
+        <Card title="Not lent in six months">
+          <p className="mb-3 text-sm text-ink-soft">Candidates to sell, or to move where builders would use them.</p>
+          <IdleTools tools={stats.idle} since={stats.idleSince} />
+        </Card>
         <Card title="Consumables used by month">
           {binKinds.length > 0 ? (
             <ChartBesideTable chart={<SpendChart months={months} kinds={binKinds} />} table={<SpendFigures months={months} kinds={binKinds} />} />

@@ -8,7 +8,10 @@ import { formatCount, formatDay } from '@/lib/format';
 function ToolLink({ tool }: { tool: { code: string; name: string } }) {
   return (
     <Link to={`/tools/${tool.code}`} className="inline-flex min-h-11 items-center gap-1.5 font-medium text-ink underline underline-offset-2">
-      <Code>{tool.code}</Code> {tool.name}
+      <span className="whitespace-nowrap">
+        <Code>{tool.code}</Code>
+      </span>{' '}
+      {tool.name}
     </Link>
   );
 }

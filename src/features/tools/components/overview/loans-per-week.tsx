@@ -3,6 +3,7 @@ import type { LoanWeek } from '@shared/schemas/loan-stats';
 import { CATEGORY_LABELS, type ToolCategory } from '@shared/tools/categories';
 import { CHART_GRID, CHART_TICK, ChartBesideTable, ChartFigure } from '@/components/ui/chart-figure';
 import { FigureTable, type FigureColumn } from '@/components/ui/figure-table';
+import { SwatchList } from '@/components/ui/swatch-list';
 import { formatCount, formatDay, formatMonthDay } from '@/lib/format';
 import { TOOL_KIND_COLOURS } from './tool-kind-colours';
 
@@ -16,20 +17,12 @@ export function LoansPerWeek({ weeks, kinds }: { weeks: LoanWeek[]; kinds: ToolC
     { header: 'Week', cell: (w) => <span className="whitespace-nowrap">{weekOf(w)}</span> },
     {
       header: 'By kind',
-      cell: (w) => {
-        const lent = kinds.filter((k) => (w.byKind[k] ?? 0) > 0);
-        if (lent.length === 0) return <span className="text-steel">None lent</span>;
-        return (
-          <ul className="flex flex-col gap-0.5">
-            {lent.map((k) => (
-              <li key={k} className="flex items-center gap-1.5">
-                <span aria-hidden className="size-3 shrink-0 rounded-sm" style={{ backgroundColor: TOOL_KIND_COLOURS[k] }} />
-                {CATEGORY_LABELS[k]} <span className="font-mono">{formatCount(w.byKind[k] ?? 0)}</span>
-              </li>
-            ))}
-          </ul>
-        );
-      },
+      cell: (w) => (
+        <SwatchList
+          items={kinds.filter((k) => (w.byKind[k] ?? 0) > 0).map((k) => ({ key: k, colour: TOOL_KIND_COLOURS[k], label: CATEGORY_LABELS[k], value: <span className="font-mono">{formatCount(w.byKind[k] ?? 0)}</span> }))}
+          empty="None lent"
+        />
+      ),
     },
     { header: 'Loans', numeric: true, cell: (w) => formatCount(w.total) },
   ];

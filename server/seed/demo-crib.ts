@@ -9,6 +9,7 @@ import { checkOut, returnTool } from '../features/tools/loans.service';
 import { defineSignoff, grantSignoff } from '../features/tools/signoffs.service';
 import { changeToolStatus } from '../features/tools/tool-status.service';
 import { createTool } from '../features/tools/tools.service';
+import { seedDemoLoanHistory } from './demo-loan-history';
 import { DAY_MS } from '@shared/time/durations';
 
 
@@ -114,6 +115,34 @@ export function seedDemoCrib(db: Database, now: Date = new Date()): void {
     return createTool(ctx, quartermaster, createToolBodySchema.parse({ ...tool, requiredSignoffId, lastServiceAt })).code;
   });
   const code = (name: string, nth = 0) => codes.filter((_, i) => DEMO_TOOLS[i]!.name === name)[nth]!;
+
+  // Half a year of loans before the recent ones, for the lead's overview. The rest of the crib is never lent.
+  const anyone = [quartermaster, marco, ines, tomasz, kelechi];
+  const airSignedOff = [quartermaster, marco, ines, tomasz];
+  const gunSignedOff = [quartermaster, tomasz];
+  const often = (name: string, weight: number, borrowers = anyone, nth = 0) => {
+    const i = codes.indexOf(code(name, nth));
+    return { code: codes[i]!, category: DEMO_TOOLS[i]!.category, weight, borrowers, trayCapacity: DEMO_TOOLS[i]!.trayCapacity ?? undefined };
+  };
+  seedDemoLoanHistory(ctx, at, [
+    often('Hand rivet puller, short handle', 6),
+    often('Hand rivet puller, long handle', 4),
+    often('Pneumatic rivet puller', 5, airSignedOff),
+    often('Air drill, pistol grip', 6, airSignedOff),
+    often('Air drill, pistol grip', 3, airSignedOff, 1),
+    often('Air drill, 90° angle head', 2, airSignedOff),
+    often('Rivet gun, 2X', 3, gunSignedOff),
+    often('Bucking bar, tungsten, 1.9 lb', 3),
+    often('Drill bit #40, jobber', 5),
+    often('Drill bit #30, jobber', 4),
+    often('Temporary fasteners 1/8, tray', 4),
+    often('Temporary fasteners 3/32, tray', 3),
+    often('Deburring tool, swivel blade', 3),
+    often('Rivet spacing fan, 12 hole', 2),
+    often('Torque wrench, 20–150 in-lb', 1),
+    often('Hand rivet squeezer', 2),
+    often('Countersink cage with 100° cutter', 2),
+  ]);
 
   // The second torque wrench came back from calibration recently; the first is overdue for it.
   at(30);

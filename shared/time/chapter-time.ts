@@ -1,5 +1,5 @@
 import { TZDate, tz } from '@date-fns/tz';
-import { addDays, addMonths, differenceInCalendarDays, endOfDay, startOfDay, startOfMonth } from 'date-fns';
+import { addDays, addMonths, addWeeks, differenceInCalendarDays, endOfDay, startOfDay, startOfMonth, startOfWeek } from 'date-fns';
 import { daysLateWords } from './words';
 
 export * from './words';
@@ -18,6 +18,21 @@ export function chapterMonthStarts(now: Date, count: number, zone: string): Date
   const current = startOfMonth(now, zoned(zone));
   return Array.from({ length: count }, (_, i) => instant(startOfMonth(addMonths(current, i - (count - 1), zoned(zone)), zoned(zone))));
 }
+
+/** Chapter weeks start on Monday (0 is Sunday), wherever the server or the viewer is. */
+export const CHAPTER_WEEK_STARTS_ON = 1;
+
+/** The first instant of the chapter week (from Monday's midnight on the chapter's clock) a moment falls in. */
+export const startOfChapterWeek = (at: Date, zone: string): Date => instant(startOfWeek(at, { weekStartsOn: CHAPTER_WEEK_STARTS_ON, ...zoned(zone) }));
+
+/** The first instants of the last `count` chapter weeks, oldest first, up to and including the week of `now`. */
+export function chapterWeekStarts(now: Date, count: number, zone: string): Date[] {
+  const current = startOfChapterWeek(now, zone);
+  return Array.from({ length: count }, (_, i) => startOfChapterWeek(addWeeks(current, i - (count - 1), zoned(zone)), zone));
+}
+
+/** The same wall-clock time `months` chapter months earlier or later (Aug 31 less 6 months is Feb 28). */
+export const addChapterMonths = (at: Date, months: number, zone: string): Date => instant(addMonths(at, months, zoned(zone)));
 
 /** The first instant of the chapter day a moment falls on. */
 export const startOfChapterDay = (at: Date, zone: string): Date => instant(startOfDay(at, zoned(zone)));

@@ -154,6 +154,14 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
           },
         },
         {
+          path: 'overview',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { OverviewRoute, overviewLoader } = await import('./routes/app/overview');
+            return { loader: overviewLoader(queryClient), Component: OverviewRoute };
+          },
+        },
+        {
           path: 'people',
           ErrorBoundary: RouteError,
           lazy: async () => {

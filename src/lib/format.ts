@@ -1,7 +1,7 @@
 // The dependency-free half of shared/time: these formatters are on the pages every member opens first.
 import { centsWords } from '@shared/stock/money';
 import { countWords, quantityWords } from '@shared/stock/quantity-words';
-import { dateInWords, dayInWords, momentInWords, shortDayInWords } from '@shared/time/words';
+import { dateInWords, dayInWords, momentInWords, monthDayInWords, shortDayInWords } from '@shared/time/words';
 import { chapterTimeZone } from './chapter-zone';
 
 /** Money, counts and days as every page shows them; a feature's own format module adds its trade words. */
@@ -26,6 +26,9 @@ export const formatQuantity = quantityWords;
 /** A chapter day "2027-01-15", or the chapter day a timestamp fell on, as a date in words: "Jan 15, 2027". */
 export const formatDay = (iso: string): string =>
   iso.length === 10 ? dateInWords(new Date(`${iso}T00:00:00Z`), 'UTC') : dateInWords(new Date(iso), chapterTimeZone());
+
+/** A chapter day "2026-06-08" as month and day, for a chart's axis: "Jun 8". */
+export const formatMonthDay = (day: string): string => monthDayInWords(new Date(`${day}T00:00:00Z`), 'UTC');
 
 /** A moment as the chapter day it fell on, in short words: "Tue, Dec 1, 2026". */
 export const formatDate = (iso: string | Date): string => shortDayInWords(new Date(iso), chapterTimeZone());

@@ -80,7 +80,7 @@ function pagesOf(role: Role, ids: DemoIds): string[] {
     '/alerts',
     '/forecast',
   ];
-  const lead = ['/people', '/mail', '/overdue', '/spend', '/signoffs'];
+  const lead = ['/people', '/mail', '/overdue', '/spend', '/overview', '/signoffs'];
   if (role === 'member') return [...member, ...ownerOnly];
   if (role === 'quartermaster') return [...member, ...quartermaster];
   return [...member, ...quartermaster, ...lead];

@@ -58,6 +58,7 @@ function demoUrls(app: BuiltApp): Record<string, { url: string; who: Who }> {
       '/restock': lead('/restock'),
       '/tab': lead('/tab'),
       '/spend': lead('/spend'),
+      '/overview': lead('/overview'),
       '/people': lead('/people'),
       '/mail': lead('/mail'),
       '/my-mail': lead('/my-mail'),

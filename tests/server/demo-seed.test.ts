@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { migrateDatabase, openDatabase } from '../../server/db/client';
+import { loanStats } from '../../server/features/tools/loan-stats.service';
 import { seedDemoChapter } from '../../server/seed/demo-chapter';
 
 /** Six password hashes, the crib and the stock ledger: slow on a busy test machine. */
@@ -76,6 +77,23 @@ describe('the demo chapter', () => {
     }
     expect(checked).toBeGreaterThan(10);
     expect(early.slice(0, 5)).toEqual([]);
+    db.$client.close();
+  }, SEEDING_MS);
+
+  it('gives the lead’s overview half a year of loans: most weeks lent, some late, busy tools and idle ones', async () => {
+    const db = openDatabase(':memory:');
+    migrateDatabase(db);
+    await seedDemoChapter(db);
+    const stats = loanStats({ db, publicUrl: 'http://localhost', now: () => new Date() });
+    expect(stats.weeks).toHaveLength(26);
+    expect(stats.weeks.filter((w) => w.total > 0).length).toBeGreaterThanOrEqual(20);
+    expect(stats.weeks.filter((w) => w.overdueDays > 0).length).toBeGreaterThanOrEqual(10);
+    expect(stats.kinds.length).toBeGreaterThanOrEqual(6);
+    expect(stats.mostUsed).toHaveLength(10);
+    expect(stats.idle.length).toBeGreaterThan(0);
+    // The history is all back: the open loans are still only the recent ones, two of them overdue.
+    const open = db.$client.prepare('select count(*) as n from loans where returned_at is null and checked_out_at < ?').get(Date.now() - 22 * 86_400_000) as { n: number };
+    expect(open.n).toBe(0);
     db.$client.close();
   }, SEEDING_MS);
 });

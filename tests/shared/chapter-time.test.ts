@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import {
   addChapterDays,
+  addChapterMonths,
+  chapterWeekStarts,
+  startOfChapterWeek,
   chapterDay,
   chapterDaySpan,
   chapterHour,
@@ -122,5 +125,26 @@ describe('loans by the chapter day', () => {
     expect(chapterMonth(evening, CHICAGO)).toBe('2026-11');
     expect(chapterMonth(evening, 'UTC')).toBe('2026-12');
     expect(chapterMonthStarts(evening, 3, CHICAGO).map((d) => d.toISOString())).toEqual(['2026-09-01T05:00:00.000Z', '2026-10-01T05:00:00.000Z', '2026-11-01T05:00:00.000Z']);
+  });
+});
+
+describe('chapter weeks', () => {
+  it('start on Monday at the chapter’s midnight, on its side of the date line and of a clock change', () => {
+    // Monday 03:00 UTC is still Sunday 21:00 in Chicago: the week that began Monday, November 23 (06:00Z, CST).
+    const now = new Date('2026-11-30T03:00:00Z');
+    expect(startOfChapterWeek(now, 'America/Chicago').toISOString()).toBe('2026-11-23T06:00:00.000Z');
+    expect(startOfChapterWeek(now, 'UTC').toISOString()).toBe('2026-11-30T00:00:00.000Z');
+    // Chicago's clocks went back on Sunday, November 1: the week of October 26 starts at 05:00Z (CDT), the next at 06:00Z (CST).
+    expect(chapterWeekStarts(now, 5, 'America/Chicago').map((d) => d.toISOString())).toEqual([
+      '2026-10-26T05:00:00.000Z',
+      '2026-11-02T06:00:00.000Z',
+      '2026-11-09T06:00:00.000Z',
+      '2026-11-16T06:00:00.000Z',
+      '2026-11-23T06:00:00.000Z',
+    ]);
+  });
+
+  it('go back whole months on the chapter’s calendar, the last day when the month is shorter', () => {
+    expect(addChapterMonths(new Date('2026-08-31T17:00:00Z'), -6, 'America/Chicago').toISOString()).toBe('2026-02-28T18:00:00.000Z');
   });
 });

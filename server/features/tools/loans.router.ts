@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { parseInput } from '../../lib/validate';
 import { listLoans } from './loan-history.repo';
+import { loanStats } from './loan-stats.service';
 
 const mineQuery = z.object({ state: z.enum(['open', 'all'], { error: 'state is open or all.' }).default('all') });
 
@@ -18,6 +19,11 @@ export function loansRouter() {
   /** Who holds what: every open loan (quartermaster and lead). */
   router.get('/open', requireRole('quartermaster'), (req, res) => {
     res.json({ data: listLoans(req.ctx.db, { open: true }) });
+  });
+
+  /** The lead's overview of the crib: loans and late days per week, the tools used most and those idle. */
+  router.get('/stats', requireRole('lead'), (req, res) => {
+    res.json(loanStats(req.ctx));
   });
 
   return router;

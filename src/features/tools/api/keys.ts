@@ -7,4 +7,5 @@ export const toolKeys = {
   events: (code: string) => ['tools', 'events', code] as const,
   myLoans: () => ['tools', 'loans', 'mine'] as const,
   openLoans: () => ['tools', 'loans', 'open'] as const,
+  loanStats: () => ['tools', 'loans', 'stats'] as const,
 };

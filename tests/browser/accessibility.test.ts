@@ -63,7 +63,7 @@ function pagesOf(role: Role, ids: DemoIds): string[] {
     '/tab',
     '/my-mail',
     '/builds',
-    '/settings/planning',
+    '/settings',
     `/assemblies/${ids.assemblyId}`,
     ...NOT_FOUND_PAGES,
   ];

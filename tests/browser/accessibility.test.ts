@@ -242,4 +242,23 @@ describe('accessibility (axe-core, WCAG 2.2 AA)', () => {
       await context.close();
     }
   });
+
+  it('the lead’s Menu, open on a phone over a Menu page, passes axe-core with 44 px targets', async () => {
+    const context = await suite.browser.newContext({ viewport: SIZES[0].viewport, bypassCSP: true });
+    try {
+      const page = await context.newPage();
+      await page.goto(`${suite.app.url}/sign-in`);
+      await page.getByLabel('E-mail').fill('lead@example.org');
+      await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD);
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await page.getByRole('heading', { name: /Hello/ }).waitFor();
+      await page.addScriptTag({ path: AXE });
+      await openInApp(page, '/settings');
+      await page.getByRole('button', { name: /^Menu/ }).click();
+      await page.getByRole('dialog', { name: 'Menu' }).waitFor();
+      expect(report(new Map([['/settings with the Menu open (phone)', [...(await axeFindings(page)), ...(await smallTargets(page))]]]))).toBe('');
+    } finally {
+      await context.close();
+    }
+  });
 });

@@ -2,6 +2,7 @@ import type { Locator, Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import type { Role } from '../../shared/roles';
 import { DEMO_PASSWORD } from '../../server/seed/demo-chapter';
+import { signedInPhone } from '../helpers/browser';
 import { builtAppWithChromium } from '../helpers/browser-suite';
 
 const suite = builtAppWithChromium();
@@ -33,16 +34,9 @@ const ROLES = Object.keys(SEES) as Role[];
 const BAR = ['Home', 'My loans', 'Scan', 'Tools', 'Menu'];
 const groupsOf = (role: Role) => Object.keys(SEES[role]).filter((g) => g !== '');
 
-async function signedIn(role: Role, width: number): Promise<Page> {
-  const context = await suite.browser.newContext({ viewport: { width, height: width < 600 ? 780 : 900 } });
-  const page = await context.newPage();
-  await page.goto(`${suite.app.url}/sign-in`);
-  await page.getByLabel('E-mail').fill(`${role}@example.org`);
-  await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('heading', { name: /Hello/ }).waitFor();
-  return page;
-}
+/** Signed in as the demo `role`, phone-sized or laptop-sized. */
+const signedIn = (role: Role, width: number) =>
+  signedInPhone(suite.browser, suite.app.url, `${role}@example.org`, DEMO_PASSWORD, { context: { viewport: { width, height: width < 600 ? 780 : 900 } } });
 
 const names = (items: Locator) => items.evaluateAll((els) => els.map((el) => (el.textContent ?? '').trim()));
 
@@ -147,6 +141,7 @@ describe.each(ROLES)('the navigation of a %s on a phone (360 px)', (role) => {
     await dialog.waitFor({ state: 'hidden' });
     expect(await menuButton.evaluate((el) => el.textContent?.replace(/\s+/g, ' ').trim())).toBe(`Menu, you are on ${target}`);
     expect(await menuButton.isVisible()).toBe(true);
+    if (role === 'lead') await page.screenshot({ path: `${SHOTS}/navigation-lead-bar-360.png` });
     await menuButton.click();
     await dialog.waitFor();
     expect(await dialog.locator('[aria-current="page"]').allTextContents()).toEqual([target]);

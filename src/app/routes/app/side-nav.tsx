@@ -5,7 +5,7 @@ const LINK = 'flex items-center rounded-lg px-3 font-semibold text-ink-soft hove
 /** In the Menu on a phone (a card): thumb-sized rows. */
 export const MENU_LINK = `${LINK} min-h-12 hover:bg-paper aria-[current=page]:bg-paper`;
 /** Down the side on a wide screen (the page's paper): denser rows, so a lead's list fits a laptop's height. */
-const SIDE_LINK = `${LINK} min-h-9 hover:bg-card aria-[current=page]:bg-card`;
+const SIDE_LINK = `${LINK} min-h-8 hover:bg-card aria-[current=page]:bg-card`;
 
 export function NavItem({ link, current, onClick, className }: { link: NavLinkEntry; current: NavLinkEntry | undefined; onClick?: () => void; className: string }) {
   return (

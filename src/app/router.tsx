@@ -234,12 +234,16 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
           },
         },
         {
-          path: 'settings/planning',
+          path: 'settings',
           ErrorBoundary: RouteError,
           lazy: async () => {
-            const { PlanningSettingsRoute, planningSettingsLoader } = await import('./routes/app/planning-settings');
-            return { loader: planningSettingsLoader(queryClient), Component: PlanningSettingsRoute };
+            const { SettingsRoute, settingsLoader } = await import('./routes/app/settings');
+            return { loader: settingsLoader(queryClient), Component: SettingsRoute };
           },
+        },
+        {
+          path: 'settings/planning',
+          lazy: async () => ({ loader: (await import('./routes/app/settings')).planningSettingsRedirect }),
         },
         {
           path: 'builds',

@@ -63,7 +63,7 @@ function pagesOf(role: Role, ids: DemoIds): string[] {
     '/tab',
     '/my-mail',
     '/builds',
-    '/settings/planning',
+    '/settings',
     `/assemblies/${ids.assemblyId}`,
     ...NOT_FOUND_PAGES,
   ];
@@ -238,6 +238,25 @@ describe('accessibility (axe-core, WCAG 2.2 AA)', () => {
       expect(Math.round(closeBox!.width)).toBeGreaterThanOrEqual(44);
       expect(Math.round(closeBox!.height)).toBeGreaterThanOrEqual(44);
       expect(report(new Map([['/builds with a toast (phone)', await axeFindings(page)]]))).toBe('');
+    } finally {
+      await context.close();
+    }
+  });
+
+  it('the lead’s Menu, open on a phone over a Menu page, passes axe-core with 44 px targets', async () => {
+    const context = await suite.browser.newContext({ viewport: SIZES[0].viewport, bypassCSP: true });
+    try {
+      const page = await context.newPage();
+      await page.goto(`${suite.app.url}/sign-in`);
+      await page.getByLabel('E-mail').fill('lead@example.org');
+      await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD);
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await page.getByRole('heading', { name: /Hello/ }).waitFor();
+      await page.addScriptTag({ path: AXE });
+      await openInApp(page, '/settings');
+      await page.getByRole('button', { name: /^Menu/ }).click();
+      await page.getByRole('dialog', { name: 'Menu' }).waitFor();
+      expect(report(new Map([['/settings with the Menu open (phone)', [...(await axeFindings(page)), ...(await smallTargets(page))]]]))).toBe('');
     } finally {
       await context.close();
     }

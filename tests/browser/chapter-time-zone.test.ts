@@ -11,7 +11,7 @@ beforeAll(() => {
 });
 
 describe('the chapter time zone', () => {
-  it('is chosen by the lead on the Sign-offs page, on a phone, and kept', async () => {
+  it('is chosen by the lead on the Settings page, found in the Menu on a phone, and kept', async () => {
     const context = await suite.browser.newContext({ viewport: { width: 360, height: 780 }, deviceScaleFactor: 1 });
     const page = await context.newPage();
     await page.goto(`${suite.app.url}/`);
@@ -21,7 +21,10 @@ describe('the chapter time zone', () => {
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.getByRole('heading', { name: 'Hello, Dana' }).waitFor();
 
-    await page.goto(`${suite.app.url}/signoffs`);
+    await page.getByRole('button', { name: /^Menu/ }).click();
+    await page.getByRole('dialog', { name: 'Menu' }).getByRole('group', { name: 'Chapter' }).getByRole('link', { name: 'Settings' }).click();
+    await page.getByRole('heading', { name: 'Settings', level: 1 }).waitFor();
+    expect(page.url()).toBe(`${suite.app.url}/settings`);
     const zone = page.getByLabel("The chapter's time zone");
     await zone.waitFor();
     await zone.selectOption('Pacific/Auckland');

@@ -16,10 +16,10 @@ async function phonePage(): Promise<Page> {
   return context.newPage();
 }
 
-/** On a phone the lead's pages sit in the Menu at the top. */
+/** On a phone the lead's pages sit in the Menu of the bottom bar. */
 async function openFromMenu(page: Page, name: string) {
-  await page.getByText('Menu', { exact: true }).click();
-  await page.getByRole('link', { name }).click();
+  await page.getByRole('button', { name: /^Menu/ }).click();
+  await page.getByRole('dialog', { name: 'Menu' }).getByRole('link', { name }).click();
 }
 
 async function signIn(page: Page, email: string, password: string) {
@@ -70,11 +70,13 @@ describe('the demo lead on a phone', () => {
     await invitee.getByRole('heading', { name: 'Hello, Noor' }).waitFor();
     expect(await invitee.getByRole('link', { name: 'Scan', exact: true }).isVisible()).toBe(true);
     // A member's Menu holds the bins and their tab, and none of the lead's pages.
-    await invitee.getByText('Menu', { exact: true }).click();
-    expect(await invitee.getByRole('link', { name: 'Bins' }).isVisible()).toBe(true);
-    expect(await invitee.getByRole('link', { name: 'My tab' }).isVisible()).toBe(true);
+    await invitee.getByRole('button', { name: 'Menu' }).click();
+    const menu = invitee.getByRole('dialog', { name: 'Menu' });
+    expect(await menu.getByRole('link', { name: 'Bins' }).isVisible()).toBe(true);
+    expect(await menu.getByRole('link', { name: 'My tab' }).isVisible()).toBe(true);
     expect(await invitee.getByRole('link', { name: 'People' }).count()).toBe(0);
-    await invitee.getByText('Menu', { exact: true }).click();
+    await invitee.keyboard.press('Escape');
+    await menu.waitFor({ state: 'hidden' });
     await invitee.screenshot({ path: `${SHOTS}/member-home-phone.png`, fullPage: true });
     await invitee.context().close();
   });

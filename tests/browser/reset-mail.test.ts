@@ -30,8 +30,8 @@ describe('a password reset link in the demo', () => {
     await lead.context().close();
 
     const member = await signedInPhone(suite.browser, suite.app.url, 'member@example.org', DEMO_PASSWORD);
-    await member.getByText('Menu', { exact: true }).click();
-    await member.getByRole('link', { name: 'My mail' }).click();
+    await member.getByRole('button', { name: 'Menu' }).click();
+    await member.getByRole('dialog', { name: 'Menu' }).getByRole('link', { name: 'My mail' }).click();
     await member.getByRole('heading', { name: 'My mail' }).waitFor();
     // The outbox worker hands it to the mail catcher within a second or so; the page refreshes every 10 s.
     const link = member.getByRole('link', { name: 'Open the password reset link' });

@@ -62,7 +62,7 @@ describe('SignoffCard', () => {
 describe('HoldTimeCard', () => {
   it('refuses more than two weeks without calling the server, and saves a valid time', async () => {
     const calls = fakeFetch(({ method, body }) => (method === 'PATCH' ? { status: 200, body } : undefined));
-    renderWithProviders(<HoldTimeCard holdHours={48} />);
+    renderWithProviders(<HoldTimeCard holdHours={48} canChange />);
     expect(screen.getByText('48 hours (2 days)')).toBeTruthy();
     const input = screen.getByLabelText('Hours a returned tool waits');
     await userEvent.clear(input);
@@ -87,7 +87,7 @@ describe('TimeZoneCard', () => {
           ? { status: 400, body: { error: { code: 'VALIDATION_FAILED', message: 'The request body is not valid. timeZone: That is not a time zone this server knows.', issues: [{ path: 'timeZone', message: 'That is not a time zone this server knows.' }] } } }
           : { status: 200, body: { holdHours: 48, ...(body as object) } },
     );
-    renderWithProviders(<TimeZoneCard timeZone="America/Chicago" />);
+    renderWithProviders(<TimeZoneCard timeZone="America/Chicago" canChange />);
     expect(screen.getByText('America/Chicago', { selector: 'strong' })).toBeTruthy();
     const select = screen.getByLabelText<HTMLSelectElement>("The chapter's time zone");
     expect(select.value).toBe('America/Chicago');

@@ -1,8 +1,8 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
 import { lazy, Suspense, useCallback } from 'react';
-import { NavLink, Outlet, useNavigate, type LoaderFunctionArgs } from 'react-router';
-import { hasRole, ROLE_LABELS, type Role } from '@shared/roles';
+import { Outlet, useLocation, useNavigate, type LoaderFunctionArgs } from 'react-router';
+import { ROLE_LABELS } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { useLogout } from '@/features/auth/api/logout';
 import { MainLandmark } from '@/components/ui/main-landmark';
@@ -12,6 +12,9 @@ import { stockMoneyKeys } from '@/features/stock-money/api/keys';
 import { toolKeys } from '@/features/tools/api/keys';
 import { messageOf } from '@/lib/errors';
 import { requireSignedIn } from './guards';
+import { currentLink, linksFor } from './nav-links';
+import { PhoneNav } from './phone-nav';
+import { SideNav } from './side-nav';
 
 // The offline copy and queue (IndexedDB through Dexie) load just after the first render, outside the
 // first-load budget: nothing is queued before the page exists.
@@ -22,34 +25,6 @@ export const appShellLoader = (queryClient: QueryClient) => async ({ request }: 
   await requireSignedIn(queryClient, request);
   return null;
 };
-
-const LINK =
-  'flex min-h-14 flex-1 flex-col items-center justify-center px-3 text-sm font-semibold sm:flex-none sm:min-h-12 sm:text-base aria-[current=page]:text-ink aria-[current=page]:shadow-[inset_0_-4px_0_var(--color-brass)] text-ink-soft';
-
-/**
- * The sections of the app, each shown to the roles that may open it. On a phone the primary ones
- * sit in the bottom bar under the thumb; the rest are in the Menu at the top.
- */
-const NAV_LINKS: { to: string; label: string; role: Role; primary?: boolean }[] = [
-  { to: '/', label: 'Home', role: 'member', primary: true },
-  { to: '/scan', label: 'Scan', role: 'member', primary: true },
-  { to: '/tools', label: 'Tools', role: 'member', primary: true },
-  { to: '/loans', label: 'My loans', role: 'member', primary: true },
-  { to: '/bins', label: 'Bins', role: 'member' },
-  { to: '/people', label: 'People', role: 'lead' },
-  { to: '/mail', label: 'Sent mail', role: 'lead' },
-  { to: '/overdue', label: 'Overdue', role: 'lead' },
-  { to: '/service', label: 'Service', role: 'quartermaster' },
-  { to: '/labels', label: 'Labels', role: 'quartermaster' },
-  { to: '/restock', label: 'Restock', role: 'quartermaster' },
-  { to: '/alerts', label: 'Reorder alerts', role: 'quartermaster' },
-  { to: '/forecast', label: 'Forecast', role: 'quartermaster' },
-  { to: '/builds', label: 'My builds', role: 'member' },
-  { to: '/tab', label: 'My tab', role: 'member' },
-  { to: '/my-mail', label: 'My mail', role: 'member' },
-  { to: '/spend', label: 'Consumables', role: 'lead' },
-  { to: '/signoffs', label: 'Sign-offs', role: 'lead' },
-];
 
 /** A queued action reached the server (or was refused): refresh what it changes. */
 function useRefreshAfterQueue() {
@@ -82,9 +57,10 @@ export function AppShell() {
   const logout = useLogout();
   const navigate = useNavigate();
   const refreshAfterQueue = useRefreshAfterQueue();
+  const { pathname } = useLocation();
   if (!me) return null;
-  const links = NAV_LINKS.filter((link) => hasRole(me.role, link.role));
-  const more = links.filter((link) => !link.primary);
+  const links = linksFor(me.role);
+  const current = currentLink(links, pathname);
 
   const signOut = () =>
     logout.mutate(undefined, {
@@ -102,35 +78,18 @@ export function AppShell() {
     });
 
   return (
-    <div className="min-h-dvh pb-20 sm:pb-0">
+    <div className="min-h-dvh pb-20 md:pb-0">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:p-3">
         Skip to content
       </a>
       <header className="border-b border-rule bg-ink text-card">
-        <div className="mx-auto flex max-w-5xl items-center justify-between gap-3 px-4 py-2">
+        <div className="mx-auto flex max-w-7xl items-center justify-between gap-3 px-4 py-2">
           <div className="min-w-0 flex-1">
             <p className="font-mono text-sm font-medium tracking-widest text-brass uppercase">Gripline</p>
             <p className="truncate text-sm text-card/80">
               {me.name} · {ROLE_LABELS[me.role]}
             </p>
           </div>
-          {more.length > 0 && (
-            <details className="relative sm:hidden">
-              <summary className="flex min-h-12 cursor-pointer list-none items-center rounded-lg border-2 border-card/60 px-3 font-semibold whitespace-nowrap">Menu</summary>
-              <ul className="absolute right-0 z-20 mt-2 w-56 rounded-xl border border-rule bg-card p-2 text-ink shadow-lg">
-                {more.map((link) => (
-                  <li key={link.to}>
-                    <NavLink
-                      to={link.to}
-                      onClick={(e) => e.currentTarget.closest('details')?.removeAttribute('open')}
-                      className="flex min-h-12 items-center rounded-lg px-3 font-semibold hover:bg-paper aria-[current=page]:bg-paper">
-                      {link.label}
-                    </NavLink>
-                  </li>
-                ))}
-              </ul>
-            </details>
-          )}
           <button
             type="button"
             onClick={signOut}
@@ -148,18 +107,13 @@ export function AppShell() {
       <Suspense fallback={null}>
         <OfflineSync memberId={me.id} onSettled={refreshAfterQueue} prepare={preloadScanPages} />
       </Suspense>
-      <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-10 border-t border-rule bg-card sm:static sm:border-t-0 sm:border-b">
-        <div className="mx-auto flex max-w-5xl sm:flex-wrap sm:gap-1 sm:px-4">
-          {links.map((link) => (
-            <NavLink key={link.to} to={link.to} end={link.to === '/'} className={`${LINK} ${link.primary ? '' : 'max-sm:hidden'}`}>
-              {link.label}
-            </NavLink>
-          ))}
-        </div>
-      </nav>
-      <MainLandmark id="main" className="mx-auto max-w-5xl px-4 py-5">
-        <Outlet />
-      </MainLandmark>
+      <div className="mx-auto flex max-w-7xl md:gap-6 md:px-4">
+        <SideNav links={links} current={current} />
+        <MainLandmark id="main" className="min-w-0 flex-1 px-4 py-5 md:px-0">
+          <Outlet />
+        </MainLandmark>
+      </div>
+      <PhoneNav links={links} current={current} />
     </div>
   );
 }

@@ -21,7 +21,7 @@ export function ForecastRoute() {
         title="Forecast"
         lead={`Each bin's next ${data.meta.horizonWeeks} weeks: demand from planned assemblies (or past draws), projected on hand, and when to reorder. Worked out ${formatDay(data.meta.generatedAt)} at a ${formatPercent(data.meta.serviceLevel)} service level.`}
         actions={
-          <Link to="/settings/planning" className="inline-flex min-h-12 items-center rounded-lg border-2 border-ink px-5 font-semibold text-ink">
+          <Link to="/settings" className="inline-flex min-h-12 items-center rounded-lg border-2 border-ink px-5 font-semibold text-ink">
             Planning settings
           </Link>
         }

@@ -1,14 +1,11 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router';
+import { Link, type LoaderFunctionArgs } from 'react-router';
 import { peopleQueryOptions } from '@/features/people/api/get-people';
-import { cribSettingsQueryOptions } from '@/features/signoffs/api/get-crib-settings';
 import { signoffsQueryOptions } from '@/features/signoffs/api/get-signoffs';
-import { HoldTimeCard } from '@/features/signoffs/components/hold-time-card';
 import { SignoffCaution } from '@/features/signoffs/components/signoff-caution';
 import { SignoffForm } from '@/features/signoffs/components/signoff-form';
 import { SignoffList } from '@/features/signoffs/components/signoff-list';
-import { TimeZoneCard } from '@/features/signoffs/components/time-zone-card';
 import { Card, PageHeader } from '@/components/ui/page';
 import { requireRole } from './guards';
 
@@ -17,7 +14,6 @@ export const signoffsLoader = (queryClient: QueryClient) => async ({ request }: 
   await Promise.all([
     queryClient.ensureQueryData(signoffsQueryOptions()),
     queryClient.ensureQueryData(peopleQueryOptions()),
-    queryClient.ensureQueryData(cribSettingsQueryOptions()),
   ]);
   return null;
 };
@@ -25,19 +21,24 @@ export const signoffsLoader = (queryClient: QueryClient) => async ({ request }: 
 export function SignoffsRoute() {
   const { data: signoffs } = useSuspenseQuery(signoffsQueryOptions());
   const { data: people } = useSuspenseQuery(peopleQueryOptions());
-  const { data: settings } = useSuspenseQuery(cribSettingsQueryOptions());
   const active = people.filter((p) => p.active).map((p) => ({ id: p.id, name: p.name }));
   return (
     <>
-      <PageHeader title="Sign-offs" lead="Who may use which powered tools, how long a returned tool is held for the next person, and the chapter's time zone." />
+      <PageHeader
+        title="Sign-offs"
+        lead="Who may use which powered tools."
+        actions={
+          <Link to="/settings" className="inline-flex min-h-12 items-center rounded-lg border-2 border-ink px-5 font-semibold text-ink">
+            Hold time and time zone
+          </Link>
+        }
+      />
       <div className="flex flex-col gap-4">
         <SignoffCaution />
         <Card title="Define a sign-off">
           <SignoffForm />
         </Card>
         <SignoffList signoffs={signoffs} people={active} />
-        <HoldTimeCard holdHours={settings.holdHours} />
-        <TimeZoneCard timeZone={settings.timeZone} />
       </div>
     </>
   );

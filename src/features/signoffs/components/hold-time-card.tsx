@@ -15,8 +15,22 @@ type Output = z.output<typeof updateCribSettingsBodySchema>;
 
 const hoursWords = (h: number) => (h % 24 === 0 ? `${h} hours (${h / 24} day${h === 24 ? '' : 's'})` : `${h} hour${h === 1 ? '' : 's'}`);
 
-/** The chapter's hold time: how long a returned tool waits for the next person in its queue. */
-export function HoldTimeCard({ holdHours }: { holdHours: number }) {
+/**
+ * The chapter's hold time: how long a returned tool waits for the next person in its queue. Only a
+ * chapter lead may change it (the server says so too); others read it.
+ */
+export function HoldTimeCard({ holdHours, canChange }: { holdHours: number; canChange: boolean }) {
+  return (
+    <Card title="Hold time">
+      <p className="mb-3">
+        A returned tool waits <strong>{hoursWords(holdHours)}</strong> for the first person in its queue, then goes to the next.
+      </p>
+      {canChange ? <HoldTimeForm holdHours={holdHours} /> : <p className="text-sm text-steel">Only the chapter lead changes the hold time.</p>}
+    </Card>
+  );
+}
+
+function HoldTimeForm({ holdHours }: { holdHours: number }) {
   const update = useUpdateCribSettings();
   const form = useForm<Input, unknown, Output>({ resolver: zodResolver(updateCribSettingsBodySchema), values: { holdHours } });
   const { errors } = form.formState;
@@ -31,34 +45,29 @@ export function HoldTimeCard({ holdHours }: { holdHours: number }) {
   });
 
   return (
-    <Card title="Hold time">
-      <p className="mb-3">
-        A returned tool waits <strong>{hoursWords(holdHours)}</strong> for the first person in its queue, then goes to the next.
-      </p>
-      <form onSubmit={submit} noValidate className="flex flex-col gap-3" aria-label="Hold time">
-        {errors.root?.message && <Notice tone="bad">{errors.root.message}</Notice>}
-        <div className="flex flex-col gap-3 sm:flex-row sm:items-end">
-          <div className="sm:w-56">
-            <TextField
-              label="Hours a returned tool waits"
-              type="number"
-              inputMode="numeric"
-              min={HOLD_HOURS_MIN}
-              max={HOLD_HOURS_MAX}
-              step={1}
-              error={errors.holdHours?.message}
-              {...form.register('holdHours', { valueAsNumber: true })}
-            />
-          </div>
-          <Button type="submit" variant="secondary" busy={update.isPending}>
-            Save hold time
-          </Button>
+    <form onSubmit={submit} noValidate className="flex flex-col gap-3" aria-label="Hold time">
+      {errors.root?.message && <Notice tone="bad">{errors.root.message}</Notice>}
+      <div className="flex flex-col gap-3 sm:flex-row sm:items-end">
+        <div className="sm:w-56">
+          <TextField
+            label="Hours a returned tool waits"
+            type="number"
+            inputMode="numeric"
+            min={HOLD_HOURS_MIN}
+            max={HOLD_HOURS_MAX}
+            step={1}
+            error={errors.holdHours?.message}
+            {...form.register('holdHours', { valueAsNumber: true })}
+          />
         </div>
-        <p className="text-sm text-steel">
-          {HOLD_HOURS_MIN} to {HOLD_HOURS_MAX} hours (two weeks). A new time applies to the next tool returned; a tool already held keeps
-          its time.
-        </p>
-      </form>
-    </Card>
+        <Button type="submit" variant="secondary" busy={update.isPending}>
+          Save hold time
+        </Button>
+      </div>
+      <p className="text-sm text-steel">
+        {HOLD_HOURS_MIN} to {HOLD_HOURS_MAX} hours (two weeks). A new time applies to the next tool returned; a tool already held keeps
+        its time.
+      </p>
+    </form>
   );
 }

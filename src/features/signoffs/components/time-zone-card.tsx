@@ -14,8 +14,23 @@ const zonesWith = (current: string): string[] => {
   return known.includes(current) ? known : [current, ...known];
 };
 
-/** The chapter's time zone: the clock every due date, "days late", reminder and digest counts its days by. */
-export function TimeZoneCard({ timeZone }: { timeZone: string }) {
+/**
+ * The chapter's time zone: the clock every due date, "days late", reminder and digest counts its days
+ * by. Only a chapter lead may change it (the server says so too); others read it.
+ */
+export function TimeZoneCard({ timeZone, canChange }: { timeZone: string; canChange: boolean }) {
+  return (
+    <Card title="Time zone">
+      <p className="mb-3">
+        Loans fall due at the end of a day, reminders go out once a day and the morning lists come at 07:00, all on the chapter&apos;s clock:{' '}
+        <strong>{timeZone.replaceAll('_', ' ')}</strong>, where it is now {momentInWords(new Date(), timeZone)}.
+      </p>
+      {canChange ? <TimeZoneForm timeZone={timeZone} /> : <p className="text-sm text-steel">Only the chapter lead changes the time zone.</p>}
+    </Card>
+  );
+}
+
+function TimeZoneForm({ timeZone }: { timeZone: string }) {
   const update = useUpdateCribSettings();
   const [zone, setZone] = useState(timeZone);
   const [problem, setProblem] = useState<string>();
@@ -33,23 +48,17 @@ export function TimeZoneCard({ timeZone }: { timeZone: string }) {
   };
 
   return (
-    <Card title="Time zone">
-      <p className="mb-3">
-        Loans fall due at the end of a day, reminders go out once a day and the morning lists come at 07:00, all on the chapter&apos;s clock:{' '}
-        <strong>{timeZone.replaceAll('_', ' ')}</strong>, where it is now {momentInWords(new Date(), timeZone)}.
-      </p>
-      <form onSubmit={(e) => void submit(e)} noValidate className="flex flex-col gap-3" aria-label="Time zone">
-        {problem && <Notice tone="bad">{problem}</Notice>}
-        <div className="flex flex-col gap-3 sm:flex-row sm:items-end">
-          <div className="sm:w-72">
-            <SelectField label="The chapter's time zone" options={options} value={zone} onChange={(e) => setZone(e.target.value)} />
-          </div>
-          <Button type="submit" variant="secondary" busy={update.isPending} disabled={zone === timeZone}>
-            Save time zone
-          </Button>
+    <form onSubmit={(e) => void submit(e)} noValidate className="flex flex-col gap-3" aria-label="Time zone">
+      {problem && <Notice tone="bad">{problem}</Notice>}
+      <div className="flex flex-col gap-3 sm:flex-row sm:items-end">
+        <div className="sm:w-72">
+          <SelectField label="The chapter's time zone" options={options} value={zone} onChange={(e) => setZone(e.target.value)} />
         </div>
-        <p className="text-sm text-steel">Loans already out keep their due moment; new loans and the day counts follow the new zone.</p>
-      </form>
-    </Card>
+        <Button type="submit" variant="secondary" busy={update.isPending} disabled={zone === timeZone}>
+          Save time zone
+        </Button>
+      </div>
+      <p className="text-sm text-steel">Loans already out keep their due moment; new loans and the day counts follow the new zone.</p>
+    </form>
   );
 }

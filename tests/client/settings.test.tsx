@@ -4,7 +4,7 @@ import { Suspense } from 'react';
 import { beforeEach, describe, expect, it } from 'vitest';
 import type { Role } from '@shared/roles';
 import type { ActualWaste, PlanningSettingsDto } from '@shared/schemas/forecast';
-import { PlanningSettingsRoute } from '@/app/routes/app/planning-settings';
+import { SettingsRoute } from '@/app/routes/app/settings';
 import { setCsrfToken } from '@/lib/api-client';
 import { fakeFetch, renderWithProviders, type FakeCall } from '../helpers/render';
 
@@ -34,14 +34,15 @@ function renderSettings(role: Role, respond?: (call: FakeCall) => { status: numb
       settings = { ...settings, ...(call.body as Partial<PlanningSettingsDto>) };
       return { status: 200, body: settings };
     }
+    if (call.path === '/api/settings/crib' && call.method === 'GET') return { status: 200, body: { holdHours: 48, timeZone: 'America/Chicago' } };
     if (call.path === '/api/waste') return { status: 200, body: { ...WASTE, currentAllowance: settings.wastePercent } };
     return undefined;
   });
   renderWithProviders(
     <Suspense fallback={<p>Loading…</p>}>
-      <PlanningSettingsRoute />
+      <SettingsRoute />
     </Suspense>,
-    '/settings/planning',
+    '/settings',
   );
   return calls;
 }
@@ -50,7 +51,7 @@ const valueOf = (name: string | RegExp) => screen.getByRole<HTMLInputElement>('s
 
 beforeEach(() => setCsrfToken('tok'));
 
-describe('Planning settings', () => {
+describe('Settings', () => {
   it('gives the lead the form in percent and dollars, each setting explained', async () => {
     renderSettings('lead');
     const form = await screen.findByRole('form', { name: 'Planning settings' });
@@ -71,13 +72,24 @@ describe('Planning settings', () => {
     ]);
   });
 
-  it('shows a member the settings without a form and does not ask for measured waste', async () => {
-    const calls = renderSettings('member');
-    expect(await screen.findByRole('heading', { name: 'Planning settings', level: 1 })).toBeTruthy();
+  it('gives the lead the hold time and the time zone forms on the same page', async () => {
+    renderSettings('lead');
+    expect(await screen.findByRole('heading', { name: 'Settings', level: 1 })).toBeTruthy();
+    expect(screen.getByRole('form', { name: 'Hold time' })).toBeTruthy();
+    expect(screen.getByRole('form', { name: 'Time zone' })).toBeTruthy();
+    expect(screen.getByLabelText<HTMLInputElement>('Hours a returned tool waits').value).toBe('48');
+  });
+
+  it.each(['member', 'quartermaster'] as const)('shows a %s the settings without a form and does not ask for measured waste', async (role) => {
+    const calls = renderSettings(role);
+    expect(await screen.findByRole('heading', { name: 'Settings', level: 1 })).toBeTruthy();
     expect(screen.queryByRole('form')).toBeNull();
     expect(screen.queryByRole('spinbutton')).toBeNull();
-    expect(screen.queryByRole('button', { name: /Use measured waste/ })).toBeNull();
-    expect(screen.getByText('Only the chapter lead changes these.')).toBeTruthy();
+    expect(screen.queryByRole('combobox')).toBeNull();
+    expect(screen.queryByRole('button')).toBeNull();
+    expect(screen.getByText(/Only the chapter lead changes them\.$/)).toBeTruthy();
+    expect(screen.getByText('48 hours (2 days)')).toBeTruthy();
+    expect(screen.getByText('America/Chicago', { selector: 'strong' })).toBeTruthy();
     const shown = Object.fromEntries([...document.querySelectorAll('dt')].map((dt) => [dt.textContent, dt.nextElementSibling?.firstChild?.textContent]));
     expect(shown).toEqual({
       'Waste allowance': '5 %',

@@ -25,7 +25,7 @@ const LEAD = {
   Crib: ['Scan', 'Tools', 'Overdue', 'Service', 'Labels'],
   Stock: ['Bins', 'Restock', 'Reorder alerts', 'Forecast', 'Consumables'],
   Builds: ['My builds'],
-  Chapter: ['People', 'Sign-offs', 'Sent mail', 'Settings'],
+  Chapter: ['Overview', 'People', 'Sign-offs', 'Sent mail', 'Settings'],
   Mine: ['My loans', 'My tab', 'My mail'],
 };
 const SEES: Record<Role, Record<string, string[]>> = { member: MEMBER, quartermaster: QUARTERMASTER, lead: LEAD };

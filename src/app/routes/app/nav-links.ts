@@ -41,6 +41,7 @@ export const NAV_LINKS: readonly NavLinkEntry[] = [
   { to: '/forecast', label: 'Forecast', role: 'quartermaster', group: 'stock' },
   { to: '/spend', label: 'Consumables', role: 'lead', group: 'stock' },
   { to: '/builds', label: 'My builds', role: 'member', group: 'builds', under: ['/assemblies'] },
+  { to: '/overview', label: 'Overview', role: 'lead', group: 'chapter' },
   { to: '/people', label: 'People', role: 'lead', group: 'chapter' },
   { to: '/signoffs', label: 'Sign-offs', role: 'lead', group: 'chapter' },
   { to: '/mail', label: 'Sent mail', role: 'lead', group: 'chapter' },

@@ -3,11 +3,13 @@ import { useSuspenseQuery } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
 import { peopleQueryOptions } from '@/features/people/api/get-people';
 import { cribSettingsQueryOptions } from '@/features/signoffs/api/get-crib-settings';
+import { signoffRequestsQueryOptions } from '@/features/signoffs/api/get-signoff-requests';
 import { signoffsQueryOptions } from '@/features/signoffs/api/get-signoffs';
 import { HoldTimeCard } from '@/features/signoffs/components/hold-time-card';
 import { SignoffCaution } from '@/features/signoffs/components/signoff-caution';
 import { SignoffForm } from '@/features/signoffs/components/signoff-form';
 import { SignoffList } from '@/features/signoffs/components/signoff-list';
+import { SignoffRequestList } from '@/features/signoffs/components/signoff-request-list';
 import { TimeZoneCard } from '@/features/signoffs/components/time-zone-card';
 import { Card, PageHeader } from '@/components/ui/page';
 import { requireRole } from './guards';
@@ -18,6 +20,7 @@ export const signoffsLoader = (queryClient: QueryClient) => async ({ request }: 
     queryClient.ensureQueryData(signoffsQueryOptions()),
     queryClient.ensureQueryData(peopleQueryOptions()),
     queryClient.ensureQueryData(cribSettingsQueryOptions()),
+    queryClient.ensureQueryData(signoffRequestsQueryOptions()),
   ]);
   return null;
 };
@@ -26,12 +29,16 @@ export function SignoffsRoute() {
   const { data: signoffs } = useSuspenseQuery(signoffsQueryOptions());
   const { data: people } = useSuspenseQuery(peopleQueryOptions());
   const { data: settings } = useSuspenseQuery(cribSettingsQueryOptions());
+  const { data: requests } = useSuspenseQuery(signoffRequestsQueryOptions());
   const active = people.filter((p) => p.active).map((p) => ({ id: p.id, name: p.name }));
   return (
     <>
       <PageHeader title="Sign-offs" lead="Who may use which powered tools, how long a returned tool is held for the next person, and the chapter's time zone." />
       <div className="flex flex-col gap-4">
         <SignoffCaution />
+        <Card title={`Sign-off requests (${requests.length})`}>
+          <SignoffRequestList requests={requests} />
+        </Card>
         <Card title="Define a sign-off">
           <SignoffForm />
         </Card>

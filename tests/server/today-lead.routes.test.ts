@@ -1,7 +1,8 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it, onTestFinished } from 'vitest';
 import { leadTodaySchema, type LeadToday } from '@shared/schemas/today-lead';
 import { addBinAs, addToolAs, blindRivetBin, lend, post } from '../helpers/crib';
 import { addAssembly, DAY_MS, drawFrom, hundredRivetLine } from '../helpers/planning-fixture';
+import { DEMO_PASSWORD, seedDemoChapter } from '../../server/seed/demo-chapter';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
@@ -122,4 +123,44 @@ describe('GET /api/today/lead', () => {
     }
     expect((await (await t.anonymous()).agent.get('/api/today/lead')).status).toBe(401);
   });
+});
+
+describe('GET /api/today/lead on the demo chapter', () => {
+  it('shows the demo’s real work: its two overdue loans, the tools out and with whom, bins to order, two sign-off requests and the spend', async () => {
+    const demo = await buildTestApp();
+    onTestFinished(() => demo.close());
+    expect(await seedDemoChapter(demo.db)).toBe(true);
+    demo.clock.now = new Date();
+    const dana = await demo.signIn('lead@example.org', DEMO_PASSWORD);
+    const get = async (path: string): Promise<Record<string, unknown>> => (await dana.agent.get(path).expect(200)).body as Record<string, unknown>;
+    const answer = leadTodaySchema.parse(await get('/api/today/lead'));
+
+    const overdue = (await get('/api/overdue')).data as { loanId: number; holder: { name: string } }[];
+    expect(overdue).toHaveLength(2);
+    expect(answer.overdue.total).toBe(2);
+    expect(answer.overdue.loans.map((l) => l.loanId)).toEqual(overdue.map((l) => l.loanId));
+    expect(answer.overdue.loans.map((l) => l.holder.name).sort()).toEqual(['Ines Parra', 'Kelechi Obi']);
+
+    const open = (await get('/api/loans/open')).data as { holder: { name: string }; tool: { code: string } }[];
+    expect(answer.onLoan.toolCount).toBe(open.length);
+    const tools = (await get('/api/tools?pageSize=100')).data as { code: string; replacementValueCents: number }[];
+    const value = open.reduce((sum, l) => sum + tools.find((x) => x.code === l.tool.code)!.replacementValueCents, 0);
+    expect(answer.onLoan.valueCents).toBe(value);
+    expect(value).toBeGreaterThan(0);
+    expect(answer.holders.total).toBe(new Set(open.map((l) => l.holder.name)).size);
+    expect(answer.holders.people.find((p) => p.name === 'Marco Bellweather')).toMatchObject({ toolCount: 2 });
+    expect(answer.holders.people.find((p) => p.name === 'Kelechi Obi')).toMatchObject({ toolCount: 1, overdue: true });
+
+    const toOrder = (await get('/api/alerts?state=open')).data as unknown[];
+    expect(toOrder.length).toBeGreaterThanOrEqual(1);
+    expect(answer.reorder.toOrder).toBe(toOrder.length);
+
+    expect(answer.signoffRequests.total).toBe(2);
+    expect(answer.signoffRequests.requests.map((r) => `${r.member.name}: ${r.signoff.name}`)).toEqual(['Kelechi Obi: Air tools', 'Marco Bellweather: Rivet gun and bucking']);
+
+    const spend = (await get('/api/stock/spend?months=2')).months as { month: string; consumedCents: number }[];
+    const used = ({ month, consumedCents }: { month: string; consumedCents: number }) => ({ month, consumedCents });
+    expect(answer.spend).toEqual({ lastMonth: used(spend[0]!), thisMonth: used(spend[1]!) });
+    expect(spend[0]!.consumedCents + spend[1]!.consumedCents).toBeGreaterThan(0);
+  }, 30_000);
 });

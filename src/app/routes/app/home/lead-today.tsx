@@ -62,6 +62,10 @@ function OnLoan({ onLoan }: { onLoan: LeadTodayAnswer['onLoan'] }) {
   );
 }
 
+/** "next due in 5 days"; late: "7 days late", or "one 3 days late" among several. */
+const dueWords = (p: LeadTodayAnswer['holders']['people'][number]) =>
+  p.overdue ? `${p.toolCount > 1 ? 'one ' : ''}${p.firstDueWords}` : `next ${p.firstDueWords}`;
+
 function Holders({ holders }: { holders: LeadTodayAnswer['holders'] }) {
   if (holders.total === 0) return <Card title="Who holds what"><p>Nobody holds a tool right now.</p></Card>;
   return (
@@ -72,7 +76,7 @@ function Holders({ holders }: { holders: LeadTodayAnswer['holders'] }) {
             <Link to="/loans" className="flex min-h-11 flex-wrap items-center justify-between gap-x-3 py-2">
               <span className="font-medium underline underline-offset-4">{p.name}</span>
               <span className={p.overdue ? 'font-semibold text-bad' : 'text-ink-soft'}>
-                {formatQuantity(p.toolCount, 'tool')}, first {p.firstDueWords}
+                {formatQuantity(p.toolCount, 'tool')}, {dueWords(p)}
               </span>
             </Link>
           </li>

@@ -3,7 +3,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { signoffRequestListSchema, signoffRequestSchema } from '@shared/schemas/signoff-requests';
 import { outboxMail } from '../../server/db/schema/mail';
 import { signoffRequests } from '../../server/db/schema/signoff-requests';
-import { addToolAs, post } from '../helpers/crib';
+import { addToolAs, patch, post } from '../helpers/crib';
 import { buildTestApp, type Crew, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 let t: TestApp;
@@ -116,6 +116,14 @@ describe('answering a sign-off request', () => {
     expect(twice.body.error.code).toBe('SIGNOFF_REQUEST_CLOSED');
     expect((await post(lead, '/api/signoffs/requests/9999/decline', { reason: 'No' })).status).toBe(404);
     expect((await ask(member, { toolCode: drill })).status).toBe(201);
+  });
+
+  it('leaves a deactivated person’s request off the lead’s list, and shows it again on reactivation', async () => {
+    await ask(member, { toolCode: drill }).expect(201);
+    await patch(lead, `/api/users/${crew.member.id}`, { active: false }).expect(200);
+    expect(await openRequests()).toEqual([]);
+    await patch(lead, `/api/users/${crew.member.id}`, { active: true }).expect(200);
+    expect((await openRequests()).map((r) => r.member.name)).toEqual(['Mia Member']);
   });
 
   it('lets only a lead list or decline requests', async () => {

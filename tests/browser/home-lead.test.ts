@@ -46,6 +46,7 @@ describe('the lead’s home on a phone', () => {
     await member.goto(`${suite.app.url}/tools/${gun}`);
     await member.getByRole('button', { name: 'Ask for a sign-off' }).click();
     await member.getByLabel('Note for the lead (optional)').fill('Bucked rivets on my last kit.');
+    await member.screenshot({ path: `${SHOTS}/tool-ask-signoff-360.png`, fullPage: true });
     await member.getByRole('button', { name: 'Send the request' }).click();
     await member.getByRole('heading', { name: 'Sign-off asked for' }).waitFor();
     await member.context().close();
@@ -58,6 +59,8 @@ describe('the lead’s home on a phone', () => {
     await panel.getByRole('button', { name: 'Decline', exact: true }).click();
     await lead.getByText('Ines Parra has been told why.').waitFor();
     await panel.getByText('Ines Parra asks for Rivet gun and bucking').waitFor({ state: 'detached' });
+    await lead.setViewportSize({ width: 1280, height: 900 });
+    await lead.screenshot({ path: `${SHOTS}/home-lead-1280.png`, fullPage: true });
     await lead.context().close();
   });
 });

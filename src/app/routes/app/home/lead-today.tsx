@@ -13,12 +13,12 @@ import { formatCents, formatCount, formatQuantity } from '@/lib/format';
 const LINK = 'inline-flex min-h-11 items-center font-semibold underline underline-offset-4';
 const FIGURE_LINK = 'flex min-h-11 flex-col rounded-lg bg-paper p-3 hover:bg-rule/40';
 
-/** "All 7 overdue loans": the way to the screen where they are dealt with. */
-function AllLink({ to, total, what }: { to: string; total: number; what: string }) {
+/** "All 7 overdue loans", or "Open Overdue" for a single one: the way to the screen where they are dealt with. */
+function AllLink({ to, total, what, page }: { to: string; total: number; what: string; page: string }) {
   return (
     <p className="mt-2">
       <Link to={to} className={LINK}>
-        All {formatCount(total)} {what}
+        {total === 1 ? `Open ${page}` : `All ${formatCount(total)} ${what}`}
       </Link>
     </p>
   );
@@ -33,7 +33,10 @@ function Overdue({ overdue, onChanged }: { overdue: LeadTodayAnswer['overdue']; 
           <li key={loan.loanId} className="flex flex-col gap-2 py-3 sm:flex-row sm:items-start sm:justify-between">
             <div className="flex flex-col items-start gap-1">
               <Link to={`/tools/${loan.tool.code}`} className={LINK}>
-                <Code>{loan.tool.code}</Code>&nbsp;{loan.tool.name}
+                <span className="whitespace-nowrap">
+                  <Code>{loan.tool.code}</Code>
+                </span>
+                &nbsp;{loan.tool.name}
               </Link>
               <span>{loan.holder.name} has it</span>
               <LateBadge daysLate={loan.daysLate} />
@@ -42,7 +45,7 @@ function Overdue({ overdue, onChanged }: { overdue: LeadTodayAnswer['overdue']; 
           </li>
         ))}
       </ul>
-      <AllLink to="/overdue" total={overdue.total} what="overdue loans" />
+      <AllLink to="/overdue" total={overdue.total} what="overdue loans" page="Overdue" />
     </Card>
   );
 }
@@ -82,7 +85,7 @@ function Holders({ holders }: { holders: LeadTodayAnswer['holders'] }) {
           </li>
         ))}
       </ul>
-      <AllLink to="/loans" total={holders.total} what="people holding tools" />
+      <AllLink to="/loans" total={holders.total} what="people holding tools" page="My loans" />
     </Card>
   );
 }
@@ -106,7 +109,7 @@ function Requests({ requests, onChanged }: { requests: LeadTodayAnswer['signoffR
   return (
     <Card title="Sign-off requests">
       <SignoffRequestList requests={requests.requests} onAnswered={onChanged} />
-      {requests.total > 0 && <AllLink to="/signoffs" total={requests.total} what="sign-off requests" />}
+      {requests.total > 0 && <AllLink to="/signoffs" total={requests.total} what="sign-off requests" page="Sign-offs" />}
     </Card>
   );
 }

@@ -32,11 +32,11 @@ function Overdue({ overdue, onChanged }: { overdue: LeadTodayAnswer['overdue']; 
         {overdue.loans.map((loan) => (
           <li key={loan.loanId} className="flex flex-col gap-2 py-3 sm:flex-row sm:items-start sm:justify-between">
             <div className="flex flex-col items-start gap-1">
-              <Link to={`/tools/${loan.tool.code}`} className={LINK}>
+              <Link to={`/tools/${loan.tool.code}`} className="inline-block min-h-11 py-2.5 font-semibold underline underline-offset-4">
                 <span className="whitespace-nowrap">
                   <Code>{loan.tool.code}</Code>
-                </span>
-                &nbsp;{loan.tool.name}
+                </span>{' '}
+                {loan.tool.name}
               </Link>
               <span>{loan.holder.name} has it</span>
               <LateBadge daysLate={loan.daysLate} />

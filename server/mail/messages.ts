@@ -145,3 +145,25 @@ export function overdueDigestMail(to: string, name: string, lines: OverdueMailLi
     ].join('\n'),
   };
 }
+
+/** The lead's answer to a member's sign-off request: granted, or declined with the lead's reason. */
+export function signoffAnswerMail(
+  answer: { to: string; name: string; signoff: string; tool: { code: string; name: string }; lead: string; declineReason: string | null },
+  publicUrl: string,
+): OutgoingMail {
+  const granted = answer.declineReason === null;
+  return {
+    to: answer.to,
+    subject: granted ? `You are signed off for "${answer.signoff}"` : `Your request for the "${answer.signoff}" sign-off was declined`,
+    text: [
+      `Hello ${answer.name},`,
+      ``,
+      granted
+        ? `${answer.lead} has signed you off for "${answer.signoff}", as you asked from ${answer.tool.name} (${answer.tool.code}). You may now check it out.`
+        : `${answer.lead} has declined your request for the "${answer.signoff}" sign-off, asked from ${answer.tool.name} (${answer.tool.code}).`,
+      ...(granted ? [] : [`The reason: ${answer.declineReason}`, `Talk to ${answer.lead} about what to do first; you can ask again from the tool's page.`]),
+      ``,
+      toolLink(publicUrl, answer.tool.code),
+    ].join('\n'),
+  };
+}

@@ -3,6 +3,7 @@ import { DAY_MS } from '@shared/time/durations';
 import { hashPassword } from '../accounts/passwords';
 import { countUsers, insertUser } from '../accounts/users.repo';
 import type { Database } from '../db/client';
+import { refreshAlerts } from '../features/planning/alerts.service';
 import { deliverDueMail } from '../mail/outbox';
 import { seedDemoBuilds } from './demo-builds';
 import { seedDemoCrib } from './demo-crib';
@@ -35,6 +36,8 @@ export async function seedDemoChapter(db: Database): Promise<boolean> {
   seedDemoStock(db);
   seedDemoBuilds(db);
   seedDemoOrders(db);
+  // This morning's reorder check has run, as the daily job would have: the bins running low have their alerts.
+  refreshAlerts({ db, publicUrl: 'http://localhost', now: () => new Date() });
   // The mail of the invented past counts as sent long ago: it must not reach the mail catcher or a real server.
   await deliverDueMail({ db, mailer: { send: async () => {}, close: () => {} }, now: () => new Date() });
   return true;

@@ -6,6 +6,7 @@ import type { Database } from '../db/client';
 import type { UserRow } from '../db/schema/users';
 import { placeHold } from '../features/tools/holds.service';
 import { checkOut, returnTool } from '../features/tools/loans.service';
+import { askForSignoff } from '../features/tools/signoff-requests.service';
 import { defineSignoff, grantSignoff } from '../features/tools/signoffs.service';
 import { changeToolStatus } from '../features/tools/tool-status.service';
 import { createTool } from '../features/tools/tools.service';
@@ -174,4 +175,10 @@ export function seedDemoCrib(db: Database, now: Date = new Date()): void {
   // Set aside for Marco's right flap: his to collect within the chapter's hold time.
   placeHold(ctx, marco, code('Hand rivet squeezer'));
   changeToolStatus(ctx, quartermaster, code('Edge deburring tool'), 'lost', 'Not in the drawer at the monthly count');
+
+  // Two members asked for a sign-off from a tool's page; the lead has yet to answer.
+  at(2);
+  askForSignoff(ctx, kelechi, { toolCode: code('Air drill, pistol grip'), note: 'I used air drills at my last job; happy to be shown the crib’s hoses first.' });
+  at(1);
+  askForSignoff(ctx, marco, { toolCode: code('Rivet gun, 2X'), note: 'Did the practice session on scrap last Saturday.' });
 }

@@ -27,6 +27,8 @@ const suite = builtAppWithChromium();
 
 interface DemoIds {
   toolCode: string;
+  /** A tool that needs a sign-off: its page offers "Ask for a sign-off" to whoever lacks it. */
+  signoffToolCode: string;
   binCode: string;
   buildId: number;
   assemblyId: number;
@@ -36,6 +38,7 @@ function demoIds(app: BuiltApp): DemoIds {
   const db = new BetterSqlite3(join(app.dir, 'gripline.db'), { readonly: true });
   try {
     const tool = db.prepare('select code from tools order by id limit 1').get() as { code: string };
+    const signoffTool = db.prepare('select code from tools where required_signoff_id is not null order by id limit 1').get() as { code: string };
     const bin = db.prepare('select code from bins order by id limit 1').get() as { code: string };
     const assembly = db
       .prepare(
@@ -43,7 +46,7 @@ function demoIds(app: BuiltApp): DemoIds {
          join users u on u.id = b.owner_id where u.email = 'member@example.org' order by a.id limit 1`,
       )
       .get() as { assemblyId: number; buildId: number };
-    return { toolCode: tool.code, binCode: bin.code, ...assembly };
+    return { toolCode: tool.code, signoffToolCode: signoffTool.code, binCode: bin.code, ...assembly };
   } finally {
     db.close();
   }
@@ -57,6 +60,7 @@ function pagesOf(role: Role, ids: DemoIds): string[] {
     '/tools',
     `/tools/${ids.toolCode}`,
     '/queue',
+    `/tools/${ids.signoffToolCode}`,
     '/loans',
     '/bins',
     `/bins/${ids.binCode}`,

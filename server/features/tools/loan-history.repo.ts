@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, isNull, type SQL } from 'drizzle-orm';
+import { and, asc, count, desc, eq, isNull, sql, type SQL } from 'drizzle-orm';
 import type { Loan } from '@shared/schemas/tools';
 import type { Executor } from '../../db/client';
 import { loans, tools } from '../../db/schema/tools';
@@ -41,4 +41,15 @@ function loanRows(db: Executor, filter: { userId?: number; open?: boolean }, lim
     .orderBy(desc(isNull(loans.returnedAt)), asc(loans.dueAt), desc(loans.returnedAt))
     .limit(limit)
     .all();
+}
+
+/** Tools out on loan now and what they would cost to replace, summed from each tool's replacement value. */
+export function openLoanValue(db: Executor): { toolCount: number; valueCents: number } {
+  const row = db
+    .select({ toolCount: count(), valueCents: sql<number>`coalesce(sum(${tools.replacementValueCents}), 0)` })
+    .from(loans)
+    .innerJoin(tools, eq(tools.id, loans.toolId))
+    .where(isNull(loans.returnedAt))
+    .get();
+  return { toolCount: row?.toolCount ?? 0, valueCents: Number(row?.valueCents ?? 0) };
 }

@@ -2,6 +2,8 @@ import { Router } from 'express';
 import { createSignoffBodySchema, grantSignoffBodySchema, signoffHolderParams, signoffParams, updateSignoffBodySchema } from '@shared/schemas/signoffs';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { parseInput } from '../../lib/validate';
+import { askSignoffBodySchema, declineSignoffRequestBodySchema, signoffRequestParams } from '@shared/schemas/signoff-requests';
+import { askForSignoff, declineSignoffRequest, mySignoffRequests, openSignoffRequests } from './signoff-requests.service';
 import { changeSignoff, defineSignoff, grantSignoff, listSignoffs, mySignoffs, revokeSignoff } from './signoffs.service';
 
 /** Sign-offs: who may use which powered tools. Everyone may read them; only a chapter lead changes them. */
@@ -16,6 +18,25 @@ export function signoffsRouter() {
 
   router.get('/mine', (req, res) => {
     res.json({ data: mySignoffs(req.ctx, requireUser(req)) });
+  });
+
+  /** Sign-off requests: a member asks from a tool's page; a lead grants (POST /:id/holders) or declines. */
+  router.get('/requests', lead, (req, res) => {
+    res.json({ data: openSignoffRequests(req.ctx) });
+  });
+
+  router.get('/requests/mine', (req, res) => {
+    res.json({ data: mySignoffRequests(req.ctx, requireUser(req)) });
+  });
+
+  router.post('/requests', (req, res) => {
+    res.status(201).json(askForSignoff(req.ctx, requireUser(req), parseInput(askSignoffBodySchema, req.body)));
+  });
+
+  router.post('/requests/:id/decline', lead, (req, res) => {
+    const { id } = parseInput(signoffRequestParams, req.params, 'path');
+    const { reason } = parseInput(declineSignoffRequestBodySchema, req.body);
+    res.json(declineSignoffRequest(req.ctx, requireUser(req), id, reason));
   });
 
   router.post('/', lead, (req, res) => {

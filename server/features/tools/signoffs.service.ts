@@ -6,6 +6,7 @@ import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { isUniqueViolation } from '../../lib/sqlite-errors';
 import { loanStatements } from './loans.repo';
+import { closeRequestOnGrant } from './signoff-requests.service';
 import {
   activeLeadNames,
   countToolsPerSignoff,
@@ -90,7 +91,10 @@ export function changeSignoff(ctx: ServiceContext, id: number, change: UpdateSig
   return signoffView(ctx, id);
 }
 
-/** Signs a person off: dated now, by the lead who does it. One active grant per person and sign-off. */
+/**
+ * Signs a person off: dated now, by the lead who does it. One active grant per person and sign-off.
+ * Their open request for it, if any, closes as granted in the same transaction.
+ */
 export function grantSignoff(ctx: ServiceContext, actor: UserRow, id: number, userId: number): SignoffGrant {
   const now = ctx.now();
   return ctx.db.transaction((db) => {
@@ -109,6 +113,7 @@ export function grantSignoff(ctx: ServiceContext, actor: UserRow, id: number, us
       if (isUniqueViolation(err)) throw alreadySignedOff;
       throw err;
     }
+    closeRequestOnGrant(ctx, db, id, userId, actor, now);
     return {
       id: grant.id,
       signoff: { id: signoff.id, name: signoff.name },

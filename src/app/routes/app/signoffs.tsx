@@ -2,10 +2,12 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link, type LoaderFunctionArgs } from 'react-router';
 import { peopleQueryOptions } from '@/features/people/api/get-people';
+import { signoffRequestsQueryOptions } from '@/features/signoffs/api/get-signoff-requests';
 import { signoffsQueryOptions } from '@/features/signoffs/api/get-signoffs';
 import { SignoffCaution } from '@/features/signoffs/components/signoff-caution';
 import { SignoffForm } from '@/features/signoffs/components/signoff-form';
 import { SignoffList } from '@/features/signoffs/components/signoff-list';
+import { SignoffRequestList } from '@/features/signoffs/components/signoff-request-list';
 import { Card, PageHeader } from '@/components/ui/page';
 import { requireRole } from './guards';
 
@@ -14,6 +16,7 @@ export const signoffsLoader = (queryClient: QueryClient) => async ({ request }: 
   await Promise.all([
     queryClient.ensureQueryData(signoffsQueryOptions()),
     queryClient.ensureQueryData(peopleQueryOptions()),
+    queryClient.ensureQueryData(signoffRequestsQueryOptions()),
   ]);
   return null;
 };
@@ -21,6 +24,7 @@ export const signoffsLoader = (queryClient: QueryClient) => async ({ request }: 
 export function SignoffsRoute() {
   const { data: signoffs } = useSuspenseQuery(signoffsQueryOptions());
   const { data: people } = useSuspenseQuery(peopleQueryOptions());
+  const { data: requests } = useSuspenseQuery(signoffRequestsQueryOptions());
   const active = people.filter((p) => p.active).map((p) => ({ id: p.id, name: p.name }));
   return (
     <>
@@ -35,6 +39,9 @@ export function SignoffsRoute() {
       />
       <div className="flex flex-col gap-4">
         <SignoffCaution />
+        <Card title={`Sign-off requests (${requests.length})`}>
+          <SignoffRequestList requests={requests} />
+        </Card>
         <Card title="Define a sign-off">
           <SignoffForm />
         </Card>

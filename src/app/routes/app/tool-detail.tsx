@@ -6,6 +6,7 @@ import { meQueryOptions } from '@/features/auth/api/get-me';
 import { OfflineToolView } from '@/features/offline/components/offline-tool-view';
 import { ReturnPhotoPicker } from '@/features/photos/components/return-photo-picker';
 import { serviceKeys } from '@/features/service/api/keys';
+import { AskForSignoff } from '@/features/signoffs/components/ask-for-signoff';
 import { ToolPhotos } from '@/features/photos/components/tool-photos';
 import { toolQueryOptions } from '@/features/tools/api/get-tool';
 import { toolKeys } from '@/features/tools/api/keys';
@@ -79,6 +80,7 @@ function OnlineToolDetail({ code }: { code: string }) {
             void navigate(`/tools/${tool.code}`, { replace: true });
           }}
         />
+        {tool.requiredSignoff && <AskForSignoff toolCode={tool.code} signoff={tool.requiredSignoff} />}
         <Link to="/scan" className="inline-flex min-h-12 items-center justify-center rounded-lg border-2 border-ink bg-card px-5 font-semibold">
           Scan another label
         </Link>

@@ -5,14 +5,18 @@ import { messageOf } from '@/lib/errors';
 import { useSendReminder } from '../api/send-reminder';
 import { formatDateTime } from '@/lib/format';
 
-/** One reminder a day per loan: once sent, the button stays disabled and says why. */
-export function ReminderButton({ loan }: { loan: OverdueLoan }) {
+/**
+ * One reminder a day per loan: once sent, the button stays disabled and says why. `onSettled`:
+ * what else to refresh once it has gone (home's own answer, when sent from home).
+ */
+export function ReminderButton({ loan, onSettled }: { loan: OverdueLoan; onSettled?: () => void }) {
   const send = useSendReminder();
   const reasonId = `reminder-reason-${loan.loanId}`;
   const remind = () =>
     send.mutate(loan.loanId, {
       onSuccess: (r) => toast.success(`Reminder sent to ${loan.holder.name} (${r.sentTo}).`),
       onError: (err) => toast.error(messageOf(err)),
+      onSettled,
     });
   return (
     <div className="flex flex-col items-start gap-1">

@@ -12,7 +12,7 @@ const statusWords = (status: string) => ((TOOL_STATUSES as readonly string[]).in
 /**
  * What an assembly's kit still lacks, from its own estimate: the crib kit's picks that are not free
  * for the member (in the kit's own note), and the bill's lines no bin stocks or whose bin is short
- * (a line already drawn in full lacks nothing).
+ * (the bill's shortBy counts only what is still to draw).
  */
 export function kitLacks(estimate: Pick<AssemblyEstimate, 'kit' | 'bill'>, onLoanToMember: ReadonlySet<string>): Pick<MemberTodayAssembly, 'tools' | 'bins'> {
   const tools = estimate.kit
@@ -23,11 +23,11 @@ export function kitLacks(estimate: Pick<AssemblyEstimate, 'kit' | 'bill'>, onLoa
       words: k.note ?? (k.tool ? statusWords(k.tool.status) : 'none in the crib'),
     }));
   const bins = estimate.bill
-    .filter((b) => b.unstocked !== null || (b.shortBy > 0 && b.drawn < b.withWaste))
+    .filter((b) => b.unstocked !== null || b.shortBy > 0)
     .map((b) => ({
       description: b.description,
       binCode: b.bin?.code ?? null,
-      words: b.unstocked ?? `short by ${countWords(b.shortBy)}: ${countWords(b.bin?.onHand ?? 0)} on hand, ${countWords(b.withWaste)} needed`,
+      words: b.unstocked ?? `short by ${countWords(b.shortBy)}: ${countWords(b.bin?.onHand ?? 0)} on hand, ${countWords(b.toDraw)} still to draw`,
     }));
   return { tools, bins };
 }

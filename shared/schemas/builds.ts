@@ -132,8 +132,11 @@ export const billLineSchema = z.object({
   bin: binRef.nullable(),
   /** Plainly, when no bin stocks it: "No bin stocks a 1/8 in dome 5056 blind rivet, grip −3." */
   unstocked: z.string().nullable(),
+  /** What the bin lacks for what is still to draw (`toDraw` less on hand). */
   shortBy: z.number(),
   drawn: z.number(),
+  /** Still to draw for the assembly: the need with waste less what was drawn for it, never below 0. */
+  toDraw: z.number(),
 });
 export type BillLine = z.infer<typeof billLineSchema>;
 

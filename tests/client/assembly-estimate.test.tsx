@@ -27,10 +27,11 @@ const ESTIMATE: AssemblyEstimate = estimateFixture(7, {
       lines: [0],
       estimated: 21,
       withWaste: 23,
-      bin: { code: 'B-0107', designation: 'Blind, structural, dome, 5056, steel stem · 5/32 in · grip −2 (0.063–0.125 in)', onHand: 20, location: 'Cabinet R, drawer 3' },
+      bin: { code: 'B-0107', designation: 'Blind, structural, dome, 5056, steel stem · 5/32 in · grip −2 (0.063–0.125 in)', onHand: 10, location: 'Cabinet R, drawer 3' },
       unstocked: null,
       shortBy: 3,
       drawn: 10,
+      toDraw: 13,
     },
     {
       description: 'Solid, dome, 2117-T4 · 1/8 in · 1/4 in long',
@@ -44,6 +45,7 @@ const ESTIMATE: AssemblyEstimate = estimateFixture(7, {
       unstocked: 'No bin stocks a 1/8 in dome 2117-T4 solid rivet, length −4.',
       shortBy: 24,
       drawn: 0,
+      toDraw: 24,
     },
     {
       description: 'Screw #8-32 × 1/2 pan head',
@@ -57,6 +59,7 @@ const ESTIMATE: AssemblyEstimate = estimateFixture(7, {
       unstocked: null,
       shortBy: 0,
       drawn: 0,
+      toDraw: 24,
     },
   ],
   kit: [
@@ -108,7 +111,7 @@ describe('the assembly estimate page', () => {
     expect(rivets.getByRole('link', { name: 'B-0107' }).getAttribute('href')).toBe('/bins/B-0107');
     expect(rivets.getByText('21 (23 with 5 % waste)')).toBeTruthy();
     expect(rivets.getByText('10 of 21 estimated')).toBeTruthy();
-    expect(rivets.getByText(/Short by 3/).parentElement!.textContent).toBe('Short by 3: the bin has 20 on hand, the assembly needs 23.');
+    expect(rivets.getByText(/Short by 3/).parentElement!.textContent).toBe('Short by 3: the bin has 10 on hand, 13 are still to draw.');
 
     const solid = billItem(ESTIMATE.bill[1]!.description);
     expect(solid.getByText(/Not stocked/).parentElement!.textContent).toBe('Not stocked: No bin stocks a 1/8 in dome 2117-T4 solid rivet, length −4.');

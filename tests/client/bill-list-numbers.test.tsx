@@ -14,8 +14,9 @@ const line = (over: Partial<BillLine>): BillLine => ({
   withWaste: 1267,
   bin: { code: 'B-0001', designation: 'Blind rivet 1/8 dome', onHand: 1050, location: 'Cabinet A' },
   unstocked: null,
-  shortBy: 217,
-  drawn: 1100,
+  shortBy: 117,
+  drawn: 100,
+  toDraw: 1167,
   ...over,
 });
 
@@ -29,8 +30,8 @@ describe('the assembly’s bill of stock', () => {
     show([line({})]);
     const item = screen.getByRole('listitem', { name: /blind rivet/ });
     expect(item.textContent).toContain('1,206 (1,267 with 5 % waste)');
-    expect(item.textContent).toContain('1,100 of 1,206 estimated');
-    expect(item.textContent).toContain('Short by 217:');
-    expect(item.textContent).toContain('the bin has 1,050 on hand, the assembly needs 1,267.');
+    expect(item.textContent).toContain('100 of 1,206 estimated');
+    expect(item.textContent).toContain('Short by 117:');
+    expect(item.textContent).toContain('the bin has 1,050 on hand, 1,167 are still to draw.');
   });
 });

@@ -49,7 +49,7 @@ describe("MemberToday, the member's part of home", () => {
             name: 'Rudder',
             buildName: 'Tail kit',
             tools: [{ need: 'Drill bit #30', tool: { code: 'T-0021', name: 'Drill bit #30' }, words: 'all on loan' }],
-            bins: [{ description: 'Solid rivet 1/8', binCode: 'B-0003', words: 'short by 43: 20 on hand, 63 needed' }],
+            bins: [{ description: 'Solid rivet 1/8', binCode: 'B-0003', words: 'short by 43: 20 on hand, 63 still to draw' }],
           },
         ],
       },

@@ -210,6 +210,7 @@ describe('GET /api/assemblies/:id/estimate: the bill', () => {
         unstocked: null,
         shortBy: 3,
         drawn: 0,
+        toDraw: 23,
       },
       expect.objectContaining({ lines: [1], estimated: 42, withWaste: 45, bin: expect.objectContaining({ code: stainless.code, onHand: 300 }), shortBy: 0 }),
     ]);
@@ -259,8 +260,8 @@ describe('GET /api/assemblies/:id/estimate: the bill', () => {
     expect(e.lines).toEqual([]);
     expect(e.kit).toEqual([]);
     expect(e.bill).toEqual([
-      { description: 'Screw #8-32 × 1/2 pan head', kind: 'screw', diameter32: null, grip: null, lines: [], estimated: 24, withWaste: 24, bin: { code: screws.code, designation: 'Screw #8-32 × 1/2 pan head', onHand: 10, location: 'Hardware drawer 2' }, unstocked: null, shortBy: 14, drawn: 0 },
-      { description: 'B-0999', kind: 'other', diameter32: null, grip: null, lines: [], estimated: 4, withWaste: 4, bin: null, unstocked: 'No bin has the code B-0999.', shortBy: 4, drawn: 0 },
+      { description: 'Screw #8-32 × 1/2 pan head', kind: 'screw', diameter32: null, grip: null, lines: [], estimated: 24, withWaste: 24, bin: { code: screws.code, designation: 'Screw #8-32 × 1/2 pan head', onHand: 10, location: 'Hardware drawer 2' }, unstocked: null, shortBy: 14, drawn: 0, toDraw: 24 },
+      { description: 'B-0999', kind: 'other', diameter32: null, grip: null, lines: [], estimated: 4, withWaste: 4, bin: null, unstocked: 'No bin has the code B-0999.', shortBy: 4, drawn: 0, toDraw: 4 },
     ]);
   });
 
@@ -275,6 +276,19 @@ describe('GET /api/assemblies/:id/estimate: the bill', () => {
 
     const e = await estimateOf(member, id);
     expect(billFor(e, 2)).toMatchObject({ bin: { code: bin.code, onHand: 500 - 10 + 3 - 40 }, drawn: 10 - 3 });
+  });
+
+  it('counts a line short only by what is still to draw: what was drawn for the assembly is no longer needed from the bin', async () => {
+    const screws = await addBinAs(qm, { kind: 'screw', name: 'Screw #6-32 × 3/8 pan head', unitCost: 0.2, initialQuantity: 30, location: 'Hardware drawer 3' });
+    const id = await newAssembly(member, { lines: [], extraItems: [{ binCode: screws.code, quantity: 40 }] });
+    expect((await estimateOf(member, id)).bill[0]).toMatchObject({ withWaste: 40, drawn: 0, shortBy: 10 });
+    await post(member, `/api/bins/${screws.code}/draw`, { quantity: 25, assemblyId: id });
+    // 25 drawn, 15 still to draw, 5 on hand: short by 10 (not 40 − 5 = 35).
+    expect((await estimateOf(member, id)).bill[0]).toMatchObject({ withWaste: 40, drawn: 25, toDraw: 15, shortBy: 10, bin: expect.objectContaining({ onHand: 5 }) });
+    await post(member, `/api/bins/${screws.code}/draw`, { quantity: 5, assemblyId: id });
+    await post(qm, `/api/bins/${screws.code}/receive`, { quantity: 20 });
+    // 30 drawn, 10 still to draw, 20 on hand: nothing short.
+    expect((await estimateOf(member, id)).bill[0]).toMatchObject({ drawn: 30, shortBy: 0 });
   });
 });
 

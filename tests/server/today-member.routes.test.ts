@@ -103,7 +103,7 @@ describe('GET /api/today/member', () => {
     await lend(t, other, bit30.code, 7 * DAY_MS);
     await lend(t, member, deburr.code, 7 * DAY_MS);
     const rivets = await addBinAs(qm, blindRivetBin({ diameter32: 5, grip16: 2, initialQuantity: 20 }));
-    // 5/32 blind rivets: 60 in, 0.5 in from each end, 1 in pitch → 60 holes; 5 % waste → 63 needed, 20 on hand.
+    // 5/32 blind rivets: 60 in, 0.5 in from each end, 1 in pitch → 60 holes; 5 % waste → 63 still to draw, 20 on hand.
     const line = { length: 60, pitch: 1, edgeDistance: 0.5, stack: [0.04, 0.04], structural: true, rivet: { kind: 'blind-structural', head: 'dome', diameter32: 5, material: '5056' } };
     const working = await addAssembly(member, { name: 'Skin lap', lines: [line] });
     await setAssemblyStatus(member, working, 'in_progress');
@@ -120,7 +120,7 @@ describe('GET /api/today/member', () => {
     expect(lackingCodes).not.toContain(deburr.code);
     expect(lap!.tools).toContainEqual({ need: 'Drill bit #30', tool: { code: bit30.code, name: 'Drill bit #30' }, words: 'all on loan' });
     expect(lap!.tools).toContainEqual({ need: 'Drill bit #20', tool: null, words: 'none in the crib' });
-    expect(lap!.bins).toEqual([{ description: expect.stringContaining('5/32 in'), binCode: rivets.code, words: 'short by 43: 20 on hand, 63 needed' }]);
+    expect(lap!.bins).toEqual([{ description: expect.stringContaining('5/32 in'), binCode: rivets.code, words: 'short by 43: 20 on hand, 63 still to draw' }]);
   });
 
   it('shows my tab balance from the tab’s own sum', async () => {

@@ -87,6 +87,15 @@ function drawnByBin(db: Executor, assemblyId: number): Map<number, number> {
 const binRef = (b: BinRow) => ({ code: b.code, designation: binDesignation(b), onHand: b.onHand, location: b.location });
 
 /**
+ * How many the bin lacks for what is still to draw: the need less what was already drawn for the
+ * assembly, against what is on hand. A line drawn in full lacks nothing, whatever the bin holds now.
+ */
+function stillToDraw(need: number, drawnSoFar: number, bin: BinRow | null | undefined) {
+  const toDraw = Math.max(0, need - drawnSoFar);
+  return { drawn: drawnSoFar, toDraw, shortBy: Math.max(0, toDraw - (bin?.onHand ?? 0)) };
+}
+
+/**
  * The bill: each fastener need with the bin that stocks it (or why none does), then the extra
  * items by bin code. `drawn` counts every bin of the need's spec, so a draw from a second bin of
  * the same rivet still counts against the assembly.
@@ -96,6 +105,7 @@ export function billLines(db: Executor, assemblyId: number, matches: NeedMatch[]
   const fasteners = matches.map(({ need, bins: found }): BillLine => {
     const bin = found[0] ?? null;
     const unstocked = bin ? null : unstockedMessage(need);
+    const drawnSoFar = found.reduce((sum, b) => sum + (drawn.get(b.id) ?? 0), 0);
     return {
       description: bin ? binRef(bin).designation : (fastenerDesignation(specOf(need)) ?? unstocked!),
       kind: BIN_KIND_FOR[need.kind],
@@ -106,14 +116,14 @@ export function billLines(db: Executor, assemblyId: number, matches: NeedMatch[]
       withWaste: need.withWaste,
       bin: bin && binRef(bin),
       unstocked,
-      shortBy: Math.max(0, need.withWaste - (bin?.onHand ?? 0)),
-      drawn: found.reduce((sum, b) => sum + (drawn.get(b.id) ?? 0), 0),
+      ...stillToDraw(need.withWaste, drawnSoFar, bin),
     };
   });
   const codes = [...new Set(extras.map((e) => e.binCode))];
   const byCode = new Map((codes.length ? db.select().from(bins).where(inArray(bins.code, codes)).all() : []).map((b) => [b.code, b]));
   const items = extras.map((e): BillLine => {
     const bin = byCode.get(e.binCode);
+    const drawnSoFar = bin ? (drawn.get(bin.id) ?? 0) : 0;
     return {
       description: bin ? binRef(bin).designation : e.binCode,
       kind: bin?.kind ?? 'other',
@@ -124,8 +134,7 @@ export function billLines(db: Executor, assemblyId: number, matches: NeedMatch[]
       withWaste: e.quantity,
       bin: bin ? binRef(bin) : null,
       unstocked: bin ? null : `No bin has the code ${e.binCode}.`,
-      shortBy: Math.max(0, e.quantity - (bin?.onHand ?? 0)),
-      drawn: bin ? (drawn.get(bin.id) ?? 0) : 0,
+      ...stillToDraw(e.quantity, drawnSoFar, bin),
     };
   });
   return [...fasteners, ...items];

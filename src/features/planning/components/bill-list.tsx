@@ -48,7 +48,7 @@ export function BillList({ bill, wastePercent }: { bill: BillLine[]; wastePercen
             </p>
           ) : item.shortBy > 0 ? (
             <p className="mt-2 rounded-md border-l-4 border-bad bg-bad-soft px-3 py-2 text-sm">
-              <strong>Short by {formatCount(item.shortBy)}:</strong> the bin has {formatCount(item.bin?.onHand ?? 0)} on hand, the assembly needs {formatCount(item.withWaste)}.
+              <strong>Short by {formatCount(item.shortBy)}:</strong> the bin has {formatCount(item.bin?.onHand ?? 0)} on hand, {item.drawn > 0 ? `${formatCount(item.toDraw)} are still to draw` : `the assembly needs ${formatCount(item.withWaste)}`}.
             </p>
           ) : (
             item.bin && <p className="mt-2 text-sm text-ok">Enough on hand.</p>

@@ -58,6 +58,6 @@ export function memberToday(ctx: ServiceContext, me: UserRow): MemberToday {
     queue: short(holds.filter((h) => h.status === 'waiting').map((h) => holdDto(h, now, zone))),
     assemblies: short(assemblies),
     tab: { balanceCents: readTab(ctx, assemblyNames, me, me.id).balanceCents },
-    attention: short(openAttentionReturns(ctx.db, { flaggedById: me.id }).map((r) => ({ ...r, returnedAt: r.returnedAt.toISOString() }))),
+    attention: short(openAttentionReturns(ctx.db, { flaggedById: me.id }).map((r) => ({ loanId: r.loanId, tool: r.tool, note: r.note, returnedAt: r.returnedAt.toISOString() }))),
   };
 }

@@ -10,7 +10,7 @@ import { reorderPlan } from '../features/planning/reorder-plan';
 import { COUNT_RULE, suggestBinsToCount } from '../features/stock/count-suggestions';
 import { recentWriteOffs } from '../features/stock/recent-write-offs';
 import { toolsMissingAccessories } from '../features/tools/missing-accessories';
-import { listReturnsNeedingAttention } from '../features/tools/returns-needing-attention';
+import { openAttentionReturns } from '../features/tools/attention-returns';
 import { listServiceDue } from '../features/tools/service-due.service';
 import { readChapterTimeZone } from '../settings/chapter-time-zone';
 
@@ -50,7 +50,7 @@ function tools(ctx: ServiceContext): Pick<QuartermasterToday, 'returnsNeedingAtt
   const service = listServiceDue(ctx).data;
   const due = service.filter((t) => t.daysUntilDue !== null && t.daysUntilDue <= SERVICE_DUE_WITHIN_DAYS);
   return {
-    returnsNeedingAttention: listReturnsNeedingAttention(ctx.db).map((r) => ({ ...r, returnedAt: r.returnedAt.toISOString() })),
+    returnsNeedingAttention: openAttentionReturns(ctx.db).map((r) => ({ ...r.tool, note: r.note ?? '', returnedBy: r.returnedBy, returnedAt: r.returnedAt.toISOString() })),
     missingAccessories: toolsMissingAccessories(ctx.db).map((t) => ({
       code: t.code,
       name: t.name,

@@ -2,6 +2,7 @@ import { eq, inArray } from 'drizzle-orm';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { alertListSchema, purchaseListSchema, type Alert } from '@shared/schemas/forecast';
 import { binAlerts } from '../../server/db/schema/builds';
+import { REFRESH_AFTER_MS, refreshIfStale } from '../../server/features/planning/alerts.service';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
 import { addAssembly, DAY_MS, drawFrom, hundredRivetLine, screwBin } from '../helpers/planning-fixture';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
@@ -43,6 +44,28 @@ const alertsIn = async (state: string) => alertListSchema.parse((await qm.agent.
 const activeRows = () => t.db.select().from(binAlerts).where(inArray(binAlerts.state, ['open', 'ordered'])).all();
 
 describe('reorder alerts', () => {
+  it('are a pure read: opening the list raises nothing, however long since the last check; the check raises them', async () => {
+    await binRunningLow();
+    const before = dataSnapshot(t.db);
+    for (const state of ['active', 'open', 'all']) expect((await qm.agent.get(`/api/alerts?state=${state}`)).status).toBe(200);
+    t.clock.now = new Date(t.clock.now.getTime() + REFRESH_AFTER_MS + 1);
+    expect(await alertsIn('open')).toEqual([]);
+    expect(dataSnapshot(t.db)).toEqual(before);
+    expect((await refresh()).raised).toBe(1);
+    expect(await alertsIn('open')).toHaveLength(1);
+  });
+
+  it('are checked by the 5-minute job once the last check is over 5 minutes old', async () => {
+    const ctx = { db: t.db, publicUrl: 'http://localhost', now: () => t.clock.now };
+    expect(refreshIfStale(ctx)).toBeDefined(); // the first check after a start always runs
+    await binRunningLow();
+    expect(refreshIfStale(ctx)).toBeUndefined();
+    expect(activeRows()).toEqual([]);
+    t.clock.now = new Date(t.clock.now.getTime() + REFRESH_AFTER_MS + 1);
+    expect(refreshIfStale(ctx)).toBeDefined();
+    expect(activeRows()).toHaveLength(1);
+  });
+
   it('goes open → ordered → closed by the next receipt, the order counting as an expected receipt meanwhile', async () => {
     const bin = await binRunningLow();
     const raised = await refresh();
@@ -210,16 +233,6 @@ describe('reorder alerts', () => {
     const row = activeRows()[0]!;
     expect(() => t.db.insert(binAlerts).values({ ...row, id: undefined, state: 'open' }).run()).toThrow(/UNIQUE/);
     expect(activeRows()).toHaveLength(1);
-  });
-
-  it('refreshes when a quartermaster opens the list and the last refresh is over 5 minutes old', async () => {
-    await binRunningLow();
-    expect(await alertsIn('active')).toHaveLength(1);
-    await binRunningLow({ diameter32: 5 }, { ...hundredRivetLine, rivet: { ...hundredRivetLine.rivet, diameter32: 5 } });
-    t.clock.now = new Date(t.clock.now.getTime() + 4 * 60_000);
-    expect(await alertsIn('active')).toHaveLength(1);
-    t.clock.now = new Date(t.clock.now.getTime() + 2 * 60_000);
-    expect(await alertsIn('active')).toHaveLength(2);
   });
 
   it('filters by state and refuses bad input in words', async () => {

@@ -6,7 +6,7 @@ import { sendCsv } from '../../lib/csv';
 import { parseInput } from '../../lib/validate';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
-import { closeAlert, dismissAlert, listAlertsIn, markOrdered, refreshAlerts, refreshIfStale } from './alerts.service';
+import { closeAlert, dismissAlert, listAlertsIn, markOrdered, refreshAlerts } from './alerts.service';
 import { purchaseList, purchaseListCsv } from './purchase-list';
 
 /**
@@ -19,8 +19,7 @@ export function alertsRouter() {
 
   router.get('/', (req, res) => {
     const { state } = parseInput(alertListQuerySchema, req.query, 'query');
-    const plan = refreshIfStale(req.ctx);
-    res.json({ data: listAlertsIn(req.ctx, state, plan) });
+    res.json({ data: listAlertsIn(req.ctx, state) });
   });
 
   router.post('/refresh', (req, res) => {

@@ -49,8 +49,8 @@ export const REFRESH_AFTER_MS = 5 * 60_000;
  * Raises an open alert for every bin the one reorder rule orders now (a recent dismissal keeps a
  * bin quiet, see reorder-plan.ts) that has no open or ordered alert yet. The partial unique index
  * keeps it to one active alert per bin even when two refreshes race. Runs in the daily job, on
- * POST /api/alerts/refresh, and when a quartermaster opens the alerts
- * and the last refresh is over 5 minutes old. Returns the plan it used.
+ * POST /api/alerts/refresh, and in the 5-minute check when the last refresh is over 5 minutes old
+ * (never on a GET: reading the alerts writes nothing). Returns the plan it used.
  */
 export function refreshAlerts(ctx: ServiceContext): { raised: number[]; plan: ReorderPlan } {
   const plan = reorderPlan(ctx);
@@ -82,7 +82,7 @@ function closeAlertsNoLongerNeeded(tx: Executor, plan: ReorderPlan, at: Date): v
   }
 }
 
-/** Refreshes when the last refresh is over 5 minutes old; returns the plan it used, if it ran. */
+/** The 5-minute check: refreshes when the last refresh is over 5 minutes old; returns the plan it used, if it ran. */
 export function refreshIfStale(ctx: ServiceContext): ReorderPlan | undefined {
   const last = lastRefresh.get(ctx.db);
   if (last === undefined || ctx.now().getTime() - last > REFRESH_AFTER_MS) return refreshAlerts(ctx).plan;

@@ -172,6 +172,8 @@ const PROJECTS: Project[] = [
   { who: DANA, note: 'Firewall recess', from: 100, to: 70, uses: [['b4s2', 25], ['b4m3', 10], ['screw8pan', 8], ['washer8', 10], ['sealant', 1]], returns: 'b4s2' },
   { who: DANA, note: 'Spar carry-through doubler', from: 66, to: 20, uses: [['b6d4', 20], ['b6d8', 8], ['b5d6', 15], ['b5d3', 25], ['drill30', 1], ['drill21', 1], ['drill11', 1]] },
   { who: RUTH, note: 'Open-day demonstration panel', from: 32, to: 26, uses: [['b4d2', 40], ['s470ad4_4', 60], ['b4d4', 20], ['drill40', 1]] },
+  // Work going on now: yesterday's practice session, so this month's spend shows what the bench is using.
+  { who: MARCO, note: 'Practice panel for the flap hinge', from: 1, to: 1, uses: [['b4d2', 60], ['b4d3', 30], ['drill40', 1]] },
 ];
 
 type Planned =

@@ -1,0 +1,11 @@
+import { launchChromium, signedInPhone } from './helpers/browser';
+import { DEMO_PASSWORD } from '../server/seed/demo-chapter';
+const url = 'http://localhost:3218';
+const out = '/work/tmp/walk18';
+const browser = await launchChromium();
+const [role, width, path, name] = process.argv.slice(2);
+const page = await signedInPhone(browser, url, `${role}@example.org`, DEMO_PASSWORD, { context: { viewport: { width: Number(width), height: Number(width) < 600 ? 780 : 900 } } });
+if (path !== '/') await page.goto(url + path);
+await page.waitForTimeout(1500);
+await page.screenshot({ path: `${out}/${name}.png`, fullPage: true });
+await browser.close();

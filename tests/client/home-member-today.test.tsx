@@ -38,6 +38,20 @@ describe("MemberToday, the member's part of home", () => {
     expect(screen.getByRole('link', { name: 'You owe $300.01 on your tab.' })).toBeTruthy();
   });
 
+  it('gives a card only to the parts with something in them; the empty parts share the tab card, one sentence each', async () => {
+    answer({ ...emptyDay, loans: { total: 1, items: [loan(2)] } });
+    renderWithProviders(<MemberToday />);
+    await screen.findByRole('heading', { name: 'Out with you' });
+    expect(screen.getAllByRole('heading').map((h) => h.textContent)).toEqual(['Out with you', 'My tab']);
+    const tabCard = screen.getByRole('heading', { name: 'My tab' }).closest('section')!;
+    expect([...tabCard.querySelectorAll('li')].map((li) => li.textContent)).toEqual([
+      'Nothing is set aside for you.',
+      'You are not in line for any tool.',
+      'No assembly of yours is in progress.',
+      'Nothing you returned for attention is still waiting.',
+    ]);
+  });
+
   it('links what an assembly lacks to the tool and the bin', async () => {
     answer({
       ...emptyDay,

@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import type { ReactNode } from 'react';
+import { Fragment, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import type { MemberToday as Today, MemberTodayAssembly, MemberTodayHold } from '@shared/schemas/today-member';
 import { memberTodayQueryOptions } from '@/features/today/api/get-member-today';
@@ -11,10 +11,16 @@ const ITEM_LINK = 'inline-flex min-h-11 items-center gap-2 font-semibold underli
 const ALL_LINK = 'mt-2 inline-flex min-h-11 items-center font-semibold underline underline-offset-4';
 
 /** A home section: a heading, a short list or one sentence when there is nothing, and a link to all of them. */
-function Section({ title, empty, total, shown, all, children }: { title: string; empty: string; total: number; shown: number; all?: { to: string; words: (n: string) => string }; children: ReactNode }) {
+const LOANS_EMPTY = 'You have nothing from the crib.';
+const SET_ASIDE_EMPTY = 'Nothing is set aside for you.';
+const QUEUE_EMPTY = 'You are not in line for any tool.';
+const ASSEMBLIES_EMPTY = 'No assembly of yours is in progress.';
+const ATTENTION_EMPTY = 'Nothing you returned for attention is still waiting.';
+
+function Section({ title, total, shown, all, children }: { title: string; total: number; shown: number; all?: { to: string; words: (n: string) => string }; children: ReactNode }) {
   return (
     <Card title={title}>
-      {total === 0 ? <p className="text-steel">{empty}</p> : <ul className="flex flex-col divide-y divide-rule">{children}</ul>}
+      <ul className="flex flex-col divide-y divide-rule">{children}</ul>
       {all && total > shown && (
         <Link to={all.to} className={ALL_LINK}>
           {all.words(formatCount(total))}
@@ -35,7 +41,7 @@ function ToolLink({ tool }: { tool: { code: string; name: string } }) {
 
 function Loans({ loans }: { loans: Today['loans'] }) {
   return (
-    <Section title="Out with you" empty="You have nothing from the crib." total={loans.total} shown={loans.items.length} all={{ to: '/loans', words: (n) => `All ${n} of your loans` }}>
+    <Section title="Out with you" total={loans.total} shown={loans.items.length} all={{ to: '/loans', words: (n) => `All ${n} of your loans` }}>
       {loans.items.map((l) => (
         <li key={l.loanId} className="py-2">
           <ToolLink tool={l.tool} />
@@ -49,9 +55,9 @@ function Loans({ loans }: { loans: Today['loans'] }) {
   );
 }
 
-function Holds({ title, empty, holds }: { title: string; empty: string; holds: Today['setAside'] }) {
+function Holds({ title, holds }: { title: string; holds: Today['setAside'] }) {
   return (
-    <Section title={title} empty={empty} total={holds.total} shown={holds.items.length}>
+    <Section title={title} total={holds.total} shown={holds.items.length}>
       {holds.items.map((h: MemberTodayHold) => (
         <li key={h.tool.code} className="py-2">
           <ToolLink tool={h.tool} />
@@ -94,7 +100,7 @@ function Lacks({ assembly }: { assembly: MemberTodayAssembly }) {
 
 function Assemblies({ assemblies }: { assemblies: Today['assemblies'] }) {
   return (
-    <Section title="Your assemblies in progress" empty="No assembly of yours is in progress." total={assemblies.total} shown={assemblies.items.length} all={{ to: '/builds', words: (n) => `All ${n} in My builds` }}>
+    <Section title="Your assemblies in progress" total={assemblies.total} shown={assemblies.items.length} all={{ to: '/builds', words: (n) => `All ${n} in My builds` }}>
       {assemblies.items.map((a) => (
         <li key={a.id} className="py-2">
           <Link to={`/assemblies/${a.id}`} className={ITEM_LINK}>
@@ -109,7 +115,7 @@ function Assemblies({ assemblies }: { assemblies: Today['assemblies'] }) {
 
 function Attention({ attention }: { attention: Today['attention'] }) {
   return (
-    <Section title="Returned for attention" empty="Nothing you returned for attention is still waiting." total={attention.total} shown={attention.items.length}>
+    <Section title="Returned for attention" total={attention.total} shown={attention.items.length}>
       {attention.items.map((r) => (
         <li key={r.loanId} className="py-2">
           <ToolLink tool={r.tool} />
@@ -153,15 +159,27 @@ export function MemberToday() {
       </Card>
     );
   }
+  // Sections with something in them get a card each; the empty ones share one card of sentences.
+  const parts: { key: string; total: number; empty: string; node: ReactNode }[] = [
+    { key: 'loans', total: t.loans.total, empty: LOANS_EMPTY, node: <Loans loans={t.loans} /> },
+    { key: 'set-aside', total: t.setAside.total, empty: SET_ASIDE_EMPTY, node: <Holds title="Set aside for you" holds={t.setAside} /> },
+    { key: 'queue', total: t.queue.total, empty: QUEUE_EMPTY, node: <Holds title="Your places in line" holds={t.queue} /> },
+    { key: 'assemblies', total: t.assemblies.total, empty: ASSEMBLIES_EMPTY, node: <Assemblies assemblies={t.assemblies} /> },
+    { key: 'attention', total: t.attention.total, empty: ATTENTION_EMPTY, node: <Attention attention={t.attention} /> },
+  ];
+  const quiet = parts.filter((p) => p.total === 0);
   return (
     <div className="mb-4 grid gap-4 lg:grid-cols-2">
-      <Loans loans={t.loans} />
-      <Holds title="Set aside for you" empty="Nothing is set aside for you." holds={t.setAside} />
-      <Holds title="Your places in line" empty="You are not in line for any tool." holds={t.queue} />
-      <Assemblies assemblies={t.assemblies} />
-      <Attention attention={t.attention} />
+      {parts.filter((p) => p.total > 0).map((p) => <Fragment key={p.key}>{p.node}</Fragment>)}
       <Card title="My tab">
         <TabLine balanceCents={t.tab.balanceCents} />
+        {quiet.length > 0 && (
+          <ul className="mt-3 flex flex-col gap-1 border-t border-rule pt-3 text-steel">
+            {quiet.map((p) => (
+              <li key={p.key}>{p.empty}</li>
+            ))}
+          </ul>
+        )}
       </Card>
     </div>
   );

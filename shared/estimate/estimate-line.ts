@@ -6,6 +6,7 @@ import {
   drillSequence,
   familyOf,
   MIN_PITCH_DIAMETERS,
+  MAX_EDGE_DIAMETERS,
   minEdgeDiameters,
   MM_PER_INCH,
   SOFT_RIVET_CAUTION,
@@ -111,6 +112,11 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
       warnings.push({
         code: 'EDGE_BELOW_MINIMUM',
         message: `Edge distance ${lengthWords(edge, unit)} is below the published minimum of ${minEdgeDiameters(head)}D = ${lengthWords(minEdge, unit)} for a ${diaWords(diameter32)} ${head === 'countersunk' ? 'countersunk ' : ''}rivet.`,
+      });
+    } else if (edge > MAX_EDGE_DIAMETERS * d + 1e-9) {
+      warnings.push({
+        code: 'EDGE_ABOVE_MAXIMUM',
+        message: `Edge distance ${lengthWords(edge, unit)} is above the usual maximum of about ${MAX_EDGE_DIAMETERS}D = ${lengthWords(MAX_EDGE_DIAMETERS * d, unit)} for a ${diaWords(diameter32)} rivet.`,
       });
     }
   } else {

@@ -63,6 +63,9 @@ function buildSequence(kind: EstimateRivetKind, diameter32: number, finalOverrid
  */
 export const minEdgeDiameters = (head: RivetHead) => (head === 'countersunk' ? 2.5 : 2);
 
+/** Edge distance above about 4D is more than the rule asks (FAA-H-8083-31 as restated, a secondary source): a warning, not a refusal. */
+export const MAX_EDGE_DIAMETERS = 4;
+
 /** Minimum pitch: 3D (AC 43.13-1B; TM 10-5410-229-13&P; NAVEDTRA 14018 ch. 13). */
 export const MIN_PITCH_DIAMETERS = 3;
 /** Maximum pitch: the sources disagree (8D NAVEDTRA 14018, 10D FAA-derived), so it is a chapter setting. */

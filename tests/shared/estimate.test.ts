@@ -49,6 +49,15 @@ describe('edge distance', () => {
     const r = ok(estimateLine(line({ edgeDistance: 0.2 }), { unit: 'in' }));
     expect(r.warnings.map((w) => w.code)).toEqual(['EDGE_BELOW_MINIMUM']);
   });
+  it('warns when a given edge distance is above about 4D (FAA-H-8083-31 as restated, a secondary source): 1/8 in → 0.5 in', () => {
+    expect(ok(estimateLine(line({ edgeDistance: 0.5 }), { unit: 'in' })).warnings).toEqual([]);
+    const r = ok(estimateLine(line({ edgeDistance: 0.55 }), { unit: 'in' }));
+    expect(r.warnings.map((w) => w.code)).toEqual(['EDGE_ABOVE_MAXIMUM']);
+    expect(r.warnings[0]!.message).toBe('Edge distance 0.55 in is above the usual maximum of about 4D = 0.5 in for a 1/8 in rivet.');
+    // 5/32 in rivet in millimetres: 4D = 15.875 mm.
+    const mm = ok(estimateLine(line({ length: 508, pitch: 25.4, stack: [0.8, 0.8], edgeDistance: 16, rivet: { ...blind18, diameter32: 5 } }), { unit: 'mm' }));
+    expect(mm.warnings.map((w) => w.code)).toEqual(['EDGE_ABOVE_MAXIMUM']);
+  });
 });
 
 describe('pitch limits (minimum 3D: AC 43.13-1B, NAVEDTRA 14018; maximum a setting, default 10D)', () => {

@@ -74,8 +74,9 @@ function needKey(rivet: RivetLineInput['rivet'], grip: number | null): string {
   return key;
 }
 
-function add(into: Record<string, number>, from: Record<string, number>): void {
-  for (const k in from) into[k] = (into[k] ?? 0) + from[k]!;
+/** Temporary fasteners come out of one line and go into the next (common practice): per size, the most any one line needs. */
+function atOnce(into: Record<string, number>, from: Record<string, number>): void {
+  for (const k in from) into[k] = Math.max(into[k] ?? 0, from[k]!);
 }
 
 /**
@@ -103,7 +104,7 @@ export function estimate(input: EstimateInput, options: EstimateOptions = {}): E
     const rivet = input.lines[i]!.rivet;
     totals.rivets += l.holes;
     for (const step of l.drillSequence) totals.drillHoles[step] = (totals.drillHoles[step] ?? 0) + l.holes;
-    add(totals.tempFasteners, l.tempFasteners);
+    atOnce(totals.tempFasteners, l.tempFasteners);
     const key = needKey(rivet, l.grip);
     const need = needs.get(key) ?? { kind: rivet.kind, head: rivet.head, material: rivet.material ?? null, diameter32: rivet.diameter32, grip: l.grip, rivets: 0, withWaste: 0, lines: [] };
     need.rivets += l.holes;

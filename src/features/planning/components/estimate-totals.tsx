@@ -10,7 +10,8 @@ export function EstimateTotalsView({ totals, wastePercent, children }: { totals:
     ['Rivets', formatCount(totals.rivets)],
     [`With ${wastePercent} % waste`, formatCount(totals.rivetsWithWaste)],
     ['Holes per drill', drillHolesText(totals.drillHoles)],
-    ['Temporary fasteners', tempFastenersText(totals.tempFasteners)],
+    // Reused from line to line: the most any one line needs at once, per size.
+    ['Temporary fasteners at once', tempFastenersText(totals.tempFasteners)],
   ];
   return (
     <div className="flex flex-col gap-3">

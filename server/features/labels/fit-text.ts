@@ -56,14 +56,15 @@ export function fitLabelText(
   const mustStayWhole = measurements !== '' || caution !== undefined;
   const sizes = mustStayWhole ? typeSizes(room.fontSize, room.minFontSize) : [room.fontSize];
   const linesAt = (size: number) => Math.max(1, Math.floor(room.height / (size * room.lineHeight) + 1e-9));
+  const fitterAt = (size: number) => (text: string, maxLines = Infinity) => fitLines(text, room.width, maxLines, (s) => measure(s, size));
   for (const size of sizes) {
-    const fit = (text: string, maxLines = Infinity) => fitLines(text, room.width, maxLines, (s) => measure(s, size));
+    const fit = fitterAt(size);
     if (!mustStayWhole) return { fontSize: size, lines: fit(title, room.maxLines ?? linesAt(size)) };
     const lines = [...fit(title), ...(caution ? fit(caution) : [])];
     if (lines.length <= linesAt(size)) return { fontSize: size, lines };
   }
   const size = sizes.at(-1)!;
-  const fit = (text: string, maxLines = Infinity) => fitLines(text, room.width, maxLines, (s) => measure(s, size));
+  const fit = fitterAt(size);
   const kept = [...(measurements ? fit(measurements) : []), ...(caution ? fit(caution) : [])];
   return { fontSize: size, lines: [...fit(name, Math.max(0, linesAt(size) - kept.length)), ...kept] };
 }

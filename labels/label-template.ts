@@ -8,12 +8,15 @@ import type { Box } from './sheet-geometry';
 export interface LabelTemplate {
   qr: Box;
   code: { x: number; y: number; width: number; fontSize: number };
-  title: { x: number; y: number; width: number; fontSize: number; maxLines: number };
+  /** `height` is the room below the code; the type may shrink to `minFontSize` to keep a measurement whole. */
+  title: { x: number; y: number; width: number; height: number; fontSize: number; minFontSize: number; maxLines: number };
 }
 
 /** Courier's advance width is 600/1000 em for every glyph (Adobe Core 14 font metrics, Courier AFM). */
 const MONO_ADVANCE_EM = 0.6;
-const TITLE_LINE_HEIGHT = 1.2;
+export const TITLE_LINE_HEIGHT = 1.2;
+/** The smallest title type, in points: still readable on a bin at arm's length. */
+const MIN_TITLE_SIZE = 6;
 
 export function arrangeLabel(box: Box, codeLength: number): LabelTemplate {
   const padding = box.height * 0.06;
@@ -22,7 +25,7 @@ export function arrangeLabel(box: Box, codeLength: number): LabelTemplate {
   const textX = qr.x + qrSize;
   const textWidth = box.x + box.width - padding - textX;
   const codeSize = Math.min(box.height * 0.3, textWidth / (Math.max(codeLength, 1) * MONO_ADVANCE_EM));
-  const titleSize = Math.min(11, Math.max(6, box.height * 0.12));
+  const titleSize = Math.min(11, Math.max(MIN_TITLE_SIZE, box.height * 0.12));
   // The code's top lines up with the QR's finder pattern rather than the label's edge.
   const codeY = qr.y + qrSize * 0.08;
   const titleY = codeY + codeSize + padding / 2;
@@ -31,6 +34,6 @@ export function arrangeLabel(box: Box, codeLength: number): LabelTemplate {
   return {
     qr,
     code: { x: textX, y: codeY, width: textWidth, fontSize: codeSize },
-    title: { x: textX, y: titleY, width: textWidth, fontSize: titleSize, maxLines },
+    title: { x: textX, y: titleY, width: textWidth, height: titleRoom, fontSize: titleSize, minFontSize: MIN_TITLE_SIZE, maxLines },
   };
 }

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { findSheetLayout } from '../../labels/layouts';
+import { findSheetLayout, SHEET_LAYOUTS } from '../../labels/layouts';
 import { pageSizeInPoints } from '../../labels/sheet-geometry';
-import { fitLines, toWinAnsi } from '../../server/features/labels/fit-text';
+import { fitLabelText, fitLines, toWinAnsi } from '../../server/features/labels/fit-text';
 import { renderLabelSheet } from '../../server/features/labels/label-sheet.renderer';
 import { darkRuns, QUIET_ZONE_MODULES, qrMatrix } from '../../server/features/labels/qr-matrix';
 import { pdfPageCount, pdfRects, pdfStreams, shownText } from '../helpers/pdf-read';
@@ -55,6 +55,20 @@ describe('renderLabelSheet', () => {
     expect(title.length).toBeLessThan(long.length);
   });
 
+  // The longest general-purpose blind rivet designation the bin form allows (aluminium body and stem, 5/32 in,
+  // grip -8: 0.376–0.500 in, TM 10-5410-221-14/1 Table 4-3), whose label says it is not for structure
+  // (AC 43.13-1B p. 4-24).
+  const longestBlind = 'Blind, general purpose, dome, aluminium, aluminium stem · 5/32 in · grip −8 (0.376–0.500 in)';
+
+  it.each(SHEET_LAYOUTS.map((l) => [l.id, l] as const))('draws a blind rivet grip range whole and the caution on the %s layout', async (_id, layout) => {
+    const pdf = await renderLabelSheet(layout, [{ code: 'B-0107', title: longestBlind, caution: 'Not for structure' }], { compress: false });
+    const text = pdfStreams(pdf).flatMap(shownText);
+    expect(text[0]).toBe('B-0107');
+    const drawn = text.slice(1).join(' ');
+    expect(drawn).toContain('5/32 in · grip -8 (0.376–0.500 in)');
+    expect(text.at(-1)).toBe('Not for structure');
+  });
+
   it('compresses its pages unless told not to', async () => {
     const letter = findSheetLayout('letter-3x10-2.625x1in')!;
     const items = [{ code: 'T-0042', title: 'Air drill' }];
@@ -77,6 +91,39 @@ describe('fitLines', () => {
 
   it('breaks a word longer than the line', () => {
     expect(fitLines('Supercalifragilistic', 8, 3, chars)).toEqual(['Supercal', 'ifragili', 'stic']);
+  });
+});
+
+describe('fitLabelText', () => {
+  const chars = (s: string, size: number) => s.length * size;
+  const room = { width: 20, height: 3, fontSize: 1, minFontSize: 0.5, lineHeight: 1 };
+
+  it('keeps the template size when the title and caution fit', () => {
+    expect(fitLabelText('Rivet · 1/8 in', 'Not for structure', room, chars)).toEqual({ fontSize: 1, lines: ['Rivet · 1/8 in', 'Not for structure'] });
+  });
+
+  it('shrinks the type rather than cut a measurement or the caution', () => {
+    const fitted = fitLabelText('Blind, general · 1/8 in · grip −1 (0.020–0.062 in)', 'Not for structure', room, chars);
+    expect(fitted.fontSize).toBeLessThan(1);
+    expect(fitted.fontSize).toBeGreaterThanOrEqual(0.5);
+    expect(fitted.lines.join(' ')).toBe('Blind, general · 1/8 in · grip −1 (0.020–0.062 in) Not for structure');
+    expect(fitted.lines.length).toBeLessThanOrEqual(Math.floor(room.height / fitted.fontSize));
+    for (const line of fitted.lines) expect(chars(line, fitted.fontSize)).toBeLessThanOrEqual(room.width);
+  });
+
+  it('at the smallest size shortens only the name, never the measurements after it or the caution', () => {
+    const tight = { ...room, minFontSize: 1 };
+    expect(fitLabelText('Blind, general purpose, dome, aluminium · 1/8 in', 'Not for structure', tight, chars)).toEqual({
+      fontSize: 1,
+      lines: ['Blind, general…', '1/8 in', 'Not for structure'],
+    });
+  });
+
+  it('shortens a plain name with an ellipsis at the template size, as before', () => {
+    expect(fitLabelText('one two three four five six seven eight', undefined, { ...room, width: 9, height: 2 }, chars)).toEqual({
+      fontSize: 1,
+      lines: ['one two', 'three…'],
+    });
   });
 });
 

@@ -203,6 +203,28 @@ describe('POST /api/labels/sheet with bin codes', () => {
     expect(text.slice(at(screw.code) + 1).join(' ')).toBe('Screw #8-32 × 1/2 pan head, stainless');
   });
 
+  it('prints a general-purpose blind rivet bin label with its whole grip range and "Not for structure" on every layout', async () => {
+    // Grip dash -1 covers 0.020–0.062 in (TM 10-5410-221-14/1 Table 4-3); general-purpose pull-type blind rivets
+    // are not approved for aircraft structure (AC 43.13-1B p. 4-24).
+    const bin = await addBinAs(qm, blindRivetBin({ kind: 'blind_general', material: 'aluminium', grip16: 1 }));
+    for (const layoutId of ['letter-3x10-2.625x1in', 'a4-3x8-70x37mm', 'thermal-1x1-2x1in']) {
+      const res = await postSheet(qm, { layoutId, codes: [bin.code] });
+      expect(res.status).toBe(200);
+      const text = textOf(res.body as Buffer);
+      expect(text[0]).toBe(bin.code);
+      expect(text.slice(1, -1).join(' ')).toBe('Blind, general purpose, dome, aluminium, steel stem · 1/8 in · grip -1 (0.020–0.062 in)');
+      expect(text.at(-1)).toBe('Not for structure');
+    }
+  });
+
+  it('puts no structure caution on a structural blind rivet or a solid rivet bin', async () => {
+    const blind = await addBinAs(qm, blindRivetBin());
+    const solid = await addBinAs(qm, solidRivetBin);
+    const res = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: [blind.code, solid.code] });
+    expect(res.status).toBe(200);
+    expect(textOf(res.body as Buffer).join(' ')).not.toContain('structure');
+  });
+
   it('prints tool and bin labels together, in the order given, each QR reading back as its code', async () => {
     addTools(2, (n) => ['Rivet gun', 'Air drill'][n - 1]!);
     const bin = await addBinAs(qm, solidRivetBin);

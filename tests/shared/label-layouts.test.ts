@@ -41,6 +41,8 @@ describe.each(SHEET_LAYOUTS.map((layout) => [layout.id, layout] as const))('shee
       expect(t.code.x + 'T-000042'.length * 0.6 * t.code.fontSize).toBeLessThanOrEqual(box.x + box.width + EPSILON);
       expect(t.code.x).toBeGreaterThanOrEqual(t.qr.x + t.qr.width - EPSILON);
       expect(t.title.y + t.title.maxLines * t.title.fontSize * 1.2).toBeLessThanOrEqual(box.y + box.height + EPSILON);
+      expect(t.title.y + t.title.height).toBeLessThanOrEqual(box.y + box.height + EPSILON);
+      expect(t.title.minFontSize).toBeLessThanOrEqual(t.title.fontSize);
     }
   });
 

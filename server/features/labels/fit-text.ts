@@ -21,6 +21,62 @@ export function fitLines(text: string, maxWidth: number, maxLines: number, measu
   return lines;
 }
 
+/** The room a label's text has, in points: its width and height, the template's type size and the smallest allowed. */
+export interface TextRoom {
+  width: number;
+  height: number;
+  fontSize: number;
+  minFontSize: number;
+  /** Line advance as a multiple of the type size. */
+  lineHeight: number;
+  /** Lines a title with nothing to keep whole may take at the template's size (all the height allows when absent). */
+  maxLines?: number;
+}
+
+const FIELD_SEPARATOR = ' · ';
+const SIZE_STEP = 0.5;
+
+/**
+ * A label's title and caution, wrapped into its room. A title's first field (up to the first " · ") is
+ * a name that may be shortened with an ellipsis; the fields after it are measurements (a diameter,
+ * a grip and its range) that, like the caution, are never cut: the type shrinks by half points, down
+ * to `minFontSize`, until everything fits whole. A title with nothing to keep whole stays at the
+ * template's size and is shortened as `fitLines` does. Only when even the smallest size is too small is
+ * the name shortened, above its measurements and the caution.
+ * `measure` gives a string's width at a type size.
+ */
+export function fitLabelText(
+  title: string,
+  caution: string | undefined,
+  room: TextRoom,
+  measure: (s: string, fontSize: number) => number,
+): { fontSize: number; lines: string[] } {
+  const [name = '', ...fields] = title.split(FIELD_SEPARATOR);
+  const measurements = fields.join(FIELD_SEPARATOR);
+  const mustStayWhole = measurements !== '' || caution !== undefined;
+  const sizes = mustStayWhole ? typeSizes(room.fontSize, room.minFontSize) : [room.fontSize];
+  const linesAt = (size: number) => Math.max(1, Math.floor(room.height / (size * room.lineHeight) + 1e-9));
+  const fitterAt = (size: number) => (text: string, maxLines = Infinity) => fitLines(text, room.width, maxLines, (s) => measure(s, size));
+  for (const size of sizes) {
+    const fit = fitterAt(size);
+    if (!mustStayWhole) return { fontSize: size, lines: fit(title, room.maxLines ?? linesAt(size)) };
+    const lines = [...fit(title), ...(caution ? fit(caution) : [])];
+    if (lines.length <= linesAt(size)) return { fontSize: size, lines };
+  }
+  const size = sizes.at(-1)!;
+  const fit = fitterAt(size);
+  const kept = [...(measurements ? fit(measurements) : []), ...(caution ? fit(caution) : [])];
+  return { fontSize: size, lines: [...fit(name, Math.max(0, linesAt(size) - kept.length)), ...kept] };
+}
+
+/** From the template's size down to the smallest, by half points; the smallest always included. */
+function typeSizes(fontSize: number, minFontSize: number): number[] {
+  const sizes: number[] = [];
+  for (let size = fontSize; size > minFontSize; size -= SIZE_STEP) sizes.push(size);
+  sizes.push(Math.min(fontSize, minFontSize));
+  return sizes;
+}
+
 const ELLIPSIS = '…';
 
 function withEllipsis(line: string, maxWidth: number, measure: (s: string) => number): string {

@@ -1,15 +1,19 @@
 import PDFDocument from 'pdfkit';
 import { slicePauser } from '../../lib/event-loop';
-import { arrangeLabel } from '../../../labels/label-template';
+import { arrangeLabel, TITLE_LINE_HEIGHT } from '../../../labels/label-template';
 import type { SheetLayout } from '../../../labels/layouts';
 import { pageSizeInPoints, placeLabels, type Box } from '../../../labels/sheet-geometry';
-import { fitLines, toWinAnsi } from './fit-text';
+import { fitLabelText, toWinAnsi } from './fit-text';
 import { darkRuns, qrMatrix } from './qr-matrix';
 
-/** One label: the code the QR carries and prints large, and a title (a tool's or a bin's name). */
+/**
+ * One label: the code the QR carries and prints large, a title (a tool's or a bin's name) and, for
+ * some bins, a short caution printed whole below it.
+ */
 export interface LabelItem {
   code: string;
   title: string;
+  caution?: string;
 }
 
 export interface RenderOptions {
@@ -67,10 +71,13 @@ function drawLabel(doc: PDFKit.PDFDocument, box: Box, item: LabelItem): void {
   doc.fillColor('black').font(CODE_FONT).fontSize(t.code.fontSize);
   doc.text(item.code, t.code.x, t.code.y, { lineBreak: false });
 
-  doc.font(TITLE_FONT).fontSize(t.title.fontSize);
-  const lines = fitLines(toWinAnsi(item.title), t.title.width, t.title.maxLines, (s) => doc.widthOfString(s));
+  doc.font(TITLE_FONT);
+  const caution = item.caution === undefined ? undefined : toWinAnsi(item.caution);
+  const room = { ...t.title, lineHeight: TITLE_LINE_HEIGHT };
+  const { fontSize, lines } = fitLabelText(toWinAnsi(item.title), caution, room, (s, size) => doc.fontSize(size).widthOfString(s));
+  doc.fontSize(fontSize);
   lines.forEach((line, i) => {
-    doc.text(line, t.title.x, t.title.y + i * t.title.fontSize * 1.2, { lineBreak: false });
+    doc.text(line, t.title.x, t.title.y + i * fontSize * TITLE_LINE_HEIGHT, { lineBreak: false });
   });
 }
 

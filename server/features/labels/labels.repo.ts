@@ -1,5 +1,6 @@
 import { inArray } from 'drizzle-orm';
 import { binDesignation } from '@shared/stock/fasteners';
+import { binLabelCaution } from '@shared/stock/rivet-cautions';
 import type { Executor } from '../../db/client';
 import { bins } from '../../db/schema/stock';
 import { tools } from '../../db/schema/tools';
@@ -12,11 +13,18 @@ export function findToolNames(db: Executor, codes: readonly string[]): Map<strin
   return new Map(rows.map((r) => [r.code, r.name]));
 }
 
+/** What a label prints under its code: a title and, for some bins, a short caution. */
+export interface LabelText {
+  title: string;
+  caution?: string;
+}
+
 /**
- * Code and label title of the bins with these codes: a rivet's designation (the open-standard
- * number or our readable form), otherwise the bin's name. Codes that match no bin are absent.
+ * Code and label text of the bins with these codes: a rivet's designation (the open-standard
+ * number or our readable form), otherwise the bin's name, and the caution its kind carries
+ * ("Not for structure" on general-purpose blind rivets). Codes that match no bin are absent.
  */
-export function findBinTitles(db: Executor, codes: readonly string[]): Map<string, string> {
+export function findBinLabels(db: Executor, codes: readonly string[]): Map<string, LabelText> {
   const unique = [...new Set(codes)];
   if (unique.length === 0) return new Map();
   const rows = db
@@ -34,5 +42,10 @@ export function findBinTitles(db: Executor, codes: readonly string[]): Map<strin
     .from(bins)
     .where(inArray(bins.code, unique))
     .all();
-  return new Map(rows.map((r) => [r.code, binDesignation(r)]));
+  return new Map(
+    rows.map((r) => {
+      const caution = binLabelCaution(r.kind);
+      return [r.code, caution ? { title: binDesignation(r), caution } : { title: binDesignation(r) }];
+    }),
+  );
 }

@@ -5,7 +5,7 @@ import { findSheetLayout, labelsPerPage, SHEET_LAYOUTS, type SheetLayout } from 
 import type { ServiceContext } from '../../context';
 import { HttpError } from '../../lib/http-error';
 import { renderLabelSheet, type LabelItem } from './label-sheet.renderer';
-import { findBinTitles, findToolNames } from './labels.repo';
+import { findBinLabels, findToolNames, type LabelText } from './labels.repo';
 
 export function listLayouts(): readonly SheetLayout[] {
   return SHEET_LAYOUTS;
@@ -19,7 +19,8 @@ export interface LabelSheetFile {
 /** A PDF of tool and bin labels, one per code in the order given (a code may repeat for a second label). */
 export async function buildLabelSheet(ctx: ServiceContext, input: LabelSheetInput): Promise<LabelSheetFile> {
   const layout = layoutFor(input.layoutId, input.skip);
-  const titles = new Map([...findToolNames(ctx.db, input.codes.filter(isToolCode)), ...findBinTitles(ctx.db, input.codes.filter(isBinCode))]);
+  const toolLabels = [...findToolNames(ctx.db, input.codes.filter(isToolCode))].map(([code, name]): [string, LabelText] => [code, { title: name }]);
+  const titles = new Map([...toolLabels, ...findBinLabels(ctx.db, input.codes.filter(isBinCode))]);
   const unknown = [...new Set(input.codes.filter((code) => !titles.has(code)))];
   if (unknown.length > 0) {
     throw new HttpError(
@@ -29,7 +30,7 @@ export async function buildLabelSheet(ctx: ServiceContext, input: LabelSheetInpu
       input.codes.flatMap((code, i) => (titles.has(code) ? [] : [{ path: `codes.${i}`, message: `${noOneHas([code])} the code ${code}.` }])),
     );
   }
-  const items: LabelItem[] = input.codes.map((code) => ({ code, title: titles.get(code)! }));
+  const items: LabelItem[] = input.codes.map((code) => ({ code, ...titles.get(code)! }));
   const pdf = await renderLabelSheet(layout, items, { skip: input.skip, createdAt: ctx.now() });
   return { filename: `gripline-labels-${layout.id}.pdf`, pdf };
 }

@@ -1,5 +1,6 @@
 import type { BinFields, BinReorder } from '@shared/schemas/bins';
-import { BIN_KIND_LABELS, isRivetKind } from '@shared/stock/kinds';
+import { BIN_KIND_LABELS } from '@shared/stock/kinds';
+import { rivetBinCaution } from '@shared/stock/rivet-cautions';
 import { unitWord } from '@shared/stock/quantity-words';
 import { Notice } from '@/components/ui/notice';
 import { Code, PageHeading } from '@/components/ui/page';
@@ -49,6 +50,7 @@ export function BinSummary({ bin, reorder, isQuartermaster }: { bin: BinFields; 
 
 /** Where the bin lives, its spec details, cost and (for the quartermaster) its supplier, with the usual caution for rivets. */
 export function BinDetails({ bin, reorder, isQuartermaster }: { bin: BinFields; reorder?: BinReorder; isQuartermaster: boolean }) {
+  const rivetCaution = rivetBinCaution(bin.kind);
   return (
     <section aria-label={`About ${bin.code}`} className="flex flex-col gap-3">
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1.5">
@@ -103,11 +105,9 @@ export function BinDetails({ bin, reorder, isQuartermaster }: { bin: BinFields; 
         )}
       </dl>
       {bin.notes && <p className="whitespace-pre-line">{bin.notes}</p>}
-      {isRivetKind(bin.kind) && (
+      {rivetCaution && (
         <Notice tone="warn" title="Right rivet, right place">
-          {bin.kind === 'blind_general' ? 'General-purpose blind rivets are not for structural joints. ' : ''}
-          Use the rivet the kit’s plans call for (material, head, diameter and grip) and check the grip against the sheet stack. The plans,
-          the rivet maker’s instructions and, for certificated aircraft, approved data and a licensed mechanic govern.
+          {rivetCaution}
         </Notice>
       )}
     </section>

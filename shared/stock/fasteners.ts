@@ -1,4 +1,4 @@
-import { isBlindKind, RIVET_HEAD_LABELS, type BinKind, type RivetHead } from './kinds';
+import { isBlindKind, rivetHeadLabel, type BinKind, type RivetHead } from './kinds';
 
 /**
  * Blind rivet grip dashes and the sheet stack each covers (inches): the diameter-in-32nds,
@@ -49,16 +49,17 @@ export function inchFraction(numerator: number, denominator: number): string {
 
 const inches = (x: number) => x.toFixed(3);
 
-/** Material letters of the open-standard solid rivet numbers. */
+/**
+ * Material letters of the open-standard solid rivet numbers. MS20470 and MS20426 designate
+ * aluminium-alloy rivets only: any other material (monel, copper, stainless, steel) gets our plain
+ * description and no number.
+ */
 export const SOLID_MATERIAL_CODES: Readonly<Record<string, string>> = {
   '1100': 'A',
   '2117-T4': 'AD',
   '2017-T4': 'D',
   '2024-T4': 'DD',
   '5056': 'B',
-  monel: 'M',
-  copper: 'C',
-  stainless: 'F',
 };
 
 const SOLID_HEAD_NUMBERS: Partial<Record<RivetHead, string>> = { dome: 'MS20470', countersunk: 'MS20426' };
@@ -93,7 +94,7 @@ export function fastenerDesignation(spec: FastenerSpec): string | undefined {
   const number = solidRivetNumber(spec);
   if (number) return number;
   const dia = `${inchFraction(spec.diameter32, 32)} in`;
-  const head = RIVET_HEAD_LABELS[spec.head];
+  const head = rivetHeadLabel(spec.head, spec.kind === 'solid_rivet');
   if (isBlindKind(spec.kind)) {
     const kind = spec.kind === 'blind_structural' ? 'structural' : 'general purpose';
     const material = [spec.material, spec.stemMaterial ? `${spec.stemMaterial} stem` : null].filter(Boolean).join(', ');

@@ -31,7 +31,7 @@ export type RivetKind = (typeof RIVET_KINDS)[number];
 export const isRivetKind = (kind: BinKind): kind is RivetKind => (RIVET_KINDS as readonly string[]).includes(kind);
 export const isBlindKind = (kind: BinKind) => kind === 'blind_structural' || kind === 'blind_general';
 
-/** Head styles: dome (universal on solid rivets), 100° countersunk, large flange. */
+/** Head styles: dome (the universal head on a solid rivet), 100° countersunk, large flange. */
 export const RIVET_HEADS = ['dome', 'countersunk', 'flange'] as const;
 export type RivetHead = (typeof RIVET_HEADS)[number];
 export const RIVET_HEAD_LABELS: Record<RivetHead, string> = {
@@ -39,6 +39,23 @@ export const RIVET_HEAD_LABELS: Record<RivetHead, string> = {
   countersunk: '100° countersunk',
   flange: 'large flange',
 };
+
+/** Head words for a solid rivet: its protruding head (MS20470) is the universal head; blind rivets keep dome. */
+const SOLID_RIVET_HEAD_LABELS: Record<RivetHead, string> = { ...RIVET_HEAD_LABELS, dome: 'universal head' };
+
+/** How a head is named on screen: `solid` for solid rivets, which the trade calls by other words. */
+export const rivetHeadLabel = (head: RivetHead, solid: boolean): string => (solid ? SOLID_RIVET_HEAD_LABELS : RIVET_HEAD_LABELS)[head];
+
+const firstUpper = (text: string): string => text.replace(/^./, (c) => c.toUpperCase());
+
+/** A form's head choices, worded for the rivet: "Universal head" on a solid rivet, "Dome" on a blind one; the stored value is the same. */
+export const rivetHeadChoices = (solid: boolean): { value: RivetHead; label: string }[] => RIVET_HEADS.map((h) => ({ value: h, label: firstUpper(rivetHeadLabel(h, solid)) }));
+
+/** The rivet gun set for a solid rivet's head, in the words the crib kit and the assembly editor share. */
+export const RIVET_SET_WORDS: Record<RivetHead, string> = { dome: 'universal-head rivet set', flange: 'universal-head rivet set', countersunk: 'flush rivet set' };
+
+/** The rivet gun set for a solid rivet's head as a sentence starts it: "Universal-head rivet set". */
+export const rivetSetSentence = (head: RivetHead): string => firstUpper(RIVET_SET_WORDS[head]);
 
 /** Body materials and grades as the trade names them. */
 export const RIVET_MATERIALS = ['5056', '2117-T4', '2024-T4', '2017-T4', '1100', 'aluminium', 'monel', 'stainless', 'steel', 'copper'] as const;

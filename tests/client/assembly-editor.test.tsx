@@ -162,6 +162,10 @@ describe('the assembly editor', () => {
     await userEvent.click(line(2).getByRole('button', { name: 'Add a 0.025 in sheet' }));
     await userEvent.click(line(2).getByRole('button', { name: 'Add a 0.025 in sheet' }));
     await userEvent.selectOptions(line(2).getByLabelText('Rivet kind'), 'Solid rivet');
+    // A solid rivet's protruding head is the universal head (MS20470); a blind rivet's stays dome (trade-checks.md §4).
+    const headShown = (n: number) => line(n).getByLabelText<HTMLSelectElement>('Head').selectedOptions[0]!.textContent;
+    expect(headShown(2)).toBe('Universal head');
+    expect(headShown(1)).toBe('Dome');
 
     // Line 1 has no edge distance: the larger of 2D = 0.3125 in and the build's 0.5 in floor; (20 − 1) / 1 → 20 holes at 1 in (arithmetic).
     await waitFor(() => expect(fact(lineEstimate(1), 'Holes')).toBe('20'));
@@ -180,7 +184,8 @@ describe('the assembly editor', () => {
     // #40 on every hole of both lines, #30 on both, #20 on line 1 only.
     expect(fact(whole, 'Holes per drill')).toBe('#40: 42, #30: 42, #20: 20');
     expect(within(whole).getByText(/Rivet puller with a 5\/32 in nosepiece/)).toBeTruthy();
-    expect(within(whole).getByText(/Rivet gun with a 1\/8 in dome rivet set/)).toBeTruthy();
+    // One vocabulary with the crib kit: an MS20470 head is set with a universal-head rivet set (trade-checks.md §4).
+    expect(within(whole).getByText(/Rivet gun with a 1\/8 in universal-head rivet set/)).toBeTruthy();
 
     await userEvent.click(save());
     await waitFor(() => expect(posts(calls)).toHaveLength(1));

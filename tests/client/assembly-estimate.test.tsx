@@ -34,7 +34,7 @@ const ESTIMATE: AssemblyEstimate = estimateFixture(7, {
       toDraw: 13,
     },
     {
-      description: 'Solid, dome, 2117-T4 · 1/8 in · 1/4 in long',
+      description: 'MS20470AD4-4',
       kind: 'solid_rivet',
       diameter32: 4,
       grip: 4,
@@ -42,7 +42,7 @@ const ESTIMATE: AssemblyEstimate = estimateFixture(7, {
       estimated: 22,
       withWaste: 24,
       bin: null,
-      unstocked: 'No bin stocks a 1/8 in dome 2117-T4 solid rivet, length −4.',
+      unstocked: 'No bin stocks a 1/8 in universal head 2117-T4 solid rivet 1/4 in long (−4).',
       shortBy: 24,
       drawn: 0,
       toDraw: 24,
@@ -114,7 +114,7 @@ describe('the assembly estimate page', () => {
     expect(rivets.getByText(/Short by 3/).parentElement!.textContent).toBe('Short by 3: the bin has 10 on hand, 13 are still to draw.');
 
     const solid = billItem(ESTIMATE.bill[1]!.description);
-    expect(solid.getByText(/Not stocked/).parentElement!.textContent).toBe('Not stocked: No bin stocks a 1/8 in dome 2117-T4 solid rivet, length −4.');
+    expect(solid.getByText(/Not stocked/).parentElement!.textContent).toBe('Not stocked: No bin stocks a 1/8 in universal head 2117-T4 solid rivet 1/4 in long (−4).');
     expect(solid.queryByRole('link')).toBeNull();
 
     const screws = billItem('Screw #8-32 × 1/2 pan head');

@@ -31,6 +31,7 @@ describe('BinForm', () => {
       '−8 (0.376–0.500 in)',
     ]);
     expect(screen.queryByLabelText('Length')).toBeNull();
+    expect(optionTexts('Head')).toEqual(['Choose the head', 'Dome', '100° countersunk', 'Large flange']);
     await userEvent.selectOptions(screen.getByLabelText('Head'), 'dome');
     await userEvent.selectOptions(screen.getByLabelText('Body material'), '5056');
     await userEvent.selectOptions(screen.getByLabelText('Stem'), 'steel');
@@ -48,6 +49,8 @@ describe('BinForm', () => {
     expect(screen.queryByLabelText('Stem')).toBeNull();
     expect(optionTexts('Length')).toContain('−6 (3/8 in)');
     expect(optionTexts('Length')).toContain('−3.5 (7/32 in)');
+    // An MS20470 head is the universal head; dome is the blind rivet's word (trade-checks.md §4).
+    expect(optionTexts('Head')).toEqual(['Choose the head', 'Universal head', '100° countersunk', 'Large flange']);
     await userEvent.selectOptions(screen.getByLabelText('Head'), 'dome');
     await userEvent.selectOptions(screen.getByLabelText('Body material'), '2117-T4');
     await userEvent.selectOptions(screen.getByLabelText('Diameter'), '4');
@@ -57,6 +60,10 @@ describe('BinForm', () => {
     // MS20426 is the 100° countersunk head (same sources).
     await userEvent.selectOptions(screen.getByLabelText('Head'), 'countersunk');
     expect(preview()).toBe('MS20426AD4-6');
+    // Monel is not among the standards' aluminium-alloy material codes (A, AD, D, DD, B): a plain description, no MS number.
+    await userEvent.selectOptions(screen.getByLabelText('Body material'), 'monel');
+    expect(preview()).toBe('Solid, 100° countersunk, monel · 1/8 in · 3/8 in long');
+    await userEvent.selectOptions(screen.getByLabelText('Body material'), '2117-T4');
 
     await userEvent.clear(screen.getByLabelText('Unit cost ($)'));
     await userEvent.type(screen.getByLabelText('Unit cost ($)'), '0.0825');

@@ -82,15 +82,17 @@ describe('POST /api/bins/import/preview', () => {
   });
 
   it('reads kinds by label in any case, diameters as fractions, dashes with the trade’s leading dash, and a text/csv body', async () => {
-    const csv = csvOf(',BLIND RIVET - STRUCTURAL,,Dome,5056,Steel,-5,-3,,each,100,$0.14,,0', ',blind rivet – general purpose,,large flange,aluminum,aluminium,3/32 in,1,,each,100,0.05,,0');
+    const csv = csvOf(',BLIND RIVET - STRUCTURAL,,Dome,5056,Steel,-5,-3,,each,100,$0.14,,0', ',blind rivet – general purpose,,large flange,aluminum,aluminium,3/32 in,1,,each,100,0.05,,0', ',Solid rivet,,Universal head,2117-T4,,4,,6,each,100,0.03,,0');
     const res = await qm.agent.post('/api/bins/import/preview').set('X-CSRF-Token', qm.csrf).type('text/csv').send(csv);
     expect(res.status).toBe(200);
     const preview = importPreviewSchema.parse(res.body);
-    expect(preview.rows.map((r) => r.errors)).toEqual([[], []]);
+    expect(preview.rows.map((r) => r.errors)).toEqual([[], [], []]);
     // Grip -3 covers 0.126–0.187 in, -1 covers 0.020–0.062 in: TM 10-5410-221-14/1 Table 4-3.
     expect(preview.rows.map((r) => r.designation)).toEqual([
       'Blind, structural, dome, 5056, steel stem · 5/32 in · grip −3 (0.126–0.187 in)',
       'Blind, general purpose, large flange, aluminium, aluminium stem · 3/32 in · grip −1 (0.020–0.062 in)',
+      // The head as the bin form words it for a solid rivet; MS20470AD4-6 (AC 43.13-1B para 4-57a).
+      'MS20470AD4-6',
     ]);
   });
 
@@ -220,6 +222,14 @@ describe('GET /api/bins/export.csv', () => {
     } finally {
       await fresh.close();
     }
+  });
+
+  it('gives a monel solid rivet bin a plain description and no MS number, on its page and in the file', async () => {
+    // MS20470 and MS20426 designate aluminium-alloy rivets only: material codes A, AD, D, DD, B (trade-checks.md §4).
+    const bin = await addBinAs(qm, { kind: 'solid_rivet', head: 'dome', material: 'monel', diameter32: 4, length16: 6, unitCost: 0.09, initialQuantity: 100 });
+    const plain = 'Solid, universal head, monel · 1/8 in · 3/8 in long';
+    expect((await qm.agent.get(`/api/bins/${bin.code}`)).body).toMatchObject({ designation: plain });
+    expect(records((await qm.agent.get('/api/bins/export.csv')).text)[0]).toMatchObject({ code: bin.code, designation: plain });
   });
 
   it('is for the quartermaster and the lead only, as are the import and its template', async () => {

@@ -233,6 +233,17 @@ describe('GET /api/assemblies/:id/estimate: the bill', () => {
     });
   });
 
+  it('names an unstocked monel solid rivet plainly, with the universal head and no MS number', async () => {
+    // MS20470 and MS20426 designate aluminium-alloy rivets only (trade-checks.md §4). Length: 0.064 + 1.5 × 1/8 = 0.2515 in
+    // → next 1/16 up is 5/16 in, −5 (NAVEDTRA 14018 ch. 13).
+    const id = await newAssembly(member, { lines: [twentyInchLine({ kind: 'solid', head: 'dome', diameter32: 4, material: 'monel' })] });
+    expect(billFor(await estimateOf(member, id), 5)).toMatchObject({
+      description: 'Solid, universal head, monel · 1/8 in · 5/16 in long',
+      bin: null,
+      unstocked: 'No bin stocks a 1/8 in universal head monel solid rivet 5/16 in long (−5).',
+    });
+  });
+
   it('drills to the hole drill the matching bin names, instead of the published one', async () => {
     const line = twentyInchLine(blind(5, '5056'));
     const before = await estimateOf(member, await newAssembly(member, { lines: [line] }));

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { blindGripForStack, blindGripRange, fastenerDesignation, inchFraction, solidLengthDash, solidRivetNumber, type FastenerSpec } from '@shared/stock/fasteners';
+import { RIVET_SET_WORDS, rivetHeadLabel } from '@shared/stock/kinds';
 
 const rivet = (over: Partial<FastenerSpec>): FastenerSpec => ({
   kind: 'solid_rivet',
@@ -33,6 +34,14 @@ describe('solid rivet numbers (AC 43.13-1B para 4-57a; NAVEDTRA 14315 Table 3-1)
     ['5056', 'B'],
   ])('material %s has the letter %s (NAVEDTRA 14315 Table 3-1)', (material, letter) => {
     expect(solidRivetNumber(rivet({ material, diameter32: 5, length16: 8 }))).toBe(`MS20470${letter}5-8`);
+  });
+
+  // The two standards designate aluminium-alloy rivets only (trade-checks.md §4: material codes A, AD, D, DD, B).
+  it.each(['monel', 'stainless', 'copper', 'steel', 'aluminium'])('prints no MS number for a %s solid rivet, only a plain description', (material) => {
+    expect(solidRivetNumber(rivet({ material }))).toBeUndefined();
+    expect(solidRivetNumber(rivet({ material, head: 'countersunk' }))).toBeUndefined();
+    expect(fastenerDesignation(rivet({ material }))).toBe(`Solid, universal head, ${material} · 1/8 in · 3/8 in long`);
+    expect(fastenerDesignation(rivet({ material, head: 'countersunk', diameter32: 3, length16: 4 }))).toBe(`Solid, 100° countersunk, ${material} · 3/32 in · 1/4 in long`);
   });
 
   it('falls back to our readable form where no standard number exists (large flange solid rivet)', () => {
@@ -78,5 +87,18 @@ describe('blind rivet grip dashes (TM 10-5410-221-14/1 Table 4-3)', () => {
     expect(fastenerDesignation({ ...spec, kind: 'blind_general', head: 'countersunk', diameter32: 5, grip16: 3, stemMaterial: 'aluminium' })).toBe(
       'Blind, general purpose, 100° countersunk, 5056, aluminium stem · 5/32 in · grip −3 (0.126–0.187 in)',
     );
+  });
+});
+
+describe('head words (trade-checks.md §4: MS20470 is the universal head)', () => {
+  it('calls the protruding head of a solid rivet the universal head, and keeps dome for blind rivets', () => {
+    expect(rivetHeadLabel('dome', true)).toBe('universal head');
+    expect(rivetHeadLabel('dome', false)).toBe('dome');
+    expect(rivetHeadLabel('countersunk', true)).toBe('100° countersunk');
+    expect(rivetHeadLabel('flange', false)).toBe('large flange');
+  });
+
+  it('names a rivet gun set the way the crib kit does: universal-head for protruding heads, flush for countersunk', () => {
+    expect(RIVET_SET_WORDS).toEqual({ dome: 'universal-head rivet set', flange: 'universal-head rivet set', countersunk: 'flush rivet set' });
   });
 });

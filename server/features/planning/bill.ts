@@ -3,7 +3,7 @@ import type { FastenerNeed } from '@shared/estimate/estimate';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import type { BillLine, ExtraItem } from '@shared/schemas/builds';
 import { binDesignation, fastenerDesignation, inchFraction, type FastenerSpec } from '@shared/stock/fasteners';
-import { RIVET_HEAD_LABELS, RIVET_KINDS, type RivetKind } from '@shared/stock/kinds';
+import { rivetHeadLabel, RIVET_KINDS, type RivetKind } from '@shared/stock/kinds';
 import type { Executor } from '../../db/client';
 import { bins, stockMovements, type BinRow } from '../../db/schema/stock';
 
@@ -70,7 +70,7 @@ export function unstockedMessage(need: FastenerNeed): string {
       : need.kind === 'solid'
         ? ` ${inchFraction(need.grip, 16)} in long (−${need.grip})`
         : ` with grip −${need.grip}`;
-  return `No bin stocks a ${inchFraction(need.diameter32, 32)} in ${RIVET_HEAD_LABELS[need.head]} ${material}${KIND_WORDS[need.kind]}${size}.`;
+  return `No bin stocks a ${inchFraction(need.diameter32, 32)} in ${rivetHeadLabel(need.head, need.kind === 'solid')} ${material}${KIND_WORDS[need.kind]}${size}.`;
 }
 
 /** Units drawn for the assembly from each bin, net of returns and reversals. */

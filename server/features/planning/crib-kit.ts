@@ -2,7 +2,7 @@ import { and, eq, inArray, notInArray } from 'drizzle-orm';
 import type { EstimateResult } from '@shared/estimate/estimate';
 import type { KitItem, KitRole } from '@shared/schemas/builds';
 import { inchFraction } from '@shared/stock/fasteners';
-import type { RivetHead } from '@shared/stock/kinds';
+import { rivetSetSentence, type RivetHead } from '@shared/stock/kinds';
 import type { ToolCategory } from '@shared/tools/categories';
 import type { Executor } from '../../db/client';
 import { holds, tools } from '../../db/schema/tools';
@@ -73,7 +73,6 @@ function pick(role: KitRole, need: string, count: number | null, candidates: Cri
 const sizes = (d32s: number[]) => d32s.map((d) => inchFraction(d, 32)).join(', ');
 const hasNosepiece = (t: CribTool, d32: number) => t.accessories.some((a) => new RegExp(`nosepiece ${inchFraction(d32, 32)}(?![0-9/])`, 'i').test(a));
 const SET_PATTERN: Record<RivetHead, RegExp> = { dome: /(universal|dome|round).*set/i, flange: /(universal|dome|round).*set/i, countersunk: /flush.*set/i };
-const SET_WORDS: Record<RivetHead, string> = { dome: 'Universal-head rivet set', flange: 'Universal-head rivet set', countersunk: 'Flush rivet set' };
 const hasSet = (t: CribTool, head: RivetHead) => t.accessories.some((a) => SET_PATTERN[head].test(a));
 
 /**
@@ -135,7 +134,7 @@ export function cribKit(db: Executor, result: EstimateResult, forUserId: number)
     const heads = [...new Set(solid.map((n) => n.head))];
     const forHead = (h: RivetHead) => sizes([...new Set(solid.filter((n) => n.head === h).map((n) => n.diameter32))].sort((a, b) => a - b));
     kit.push(
-      ...withAccessories(of('rivet_gun'), heads, hasSet, { role: 'rivet_gun', need: `Rivet gun for ${sizes([...new Set(solid.map((n) => n.diameter32))].sort((a, b) => a - b))} in solid rivets` }, { role: 'rivet_set', need: (h) => `${SET_WORDS[h]} for ${forHead(h)} in` }),
+      ...withAccessories(of('rivet_gun'), heads, hasSet, { role: 'rivet_gun', need: `Rivet gun for ${sizes([...new Set(solid.map((n) => n.diameter32))].sort((a, b) => a - b))} in solid rivets` }, { role: 'rivet_set', need: (h) => `${rivetSetSentence(h)} for ${forHead(h)} in` }),
       pick('bucking_bar', 'Bucking bar', null, of('bucking_bar')),
     );
   }

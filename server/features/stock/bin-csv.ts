@@ -3,7 +3,7 @@ import { guardText, type CsvCell } from '../../lib/csv';
 import { slicePauser } from '../../lib/event-loop';
 import { MAX_IMPORT_ROWS, type ImportProblem } from '@shared/schemas/bin-import';
 import { createBinBodySchema, type CreateBinInput } from '@shared/schemas/bins';
-import { BIN_KIND_LABELS, BIN_KINDS, RIVET_HEAD_LABELS, RIVET_HEADS, RIVET_MATERIALS, STEM_MATERIALS } from '@shared/stock/kinds';
+import { BIN_KIND_LABELS, BIN_KINDS, RIVET_HEAD_LABELS, rivetHeadLabel, RIVET_HEADS, RIVET_MATERIALS, STEM_MATERIALS } from '@shared/stock/kinds';
 
 type Field = keyof CreateBinInput;
 /** How a cell's text becomes a value for the bin schema. Numeric columns are never formula-escaped on export. */
@@ -105,7 +105,7 @@ function convert(type: CellType, cell: string): Converted {
       return kind ? { value: kind } : { error: `"${cell}" is not a kind of bin. ${KIND_HINT}` };
     }
     case 'head':
-      return { value: matchWord(cell, RIVET_HEADS, RIVET_HEAD_LABELS, { universal: 'dome', csk: 'countersunk' }) ?? cell };
+      return { value: matchWord(cell, RIVET_HEADS, RIVET_HEAD_LABELS, { universal: 'dome', [rivetHeadLabel('dome', true)]: 'dome', csk: 'countersunk' }) ?? cell };
     case 'material':
       return { value: matchWord(cell, RIVET_MATERIALS, {}, { aluminum: 'aluminium' }) ?? cell };
     case 'stem':

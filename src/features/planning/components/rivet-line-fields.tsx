@@ -1,7 +1,7 @@
 import { useFormContext, useWatch } from 'react-hook-form';
 import { ESTIMATE_DIAMETERS, ESTIMATE_RIVET_KINDS } from '@shared/estimate/rivet-rules';
 import type { LengthUnit } from '@shared/schemas/builds';
-import { RIVET_HEAD_LABELS, RIVET_HEADS, RIVET_MATERIALS } from '@shared/stock/kinds';
+import { RIVET_MATERIALS, rivetHeadChoices } from '@shared/stock/kinds';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { errorAt, type AssemblyFormValues } from '../utils/form-values';
@@ -11,7 +11,6 @@ import { LineEstimateView } from './line-estimate';
 import { SheetStackField } from './sheet-stack-field';
 
 const KIND_OPTIONS = ESTIMATE_RIVET_KINDS.map((k) => ({ value: k, label: RIVET_KIND_LABELS[k] }));
-const HEAD_OPTIONS = RIVET_HEADS.map((h) => ({ value: h, label: RIVET_HEAD_LABELS[h].replace(/^./, (c) => c.toUpperCase()) }));
 const MATERIAL_OPTIONS = [{ value: '', label: 'Not stated' }, ...RIVET_MATERIALS.map((m) => ({ value: m, label: m }))];
 const DIAMETER_OPTIONS = ESTIMATE_DIAMETERS.map((d) => ({ value: String(d), label: `${diameterText(d)} (−${d})` }));
 
@@ -87,7 +86,7 @@ export function RivetLineFields({ index, unit, live, onRemove }: { index: number
 
       <div className="grid gap-4 sm:grid-cols-2">
         <SelectField label="Rivet kind" options={KIND_OPTIONS} error={err('kind')} {...register(`lines.${index}.kind`)} />
-        <SelectField label="Head" options={HEAD_OPTIONS} error={err('head')} {...register(`lines.${index}.head`)} />
+        <SelectField label="Head" options={rivetHeadChoices(kind === 'solid')} error={err('head')} {...register(`lines.${index}.head`)} />
         <SelectField label="Diameter" hint="The dash is in 32nds of an inch." options={DIAMETER_OPTIONS} error={err('diameter32')} {...register(`lines.${index}.diameter32`)} />
         <SelectField label="Material (optional)" options={MATERIAL_OPTIONS} error={err('material')} {...register(`lines.${index}.material`)} />
       </div>

@@ -2,7 +2,7 @@ import type { LengthUnit } from '@shared/schemas/builds';
 import { lengthWords } from '@shared/estimate/length-words';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import { blindGripRange, inchFraction } from '@shared/stock/fasteners';
-import { RIVET_HEAD_LABELS, type RivetHead } from '@shared/stock/kinds';
+import { RIVET_SET_WORDS, rivetHeadLabel, type RivetHead } from '@shared/stock/kinds';
 import { formatCount, formatDay } from '@/lib/format';
 
 export const RIVET_KIND_LABELS: Record<EstimateRivetKind, string> = {
@@ -44,7 +44,11 @@ export const drillHolesText = (byDrill: Record<string, number>): string =>
     .map(([drill, n]) => `${drill}: ${formatCount(n)}`)
     .join(', ') || 'none';
 
-export const headText = (head: RivetHead): string => RIVET_HEAD_LABELS[head];
+/** A rivet's head in the trade's words for its kind: a solid rivet's dome is its universal head. */
+export const headText = (head: RivetHead, kind: EstimateRivetKind): string => rivetHeadLabel(head, kind === 'solid');
+
+/** The rivet gun set for a solid rivet's head, as the crib kit names it: "universal-head rivet set". */
+export const rivetSetText = (head: RivetHead): string => RIVET_SET_WORDS[head];
 
 /** A planned day (YYYY-MM-DD) for people; days carry no time zone, so they are read as UTC. */
 export const dayText = formatDay;

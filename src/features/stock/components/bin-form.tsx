@@ -5,7 +5,7 @@ import { z } from 'zod';
 import { ALL_DRILLS } from '@shared/drills/drill-sizes';
 import { binKindRules, createBinBodySchema, type BinFields } from '@shared/schemas/bins';
 import { BLIND_GRIP_RANGES, fastenerDesignation } from '@shared/stock/fasteners';
-import { BIN_KIND_LABELS, BIN_KINDS, isBlindKind, isRivetKind, RIVET_HEAD_LABELS, RIVET_HEADS, RIVET_MATERIALS, STEM_MATERIALS } from '@shared/stock/kinds';
+import { BIN_KIND_LABELS, BIN_KINDS, isBlindKind, isRivetKind, RIVET_MATERIALS, rivetHeadChoices, STEM_MATERIALS } from '@shared/stock/kinds';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
@@ -94,7 +94,7 @@ const opt = <T extends string | number>(values: readonly T[], label: (v: T) => s
   ...values.map((v) => ({ value: String(v), label: label(v) })),
 ];
 const KIND_OPTIONS = BIN_KINDS.map((k) => ({ value: k, label: BIN_KIND_LABELS[k] }));
-const HEAD_OPTIONS = opt(RIVET_HEADS, (h) => RIVET_HEAD_LABELS[h].replace(/^./, (c) => c.toUpperCase()), 'Choose the head');
+const headOptions = (solid: boolean) => [{ value: '', label: 'Choose the head' }, ...rivetHeadChoices(solid)];
 const MATERIAL_OPTIONS = opt(RIVET_MATERIALS, (m) => m, 'Choose the material');
 const STEM_OPTIONS = opt(STEM_MATERIALS, (m) => m, 'Choose the stem');
 const DIAMETER_OPTIONS = opt(
@@ -159,7 +159,7 @@ export function BinForm({ bin, submitLabel, onSubmit }: { bin?: BinFields; submi
           )}
           {rivet && (
             <>
-              <SelectField label="Head" options={HEAD_OPTIONS} error={errors.head?.message} {...select('head', asNullable)} />
+              <SelectField label="Head" options={headOptions(kind === 'solid_rivet')} error={errors.head?.message} {...select('head', asNullable)} />
               <SelectField label="Body material" options={MATERIAL_OPTIONS} error={errors.material?.message} {...select('material', asNullable)} />
               {blind && <SelectField label="Stem" options={STEM_OPTIONS} error={errors.stemMaterial?.message} {...select('stemMaterial', asNullable)} />}
               <SelectField label="Diameter" hint="The dash is in 32nds of an inch." options={DIAMETER_OPTIONS} error={errors.diameter32?.message} {...select('diameter32', asNullableNumber)} />

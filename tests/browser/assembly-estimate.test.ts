@@ -32,8 +32,10 @@ describe('a member planning an assembly on a phone', () => {
     await first.getByLabel('Edge distance (in, optional)').fill('0.375');
     // Worked check (our own arithmetic): 20 in, e 0.375 in, p 1 in → 21 holes at 0.9625 in; 5/32 blind steps #40 → #30 → #20.
     const firstEstimate = page.getByRole('region', { name: 'Estimate for rivet line 1' });
-    await expect.poll(async () => firstEstimate.textContent(), { timeout: 5000 }).toContain('21');
-    expect(await firstEstimate.textContent()).toContain('0.9625');
+    // The live estimate follows the typing: wait for the figures of the finished line, not an earlier one
+    // (20 in at the default 1/8 in and 2D edge also makes 21 holes, at 0.975 in).
+    await expect.poll(async () => firstEstimate.textContent(), { timeout: 5000 }).toContain('0.9625');
+    expect(await firstEstimate.textContent()).toContain('Holes21');
     expect(await firstEstimate.textContent()).toMatch(/#40.*#30.*#20/);
 
     await page.getByRole('button', { name: 'Add a rivet line' }).click();

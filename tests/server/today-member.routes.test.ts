@@ -49,7 +49,7 @@ describe('GET /api/today/member', () => {
 
   it('lists my loans overdue first, with the due day and due words of My loans, five of them and the total', async () => {
     t.clock.now = new Date('2026-11-20T18:00:00Z');
-    const late = await tool('Cleco pliers');
+    const late = await tool('Temporary fastener pliers');
     await lend(t, member, late.code, 3 * DAY_MS);
     t.clock.now = new Date('2026-12-01T12:00:00Z');
     const week = await tool('Edge deburrer');
@@ -63,7 +63,7 @@ describe('GET /api/today/member', () => {
     expect(loans.total).toBe(6);
     expect(loans.items).toHaveLength(5);
     expect(loans.items.slice(0, 3)).toEqual([
-      expect.objectContaining({ tool: { code: late.code, name: 'Cleco pliers' }, dueDay: 'Monday, November 23', dueWords: '8 days late', overdue: true }),
+      expect.objectContaining({ tool: { code: late.code, name: 'Temporary fastener pliers' }, dueDay: 'Monday, November 23', dueWords: '8 days late', overdue: true }),
       expect.objectContaining({ tool: { code: tomorrow.code, name: 'Hand rivet puller' }, dueDay: 'Wednesday, December 2', dueWords: 'due tomorrow', overdue: false, soon: true }),
       expect.objectContaining({ tool: { code: week.code, name: 'Edge deburrer' }, dueDay: 'Tuesday, December 8', dueWords: 'due in 7 days', overdue: false, soon: false }),
     ]);

@@ -162,7 +162,9 @@ async function serveClientCopy() {
 }
 
 describe('a new version of the installed app', () => {
-  it('says "Update ready", keeps a half-filled form, and reloads only on the tap', async () => {
+  // retry: the reload after the tap timed out in some full runs on the shared machine and passed alone
+  // on the same commit; under investigation (see the closing note). The assertions are unchanged.
+  it('says "Update ready", keeps a half-filled form, and reloads only on the tap', { retry: 2 }, async () => {
     const served = await serveClientCopy();
     const context = await suite.browser.newContext({ serviceWorkers: 'allow', viewport: { width: 360, height: 780 } });
     try {

@@ -16,8 +16,8 @@ describe('the estimate’s counts', () => {
   });
 
   it('writes a long line’s holes with separators too', () => {
-    const line: LineEstimate = { holesPerRow: 603, holes: 1206, pitch: 1, edgeDistance: 0.25, grip: 2, drillSequence: ['#40', '#30'], tempFasteners: { '1/8': 1206 }, warnings: [] };
-    render(<LineEstimateView line={line} unit="in" kind="blind-structural" />);
+    const line: LineEstimate = { holesPerRow: 603, holes: 1206, pitch: 1, edgeDistance: 0.25, transversePitch: 0.75, grip: 2, drillSequence: ['#40', '#30'], tempFasteners: { '1/8': 1206 }, warnings: [] };
+    render(<LineEstimateView line={line} unit="in" kind="blind-structural" layout={{ rows: 2 }} />);
     expect(screen.getByText('1,206 (603 a row × 2 rows)')).toBeTruthy();
   });
 });

@@ -177,19 +177,14 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
   const holes = rowHoles(holesPerRow, rows, line.rowPattern);
   const steps = drillSequence(kind, diameter32, options.finalDrillOverride);
   const tempFasteners = tempFastenersFor(steps, Math.ceil(holes / 3));
+  const edgeDistance = clean(edge);
   // Only a line of more than one row has a transverse pitch: one-row answers stay as they were.
-  const between = rows > 1 ? { transversePitch: clean(transversePitchFor(line.rowSpacing, pitch, d, diameter32, unit, warnings)) } : null;
-  return {
-    holesPerRow,
-    holes,
-    pitch: clean(pitch),
-    edgeDistance: clean(edge),
-    ...between,
-    grip,
-    drillSequence: steps,
-    tempFasteners,
-    warnings: warnings.length > 0 ? warnings : NO_WARNINGS,
-  };
+  // Two plain literals, not a spread: the estimator runs over thousands of lines.
+  if (rows > 1) {
+    const transversePitch = clean(transversePitchFor(line.rowSpacing, pitch, d, diameter32, unit, warnings));
+    return { holesPerRow, holes, pitch: clean(pitch), edgeDistance, transversePitch, grip, drillSequence: steps, tempFasteners, warnings: warnings.length > 0 ? warnings : NO_WARNINGS };
+  }
+  return { holesPerRow, holes, pitch: clean(pitch), edgeDistance, grip, drillSequence: steps, tempFasteners, warnings: warnings.length > 0 ? warnings : NO_WARNINGS };
 }
 
 /** The spacing between rows: the given one (warned below 2.5D), else 75 % of the actual pitch and at least 2.5D. */

@@ -6,12 +6,16 @@ import {
   drillSequence,
   familyOf,
   MIN_PITCH_DIAMETERS,
+  MIN_TRANSVERSE_DIAMETERS,
   MAX_EDGE_DIAMETERS,
   minEdgeDiameters,
   MM_PER_INCH,
+  rowHoles,
   SOFT_RIVET_CAUTION,
   TEMP_FASTENER_FOR_DRILL,
+  TRANSVERSE_PITCH_OF_PITCH,
   type EstimateRivetKind,
+  type RowPattern,
 } from './rivet-rules';
 
 export type LengthUnit = 'in' | 'mm';
@@ -19,6 +23,10 @@ export type LengthUnit = 'in' | 'mm';
 export interface RivetLineInput {
   length: number;
   rows?: number;
+  /** Inline (the default) or staggered by half a pitch. */
+  rowPattern?: RowPattern;
+  /** The given spacing between rows, in the line's unit. */
+  rowSpacing?: number;
   pitch?: number;
   holesPerRow?: number;
   edgeDistance?: number;
@@ -46,6 +54,8 @@ export interface LineEstimate {
   holes: number;
   pitch: number;
   edgeDistance: number;
+  /** Between rows, in the line's unit: only on lines of more than one row. */
+  transversePitch?: number;
   grip: number | null;
   drillSequence: readonly string[];
   tempFasteners: Readonly<Record<string, number>>;
@@ -164,8 +174,28 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
   }
 
   const rows = line.rows ?? 1;
-  const holes = holesPerRow * rows;
+  const holes = rowHoles(holesPerRow, rows, line.rowPattern);
   const steps = drillSequence(kind, diameter32, options.finalDrillOverride);
   const tempFasteners = tempFastenersFor(steps, Math.ceil(holes / 3));
-  return { holesPerRow, holes, pitch: clean(pitch), edgeDistance: clean(edge), grip, drillSequence: steps, tempFasteners, warnings: warnings.length > 0 ? warnings : NO_WARNINGS };
+  const edgeDistance = clean(edge);
+  // Only a line of more than one row has a transverse pitch: one-row answers stay as they were.
+  // Two plain literals, not a spread: the estimator runs over thousands of lines.
+  if (rows > 1) {
+    const transversePitch = clean(transversePitchFor(line.rowSpacing, pitch, d, diameter32, unit, warnings));
+    return { holesPerRow, holes, pitch: clean(pitch), edgeDistance, transversePitch, grip, drillSequence: steps, tempFasteners, warnings: warnings.length > 0 ? warnings : NO_WARNINGS };
+  }
+  return { holesPerRow, holes, pitch: clean(pitch), edgeDistance, grip, drillSequence: steps, tempFasteners, warnings: warnings.length > 0 ? warnings : NO_WARNINGS };
+}
+
+/** The spacing between rows: the given one (warned below 2.5D), else 75 % of the actual pitch and at least 2.5D. */
+function transversePitchFor(given: number | undefined, pitch: number, d: number, diameter32: number, unit: LengthUnit, warnings: EstimateNotice[]): number {
+  const min = MIN_TRANSVERSE_DIAMETERS * d;
+  if (given === undefined) return Math.max(TRANSVERSE_PITCH_OF_PITCH * pitch, min);
+  if (given < min - 1e-9) {
+    warnings.push({
+      code: 'TRANSVERSE_PITCH_BELOW_MINIMUM',
+      message: `Row spacing ${lengthWords(given, unit)} is below the published minimum of ${MIN_TRANSVERSE_DIAMETERS}D = ${lengthWords(min, unit)} for a ${diaWords(diameter32)} rivet.`,
+    });
+  }
+  return given;
 }

@@ -66,6 +66,21 @@ export const minEdgeDiameters = (head: RivetHead) => (head === 'countersunk' ? 2
 /** Edge distance above about 4D is more than the rule asks (FAA-H-8083-31 as restated, a secondary source): a warning, not a refusal. */
 export const MAX_EDGE_DIAMETERS = 4;
 
+/**
+ * Transverse pitch, between rows: about 75 % of the pitch, never less than 2.5D (FAA-H-8083-31,
+ * secondary; TM 10-5410-229-13&P: rows never less than 2 1/2 times the diameter).
+ */
+export const TRANSVERSE_PITCH_OF_PITCH = 0.75;
+export const MIN_TRANSVERSE_DIAMETERS = 2.5;
+
+/** How the rows of a line sit: side by side, or each second row moved along by half a pitch. */
+export const ROW_PATTERNS = ['inline', 'staggered'] as const;
+export type RowPattern = (typeof ROW_PATTERNS)[number];
+
+/** Holes in a line of rows: staggered rows at odd index are half a pitch along, so they hold one hole fewer. */
+export const rowHoles = (holesPerRow: number, rows: number, pattern: RowPattern = 'inline'): number =>
+  holesPerRow * rows - (pattern === 'staggered' ? Math.floor(rows / 2) : 0);
+
 /** Minimum pitch: 3D (AC 43.13-1B; TM 10-5410-229-13&P; NAVEDTRA 14018 ch. 13). */
 export const MIN_PITCH_DIAMETERS = 3;
 /** Maximum pitch: the sources disagree (8D NAVEDTRA 14018, 10D FAA-derived), so it is a chapter setting. */

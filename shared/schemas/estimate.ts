@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ESTIMATE_DIAMETERS, ESTIMATE_RIVET_KINDS } from '../estimate/rivet-rules';
+import { ESTIMATE_DIAMETERS, ESTIMATE_RIVET_KINDS, ROW_PATTERNS } from '../estimate/rivet-rules';
 import { RIVET_HEADS } from '../stock/kinds';
 
 const positiveLength = (what: string) =>
@@ -19,6 +19,10 @@ export const rivetLineSchema = z
   .strictObject({
     length: positiveLength('line length'),
     rows: z.number().int({ error: 'Rows are a whole number.' }).min(1, { error: 'A line has at least 1 row.' }).max(20, { error: 'At most 20 rows in one line.' }).optional(),
+    /** Inline when absent; staggered rows sit half a pitch along, one hole fewer in every second row. */
+    rowPattern: z.enum(ROW_PATTERNS, { error: 'The row pattern is inline or staggered.' }).optional(),
+    /** The spacing between rows, in the line's unit; when absent, 75 % of the actual pitch and at least 2.5D. */
+    rowSpacing: positiveLength('row spacing').optional(),
     pitch: positiveLength('pitch').optional(),
     holesPerRow: z.number().int({ error: 'Holes per row are a whole number.' }).min(2, { error: 'A row has at least 2 holes.' }).max(10_000).optional(),
     edgeDistance: positiveLength('edge distance').optional(),
@@ -47,6 +51,8 @@ export const lineEstimateSchema = z.object({
   holes: z.number(),
   pitch: z.number(),
   edgeDistance: z.number(),
+  /** Only on lines of more than one row. */
+  transversePitch: z.number().optional(),
   grip: z.number().nullable(),
   drillSequence: z.array(z.string()).readonly(),
   tempFasteners: counts,

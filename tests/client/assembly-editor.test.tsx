@@ -106,6 +106,35 @@ describe('the assembly editor', () => {
     expect((post!.body as { lines: object[] }).lines[0]).not.toHaveProperty('holesPerRow');
   });
 
+  it('asks for the row pattern and spacing once a line has more than one row, and shows the transverse pitch', async () => {
+    const calls = serve();
+    renderEditor();
+    await userEvent.type(await screen.findByLabelText('Assembly name'), 'Spar doubler');
+    // 1/8 in rivets, 20.5 in, edge 2D = 0.25 in → 21 holes a row at 1 in (our own arithmetic).
+    await userEvent.type(line(1).getByLabelText('Length (in)'), '20.5');
+    await userEvent.type(line(1).getByLabelText('Target pitch (in)'), '1');
+    await userEvent.click(line(1).getByRole('button', { name: 'Add a 0.032 in sheet' }));
+    await userEvent.selectOptions(line(1).getByLabelText('Diameter'), '1/8 in (−4)');
+    await waitFor(() => expect(fact(lineEstimate(1), 'Holes')).toBe('21'));
+    expect(line(1).queryByRole('group', { name: 'Row pattern' })).toBeNull();
+    expect(within(lineEstimate(1)).queryByText('Transverse pitch (between rows)')).toBeNull();
+
+    await userEvent.type(line(1).getByLabelText('Rows'), '{Backspace}2');
+    await userEvent.click(line(1).getByRole('radio', { name: 'Staggered' }));
+    // Staggered by half a pitch: 21 + 20 = 41; rows 75 % of the 1 in pitch apart (FAA-H-8083-31, secondary).
+    await waitFor(() => expect(fact(lineEstimate(1), 'Holes')).toBe('41 (2 staggered rows of 21 and 20)'));
+    expect(fact(lineEstimate(1), 'Transverse pitch (between rows)')).toBe('0.75 in');
+
+    // Below 2.5D = 0.3125 in (TM 10-5410-229-13&P: rows never less than 2 1/2 diameters apart): kept, with a caution.
+    await userEvent.type(line(1).getByLabelText('Row spacing (in, optional)'), '0.25');
+    await waitFor(() => expect(fact(lineEstimate(1), 'Transverse pitch (between rows)')).toBe('0.25 in'));
+    expect(lineEstimate(1).textContent).toContain('Row spacing 0.25 in is below the published minimum of 2.5D = 0.3125 in for a 1/8 in rivet.');
+
+    await userEvent.click(save());
+    await waitFor(() => expect(posts(calls)).toHaveLength(1));
+    expect((posts(calls)[0]!.body as { lines: object[] }).lines[0]).toMatchObject({ rows: 2, rowPattern: 'staggered', rowSpacing: 0.25 });
+  });
+
   it('refuses a general-purpose blind rivet on a structural line with the caution, and will not save until it is changed', async () => {
     const calls = serve();
     renderEditor();

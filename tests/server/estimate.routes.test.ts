@@ -50,6 +50,32 @@ describe('POST /api/estimate', () => {
     expect(res.body.warnings).toEqual([]);
   });
 
+  it('lays out staggered rows with their transverse pitch, and warns on a row spacing below 2.5D', async () => {
+    // 1/8 in blind rivets, 20.5 in line, edge 2D = 0.25 in → 21 holes a row at 1 in (our own arithmetic).
+    const rows = { length: 20.5, pitch: 1, rows: 2, stack: [0.032, 0.032], rivet: { ...rivet, diameter32: 4 } };
+    const res = await post(member, '/api/estimate', {
+      unit: 'in',
+      wastePercent: 0,
+      lines: [
+        // Staggered by half a pitch (FAA-H-8083-31, secondary): 21 + 20 = 41 holes; rows 75 % of 1 in = 0.75 in apart.
+        { ...rows, rowPattern: 'staggered' },
+        // Given 0.25 in: below 2.5D = 0.3125 in (TM 10-5410-229-13&P), kept but warned.
+        { ...rows, rowPattern: 'inline', rowSpacing: 0.25 },
+      ],
+    });
+    expect(res.status).toBe(200);
+    expect(estimateResponseSchema.strict().parse(res.body)).toBeTruthy();
+    expect(res.body.lines[0]).toMatchObject({ holesPerRow: 21, holes: 41, pitch: 1, transversePitch: 0.75, warnings: [] });
+    expect(res.body.lines[1]).toMatchObject({ holes: 42, transversePitch: 0.25 });
+    expect(res.body.warnings).toEqual([
+      { code: 'TRANSVERSE_PITCH_BELOW_MINIMUM', message: 'Line 2: Row spacing 0.25 in is below the published minimum of 2.5D = 0.3125 in for a 1/8 in rivet.' },
+    ]);
+    expect(res.body.totals.rivets).toBe(83);
+    const bad = await post(member, '/api/estimate', { unit: 'in', lines: [{ ...rows, rowPattern: 'zigzag' }] });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.message).toContain('inline or staggered');
+  });
+
   it('reports warnings at the line and at the top', async () => {
     const res = await post(member, '/api/estimate', { unit: 'mm', wastePercent: 0, lines: [{ length: 300, holesPerRow: 3, edgeDistance: 5, stack: [1, 1], rivet }] });
     expect(res.status).toBe(200);

@@ -36,6 +36,64 @@ describe('holes and pitch (common practice: end holes at the edge distance, the 
   });
 });
 
+describe('rows: inline or staggered, spaced by the transverse pitch (FAA-H-8083-31, secondary; TM 10-5410-229-13&P: rows never less than 2 1/2 times the diameter)', () => {
+  // 1/8 in rivet, default edge 2D = 0.25 in, 20.5 in line → span 20 in → 21 holes at exactly 1 in (our own arithmetic).
+  const exact = (over: Partial<RivetLineInput>) => line({ length: 20.5, ...over });
+
+  it('spaces two inline rows at 75 % of the actual pitch: 1/8 in rivets at 1 in pitch → 0.75 in', () => {
+    const r = ok(estimateLine(exact({ rows: 2 }), { unit: 'in' }));
+    expect(r).toMatchObject({ holesPerRow: 21, holes: 42, pitch: 1, transversePitch: 0.75 });
+    expect(r.warnings).toEqual([]);
+  });
+
+  it('takes 75 % of the actual pitch, not the target: 20 in, e 0.375 in, target 1 in → 0.9625 in actual → 0.721875 in', () => {
+    expect(ok(estimateLine(line({ edgeDistance: 0.375, rows: 2 }), { unit: 'in' })).transversePitch).toBe(0.721875);
+  });
+
+  it('never spaces rows closer than 2.5D: 1/8 in at 0.4 in pitch → 75 % is 0.3 in, 2.5D is 0.3125 in', () => {
+    // 4.5 in line, e 0.25 in → span 4 in → 11 holes at 0.4 in (3.2D, above the 3D minimum).
+    const r = ok(estimateLine(line({ length: 4.5, pitch: 0.4, rows: 3 }), { unit: 'in' }));
+    expect(r).toMatchObject({ holesPerRow: 11, pitch: 0.4, transversePitch: 0.3125 });
+  });
+
+  it('staggers rows by half a pitch, one hole fewer in every second row: 21 per row → 21 + 20 = 41, three rows 21 + 20 + 21 = 62', () => {
+    const two = ok(estimateLine(exact({ rows: 2, rowPattern: 'staggered' }), { unit: 'in' }));
+    expect(two).toMatchObject({ holesPerRow: 21, holes: 41, pitch: 1, transversePitch: 0.75 });
+    // Temporary fasteners every third hole (common practice): ⌈41/3⌉ = 14 per step.
+    expect(two.tempFasteners).toEqual({ '3/32': 14, '1/8': 14 });
+    expect(ok(estimateLine(exact({ rows: 3, rowPattern: 'staggered' }), { unit: 'in' })).holes).toBe(62);
+    expect(ok(estimateLine(exact({ rows: 3, rowPattern: 'inline' }), { unit: 'in' })).holes).toBe(63);
+  });
+
+  it('uses a given row spacing as it is, and warns when it is below 2.5D: 0.25 in for 1/8 in (2.5D = 0.3125 in)', () => {
+    expect(ok(estimateLine(exact({ rows: 2, rowSpacing: 0.5 }), { unit: 'in' }))).toMatchObject({ transversePitch: 0.5, warnings: [] });
+    const r = ok(estimateLine(exact({ rows: 2, rowSpacing: 0.25 }), { unit: 'in' }));
+    expect(r.transversePitch).toBe(0.25);
+    expect(r.warnings).toEqual([
+      { code: 'TRANSVERSE_PITCH_BELOW_MINIMUM', message: 'Row spacing 0.25 in is below the published minimum of 2.5D = 0.3125 in for a 1/8 in rivet.' },
+    ]);
+  });
+
+  it('works in millimetres: 1/8 in = 3.175 mm, 2.5D = 7.94 mm; 25.4 mm pitch → 19.05 mm; 7 mm given warns', () => {
+    const mm = (over: Partial<RivetLineInput>) => line({ length: 520.7, pitch: 25.4, stack: [0.8, 0.8], rows: 2, ...over });
+    expect(ok(estimateLine(mm({}), { unit: 'mm' })).transversePitch).toBeCloseTo(19.05, 6);
+    const r = ok(estimateLine(mm({ rowSpacing: 7 }), { unit: 'mm' }));
+    expect(r.warnings.map((w) => w.message)).toEqual(['Row spacing 7 mm is below the published minimum of 2.5D = 7.94 mm for a 1/8 in rivet.']);
+  });
+
+  it('leaves a one-row line as it was: no transverse pitch, no row warning', () => {
+    const r = ok(estimateLine(exact({ rowSpacing: 0.1, rowPattern: 'staggered' }), { unit: 'in' }));
+    expect(r).not.toHaveProperty('transversePitch');
+    expect(r).toMatchObject({ holes: 21, warnings: [] });
+  });
+
+  it('counts a staggered line in the totals and warns at the top with the line number', () => {
+    const r = whole(estimate({ unit: 'in', wastePercent: 0, lines: [exact({}), exact({ rows: 2, rowPattern: 'staggered', rowSpacing: 0.25 })] }));
+    expect(r.totals.rivets).toBe(62);
+    expect(r.warnings.map((w) => w.message)).toEqual([expect.stringMatching(/^Line 2: Row spacing 0.25 in is below/)]);
+  });
+});
+
 describe('edge distance', () => {
   it('defaults to 2D, 2.5D for countersunk heads (AC 43.13-1B ch. 4; FAA-H-8083-31)', () => {
     expect(ok(estimateLine(line({}), { unit: 'in' })).edgeDistance).toBe(0.25);
@@ -188,6 +246,39 @@ describe('properties', () => {
         }
         expect(r.pitch).toBeLessThanOrEqual(l.pitch + 1e-9);
         expect(r.pitch).toBeGreaterThanOrEqual((3 * l.diameter32) / 32 - 1e-9);
+      }),
+    );
+  });
+
+  const rowsArb = fc.integer({ min: 2, max: 20 });
+
+  it('staggered rows never have more holes than the same rows inline (one fewer in every second row)', () => {
+    fc.assert(
+      fc.property(lineArb, rowsArb, (l, rows) => {
+        const rivet = { ...blind18, diameter32: l.diameter32 };
+        const inline = estimateLine({ ...l, rows, rivet }, { unit: 'in' });
+        const staggered = estimateLine({ ...l, rows, rowPattern: 'staggered', rivet }, { unit: 'in' });
+        if ('error' in inline || 'error' in staggered) return;
+        expect(staggered.holes).toBeLessThanOrEqual(inline.holes);
+        expect(inline.holes - staggered.holes).toBe(Math.floor(rows / 2));
+      }),
+    );
+  });
+
+  it('the transverse pitch is never below 2.5D unless given, and a given one is kept', () => {
+    fc.assert(
+      fc.property(lineArb, rowsArb, fc.option(fc.double({ min: 0.01, max: 2, noNaN: true }), { nil: undefined }), (l, rows, rowSpacing) => {
+        const rivet = { ...blind18, diameter32: l.diameter32 };
+        const r = estimateLine({ ...l, rows, rowSpacing, rivet }, { unit: 'in' });
+        if ('error' in r) return;
+        const floor = (2.5 * l.diameter32) / 32;
+        if (rowSpacing === undefined) {
+          expect(r.transversePitch).toBeGreaterThanOrEqual(floor - 1e-9);
+          expect(r.transversePitch).toBeCloseTo(Math.max(0.75 * r.pitch, floor), 5);
+        } else {
+          expect(r.transversePitch).toBeCloseTo(rowSpacing, 6);
+          expect(r.warnings.some((w) => w.code === 'TRANSVERSE_PITCH_BELOW_MINIMUM')).toBe(rowSpacing < floor - 1e-9);
+        }
       }),
     );
   });

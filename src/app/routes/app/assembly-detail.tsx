@@ -106,7 +106,7 @@ export function AssemblyDetailRoute() {
             {estimate.lines.map((line, i) => (
               <li key={i} className="rounded-lg border border-rule p-3">
                 <h3 className="mb-2 font-semibold">{line.label ?? `Line ${i + 1}`}</h3>
-                <LineEstimateView line={line} unit={estimate.unit} kind={assembly.lines[i]?.rivet.kind ?? 'blind-structural'} />
+                <LineEstimateView line={line} unit={estimate.unit} kind={assembly.lines[i]?.rivet.kind ?? 'blind-structural'} layout={assembly.lines[i]} />
               </li>
             ))}
           </ol>

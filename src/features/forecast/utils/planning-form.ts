@@ -45,7 +45,7 @@ export const SETTING_HELP: Record<keyof PlanningSettingsDto, { label: string; he
   },
   maxPitchDiameters: {
     label: 'Maximum pitch (rivet diameters)',
-    help: 'An estimate warns when rivets on a line would sit farther apart than this many diameters; the kit’s plans set the real spacing.',
+    help: 'An estimate warns when rivets on a line would sit farther apart than this many diameters. Published maxima differ: 8D (NAVEDTRA 14018) and 10D (FAA-derived guidance); the kit’s plans set the real spacing.',
   },
   serviceLevel: {
     label: 'Service level (%)',

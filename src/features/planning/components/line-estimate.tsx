@@ -1,16 +1,26 @@
-import type { LineEstimate } from '@shared/estimate/estimate-line';
+import type { LineEstimate, RivetLineInput } from '@shared/estimate/estimate-line';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import type { LengthUnit } from '@shared/schemas/builds';
 import { formatCount } from '@/lib/format';
 import { drillStepsText, gripText, lengthText, tempFastenersText } from '../utils/words';
 import { FactList } from './fact-list';
 
-/** One rivet line worked out: the terms a builder lays the line out with, then its warnings in words. */
-export function LineEstimateView({ line, unit, kind }: { line: LineEstimate; unit: LengthUnit; kind: EstimateRivetKind }) {
-  const rows = line.holesPerRow > 0 ? line.holes / line.holesPerRow : 1;
+type RowLayout = Pick<RivetLineInput, 'rows' | 'rowPattern'> | undefined;
+
+/** The holes in words: "42 (21 a row × 2 rows)", "41 (2 staggered rows of 21 and 20)". */
+function holesText(line: LineEstimate, layout: RowLayout): string {
+  const rows = layout?.rows ?? 1;
+  if (rows <= 1) return formatCount(line.holes);
+  if (layout?.rowPattern === 'staggered') return `${formatCount(line.holes)} (${rows} staggered rows of ${formatCount(line.holesPerRow)} and ${formatCount(line.holesPerRow - 1)})`;
+  return `${formatCount(line.holes)} (${formatCount(line.holesPerRow)} a row × ${rows} rows)`;
+}
+
+/** One rivet line worked out: the terms a builder lays the line out with, then its warnings in words. `layout` is the line's rows as entered. */
+export function LineEstimateView({ line, unit, kind, layout }: { line: LineEstimate; unit: LengthUnit; kind: EstimateRivetKind; layout: RowLayout }) {
   const facts: [string, string][] = [
-    ['Holes', rows > 1 ? `${formatCount(line.holes)} (${formatCount(line.holesPerRow)} a row × ${rows} rows)` : formatCount(line.holes)],
+    ['Holes', holesText(line, layout)],
     ['Pitch', lengthText(line.pitch, unit)],
+    ...(line.transversePitch === undefined ? [] : [['Transverse pitch (between rows)', lengthText(line.transversePitch, unit)] as [string, string]]),
     ['Edge distance', lengthText(line.edgeDistance, unit)],
     [kind === 'solid' ? 'Rivet length' : 'Grip', gripText(kind, line.grip)],
     ['Drill steps', drillStepsText(line.drillSequence)],

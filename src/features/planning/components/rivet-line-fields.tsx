@@ -4,7 +4,7 @@ import type { LengthUnit } from '@shared/schemas/builds';
 import { RIVET_MATERIALS, rivetHeadChoices } from '@shared/stock/kinds';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
-import { errorAt, type AssemblyFormValues } from '../utils/form-values';
+import { errorAt, hasManyRows, type AssemblyFormValues } from '../utils/form-values';
 import type { LiveLine } from '../utils/live-estimate';
 import { diameterText, RIVET_KIND_LABELS } from '../utils/words';
 import { LineEstimateView } from './line-estimate';
@@ -19,7 +19,7 @@ const RADIO = 'flex min-h-12 flex-1 cursor-pointer items-center gap-3 rounded-lg
 /** One rivet line: where it runs, how it is spaced, what it fastens, with the rivet; its estimate beneath. */
 export function RivetLineFields({ index, unit, live, onRemove }: { index: number; unit: LengthUnit; live: LiveLine | undefined; onRemove: () => void }) {
   const { control, register, formState } = useFormContext<AssemblyFormValues>();
-  const [spacing, kind] = useWatch({ control, name: [`lines.${index}.spacing`, `lines.${index}.kind`] });
+  const [spacing, kind, rows] = useWatch({ control, name: [`lines.${index}.spacing`, `lines.${index}.kind`, `lines.${index}.rows`] });
   const err = (field: string) => errorAt(formState.errors, `lines.${index}.${field}`);
   const n = index + 1;
 
@@ -40,6 +40,31 @@ export function RivetLineFields({ index, unit, live, onRemove }: { index: number
         <TextField label={`Length (${unit})`} inputMode="decimal" autoComplete="off" error={err('length')} {...register(`lines.${index}.length`)} />
         <TextField label="Rows" inputMode="numeric" autoComplete="off" error={err('rows')} {...register(`lines.${index}.rows`)} />
       </div>
+      {hasManyRows(rows) && (
+        <div className="grid gap-4 sm:grid-cols-2">
+          <fieldset className="flex flex-col gap-2">
+            <legend className="mb-1 text-sm font-semibold">Row pattern</legend>
+            <div className="flex flex-col gap-2 sm:flex-row">
+              <label className={RADIO}>
+                <input type="radio" value="inline" className="size-5" {...register(`lines.${index}.rowPattern`)} />
+                Inline
+              </label>
+              <label className={RADIO}>
+                <input type="radio" value="staggered" className="size-5" {...register(`lines.${index}.rowPattern`)} />
+                Staggered
+              </label>
+            </div>
+          </fieldset>
+          <TextField
+            label={`Row spacing (${unit}, optional)`}
+            inputMode="decimal"
+            autoComplete="off"
+            hint="Leave empty for 75 % of the pitch, never less than 2.5D. Staggered rows sit half a pitch along, one hole fewer in every second row."
+            error={err('rowSpacing')}
+            {...register(`lines.${index}.rowSpacing`)}
+          />
+        </div>
+      )}
 
       <fieldset className="flex flex-col gap-2">
         <legend className="mb-1 text-sm font-semibold">Spacing</legend>
@@ -100,7 +125,7 @@ export function RivetLineFields({ index, unit, live, onRemove }: { index: number
             <p>{live.message}</p>
           </Notice>
         ) : (
-          <LineEstimateView line={live.estimate} unit={unit} kind={kind} />
+          <LineEstimateView line={live.estimate} unit={unit} kind={kind} layout={live.line} />
         )}
       </section>
     </fieldset>

@@ -1,6 +1,6 @@
 import { get, set, type FieldErrors } from 'react-hook-form';
 import type { z } from 'zod';
-import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
+import type { EstimateRivetKind, RowPattern } from '@shared/estimate/rivet-rules';
 import { MM_PER_INCH } from '@shared/estimate/rivet-rules';
 import { createAssemblyBodySchema, type Assembly, type AssemblyLine, type AssemblyStatus, type assemblyLineSchema, type CreateAssemblyInput, type LengthUnit } from '@shared/schemas/builds';
 import type { RivetHead } from '@shared/stock/kinds';
@@ -13,6 +13,10 @@ export interface LineValues {
   label: string;
   length: string;
   rows: string;
+  /** Rows side by side, or staggered by half a pitch; asked only when there is more than one row. */
+  rowPattern: RowPattern;
+  /** Between rows; empty for 75 % of the pitch, at least 2.5D. */
+  rowSpacing: string;
   /** Give a target pitch, or say how many holes each row has. */
   spacing: 'pitch' | 'holes';
   pitch: string;
@@ -44,6 +48,8 @@ export const emptyLine = (): LineValues => ({
   label: '',
   length: '',
   rows: '1',
+  rowPattern: 'inline',
+  rowSpacing: '',
   spacing: 'pitch',
   pitch: '',
   holesPerRow: '',
@@ -61,11 +67,17 @@ const num = (text: string): number => (text.trim() === '' ? Number.NaN : Number(
 const optionalNum = (text: string): number | undefined => (text.trim() === '' ? undefined : num(text));
 const optionalText = (text: string): string | undefined => (text.trim() === '' ? undefined : text.trim());
 
+/** Whether the line's rows text asks for more than one row: only then are the pattern and the row spacing asked for and sent. */
+export const hasManyRows = (rowsText: string): boolean => num(rowsText) > 1;
+
 export function toLine(v: LineValues): z.input<typeof assemblyLineSchema> {
+  const many = hasManyRows(v.rows);
   return {
     label: optionalText(v.label),
     length: num(v.length),
     rows: optionalNum(v.rows),
+    rowPattern: many && v.rowPattern === 'staggered' ? 'staggered' : undefined,
+    rowSpacing: many ? optionalNum(v.rowSpacing) : undefined,
     pitch: v.spacing === 'pitch' ? num(v.pitch) : undefined,
     holesPerRow: v.spacing === 'holes' ? num(v.holesPerRow) : undefined,
     edgeDistance: optionalNum(v.edgeDistance),
@@ -95,6 +107,8 @@ export function fromLine(line: AssemblyLine): LineValues {
     label: line.label ?? '',
     length: String(line.length),
     rows: String(line.rows ?? 1),
+    rowPattern: line.rowPattern ?? 'inline',
+    rowSpacing: text(line.rowSpacing),
     spacing: line.holesPerRow !== undefined ? 'holes' : 'pitch',
     pitch: text(line.pitch),
     holesPerRow: text(line.holesPerRow),
@@ -168,6 +182,7 @@ export function convertLine(line: LineValues, to: LengthUnit): LineValues {
     length: convertLength(line.length, to),
     pitch: convertLength(line.pitch, to),
     edgeDistance: convertLength(line.edgeDistance, to),
+    rowSpacing: convertLength(line.rowSpacing, to),
     stack: line.stack.map((s) => ({ thickness: convertLength(s.thickness, to) })),
   };
 }

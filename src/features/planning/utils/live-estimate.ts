@@ -1,12 +1,12 @@
 import { estimate, isEstimateErrors, type EstimateResult } from '@shared/estimate/estimate';
-import { estimateLine, type LineEstimate } from '@shared/estimate/estimate-line';
+import { estimateLine, type LineEstimate, type RivetLineInput } from '@shared/estimate/estimate-line';
 import { assemblyLineSchema, type LengthUnit } from '@shared/schemas/builds';
 import { toLine, type LineValues } from './form-values';
 
 export type LiveLine =
   | { state: 'incomplete' }
   | { state: 'error'; code: string; message: string }
-  | { state: 'ok'; estimate: LineEstimate };
+  | { state: 'ok'; estimate: LineEstimate; line: RivetLineInput };
 
 export interface LiveEstimate {
   lines: LiveLine[];
@@ -35,7 +35,7 @@ export function liveEstimate(unit: LengthUnit, values: readonly LineValues[], op
     const r = estimateLine(parsed.data, { unit, edgeFloorIn: options.edgeFloorIn, maxPitchDiameters: options.maxPitchDiameters });
     if ('error' in r) return { state: 'error', code: r.code, message: r.message };
     complete.push(parsed.data);
-    return { state: 'ok', estimate: r };
+    return { state: 'ok', estimate: r, line: parsed.data };
   });
   const errors = lines.filter((l) => l.state === 'error').length;
   const incomplete = lines.filter((l) => l.state === 'incomplete').length;

@@ -8,7 +8,9 @@ import {
   isRivetKind,
   MOVEMENT_KINDS,
   RIVET_HEADS,
+  isSolidRivetHead,
   RIVET_MATERIALS,
+  SOLID_RIVET_HEAD_WORDS,
   STEM_MATERIALS,
   type BinKind,
 } from '../stock/kinds';
@@ -114,6 +116,7 @@ export function binKindRules(b: Partial<BinFieldValues> & { kind?: BinKind }, ct
       if (!b.length16) issue('length16', 'A solid rivet bin needs its length in 16ths of an inch, like 6 for 3/8 in.');
       if (b.grip16 !== null && b.grip16 !== undefined) issue('grip16', 'Solid rivets are sized by length, not grip dash: leave the grip empty.');
       if (b.stemMaterial) issue('stemMaterial', 'Solid rivets have no stem.');
+      if (b.head && !isSolidRivetHead(b.head)) issue('head', SOLID_RIVET_HEAD_WORDS);
     }
   } else {
     if (!b.name) issue('name', 'Give the bin a name, like "Screw #8-32 × 1/2 pan head".');

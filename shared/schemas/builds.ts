@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { BIN_KINDS } from '../stock/kinds';
+import { TOOL_CATEGORIES } from '../tools/categories';
 import { binCodeField } from './bins';
 import { lineEstimateSchema, rivetLineSchema } from './estimate';
 import { idParam } from './fields';
@@ -148,7 +149,8 @@ export const kitItemSchema = z.object({
   need: z.string(),
   /** Temporary fasteners and drill holes: how many the assembly needs of this size. */
   count: z.number().nullable(),
-  tool: z.object({ code: z.string(), name: z.string(), status: z.string() }).nullable(),
+  /** The crib's pick; its category says which tool cautions the kit shows. */
+  tool: z.object({ code: z.string(), name: z.string(), status: z.string(), category: z.enum(TOOL_CATEGORIES) }).nullable(),
   note: z.string().nullable(),
 });
 export type KitItem = z.infer<typeof kitItemSchema>;

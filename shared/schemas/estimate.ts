@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { ESTIMATE_DIAMETERS, ESTIMATE_RIVET_KINDS, ROW_PATTERNS } from '../estimate/rivet-rules';
-import { RIVET_HEADS } from '../stock/kinds';
+import { isSolidRivetHead, RIVET_HEADS, SOLID_RIVET_HEAD_WORDS } from '../stock/kinds';
 
 const positiveLength = (what: string) =>
   z.number({ error: `Enter the ${what} as a number.` }).positive({ error: `The ${what} must be more than 0.` }).max(100_000, { error: `That ${what} is too large.` });
@@ -13,7 +13,7 @@ export const rivetSpecSchema = z.strictObject({
     .int({ error: 'The diameter is a whole number of 32nds.' })
     .refine((d) => (ESTIMATE_DIAMETERS as readonly number[]).includes(d), { error: 'Use a diameter of 3, 4, 5, 6 or 8 (32nds: 3/32 to 1/4 in).' }),
   material: z.string().trim().min(1).max(40).optional(),
-});
+}).refine((r) => r.kind !== 'solid' || isSolidRivetHead(r.head), { error: SOLID_RIVET_HEAD_WORDS, path: ['head'] });
 
 export const rivetLineSchema = z
   .strictObject({

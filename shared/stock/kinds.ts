@@ -48,8 +48,21 @@ export const rivetHeadLabel = (head: RivetHead, solid: boolean): string => (soli
 
 const firstUpper = (text: string): string => text.replace(/^./, (c) => c.toUpperCase());
 
-/** A form's head choices, worded for the rivet: "Universal head" on a solid rivet, "Dome" on a blind one; the stored value is the same. */
-export const rivetHeadChoices = (solid: boolean): { value: RivetHead; label: string }[] => RIVET_HEADS.map((h) => ({ value: h, label: firstUpper(rivetHeadLabel(h, solid)) }));
+/**
+ * The heads a solid rivet comes with: universal (MS20470) and 100° countersunk (MS20426), the solid
+ * rivet heads the references name (AC 43.13-1B para 4-57a; NAVEDTRA 14315 Table 3-1). A large flange
+ * is a blind-rivet head.
+ */
+export const SOLID_RIVET_HEADS = ['dome', 'countersunk'] as const satisfies readonly RivetHead[];
+export const isSolidRivetHead = (head: RivetHead): boolean => (SOLID_RIVET_HEADS as readonly RivetHead[]).includes(head);
+export const SOLID_RIVET_HEAD_WORDS = 'A solid rivet’s head is universal or 100° countersunk; large flange is a blind-rivet head.';
+
+/**
+ * A form's head choices, worded for the rivet: "Universal head" on a solid rivet, "Dome" on a blind one; the stored value is the same.
+ * A solid rivet is offered its own heads only; a form that still holds another (`current`) keeps it listed, so the field shows what the form holds and the refusal beside it makes sense.
+ */
+export const rivetHeadChoices = (solid: boolean, current?: RivetHead | null): { value: RivetHead; label: string }[] =>
+  RIVET_HEADS.filter((h) => !solid || isSolidRivetHead(h) || h === current).map((h) => ({ value: h, label: firstUpper(rivetHeadLabel(h, solid)) }));
 
 /** The rivet gun set for a solid rivet's head, in the words the crib kit and the assembly editor share. */
 export const RIVET_SET_WORDS: Record<RivetHead, string> = { dome: 'universal-head rivet set', flange: 'universal-head rivet set', countersunk: 'flush rivet set' };

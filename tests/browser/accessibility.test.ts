@@ -29,6 +29,8 @@ interface DemoIds {
   toolCode: string;
   /** A tool that needs a sign-off: its page offers "Ask for a sign-off" to whoever lacks it. */
   signoffToolCode: string;
+  /** A drill bit on the shelf: its page shows the checkout with the drilling cautions. */
+  drillBitCode: string;
   binCode: string;
   buildId: number;
   assemblyId: number;
@@ -39,6 +41,7 @@ function demoIds(app: BuiltApp): DemoIds {
   try {
     const tool = db.prepare('select code from tools order by id limit 1').get() as { code: string };
     const signoffTool = db.prepare('select code from tools where required_signoff_id is not null order by id limit 1').get() as { code: string };
+    const drillBit = db.prepare("select code from tools where category = 'drill_bit' and status = 'available' and required_signoff_id is null order by id limit 1").get() as { code: string };
     const bin = db.prepare('select code from bins order by id limit 1').get() as { code: string };
     const assembly = db
       .prepare(
@@ -46,7 +49,7 @@ function demoIds(app: BuiltApp): DemoIds {
          join users u on u.id = b.owner_id where u.email = 'member@example.org' order by a.id limit 1`,
       )
       .get() as { assemblyId: number; buildId: number };
-    return { toolCode: tool.code, signoffToolCode: signoffTool.code, binCode: bin.code, ...assembly };
+    return { toolCode: tool.code, signoffToolCode: signoffTool.code, drillBitCode: drillBit.code, binCode: bin.code, ...assembly };
   } finally {
     db.close();
   }
@@ -62,6 +65,8 @@ function pagesOf(role: Role, ids: DemoIds): string[] {
     '/queue',
     `/tools/${ids.signoffToolCode}`,
     '/loans',
+    // Not right after another tool's page: the same route keeps its heading, which the wait looks for anew.
+    `/tools/${ids.drillBitCode}`,
     '/bins',
     `/bins/${ids.binCode}`,
     '/tab',

@@ -157,6 +157,26 @@ describe('the assembly editor', () => {
     expect(posts(calls)).toHaveLength(0);
   });
 
+  it('keeps a large flange head on the list when a line becomes solid, says why at the head on save, and saves once it is changed', async () => {
+    const calls = serve();
+    renderEditor();
+    await userEvent.type(await screen.findByLabelText('Assembly name'), 'Fairing');
+    await userEvent.type(line(1).getByLabelText('Length (in)'), '12');
+    await userEvent.type(line(1).getByLabelText('Target pitch (in)'), '1');
+    await userEvent.type(line(1).getByLabelText('Sheet 1 thickness (in)'), '0.040');
+    await userEvent.selectOptions(line(1).getByLabelText('Head'), 'Large flange');
+    await userEvent.selectOptions(line(1).getByLabelText('Rivet kind'), 'Solid rivet');
+    // AC 43.13-1B para 4-57a; NAVEDTRA 14315 Table 3-1: solid rivet heads are universal and 100° countersunk.
+    expect(line(1).getByLabelText<HTMLSelectElement>('Head').selectedOptions[0]!.textContent).toBe('Large flange');
+    await userEvent.click(save());
+    expect(await line(1).findByText('A solid rivet’s head is universal or 100° countersunk; large flange is a blind-rivet head.')).toBeTruthy();
+    expect(posts(calls)).toHaveLength(0);
+    await userEvent.selectOptions(line(1).getByLabelText('Head'), 'Universal head');
+    await userEvent.click(save());
+    await waitFor(() => expect(posts(calls)).toHaveLength(1));
+    expect(posts(calls)[0]!.body).toMatchObject({ lines: [{ rivet: { kind: 'solid', head: 'dome' } }] });
+  });
+
   it('says at the line when a hole count packs the rivets below the minimum pitch', async () => {
     serve();
     renderEditor();
@@ -195,6 +215,11 @@ describe('the assembly editor', () => {
     const headShown = (n: number) => line(n).getByLabelText<HTMLSelectElement>('Head').selectedOptions[0]!.textContent;
     expect(headShown(2)).toBe('Universal head');
     expect(headShown(1)).toBe('Dome');
+    // Solid rivet heads: universal (MS20470) and 100° countersunk (MS20426) only (AC 43.13-1B para 4-57a;
+    // NAVEDTRA 14315 Table 3-1); a large flange is a blind-rivet head.
+    const headChoices = (n: number) => [...line(n).getByLabelText<HTMLSelectElement>('Head').options].map((o) => o.textContent);
+    expect(headChoices(2)).toEqual(['Universal head', '100° countersunk']);
+    expect(headChoices(1)).toEqual(['Dome', '100° countersunk', 'Large flange']);
 
     // Line 1 has no edge distance: the larger of 2D = 0.3125 in and the build's 0.5 in floor; (20 − 1) / 1 → 20 holes at 1 in (arithmetic).
     await waitFor(() => expect(fact(lineEstimate(1), 'Holes')).toBe('20'));

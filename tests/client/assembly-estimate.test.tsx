@@ -63,8 +63,8 @@ const ESTIMATE: AssemblyEstimate = estimateFixture(7, {
     },
   ],
   kit: [
-    { role: 'puller', need: 'A rivet puller for 5/32 in blind rivets', count: null, tool: { code: 'T-0012', name: 'Hand rivet puller', status: 'available' }, note: null },
-    { role: 'drill_bit', need: '#30 drill bit', count: 21, tool: { code: 'T-0031', name: '#30 drill bit, 6 in long', status: 'on_loan' }, note: null },
+    { role: 'puller', need: 'A rivet puller for 5/32 in blind rivets', count: null, tool: { code: 'T-0012', name: 'Hand rivet puller', status: 'available', category: 'hand_rivet_puller' }, note: null },
+    { role: 'drill_bit', need: '#30 drill bit', count: 21, tool: { code: 'T-0031', name: '#30 drill bit, 6 in long', status: 'on_loan', category: 'drill_bit' }, note: null },
     { role: 'temporary_fastener_tray', need: '3/32 in temporary fasteners', count: 7, tool: null, note: 'No tray of 3/32 in temporary fasteners in the crib.' },
   ],
   caution: CAUTION,

@@ -49,8 +49,10 @@ describe('BinForm', () => {
     expect(screen.queryByLabelText('Stem')).toBeNull();
     expect(optionTexts('Length')).toContain('−6 (3/8 in)');
     expect(optionTexts('Length')).toContain('−3.5 (7/32 in)');
-    // An MS20470 head is the universal head; dome is the blind rivet's word (trade-checks.md §4).
-    expect(optionTexts('Head')).toEqual(['Choose the head', 'Universal head', '100° countersunk', 'Large flange']);
+    // An MS20470 head is the universal head; dome is the blind rivet's word (trade-checks.md §4). The solid
+    // rivet heads are universal (MS20470) and 100° countersunk (MS20426) only: AC 43.13-1B para 4-57a;
+    // NAVEDTRA 14315 Table 3-1. A large flange is a blind-rivet head.
+    expect(optionTexts('Head')).toEqual(['Choose the head', 'Universal head', '100° countersunk']);
     await userEvent.selectOptions(screen.getByLabelText('Head'), 'dome');
     await userEvent.selectOptions(screen.getByLabelText('Body material'), '2117-T4');
     await userEvent.selectOptions(screen.getByLabelText('Diameter'), '4');
@@ -83,6 +85,24 @@ describe('BinForm', () => {
       packSize: 100,
       initialQuantity: 1000,
     });
+  });
+
+  it('keeps a large flange head on the list when a blind bin becomes solid, so the field shows it, and refuses it in words', async () => {
+    const onSubmit = renderForm();
+    await userEvent.selectOptions(screen.getByLabelText('Head'), 'flange');
+    await userEvent.selectOptions(screen.getByLabelText('Kind'), 'solid_rivet');
+    expect(screen.getByLabelText<HTMLSelectElement>('Head').selectedOptions[0]!.textContent).toBe('Large flange');
+    await userEvent.selectOptions(screen.getByLabelText('Body material'), '2117-T4');
+    await userEvent.selectOptions(screen.getByLabelText('Diameter'), '1/8 in (−4)');
+    await userEvent.selectOptions(screen.getByLabelText('Length'), '6');
+    await userEvent.click(screen.getByRole('button', { name: 'Add the bin' }));
+    expect(await screen.findByText('A solid rivet’s head is universal or 100° countersunk; large flange is a blind-rivet head.')).toBeTruthy();
+    expect(onSubmit).not.toHaveBeenCalled();
+    await userEvent.selectOptions(screen.getByLabelText('Head'), 'dome');
+    expect(optionTexts('Head')).toEqual(['Choose the head', 'Universal head', '100° countersunk']);
+    await userEvent.click(screen.getByRole('button', { name: 'Add the bin' }));
+    await waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
+    expect(onSubmit.mock.calls[0]![0]).toMatchObject({ kind: 'solid_rivet', head: 'dome' });
   });
 
   it('refuses a rivet bin without its spec, naming each missing part', async () => {

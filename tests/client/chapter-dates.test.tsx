@@ -58,14 +58,14 @@ describe('OfflineCheckoutForm', () => {
     setChapterTimeZone('America/Chicago');
     vi.useFakeTimers({ toFake: ['Date'] });
     vi.setSystemTime(new Date('2026-12-02T05:30:00Z')); // Tuesday 23:30 in Chicago, Wednesday in UTC
-    const tool = { code: 'T-0007', name: 'Air drill', loanDays: 7, accessories: [] } as unknown as CatalogueTool;
+    const tool = { code: 'T-0007', name: 'Air drill', category: 'air_drill', loanDays: 7, accessories: [] } as unknown as CatalogueTool;
     renderWithProviders(<OfflineCheckoutForm copy={{} as StoredCatalogue} tool={tool} />);
     expect(screen.getByText('Tuesday, December 8')).toBeTruthy();
   });
 });
 
 describe('CheckoutForm', () => {
-  const tool = (defaultDueAt: string) => ({ code: 'T-0007', accessories: [], missingAccessories: [], forYou: { defaultDueAt } }) as unknown as ToolForYou;
+  const tool = (defaultDueAt: string) => ({ code: 'T-0007', category: 'air_drill', accessories: [], missingAccessories: [], forYou: { defaultDueAt } }) as unknown as ToolForYou;
   const csrf = { status: 200, body: { token: 'csrf-token' } };
 
   it('offers the due day of the chapter, not the UTC date of the due moment, and sends no date when it is kept', async () => {

@@ -147,6 +147,17 @@ describe('POST /api/bins/import/preview', () => {
 });
 
 describe('POST /api/bins/import', () => {
+  // Solid rivet heads: MS20470 universal and MS20426 100° countersunk (AC 43.13-1B para 4-57a; NAVEDTRA 14315 Table 3-1).
+  it('refuses a solid rivet row with a large flange head, naming the head column in words', async () => {
+    const before = await binCount();
+    const res = await post(qm, '/api/bins/import', { csv: csvOf(GOOD_BLIND, ',Solid rivet,,Large flange,2117-T4,,4,,6,each,100,0.03,,0') });
+    expect(res.status).toBe(400);
+    expect(errorEnvelopeSchema.parse(res.body).error.issues).toEqual([
+      { path: 'line 3.head', message: 'Line 3, head: a solid rivet’s head is universal or 100° countersunk; large flange is a blind-rivet head.' },
+    ]);
+    expect(await binCount()).toBe(before);
+  });
+
   it('refuses the whole file when one row is bad, and writes nothing', async () => {
     await addBinAs(qm, blindRivetBin());
     const before = await binCount();

@@ -222,6 +222,37 @@ describe('what a scan offers', () => {
   });
 });
 
+// The solid rivet heads the references name are MS20470 (universal) and MS20426 (100° countersunk)
+// (AC 43.13-1B para 4-57a; NAVEDTRA 14315 Table 3-1); a large flange is a blind-rivet head.
+describe('a solid rivet bin’s head', () => {
+  const FLANGE_WORDS = 'A solid rivet’s head is universal or 100° countersunk; large flange is a blind-rivet head.';
+  const solidBin = (head: string) => blindRivetBin({ kind: 'solid_rivet', head, material: '2117-T4', stemMaterial: null, grip16: null, length16: 6 });
+
+  it('refuses a solid rivet bin with a large flange head: 400 naming head, in words', async () => {
+    const res = await post(qm, '/api/bins', solidBin('flange'));
+    expect(res.status).toBe(400);
+    expect(res.body.error).toMatchObject({ code: 'VALIDATION_FAILED', issues: [{ path: 'head', message: FLANGE_WORDS }] });
+    expect((await member.agent.get('/api/bins')).body.data).toEqual([]);
+  });
+
+  it('takes a universal or 100° countersunk solid rivet, and a large flange blind rivet', async () => {
+    expect((await post(qm, '/api/bins', solidBin('dome'))).status).toBe(201);
+    expect((await post(qm, '/api/bins', solidBin('countersunk'))).status).toBe(201);
+    expect((await post(qm, '/api/bins', blindRivetBin({ kind: 'blind_general', head: 'flange', material: 'aluminium', stemMaterial: 'aluminium' }))).status).toBe(201);
+  });
+
+  it('refuses an edit that gives a solid rivet bin a large flange head, or makes a large flange bin solid', async () => {
+    const solid = await addBinAs(qm, solidBin('dome'));
+    const toFlange = await patch(qm, `/api/bins/${solid.code}`, { head: 'flange' });
+    expect(toFlange.status).toBe(400);
+    expect(toFlange.body.error.issues).toEqual([{ path: 'head', message: FLANGE_WORDS }]);
+    const blind = await addBinAs(qm, blindRivetBin({ head: 'flange' }));
+    const toSolid = await patch(qm, `/api/bins/${blind.code}`, { kind: 'solid_rivet', stemMaterial: null, grip16: null, length16: 6 });
+    expect(toSolid.status).toBe(400);
+    expect(toSolid.body.error.issues).toEqual([{ path: 'head', message: FLANGE_WORDS }]);
+  });
+});
+
 describe('reversing what has moved on', () => {
   it('refuses to reverse a draw that has a return against it (409 RETURN_AGAINST_DRAW) until the return is reversed', async () => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));

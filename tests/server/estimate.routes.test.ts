@@ -109,4 +109,14 @@ describe('POST /api/estimate', () => {
     const anon = await t.anonymous();
     expect((await post(anon, '/api/estimate', { unit: 'in', lines: [{ length: 10, pitch: 1, stack: [0.04], rivet }] })).status).toBe(401);
   });
+
+  // Solid rivet heads: MS20470 universal and MS20426 100° countersunk (AC 43.13-1B para 4-57a;
+  // NAVEDTRA 14315 Table 3-1); a large flange is a blind-rivet head.
+  it('refuses a solid rivet line with a large flange head: 400 naming the head, in words', async () => {
+    const line = (kind: string, head: string) => ({ length: 10, pitch: 1, stack: [0.04], rivet: { kind, head, diameter32: 4, material: '2117-T4' } });
+    const res = await post(member, '/api/estimate', { unit: 'in', lines: [line('solid', 'dome'), line('solid', 'flange')] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.issues).toEqual([{ path: 'lines.1.rivet.head', message: 'A solid rivet’s head is universal or 100° countersunk; large flange is a blind-rivet head.' }]);
+    expect((await post(member, '/api/estimate', { unit: 'in', lines: [line('solid', 'countersunk'), line('blind-general', 'flange')] })).status).toBe(200);
+  });
 });

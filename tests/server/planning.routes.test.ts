@@ -340,7 +340,8 @@ describe('the crib kit', () => {
       ['temporary_fastener_tray', 'Temporary fasteners 5/32 in, tray 2 of 2', 20, c.trayB.code, null],
       ['deburring_tool', 'Deburring tool', null, c.deburr.code, 'all on loan'],
     ]);
-    expect(e.kit[3]!.tool).toEqual({ code: c.bit30.code, name: 'Drill bit #30', status: 'on_loan' });
+    // The category tells the client which tool cautions the kit shows.
+    expect(e.kit[3]!.tool).toEqual({ code: c.bit30.code, name: 'Drill bit #30', status: 'on_loan', category: 'drill_bit' });
   });
 
   it('picks a rivet gun with the set for each head, and a bucking bar', async () => {
@@ -355,6 +356,7 @@ describe('the crib kit', () => {
       ['rivet_set', 'Flush rivet set for 3/32 in', null, both.code, null],
       ['bucking_bar', 'Bucking bar', null, bar.code, null],
     ]);
+    expect(e.kit.slice(0, 4).map((k) => k.tool?.category)).toEqual(['rivet_gun', 'rivet_gun', 'rivet_gun', 'bucking_bar']);
     expect(plain.code).not.toBe(both.code);
   });
 

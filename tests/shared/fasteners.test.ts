@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { blindGripForStack, blindGripRange, fastenerDesignation, inchFraction, solidLengthDash, solidRivetNumber, type FastenerSpec } from '@shared/stock/fasteners';
-import { RIVET_SET_WORDS, rivetHeadLabel } from '@shared/stock/kinds';
+import { RIVET_SET_WORDS, rivetHeadChoices, rivetHeadLabel } from '@shared/stock/kinds';
 
 const rivet = (over: Partial<FastenerSpec>): FastenerSpec => ({
   kind: 'solid_rivet',
@@ -42,11 +42,6 @@ describe('solid rivet numbers (AC 43.13-1B para 4-57a; NAVEDTRA 14315 Table 3-1)
     expect(solidRivetNumber(rivet({ material, head: 'countersunk' }))).toBeUndefined();
     expect(fastenerDesignation(rivet({ material }))).toBe(`Solid, universal head, ${material} · 1/8 in · 3/8 in long`);
     expect(fastenerDesignation(rivet({ material, head: 'countersunk', diameter32: 3, length16: 4 }))).toBe(`Solid, 100° countersunk, ${material} · 3/32 in · 1/4 in long`);
-  });
-
-  it('falls back to our readable form where no standard number exists (large flange solid rivet)', () => {
-    expect(solidRivetNumber(rivet({ head: 'flange' }))).toBeUndefined();
-    expect(fastenerDesignation(rivet({ head: 'flange' }))).toBe('Solid, large flange, 2117-T4 · 1/8 in · 3/8 in long');
   });
 });
 
@@ -96,6 +91,18 @@ describe('head words (trade-checks.md §4: MS20470 is the universal head)', () =
     expect(rivetHeadLabel('dome', false)).toBe('dome');
     expect(rivetHeadLabel('countersunk', true)).toBe('100° countersunk');
     expect(rivetHeadLabel('flange', false)).toBe('large flange');
+  });
+
+  // Solid rivet heads: MS20470 universal and MS20426 100° countersunk (AC 43.13-1B para 4-57a; NAVEDTRA 14315 Table 3-1).
+  it('offers a solid rivet the universal and 100° countersunk heads only, and a blind rivet the large flange too', () => {
+    expect(rivetHeadChoices(true)).toEqual([
+      { value: 'dome', label: 'Universal head' },
+      { value: 'countersunk', label: '100° countersunk' },
+    ]);
+    expect(rivetHeadChoices(false).map((c) => c.label)).toEqual(['Dome', '100° countersunk', 'Large flange']);
+    // A form that already holds a large flange keeps it listed, so the field shows it beside the refusal.
+    expect(rivetHeadChoices(true, 'flange').map((c) => c.value)).toEqual(['dome', 'countersunk', 'flange']);
+    expect(rivetHeadChoices(true, 'countersunk').map((c) => c.value)).toEqual(['dome', 'countersunk']);
   });
 
   it('names a rivet gun set the way the crib kit does: universal-head for protruding heads, flush for countersunk', () => {

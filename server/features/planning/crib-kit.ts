@@ -60,7 +60,7 @@ const item = (role: KitRole, need: string, count: number | null, tool: CribTool 
   role,
   need,
   count,
-  tool: tool ? { code: tool.code, name: tool.name, status: tool.status } : null,
+  tool: tool ? { code: tool.code, name: tool.name, status: tool.status, category: tool.category } : null,
   note,
 });
 

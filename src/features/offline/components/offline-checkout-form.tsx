@@ -3,6 +3,7 @@ import type { CatalogueTool } from '@shared/schemas/offline';
 import { AccessoryChecklist } from '@/components/ui/accessory-checklist';
 import { loanDueAt } from '@shared/time/chapter-time';
 import { Button } from '@/components/ui/button';
+import { ToolCautions } from '@/components/ui/tool-cautions';
 import { chapterTimeZone } from '@/lib/chapter-zone';
 import { formatDueDay } from '@/lib/format';
 import { queueFromCopy } from '../api/queue-from-copy';
@@ -30,6 +31,7 @@ export function OfflineCheckoutForm({ copy, tool }: { copy: StoredCatalogue; too
       {tool.accessories.length > 0 && (
         <AccessoryChecklist legend="Tick what you take with it" items={tool.accessories} ticked={ticked} onChange={setTicked} />
       )}
+      <ToolCautions categories={[tool.category]} />
       <Button onClick={() => void submit()} busy={busy} className="w-full text-lg">
         Check out {tool.code}
       </Button>

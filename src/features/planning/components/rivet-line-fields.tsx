@@ -19,7 +19,7 @@ const RADIO = 'flex min-h-12 flex-1 cursor-pointer items-center gap-3 rounded-lg
 /** One rivet line: where it runs, how it is spaced, what it fastens, with the rivet; its estimate beneath. */
 export function RivetLineFields({ index, unit, live, onRemove }: { index: number; unit: LengthUnit; live: LiveLine | undefined; onRemove: () => void }) {
   const { control, register, formState } = useFormContext<AssemblyFormValues>();
-  const [spacing, kind, rows] = useWatch({ control, name: [`lines.${index}.spacing`, `lines.${index}.kind`, `lines.${index}.rows`] });
+  const [spacing, kind, rows, head] = useWatch({ control, name: [`lines.${index}.spacing`, `lines.${index}.kind`, `lines.${index}.rows`, `lines.${index}.head`] });
   const err = (field: string) => errorAt(formState.errors, `lines.${index}.${field}`);
   const n = index + 1;
 
@@ -111,7 +111,7 @@ export function RivetLineFields({ index, unit, live, onRemove }: { index: number
 
       <div className="grid gap-4 sm:grid-cols-2">
         <SelectField label="Rivet kind" options={KIND_OPTIONS} error={err('kind')} {...register(`lines.${index}.kind`)} />
-        <SelectField label="Head" options={rivetHeadChoices(kind === 'solid')} error={err('head')} {...register(`lines.${index}.head`)} />
+        <SelectField label="Head" options={rivetHeadChoices(kind === 'solid', head)} error={err('head')} {...register(`lines.${index}.head`)} />
         <SelectField label="Diameter" hint="The dash is in 32nds of an inch." options={DIAMETER_OPTIONS} error={err('diameter32')} {...register(`lines.${index}.diameter32`)} />
         <SelectField label="Material (optional)" options={MATERIAL_OPTIONS} error={err('material')} {...register(`lines.${index}.material`)} />
       </div>

@@ -94,7 +94,7 @@ const opt = <T extends string | number>(values: readonly T[], label: (v: T) => s
   ...values.map((v) => ({ value: String(v), label: label(v) })),
 ];
 const KIND_OPTIONS = BIN_KINDS.map((k) => ({ value: k, label: BIN_KIND_LABELS[k] }));
-const headOptions = (solid: boolean) => [{ value: '', label: 'Choose the head' }, ...rivetHeadChoices(solid)];
+const headOptions = (solid: boolean, current: BinFields['head'] | undefined) => [{ value: '', label: 'Choose the head' }, ...rivetHeadChoices(solid, current)];
 const MATERIAL_OPTIONS = opt(RIVET_MATERIALS, (m) => m, 'Choose the material');
 const STEM_OPTIONS = opt(STEM_MATERIALS, (m) => m, 'Choose the stem');
 const DIAMETER_OPTIONS = opt(
@@ -159,7 +159,7 @@ export function BinForm({ bin, submitLabel, onSubmit }: { bin?: BinFields; submi
           )}
           {rivet && (
             <>
-              <SelectField label="Head" options={headOptions(kind === 'solid_rivet')} error={errors.head?.message} {...select('head', asNullable)} />
+              <SelectField label="Head" options={headOptions(kind === 'solid_rivet', head)} error={errors.head?.message} {...select('head', asNullable)} />
               <SelectField label="Body material" options={MATERIAL_OPTIONS} error={errors.material?.message} {...select('material', asNullable)} />
               {blind && <SelectField label="Stem" options={STEM_OPTIONS} error={errors.stemMaterial?.message} {...select('stemMaterial', asNullable)} />}
               <SelectField label="Diameter" hint="The dash is in 32nds of an inch." options={DIAMETER_OPTIONS} error={errors.diameter32?.message} {...select('diameter32', asNullableNumber)} />

@@ -6,6 +6,7 @@ import { chapterDay, endOfChapterDay, startOfDayNamed } from '@shared/time/chapt
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
+import { ToolCautions } from '@/components/ui/tool-cautions';
 import { messageOf } from '@/lib/errors';
 import { chapterTimeZone } from '@/lib/chapter-zone';
 import { formatDueDay } from '@/lib/format';
@@ -48,6 +49,7 @@ export function CheckoutForm({ tool, onDone }: { tool: ToolForYou; onDone?: () =
         <AccessoryChecklist legend="Tick what you take with it" items={takeable} ticked={ticked} onChange={setTicked} />
       )}
       {missing.length > 0 && <p className="text-sm text-steel">Missing from the crib: {missing.join(', ')}.</p>}
+      <ToolCautions categories={[tool.category]} />
       <Button onClick={submit} busy={checkOut.isPending} className="w-full text-lg">
         Check out {tool.code}
       </Button>

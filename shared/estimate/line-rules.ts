@@ -162,7 +162,15 @@ export function lineRules(line: RivetLineInput, estimate: LineEstimate, options:
 
 /** Rule sets by maximum pitch, then by a bin's hole drill ('' for none), then by the line's code. */
 const ruleSets = new Map<number, Map<string, Map<number, readonly LineRule[]>>>();
+/** The last lookup: the lines of one estimate share the maximum and, mostly, the drill. */
+let last: { maxD: number; drill: string; sets: Map<number, readonly LineRule[]> } | undefined;
 function setsFor(maxD: number, drill: string): Map<number, readonly LineRule[]> {
+  if (last && last.maxD === maxD && last.drill === drill) return last.sets;
+  const sets = lookUpSets(maxD, drill);
+  last = { maxD, drill, sets };
+  return sets;
+}
+function lookUpSets(maxD: number, drill: string): Map<number, readonly LineRule[]> {
   let byDrill = ruleSets.get(maxD);
   if (!byDrill) {
     byDrill = new Map();

@@ -7,7 +7,7 @@ export type Fact = readonly [term: string, value: string, why?: readonly LineRul
 /** Terms and their values side by side, values in the figures' font, a "Why?" at the end of the row. */
 export function FactList({ facts }: { facts: readonly Fact[] }) {
   return (
-    <dl className="grid grid-cols-[auto_minmax(0,1fr)_auto] items-center gap-x-3 gap-y-1 text-base">
+    <dl className="grid grid-cols-[fit-content(35%)_minmax(0,1fr)_auto] items-center gap-x-2 gap-y-1 text-base">
       {facts.map(([term, value, why]) => (
         <div key={term} className="contents">
           <dt className="col-start-1 text-sm text-steel">{term}</dt>

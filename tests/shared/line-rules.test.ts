@@ -48,3 +48,32 @@ describe('the rules of a line', () => {
     expect(r.lines[0]!.rules[0]!.rule).toBe('2.5D, countersunk head');
   });
 });
+
+describe('every computed value has its rule', () => {
+  it('on varied lines: one rule per value the line shows, the transverse pitch exactly when there are rows', async () => {
+    const { seededRandom } = await import('@shared/random/seeded');
+    const rnd = seededRandom(7);
+    const kinds = ['blind-structural', 'blind-general', 'solid'] as const;
+    const heads = ['dome', 'countersunk', 'flange'] as const;
+    const input: RivetLineInput[] = Array.from({ length: 300 }, (_, i) => ({
+      length: 10 + rnd() * 30,
+      ...(i % 4 === 0 ? { holesPerRow: 8 + (i % 5) } : { pitch: 0.6 + rnd() }),
+      ...(i % 3 === 0 ? {} : { edgeDistance: 0.3 + rnd() * 0.2 }),
+      rows: 1 + (i % 3),
+      ...(i % 2 === 0 ? { rowPattern: 'staggered' as const } : {}),
+      ...(i % 5 === 0 ? { rowSpacing: 0.5 } : {}),
+      stack: [0.032, 0.04],
+      rivet: { kind: kinds[i % 3]!, head: heads[(i >> 1) % 3]!, diameter32: [3, 4, 5][i % 3]! },
+    }));
+    const out = lines(input, { edgeFloorIn: 0.35, maxPitchDiameters: 8 });
+    out.forEach((l, i) => {
+      const values = l.rules.map((r) => r.value);
+      const shown = ['edgeDistance', 'pitch', 'holesPerRow', 'holes', ...(l.transversePitch === undefined ? [] : ['transversePitch']), 'grip', 'drillSequence', 'tempFasteners'];
+      expect(values, `line ${i}`).toEqual(shown);
+      expect(l.transversePitch !== undefined, `line ${i}`).toBe((input[i]!.rows ?? 1) > 1);
+      for (const r of l.rules) expect(r.source.length, `line ${i} ${r.value}`).toBeGreaterThan(0);
+    });
+    // A few choices make a few lists.
+    expect(new Set(out.map((l) => l.rules)).size).toBeLessThan(60);
+  });
+});

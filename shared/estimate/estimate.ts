@@ -1,6 +1,8 @@
 import { DEFAULT_WASTE_PERCENT, type EstimateRivetKind } from './rivet-rules';
-import { estimateLine, type EstimateNotice, type LengthUnit, type LineEstimate, type LineOptions, type RivetLineInput } from './estimate-line';
+import { estimateLine, type EstimateNotice, type LengthUnit, type LineOptions, type RivetLineInput } from './estimate-line';
 import type { RivetHead } from '../stock/kinds';
+import { estimateCautions } from '../safety/estimate-cautions';
+import { totalsRules, withRules, type LineRule, type RuledLineEstimate, type WasteOrigin } from './line-rules';
 
 export interface EstimateInput {
   unit: LengthUnit;
@@ -33,12 +35,17 @@ export interface EstimateTotals {
   rivetsWithWaste: number;
   drillHoles: Record<string, number>;
   tempFasteners: Record<string, number>;
+  /** Why: the waste allowance used and how temporary fasteners are counted. */
+  rules: readonly LineRule[];
 }
 
 export interface EstimateResult {
-  lines: LineEstimate[];
+  /** Each line with the rule and source of every number on it. */
+  lines: RuledLineEstimate[];
   totals: EstimateTotals;
   warnings: EstimateNotice[];
+  /** Always the plans and approved data, drilling; general-purpose blind rivets when a line has them. */
+  cautions: readonly string[];
   /** Not part of the /api/estimate answer: the needs by fastener, the tool sizes, the waste used. */
   needs: FastenerNeed[];
   nosepieces: { kind: 'blind' | 'solid'; diameter32: number; head: RivetHead }[];
@@ -85,22 +92,24 @@ function atOnce(into: Record<string, number>, from: Record<string, number>): voi
  */
 export function estimate(input: EstimateInput, options: EstimateOptions = {}): EstimateResult | EstimateErrors {
   const wastePercent = input.wastePercent ?? options.defaultWastePercent ?? DEFAULT_WASTE_PERCENT;
+  const wasteOrigin: WasteOrigin = input.wastePercent !== undefined ? 'request' : options.defaultWastePercent !== undefined ? 'chapter' : 'default';
   const shared: LineOptions = { ...options, unit: input.unit };
   const overrides = options.finalDrillOverrides;
-  const results = input.lines.map((line, i) => estimateLine(line, overrides?.[i] ? { ...shared, finalDrillOverride: overrides[i] } : shared));
+  const optionsOf = (i: number): LineOptions => (overrides?.[i] ? { ...shared, finalDrillOverride: overrides[i] } : shared);
+  const results = input.lines.map((line, i) => estimateLine(line, optionsOf(i)));
   const errors: EstimateErrors['errors'] = [];
   for (let i = 0; i < results.length; i++) {
     const r = results[i]!;
     if ('error' in r) errors.push({ code: r.code, message: `Line ${i + 1}: ${r.message}`, line: i });
   }
   if (errors.length > 0) return { errors };
-  const lines = results as LineEstimate[];
+  const lines = results as RuledLineEstimate[];
 
-  const totals: EstimateTotals = { rivets: 0, rivetsWithWaste: 0, drillHoles: {}, tempFasteners: {} };
+  const totals: EstimateTotals = { rivets: 0, rivetsWithWaste: 0, drillHoles: {}, tempFasteners: {}, rules: totalsRules(wastePercent, wasteOrigin) };
   const needs = new Map<string, FastenerNeed>();
   const nosepieces = new Map<number, EstimateResult['nosepieces'][number]>();
   for (let i = 0; i < lines.length; i++) {
-    const l = lines[i]!;
+    const l = withRules(input.lines[i]!, lines[i]!, optionsOf(i));
     const rivet = input.lines[i]!.rivet;
     totals.rivets += l.holes;
     for (const step of l.drillSequence) totals.drillHoles[step] = (totals.drillHoles[step] ?? 0) + l.holes;
@@ -122,7 +131,7 @@ export function estimate(input: EstimateInput, options: EstimateOptions = {}): E
   for (let i = 0; i < lines.length; i++) {
     for (const w of lines[i]!.warnings) warnings.push({ code: w.code, message: `Line ${i + 1}: ${w.message}` });
   }
-  return { lines, totals, warnings, needs: [...needs.values()], nosepieces: [...nosepieces.values()], wastePercent };
+  return { lines, totals, warnings, cautions: estimateCautions(input.lines), needs: [...needs.values()], nosepieces: [...nosepieces.values()], wastePercent };
 }
 
 export const isEstimateErrors = (r: EstimateResult | EstimateErrors): r is EstimateErrors => 'errors' in r;

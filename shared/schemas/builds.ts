@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { BIN_KINDS } from '../stock/kinds';
 import { TOOL_CATEGORIES } from '../tools/categories';
 import { binCodeField } from './bins';
-import { lineEstimateSchema, rivetLineSchema } from './estimate';
+import { estimateTotalsSchema, lineEstimateSchema, rivetLineSchema } from './estimate';
 import { idParam } from './fields';
 
 export const ASSEMBLY_STATUSES = ['planned', 'in_progress', 'done'] as const;
@@ -160,12 +160,14 @@ export const assemblyEstimateSchema = z.object({
   unit: z.enum(LENGTH_UNITS),
   wastePercent: z.number(),
   lines: z.array(lineEstimateSchema.extend({ label: z.string().nullable() })),
-  totals: z.object({ rivets: z.number(), rivetsWithWaste: z.number(), drillHoles: z.record(z.string(), z.number()), tempFasteners: z.record(z.string(), z.number()) }),
+  totals: estimateTotalsSchema,
   warnings: z.array(z.object({ code: z.string(), message: z.string() })),
   errors: z.array(z.object({ code: z.string(), message: z.string(), line: z.number() })),
   bill: z.array(billLineSchema),
   kit: z.array(kitItemSchema),
   caution: z.string(),
+  /** The estimate's cautions, shown once: plans and approved data, drilling, soft blind rivets when used. */
+  cautions: z.array(z.string()).readonly(),
 });
 export type AssemblyEstimate = z.infer<typeof assemblyEstimateSchema>;
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { RULE_VALUES } from '../estimate/line-rules';
 import { ESTIMATE_DIAMETERS, ESTIMATE_RIVET_KINDS, ROW_PATTERNS } from '../estimate/rivet-rules';
 import { isSolidRivetHead, RIVET_HEADS, SOLID_RIVET_HEAD_WORDS } from '../stock/kinds';
 
@@ -46,6 +47,10 @@ export type EstimateBody = z.infer<typeof estimateBodySchema>;
 const notice = z.object({ code: z.string(), message: z.string() });
 const counts = z.record(z.string(), z.number());
 
+/** Why a number is what it is: the value it explains, the rule, and where the rule is published. */
+export const lineRuleSchema = z.object({ value: z.enum(RULE_VALUES), rule: z.string(), source: z.string() });
+const rules = z.array(lineRuleSchema).readonly();
+
 export const lineEstimateSchema = z.object({
   holesPerRow: z.number(),
   holes: z.number(),
@@ -57,11 +62,17 @@ export const lineEstimateSchema = z.object({
   drillSequence: z.array(z.string()).readonly(),
   tempFasteners: counts,
   warnings: z.array(notice).readonly(),
+  /** The rule and source of every computed value on the line. */
+  rules,
 });
+
+export const estimateTotalsSchema = z.object({ rivets: z.number(), rivetsWithWaste: z.number(), drillHoles: counts, tempFasteners: counts, rules });
 
 export const estimateResponseSchema = z.object({
   lines: z.array(lineEstimateSchema),
-  totals: z.object({ rivets: z.number(), rivetsWithWaste: z.number(), drillHoles: counts, tempFasteners: counts }),
+  totals: estimateTotalsSchema,
   warnings: z.array(notice),
+  /** The plans and approved data govern; drilling; soft blind rivets when a line has them. */
+  cautions: z.array(z.string()).readonly(),
 });
 export type EstimateResponse = z.infer<typeof estimateResponseSchema>;

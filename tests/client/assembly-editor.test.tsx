@@ -1,6 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { beforeEach, describe, expect, it } from 'vitest';
+import { DRILLING_CAUTION, SOFT_RIVET_CAUTION } from '@shared/safety/estimate-cautions';
 import type { Assembly, Build } from '@shared/schemas/builds';
 import { AssemblyEditRoute, assemblyEditLoader, AssemblyNewRoute, assemblyNewLoader } from '@/app/routes/app/assembly-edit';
 import { setCsrfToken } from '@/lib/api-client';
@@ -175,6 +176,35 @@ describe('the assembly editor', () => {
     await userEvent.click(save());
     await waitFor(() => expect(posts(calls)).toHaveLength(1));
     expect(posts(calls)[0]!.body).toMatchObject({ lines: [{ rivet: { kind: 'solid', head: 'dome' } }] });
+  });
+
+  it('shows a “Why?” beside each number of a line with its rule and source, and the cautions once, the soft blind rivet one when chosen', async () => {
+    serve();
+    renderEditor();
+    await userEvent.type(await screen.findByLabelText('Assembly name'), 'Fairing');
+    const cautionBox = () => screen.getByText('Caution: a plan for stock, not a design').parentElement!;
+    expect(within(cautionBox()).getByText(DRILLING_CAUTION)).toBeTruthy();
+    expect(within(cautionBox()).queryByText(SOFT_RIVET_CAUTION)).toBeNull();
+
+    // 12 in, 1 in target pitch, 3/32 in countersunk blind rivets, edge left to the rule: 2.5D = 0.234375 in (FAA-H-8083-31).
+    await userEvent.type(line(1).getByLabelText('Length (in)'), '12');
+    await userEvent.type(line(1).getByLabelText('Target pitch (in)'), '1');
+    await userEvent.type(line(1).getByLabelText('Sheet 1 thickness (in)'), '0.040');
+    await userEvent.selectOptions(line(1).getByLabelText('Head'), 'countersunk');
+    await waitFor(() => expect(fact(lineEstimate(1), 'Edge distance')).toBe('0.2344 in'));
+    const why = within(lineEstimate(1)).getByRole('button', { name: 'Why? Edge distance' });
+    const panel = document.getElementById(why.getAttribute('aria-controls')!)!;
+    expect(panel.hidden).toBe(true);
+    await userEvent.click(why);
+    expect(why.getAttribute('aria-expanded')).toBe('true');
+    expect(panel.textContent).toBe('2.5D, countersunk head. Source: FAA-H-8083-31.');
+    await userEvent.click(within(lineEstimate(1)).getByRole('button', { name: 'Why? Holes' }));
+    expect(within(lineEstimate(1)).getByText(/n = ⌈\(L − 2e\) \/ p⌉ \+ 1/).textContent).toContain('Source: common practice.');
+
+    await userEvent.click(line(1).getByLabelText('Structural line (carries load)'));
+    await userEvent.selectOptions(line(1).getByLabelText('Rivet kind'), 'General-purpose blind rivet');
+    await waitFor(() => expect(within(cautionBox()).getByText(SOFT_RIVET_CAUTION)).toBeTruthy());
+    expect(screen.getAllByText(DRILLING_CAUTION)).toHaveLength(1);
   });
 
   it('says at the line when a hole count packs the rivets below the minimum pitch', async () => {

@@ -1,6 +1,9 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { beforeEach, describe, expect, it } from 'vitest';
+import type { RivetLineInput } from '@shared/estimate/estimate-line';
+import { lineRules, totalsRules } from '@shared/estimate/line-rules';
+import { cautionsFor, DRILLING_CAUTION } from '@shared/safety/estimate-cautions';
 import type { AssemblyEstimate, KitHoldsResult } from '@shared/schemas/builds';
 import { AssemblyDetailRoute, assemblyDetailLoader } from '@/app/routes/app/assembly-detail';
 import { setCsrfToken } from '@/lib/api-client';
@@ -15,9 +18,12 @@ const ASSEMBLY = rudderFixture({ status: 'planned' });
 const CAUTION = 'Gripline plans stock and tools; it does not design structures. The kit’s plans, approved data and licensed practice govern.';
 
 /** The server's answer for that assembly: figures as the shared estimate gives them for the line (see assembly-editor.test.tsx). */
+const FIGURES = { holesPerRow: 21, holes: 21, pitch: 0.9625, edgeDistance: 0.375, grip: 2, drillSequence: ['#40', '#30', '#20'], tempFasteners: { '3/32': 7, '1/8': 7, '5/32': 7 }, warnings: [] };
 const ESTIMATE: AssemblyEstimate = estimateFixture(7, {
-  lines: [{ label: 'Skin to spar', holesPerRow: 21, holes: 21, pitch: 0.9625, edgeDistance: 0.375, grip: 2, drillSequence: ['#40', '#30', '#20'], tempFasteners: { '3/32': 7, '1/8': 7, '5/32': 7 }, warnings: [] }],
-  totals: { rivets: 21, rivetsWithWaste: 23, drillHoles: { '#40': 21, '#30': 21, '#20': 21 }, tempFasteners: { '3/32': 7, '1/8': 7, '5/32': 7 } },
+  // The rules the shared estimate gives that line: edge given on the line, pitch from the target pitch, blind grip band.
+  lines: [{ label: 'Skin to spar', ...FIGURES, rules: lineRules(ASSEMBLY.lines[0] as RivetLineInput, FIGURES, { unit: 'in' }) }],
+  totals: { rivets: 21, rivetsWithWaste: 23, drillHoles: { '#40': 21, '#30': 21, '#20': 21 }, tempFasteners: { '3/32': 7, '1/8': 7, '5/32': 7 }, rules: totalsRules(5, 'chapter') },
+  cautions: cautionsFor(false),
   bill: [
     {
       description: 'Blind, structural, dome, 5056, steel stem · 5/32 in · grip −2 (0.063–0.125 in)',
@@ -135,6 +141,32 @@ describe('the assembly estimate page', () => {
     expect(lines.getByRole('heading', { name: 'Skin to spar' })).toBeTruthy();
     expect(lines.getByText('−2 (0.063–0.125 in)')).toBeTruthy();
     expect(lines.getByText('#40 → #30 → #20')).toBeTruthy();
+  });
+
+  it('shows the cautions once, and beside each number a “Why?” that opens its rule and source', async () => {
+    serve();
+    await renderPage();
+    expect(screen.getAllByText(DRILLING_CAUTION)).toHaveLength(1);
+    expect(screen.getByText(/certificated aircraft, use approved data/)).toBeTruthy();
+
+    const lines = within(screen.getByRole('heading', { name: 'Rivet lines' }).parentElement!);
+    const why = lines.getByRole('button', { name: 'Why? Edge distance' });
+    expect(why.getAttribute('aria-expanded')).toBe('false');
+    const panel = document.getElementById(why.getAttribute('aria-controls')!)!;
+    expect(panel.hidden).toBe(true);
+    await userEvent.click(why);
+    expect(why.getAttribute('aria-expanded')).toBe('true');
+    expect(panel.hidden).toBe(false);
+    // The line gives its edge distance: the rule says so, with what it was checked against and the sources.
+    expect(panel.textContent).toMatch(/^Given on the line, checked against 2D \(protruding head\)/);
+    expect(panel.textContent).toContain('Source: AC 43.13-1B ch. 4; TM 10-5410-229-13&P para 5-6');
+
+    await userEvent.click(lines.getByRole('button', { name: 'Why? Grip' }));
+    expect(lines.getByText(/1\/16 in band covers the stack/).parentElement!.textContent).toContain('Source: TM 10-5410-221-14/1 Table 4-3');
+
+    const totals = within(screen.getByRole('heading', { name: 'Totals' }).parentElement!);
+    await userEvent.click(totals.getByRole('button', { name: 'Why? With 5 % waste' }));
+    expect(totals.getByText(/chapter’s waste allowance of 5 %/)).toBeTruthy();
   });
 
   it('holds the kit in one tap and says which holds were placed and which were not, with the reason', async () => {

@@ -6,7 +6,7 @@ import { LineEstimateView } from '@/features/planning/components/line-estimate';
 
 describe('the estimate’s counts', () => {
   it('write rivets, holes and temporary fasteners with thousands separators, as the bill of stock does', () => {
-    render(<EstimateTotalsView totals={{ rivets: 1206, rivetsWithWaste: 1267, drillHoles: { '#40': 1206, '#30': 1206 }, tempFasteners: { '1/8': 1206 } }} wastePercent={5} />);
+    render(<EstimateTotalsView totals={{ rivets: 1206, rivetsWithWaste: 1267, drillHoles: { '#40': 1206, '#30': 1206 }, tempFasteners: { '1/8': 1206 }, rules: [] }} wastePercent={5} />);
     const text = document.body.textContent ?? '';
     expect(text).toContain('Rivets1,206');
     expect(text).toContain('1,267');

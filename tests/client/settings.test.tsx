@@ -62,8 +62,8 @@ describe('Settings', () => {
     expect(valueOf('Holding rate (% of unit cost per year)')).toBe('25');
     expect(screen.getByRole('spinbutton', { name: 'Service level (%)' }).getAttribute('aria-describedby')).toBeTruthy();
     expect(within(form).getByText(/runs short about one lead time in twenty/)).toBeTruthy();
-    // Both published maxima are named: 8D (NAVEDTRA 14018) and 10D (FAA-derived guidance).
-    expect(within(form).getByText(/8D \(NAVEDTRA 14018\).*10D \(FAA-derived guidance\)/)).toBeTruthy();
+    // Both published maxima are named, as the estimate's pitch rule names them: 8D (NAVEDTRA 14018 ch. 13) and 10D (FAA-derived sources).
+    expect(within(form).getByText(/8D \(NAVEDTRA 14018 ch\. 13\).*10D \(FAA-derived sources, secondary\)/)).toBeTruthy();
     expect(within(form).getByText(/Measured on finished assemblies:/).textContent).toContain('7.3 %');
     // A table that scrolls sideways on a phone can be reached and scrolled with the keyboard.
     expect(screen.getByRole('region', { name: 'Waste by member' }).getAttribute('tabindex')).toBe('0');

@@ -48,12 +48,13 @@ export function estimateFixture(assemblyId: number, over: Partial<AssemblyEstima
     unit: 'in',
     wastePercent: 5,
     lines: [],
-    totals: { rivets: 0, rivetsWithWaste: 0, drillHoles: {}, tempFasteners: {} },
+    totals: { rivets: 0, rivetsWithWaste: 0, drillHoles: {}, tempFasteners: {}, rules: [] },
     warnings: [],
     errors: [],
     bill: [],
     kit: [],
     caution: 'Gripline plans stock and tools; the kit’s plans, approved data and licensed practice govern.',
+    cautions: [],
     ...over,
   };
 }

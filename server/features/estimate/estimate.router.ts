@@ -26,7 +26,7 @@ export function estimateRouter() {
         result.errors.map((e) => ({ path: `lines.${e.line}`, message: e.message })),
       );
     }
-    const answer: EstimateResponse = { lines: result.lines, totals: result.totals, warnings: result.warnings };
+    const answer: EstimateResponse = { lines: result.lines, totals: result.totals, warnings: result.warnings, cautions: result.cautions };
     res.json(answer);
   });
   return router;

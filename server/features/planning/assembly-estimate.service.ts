@@ -1,4 +1,6 @@
 import { estimate, isEstimateErrors, type EstimateInput, type EstimateResult } from '@shared/estimate/estimate';
+import { totalsRules } from '@shared/estimate/line-rules';
+import { estimateCautions, PLAN_NOT_DESIGN } from '@shared/safety/estimate-cautions';
 import type { AssemblyEstimate, KitItem } from '@shared/schemas/builds';
 import type { ServiceContext } from '../../context';
 import type { Executor } from '../../db/client';
@@ -10,16 +12,18 @@ import { billLines, drillOverrides, matchNeeds, type NeedMatch } from './bill';
 import { cribKit } from './crib-kit';
 import { parseExtraItems, parseLines } from './planning-dto';
 
-export const ESTIMATE_CAUTION =
-  'Gripline plans stock and tools; it does not design structures. The kit’s plans and the rivet maker’s instructions govern rivet counts, grips, edge distances and drill sizes, and on a certificated aircraft so do the approved data and a licensed mechanic or inspector. Follow local codes and rules. Powered tools: eye and hearing protection, and a sign-off before first use.';
+/** The lead of the caution box; the estimate's `cautions` follow it (the plans govern, approved data, drilling). */
+export const ESTIMATE_CAUTION = `${PLAN_NOT_DESIGN} Powered tools: eye and hearing protection, and a sign-off before first use.`;
 
 interface Worked {
   result: EstimateResult;
+  cautions: readonly string[];
   matches: NeedMatch[];
   labels: (string | null)[];
 }
 interface Refused {
   errors: AssemblyEstimate['errors'];
+  cautions: readonly string[];
   wastePercent: number;
 }
 
@@ -33,24 +37,25 @@ function work(db: Executor, { assembly, build }: AssemblyInBuild): Worked | Refu
   const labels = stored.map((l) => l.label ?? null);
   const input: EstimateInput = { unit: assembly.unit, lines: stored.map(({ label: _label, ...line }) => line) };
   const options = { defaultWastePercent: planning.wastePercent, maxPitchDiameters: planning.maxPitchDiameters, edgeFloorIn: build.edgeFloorIn };
-  const refused = (errors: AssemblyEstimate['errors']): Refused => ({ errors, wastePercent: planning.wastePercent });
+  const cautions = estimateCautions(stored);
+  const refused = (errors: AssemblyEstimate['errors']): Refused => ({ errors, cautions, wastePercent: planning.wastePercent });
   const first = estimate(input, options);
   if (isEstimateErrors(first)) return refused(first.errors);
   const matches = matchNeeds(db, first.needs);
   const finalDrillOverrides = drillOverrides(matches, input.lines.length);
-  if (finalDrillOverrides.every((d) => d === null)) return { result: first, matches, labels };
+  if (finalDrillOverrides.every((d) => d === null)) return { result: first, cautions, matches, labels };
   const second = estimate(input, { ...options, finalDrillOverrides });
-  return isEstimateErrors(second) ? refused(second.errors) : { result: second, matches, labels };
+  return isEstimateErrors(second) ? refused(second.errors) : { result: second, cautions, matches, labels };
 }
 
 export function estimateAssembly(db: Executor, found: AssemblyInBuild): AssemblyEstimate {
   const { assembly } = found;
   const extras = parseExtraItems(assembly.extraItems);
-  const base = { assemblyId: assembly.id, unit: assembly.unit, caution: ESTIMATE_CAUTION };
   const worked = work(db, found);
+  const base = { assemblyId: assembly.id, unit: assembly.unit, caution: ESTIMATE_CAUTION, cautions: worked.cautions };
   if ('errors' in worked) {
     // The editor shows what to fix; the extra items still have their bins.
-    const totals = { rivets: 0, rivetsWithWaste: 0, drillHoles: {}, tempFasteners: {} };
+    const totals = { rivets: 0, rivetsWithWaste: 0, drillHoles: {}, tempFasteners: {}, rules: totalsRules(worked.wastePercent, 'chapter') };
     return { ...base, wastePercent: worked.wastePercent, lines: [], totals, warnings: [], errors: worked.errors, bill: billLines(db, assembly.id, [], extras), kit: [] };
   }
   const { result, matches, labels } = worked;

@@ -54,7 +54,7 @@ export function AssemblyDetailRoute() {
           )
         }
       />
-      <PlanningCaution text={estimate.caution} />
+      <PlanningCaution lead={estimate.caution} cautions={estimate.cautions} />
       {estimate.errors.length > 0 && (
         <Notice tone="bad" title="Some rivet lines cannot be estimated">
           <ul className="list-disc pl-5">

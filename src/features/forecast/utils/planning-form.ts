@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { PUBLISHED_PITCH_MAXIMA_WORDS } from '@shared/estimate/line-rules';
 import type { PlanningSettingsDto } from '@shared/schemas/forecast';
 
 /**
@@ -45,7 +46,7 @@ export const SETTING_HELP: Record<keyof PlanningSettingsDto, { label: string; he
   },
   maxPitchDiameters: {
     label: 'Maximum pitch (rivet diameters)',
-    help: 'An estimate warns when rivets on a line would sit farther apart than this many diameters. Published maxima differ: 8D (NAVEDTRA 14018) and 10D (FAA-derived guidance); the kit’s plans set the real spacing.',
+    help: `An estimate warns when rivets on a line would sit farther apart than this many diameters. Published maxima differ: ${PUBLISHED_PITCH_MAXIMA_WORDS}; the kit’s plans set the real spacing.`,
   },
   serviceLevel: {
     label: 'Service level (%)',

@@ -1,6 +1,7 @@
 import { useMemo, useState } from 'react';
 import { FormProvider, useFieldArray, useForm, useWatch, type Path, type Resolver } from 'react-hook-form';
 import { estimate, isEstimateErrors } from '@shared/estimate/estimate';
+import { cautionsFor } from '@shared/safety/estimate-cautions';
 import { ASSEMBLY_STATUS_LABELS, ASSEMBLY_STATUSES, type Assembly, type CreateAssemblyInput, type LengthUnit } from '@shared/schemas/builds';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
@@ -57,6 +58,7 @@ export function AssemblyForm({ assembly, build, defaultUnit, onPreferUnit, prefe
     () => liveEstimate(settled.unit, settled.lines, { edgeFloorIn: build.edgeFloorIn, wastePercent, maxPitchDiameters }),
     [settled, build.edgeFloorIn, wastePercent, maxPitchDiameters],
   );
+  const cautions = cautionsFor(lineValues.some((l) => l.kind === 'blind-general'));
   const [unitSaved, setUnitSaved] = useState<LengthUnit | undefined>();
   const blocked = live.errors > 0;
 
@@ -87,7 +89,7 @@ export function AssemblyForm({ assembly, build, defaultUnit, onPreferUnit, prefe
   return (
     <FormProvider {...form}>
       <form aria-label="Assembly" onSubmit={submit} noValidate className="flex flex-col gap-5">
-        <PlanningCaution />
+        <PlanningCaution cautions={cautions} />
         <Card title="The assembly">
           <div className="flex flex-col gap-4">
             <TextField label="Assembly name" placeholder="Rudder" autoComplete="off" error={formState.errors.name?.message} {...register('name')} />

@@ -1,9 +1,11 @@
 import type { LineEstimate, RivetLineInput } from '@shared/estimate/estimate-line';
+import type { LineRule } from '@shared/estimate/line-rules';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import type { LengthUnit } from '@shared/schemas/builds';
 import { formatCount } from '@/lib/format';
 import { drillStepsText, gripText, lengthText, tempFastenersText } from '../utils/words';
-import { FactList } from './fact-list';
+import { FactList, type Fact } from './fact-list';
+import { rulesFor } from './why-rule';
 
 type RowLayout = Pick<RivetLineInput, 'rows' | 'rowPattern'> | undefined;
 
@@ -15,16 +17,20 @@ function holesText(line: LineEstimate, layout: RowLayout): string {
   return `${formatCount(line.holes)} (${formatCount(line.holesPerRow)} a row × ${rows} rows)`;
 }
 
-/** One rivet line worked out: the terms a builder lays the line out with, then its warnings in words. `layout` is the line's rows as entered. */
-export function LineEstimateView({ line, unit, kind, layout }: { line: LineEstimate; unit: LengthUnit; kind: EstimateRivetKind; layout: RowLayout }) {
-  const facts: [string, string][] = [
-    ['Holes', holesText(line, layout)],
-    ['Pitch', lengthText(line.pitch, unit)],
-    ...(line.transversePitch === undefined ? [] : [['Transverse pitch (between rows)', lengthText(line.transversePitch, unit)] as [string, string]]),
-    ['Edge distance', lengthText(line.edgeDistance, unit)],
-    [kind === 'solid' ? 'Rivet length' : 'Grip', gripText(kind, line.grip)],
-    ['Drill steps', drillStepsText(line.drillSequence)],
-    ['Temporary fasteners', tempFastenersText(line.tempFasteners)],
+/**
+ * One rivet line worked out: the terms a builder lays the line out with, each with its rule and source
+ * behind a "Why?", then its warnings in words. `layout` is the line's rows as entered.
+ */
+export function LineEstimateView({ line, unit, kind, layout }: { line: LineEstimate & { rules?: readonly LineRule[] }; unit: LengthUnit; kind: EstimateRivetKind; layout: RowLayout }) {
+  const why = (...values: LineRule['value'][]) => rulesFor(line.rules, ...values);
+  const facts: Fact[] = [
+    ['Holes', holesText(line, layout), why('holesPerRow', 'holes')],
+    ['Pitch', lengthText(line.pitch, unit), why('pitch')],
+    ...(line.transversePitch === undefined ? [] : [['Transverse pitch (between rows)', lengthText(line.transversePitch, unit), why('transversePitch')] as const]),
+    ['Edge distance', lengthText(line.edgeDistance, unit), why('edgeDistance')],
+    [kind === 'solid' ? 'Rivet length' : 'Grip', gripText(kind, line.grip), why('grip')],
+    ['Drill steps', drillStepsText(line.drillSequence), why('drillSequence')],
+    ['Temporary fasteners', tempFastenersText(line.tempFasteners), why('tempFasteners')],
   ];
   return (
     <div className="flex flex-col gap-2">

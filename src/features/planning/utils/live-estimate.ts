@@ -1,12 +1,13 @@
 import { estimate, isEstimateErrors, type EstimateResult } from '@shared/estimate/estimate';
-import { estimateLine, type LineEstimate, type RivetLineInput } from '@shared/estimate/estimate-line';
+import { estimateLine, type RivetLineInput } from '@shared/estimate/estimate-line';
+import { withRules, type RuledLineEstimate } from '@shared/estimate/line-rules';
 import { assemblyLineSchema, type LengthUnit } from '@shared/schemas/builds';
 import { toLine, type LineValues } from './form-values';
 
 export type LiveLine =
   | { state: 'incomplete' }
   | { state: 'error'; code: string; message: string }
-  | { state: 'ok'; estimate: LineEstimate; line: RivetLineInput };
+  | { state: 'ok'; estimate: RuledLineEstimate; line: RivetLineInput };
 
 export interface LiveEstimate {
   lines: LiveLine[];
@@ -32,10 +33,12 @@ export function liveEstimate(unit: LengthUnit, values: readonly LineValues[], op
   const lines = values.map((v): LiveLine => {
     const parsed = assemblyLineSchema.safeParse(toLine(v));
     if (!parsed.success) return { state: 'incomplete' };
-    const r = estimateLine(parsed.data, { unit, edgeFloorIn: options.edgeFloorIn, maxPitchDiameters: options.maxPitchDiameters });
+    const lineOptions = { unit, edgeFloorIn: options.edgeFloorIn, maxPitchDiameters: options.maxPitchDiameters };
+    const r = estimateLine(parsed.data, lineOptions);
     if ('error' in r) return { state: 'error', code: r.code, message: r.message };
     complete.push(parsed.data);
-    return { state: 'ok', estimate: r, line: parsed.data };
+    // Each number with its rule and source, as the server's estimate gives them.
+    return { state: 'ok', estimate: withRules(parsed.data, r, lineOptions), line: parsed.data };
   });
   const errors = lines.filter((l) => l.state === 'error').length;
   const incomplete = lines.filter((l) => l.state === 'incomplete').length;

@@ -1,0 +1,86 @@
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { estimateResponseSchema } from '@shared/schemas/estimate';
+import { CERTIFICATED_CAUTION, DRILLING_CAUTION, PLANS_GOVERN_CAUTION, SOFT_RIVET_CAUTION } from '@shared/safety/estimate-cautions';
+import { post } from '../helpers/crib';
+import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+
+let t: TestApp;
+let member: SignedInAgent;
+
+beforeEach(async () => {
+  t = await buildTestApp();
+  await t.addCrew();
+  member = await t.signIn('member@example.org');
+});
+afterEach(() => t.close());
+
+const blind = { kind: 'blind-structural', head: 'dome', diameter32: 5 };
+type Rule = { value: string; rule: string; source: string };
+const ruleOf = (rules: Rule[], value: string) => rules.find((r) => r.value === value);
+
+describe('POST /api/estimate: every number with its rule and source', () => {
+  it('names each value of a one-line estimate with its rule and a published source or common practice', async () => {
+    // 20 in, 1 in target pitch, 5/32 in structural blind rivets, edge left to the rule (2D = 0.3125 in).
+    const res = await post(member, '/api/estimate', { unit: 'in', lines: [{ length: 20, pitch: 1, stack: [0.032, 0.032], rivet: blind }] });
+    expect(res.status).toBe(200);
+    expect(estimateResponseSchema.strict().parse(res.body)).toBeTruthy();
+    const rules: Rule[] = res.body.lines[0].rules;
+    expect(rules.map((r) => r.value)).toEqual(['edgeDistance', 'pitch', 'holesPerRow', 'holes', 'grip', 'drillSequence', 'tempFasteners']);
+    for (const r of rules) {
+      expect(r.rule.length, r.value).toBeGreaterThan(5);
+      expect(r.source.length, r.value).toBeGreaterThan(5);
+    }
+    // Edge distance at least 2D (AC 43.13-1B ch. 4; TM 10-5410-229-13&P para 5-6).
+    expect(ruleOf(rules, 'edgeDistance')).toEqual({ value: 'edgeDistance', rule: '2D, protruding head', source: 'AC 43.13-1B ch. 4; TM 10-5410-229-13&P para 5-6' });
+    // Pitch at least 3D; the chapter's maximum (10D by default) and both published maxima, 8D and 10D.
+    expect(ruleOf(rules, 'pitch')!.rule).toMatch(/at least 3D, at most the chapter’s 10D; published maxima 8D \(NAVEDTRA 14018 ch\. 13\) and 10D \(FAA-derived sources, secondary\)/);
+    expect(ruleOf(rules, 'pitch')!.source).toContain('NAVEDTRA 14018 ch. 13');
+    expect(ruleOf(rules, 'holesPerRow')).toMatchObject({ rule: expect.stringContaining('n = ⌈(L − 2e) / p⌉ + 1'), source: 'common practice' });
+    // Blind grip bands: TM 10-5410-221-14/1 Table 4-3.
+    expect(ruleOf(rules, 'grip')!.source).toBe('TM 10-5410-221-14/1 Table 4-3');
+    expect(ruleOf(rules, 'drillSequence')!.source).toBe('common practice; final drill TM 10-5410-221-14/1 Table 4-3');
+    expect(ruleOf(rules, 'tempFasteners')!.source).toBe('common practice; sizes NAVEDTRA 14315');
+    // One row: no transverse pitch, so no rule for it.
+    expect(ruleOf(rules, 'transversePitch')).toBeUndefined();
+    // Waste on the totals: the chapter's setting, 5 % unless changed.
+    expect(ruleOf(res.body.totals.rules, 'rivetsWithWaste')).toMatchObject({ rule: expect.stringContaining('chapter’s waste allowance of 5 %') });
+  });
+
+  it('gives a countersunk line 2.5D, a solid rivet its length rule, rows their transverse pitch, and the request’s waste', async () => {
+    const res = await post(member, '/api/estimate', {
+      unit: 'mm',
+      wastePercent: 8,
+      lines: [
+        { length: 300, pitch: 20, rows: 2, rowPattern: 'staggered', stack: [1, 1], rivet: { kind: 'solid', head: 'countersunk', diameter32: 4, material: '2117-T4' } },
+        { length: 300, holesPerRow: 12, rows: 2, rowSpacing: 10, edgeDistance: 8, stack: [1, 1], rivet: blind },
+      ],
+    });
+    expect(res.status).toBe(200);
+    const [solid, given] = res.body.lines as { rules: Rule[] }[];
+    // Countersunk: 2.5D (FAA-H-8083-31).
+    expect(ruleOf(solid!.rules, 'edgeDistance')).toEqual({ value: 'edgeDistance', rule: '2.5D, countersunk head', source: 'FAA-H-8083-31' });
+    // Solid length: grip + 1.5D, next 1/16 (NAVEDTRA 14018 ch. 13; TM 10-5410-229-13&P).
+    expect(ruleOf(solid!.rules, 'grip')).toMatchObject({ rule: 'L = grip + 1.5D, rounded up to the next 1/16 in', source: 'NAVEDTRA 14018 ch. 13; TM 10-5410-229-13&P' });
+    expect(ruleOf(solid!.rules, 'drillSequence')!.source).toBe('common practice; final drill FAA-H-8083-31 ch. 4');
+    expect(ruleOf(solid!.rules, 'holes')!.rule).toContain('one fewer in every second row');
+    expect(ruleOf(solid!.rules, 'transversePitch')!.rule).toBe('75 % of the pitch, and at least 2.5D');
+    // Given values say so, and what they were checked against.
+    expect(ruleOf(given!.rules, 'edgeDistance')!.rule).toMatch(/^Given on the line, checked against 2D \(protruding head\)/);
+    expect(ruleOf(given!.rules, 'holesPerRow')!.rule).toMatch(/^Given on the line/);
+    expect(ruleOf(given!.rules, 'transversePitch')).toMatchObject({ rule: 'Given on the line, checked against 2.5D', source: 'TM 10-5410-229-13&P' });
+    expect(ruleOf(res.body.totals.rules, 'rivetsWithWaste')!.rule).toContain('8 % sent with the lines');
+  });
+
+  it('always carries the plans, approved data and drilling cautions, and the soft blind rivet one when a line has a general-purpose blind rivet', async () => {
+    const line = { length: 20, pitch: 1, stack: [0.032, 0.032], rivet: blind };
+    const plain = await post(member, '/api/estimate', { unit: 'in', lines: [line] });
+    expect(plain.body.cautions).toEqual([PLANS_GOVERN_CAUTION, CERTIFICATED_CAUTION, DRILLING_CAUTION]);
+    expect(plain.body.cautions.join(' ')).toMatch(/kit’s plans and the rivet maker’s instructions govern/);
+    expect(plain.body.cautions.join(' ')).toMatch(/certificated aircraft, use approved data.*licensed mechanic or inspector/);
+    expect(plain.body.cautions.join(' ')).toMatch(/clamp the work.*chips.*deburr both sides.*eye protection/);
+    const soft = await post(member, '/api/estimate', { unit: 'in', lines: [line, { ...line, rivet: { ...blind, kind: 'blind-general' } }] });
+    expect(soft.status).toBe(200);
+    expect(soft.body.cautions).toContain(SOFT_RIVET_CAUTION);
+    expect(soft.body.cautions).toHaveLength(4);
+  });
+});

@@ -16,7 +16,7 @@ const CAUTION = 'Gripline plans stock and tools; it does not design structures. 
 
 /** The server's answer for that assembly: figures as the shared estimate gives them for the line (see assembly-editor.test.tsx). */
 const ESTIMATE: AssemblyEstimate = estimateFixture(7, {
-  lines: [{ label: 'Skin to spar', holesPerRow: 21, holes: 21, pitch: 0.9625, edgeDistance: 0.375, grip: 2, drillSequence: ['#40', '#30', '#20'], tempFasteners: { '3/32': 7, '1/8': 7, '5/32': 7 }, warnings: [] }],
+  lines: [{ label: 'Skin to spar', holesPerRow: 21, holes: 21, pitch: 0.9625, edgeDistance: 0.375, grip: 2, drillSequence: ['#40', '#30', '#20'], tempFasteners: { '3/32': 7, '1/8': 7, '5/32': 7 }, warnings: [], flushPrep: null, shopHead: null, halfLength: null }],
   totals: { rivets: 21, rivetsWithWaste: 23, drillHoles: { '#40': 21, '#30': 21, '#20': 21 }, tempFasteners: { '3/32': 7, '1/8': 7, '5/32': 7 } },
   bill: [
     {

@@ -35,10 +35,26 @@ describe('POST /api/estimate', () => {
       grip: 2,
       drillSequence: ['#40', '#30', '#20'],
       tempFasteners: { '3/32': 7, '1/8': 7, '5/32': 7 },
+      // 3 × 0.032 in = 0.096 in: 3/32 or 1/8 in (AC 43.13-1B para 4-58g), so 5/32 in is large.
+      warnings: [{ code: 'DIAMETER_LARGE_FOR_SHEET', message: 'A 5/32 in rivet is large for a 0.032 in sheet: about 3 × the thickest sheet is 0.096 in, so 3/32 in or 1/8 in.' }],
+      flushPrep: null,
+      shopHead: null,
+      halfLength: null,
+    });
+    // Solid 1/8 countersunk: e = 2.5D = 0.3125 in; 11 holes over 11.375 in → 1.1375 in; grip 0.065 + 0.1875 = 0.2525 in → 5/16,
+    // and the half length −4.5 (0.28125 in) fits. Top sheet 0.025 in is below the 0.050 in countersink minimum: dimpled.
+    expect(res.body.lines[1]).toMatchObject({
+      holesPerRow: 11,
+      holes: 22,
+      pitch: 1.1375,
+      edgeDistance: 0.3125,
+      grip: 5,
+      drillSequence: ['#40', '#30'],
+      flushPrep: 'dimple',
+      shopHead: { width: 0.1875, height: 0.0625 },
+      halfLength: 4.5,
       warnings: [],
     });
-    // Solid 1/8 countersunk: e = 2.5D = 0.3125 in; 11 holes over 11.375 in → 1.1375 in; grip 0.065 + 0.1875 → 5/16.
-    expect(res.body.lines[1]).toMatchObject({ holesPerRow: 11, holes: 22, pitch: 1.1375, edgeDistance: 0.3125, grip: 5, drillSequence: ['#40', '#30'] });
     // The chapter's default waste of 5 %: 21 → ⌈22.05⌉ = 23, 22 → ⌈23.1⌉ = 24.
     expect(res.body.totals).toEqual({
       rivets: 43,
@@ -47,7 +63,7 @@ describe('POST /api/estimate', () => {
       // Reused from line to line (common practice): per size the larger of the two lines, 7 and 8.
       tempFasteners: { '3/32': 8, '1/8': 8, '5/32': 7 },
     });
-    expect(res.body.warnings).toEqual([]);
+    expect(res.body.warnings.map((w: { code: string }) => w.code)).toEqual(['DIAMETER_LARGE_FOR_SHEET']);
   });
 
   it('lays out staggered rows with their transverse pitch, and warns on a row spacing below 2.5D', async () => {
@@ -79,8 +95,10 @@ describe('POST /api/estimate', () => {
   it('reports warnings at the line and at the top', async () => {
     const res = await post(member, '/api/estimate', { unit: 'mm', wastePercent: 0, lines: [{ length: 300, holesPerRow: 3, edgeDistance: 5, stack: [1, 1], rivet }] });
     expect(res.status).toBe(200);
-    expect(res.body.lines[0].warnings.map((w: { code: string }) => w.code)).toEqual(['EDGE_BELOW_MINIMUM', 'PITCH_ABOVE_MAXIMUM']);
-    expect(res.body.warnings.map((w: { code: string }) => w.code)).toEqual(['EDGE_BELOW_MINIMUM', 'PITCH_ABOVE_MAXIMUM']);
+    // 1 mm sheets: 3t = 0.118 in, 3/32 or 1/8 in, so the 5/32 in rivet is large too.
+    const expected = ['DIAMETER_LARGE_FOR_SHEET', 'EDGE_BELOW_MINIMUM', 'PITCH_ABOVE_MAXIMUM'];
+    expect(res.body.lines[0].warnings.map((w: { code: string }) => w.code)).toEqual(expected);
+    expect(res.body.warnings.map((w: { code: string }) => w.code)).toEqual(expected);
     expect(res.body.lines[0].pitch).toBe(145);
     expect(res.body.totals.rivetsWithWaste).toBe(3);
   });

@@ -1,0 +1,67 @@
+import { inchFraction } from '../stock/fasteners';
+import { lengthWords } from './length-words';
+import type { LengthUnit } from './estimate-line';
+import { ESTIMATE_DIAMETERS } from './rivet-rules';
+
+/**
+ * A rivet's diameter is about three times the thickness of the thickest sheet (AC 43.13-1B
+ * para 4-58g example; the FAA general rule).
+ */
+export const DIAMETER_OF_THICKEST_SHEET = 3;
+
+/** The standard diameters (32nds) that bracket 3t: the largest not above it and the smallest not below it; either may be missing at the ends of the table. */
+export function bracketing(thickestIn: number): { below: number | undefined; above: number | undefined } {
+  const target32 = DIAMETER_OF_THICKEST_SHEET * thickestIn * 32;
+  let below: number | undefined;
+  let above: number | undefined;
+  for (const d of ESTIMATE_DIAMETERS) {
+    if (d <= target32 + 1e-9) below = d;
+    if (above === undefined && d >= target32 - 1e-9) above = d;
+  }
+  return { below, above };
+}
+
+export type SheetRuleCode = 'DIAMETER_SMALL_FOR_SHEET' | 'DIAMETER_LARGE_FOR_SHEET' | 'DIAMETER_BELOW_SHEET_THICKNESS';
+export interface SheetRuleFinding {
+  code: SheetRuleCode;
+  message: string;
+}
+
+const dia = (d32: number) => `${inchFraction(d32, 32)} in`;
+
+/**
+ * The diameter against the thickest sheet: below the sheet thickness (NAVEDTRA 14018 ch. 13 gives
+ * the sheet thickness as the minimum diameter; the caller refuses it on a structural line), or
+ * outside the standard sizes bracketing 3t. Null when the diameter fits. `thickest` is in `unit`.
+ * Findings are few and the same for the same inputs: each is made once and shared (frozen).
+ */
+export function sheetRuleFinding(diameter32: number, thickest: number, unit: LengthUnit): SheetRuleFinding | null {
+  const scale = unit === 'mm' ? 25.4 : 1;
+  const thickestIn = thickest / scale;
+  const key = `${diameter32}|${thickest}|${unit}`;
+  const cached = findings.get(key);
+  if (cached !== undefined) return cached;
+  const found = work(diameter32, thickestIn, thickest, unit, scale);
+  if (findings.size < 5000) findings.set(key, found);
+  return found;
+}
+const findings = new Map<string, SheetRuleFinding | null>();
+
+function work(diameter32: number, thickestIn: number, thickest: number, unit: LengthUnit, scale: number): SheetRuleFinding | null {
+  const sheet = lengthWords(thickest, unit);
+  if (diameter32 / 32 < thickestIn - 1e-9) {
+    return Object.freeze({
+      code: 'DIAMETER_BELOW_SHEET_THICKNESS',
+      message: `A ${dia(diameter32)} rivet is thinner than the ${sheet} sheet: on a structural line the diameter must be at least the thickest sheet. Use a larger rivet.`,
+    });
+  }
+  const { below, above } = bracketing(thickestIn);
+  const small = below !== undefined && diameter32 < below;
+  const large = above !== undefined && diameter32 > above;
+  if (!small && !large) return null;
+  const sizes = below === undefined || above === undefined || below === above ? dia((below ?? above)!) : `${dia(below)} or ${dia(above)}`;
+  return Object.freeze({
+    code: small ? 'DIAMETER_SMALL_FOR_SHEET' : 'DIAMETER_LARGE_FOR_SHEET',
+    message: `A ${dia(diameter32)} rivet is ${small ? 'small' : 'large'} for a ${sheet} sheet: about ${DIAMETER_OF_THICKEST_SHEET} × the thickest sheet is ${lengthWords(DIAMETER_OF_THICKEST_SHEET * thickestIn * scale, unit)}, so ${sizes}.`,
+  });
+}

@@ -10,6 +10,8 @@ const ROLE_LABELS: Record<KitItem['role'], string> = {
   rivet_set: 'Rivet set',
   bucking_bar: 'Bucking bar',
   drill_bit: 'Drill bit',
+  countersink_cutter: 'Countersink cutter',
+  dimple_dies: 'Dimple dies',
   temporary_fastener_tray: 'Temporary fastener tray',
   deburring_tool: 'Deburring tool',
 };

@@ -2,7 +2,7 @@ import type { LineEstimate, RivetLineInput } from '@shared/estimate/estimate-lin
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import type { LengthUnit } from '@shared/schemas/builds';
 import { formatCount } from '@/lib/format';
-import { drillStepsText, gripText, lengthText, tempFastenersText } from '../utils/words';
+import { diameterText, drillStepsText, FLUSH_PREP_WORDS, gripText, halfLengthText, lengthText, solidLengthText, tempFastenersText } from '../utils/words';
 import { FactList } from './fact-list';
 
 type RowLayout = Pick<RivetLineInput, 'rows' | 'rowPattern'> | undefined;
@@ -18,11 +18,14 @@ function holesText(line: LineEstimate, layout: RowLayout): string {
 /** One rivet line worked out: the terms a builder lays the line out with, then its warnings in words. `layout` is the line's rows as entered. */
 export function LineEstimateView({ line, unit, kind, layout }: { line: LineEstimate; unit: LengthUnit; kind: EstimateRivetKind; layout: RowLayout }) {
   const facts: [string, string][] = [
+    ...(line.diameter32 === undefined ? [] : [['Repair rivet', `${diameterText(line.diameter32)}, one size up`] as [string, string]]),
     ['Holes', holesText(line, layout)],
     ['Pitch', lengthText(line.pitch, unit)],
     ...(line.transversePitch === undefined ? [] : [['Transverse pitch (between rows)', lengthText(line.transversePitch, unit)] as [string, string]]),
     ['Edge distance', lengthText(line.edgeDistance, unit)],
-    [kind === 'solid' ? 'Rivet length' : 'Grip', gripText(kind, line.grip)],
+    kind === 'solid' ? ['Rivet length', solidLengthText(line.grip, line.shopHead, unit)] : ['Grip', gripText(kind, line.grip)],
+    ...(line.halfLength === null ? [] : [['Half length', halfLengthText(line.halfLength)] as [string, string]]),
+    ...(line.flushPrep === null ? [] : [['Flush preparation', FLUSH_PREP_WORDS[line.flushPrep]] as [string, string]]),
     ['Drill steps', drillStepsText(line.drillSequence)],
     ['Temporary fasteners', tempFastenersText(line.tempFasteners)],
   ];

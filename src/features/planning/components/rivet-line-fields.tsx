@@ -12,6 +12,11 @@ import { SheetStackField } from './sheet-stack-field';
 
 const KIND_OPTIONS = ESTIMATE_RIVET_KINDS.map((k) => ({ value: k, label: RIVET_KIND_LABELS[k] }));
 const MATERIAL_OPTIONS = [{ value: '', label: 'Not stated' }, ...RIVET_MATERIALS.map((m) => ({ value: m, label: m }))];
+const FLUSH_PREP_OPTIONS = [
+  { value: '', label: 'As the rule says' },
+  { value: 'countersink', label: 'Countersink' },
+  { value: 'dimple', label: 'Dimple' },
+];
 const DIAMETER_OPTIONS = ESTIMATE_DIAMETERS.map((d) => ({ value: String(d), label: `${diameterText(d)} (−${d})` }));
 
 const RADIO = 'flex min-h-12 flex-1 cursor-pointer items-center gap-3 rounded-lg border-2 border-edge bg-card px-3 font-semibold has-[:checked]:border-ink has-[:checked]:bg-paper';
@@ -19,7 +24,7 @@ const RADIO = 'flex min-h-12 flex-1 cursor-pointer items-center gap-3 rounded-lg
 /** One rivet line: where it runs, how it is spaced, what it fastens, with the rivet; its estimate beneath. */
 export function RivetLineFields({ index, unit, live, onRemove }: { index: number; unit: LengthUnit; live: LiveLine | undefined; onRemove: () => void }) {
   const { control, register, formState } = useFormContext<AssemblyFormValues>();
-  const [spacing, kind, rows] = useWatch({ control, name: [`lines.${index}.spacing`, `lines.${index}.kind`, `lines.${index}.rows`] });
+  const [spacing, kind, rows, head] = useWatch({ control, name: [`lines.${index}.spacing`, `lines.${index}.kind`, `lines.${index}.rows`, `lines.${index}.head`] });
   const err = (field: string) => errorAt(formState.errors, `lines.${index}.${field}`);
   const n = index + 1;
 
@@ -115,6 +120,19 @@ export function RivetLineFields({ index, unit, live, onRemove }: { index: number
         <SelectField label="Diameter" hint="The dash is in 32nds of an inch." options={DIAMETER_OPTIONS} error={err('diameter32')} {...register(`lines.${index}.diameter32`)} />
         <SelectField label="Material (optional)" options={MATERIAL_OPTIONS} error={err('material')} {...register(`lines.${index}.material`)} />
       </div>
+      {head === 'countersunk' && (
+        <SelectField
+          label="Flush preparation"
+          hint="How the top sheet takes the head. The rule: countersink a sheet at or above the minimum gage for the rivet, dimple a thinner one."
+          options={FLUSH_PREP_OPTIONS}
+          error={err('flushPrep')}
+          {...register(`lines.${index}.flushPrep`)}
+        />
+      )}
+      <label className="flex min-h-12 cursor-pointer items-center gap-3 font-semibold">
+        <input type="checkbox" className="size-6" {...register(`lines.${index}.repair`)} />
+        Repair of drilled-out rivets (uses the next diameter up)
+      </label>
 
       <section aria-label={`Estimate for rivet line ${n}`} aria-live="polite" className="rounded-lg border border-rule bg-paper p-3">
         <h4 className="mb-2 text-sm font-semibold tracking-wide text-steel uppercase">Estimate for this line</h4>

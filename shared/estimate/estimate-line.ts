@@ -1,6 +1,6 @@
 import { BLIND_GRIP_RANGES, blindGripForStack, inchFraction, solidLengthDash } from '../stock/fasteners';
 import type { RivetHead } from '../stock/kinds';
-import { flushPrepForSheet, flushSheetPreps, leavesKnifeEdge, MIN_COUNTERSINK_SHEET_IN, type FlushPrep } from './flush-prep';
+import { flushPrepForSheet, flushSheetPreps, leavesKnifeEdge, MIN_COUNTERSINK_SHEET_IN, type FlushPrep, type FlushSheets } from './flush-prep';
 import { lengthWords } from './length-words';
 import { nextDiameter32, noLargerDiameterMessage, repairNotice } from './repair';
 import { sheetRuleFinding } from './sheet-rule';
@@ -143,7 +143,6 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
   const sheet = sheetRuleFinding(diameter32, thickest, unit);
   if (sheet !== null) {
     if (sheet.code === 'DIAMETER_BELOW_SHEET_THICKNESS' && line.structural) return { error: true, code: sheet.code, message: sheet.message };
-    warnings.push(sheet);
   }
 
   const minEdge = minEdgeDiameters(head) * d;
@@ -220,7 +219,12 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
     transversePitch === undefined
       ? { holesPerRow, holes, pitch: clean(pitch), edgeDistance, grip, drillSequence: steps, tempFasteners, warnings: NO_WARNINGS, flushPrep, shopHead, halfLength }
       : { holesPerRow, holes, pitch: clean(pitch), edgeDistance, transversePitch, grip, drillSequence: steps, tempFasteners, warnings: NO_WARNINGS, flushPrep, shopHead, halfLength };
-  if (warnings.length > 0) answer.warnings = warnings;
+  // The sheet rule's warning comes first (after a repair's): a line with no other shares that finding's list, so it makes none.
+  if (sheet !== null && warnings.length === 0) answer.warnings = sheet.alone;
+  else if (warnings.length > 0) {
+    if (sheet !== null) warnings.splice(line.repair ? 1 : 0, 0, sheet.alone[0]!);
+    answer.warnings = warnings;
+  }
   if (line.repair) answer.diameter32 = diameter32;
   return answer;
 }
@@ -238,9 +242,8 @@ function flushPrepOf(line: RivetLineInput, topIn: number, diameter32: number, un
 }
 
 /** What a flush line's stack needs from the crib: a countersink cutter, dimple dies, or both (the sheet under a dimple countersunk to take it). */
-export function flushSheetNeeds(line: RivetLineInput, flushPrep: FlushPrep, diameter32: number, unit: LengthUnit): { countersink: boolean; dimple: boolean } {
-  const scale = unit === 'mm' ? MM_PER_INCH : 1;
-  return flushSheetPreps(line.stack.map((t) => t / scale), diameter32, flushPrep);
+export function flushSheetNeeds(line: RivetLineInput, flushPrep: FlushPrep, diameter32: number, unit: LengthUnit): FlushSheets {
+  return flushSheetPreps(line.stack, unit === 'mm' ? MM_PER_INCH : 1, diameter32, flushPrep);
 }
 
 /** The spacing between rows: the given one (warned below 2.5D), else 75 % of the actual pitch and at least 2.5D. */

@@ -1,7 +1,7 @@
 import { DEFAULT_WASTE_PERCENT, type EstimateRivetKind } from './rivet-rules';
 import { estimateLine, flushSheetNeeds, type EstimateNotice, type LengthUnit, type LineEstimate, type LineOptions, type RivetLineInput } from './estimate-line';
 import type { RivetHead } from '../stock/kinds';
-import type { FlushPrep } from './flush-prep';
+import type { FlushPrep, FlushSheets } from './flush-prep';
 
 export interface EstimateInput {
   unit: LengthUnit;
@@ -109,7 +109,7 @@ export function estimate(input: EstimateInput, options: EstimateOptions = {}): E
   const totals: EstimateTotals = { rivets: 0, rivetsWithWaste: 0, drillHoles: {}, tempFasteners: {} };
   const needs = new Map<string, FastenerNeed>();
   const nosepieces = new Map<number, EstimateResult['nosepieces'][number]>();
-  const flushTools = new Map<string, FlushTool>();
+  const flushTools: FlushTool[] = [];
   for (let i = 0; i < lines.length; i++) {
     const l = lines[i]!;
     const rivet = input.lines[i]!.rivet;
@@ -134,17 +134,29 @@ export function estimate(input: EstimateInput, options: EstimateOptions = {}): E
   }
   const warnings: EstimateNotice[] = [];
   for (let i = 0; i < lines.length; i++) {
-    for (const w of lines[i]!.warnings) warnings.push({ code: w.code, message: `Line ${i + 1}: ${w.message}` });
+    const ws = lines[i]!.warnings;
+    if (ws.length === 0) continue;
+    const prefix = linePrefix(i);
+    for (const w of ws) warnings.push({ code: w.code, message: prefix + w.message });
   }
-  const flush = [...flushTools.values()].sort((a, b) => Number(a.prep === 'dimple') - Number(b.prep === 'dimple') || a.diameter32 - b.diameter32);
+  const flush = flushTools.sort((a, b) => Number(a.prep === 'dimple') - Number(b.prep === 'dimple') || a.diameter32 - b.diameter32);
   return { lines, totals, warnings, needs: [...needs.values()], nosepieces: [...nosepieces.values()], flushTools: flush, wastePercent };
 }
 
-function addFlushTools(into: Map<string, FlushTool>, sheets: { countersink: boolean; dimple: boolean }, diameter32: number, pilot: string): void {
-  for (const prep of ['countersink', 'dimple'] as const) {
-    const key = `${prep}|${diameter32}|${pilot}`;
-    if (sheets[prep] && !into.has(key)) into.set(key, { prep, diameter32, pilot });
-  }
+/** Adds the cutters and dies a flush line needs, once each: there are only a few, so a plain search makes no key per line. */
+function addFlushTools(into: FlushTool[], sheets: FlushSheets, diameter32: number, pilot: string): void {
+  if (sheets.countersink) addFlushTool(into, 'countersink', diameter32, pilot);
+  if (sheets.dimple) addFlushTool(into, 'dimple', diameter32, pilot);
+}
+function addFlushTool(into: FlushTool[], prep: FlushPrep, diameter32: number, pilot: string): void {
+  for (const t of into) if (t.prep === prep && t.diameter32 === diameter32 && t.pilot === pilot) return;
+  into.push({ prep, diameter32, pilot });
+}
+
+/** "Line 12: ", made once per line number and kept (at most the 20,000 lines an estimate takes), so warnings do not format a number each. */
+const linePrefixes: string[] = [];
+function linePrefix(i: number): string {
+  return (linePrefixes[i] ??= `Line ${i + 1}: `);
 }
 
 export const isEstimateErrors = (r: EstimateResult | EstimateErrors): r is EstimateErrors => 'errors' in r;

@@ -21,14 +21,21 @@ export const leavesKnifeEdge = (sheetIn: number, diameter32: number): boolean =>
  * countersunk and whether any is dimpled. The top sheet follows the plans' choice or the rule; the
  * sheet under a dimpled sheet is countersunk to take the dimple when it is at least the minimum
  * gage, else dimpled too (nested dimples, common practice); below a countersunk sheet the holes are
- * plain. `stackIn` is in inches.
+ * plain. `stack` is in the line's unit, `scale` that unit per inch.
  */
-export function flushSheetPreps(stackIn: readonly number[], diameter32: number, top: FlushPrep): { countersink: boolean; dimple: boolean } {
+export function flushSheetPreps(stack: readonly number[], scale: number, diameter32: number, top: FlushPrep): FlushSheets {
   let countersink = top === 'countersink';
   let dimple = !countersink;
-  for (let i = 1; i < stackIn.length && !countersink; i++) {
-    if (flushPrepForSheet(stackIn[i]!, diameter32) === 'countersink') countersink = true;
+  for (let i = 1; i < stack.length && !countersink; i++) {
+    if (flushPrepForSheet(stack[i]! / scale, diameter32) === 'countersink') countersink = true;
     else dimple = true;
   }
-  return { countersink, dimple };
+  return countersink ? (dimple ? BOTH : COUNTERSINK_ONLY) : DIMPLE_ONLY;
 }
+export interface FlushSheets {
+  readonly countersink: boolean;
+  readonly dimple: boolean;
+}
+const BOTH: FlushSheets = Object.freeze({ countersink: true, dimple: true });
+const COUNTERSINK_ONLY: FlushSheets = Object.freeze({ countersink: true, dimple: false });
+const DIMPLE_ONLY: FlushSheets = Object.freeze({ countersink: false, dimple: true });

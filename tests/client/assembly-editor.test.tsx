@@ -159,7 +159,7 @@ describe('the assembly editor', () => {
     await waitFor(() => expect(fact(lineEstimate(1), 'Flush preparation')).toBe('Countersink the top sheet (100°)'));
     expect(lineEstimate(1).textContent).toContain('leave a knife edge');
 
-    await userEvent.click(line(1).getByLabelText('Repair of drilled-out rivets (uses the next diameter up)'));
+    await userEvent.click(line(1).getByLabelText('Repair of drilled-out rivets (one size up)'));
     // One size up, 5/32 in: edge 2.5D = 0.390625 in for the countersunk head.
     await waitFor(() => expect(fact(lineEstimate(1), 'Repair rivet')).toBe('5/32 in, one size up'));
     expect(fact(lineEstimate(1), 'Edge distance')).toBe('0.3906 in');

@@ -131,7 +131,7 @@ export function RivetLineFields({ index, unit, live, onRemove }: { index: number
       )}
       <label className="flex min-h-12 cursor-pointer items-center gap-3 font-semibold">
         <input type="checkbox" className="size-6" {...register(`lines.${index}.repair`)} />
-        Repair of drilled-out rivets (uses the next diameter up)
+        Repair of drilled-out rivets (one size up)
       </label>
 
       <section aria-label={`Estimate for rivet line ${n}`} aria-live="polite" className="rounded-lg border border-rule bg-paper p-3">

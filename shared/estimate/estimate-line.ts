@@ -1,7 +1,7 @@
-import { BLIND_GRIP_RANGES, blindGripForStack, inchFraction, solidLengthDash } from '../stock/fasteners';
+import { BLIND_GRIP_RANGES, blindGripForStack, solidLengthDash } from '../stock/fasteners';
 import type { RivetHead } from '../stock/kinds';
 import { flushPrepForSheet, flushSheetPreps, leavesKnifeEdge, MIN_COUNTERSINK_SHEET_IN, type FlushPrep, type FlushSheets } from './flush-prep';
-import { lengthWords } from './length-words';
+import { diameterWords, lengthWords } from './length-words';
 import { nextDiameter32, noLargerDiameterMessage, repairNotice } from './repair';
 import { sheetRuleFinding } from './sheet-rule';
 import { halfLengthOffer, shopHeadFor, type ShopHead } from './shop-head';
@@ -109,9 +109,7 @@ function tempFastenersFor(steps: readonly string[], perStep: number): Readonly<R
   return counts;
 }
 
-function diaWords(diameter32: number): string {
-  return `${inchFraction(diameter32, 32)} in`;
-}
+const diaWords = diameterWords;
 
 /**
  * One rivet line: holes, actual pitch, edge distance, grip, drill steps and temporary fasteners.

@@ -1,4 +1,4 @@
-import { inchFraction } from '../stock/fasteners';
+import { diameterWords } from './length-words';
 import { ESTIMATE_DIAMETERS } from './rivet-rules';
 
 /**
@@ -12,7 +12,7 @@ export function nextDiameter32(diameter32: number): number | null {
   return i >= 0 && i + 1 < ESTIMATE_DIAMETERS.length ? ESTIMATE_DIAMETERS[i + 1]! : null;
 }
 
-const dia = (d32: number) => `${inchFraction(d32, 32)} in`;
+const dia = diameterWords;
 
 export const noLargerDiameterMessage = (diameter32: number): string =>
   `A repair of drilled-out ${dia(diameter32)} rivets needs the next larger diameter, and ${dia(diameter32)} is the largest the estimator knows. Follow the kit’s plans or approved data for this repair.`;

@@ -1,5 +1,4 @@
-import { inchFraction } from '../stock/fasteners';
-import { lengthWords } from './length-words';
+import { diameterWords, lengthWords } from './length-words';
 import type { LengthUnit } from './estimate-line';
 import { ESTIMATE_DIAMETERS } from './rivet-rules';
 
@@ -29,7 +28,7 @@ export interface SheetRuleFinding {
   readonly alone: readonly { code: string; message: string }[];
 }
 
-const dia = (d32: number) => `${inchFraction(d32, 32)} in`;
+const dia = diameterWords;
 
 /**
  * The diameter against the thickest sheet: below the sheet thickness (NAVEDTRA 14018 ch. 13 gives

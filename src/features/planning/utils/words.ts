@@ -1,5 +1,5 @@
 import type { LengthUnit } from '@shared/schemas/builds';
-import { lengthWords } from '@shared/estimate/length-words';
+import { diameterWords, lengthWords } from '@shared/estimate/length-words';
 import type { FlushPrep } from '@shared/estimate/flush-prep';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import { blindGripRange, inchFraction } from '@shared/stock/fasteners';
@@ -18,7 +18,7 @@ export const UNIT_WORDS: Record<LengthUnit, string> = { in: 'inches', mm: 'milli
 export const lengthText = lengthWords;
 
 /** A rivet diameter dash in 32nds: 5 → "5/32 in". */
-export const diameterText = (diameter32: number): string => `${inchFraction(diameter32, 32)} in`;
+export const diameterText = diameterWords;
 
 /**
  * The grip of a rivet line: blind rivets by grip dash with the stack it takes ("−2 (0.063–0.125 in)"),

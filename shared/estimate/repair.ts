@@ -3,9 +3,10 @@ import { ESTIMATE_DIAMETERS } from './rivet-rules';
 
 /**
  * A rivet drilled out leaves a hole that is enlarged: the repair uses the next larger standard
- * diameter (common practice for oversize repair rivets; AC 43.13-1B ch. 4 as restated: replace
- * with the next larger size when the hole is enlarged). The sequence 3 → 4 → 5 → 6 → 8 (32nds) is
- * the table's; that 1/4 in has no repair size here is from memory of the same practice.
+ * diameter (common practice for oversize repair rivets; AC 43.13-1B ch. 4 as restated, not read in
+ * the circular itself: replace with the next larger size when the hole is enlarged — from memory of
+ * that restatement). The steps 3 → 4 → 5 → 6 → 8 (32nds) are the estimator's standard diameters;
+ * 1/4 in is the largest it knows, so a 1/4 in repair has no size here and is refused.
  */
 export function nextDiameter32(diameter32: number): number | null {
   const i = (ESTIMATE_DIAMETERS as readonly number[]).indexOf(diameter32);

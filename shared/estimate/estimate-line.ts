@@ -1,6 +1,10 @@
-import { BLIND_GRIP_RANGES, blindGripForStack, inchFraction, solidLengthDash } from '../stock/fasteners';
+import { BLIND_GRIP_RANGES, blindGripForStack, solidLengthDash } from '../stock/fasteners';
 import type { RivetHead } from '../stock/kinds';
-import { lengthWords } from './length-words';
+import { flushPrepForSheet, flushSheetPreps, leavesKnifeEdge, MIN_COUNTERSINK_SHEET_IN, type FlushPrep, type FlushSheets } from './flush-prep';
+import { diameterWords, lengthWords } from './length-words';
+import { nextDiameter32, noLargerDiameterMessage, repairNotice } from './repair';
+import { sheetRuleFinding } from './sheet-rule';
+import { halfLengthOffer, shopHeadFor, type ShopHead } from './shop-head';
 import {
   DEFAULT_MAX_PITCH_DIAMETERS,
   drillSequence,
@@ -32,6 +36,10 @@ export interface RivetLineInput {
   edgeDistance?: number;
   stack: number[];
   structural?: boolean;
+  /** Flush heads: the plans' choice for the top sheet; when absent, the minimum-gage rule decides. */
+  flushPrep?: FlushPrep;
+  /** The line replaces drilled-out rivets: it uses the next standard diameter up. */
+  repair?: boolean;
   rivet: { kind: EstimateRivetKind; head: RivetHead; diameter32: number; material?: string };
 }
 
@@ -60,6 +68,14 @@ export interface LineEstimate {
   drillSequence: readonly string[];
   tempFasteners: Readonly<Record<string, number>>;
   warnings: readonly EstimateNotice[];
+  /** Flush heads: how the top sheet takes the head; null on protruding heads. */
+  flushPrep: FlushPrep | null;
+  /** Solid rivets: the shop head the length allowance makes, in the line's unit; null on blind rivets. */
+  shopHead: Readonly<ShopHead> | null;
+  /** Solid rivets: the half-length dash below `grip` when it still fits (an offer); else null. */
+  halfLength: number | null;
+  /** Repair lines only: the diameter used, the next size up from the drilled-out rivets'. */
+  diameter32?: number;
 }
 
 /** A line the estimator must refuse: the code and the words say why. */
@@ -93,9 +109,7 @@ function tempFastenersFor(steps: readonly string[], perStep: number): Readonly<R
   return counts;
 }
 
-function diaWords(diameter32: number): string {
-  return `${inchFraction(diameter32, 32)} in`;
-}
+const diaWords = diameterWords;
 
 /**
  * One rivet line: holes, actual pitch, edge distance, grip, drill steps and temporary fasteners.
@@ -105,13 +119,28 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
   const unit = options.unit;
   /** Inches to the line's unit. */
   const scale = unit === 'mm' ? MM_PER_INCH : 1;
-  const { kind, head, diameter32 } = line.rivet;
-  const d = (diameter32 / 32) * scale;
+  const { kind, head } = line.rivet;
   const warnings: EstimateNotice[] = [];
   // Most lines have no warning: they share one frozen empty list (10,000 lines make 10,000 fewer arrays to collect).
 
   if (kind === 'blind-general' && line.structural) {
     return { error: true, code: 'SOFT_RIVET_ON_STRUCTURE', message: `A general-purpose blind rivet cannot go on a structural line. ${SOFT_RIVET_CAUTION}` };
+  }
+  // A repair uses the next standard diameter up, and every rule below is worked for it.
+  const diameter32 = line.repair ? nextDiameter32(line.rivet.diameter32) : line.rivet.diameter32;
+  if (diameter32 === null) return { error: true, code: 'NO_LARGER_DIAMETER', message: noLargerDiameterMessage(line.rivet.diameter32) };
+  if (line.repair) warnings.push(repairNotice(line.rivet.diameter32, diameter32));
+  const d = (diameter32 / 32) * scale;
+
+  let stackSum = 0;
+  let thickest = 0;
+  for (const t of line.stack) {
+    stackSum += t;
+    if (t > thickest) thickest = t;
+  }
+  const sheet = sheetRuleFinding(diameter32, thickest, unit);
+  if (sheet !== null) {
+    if (sheet.code === 'DIAMETER_BELOW_SHEET_THICKNESS' && line.structural) return { error: true, code: sheet.code, message: sheet.message };
   }
 
   const minEdge = minEdgeDiameters(head) * d;
@@ -156,12 +185,14 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
     warnings.push({ code: 'PITCH_ABOVE_MAXIMUM', message: `The pitch of ${lengthWords(pitch, unit)} is above the chapter's maximum of ${maxD}D = ${lengthWords(maxD * d, unit)}.` });
   }
 
-  let stackSum = 0;
-  for (const t of line.stack) stackSum += t;
   const stackIn = stackSum / scale;
   let grip: number | null;
+  let shopHead: Readonly<ShopHead> | null = null;
+  let halfLength: number | null = null;
   if (familyOf(kind) === 'solid') {
     grip = solidLengthDash(stackIn, diameter32);
+    shopHead = shopHeadFor(diameter32, unit);
+    halfLength = halfLengthOffer(stackIn + 1.5 * (diameter32 / 32), grip);
   } else {
     grip = blindGripForStack(stackIn) ?? null;
     const longest = BLIND_GRIP_RANGES.at(-1)!;
@@ -178,13 +209,39 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
   const steps = drillSequence(kind, diameter32, options.finalDrillOverride);
   const tempFasteners = tempFastenersFor(steps, Math.ceil(holes / 3));
   const edgeDistance = clean(edge);
-  // Only a line of more than one row has a transverse pitch: one-row answers stay as they were.
-  // Two plain literals, not a spread: the estimator runs over thousands of lines.
-  if (rows > 1) {
-    const transversePitch = clean(transversePitchFor(line.rowSpacing, pitch, d, diameter32, unit, warnings));
-    return { holesPerRow, holes, pitch: clean(pitch), edgeDistance, transversePitch, grip, drillSequence: steps, tempFasteners, warnings: warnings.length > 0 ? warnings : NO_WARNINGS };
+  const flushPrep = head === 'countersunk' ? flushPrepOf(line, line.stack[0]! / scale, diameter32, unit, warnings) : null;
+  // Only a line of more than one row has a transverse pitch, only a repair its diameter: other answers stay as they were.
+  // Plain literals, not a spread: the estimator runs over thousands of lines.
+  const transversePitch = rows > 1 ? clean(transversePitchFor(line.rowSpacing, pitch, d, diameter32, unit, warnings)) : undefined;
+  const answer: LineEstimate =
+    transversePitch === undefined
+      ? { holesPerRow, holes, pitch: clean(pitch), edgeDistance, grip, drillSequence: steps, tempFasteners, warnings: NO_WARNINGS, flushPrep, shopHead, halfLength }
+      : { holesPerRow, holes, pitch: clean(pitch), edgeDistance, transversePitch, grip, drillSequence: steps, tempFasteners, warnings: NO_WARNINGS, flushPrep, shopHead, halfLength };
+  // The sheet rule's warning comes first (after a repair's): a line with no other shares that finding's list, so it makes none.
+  if (sheet !== null && warnings.length === 0) answer.warnings = sheet.alone;
+  else if (warnings.length > 0) {
+    if (sheet !== null) warnings.splice(line.repair ? 1 : 0, 0, sheet.alone[0]!);
+    answer.warnings = warnings;
   }
-  return { holesPerRow, holes, pitch: clean(pitch), edgeDistance, grip, drillSequence: steps, tempFasteners, warnings: warnings.length > 0 ? warnings : NO_WARNINGS };
+  if (line.repair) answer.diameter32 = diameter32;
+  return answer;
+}
+
+/** The top sheet's preparation: the plans' choice (a countersink below the minimum gage warns of a knife edge), else the minimum-gage rule. */
+function flushPrepOf(line: RivetLineInput, topIn: number, diameter32: number, unit: LengthUnit, warnings: EstimateNotice[]): FlushPrep {
+  if (line.flushPrep === undefined) return flushPrepForSheet(topIn, diameter32);
+  if (line.flushPrep === 'countersink' && leavesKnifeEdge(topIn, diameter32)) {
+    warnings.push({
+      code: 'COUNTERSINK_KNIFE_EDGE',
+      message: `Countersinking the ${lengthWords(line.stack[0]!, unit)} top sheet for a ${diaWords(diameter32)} rivet would go through the sheet and leave a knife edge that can tear out and weaken the joint: the minimum for a machine countersink is ${lengthWords(MIN_COUNTERSINK_SHEET_IN[diameter32]! * (unit === 'mm' ? MM_PER_INCH : 1), unit)}. Dimple it instead.`,
+    });
+  }
+  return line.flushPrep;
+}
+
+/** What a flush line's stack needs from the crib: a countersink cutter, dimple dies, or both (the sheet under a dimple countersunk to take it). */
+export function flushSheetNeeds(line: RivetLineInput, flushPrep: FlushPrep, diameter32: number, unit: LengthUnit): FlushSheets {
+  return flushSheetPreps(line.stack, unit === 'mm' ? MM_PER_INCH : 1, diameter32, flushPrep);
 }
 
 /** The spacing between rows: the given one (warned below 2.5D), else 75 % of the actual pitch and at least 2.5D. */

@@ -1,6 +1,7 @@
 import { DEFAULT_WASTE_PERCENT, type EstimateRivetKind } from './rivet-rules';
-import { estimateLine, type EstimateNotice, type LengthUnit, type LineOptions, type RivetLineInput } from './estimate-line';
+import { estimateLine, flushSheetNeeds, type EstimateNotice, type LengthUnit, type LineOptions, type RivetLineInput } from './estimate-line';
 import type { RivetHead } from '../stock/kinds';
+import type { FlushPrep, FlushSheets } from './flush-prep';
 import { estimateCautions } from '../safety/estimate-cautions';
 import { totalsRules, withRules, type LineRule, type RuledLineEstimate, type WasteOrigin } from './line-rules';
 
@@ -49,7 +50,16 @@ export interface EstimateResult {
   /** Not part of the /api/estimate answer: the needs by fastener, the tool sizes, the waste used. */
   needs: FastenerNeed[];
   nosepieces: { kind: 'blind' | 'solid'; diameter32: number; head: RivetHead }[];
+  /** Flush lines' countersink cutters and dimple dies by size, with the final drill the cutter's pilot fits; countersinks first, then by size. */
+  flushTools: FlushTool[];
   wastePercent: number;
+}
+
+export interface FlushTool {
+  prep: FlushPrep;
+  diameter32: number;
+  /** The line's final drill: the cutter's pilot (and the hole the dies' pilot fits). */
+  pilot: string;
 }
 
 export interface EstimateErrors {
@@ -64,7 +74,7 @@ const KIND_INDEX: Record<EstimateRivetKind, number> = { 'blind-structural': 0, '
  * of a few specs make a few strings, not 10,000.
  */
 const needKeys = new Map<string, Map<number, string>>();
-function needKey(rivet: RivetLineInput['rivet'], grip: number | null): string {
+function needKey(rivet: RivetLineInput['rivet'], diameter32: number, grip: number | null): string {
   const material = rivet.material ?? '';
   let byMaterial = needKeys.get(material);
   if (!byMaterial) {
@@ -72,10 +82,10 @@ function needKey(rivet: RivetLineInput['rivet'], grip: number | null): string {
     // Materials come from people's input: keep at most a few hundred of them.
     if (needKeys.size < 500) needKeys.set(material, byMaterial);
   }
-  const code = ((KIND_INDEX[rivet.kind] * 3 + HEAD_INDEX[rivet.head]) * 64 + rivet.diameter32) * 256 + (grip === null ? 255 : grip * 2);
+  const code = ((KIND_INDEX[rivet.kind] * 3 + HEAD_INDEX[rivet.head]) * 64 + diameter32) * 256 + (grip === null ? 255 : grip * 2);
   let key = byMaterial.get(code);
   if (key === undefined) {
-    key = `${rivet.kind}|${rivet.head}|${material}|${rivet.diameter32}|${grip ?? ''}`;
+    key = `${rivet.kind}|${rivet.head}|${material}|${diameter32}|${grip ?? ''}`;
     if (byMaterial.size < 10_000) byMaterial.set(code, key);
   }
   return key;
@@ -108,20 +118,24 @@ export function estimate(input: EstimateInput, options: EstimateOptions = {}): E
   const totals: EstimateTotals = { rivets: 0, rivetsWithWaste: 0, drillHoles: {}, tempFasteners: {}, rules: totalsRules(wastePercent, wasteOrigin) };
   const needs = new Map<string, FastenerNeed>();
   const nosepieces = new Map<number, EstimateResult['nosepieces'][number]>();
+  const flushTools: FlushTool[] = [];
   for (let i = 0; i < lines.length; i++) {
     const l = withRules(input.lines[i]!, lines[i]!, optionsOf(i));
     const rivet = input.lines[i]!.rivet;
+    // A repair line's rivets are the next size up: the needs and tools follow the diameter used.
+    const diameter32 = l.diameter32 ?? rivet.diameter32;
     totals.rivets += l.holes;
     for (const step of l.drillSequence) totals.drillHoles[step] = (totals.drillHoles[step] ?? 0) + l.holes;
     atOnce(totals.tempFasteners, l.tempFasteners);
-    const key = needKey(rivet, l.grip);
-    const need = needs.get(key) ?? { kind: rivet.kind, head: rivet.head, material: rivet.material ?? null, diameter32: rivet.diameter32, grip: l.grip, rivets: 0, withWaste: 0, lines: [] };
+    const key = needKey(rivet, diameter32, l.grip);
+    const need = needs.get(key) ?? { kind: rivet.kind, head: rivet.head, material: rivet.material ?? null, diameter32, grip: l.grip, rivets: 0, withWaste: 0, lines: [] };
     need.rivets += l.holes;
     need.lines.push(i);
     needs.set(key, need);
     const family = rivet.kind === 'solid' ? 'solid' : 'blind';
-    const toolKey = (family === 'solid' ? 1000 + HEAD_INDEX[rivet.head] * 100 : 0) + rivet.diameter32;
-    if (!nosepieces.has(toolKey)) nosepieces.set(toolKey, { kind: family, diameter32: rivet.diameter32, head: rivet.head });
+    const toolKey = (family === 'solid' ? 1000 + HEAD_INDEX[rivet.head] * 100 : 0) + diameter32;
+    if (!nosepieces.has(toolKey)) nosepieces.set(toolKey, { kind: family, diameter32, head: rivet.head });
+    if (l.flushPrep !== null) addFlushTools(flushTools, flushSheetNeeds(input.lines[i]!, l.flushPrep, diameter32, input.unit), diameter32, l.drillSequence.at(-1)!);
   }
   for (const need of needs.values()) {
     need.withWaste = Math.ceil(need.rivets * (1 + wastePercent / 100) - 1e-9);
@@ -129,9 +143,29 @@ export function estimate(input: EstimateInput, options: EstimateOptions = {}): E
   }
   const warnings: EstimateNotice[] = [];
   for (let i = 0; i < lines.length; i++) {
-    for (const w of lines[i]!.warnings) warnings.push({ code: w.code, message: `Line ${i + 1}: ${w.message}` });
+    const ws = lines[i]!.warnings;
+    if (ws.length === 0) continue;
+    const prefix = linePrefix(i);
+    for (const w of ws) warnings.push({ code: w.code, message: prefix + w.message });
   }
-  return { lines, totals, warnings, cautions: estimateCautions(input.lines), needs: [...needs.values()], nosepieces: [...nosepieces.values()], wastePercent };
+  const flush = flushTools.sort((a, b) => Number(a.prep === 'dimple') - Number(b.prep === 'dimple') || a.diameter32 - b.diameter32);
+  return { lines, totals, warnings, cautions: estimateCautions(input.lines), needs: [...needs.values()], nosepieces: [...nosepieces.values()], flushTools: flush, wastePercent };
+}
+
+/** Adds the cutters and dies a flush line needs, once each: there are only a few, so a plain search makes no key per line. */
+function addFlushTools(into: FlushTool[], sheets: FlushSheets, diameter32: number, pilot: string): void {
+  if (sheets.countersink) addFlushTool(into, 'countersink', diameter32, pilot);
+  if (sheets.dimple) addFlushTool(into, 'dimple', diameter32, pilot);
+}
+function addFlushTool(into: FlushTool[], prep: FlushPrep, diameter32: number, pilot: string): void {
+  for (const t of into) if (t.prep === prep && t.diameter32 === diameter32 && t.pilot === pilot) return;
+  into.push({ prep, diameter32, pilot });
+}
+
+/** "Line 12: ", made once per line number and kept (at most the 20,000 lines an estimate takes), so warnings do not format a number each. */
+const linePrefixes: string[] = [];
+function linePrefix(i: number): string {
+  return (linePrefixes[i] ??= `Line ${i + 1}: `);
 }
 
 export const isEstimateErrors = (r: EstimateResult | EstimateErrors): r is EstimateErrors => 'errors' in r;

@@ -123,6 +123,8 @@ export const RULES = {
   flushDimple: rule('flushPrep', 'Dimple: the head’s sheet is thinner than the minimum gage for a 100° machine countersink; countersink the part beneath to take the dimple', SOURCES.armyCountersink),
   shopHead: rule('shopHead', 'Shop head about 1.5D wide and 0.5D high: what the length allowance is for', SOURCES.faaAirframe),
   diameter: rule('diameter', 'About 3 times the thickest sheet', both(SOURCES.acDiameter, SOURCES.navyStructures)),
+  flushGiven: (prep: 'countersink' | 'dimple') =>
+    rule('flushPrep', `${prep === 'countersink' ? 'Machine countersink' : 'Dimple'}, as given on the line (the plans’ choice), checked against the minimum gage for a 100° machine countersink`, SOURCES.armyCountersink),
   repair: rule('repair', 'A drilled-out rivet is replaced by the next diameter up; edge distance and pitch are checked again for it', SOURCES.common),
 } as const;
 
@@ -144,14 +146,19 @@ const EDGE_GIVEN = 2;
  * the chapter's maximum pitch and a bin's own hole drill, so 20,000 lines make a handful of lists.
  */
 export function lineRules(line: RivetLineInput, estimate: LineEstimate, options: RuleOptions): readonly LineRule[] {
-  const { kind, head, diameter32 } = line.rivet;
+  const { kind, head } = line.rivet;
+  // A repair line is worked one size up: its edge rule is for the diameter used.
+  const diameter32 = estimate.diameter32 ?? line.rivet.diameter32;
   const countersunk = head === 'countersunk';
   const minEdge = (minEdgeDiameters(head) * diameter32 * (options.unit === 'mm' ? MM_PER_INCH : 1)) / 32;
   const edge = line.edgeDistance !== undefined ? EDGE_GIVEN : estimate.edgeDistance > minEdge + 1e-6 ? EDGE_FLOOR : EDGE_MIN;
   const rows = line.rows ?? 1;
   const layout = rows <= 1 ? 0 : line.rowPattern === 'staggered' ? 2 : 1;
   const code =
-    (familyOf(kind) === 'solid' ? 1 : 0) | (countersunk ? 2 : 0) | (edge << 2) | (line.holesPerRow !== undefined ? 16 : 0) | (layout << 5) | (layout > 0 && line.rowSpacing !== undefined ? 128 : 0);
+    (familyOf(kind) === 'solid' ? 1 : 0) | (countersunk ? 2 : 0) | (edge << 2) | (line.holesPerRow !== undefined ? 16 : 0) | (layout << 5) | (layout > 0 && line.rowSpacing !== undefined ? 128 : 0) |
+    ((estimate.flushPrep === null ? 0 : estimate.flushPrep === 'countersink' ? 1 : 2) << 8) |
+    (line.flushPrep !== undefined ? 1024 : 0) |
+    (line.repair ? 2048 : 0);
   const maxD = options.maxPitchDiameters ?? DEFAULT_MAX_PITCH_DIAMETERS;
   const drill = options.finalDrillOverride ?? '';
   const byCode = setsFor(maxD, drill);
@@ -198,6 +205,14 @@ function buildRules(code: number, head: RivetHead, maxD: number, drill: string):
   ];
   if (layout > 0) rules.push(code & 128 ? RULES.transverseGiven : RULES.transverseDefault);
   rules.push(solid ? RULES.gripSolid : RULES.gripBlind, drill ? RULES.drillStepsBinHole(drill) : RULES.drillSteps(solid), RULES.tempFasteners);
+  const flush = (code >> 8) & 3;
+  if (flush > 0) {
+    const prep = flush === 1 ? 'countersink' : 'dimple';
+    rules.push(code & 1024 ? RULES.flushGiven(prep) : prep === 'countersink' ? RULES.flushCountersink : RULES.flushDimple);
+  }
+  if (solid) rules.push(RULES.shopHead);
+  rules.push(RULES.diameter);
+  if (code & 2048) rules.push(RULES.repair);
   return Object.freeze(rules);
 }
 

@@ -141,7 +141,7 @@ export const billLineSchema = z.object({
 });
 export type BillLine = z.infer<typeof billLineSchema>;
 
-export const KIT_ROLES = ['puller', 'rivet_gun', 'nosepiece', 'rivet_set', 'bucking_bar', 'drill_bit', 'temporary_fastener_tray', 'deburring_tool'] as const;
+export const KIT_ROLES = ['puller', 'rivet_gun', 'nosepiece', 'rivet_set', 'bucking_bar', 'drill_bit', 'countersink_cutter', 'dimple_dies', 'temporary_fastener_tray', 'deburring_tool'] as const;
 export type KitRole = (typeof KIT_ROLES)[number];
 /** A crib tool the assembly needs, and whether one is free now. */
 export const kitItemSchema = z.object({

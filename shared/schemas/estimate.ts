@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { RULE_VALUES } from '../estimate/line-rules';
+import { FLUSH_PREPS } from '../estimate/flush-prep';
 import { ESTIMATE_DIAMETERS, ESTIMATE_RIVET_KINDS, ROW_PATTERNS } from '../estimate/rivet-rules';
 import { isSolidRivetHead, RIVET_HEADS, SOLID_RIVET_HEAD_WORDS } from '../stock/kinds';
 
@@ -32,9 +33,14 @@ export const rivetLineSchema = z
       .min(1, { error: 'Give at least one sheet thickness.' })
       .max(10, { error: 'At most 10 sheets in a stack.' }),
     structural: z.boolean().optional(),
+    /** Flush heads only: the plans' choice for the top sheet; when absent, the minimum-gage rule decides. */
+    flushPrep: z.enum(FLUSH_PREPS, { error: 'The flush preparation is countersink or dimple.' }).optional(),
+    /** The line replaces drilled-out rivets: it is worked with the next standard diameter up. */
+    repair: z.boolean({ error: 'repair is true or false.' }).optional(),
     rivet: rivetSpecSchema,
   })
-  .refine((l) => l.pitch !== undefined || l.holesPerRow !== undefined, { error: 'Give a target pitch or the holes per row.', path: ['pitch'] });
+  .refine((l) => l.pitch !== undefined || l.holesPerRow !== undefined, { error: 'Give a target pitch or the holes per row.', path: ['pitch'] })
+  .refine((l) => l.flushPrep === undefined || l.rivet.head === 'countersunk', { error: 'A flush preparation (countersink or dimple) is only for countersunk heads.', path: ['flushPrep'] });
 export type RivetLine = z.infer<typeof rivetLineSchema>;
 
 export const estimateBodySchema = z.strictObject({
@@ -64,6 +70,14 @@ export const lineEstimateSchema = z.object({
   warnings: z.array(notice).readonly(),
   /** The rule and source of every computed value on the line. */
   rules,
+  /** Flush heads: how the top sheet takes the head; null on protruding heads. */
+  flushPrep: z.enum(FLUSH_PREPS).nullable(),
+  /** Solid rivets: the shop head (about 1.5D wide, 0.5D high) in the line's unit; null on blind rivets. */
+  shopHead: z.object({ width: z.number(), height: z.number() }).readonly().nullable(),
+  /** Solid rivets: the half-length dash below the length when it fits (an offer, suppliers vary); else null. */
+  halfLength: z.number().nullable(),
+  /** Repair lines only: the diameter used, in 32nds, one standard size up. */
+  diameter32: z.number().optional(),
 });
 
 export const estimateTotalsSchema = z.object({ rivets: z.number(), rivetsWithWaste: z.number(), drillHoles: counts, tempFasteners: counts, rules });

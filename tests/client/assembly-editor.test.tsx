@@ -136,6 +136,41 @@ describe('the assembly editor', () => {
     expect((posts(calls)[0]!.body as { lines: object[] }).lines[0]).toMatchObject({ rows: 2, rowPattern: 'staggered', rowSpacing: 0.25 });
   });
 
+  it('asks how a countersunk head’s top sheet is prepared, shows the shop head and half length, and marks a repair', async () => {
+    const calls = serve();
+    renderEditor();
+    await userEvent.type(await screen.findByLabelText('Assembly name'), 'Aileron skin');
+    await userEvent.type(line(1).getByLabelText('Length (in)'), '20');
+    await userEvent.type(line(1).getByLabelText('Target pitch (in)'), '1');
+    await userEvent.click(line(1).getByRole('button', { name: 'Add a 0.032 in sheet' }));
+    await userEvent.click(line(1).getByRole('button', { name: 'Add a 0.032 in sheet' }));
+    await userEvent.selectOptions(line(1).getByLabelText('Rivet kind'), 'Solid rivet');
+    await userEvent.selectOptions(line(1).getByLabelText('Diameter'), '1/8 in (−4)');
+    expect(line(1).queryByLabelText('Flush preparation')).toBeNull();
+    // Solid 1/8 in: 0.064 + 1.5 × 0.125 = 0.2515 in → −5 (5/16 in); −4.5 = 0.28125 in also fits. Shop head 1.5D × 0.5D (FAA-H-8083-31, secondary).
+    await waitFor(() => expect(fact(lineEstimate(1), 'Rivet length')).toBe('length −5 (5/16 in), shop head about 0.1875 in wide, 0.0625 in high'));
+    expect(fact(lineEstimate(1), 'Half length')).toBe('−4.5 (9/32 in) also fits; which half lengths are stocked varies by supplier');
+
+    await userEvent.selectOptions(line(1).getByLabelText('Head'), '100° countersunk');
+    const prep = line(1).getByLabelText<HTMLSelectElement>('Flush preparation');
+    expect([...prep.options].map((o) => o.text)).toEqual(['As the rule says', 'Countersink', 'Dimple']);
+    // 0.032 in top sheet, below the 0.050 in minimum for a 1/8 in machine countersink (TM 9-2320-363-34-2): dimpled.
+    await waitFor(() => expect(fact(lineEstimate(1), 'Flush preparation')).toBe('Dimple the top sheet (100°)'));
+    await userEvent.selectOptions(prep, 'Countersink');
+    await waitFor(() => expect(fact(lineEstimate(1), 'Flush preparation')).toBe('Countersink the top sheet (100°)'));
+    expect(lineEstimate(1).textContent).toContain('leave a knife edge');
+
+    await userEvent.click(line(1).getByLabelText('Repair of drilled-out rivets (one size up)'));
+    // One size up, 5/32 in: edge 2.5D = 0.390625 in for the countersunk head.
+    await waitFor(() => expect(fact(lineEstimate(1), 'Repair rivet')).toBe('5/32 in, one size up'));
+    expect(fact(lineEstimate(1), 'Edge distance')).toBe('0.3906 in');
+    expect(lineEstimate(1).textContent).toContain('Repair: 1/8 in holes drilled out, 5/32 in rivets');
+
+    await userEvent.click(save());
+    await waitFor(() => expect(posts(calls)).toHaveLength(1));
+    expect((posts(calls)[0]!.body as { lines: object[] }).lines[0]).toMatchObject({ flushPrep: 'countersink', repair: true, rivet: { kind: 'solid', head: 'countersunk', diameter32: 4 } });
+  });
+
   it('refuses a general-purpose blind rivet on a structural line with the caution, and will not save until it is changed', async () => {
     const calls = serve();
     renderEditor();
@@ -259,7 +294,9 @@ describe('the assembly editor', () => {
     // 0.050 + 1.5 × 0.125 = 0.2375 → next 1/16 up is −4 (NAVEDTRA 14018 ch. 13; trade-checks.md §4).
     await waitFor(() => expect(fact(lineEstimate(2), 'Holes')).toBe('22 (11 a row × 2 rows)'));
     expect(fact(lineEstimate(2), 'Pitch')).toBe('0.9 in');
-    expect(fact(lineEstimate(2), 'Rivet length')).toBe('length −4 (1/4 in)');
+    // Its shop head about 1.5D × 0.5D (FAA-H-8083-31, secondary); −3.5 (0.21875 in) is too short, so no half length.
+    expect(fact(lineEstimate(2), 'Rivet length')).toBe('length −4 (1/4 in), shop head about 0.1875 in wide, 0.0625 in high');
+    expect(within(lineEstimate(2)).queryByText('Half length')).toBeNull();
     // Solid 1/8 in: #40 then #30 (FAA-H-8083-31 final drills).
     expect(fact(lineEstimate(2), 'Drill steps')).toBe('#40 → #30');
     // Waste per rivet kind, rounded up: ⌈20 × 1.05⌉ = 21, ⌈22 × 1.05⌉ = ⌈23.1⌉ = 24 → 45 (arithmetic).

@@ -18,7 +18,7 @@ const ASSEMBLY = rudderFixture({ status: 'planned' });
 const CAUTION = 'Gripline plans stock and tools; it does not design structures. The kit’s plans, approved data and licensed practice govern.';
 
 /** The server's answer for that assembly: figures as the shared estimate gives them for the line (see assembly-editor.test.tsx). */
-const FIGURES = { holesPerRow: 21, holes: 21, pitch: 0.9625, edgeDistance: 0.375, grip: 2, drillSequence: ['#40', '#30', '#20'], tempFasteners: { '3/32': 7, '1/8': 7, '5/32': 7 }, warnings: [] };
+const FIGURES = { holesPerRow: 21, holes: 21, pitch: 0.9625, edgeDistance: 0.375, grip: 2, drillSequence: ['#40', '#30', '#20'], tempFasteners: { '3/32': 7, '1/8': 7, '5/32': 7 }, warnings: [], flushPrep: null, shopHead: null, halfLength: null };
 const ESTIMATE: AssemblyEstimate = estimateFixture(7, {
   // The rules the shared estimate gives that line: edge given on the line, pitch from the target pitch, blind grip band.
   lines: [{ label: 'Skin to spar', ...FIGURES, rules: lineRules(ASSEMBLY.lines[0] as RivetLineInput, FIGURES, { unit: 'in' }) }],

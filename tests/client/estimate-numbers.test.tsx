@@ -16,7 +16,7 @@ describe('the estimate’s counts', () => {
   });
 
   it('writes a long line’s holes with separators too', () => {
-    const line: LineEstimate = { holesPerRow: 603, holes: 1206, pitch: 1, edgeDistance: 0.25, transversePitch: 0.75, grip: 2, drillSequence: ['#40', '#30'], tempFasteners: { '1/8': 1206 }, warnings: [] };
+    const line: LineEstimate = { holesPerRow: 603, holes: 1206, pitch: 1, edgeDistance: 0.25, transversePitch: 0.75, grip: 2, drillSequence: ['#40', '#30'], tempFasteners: { '1/8': 1206 }, warnings: [], flushPrep: null, shopHead: null, halfLength: null };
     render(<LineEstimateView line={line} unit="in" kind="blind-structural" layout={{ rows: 2 }} />);
     expect(screen.getByText('1,206 (603 a row × 2 rows)')).toBeTruthy();
     expect(screen.getByText('0.75 in')).toBeTruthy();
@@ -24,7 +24,7 @@ describe('the estimate’s counts', () => {
 
   it('writes staggered rows as they are laid out: one hole fewer in every second row', () => {
     // 3 staggered rows of 603: 603 + 602 + 603 = 1,808 (our own arithmetic).
-    const line: LineEstimate = { holesPerRow: 603, holes: 1808, pitch: 1, edgeDistance: 0.25, transversePitch: 0.75, grip: 2, drillSequence: ['#40', '#30'], tempFasteners: { '1/8': 603 }, warnings: [] };
+    const line: LineEstimate = { holesPerRow: 603, holes: 1808, pitch: 1, edgeDistance: 0.25, transversePitch: 0.75, grip: 2, drillSequence: ['#40', '#30'], tempFasteners: { '1/8': 603 }, warnings: [], flushPrep: null, shopHead: null, halfLength: null };
     render(<LineEstimateView line={line} unit="in" kind="blind-structural" layout={{ rows: 3, rowPattern: 'staggered' }} />);
     expect(screen.getByText('1,808 (3 staggered rows of 603 and 602)')).toBeTruthy();
     expect(screen.getByText('Transverse pitch (between rows)')).toBeTruthy();

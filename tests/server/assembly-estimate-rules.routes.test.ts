@@ -34,7 +34,7 @@ describe('the assembly estimate carries rules and cautions', () => {
     expect(e.lines[0]!.edgeDistance).toBe(0.375);
     const edge = e.lines[0]!.rules.find((r) => r.value === 'edgeDistance')!;
     expect(edge.rule).toContain('build’s edge distance floor');
-    expect(e.lines[0]!.rules.map((r) => r.value)).toEqual(['edgeDistance', 'pitch', 'holesPerRow', 'holes', 'grip', 'drillSequence', 'tempFasteners']);
+    expect(e.lines[0]!.rules.map((r) => r.value)).toEqual(['edgeDistance', 'pitch', 'holesPerRow', 'holes', 'grip', 'drillSequence', 'tempFasteners', 'diameter']);
     expect(e.totals.rules.find((r) => r.value === 'rivetsWithWaste')!.rule).toContain('chapter’s waste allowance of 5 %');
     expect(e.cautions).not.toContain(SOFT_RIVET_CAUTION);
     expect(e.cautions.join(' ')).toContain('licensed mechanic or inspector');

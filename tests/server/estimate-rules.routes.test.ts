@@ -19,13 +19,33 @@ type Rule = { value: string; rule: string; source: string };
 const ruleOf = (rules: Rule[], value: string) => rules.find((r) => r.value === value);
 
 describe('POST /api/estimate: every number with its rule and source', () => {
+  it('says why a flush line is dimpled or countersunk, why a solid rivet has its shop head, and why a repair line is one size up', async () => {
+    // 1/8 in countersunk rivets: minimum sheet 0.050 in for a 100° machine countersink (TM 9-2320-363-34-2).
+    const flush = (top: number, extra: object = {}) => ({ length: 12, pitch: 1, stack: [top, 0.063], rivet: { kind: 'solid', head: 'countersunk', diameter32: 4 }, ...extra });
+    const res = await post(member, '/api/estimate', { unit: 'in', lines: [flush(0.032), flush(0.063), flush(0.032, { flushPrep: 'countersink' }), flush(0.063, { repair: true })] });
+    expect(res.status).toBe(200);
+    const [dimpled, countersunk, given, repair] = res.body.lines as { flushPrep: string; rules: Rule[] }[];
+    expect(dimpled!.flushPrep).toBe('dimple');
+    expect(ruleOf(dimpled!.rules, 'flushPrep')).toMatchObject({ rule: expect.stringMatching(/^Dimple/), source: 'TM 9-2320-363-34-2' });
+    expect(countersunk!.flushPrep).toBe('countersink');
+    expect(ruleOf(countersunk!.rules, 'flushPrep')!.rule).toMatch(/^Machine countersink/);
+    // The plans' countersink on a 0.032 in sheet stays, with its rule saying it was given, and warns of a knife edge.
+    expect(ruleOf(given!.rules, 'flushPrep')!.rule).toMatch(/as given on the line/);
+    // Shop head 1.5D × 0.5D (FAA-H-8083-31), on every solid line.
+    expect(ruleOf(countersunk!.rules, 'shopHead')!.source).toBe('FAA-H-8083-31');
+    expect(ruleOf(repair!.rules, 'repair')!.rule).toMatch(/next diameter up/);
+    expect(ruleOf(countersunk!.rules, 'repair')).toBeUndefined();
+    // The repair line is worked at 5/32 in: its countersunk edge rule is 2.5D of 5/32 in.
+    expect(ruleOf(repair!.rules, 'edgeDistance')!.rule).toBe('2.5D, countersunk head');
+  });
+
   it('names each value of a one-line estimate with its rule and a published source or common practice', async () => {
     // 20 in, 1 in target pitch, 5/32 in structural blind rivets, edge left to the rule (2D = 0.3125 in).
     const res = await post(member, '/api/estimate', { unit: 'in', lines: [{ length: 20, pitch: 1, stack: [0.032, 0.032], rivet: blind }] });
     expect(res.status).toBe(200);
     expect(estimateResponseSchema.strict().parse(res.body)).toBeTruthy();
     const rules: Rule[] = res.body.lines[0].rules;
-    expect(rules.map((r) => r.value)).toEqual(['edgeDistance', 'pitch', 'holesPerRow', 'holes', 'grip', 'drillSequence', 'tempFasteners']);
+    expect(rules.map((r) => r.value)).toEqual(['edgeDistance', 'pitch', 'holesPerRow', 'holes', 'grip', 'drillSequence', 'tempFasteners', 'diameter']);
     for (const r of rules) {
       expect(r.rule.length, r.value).toBeGreaterThan(5);
       expect(r.source.length, r.value).toBeGreaterThan(5);

@@ -360,6 +360,18 @@ describe('the crib kit', () => {
     expect(plain.code).not.toBe(both.code);
   });
 
+  it('asks for a countersink cutter with its pilot per size countersunk and dimple dies per size dimpled (TM 9-2320-363-34-2 minimum gage)', async () => {
+    const flush = (diameter32: number, stack: number[]) => ({ length: 12, pitch: 1, stack, rivet: { kind: 'solid', head: 'countersunk', diameter32, material: '2117-T4' } });
+    // 1/8 in over a 0.050 in top sheet: at the 0.050 in minimum, countersunk; final drill #30 is the pilot.
+    // 3/32 in over 0.025 in, then 0.032 in: both below the 0.040 in minimum, nested dimples.
+    const e = await estimateOf(member, await newAssembly(member, { lines: [flush(4, [0.05, 0.04]), flush(3, [0.025, 0.032])] }));
+    expect(e.lines.map((l) => l.flushPrep)).toEqual(['countersink', 'dimple']);
+    expect(e.kit.filter((k) => k.role === 'countersink_cutter' || k.role === 'dimple_dies').map(short)).toEqual([
+      ['countersink_cutter', '100° countersink cutter, 1/8 in, #30 pilot', null, null, 'none in the crib'],
+      ['dimple_dies', '100° dimple dies, 3/32 in', null, null, 'none in the crib'],
+    ]);
+  });
+
   it('holds the kit: free tools are set aside, tools someone else has are queued for, and it says why it skipped the rest', async () => {
     const c = await crib();
     const id = await newAssembly(member, { lines: [sixtyHoles] });

@@ -62,14 +62,17 @@ describe('every computed value has its rule', () => {
       rows: 1 + (i % 3),
       ...(i % 2 === 0 ? { rowPattern: 'staggered' as const } : {}),
       ...(i % 5 === 0 ? { rowSpacing: 0.5 } : {}),
+      ...(i % 7 === 0 ? { repair: true } : {}),
       stack: [0.032, 0.04],
       rivet: { kind: kinds[i % 3]!, head: heads[(i >> 1) % 3]!, diameter32: [3, 4, 5][i % 3]! },
     }));
     const out = lines(input, { edgeFloorIn: 0.35, maxPitchDiameters: 8 });
     out.forEach((l, i) => {
       const values = l.rules.map((r) => r.value);
-      const shown = ['edgeDistance', 'pitch', 'holesPerRow', 'holes', ...(l.transversePitch === undefined ? [] : ['transversePitch']), 'grip', 'drillSequence', 'tempFasteners'];
+      const shown = ['edgeDistance', 'pitch', 'holesPerRow', 'holes', ...(l.transversePitch === undefined ? [] : ['transversePitch']), 'grip', 'drillSequence', 'tempFasteners',
+        ...(l.flushPrep === null ? [] : ['flushPrep']), ...(l.shopHead === null ? [] : ['shopHead']), 'diameter', ...(input[i]!.repair ? ['repair'] : [])];
       expect(values, `line ${i}`).toEqual(shown);
+      expect(l.flushPrep !== null, `line ${i}`).toBe(input[i]!.rivet.head === 'countersunk');
       expect(l.transversePitch !== undefined, `line ${i}`).toBe((input[i]!.rows ?? 1) > 1);
       for (const r of l.rules) expect(r.source.length, `line ${i} ${r.value}`).toBeGreaterThan(0);
     });

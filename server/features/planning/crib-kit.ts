@@ -141,6 +141,14 @@ export function cribKit(db: Executor, result: EstimateResult, forUserId: number)
   for (const [step, holes] of Object.entries(result.totals.drillHoles)) {
     kit.push(pick('drill_bit', `Drill bit ${step}`, holes, of('drill_bit').filter((t) => t.drillSize === step)));
   }
+  // No crib category holds countersink cutters or dimple dies: they are listed, as "none in the crib", for the builder to bring.
+  for (const f of result.flushTools) {
+    kit.push(
+      f.prep === 'countersink'
+        ? pick('countersink_cutter', `100° countersink cutter, ${inchFraction(f.diameter32, 32)} in, ${f.pilot} pilot`, null, [])
+        : pick('dimple_dies', `100° dimple dies, ${inchFraction(f.diameter32, 32)} in`, null, []),
+    );
+  }
   for (const [size, count] of Object.entries(result.totals.tempFasteners)) kit.push(...trays(crib, size, count));
   kit.push(pick('deburring_tool', 'Deburring tool', null, of('deburring_tool')));
   return kit;

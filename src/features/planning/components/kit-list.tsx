@@ -11,6 +11,8 @@ const ROLE_LABELS: Record<KitItem['role'], string> = {
   rivet_set: 'Rivet set',
   bucking_bar: 'Bucking bar',
   drill_bit: 'Drill bit',
+  countersink_cutter: 'Countersink cutter',
+  dimple_dies: 'Dimple dies',
   temporary_fastener_tray: 'Temporary fastener tray',
   deburring_tool: 'Deburring tool',
 };
@@ -23,6 +25,9 @@ const ROLE_CATEGORIES: Record<KitItem['role'], ToolCategory> = {
   rivet_set: 'rivet_gun',
   bucking_bar: 'bucking_bar',
   drill_bit: 'drill_bit',
+  // A countersink cutter turns in a drill: the drilling cautions. Dimple dies are worked in a squeezer or a frame.
+  countersink_cutter: 'drill_bit',
+  dimple_dies: 'other',
   temporary_fastener_tray: 'temporary_fastener_tray',
   deburring_tool: 'deburring_tool',
 };

@@ -3,7 +3,7 @@ import type { LineRule } from '@shared/estimate/line-rules';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import type { LengthUnit } from '@shared/schemas/builds';
 import { formatCount } from '@/lib/format';
-import { drillStepsText, gripText, lengthText, tempFastenersText } from '../utils/words';
+import { diameterText, drillStepsText, FLUSH_PREP_WORDS, gripText, halfLengthText, lengthText, solidLengthText, tempFastenersText } from '../utils/words';
 import { FactList, type Fact } from './fact-list';
 import { rulesFor } from './why-rule';
 
@@ -24,11 +24,14 @@ function holesText(line: LineEstimate, layout: RowLayout): string {
 export function LineEstimateView({ line, unit, kind, layout }: { line: LineEstimate & { rules?: readonly LineRule[] }; unit: LengthUnit; kind: EstimateRivetKind; layout: RowLayout }) {
   const why = (...values: LineRule['value'][]) => rulesFor(line.rules, ...values);
   const facts: Fact[] = [
+    ...(line.diameter32 === undefined ? [] : [['Repair rivet', `${diameterText(line.diameter32)}, one size up`, why('repair')] as const]),
     ['Holes', holesText(line, layout), why('holesPerRow', 'holes')],
     ['Pitch', lengthText(line.pitch, unit), why('pitch')],
     ...(line.transversePitch === undefined ? [] : [['Transverse pitch (between rows)', lengthText(line.transversePitch, unit), why('transversePitch')] as const]),
     ['Edge distance', lengthText(line.edgeDistance, unit), why('edgeDistance')],
-    [kind === 'solid' ? 'Rivet length' : 'Grip', gripText(kind, line.grip), why('grip')],
+    kind === 'solid' ? ['Rivet length', solidLengthText(line.grip, line.shopHead, unit), why('grip', 'shopHead')] : ['Grip', gripText(kind, line.grip), why('grip')],
+    ...(line.halfLength === null ? [] : [['Half length', halfLengthText(line.halfLength)] as const]),
+    ...(line.flushPrep === null ? [] : [['Flush preparation', FLUSH_PREP_WORDS[line.flushPrep], why('flushPrep')] as const]),
     ['Drill steps', drillStepsText(line.drillSequence), why('drillSequence')],
     ['Temporary fasteners', tempFastenersText(line.tempFasteners), why('tempFasteners')],
   ];

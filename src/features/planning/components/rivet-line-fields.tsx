@@ -12,6 +12,11 @@ import { SheetStackField } from './sheet-stack-field';
 
 const KIND_OPTIONS = ESTIMATE_RIVET_KINDS.map((k) => ({ value: k, label: RIVET_KIND_LABELS[k] }));
 const MATERIAL_OPTIONS = [{ value: '', label: 'Not stated' }, ...RIVET_MATERIALS.map((m) => ({ value: m, label: m }))];
+const FLUSH_PREP_OPTIONS = [
+  { value: '', label: 'As the rule says' },
+  { value: 'countersink', label: 'Countersink' },
+  { value: 'dimple', label: 'Dimple' },
+];
 const DIAMETER_OPTIONS = ESTIMATE_DIAMETERS.map((d) => ({ value: String(d), label: `${diameterText(d)} (−${d})` }));
 
 const RADIO = 'flex min-h-12 flex-1 cursor-pointer items-center gap-3 rounded-lg border-2 border-edge bg-card px-3 font-semibold has-[:checked]:border-ink has-[:checked]:bg-paper';
@@ -115,6 +120,19 @@ export function RivetLineFields({ index, unit, live, onRemove }: { index: number
         <SelectField label="Diameter" hint="The dash is in 32nds of an inch." options={DIAMETER_OPTIONS} error={err('diameter32')} {...register(`lines.${index}.diameter32`)} />
         <SelectField label="Material (optional)" options={MATERIAL_OPTIONS} error={err('material')} {...register(`lines.${index}.material`)} />
       </div>
+      {head === 'countersunk' && (
+        <SelectField
+          label="Flush preparation"
+          hint="How the top sheet takes the head. The rule: countersink a sheet at or above the minimum gage for the rivet, dimple a thinner one."
+          options={FLUSH_PREP_OPTIONS}
+          error={err('flushPrep')}
+          {...register(`lines.${index}.flushPrep`)}
+        />
+      )}
+      <label className="flex min-h-12 cursor-pointer items-center gap-3 font-semibold">
+        <input type="checkbox" className="size-6" {...register(`lines.${index}.repair`)} />
+        Repair of drilled-out rivets (one size up)
+      </label>
 
       <section aria-label={`Estimate for rivet line ${n}`} aria-live="polite" className="rounded-lg border border-rule bg-paper p-3">
         <h4 className="mb-2 text-sm font-semibold tracking-wide text-steel uppercase">Estimate for this line</h4>

@@ -1,5 +1,6 @@
 import { get, set, type FieldErrors } from 'react-hook-form';
 import type { z } from 'zod';
+import type { FlushPrep } from '@shared/estimate/flush-prep';
 import type { EstimateRivetKind, RowPattern } from '@shared/estimate/rivet-rules';
 import { MM_PER_INCH } from '@shared/estimate/rivet-rules';
 import { createAssemblyBodySchema, type Assembly, type AssemblyLine, type AssemblyStatus, type assemblyLineSchema, type CreateAssemblyInput, type LengthUnit } from '@shared/schemas/builds';
@@ -24,6 +25,10 @@ export interface LineValues {
   edgeDistance: string;
   stack: SheetValue[];
   structural: boolean;
+  /** Countersunk heads: the plans' choice for the top sheet; empty for what the minimum-gage rule says. */
+  flushPrep: FlushPrep | '';
+  /** The line replaces drilled-out rivets (worked one diameter up). */
+  repair: boolean;
   kind: EstimateRivetKind;
   head: RivetHead;
   material: string;
@@ -56,6 +61,8 @@ export const emptyLine = (): LineValues => ({
   edgeDistance: '',
   stack: [{ thickness: '' }],
   structural: true,
+  flushPrep: '',
+  repair: false,
   kind: 'blind-structural',
   head: 'dome',
   material: '',
@@ -83,6 +90,9 @@ export function toLine(v: LineValues): z.input<typeof assemblyLineSchema> {
     edgeDistance: optionalNum(v.edgeDistance),
     stack: v.stack.map((s) => num(s.thickness)),
     structural: v.structural,
+    // Sent only where it means something: a flush choice on a countersunk head, a repair when ticked.
+    flushPrep: v.head === 'countersunk' && v.flushPrep !== '' ? v.flushPrep : undefined,
+    repair: v.repair ? true : undefined,
     rivet: { kind: v.kind, head: v.head, diameter32: Number(v.diameter32), material: optionalText(v.material) },
   };
 }
@@ -115,6 +125,8 @@ export function fromLine(line: AssemblyLine): LineValues {
     edgeDistance: text(line.edgeDistance),
     stack: line.stack.map((t) => ({ thickness: String(t) })),
     structural: line.structural ?? false,
+    flushPrep: line.flushPrep ?? '',
+    repair: line.repair ?? false,
     kind: line.rivet.kind,
     head: line.rivet.head,
     material: line.rivet.material ?? '',

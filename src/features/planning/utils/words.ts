@@ -1,5 +1,6 @@
 import type { LengthUnit } from '@shared/schemas/builds';
-import { lengthWords } from '@shared/estimate/length-words';
+import { diameterWords, lengthWords } from '@shared/estimate/length-words';
+import type { FlushPrep } from '@shared/estimate/flush-prep';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import { blindGripRange, inchFraction } from '@shared/stock/fasteners';
 import { RIVET_SET_WORDS, rivetHeadLabel, type RivetHead } from '@shared/stock/kinds';
@@ -17,7 +18,7 @@ export const UNIT_WORDS: Record<LengthUnit, string> = { in: 'inches', mm: 'milli
 export const lengthText = lengthWords;
 
 /** A rivet diameter dash in 32nds: 5 → "5/32 in". */
-export const diameterText = (diameter32: number): string => `${inchFraction(diameter32, 32)} in`;
+export const diameterText = diameterWords;
 
 /**
  * The grip of a rivet line: blind rivets by grip dash with the stack it takes ("−2 (0.063–0.125 in)"),
@@ -31,6 +32,18 @@ export function gripText(kind: EstimateRivetKind, grip: number | null): string {
 }
 
 export const drillStepsText = (steps: readonly string[]): string => steps.join(' → ');
+
+/** How a flush head's top sheet is prepared, as the builder does it. */
+export const FLUSH_PREP_WORDS: Record<FlushPrep, string> = { countersink: 'Countersink the top sheet (100°)', dimple: 'Dimple the top sheet (100°)' };
+
+/** A solid rivet's length with the shop head it makes: "length −4 (1/4 in), shop head about 0.1875 in wide, 0.0625 in high". */
+export function solidLengthText(grip: number | null, shopHead: { width: number; height: number } | null, unit: LengthUnit): string {
+  const length = gripText('solid', grip);
+  return shopHead ? `${length}, shop head about ${lengthText(shopHead.width, unit)} wide, ${lengthText(shopHead.height, unit)} high` : length;
+}
+
+/** The half-length dash offered below the length: "−3.5 (7/32 in) also fits; which half lengths are stocked varies by supplier". */
+export const halfLengthText = (half: number): string => `−${half} (${inchFraction(half * 2, 32)} in) also fits; which half lengths are stocked varies by supplier`;
 
 /** Temporary fasteners by size: "3/32 in × 7, 1/8 in × 7". */
 export const tempFastenersText = (bySize: Record<string, number>): string =>

@@ -143,6 +143,7 @@ export function binKindRules(b: Partial<BinFieldValues> & { kind?: BinKind }, ct
 }
 
 const inches = (x: number) => `${x.toFixed(3)} in`;
+const rangeInches = (r: { min: number; max: number }) => `${r.min.toFixed(3)}–${r.max.toFixed(3)} in`;
 
 /**
  * A blind bin's grip range (from the box, else the table's band for its dash) must run from a
@@ -154,10 +155,10 @@ function gripRangeRules(kind: BinKind, b: Partial<BinFieldValues>, issue: (path:
   if (!band) return;
   const range = binGripRange({ kind, grip16: b.grip16!, gripMin: b.gripMin, gripMax: b.gripMax })!;
   if (range.min >= range.max) {
-    issue(typeof b.gripMin === 'number' ? 'gripMin' : 'gripMax', `The smallest grip (${inches(range.min)}) must be below the largest (${inches(range.max)}).`);
+    issue(typeof b.gripMax === 'number' ? 'gripMax' : 'gripMin', `The smallest grip (${inches(range.min)}) must be below the largest (${inches(range.max)}).`);
   } else if (range.max < band.min || range.min > band.max) {
     const field = range.min > band.max ? 'gripMin' : 'gripMax';
-    issue(field, `The grip range ${inches(range.min)}–${inches(range.max)} is outside the −${b.grip16} band (${inches(band.min)}–${inches(band.max)}): check the grip dash and the figures on the box.`);
+    issue(field, `The grip range ${rangeInches(range)} is outside the −${b.grip16} band (${rangeInches(band)}): check the grip dash and the figures on the box.`);
   }
 }
 

@@ -30,7 +30,7 @@ async function binOf(code: string): Promise<BinFields> {
   return binFieldsSchema.parse(res.body);
 }
 
-async function refused(res: { status: number; body: unknown }) {
+function refused(res: { status: number; body: unknown }) {
   expect(res.status).toBe(400);
   return errorEnvelopeSchema.parse(res.body).error;
 }
@@ -60,26 +60,26 @@ describe('a blind bin’s grip range', () => {
   });
 
   it('refuses with 400, naming the field, a minimum at or above the maximum', async () => {
-    const error = await refused(await post(qm, '/api/bins', blindRivetBin({ gripMin: 0.1, gripMax: 0.1 })));
+    const error = refused(await post(qm, '/api/bins', blindRivetBin({ gripMin: 0.1, gripMax: 0.1 })));
     expect(error.code).toBe('VALIDATION_FAILED');
     expect(error.issues).toEqual([{ path: 'gripMax', message: 'The smallest grip (0.100 in) must be below the largest (0.100 in).' }]);
     // Only the minimum given, above the −2 band's maximum of 0.125 in.
-    const alone = await refused(await post(qm, '/api/bins', blindRivetBin({ gripMin: 0.13 })));
+    const alone = refused(await post(qm, '/api/bins', blindRivetBin({ gripMin: 0.13 })));
     expect(alone.issues).toEqual([{ path: 'gripMin', message: 'The smallest grip (0.130 in) must be below the largest (0.125 in).' }]);
   });
 
   it('refuses a range outside 0.010–1.000 in', async () => {
     for (const [field, value] of [['gripMin', 0.005], ['gripMax', 1.2], ['gripMin', -0.1]] as const) {
-      const error = await refused(await post(qm, '/api/bins', blindRivetBin({ [field]: value })));
+      const error = refused(await post(qm, '/api/bins', blindRivetBin({ [field]: value })));
       expect(error.issues).toEqual([{ path: field, message: 'A grip range lies between 0.010 and 1.000 in.' }]);
     }
-    const text = await refused(await post(qm, '/api/bins', blindRivetBin({ gripMax: '0.125' })));
+    const text = refused(await post(qm, '/api/bins', blindRivetBin({ gripMax: '0.125' })));
     expect(text.issues).toEqual([{ path: 'gripMax', message: 'Enter the largest grip from the box in inches, like 0.125.' }]);
   });
 
   it('refuses a range wholly outside the dash’s band: another dash or a slip of the pen', async () => {
     // −2 is 0.063–0.125 in; 0.188–0.250 in is the −4 band.
-    const error = await refused(await post(qm, '/api/bins', blindRivetBin({ gripMin: 0.188, gripMax: 0.25 })));
+    const error = refused(await post(qm, '/api/bins', blindRivetBin({ gripMin: 0.188, gripMax: 0.25 })));
     expect(error.issues).toEqual([
       { path: 'gripMin', message: 'The grip range 0.188–0.250 in is outside the −2 band (0.063–0.125 in): check the grip dash and the figures on the box.' },
     ]);
@@ -89,11 +89,11 @@ describe('a blind bin’s grip range', () => {
 
   it('refuses a range on a solid rivet or a bin that holds no rivets', async () => {
     const solid = { kind: 'solid_rivet', head: 'dome', material: '2117-T4', diameter32: 4, length16: 6, gripMin: 0.063 };
-    expect((await refused(await post(qm, '/api/bins', solid))).issues).toEqual([
+    expect((refused(await post(qm, '/api/bins', solid))).issues).toEqual([
       { path: 'gripMin', message: 'Solid rivets are sized by length: only blind rivet bins carry a grip range. Leave it empty.' },
     ]);
     const screw = { kind: 'screw', name: 'Screw #8-32 × 1/2 pan head', gripMax: 0.125 };
-    expect((await refused(await post(qm, '/api/bins', screw))).issues).toEqual([
+    expect((refused(await post(qm, '/api/bins', screw))).issues).toEqual([
       { path: 'gripMax', message: 'Only rivet bins carry a fastener spec; leave it empty or choose a rivet kind.' },
     ]);
     const { code } = await addBinAs(qm, { ...solid, gripMin: null });
@@ -116,7 +116,7 @@ describe('a blind bin’s grip range', () => {
     expect((await patch(qm, `/api/bins/${code}`, { gripMin: null })).status).toBe(200);
     expect((await binOf(code)).gripRange).toEqual({ min: 0.188, max: 0.25 });
 
-    const error = await refused(await patch(qm, `/api/bins/${code}`, { gripMax: 0.15 }));
+    const error = refused(await patch(qm, `/api/bins/${code}`, { gripMax: 0.15 }));
     expect(error.issues).toEqual([{ path: 'gripMax', message: 'The smallest grip (0.188 in) must be below the largest (0.150 in).' }]);
 
     // A blind bin made a solid one leaves its range behind.

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { findDrill } from '../drills/drill-sizes';
-import { binGripRange, blindGripRange, toThousandth } from '../stock/fasteners';
+import { binGripRange, blindGripRange, gripRangeWords, toThousandth } from '../stock/fasteners';
 import {
   BIN_CODE_PATTERN,
   BIN_KINDS,
@@ -48,11 +48,12 @@ const drillSizeField = z
 
 /** The grip range a blind rivet box gives, in inches; kept to the 0.001 in of the grip table. */
 export const GRIP_LIMITS = { min: 0.01, max: 1 } as const;
+const outsideLimits = `A grip range lies between ${gripRangeWords(GRIP_LIMITS).replace('–', ' and ')}.`;
 const gripLimitField = (end: 'smallest' | 'largest') =>
   z
     .number({ error: `Enter the ${end} grip from the box in inches, like ${end === 'smallest' ? '0.063' : '0.125'}.` })
-    .min(GRIP_LIMITS.min, { error: 'A grip range lies between 0.010 and 1.000 in.' })
-    .max(GRIP_LIMITS.max, { error: 'A grip range lies between 0.010 and 1.000 in.' })
+    .min(GRIP_LIMITS.min, { error: outsideLimits })
+    .max(GRIP_LIMITS.max, { error: outsideLimits })
     .transform(toThousandth)
     .nullable();
 
@@ -143,7 +144,6 @@ export function binKindRules(b: Partial<BinFieldValues> & { kind?: BinKind }, ct
 }
 
 const inches = (x: number) => `${x.toFixed(3)} in`;
-const rangeInches = (r: { min: number; max: number }) => `${r.min.toFixed(3)}–${r.max.toFixed(3)} in`;
 
 /**
  * A blind bin's grip range (from the box, else the table's band for its dash) must run from a
@@ -158,7 +158,7 @@ function gripRangeRules(kind: BinKind, b: Partial<BinFieldValues>, issue: (path:
     issue(typeof b.gripMax === 'number' ? 'gripMax' : 'gripMin', `The smallest grip (${inches(range.min)}) must be below the largest (${inches(range.max)}).`);
   } else if (range.max < band.min || range.min > band.max) {
     const field = range.min > band.max ? 'gripMin' : 'gripMax';
-    issue(field, `The grip range ${rangeInches(range)} is outside the −${b.grip16} band (${rangeInches(band)}): check the grip dash and the figures on the box.`);
+    issue(field, `The grip range ${gripRangeWords(range)} is outside the −${b.grip16} band (${gripRangeWords(band)}): check the grip dash and the figures on the box.`);
   }
 }
 

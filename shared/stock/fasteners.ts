@@ -61,6 +61,9 @@ export function inchFraction(numerator: number, denominator: number): string {
 
 const inches = (x: number) => x.toFixed(3);
 
+/** A grip range in inches to the thousandth, as the table writes it: "0.063–0.125 in". */
+export const gripRangeWords = (range: { min: number; max: number }): string => `${inches(range.min)}–${inches(range.max)} in`;
+
 /**
  * Material letters of the open-standard solid rivet numbers. MS20470 and MS20426 designate
  * aluminium-alloy rivets only: any other material (monel, copper, stainless, steel) gets our plain
@@ -114,7 +117,7 @@ export function fastenerDesignation(spec: FastenerSpec): string | undefined {
     const kind = spec.kind === 'blind_structural' ? 'structural' : 'general purpose';
     const material = [spec.material, spec.stemMaterial ? `${spec.stemMaterial} stem` : null].filter(Boolean).join(', ');
     const range = binGripRange(spec);
-    const grip = spec.grip16 === null ? '' : ` · grip −${spec.grip16}${range ? ` (${inches(range.min)}–${inches(range.max)} in)` : ''}`;
+    const grip = spec.grip16 === null ? '' : ` · grip −${spec.grip16}${range ? ` (${gripRangeWords(range)})` : ''}`;
     return `Blind, ${kind}, ${head}${material ? `, ${material}` : ''} · ${dia}${grip}`;
   }
   if (spec.kind === 'solid_rivet') {

@@ -2,7 +2,7 @@ import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { FastenerNeed } from '@shared/estimate/estimate';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import type { BillLine, ExtraItem } from '@shared/schemas/builds';
-import { BLIND_GRIP_RANGES, binDesignation, binGripRange, blindGripRange, fastenerDesignation, inchFraction, type FastenerSpec } from '@shared/stock/fasteners';
+import { BLIND_GRIP_RANGES, binDesignation, binGripRange, blindGripRange, fastenerDesignation, gripRangeWords, inchFraction, type FastenerSpec } from '@shared/stock/fasteners';
 import { rivetHeadLabel, RIVET_KINDS, type RivetKind } from '@shared/stock/kinds';
 import type { Executor } from '../../db/client';
 import { bins, stockMovements, type BinRow } from '../../db/schema/stock';
@@ -94,17 +94,14 @@ const inches = (x: number) => x.toFixed(3);
 
 /** The need's stacks and the table's band for its dash: "the 0.130 in stack: the −3 band is 0.126–0.187 in". */
 function stackAgainstBand(need: FastenerNeed): string {
-  const stack = need.stackMin === need.stackMax ? `the ${inches(need.stackMin)} in stack` : `the ${inches(need.stackMin)}–${inches(need.stackMax)} in stacks`;
+  const stack = need.stackMin === need.stackMax ? `the ${inches(need.stackMin)} in stack` : `the ${gripRangeWords({ min: need.stackMin, max: need.stackMax })} stacks`;
   const band = need.grip === null ? undefined : blindGripRange(need.grip);
-  if (band) return `${stack}: the −${need.grip} band is ${inches(band.min)}–${inches(band.max)} in`;
+  if (band) return `${stack}: the −${need.grip} band is ${gripRangeWords(band)}`;
   const longest = BLIND_GRIP_RANGES.at(-1)!;
-  return `${stack}, beyond the longest band (−${longest.dash}, ${inches(longest.min)}–${inches(longest.max)} in)`;
+  return `${stack}, beyond the longest band (−${longest.dash}, ${gripRangeWords(longest)})`;
 }
 
-const rangeWords = (bin: BinRow) => {
-  const r = binGripRange(bin)!;
-  return `${inches(r.min)}–${inches(r.max)} in`;
-};
+const rangeWords = (bin: BinRow) => gripRangeWords(binGripRange(bin)!);
 
 /**
  * Plainly, what no bin stocks: "No bin stocks a 1/8 in dome 5056 structural blind rivet with grip

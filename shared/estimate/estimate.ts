@@ -1,4 +1,5 @@
-import { DEFAULT_WASTE_PERCENT, type EstimateRivetKind } from './rivet-rules';
+import { DEFAULT_WASTE_PERCENT, MM_PER_INCH, type EstimateRivetKind } from './rivet-rules';
+import { toThousandth } from '../stock/fasteners';
 import { estimateLine, flushSheetNeeds, type EstimateNotice, type LengthUnit, type LineOptions, type RivetLineInput } from './estimate-line';
 import type { RivetHead } from '../stock/kinds';
 import type { FlushPrep, FlushSheets } from './flush-prep';
@@ -26,6 +27,9 @@ export interface FastenerNeed {
   diameter32: number;
   /** Blind: grip dash; solid: length dash. */
   grip: number | null;
+  /** The thinnest and thickest sheet stack of its lines, in inches to the 0.001 in of the grip table. */
+  stackMin: number;
+  stackMax: number;
   rivets: number;
   withWaste: number;
   lines: number[];
@@ -91,6 +95,13 @@ function needKey(rivet: RivetLineInput['rivet'], diameter32: number, grip: numbe
   return key;
 }
 
+/** A line's sheet stack in inches, to the 0.001 in its grip is read at. */
+function stackInches(stack: readonly number[], unit: LengthUnit): number {
+  let sum = 0;
+  for (const t of stack) sum += t;
+  return toThousandth(unit === 'mm' ? sum / MM_PER_INCH : sum);
+}
+
 /** Temporary fasteners come out of one line and go into the next (common practice): per size, the most any one line needs. */
 function atOnce(into: Record<string, number>, from: Record<string, number>): void {
   for (const k in from) into[k] = Math.max(into[k] ?? 0, from[k]!);
@@ -128,7 +139,10 @@ export function estimate(input: EstimateInput, options: EstimateOptions = {}): E
     for (const step of l.drillSequence) totals.drillHoles[step] = (totals.drillHoles[step] ?? 0) + l.holes;
     atOnce(totals.tempFasteners, l.tempFasteners);
     const key = needKey(rivet, diameter32, l.grip);
-    const need = needs.get(key) ?? { kind: rivet.kind, head: rivet.head, material: rivet.material ?? null, diameter32, grip: l.grip, rivets: 0, withWaste: 0, lines: [] };
+    const stack = stackInches(input.lines[i]!.stack, input.unit);
+    const need = needs.get(key) ?? { kind: rivet.kind, head: rivet.head, material: rivet.material ?? null, diameter32, grip: l.grip, stackMin: stack, stackMax: stack, rivets: 0, withWaste: 0, lines: [] };
+    need.stackMin = Math.min(need.stackMin, stack);
+    need.stackMax = Math.max(need.stackMax, stack);
     need.rivets += l.holes;
     need.lines.push(i);
     needs.set(key, need);

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { findDrill } from '../drills/drill-sizes';
-import { blindGripRange } from '../stock/fasteners';
+import { binGripRange, blindGripRange, gripRangeWords, toThousandth } from '../stock/fasteners';
 import {
   BIN_CODE_PATTERN,
   BIN_KINDS,
@@ -48,6 +48,17 @@ const drillSizeField = z
   .refine((s) => findDrill(s) !== undefined, { error: 'Use a drill size from the table: #1 to #80, A to Z, or a fraction like 1/8.' })
   .transform((s) => findDrill(s)!.name);
 
+/** The grip range a blind rivet box gives, in inches; kept to the 0.001 in of the grip table. */
+export const GRIP_LIMITS = { min: 0.01, max: 1 } as const;
+const outsideLimits = `A grip range lies between ${gripRangeWords(GRIP_LIMITS).replace('–', ' and ')}.`;
+const gripLimitField = (end: 'smallest' | 'largest') =>
+  z
+    .number({ error: `Enter the ${end} grip from the box in inches, like ${end === 'smallest' ? '0.063' : '0.125'}.` })
+    .min(GRIP_LIMITS.min, { error: outsideLimits })
+    .max(GRIP_LIMITS.max, { error: outsideLimits })
+    .transform(toThousandth)
+    .nullable();
+
 const binFields = {
   kind: z.enum(BIN_KINDS, { error: 'Choose what the bin holds from the list.' }),
   name: z.string().trim().max(120, { error: 'Keep the name under 120 characters.' }),
@@ -66,6 +77,8 @@ const binFields = {
   stemMaterial: z.enum(STEM_MATERIALS, { error: `Choose the stem: ${STEM_MATERIALS.join(', ')}.` }).nullable(),
   diameter32: z.number({ error: 'Enter the diameter in 32nds of an inch, like 4 for 1/8 in.' }).int({ error: 'The diameter dash is a whole number of 32nds.' }).min(1).max(16, { error: 'The diameter dash is at most 16 (1/2 in).' }).nullable(),
   grip16: z.number({ error: 'Enter the grip dash, like 2.' }).int({ error: 'The grip dash is a whole number.' }).refine((d) => blindGripRange(d) !== undefined, { error: 'Use a grip dash from the table: 1 to 6, or 8.' }).nullable(),
+  gripMin: gripLimitField('smallest'),
+  gripMax: gripLimitField('largest'),
   length16: z
     .number({ error: 'Enter the length in 16ths of an inch, like 6 for 3/8 in.' })
     .min(1, { error: 'A rivet is at least 1/16 in long.' })
@@ -95,6 +108,8 @@ const binDefaults = z.object({
   stemMaterial: binFields.stemMaterial.default(null),
   diameter32: binFields.diameter32.default(null),
   grip16: binFields.grip16.default(null),
+  gripMin: binFields.gripMin.default(null),
+  gripMax: binFields.gripMax.default(null),
   length16: binFields.length16.default(null),
   drillSize: binFields.drillSize.default(null),
   holeDrill: binFields.holeDrill.default(null),
@@ -112,19 +127,66 @@ export function binKindRules(b: Partial<BinFieldValues> & { kind?: BinKind }, ct
     if (isBlindKind(b.kind)) {
       if (!b.grip16) issue('grip16', 'A blind rivet bin needs its grip dash, like 2 for 0.063–0.125 in.');
       if (b.length16 !== null && b.length16 !== undefined) issue('length16', 'Blind rivets are sized by grip, not length: leave the length empty.');
+      gripRangeRules(b.kind, b, issue);
     } else {
       if (!b.length16) issue('length16', 'A solid rivet bin needs its length in 16ths of an inch, like 6 for 3/8 in.');
       if (b.grip16 !== null && b.grip16 !== undefined) issue('grip16', 'Solid rivets are sized by length, not grip dash: leave the grip empty.');
       if (b.stemMaterial) issue('stemMaterial', 'Solid rivets have no stem.');
       if (b.head && !isSolidRivetHead(b.head)) issue('head', SOLID_RIVET_HEAD_WORDS);
+      for (const field of ['gripMin', 'gripMax'] as const) {
+        if (typeof b[field] === 'number') issue(field, 'Solid rivets are sized by length: only blind rivet bins carry a grip range. Leave it empty.');
+      }
     }
   } else {
     if (!b.name) issue('name', 'Give the bin a name, like "Screw #8-32 × 1/2 pan head".');
-    for (const field of ['head', 'material', 'stemMaterial', 'diameter32', 'grip16', 'length16'] as const) {
+    for (const field of ['head', 'material', 'stemMaterial', 'diameter32', 'grip16', 'gripMin', 'gripMax', 'length16'] as const) {
       if (b[field] !== null && b[field] !== undefined) issue(field, 'Only rivet bins carry a fastener spec; leave it empty or choose a rivet kind.');
     }
   }
   if (b.kind === 'drill_bit' && !b.drillSize) issue('drillSize', 'A drill bit bin needs its size, like #40.');
+}
+
+const inches = (x: number) => `${x.toFixed(3)} in`;
+
+/**
+ * A blind bin's grip range (from the box, else the table's band for its dash) must run from a
+ * smaller grip to a larger one and share some of the dash's band: makers' ranges differ from the
+ * table by a few thousandths, but one wholly outside the band is another dash or a slip of the pen.
+ */
+function gripRangeRules(kind: BinKind, b: Partial<BinFieldValues>, issue: (path: string, message: string) => void): void {
+  const band = b.grip16 ? blindGripRange(b.grip16) : undefined;
+  if (!band) return;
+  const range = binGripRange({ kind, grip16: b.grip16!, gripMin: b.gripMin, gripMax: b.gripMax })!;
+  if (range.min >= range.max) {
+    issue(typeof b.gripMax === 'number' ? 'gripMax' : 'gripMin', `The smallest grip (${inches(range.min)}) must be below the largest (${inches(range.max)}).`);
+  } else if (range.max < band.min || range.min > band.max) {
+    const field = range.min > band.max ? 'gripMin' : 'gripMax';
+    issue(field, `The grip range ${gripRangeWords(range)} is outside the −${b.grip16} band (${gripRangeWords(band)}): check the grip dash and the figures on the box.`);
+  }
+}
+
+interface GripRanged {
+  kind: BinKind;
+  grip16: number | null;
+  gripMin: number | null;
+  gripMax: number | null;
+}
+
+/** A blind bin keeps its grip range whole: what the box gives, the table's band for the dash where it gives nothing. */
+export function withGripRange<T extends GripRanged>(b: T): T {
+  const range = binGripRange(b);
+  return { ...b, gripMin: range?.min ?? null, gripMax: range?.max ?? null };
+}
+
+/**
+ * What an edit leaves of a bin's grip range, before `withGripRange` fills it: the ends it sends
+ * (null: the table's), else the bin's own; a new kind or grip dash sent without a range starts
+ * again from the table's band, so a range never outlives the dash it was given for.
+ */
+export function gripRangeAfterEdit(before: GripRanged, change: Partial<GripRanged>): Pick<GripRanged, 'gripMin' | 'gripMax'> {
+  const restart = (change.kind !== undefined && change.kind !== before.kind) || (change.grip16 !== undefined && change.grip16 !== before.grip16);
+  const end = (field: 'gripMin' | 'gripMax') => (change[field] !== undefined ? change[field] : restart ? null : before[field]);
+  return { gripMin: end('gripMin'), gripMax: end('gripMax') };
 }
 
 export const createBinBodySchema = binDefaults
@@ -139,7 +201,8 @@ export const createBinBodySchema = binDefaults
       .default(0),
   })
   .strict()
-  .superRefine(binKindRules);
+  .superRefine(binKindRules)
+  .transform(withGripRange);
 export type CreateBinBody = z.input<typeof createBinBodySchema>;
 export type CreateBinInput = z.output<typeof createBinBodySchema>;
 
@@ -241,13 +304,16 @@ export const binFieldsSchema = z.object({
   name: z.string(),
   /** The open-standard number or our readable form for rivets; the name for everything else. */
   designation: z.string(),
-  /** For a blind rivet: its grip dash range in inches, shown beside the dash. */
+  /** For a blind rivet: the grip range it is stocked for, in inches (from the box, else the table's band for the dash). */
   gripRange: z.object({ min: z.number(), max: z.number() }).nullable(),
   head: z.enum(RIVET_HEADS).nullable(),
   material: z.string().nullable(),
   stemMaterial: z.string().nullable(),
   diameter32: z.number().nullable(),
   grip16: z.number().nullable(),
+  /** The same range as gripRange, as the fields the form and the CSV edit; null on other bins. */
+  gripMin: z.number().nullable(),
+  gripMax: z.number().nullable(),
   length16: z.number().nullable(),
   drillSize: z.string().nullable(),
   holeDrill: z.string().nullable(),

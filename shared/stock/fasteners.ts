@@ -20,10 +20,22 @@ export function blindGripRange(dash: number): { min: number; max: number } | und
   return row && { min: row.min, max: row.max };
 }
 
+/** A length in inches to the 0.001 in the grip table is written in. */
+export const toThousandth = (inches: number): number => Math.round(inches * 1000) / 1000;
+
 /** The blind rivet grip dash whose range covers a stack (inches, rounded to 0.001 in); undefined beyond the table. */
 export function blindGripForStack(stackInches: number): number | undefined {
-  const t = Math.round(stackInches * 1000) / 1000;
+  const t = toThousandth(stackInches);
   return BLIND_GRIP_RANGES.find((r) => t >= r.min && t <= r.max)?.dash;
+}
+
+/** A blind bin's grip range: the maker's on the box where the bin records it, else the table's band for its dash. */
+export function binGripRange(bin: Pick<FastenerSpec, 'kind' | 'grip16' | 'gripMin' | 'gripMax'>): { min: number; max: number } | undefined {
+  if (!isBlindKind(bin.kind)) return undefined;
+  const band = bin.grip16 === null ? undefined : blindGripRange(bin.grip16);
+  const min = bin.gripMin ?? band?.min;
+  const max = bin.gripMax ?? band?.max;
+  return min === undefined || max === undefined ? undefined : { min, max };
 }
 
 /** Solid rivet length dash (16ths): the next 1/16 in at or above grip + 1.5 D. */
@@ -49,6 +61,9 @@ export function inchFraction(numerator: number, denominator: number): string {
 
 const inches = (x: number) => x.toFixed(3);
 
+/** A grip range in inches to the thousandth, as the table writes it: "0.063–0.125 in". */
+export const gripRangeWords = (range: { min: number; max: number }): string => `${inches(range.min)}–${inches(range.max)} in`;
+
 /**
  * Material letters of the open-standard solid rivet numbers. MS20470 and MS20426 designate
  * aluminium-alloy rivets only: any other material (monel, copper, stainless, steel) gets our plain
@@ -72,6 +87,9 @@ export interface FastenerSpec {
   diameter32: number | null;
   /** Blind rivets: grip dash in 16ths. */
   grip16: number | null;
+  /** Blind rivets: the grip range stocked (inches), when it is not the table's band for the dash. */
+  gripMin?: number | null;
+  gripMax?: number | null;
   /** Solid rivets: length in 16ths; half lengths allowed (3.5). */
   length16: number | null;
 }
@@ -98,8 +116,8 @@ export function fastenerDesignation(spec: FastenerSpec): string | undefined {
   if (isBlindKind(spec.kind)) {
     const kind = spec.kind === 'blind_structural' ? 'structural' : 'general purpose';
     const material = [spec.material, spec.stemMaterial ? `${spec.stemMaterial} stem` : null].filter(Boolean).join(', ');
-    const range = spec.grip16 === null ? undefined : blindGripRange(spec.grip16);
-    const grip = spec.grip16 === null ? '' : ` · grip −${spec.grip16}${range ? ` (${inches(range.min)}–${inches(range.max)} in)` : ''}`;
+    const range = binGripRange(spec);
+    const grip = spec.grip16 === null ? '' : ` · grip −${spec.grip16}${range ? ` (${gripRangeWords(range)})` : ''}`;
     return `Blind, ${kind}, ${head}${material ? `, ${material}` : ''} · ${dia}${grip}`;
   }
   if (spec.kind === 'solid_rivet') {

@@ -163,6 +163,45 @@ describe('BinForm', () => {
     expect(onSubmit.mock.calls[0]![0]).toMatchObject({ head: 'countersunk', diameter32: 5, grip16: 3, stemMaterial: 'stainless', packSize: 250, reorderPoint: 300, length16: null });
   });
 
+  it('asks for the grip range from the box, with the table’s band for the dash as placeholder, and sends it', async () => {
+    const onSubmit = renderForm();
+    await userEvent.selectOptions(screen.getByLabelText('Head'), 'dome');
+    await userEvent.selectOptions(screen.getByLabelText('Body material'), '5056');
+    await userEvent.selectOptions(screen.getByLabelText('Diameter'), '4');
+    await userEvent.selectOptions(screen.getByLabelText('Grip dash'), '3');
+    const range = screen.getByRole('group', { name: 'Grip range (from the box)' });
+    // −3: 0.126–0.187 in (TM 10-5410-221-14/1 Table 4-3).
+    expect(within(range).getByLabelText('Smallest grip (in)')).toHaveProperty('placeholder', '0.126');
+    expect(within(range).getByLabelText('Largest grip (in)')).toHaveProperty('placeholder', '0.187');
+    await userEvent.type(screen.getByLabelText('Smallest grip (in)'), '0.1875');
+    await userEvent.type(screen.getByLabelText('Largest grip (in)'), '0.14');
+    await userEvent.click(screen.getByRole('button', { name: 'Add the bin' }));
+    expect(await screen.findByText('The smallest grip (0.188 in) must be below the largest (0.140 in).')).toBeTruthy();
+    expect(onSubmit).not.toHaveBeenCalled();
+
+    await userEvent.clear(screen.getByLabelText('Smallest grip (in)'));
+    await userEvent.type(screen.getByLabelText('Smallest grip (in)'), '0.110');
+    expect(preview()).toBe('Blind, structural, dome, 5056 · 1/8 in · grip −3 (0.110–0.140 in)');
+    await userEvent.click(screen.getByRole('button', { name: 'Add the bin' }));
+    await waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
+    expect(onSubmit.mock.calls[0]![0]).toMatchObject({ grip16: 3, gripMin: 0.11, gripMax: 0.14 });
+  });
+
+  it('leaves the range empty on an edit when it is the table’s band, and shows a range from the box', async () => {
+    const onSubmit = renderForm(binFixture('B-0107', { kind: 'blind_structural', head: 'dome', material: '5056', diameter32: 4, grip16: 2, gripMin: 0.07 }));
+    // Only the smallest grip is the box's; the largest is the −2 band's 0.125 in.
+    expect(screen.getByLabelText('Smallest grip (in)')).toHaveProperty('value', '0.07');
+    expect(screen.getByLabelText('Largest grip (in)')).toHaveProperty('value', '');
+    expect(screen.getByLabelText('Largest grip (in)')).toHaveProperty('placeholder', '0.125');
+    // A new dash with an empty range takes the new dash's band.
+    await userEvent.clear(screen.getByLabelText('Smallest grip (in)'));
+    await userEvent.selectOptions(screen.getByLabelText('Grip dash'), '4');
+    expect(preview()).toBe('Blind, structural, dome, 5056 · 1/8 in · grip −4 (0.188–0.250 in)');
+    await userEvent.click(screen.getByRole('button', { name: 'Add the bin' }));
+    await waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
+    expect(onSubmit.mock.calls[0]![0]).toMatchObject({ grip16: 4, gripMin: 0.188, gripMax: 0.25 });
+  });
+
   it('puts a server refusal on its field', async () => {
     const onSubmit = vi.fn(() =>
       Promise.reject(new ApiError(409, 'BIN_CODE_TAKEN', 'The code B-0107 is already on another bin.', [{ path: 'code', message: 'B-0107 is taken.' }])),

@@ -1,6 +1,5 @@
 import type { Bin, RestockItem } from '@shared/schemas/bins';
-import { blindGripRange, fastenerDesignation } from '@shared/stock/fasteners';
-import { isBlindKind } from '@shared/stock/kinds';
+import { binGripRange, fastenerDesignation } from '@shared/stock/fasteners';
 
 let nextId = 1;
 
@@ -18,6 +17,8 @@ export function binFixture(code: string, over: Partial<Bin> = {}): Bin {
     stemMaterial: null,
     diameter32: null,
     grip16: null,
+    gripMin: null,
+    gripMax: null,
     length16: null,
     drillSize: null,
     holeDrill: null,
@@ -42,8 +43,8 @@ export function binFixture(code: string, over: Partial<Bin> = {}): Bin {
     ...over,
   };
   const designation = fastenerDesignation(base) ?? base.name;
-  const gripRange = isBlindKind(base.kind) && base.grip16 !== null ? (blindGripRange(base.grip16) ?? null) : null;
-  return { ...base, designation, gripRange, reorderAt: base.reorderPoint, low: base.onHand <= base.reorderPoint, ...over };
+  const gripRange = binGripRange(base) ?? null;
+  return { ...base, designation, gripRange, gripMin: gripRange?.min ?? null, gripMax: gripRange?.max ?? null, reorderAt: base.reorderPoint, low: base.onHand <= base.reorderPoint, ...over };
 }
 
 /** A Restock line: the numbers the server works out are given, so a test reads them as data. */

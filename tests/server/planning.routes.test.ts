@@ -218,18 +218,68 @@ describe('GET /api/assemblies/:id/estimate: the bill', () => {
     expect(e.caution).toContain('does not design structures');
   });
 
-  it('says plainly when no bin stocks a need', async () => {
-    await addBinAs(qm, blindRivetBin());
+  it('says plainly when no bin stocks a need, and names the bin of the rivet stocked for another grip', async () => {
     // 0.063 + 0.063 = 0.126 in: grip −3, 0.126–0.187 in (TM 10-5410-221-14/1 Table 4-3); 10 in → ⌈9.25⌉ + 1 = 11 holes.
     const id = await newAssembly(member, { lines: [twentyInchLine(blind(4, '5056'), { length: 10, stack: [0.063, 0.063] })] });
-    const line = billFor(await estimateOf(member, id), 3);
-    expect(line).toMatchObject({
+    const unstocked = {
       description: 'Blind, structural, dome, 5056 · 1/8 in · grip −3 (0.126–0.187 in)',
       estimated: 11,
       withWaste: 12,
       bin: null,
       unstocked: 'No bin stocks a 1/8 in dome 5056 structural blind rivet with grip −3.',
       shortBy: 12,
+    };
+    expect(billFor(await estimateOf(member, id), 3)).toMatchObject(unstocked);
+    // A −2 bin takes 0.063–0.125 in: 0.126 in is beyond it.
+    const two = await addBinAs(qm, blindRivetBin());
+    expect(billFor(await estimateOf(member, id), 3)).toMatchObject({
+      ...unstocked,
+      unstocked: `No bin's grip range covers the 0.126 in stack: the −3 band is 0.126–0.187 in. Bin ${two.code} has this rivet for 0.063–0.125 in.`,
+    });
+  });
+
+  describe('blind rivets by the grip range each bin is stocked for', () => {
+    // Stacks from the head side down; grip −3 takes 0.126–0.187 in (TM 10-5410-221-14/1 Table 4-3).
+    // 10 in at a 1 in pitch, 0.375 in from each end: ⌈9.25⌉ + 1 = 11 holes; 5 % waste → ⌈11.55⌉ = 12.
+    const thin = (over: object = {}) => twentyInchLine(blind(4, '5056'), { length: 10, stack: [0.04, 0.09], ...over }); // 0.130 in
+    const thick = (over: object = {}) => twentyInchLine(blind(4, '5056'), { length: 10, stack: [0.08, 0.08], ...over }); // 0.160 in
+    const billOf = async (lines: object[]) => (await estimateOf(member, await newAssembly(member, { lines }))).bill.filter((b) => b.lines.length > 0);
+
+    it('chooses the bin whose range covers every line’s stack: with stock first, then the tightest range', async () => {
+      // Both −3: the table's 0.126–0.187 in (0.061 in wide) and a box reading 0.140–0.187 in (0.047 in wide).
+      const wide = await addBinAs(qm, blindRivetBin({ grip16: 3, initialQuantity: 100 }));
+      const narrow = await addBinAs(qm, blindRivetBin({ grip16: 3, gripMin: 0.14, gripMax: 0.187, initialQuantity: 100, location: 'Shelf A3' }));
+
+      // 0.130 in is below the narrow box's 0.140 in: only the wide bin covers it.
+      expect(await billOf([thin()])).toEqual([expect.objectContaining({ grip: 3, withWaste: 12, bin: expect.objectContaining({ code: wide.code }), unstocked: null, shortBy: 0 })]);
+      // 0.160 in: both cover it; the narrow range is the tighter.
+      expect(await billOf([thick()])).toEqual([
+        expect.objectContaining({ bin: { code: narrow.code, designation: 'Blind, structural, dome, 5056, steel stem · 1/8 in · grip −3 (0.140–0.187 in)', onHand: 100, location: 'Shelf A3' } }),
+      ]);
+      // One need of two lines, 0.130 and 0.160 in: only the wide bin covers both; 11 + 11 = 22 holes → ⌈23.1⌉ = 24.
+      expect(await billOf([thin(), thick({ label: 'Rib' })])).toEqual([expect.objectContaining({ lines: [0, 1], withWaste: 24, bin: expect.objectContaining({ code: wide.code }) })]);
+
+      // An empty narrow bin gives way to the wide one that has stock.
+      expect((await post(qm, `/api/bins/${narrow.code}/count`, { counted: 0 })).status).toBe(201);
+      expect(await billOf([thick()])).toEqual([expect.objectContaining({ bin: expect.objectContaining({ code: wide.code, onHand: 100 }) })]);
+    });
+
+    it('says when no bin’s range covers the stack, and names the bins of the rivet with other ranges', async () => {
+      const two = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));
+      const narrow = await addBinAs(qm, blindRivetBin({ grip16: 3, gripMin: 0.14, gripMax: 0.187, initialQuantity: 100 }));
+      expect(await billOf([thin()])).toEqual([
+        expect.objectContaining({
+          description: 'Blind, structural, dome, 5056 · 1/8 in · grip −3 (0.126–0.187 in)',
+          grip: 3,
+          bin: null,
+          unstocked: `No bin's grip range covers the 0.130 in stack: the −3 band is 0.126–0.187 in. Bins ${two.code} (0.063–0.125 in), ${narrow.code} (0.140–0.187 in) have this rivet for other stacks.`,
+          shortBy: 12,
+        }),
+      ]);
+      // 0.130 and 0.160 in together: the narrow bin covers one line only.
+      expect((await billOf([thin(), thick()]))[0]!.unstocked).toBe(
+        `No bin's grip range covers the 0.130–0.160 in stacks: the −3 band is 0.126–0.187 in. Bins ${two.code} (0.063–0.125 in), ${narrow.code} (0.140–0.187 in) have this rivet for other stacks.`,
+      );
     });
   });
 

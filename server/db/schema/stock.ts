@@ -33,6 +33,9 @@ export const bins = sqliteTable(
     stemMaterial: text(),
     diameter32: integer(),
     grip16: integer(),
+    /** Blind rivets: the grip range the maker gives on the box, in inches (the table's band for the dash unless set). */
+    gripMin: real(),
+    gripMax: real(),
     length16: real(),
     drillSize: text(),
     holeDrill: text(),

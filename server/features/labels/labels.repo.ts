@@ -37,6 +37,8 @@ export function findBinLabels(db: Executor, codes: readonly string[]): Map<strin
       stemMaterial: bins.stemMaterial,
       diameter32: bins.diameter32,
       grip16: bins.grip16,
+      gripMin: bins.gripMin,
+      gripMax: bins.gripMax,
       length16: bins.length16,
     })
     .from(bins)

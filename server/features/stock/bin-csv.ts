@@ -7,7 +7,7 @@ import { BIN_KIND_LABELS, BIN_KINDS, RIVET_HEAD_LABELS, rivetHeadLabel, RIVET_HE
 
 type Field = keyof CreateBinInput;
 /** How a cell's text becomes a value for the bin schema. Numeric columns are never formula-escaped on export. */
-type CellType = 'text' | 'number' | 'money' | 'dash' | 'diameter' | 'kind' | 'head' | 'material' | 'stem';
+type CellType = 'text' | 'number' | 'money' | 'dash' | 'inches' | 'diameter' | 'kind' | 'head' | 'material' | 'stem';
 
 export interface BinColumn {
   name: string;
@@ -27,6 +27,8 @@ export const BIN_COLUMNS: readonly BinColumn[] = [
   col('stem_material', 'stemMaterial', 'stem'),
   col('diameter_32nds', 'diameter32', 'diameter'),
   col('grip_dash', 'grip16', 'dash'),
+  col('grip_min_in', 'gripMin', 'inches'),
+  col('grip_max_in', 'gripMax', 'inches'),
   col('length_16ths', 'length16', 'dash'),
   col('drill_size', 'drillSize'),
   col('hole_drill', 'holeDrill'),
@@ -47,7 +49,7 @@ export const DESCRIPTIVE_COLUMNS = BIN_COLUMNS.filter((c) => c.field !== 'code' 
 export const REQUIRED_COLUMNS = ['kind'] as const;
 /** Columns an export adds; an import reads past them. */
 export const EXPORT_ONLY_COLUMNS = ['designation', 'on_hand'] as const;
-export const isNumericColumn = (c: BinColumn) => ['number', 'money', 'dash', 'diameter'].includes(c.type);
+export const isNumericColumn = (c: BinColumn) => ['number', 'money', 'dash', 'inches', 'diameter'].includes(c.type);
 
 /** A field's value as a bins CSV writes it: numbers as numbers, text guarded against formulas, nothing as empty. */
 export function binCell(column: BinColumn, value: unknown): CsvCell {
@@ -78,6 +80,9 @@ function toNumber(cell: string): number | undefined {
 type Converted = { value: unknown } | { error: string };
 const notANumber = (cell: string): Converted => ({ error: `enter a number, not "${cell}".` });
 
+/** A length in inches may carry its unit: "0.063 in" and 0.063" are 0.063. */
+const inchesText = (cell: string) => cell.replace(/\s*(in|inch|inches|")$/i, '');
+
 /** A dash number may be written with the trade's leading dash: "-4" is dash 4. */
 const dash = (cell: string) => cell.replace(/^[-−]\s*/, '');
 
@@ -88,13 +93,14 @@ function convert(type: CellType, cell: string): Converted {
       return { value: /^'[=+\-@\t\r]/.test(cell) ? cell.slice(1) : cell };
     case 'number':
     case 'money':
-    case 'dash': {
-      const text = type === 'money' ? cell.replace(/^\$\s*/, '') : type === 'dash' ? dash(cell) : cell;
+    case 'dash':
+    case 'inches': {
+      const text = type === 'money' ? cell.replace(/^\$\s*/, '') : type === 'dash' ? dash(cell) : type === 'inches' ? inchesText(cell) : cell;
       const n = toNumber(text);
       return n === undefined ? notANumber(cell) : { value: n };
     }
     case 'diameter': {
-      const text = dash(cell).replace(/\s*(in|inch|")$/i, '');
+      const text = inchesText(dash(cell));
       const fraction = /^(\d+)\s*\/\s*(\d+)$/.exec(text);
       if (!fraction) return toNumber(text) === undefined ? { error: `enter the diameter in 32nds (4) or as a fraction of an inch (1/8), not "${cell}".` } : { value: toNumber(text) };
       const in32nds = (Number(fraction[1]) / Number(fraction[2])) * 32;

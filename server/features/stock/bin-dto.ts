@@ -1,6 +1,5 @@
 import type { Bin, BinFields, BinReorder } from '@shared/schemas/bins';
-import { binDesignation, blindGripRange } from '@shared/stock/fasteners';
-import { isBlindKind } from '@shared/stock/kinds';
+import { binDesignation, binGripRange } from '@shared/stock/fasteners';
 import type { BinRow } from '../../db/schema/stock';
 import { e4ToDollars, valueCents } from '@shared/stock/money';
 
@@ -11,18 +10,21 @@ export function toBinDto(bin: BinRow, reorder: BinReorder, lastCounted?: Date): 
 
 /** What the bin's own row says, without the reorder computation (the scan answer and the CSV export need no more). */
 export function toBinFields(bin: BinRow, lastCounted?: Date): BinFields {
+  const gripRange = binGripRange(bin) ?? null;
   return {
     id: bin.id,
     code: bin.code,
     kind: bin.kind,
     name: bin.name,
     designation: binDesignation(bin),
-    gripRange: isBlindKind(bin.kind) && bin.grip16 !== null ? (blindGripRange(bin.grip16) ?? null) : null,
+    gripRange,
     head: bin.head,
     material: bin.material,
     stemMaterial: bin.stemMaterial,
     diameter32: bin.diameter32,
     grip16: bin.grip16,
+    gripMin: gripRange?.min ?? null,
+    gripMax: gripRange?.max ?? null,
     length16: bin.length16,
     drillSize: bin.drillSize,
     holeDrill: bin.holeDrill,

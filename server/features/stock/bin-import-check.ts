@@ -1,5 +1,5 @@
 import type { ImportChange, ImportProblem, ImportRowStatus } from '@shared/schemas/bin-import';
-import type { BinFields, BinListQuery, CreateBinInput } from '@shared/schemas/bins';
+import { gripRangeAfterEdit, type BinFields, type BinListQuery, type CreateBinInput } from '@shared/schemas/bins';
 import { binDesignation } from '@shared/stock/fasteners';
 import { BIN_CODE_PATTERN, BIN_KIND_LABELS, type BinKind } from '@shared/stock/kinds';
 import { dollarsToE4 } from '@shared/stock/money';
@@ -53,7 +53,7 @@ function changesBetween(before: Record<string, unknown>, after: CreateBinInput):
 }
 
 /** The fields that say what a bin holds; changing one may make it the twin of another bin. */
-const SPEC_COLUMNS = new Set(['kind', 'name', 'head', 'material', 'stem_material', 'diameter_32nds', 'grip_dash', 'length_16ths', 'drill_size']);
+const SPEC_COLUMNS = new Set(['kind', 'name', 'head', 'material', 'stem_material', 'diameter_32nds', 'grip_dash', 'grip_min_in', 'grip_max_in', 'length_16ths', 'drill_size']);
 
 /**
  * Which existing bins could hold the same thing as a row: equal in every spec column, and in the
@@ -61,8 +61,9 @@ const SPEC_COLUMNS = new Set(['kind', 'name', 'head', 'material', 'stem_material
  * more than SQLite's lower()), so a row with no candidate needs no query: 5,000 new screws against
  * 5,000 in the crib take one query each only where a name is already there.
  */
-type SpecKeyed = Pick<BinSpec, 'kind' | 'head' | 'material' | 'stemMaterial' | 'diameter32' | 'grip16' | 'length16' | 'drillSize' | 'name'>;
-const candidateKey = (b: SpecKeyed) => JSON.stringify([b.kind, b.head, b.material, b.stemMaterial, b.diameter32, b.grip16, b.length16, b.drillSize, b.diameter32 === null ? b.name.toLowerCase() : '']);
+type SpecKeyed = Pick<BinSpec, 'kind' | 'head' | 'material' | 'stemMaterial' | 'diameter32' | 'grip16' | 'gripMin' | 'gripMax' | 'length16' | 'drillSize' | 'name'>;
+const candidateKey = (b: SpecKeyed) =>
+  JSON.stringify([b.kind, b.head, b.material, b.stemMaterial, b.diameter32, b.grip16, b.gripMin, b.gripMax, b.length16, b.drillSize, b.diameter32 === null ? b.name.toLowerCase() : '']);
 
 interface Crib {
   byCode: ReadonlyMap<string, BinRow>;
@@ -110,7 +111,10 @@ function checkRow(db: Database, crib: Crib, setFields: readonly string[], row: R
   }
   const current = descriptiveFields(before);
   const kept = Object.fromEntries(Object.entries(current).filter(([field]) => !setFields.includes(field)));
-  const { input, errors } = binFromValues(row, { ...kept, ...row.values });
+  // A column the file has but leaves empty is sent as empty; a new grip dash without a range takes the table's.
+  const sent = { ...Object.fromEntries(setFields.map((f) => [f, null])), ...row.values };
+  const range = gripRangeAfterEdit(before, sent);
+  const { input, errors } = binFromValues(row, { ...kept, ...row.values, ...range });
   if (!input) return problemRow(row, errors);
   // A code names one kind of thing: a row of another kind is a different bin (often another crib's file), never an edit.
   if (input.kind !== before.kind) {

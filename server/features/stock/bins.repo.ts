@@ -32,6 +32,8 @@ const binStatements = preparedPerDatabase((db) => ({
         sql`${bins.stemMaterial} is ${p('stemMaterial')}`,
         sql`${bins.diameter32} is ${p('diameter32')}`,
         sql`${bins.grip16} is ${p('grip16')}`,
+        sql`${bins.gripMin} is ${p('gripMin')}`,
+        sql`${bins.gripMax} is ${p('gripMax')}`,
         sql`${bins.length16} is ${p('length16')}`,
         sql`${bins.drillSize} is ${p('drillSize')}`,
         sql`(${p('diameter32')} is not null or lower(${bins.name}) = lower(${p('name')}))`,
@@ -121,9 +123,9 @@ export function lastCountedAt(db: Database, binIds: readonly number[]): Map<numb
 }
 
 /** Other bins holding exactly the same thing (kind, spec and, for non-rivets, name): where stock may move. */
-export type BinSpec = Pick<BinRow, 'id' | 'kind' | 'head' | 'material' | 'stemMaterial' | 'diameter32' | 'grip16' | 'length16' | 'drillSize' | 'name'>;
+export type BinSpec = Pick<BinRow, 'id' | 'kind' | 'head' | 'material' | 'stemMaterial' | 'diameter32' | 'grip16' | 'gripMin' | 'gripMax' | 'length16' | 'drillSize' | 'name'>;
 
 export function sameSpecBins(db: Database, bin: BinSpec): BinRow[] {
-  const { id, kind, head, material, stemMaterial, diameter32, grip16, length16, drillSize, name } = bin;
-  return binStatements(db).sameSpec.all({ id, kind, head, material, stemMaterial, diameter32, grip16, length16, drillSize, name });
+  const { id, kind, head, material, stemMaterial, diameter32, grip16, gripMin, gripMax, length16, drillSize, name } = bin;
+  return binStatements(db).sameSpec.all({ id, kind, head, material, stemMaterial, diameter32, grip16, gripMin, gripMax, length16, drillSize, name });
 }

@@ -1,7 +1,7 @@
 import type { BinForYou, BinList, BinListQuery, BinReorder, CreateBinInput, RestockItem, UpdateBinBody, Bin, BinAction } from '@shared/schemas/bins';
 import { hasRole } from '@shared/roles';
 import { z } from 'zod';
-import { binKindRules } from '@shared/schemas/bins';
+import { binKindRules, gripRangeAfterEdit, withGripRange } from '@shared/schemas/bins';
 import type { ServiceContext } from '../../context';
 import type { BinRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
@@ -119,8 +119,10 @@ export function writeBinFields(ctx: ServiceContext, changes: readonly { id: numb
 export function editBin(ctx: ServiceContext, reordersOf: ReordersOf, code: string, change: UpdateBinBody): Bin {
   const bin = binOrThrow(ctx.db, code);
   const values = rowValues(change);
-  parseInput(wholeBin, { ...bin, ...values });
-  updateBin(ctx.db, bin.id, { ...values, updatedAt: ctx.now() });
+  const edited = { ...bin, ...values, ...gripRangeAfterEdit(bin, change) };
+  parseInput(wholeBin, edited);
+  const { gripMin, gripMax } = withGripRange(edited);
+  updateBin(ctx.db, bin.id, { ...values, gripMin, gripMax, updatedAt: ctx.now() });
   return getBin(ctx, reordersOf, code);
 }
 

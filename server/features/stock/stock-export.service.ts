@@ -72,7 +72,7 @@ export function ledgerCsv(ctx: ServiceContext, nameAssemblies: NameAssemblies, r
  */
 export function templateCsv(): string {
   const examples: Partial<Record<keyof CreateBinInput, unknown>>[] = [
-    { kind: 'blind_structural', head: 'dome', material: '5056', stemMaterial: 'steel', diameter32: 4, grip16: 2, unit: 'each', packSize: 100, unitCost: 0.12, supplier: 'Cedar Valley Fastener Supply', leadTimeDays: 10, reorderPoint: 200, reorderQty: 500, location: 'Shelf A2', initialQuantity: 500 },
+    { kind: 'blind_structural', head: 'dome', material: '5056', stemMaterial: 'steel', diameter32: 4, grip16: 2, gripMin: 0.063, gripMax: 0.125, unit: 'each', packSize: 100, unitCost: 0.12, supplier: 'Cedar Valley Fastener Supply', leadTimeDays: 10, reorderPoint: 200, reorderQty: 500, location: 'Shelf A2', initialQuantity: 500 },
     { kind: 'screw', name: 'Screw #8-32 × 1/2 pan head, stainless', unit: 'each', packSize: 50, unitCost: 0.09, supplier: 'Cedar Valley Fastener Supply', supplierPart: 'PS832-8', leadTimeDays: 14, reorderPoint: 40, reorderQty: 100, location: 'Drawer C4', initialQuantity: 120 },
   ];
   return toCsv(

@@ -4,7 +4,7 @@ import { useForm, useWatch, type Resolver } from 'react-hook-form';
 import { z } from 'zod';
 import { ALL_DRILLS } from '@shared/drills/drill-sizes';
 import { binKindRules, createBinBodySchema, type BinFields } from '@shared/schemas/bins';
-import { BLIND_GRIP_RANGES, fastenerDesignation } from '@shared/stock/fasteners';
+import { BLIND_GRIP_RANGES, blindGripRange, fastenerDesignation } from '@shared/stock/fasteners';
 import { BIN_KIND_LABELS, BIN_KINDS, isBlindKind, isRivetKind, RIVET_MATERIALS, rivetHeadChoices, STEM_MATERIALS } from '@shared/stock/kinds';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
@@ -19,6 +19,7 @@ export type BinFormOutput = z.output<typeof createBinBodySchema>;
 /** Text as typed into a number field: empty or not a number fails the schema with its own message. */
 const asNumber = (v: unknown) => (typeof v === 'string' ? (v.trim() === '' ? Number.NaN : Number(v)) : v);
 const asNullableNumber = (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v));
+const asNullableInches = (v: unknown) => (typeof v === 'string' && v.trim() === '' ? null : asNullableNumber(v));
 const asNullable = (v: unknown) => (typeof v === 'string' && v.trim() === '' ? null : v);
 
 /**
@@ -35,6 +36,8 @@ function forKind(v: FormInput): FormInput {
     diameter32: rivet ? v.diameter32 : null,
     stemMaterial: blind ? v.stemMaterial : null,
     grip16: blind ? v.grip16 : null,
+    gripMin: blind ? v.gripMin : null,
+    gripMax: blind ? v.gripMax : null,
     holeDrill: blind ? v.holeDrill : null,
     length16: v.kind === 'solid_rivet' ? v.length16 : null,
     drillSize: v.kind === 'drill_bit' ? v.drillSize : null,
@@ -72,6 +75,8 @@ function defaults(bin?: BinFields): FormInput {
       stemMaterial: null,
       diameter32: null,
       grip16: null,
+      gripMin: null,
+      gripMax: null,
       length16: null,
       drillSize: null,
       holeDrill: null,
@@ -80,9 +85,14 @@ function defaults(bin?: BinFields): FormInput {
   }
   const { kind, name, unit, packSize, unitCost, supplier, supplierPart, leadTimeDays, reorderPoint, reorderQty, location, notes } = bin;
   const { head, stemMaterial, diameter32, grip16, length16, drillSize, holeDrill } = bin;
+  // A range that is the table's band for the dash stays empty, so a new dash takes its own band.
+  const band = grip16 === null ? undefined : blindGripRange(grip16);
+  const fromBox = (value: number | null, table: number | undefined) => (value === table ? null : value);
   return {
     ...{ kind, name, unit, packSize, unitCost, supplier, supplierPart, leadTimeDays, reorderPoint, reorderQty, location, notes },
     ...{ head, stemMaterial: stemMaterial as FormInput['stemMaterial'], diameter32, grip16, length16, drillSize, holeDrill },
+    gripMin: fromBox(bin.gripMin, band?.min),
+    gripMax: fromBox(bin.gripMax, band?.max),
     material: bin.material as FormInput['material'],
   };
 }
@@ -117,12 +127,24 @@ export function BinForm({ bin, submitLabel, onSubmit }: { bin?: BinFields; submi
   const form = useForm<FormInput, unknown, BinFormOutput>({ resolver, defaultValues: initial });
   const { errors, isSubmitting } = form.formState;
   const drillListId = useId();
-  const spec = useWatch({ control: form.control, name: ['kind', 'head', 'material', 'stemMaterial', 'diameter32', 'grip16', 'length16', 'name'] });
-  const [kind, head, material, stemMaterial, diameter32, grip16, length16, name] = spec;
+  const spec = useWatch({ control: form.control, name: ['kind', 'head', 'material', 'stemMaterial', 'diameter32', 'grip16', 'length16', 'name', 'gripMin', 'gripMax'] });
+  const [kind, head, material, stemMaterial, diameter32, grip16, length16, name, gripMin, gripMax] = spec;
   const rivet = isRivetKind(kind);
   const blind = isBlindKind(kind);
+  const band = blind && grip16 ? blindGripRange(grip16) : undefined;
+  const typed = (v: unknown) => (typeof v === 'number' && Number.isFinite(v) ? v : null);
   const preview = rivet
-    ? fastenerDesignation({ kind, head: head ?? null, material: material ?? null, stemMaterial: blind ? (stemMaterial ?? null) : null, diameter32: diameter32 ?? null, grip16: blind ? (grip16 ?? null) : null, length16: blind ? null : (length16 ?? null) })
+    ? fastenerDesignation({
+        kind,
+        head: head ?? null,
+        material: material ?? null,
+        stemMaterial: blind ? (stemMaterial ?? null) : null,
+        diameter32: diameter32 ?? null,
+        grip16: blind ? (grip16 ?? null) : null,
+        gripMin: blind ? typed(gripMin) : null,
+        gripMax: blind ? typed(gripMax) : null,
+        length16: blind ? null : (length16 ?? null),
+      })
     : name?.trim();
 
   const submit = form.handleSubmit(async (values) => {
@@ -167,6 +189,16 @@ export function BinForm({ bin, submitLabel, onSubmit }: { bin?: BinFields; submi
                 <SelectField label="Grip dash" hint="The dash is in 16ths; beside it, the sheet stack it takes." options={GRIP_OPTIONS} error={errors.grip16?.message} {...select('grip16', asNullableNumber)} />
               ) : (
                 <SelectField label="Length" hint="The dash is in 16ths of an inch." options={lengthOptions(bin?.length16)} error={errors.length16?.message} {...select('length16', asNullableNumber)} />
+              )}
+              {blind && (
+                <fieldset className="flex flex-col gap-2 sm:col-span-2">
+                  <legend className="text-sm font-semibold">Grip range (from the box)</legend>
+                  <p className="text-sm text-steel">The sheet stack the maker gives for these rivets, in inches. Left empty, it is the table's band for the grip dash.</p>
+                  <div className="grid gap-4 sm:grid-cols-2">
+                    <TextField label="Smallest grip (in)" inputMode="decimal" placeholder={band ? band.min.toFixed(3) : undefined} error={errors.gripMin?.message} {...form.register('gripMin', { setValueAs: asNullableInches })} />
+                    <TextField label="Largest grip (in)" inputMode="decimal" placeholder={band ? band.max.toFixed(3) : undefined} error={errors.gripMax?.message} {...form.register('gripMax', { setValueAs: asNullableInches })} />
+                  </div>
+                </fieldset>
               )}
               {blind && (
                 <TextField label="Hole drill, if the maker's differs" list={drillListId} placeholder="#30" error={errors.holeDrill?.message} {...form.register('holeDrill', { setValueAs: asNullable })} />

@@ -1,10 +1,13 @@
 import type { BinFields, BinReorder } from '@shared/schemas/bins';
+import { blindGripRange } from '@shared/stock/fasteners';
 import { BIN_KIND_LABELS } from '@shared/stock/kinds';
 import { rivetBinCaution } from '@shared/stock/rivet-cautions';
 import { unitWord } from '@shared/stock/quantity-words';
 import { Notice } from '@/components/ui/notice';
 import { Code, PageHeading } from '@/components/ui/page';
 import { formatCents, formatCount, formatDate, formatQuantity, formatUnitCost, gripRangeText } from '../utils/format';
+
+const sameRange = (a: { min: number; max: number }, b: { min: number; max: number } | undefined) => b !== undefined && a.min === b.min && a.max === b.max;
 
 /** Why the bin needs ordering and, for the quartermaster, what to order: the one reorder rule's numbers, as on Restock. */
 function lowStockWords(bin: BinFields, r: BinReorder, isQuartermaster: boolean): string {
@@ -61,6 +64,7 @@ export function BinDetails({ bin, reorder, isQuartermaster }: { bin: BinFields; 
             <dt className="text-steel">Grip</dt>
             <dd>
               <Code>−{bin.grip16}</Code>: sheet stack <Code>{gripRangeText(bin.gripRange)}</Code>
+              {!sameRange(bin.gripRange, blindGripRange(bin.grip16)) && <span className="text-steel"> (from the box)</span>}
             </dd>
           </>
         )}

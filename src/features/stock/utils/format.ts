@@ -1,4 +1,4 @@
-import { inchFraction } from '@shared/stock/fasteners';
+import { gripRangeWords, inchFraction } from '@shared/stock/fasteners';
 import { formatCount } from '@/lib/format';
 
 export { formatCents, formatCount, formatDate, formatDateTime, formatQuantity, formatUnitCost } from '@/lib/format';
@@ -14,7 +14,7 @@ export const diameterText = (diameter32: number): string => `${inchFraction(diam
 export const lengthText = (length16: number): string => `${inchFraction(length16 * 2, 32)} in`;
 
 /** A grip range in inches to the thousandth: (0.063, 0.125) → "0.063–0.125 in". */
-export const gripRangeText = (range: { min: number; max: number }): string => `${range.min.toFixed(3)}–${range.max.toFixed(3)} in`;
+export const gripRangeText = gripRangeWords;
 
 
 /** A blind rivet grip dash with the sheet stack it takes: (2, {0.063, 0.125}) → "−2 (0.063–0.125 in)". */

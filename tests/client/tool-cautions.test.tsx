@@ -32,6 +32,7 @@ const tool = (category: ToolCategory, name: string): ToolForYou => ({
   status: 'available',
   statusNote: null,
   drillSize: null,
+  rivetDiameter32: null,
   traySize: null,
   trayCapacity: null,
   accessories: [],

@@ -111,6 +111,12 @@ describe('cautions on the crib kit', () => {
     expect(cautionTitles()).toEqual([DRILLING, AIR, GUN, EYES, HEARING]);
   });
 
+  it('cautions about the cutter’s drilling and the dies closing on fingers for a flush kit, picked or not', () => {
+    renderWithProviders(<KitList kit={[item('countersink_cutter', '100° countersink cutter, 1/8 in, #30 pilot', 'countersink_cutter'), item('dimple_dies', '100° dimple dies, 3/32 in', null)]} />);
+    expect(cautionTitles()).toEqual([DRILLING, 'Dimple dies', EYES]);
+    expect(screen.getByText(/fingers clear of the dies/i)).toBeTruthy();
+  });
+
   it('cautions about the work a kit item needs even when the crib has no such tool', () => {
     renderWithProviders(<KitList kit={[item('drill_bit', 'Drill bit #21', null)]} />);
     const list = screen.getByRole('list', { name: 'Cautions' });

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { findDrill } from '../drills/drill-sizes';
 import { ESTIMATE_DIAMETERS } from '../estimate/rivet-rules';
-import { CATEGORY_LABELS, RIVET_SIZED_CATEGORIES, TEMPORARY_FASTENER_SIZES, TOOL_CATEGORIES, TOOL_STATUSES, type ToolCategory } from '../tools/categories';
+import { CATEGORY_LABELS, isRivetSized, TEMPORARY_FASTENER_SIZES, TOOL_CATEGORIES, TOOL_STATUSES } from '../tools/categories';
 
 export const TOOL_CODE_PATTERN = /^T-\d{4,6}$/;
 
@@ -62,8 +62,6 @@ const toolFieldsSchema = z.strictObject({
 });
 
 type ToolFields = z.infer<typeof toolFieldsSchema>;
-
-const isRivetSized = (c: ToolCategory | undefined) => (RIVET_SIZED_CATEGORIES as readonly (ToolCategory | undefined)[]).includes(c);
 
 function kindRules(t: Partial<ToolFields>, ctx: z.RefinementCtx) {
   if (t.category === 'drill_bit' && !t.drillSize) {

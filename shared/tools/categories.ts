@@ -56,6 +56,7 @@ export const DEFAULT_LOAN_DAYS: Record<ToolCategory, number> = {
 
 /** Categories made for one rivet size: the tool records the size (a countersink cutter also its pilot drill). */
 export const RIVET_SIZED_CATEGORIES = ['countersink_cutter', 'dimple_dies'] as const satisfies readonly ToolCategory[];
+export const isRivetSized = (category: ToolCategory | undefined): boolean => (RIVET_SIZED_CATEGORIES as readonly (ToolCategory | undefined)[]).includes(category);
 
 /** Categories that are powered tools: the cautions about eye and hearing protection apply. */
 export const POWERED_CATEGORIES: readonly ToolCategory[] = ['pneumatic_rivet_puller', 'air_drill', 'rivet_gun'];

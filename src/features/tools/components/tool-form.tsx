@@ -7,7 +7,7 @@ import { ESTIMATE_DIAMETERS } from '@shared/estimate/rivet-rules';
 import type { CreateToolBody, Tool } from '@shared/schemas/tools';
 import { chapterDay, startOfDayNamed } from '@shared/time/chapter-time';
 import { HOUR_MS } from '@shared/time/durations';
-import { CATEGORY_LABELS, DEFAULT_LOAN_DAYS, RIVET_SIZED_CATEGORIES, TEMPORARY_FASTENER_SIZES, TOOL_CATEGORIES, type ToolCategory } from '@shared/tools/categories';
+import { CATEGORY_LABELS, DEFAULT_LOAN_DAYS, isRivetSized, TEMPORARY_FASTENER_SIZES, TOOL_CATEGORIES, type ToolCategory } from '@shared/tools/categories';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
@@ -45,7 +45,6 @@ type FormValues = z.infer<typeof formSchema>;
 const toNumber = (s: string) => (s.trim() === '' ? null : Number(s));
 /** Drill bits record their size; a countersink cutter records its pilot in the same field. */
 const hasDrillSize = (c: ToolCategory) => c === 'drill_bit' || c === 'countersink_cutter';
-const isRivetSized = (c: ToolCategory) => (RIVET_SIZED_CATEGORIES as readonly ToolCategory[]).includes(c);
 const RIVET_SIZE_OPTIONS = [{ value: '', label: 'Choose the rivet size' }, ...ESTIMATE_DIAMETERS.map((d) => ({ value: String(d), label: diameterWords(d) }))];
 
 function toBody(v: FormValues): CreateToolBody {

@@ -79,13 +79,16 @@ const DEMO_TOOLS: DemoTool[] = [
   { name: 'Edge distance marker', category: 'measuring', location: 'Cabinet B, drawer 1', replacementValueCents: 1600 },
   { name: 'Countersink cage with 100° cutter', category: 'other', location: 'Cabinet A, drawer 2', replacementValueCents: 8900, accessories: ['#30 pilot cutter', '#40 pilot cutter'] },
   { name: 'Countersink cage with 100° cutter', category: 'other', location: 'Cabinet A, drawer 2', replacementValueCents: 8900, accessories: ['#30 pilot cutter'] },
-  { name: 'Dimple dies, 3/32, with squeezer yoke', category: 'other', location: 'Cabinet A, drawer 2', replacementValueCents: 7800 },
+  { name: 'Dimple dies 100°, 3/32, with squeezer yoke', category: 'dimple_dies', rivetDiameter32: 3, location: 'Cabinet A, drawer 2', replacementValueCents: 7800 },
   { name: 'Hand rivet squeezer', category: 'other', location: 'Cabinet A, drawer 2', replacementValueCents: 19500, accessories: ['Flat sets', '3 in yoke'] },
   { name: 'Aviation snips, left cut', category: 'other', location: 'Wall rack', replacementValueCents: 2200 },
   { name: 'Aviation snips, right cut', category: 'other', location: 'Wall rack', replacementValueCents: 2200 },
   { name: 'Hand seamer, straight jaw', category: 'other', location: 'Wall rack', replacementValueCents: 2600 },
   { name: 'Spring clamps, set of 6', category: 'other', location: 'Wall rack', replacementValueCents: 1800 },
   { name: 'Fluting pliers', category: 'other', location: 'Wall rack', replacementValueCents: 2400 },
+  // Last in the list, so the tools above keep their label codes.
+  { name: 'Countersink cutter 100°, 1/8, #30 pilot', category: 'countersink_cutter', rivetDiameter32: 4, drillSize: '#30', location: 'Cabinet A, drawer 2', replacementValueCents: 2900 },
+  { name: 'Dimple dies 100°, 1/8', category: 'dimple_dies', rivetDiameter32: 4, location: 'Cabinet A, drawer 2', replacementValueCents: 3600 },
 ];
 
 /**

@@ -1,7 +1,7 @@
 import type { ToolCategory } from '../tools/categories';
 
 /** The cautions shown beside tools that can hurt, in the order a list of them reads. */
-export const TOOL_CAUTION_KEYS = ['drilling', 'compressed_air', 'rivet_gun', 'eye_protection', 'hearing_protection'] as const;
+export const TOOL_CAUTION_KEYS = ['drilling', 'compressed_air', 'rivet_gun', 'dimple_dies', 'eye_protection', 'hearing_protection'] as const;
 export type ToolCautionKey = (typeof TOOL_CAUTION_KEYS)[number];
 
 export interface ToolCaution {
@@ -23,6 +23,10 @@ const TEXTS: Record<ToolCautionKey, Omit<ToolCaution, 'key'>> = {
     title: 'Rivet gun',
     text: 'Never pull the trigger unless the set is on the rivet and the bucking bar is held behind it: a gun fired into the air can throw its set.',
   },
+  dimple_dies: {
+    title: 'Dimple dies',
+    text: 'Keep your fingers clear of the dies: a squeezer or a dimpling frame closes them hard enough to crush a fingertip. Hold the sheet by its edge, away from the dies.',
+  },
   eye_protection: {
     title: 'Eye protection',
     text: 'Wear safety glasses: chips, rivet stems and broken bits fly.',
@@ -36,7 +40,8 @@ const TEXTS: Record<ToolCautionKey, Omit<ToolCaution, 'key'>> = {
 /**
  * Which cautions each kind of tool carries. Drill motors and drill bits: drilling. Air drills,
  * pneumatic rivet pullers and rivet guns: compressed air and hearing. Rivet guns and the bucking
- * bars behind them: the rivet gun's trigger. Eye protection with all of these.
+ * bars behind them: the rivet gun's trigger. A countersink cutter cuts like a bit: drilling. Dimple
+ * dies close on the sheet: fingers clear. Eye protection with all of these.
  */
 const BY_CATEGORY: Record<ToolCategory, readonly ToolCautionKey[]> = {
   hand_rivet_puller: [],
@@ -45,6 +50,8 @@ const BY_CATEGORY: Record<ToolCategory, readonly ToolCautionKey[]> = {
   rivet_gun: ['compressed_air', 'rivet_gun', 'eye_protection', 'hearing_protection'],
   bucking_bar: ['rivet_gun', 'eye_protection', 'hearing_protection'],
   drill_bit: ['drilling', 'eye_protection'],
+  countersink_cutter: ['drilling', 'eye_protection'],
+  dimple_dies: ['dimple_dies', 'eye_protection'],
   temporary_fastener_tray: [],
   deburring_tool: [],
   spacing_fan: [],

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { findDrill } from '../drills/drill-sizes';
-import { TEMPORARY_FASTENER_SIZES, TOOL_CATEGORIES, TOOL_STATUSES } from '../tools/categories';
+import { ESTIMATE_DIAMETERS } from '../estimate/rivet-rules';
+import { CATEGORY_LABELS, isRivetSized, TEMPORARY_FASTENER_SIZES, TOOL_CATEGORIES, TOOL_STATUSES } from '../tools/categories';
 
 export const TOOL_CODE_PATTERN = /^T-\d{4,6}$/;
 
@@ -16,6 +17,12 @@ const drillSizeField = z
   .refine((s) => findDrill(s) !== undefined, { error: 'Use a drill size from the table: #1 to #80, A to Z, or a fraction like 1/8.' })
   .transform((s) => findDrill(s)!.name);
 
+const RIVET_SIZE_WORDS = 'Choose the rivet size: 3/32, 1/8, 5/32, 3/16 or 1/4 in (3, 4, 5, 6 or 8 in 32nds).';
+const rivetDiameter32Field = z
+  .number({ error: RIVET_SIZE_WORDS })
+  .int({ error: RIVET_SIZE_WORDS })
+  .refine((d) => (ESTIMATE_DIAMETERS as readonly number[]).includes(d), { error: RIVET_SIZE_WORDS });
+
 const isoDate = z.iso.datetime({ offset: true, error: 'Use a date and time like 2026-12-24T17:00:00Z.' });
 
 /** The fields a quartermaster or lead types about a tool, without defaults (edits send only what changes). */
@@ -29,6 +36,8 @@ const toolFields = {
   serviceIntervalDays: z.number().int().min(1).max(3650).nullable(),
   lastServiceAt: isoDate.nullable(),
   drillSize: drillSizeField.nullable(),
+  /** Countersink cutters and dimple dies only: the rivet diameter they are made for, in 32nds of an inch. */
+  rivetDiameter32: rivetDiameter32Field.nullable(),
   traySize: z.enum(TEMPORARY_FASTENER_SIZES, { error: 'Choose a temporary fastener size: 1/16, 3/32, 1/8, 5/32, 3/16, 1/4 or 3/8.' }).nullable(),
   trayCapacity: z.number().int().min(1, { error: 'A full tray holds at least 1.' }).max(10_000).nullable(),
   accessories: z.array(z.string().trim().min(1).max(80)).max(30),
@@ -45,6 +54,7 @@ const toolFieldsSchema = z.strictObject({
   serviceIntervalDays: toolFields.serviceIntervalDays.default(null),
   lastServiceAt: toolFields.lastServiceAt.default(null),
   drillSize: toolFields.drillSize.default(null),
+  rivetDiameter32: toolFields.rivetDiameter32.default(null),
   traySize: toolFields.traySize.default(null),
   trayCapacity: toolFields.trayCapacity.default(null),
   accessories: toolFields.accessories.default([]),
@@ -56,6 +66,16 @@ type ToolFields = z.infer<typeof toolFieldsSchema>;
 function kindRules(t: Partial<ToolFields>, ctx: z.RefinementCtx) {
   if (t.category === 'drill_bit' && !t.drillSize) {
     ctx.addIssue({ code: 'custom', path: ['drillSize'], message: 'A drill bit needs its size, like #40 or 1/8.' });
+  }
+  if (t.category === 'countersink_cutter' && !t.drillSize) {
+    ctx.addIssue({ code: 'custom', path: ['drillSize'], message: 'A countersink cutter needs the drill size of its pilot, like #30.' });
+  }
+  if (isRivetSized(t.category) && t.rivetDiameter32 == null) {
+    const what = t.category === 'countersink_cutter' ? 'A countersink cutter needs the rivet size it cuts for' : 'Dimple dies need the rivet size they are for';
+    ctx.addIssue({ code: 'custom', path: ['rivetDiameter32'], message: `${what}, like 1/8 in.` });
+  }
+  if (t.category && !isRivetSized(t.category) && t.rivetDiameter32 != null) {
+    ctx.addIssue({ code: 'custom', path: ['rivetDiameter32'], message: `Only countersink cutters and dimple dies record a rivet size; leave it empty for a ${CATEGORY_LABELS[t.category].toLowerCase()}.` });
   }
   if (t.category === 'temporary_fastener_tray') {
     if (!t.traySize) ctx.addIssue({ code: 'custom', path: ['traySize'], message: 'A temporary fastener tray needs the fastener size.' });
@@ -155,6 +175,8 @@ export const toolSchema = z.object({
   status: z.enum(TOOL_STATUSES),
   statusNote: z.string().nullable(),
   drillSize: z.object({ name: z.string(), inch: z.number(), mm: z.number() }).nullable(),
+  /** Countersink cutters and dimple dies: the rivet diameter they are for, in 32nds (a cutter's pilot is its drillSize). */
+  rivetDiameter32: z.number().nullable(),
   traySize: z.enum(TEMPORARY_FASTENER_SIZES).nullable(),
   trayCapacity: z.number().nullable(),
   accessories: z.array(z.string()),

@@ -5,6 +5,8 @@ export const TOOL_CATEGORIES = [
   'rivet_gun',
   'bucking_bar',
   'drill_bit',
+  'countersink_cutter',
+  'dimple_dies',
   'temporary_fastener_tray',
   'deburring_tool',
   'spacing_fan',
@@ -21,6 +23,8 @@ export const CATEGORY_LABELS: Record<ToolCategory, string> = {
   rivet_gun: 'Rivet gun',
   bucking_bar: 'Bucking bar',
   drill_bit: 'Drill bit',
+  countersink_cutter: '100° countersink cutter',
+  dimple_dies: '100° dimple dies',
   temporary_fastener_tray: 'Temporary fastener tray',
   deburring_tool: 'Deburring tool',
   spacing_fan: 'Rivet spacing fan',
@@ -40,6 +44,8 @@ export const DEFAULT_LOAN_DAYS: Record<ToolCategory, number> = {
   rivet_gun: 7,
   bucking_bar: 14,
   drill_bit: 14,
+  countersink_cutter: 14,
+  dimple_dies: 14,
   temporary_fastener_tray: 14,
   deburring_tool: 14,
   spacing_fan: 14,
@@ -47,6 +53,10 @@ export const DEFAULT_LOAN_DAYS: Record<ToolCategory, number> = {
   measuring: 7,
   other: 7,
 };
+
+/** Categories made for one rivet size: the tool records the size (a countersink cutter also its pilot drill). */
+export const RIVET_SIZED_CATEGORIES = ['countersink_cutter', 'dimple_dies'] as const satisfies readonly ToolCategory[];
+export const isRivetSized = (category: ToolCategory | undefined): boolean => (RIVET_SIZED_CATEGORIES as readonly (ToolCategory | undefined)[]).includes(category);
 
 /** Categories that are powered tools: the cautions about eye and hearing protection apply. */
 export const POWERED_CATEGORIES: readonly ToolCategory[] = ['pneumatic_rivet_puller', 'air_drill', 'rivet_gun'];

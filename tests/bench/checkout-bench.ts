@@ -14,7 +14,7 @@ import { join } from 'node:path';
 import express, { type Request, type RequestHandler, type Response } from 'express';
 import { hasRole } from '@shared/roles';
 import { TOOL_CODE_PATTERN } from '@shared/schemas/tools';
-import { CATEGORY_LABELS, DEFAULT_LOAN_DAYS, POWERED_CATEGORIES, TOOL_CATEGORIES, type ToolCategory } from '@shared/tools/categories';
+import { CATEGORY_LABELS, DEFAULT_LOAN_DAYS, POWERED_CATEGORIES, isRivetSized, TOOL_CATEGORIES, type ToolCategory } from '@shared/tools/categories';
 import type { App } from '../../server/app';
 import { hashPassword } from '../../server/accounts/passwords';
 import { migrateDatabase, openDatabase, type Database } from '../../server/db/client';
@@ -55,7 +55,8 @@ interface Figures extends Run {
 // ---------------------------------------------------------------------------------------------
 // Seed: the same chapter on both databases.
 
-const TOOL_CATEGORIES_BENCHED = TOOL_CATEGORIES.filter((c) => c !== 'temporary_fastener_tray');
+// Trays are added apart; cutters and dimple dies would need a rivet size the insert does not give.
+const TOOL_CATEGORIES_BENCHED = TOOL_CATEGORIES.filter((c) => c !== 'temporary_fastener_tray' && !isRivetSized(c));
 
 function seed(db: Database, passwordHash: string): void {
   const sqlite = db.$client;

@@ -21,6 +21,7 @@ const bar: ToolForYou = {
   status: 'on_loan',
   statusNote: null,
   drillSize: null,
+  rivetDiameter32: null,
   traySize: null,
   trayCapacity: null,
   accessories: [],

@@ -26,6 +26,7 @@ const puller = (over: Partial<ToolForYou> = {}): ToolForYou => ({
   status: 'available',
   statusNote: null,
   drillSize: null,
+  rivetDiameter32: null,
   traySize: null,
   trayCapacity: null,
   accessories: NOSEPIECES,

@@ -21,6 +21,7 @@ const tray: ToolForYou = {
   status: 'on_loan',
   statusNote: null,
   drillSize: null,
+  rivetDiameter32: null,
   traySize: '1/8',
   trayCapacity: 50,
   accessories: ['Temporary fastener pliers'],

@@ -32,6 +32,7 @@ const tool = (category: ToolCategory, name: string): ToolForYou => ({
   status: 'available',
   statusNote: null,
   drillSize: null,
+  rivetDiameter32: null,
   traySize: null,
   trayCapacity: null,
   accessories: [],
@@ -108,6 +109,12 @@ describe('cautions on the crib kit', () => {
   it('adds the air, trigger and hearing cautions when the kit picks a rivet gun', () => {
     renderWithProviders(<KitList kit={[item('rivet_gun', 'Rivet gun', 'rivet_gun'), item('bucking_bar', 'Bucking bar', 'bucking_bar'), item('drill_bit', 'Drill bit #30', 'drill_bit')]} />);
     expect(cautionTitles()).toEqual([DRILLING, AIR, GUN, EYES, HEARING]);
+  });
+
+  it('cautions about the cutter’s drilling and the dies closing on fingers for a flush kit, picked or not', () => {
+    renderWithProviders(<KitList kit={[item('countersink_cutter', '100° countersink cutter, 1/8 in, #30 pilot', 'countersink_cutter'), item('dimple_dies', '100° dimple dies, 3/32 in', null)]} />);
+    expect(cautionTitles()).toEqual([DRILLING, 'Dimple dies', EYES]);
+    expect(screen.getByText(/fingers clear of the dies/i)).toBeTruthy();
   });
 
   it('cautions about the work a kit item needs even when the crib has no such tool', () => {

@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { migrateDatabase, openDatabase } from '../../server/db/client';
+import { listAssemblies } from '../../server/features/planning/assemblies.repo';
+import { assemblyKit } from '../../server/features/planning/assembly-estimate.service';
 import { loanStats } from '../../server/features/tools/loan-stats.service';
 import { seedDemoChapter } from '../../server/seed/demo-chapter';
 
@@ -94,6 +96,26 @@ describe('the demo chapter', () => {
     // The history is all back: the open loans are still only the recent ones, two of them overdue.
     const open = db.$client.prepare('select count(*) as n from loans where returned_at is null and checked_out_at < ?').get(Date.now() - 22 * 86_400_000) as { n: number };
     expect(open.n).toBe(0);
+    db.$client.close();
+  }, SEEDING_MS);
+
+  it('stocks the crib with a 1/8 in countersink cutter on a #30 pilot and 3/32 and 1/8 in dimple dies, which the flush assemblies’ kits pick', async () => {
+    const db = openDatabase(':memory:');
+    migrateDatabase(db);
+    await seedDemoChapter(db);
+    const sized = db.$client.prepare("select code, category, rivet_diameter32 as d32, drill_size as pilot from tools where category in ('countersink_cutter', 'dimple_dies') order by category, rivet_diameter32").all() as { code: string; category: string; d32: number; pilot: string | null }[];
+    expect(sized.map(({ category, d32, pilot }) => [category, d32, pilot])).toEqual([
+      ['countersink_cutter', 4, '#30'],
+      ['dimple_dies', 3, null],
+      ['dimple_dies', 4, null],
+    ]);
+    for (const t of sized) expect(t.code).toMatch(/^T-\d{4}$/);
+    const flushItems = listAssemblies(db, {})
+      .flatMap((a) => assemblyKit(db, a))
+      .filter((k) => k.role === 'countersink_cutter' || k.role === 'dimple_dies');
+    // The demo's flush lines: a 1/8 in hinge doubler countersunk, 3/32 and 1/8 in lines over thin skins dimpled.
+    expect(new Set(flushItems.map((k) => k.need))).toEqual(new Set(['100° countersink cutter, 1/8 in, #30 pilot', '100° dimple dies, 3/32 in', '100° dimple dies, 1/8 in']));
+    for (const k of flushItems) expect(k.tool?.category).toBe(k.role);
     db.$client.close();
   }, SEEDING_MS);
 });

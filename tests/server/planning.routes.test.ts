@@ -410,16 +410,46 @@ describe('the crib kit', () => {
     expect(plain.code).not.toBe(both.code);
   });
 
-  it('asks for a countersink cutter with its pilot per size countersunk and dimple dies per size dimpled (TM 9-2320-363-34-2 minimum gage)', async () => {
+  describe('flush heads: countersink cutters and dimple dies by rivet size', () => {
     const flush = (diameter32: number, stack: number[]) => ({ length: 12, pitch: 1, stack, rivet: { kind: 'solid', head: 'countersunk', diameter32, material: '2117-T4' } });
     // 1/8 in over a 0.050 in top sheet: at the 0.050 in minimum, countersunk; final drill #30 is the pilot.
-    // 3/32 in over 0.025 in, then 0.032 in: both below the 0.040 in minimum, nested dimples.
-    const e = await estimateOf(member, await newAssembly(member, { lines: [flush(4, [0.05, 0.04]), flush(3, [0.025, 0.032])] }));
-    expect(e.lines.map((l) => l.flushPrep)).toEqual(['countersink', 'dimple']);
-    expect(e.kit.filter((k) => k.role === 'countersink_cutter' || k.role === 'dimple_dies').map(short)).toEqual([
-      ['countersink_cutter', '100° countersink cutter, 1/8 in, #30 pilot', null, null, 'none in the crib'],
-      ['dimple_dies', '100° dimple dies, 3/32 in', null, null, 'none in the crib'],
-    ]);
+    // 3/32 in over 0.025 in, then 0.032 in: both below the 0.040 in minimum, nested dimples (TM 9-2320-363-34-2 minimum gage).
+    const flushLines = [flush(4, [0.05, 0.04]), flush(3, [0.025, 0.032])];
+    const flushItems = (e: AssemblyEstimate) => e.kit.filter((k) => k.role === 'countersink_cutter' || k.role === 'dimple_dies').map(short);
+
+    it('picks the cutter of the rivet size with the line’s final drill as its pilot, and the dies of the size, free ones first', async () => {
+      const cutter = await addToolAs(qm, { name: '100° countersink cutter, 1/8 in', category: 'countersink_cutter', rivetDiameter32: 4, drillSize: '#30' });
+      // Wrong pilot, wrong size: never picked for this line.
+      await addToolAs(qm, { name: '100° countersink cutter, 1/8 in, #40 pilot', category: 'countersink_cutter', rivetDiameter32: 4, drillSize: '#40' });
+      await addToolAs(qm, { name: '100° countersink cutter, 3/32 in', category: 'countersink_cutter', rivetDiameter32: 3, drillSize: '#30' });
+      const lentDies = await addToolAs(qm, { name: '100° dimple dies, 3/32 in', category: 'dimple_dies', rivetDiameter32: 3 });
+      const freeDies = await addToolAs(qm, { name: '100° dimple dies, 3/32 in', category: 'dimple_dies', rivetDiameter32: 3 });
+      await addToolAs(qm, { name: '100° dimple dies, 1/8 in', category: 'dimple_dies', rivetDiameter32: 4 });
+      await lend(t, other, lentDies.code, 7 * DAY_MS);
+      const e = await estimateOf(member, await newAssembly(member, { lines: flushLines }));
+      expect(e.lines.map((l) => l.flushPrep)).toEqual(['countersink', 'dimple']);
+      expect(flushItems(e)).toEqual([
+        ['countersink_cutter', '100° countersink cutter, 1/8 in, #30 pilot', null, cutter.code, null],
+        ['dimple_dies', '100° dimple dies, 3/32 in', null, freeDies.code, null],
+      ]);
+      expect(e.kit.find((k) => k.role === 'dimple_dies')!.tool!.category).toBe('dimple_dies');
+
+      // With the free dies on loan too, the lent pair is the pick and the kit says so.
+      await lend(t, other, freeDies.code, 7 * DAY_MS);
+      const later = await estimateOf(member, await newAssembly(member, { lines: flushLines }));
+      expect(flushItems(later)[1]).toEqual(['dimple_dies', '100° dimple dies, 3/32 in', null, lentDies.code, 'all on loan']);
+    });
+
+    it('says none in the crib when no cutter or dies of that size (or that pilot) is there', async () => {
+      await addToolAs(qm, { name: '100° countersink cutter, 1/8 in, #40 pilot', category: 'countersink_cutter', rivetDiameter32: 4, drillSize: '#40' });
+      await addToolAs(qm, { name: '100° countersink cutter, 5/32 in', category: 'countersink_cutter', rivetDiameter32: 5, drillSize: '#30' });
+      await addToolAs(qm, { name: '100° dimple dies, 1/8 in', category: 'dimple_dies', rivetDiameter32: 4 });
+      const e = await estimateOf(member, await newAssembly(member, { lines: flushLines }));
+      expect(flushItems(e)).toEqual([
+        ['countersink_cutter', '100° countersink cutter, 1/8 in, #30 pilot', null, null, 'none in the crib'],
+        ['dimple_dies', '100° dimple dies, 3/32 in', null, null, 'none in the crib'],
+      ]);
+    });
   });
 
   it('holds the kit: free tools are set aside, tools someone else has are queued for, and it says why it skipped the rest', async () => {

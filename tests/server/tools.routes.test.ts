@@ -2,7 +2,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { memberSignoffs, signoffs } from '../../server/db/schema/signoffs';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
-import { addToolAs, post } from '../helpers/crib';
+import { addToolAs, patch, post } from '../helpers/crib';
 
 let t: TestApp;
 let qm: SignedInAgent;
@@ -50,6 +50,61 @@ describe('POST /api/tools', () => {
     const res = await member.agent.get('/api/tools/T-0001');
     // ASME B94.11M: #40 = 0.0980 in.
     expect(res.body.drillSize).toEqual({ name: '#40', inch: 0.098, mm: 2.489 });
+  });
+});
+
+describe('countersink cutters and dimple dies: the rivet size they are for', () => {
+  const paths = (res: { body: { error: { issues: { path: string }[] } } }) => res.body.error.issues.map((i) => i.path).sort();
+
+  it('needs the rivet size for both, and the pilot drill for a cutter, naming each missing field', async () => {
+    const cutter = await post(qm, '/api/tools', { name: 'Countersink cutter', category: 'countersink_cutter' });
+    expect(cutter.status).toBe(400);
+    expect(cutter.headers['content-type']).toMatch(/json/);
+    expect(cutter.body.error.code).toBe('VALIDATION_FAILED');
+    expect(paths(cutter)).toEqual(['drillSize', 'rivetDiameter32']);
+    const dies = await post(qm, '/api/tools', { name: 'Dimple dies', category: 'dimple_dies' });
+    expect(dies.status).toBe(400);
+    expect(paths(dies)).toEqual(['rivetDiameter32']);
+    expect(dies.body.error.issues[0].message).toMatch(/rivet size/i);
+  });
+
+  it('refuses a rivet size that is not one of 3/32 to 1/4 in, and a rivet size on any other kind of tool', async () => {
+    const odd = await post(qm, '/api/tools', { name: 'Dimple dies', category: 'dimple_dies', rivetDiameter32: 7 });
+    expect(odd.status).toBe(400);
+    expect(paths(odd)).toEqual(['rivetDiameter32']);
+    const onABit = await post(qm, '/api/tools', { name: 'Drill bit #30', category: 'drill_bit', drillSize: '#30', rivetDiameter32: 4 });
+    expect(onABit.status).toBe(400);
+    expect(paths(onABit)).toEqual(['rivetDiameter32']);
+    expect(onABit.body.error.issues[0].message).toMatch(/only countersink cutters and dimple dies/i);
+  });
+
+  it('stores a cutter with its rivet size and pilot, and dies with their rivet size, and shows them on the tool', async () => {
+    const cutter = await addTool({ name: '100° countersink cutter, 1/8 in', category: 'countersink_cutter', rivetDiameter32: 4, drillSize: '30' });
+    const dies = await addTool({ name: '100° dimple dies, 3/32 in', category: 'dimple_dies', rivetDiameter32: 3 });
+    const c = await member.agent.get(`/api/tools/${cutter.code}`);
+    expect(c.status).toBe(200);
+    // ASME B94.11M: #30 = 0.1285 in.
+    expect(c.body).toMatchObject({ category: 'countersink_cutter', rivetDiameter32: 4, drillSize: { name: '#30', inch: 0.1285 } });
+    const d = await member.agent.get(`/api/tools/${dies.code}`);
+    expect(d.body).toMatchObject({ category: 'dimple_dies', rivetDiameter32: 3, drillSize: null });
+    const other = await addTool({ name: 'Rivet spacing fan', category: 'spacing_fan' });
+    expect((await member.agent.get(`/api/tools/${other.code}`)).body.rivetDiameter32).toBeNull();
+  });
+
+  it('checks an edit against the whole tool: clearing the size or moving it to another kind with its size answers 400', async () => {
+    const dies = await addTool({ name: '100° dimple dies, 1/8 in', category: 'dimple_dies', rivetDiameter32: 4 });
+    const cleared = await patch(qm, `/api/tools/${dies.code}`, { rivetDiameter32: null });
+    expect(cleared.status).toBe(400);
+    expect(paths(cleared)).toEqual(['rivetDiameter32']);
+    const moved = await patch(qm, `/api/tools/${dies.code}`, { category: 'other' });
+    expect(moved.status).toBe(400);
+    expect(paths(moved)).toEqual(['rivetDiameter32']);
+    const both = await patch(qm, `/api/tools/${dies.code}`, { category: 'other', rivetDiameter32: null });
+    expect(both.status).toBe(200);
+    expect(both.body).toMatchObject({ category: 'other', rivetDiameter32: null });
+    const resized = await patch(qm, `/api/tools/${(await addTool({ name: 'Dies', category: 'dimple_dies', rivetDiameter32: 3 })).code}`, { rivetDiameter32: 5 });
+    expect(resized.status).toBe(200);
+    expect(resized.body.rivetDiameter32).toBe(5);
   });
 });
 

@@ -19,6 +19,13 @@ describe('tool cautions by category', () => {
     expect(keys(['pneumatic_rivet_puller'])).toEqual<ToolCautionKey[]>(['compressed_air', 'eye_protection', 'hearing_protection']);
   });
 
+  it('gives a countersink cutter the drilling and eye cautions, and dimple dies the eye and fingers-clear cautions', () => {
+    expect(keys(['countersink_cutter'])).toEqual<ToolCautionKey[]>(['drilling', 'eye_protection']);
+    expect(keys(['dimple_dies'])).toEqual<ToolCautionKey[]>(['dimple_dies', 'eye_protection']);
+    const text = Object.fromEntries(toolCautions(['dimple_dies']).map((c) => [c.key, c.text]));
+    expect(text.dimple_dies).toMatch(/fingers clear of the dies/i);
+  });
+
   it('gives hand tools that cannot hurt this way none', () => {
     for (const category of ['hand_rivet_puller', 'temporary_fastener_tray', 'deburring_tool', 'spacing_fan', 'torque_wrench', 'measuring', 'other'] as const) {
       expect(keys([category])).toEqual([]);
@@ -27,7 +34,7 @@ describe('tool cautions by category', () => {
 
   it('names each caution once for many tools, in one fixed order whatever order the tools come in', () => {
     const all = keys([...TOOL_CATEGORIES]);
-    expect(all).toEqual<ToolCautionKey[]>(['drilling', 'compressed_air', 'rivet_gun', 'eye_protection', 'hearing_protection']);
+    expect(all).toEqual<ToolCautionKey[]>(['drilling', 'compressed_air', 'rivet_gun', 'dimple_dies', 'eye_protection', 'hearing_protection']);
     expect(keys(['drill_bit', 'rivet_gun', 'drill_bit'])).toEqual(keys(['rivet_gun', 'drill_bit']));
   });
 

@@ -1,6 +1,6 @@
 import { sql } from 'drizzle-orm';
 import { blob, check, index, integer, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
-import { TOOL_CATEGORIES, TOOL_STATUSES } from '@shared/tools/categories';
+import { RIVET_SIZED_CATEGORIES, TOOL_CATEGORIES, TOOL_STATUSES } from '@shared/tools/categories';
 import { signoffs } from './signoffs';
 import { users } from './users';
 
@@ -23,8 +23,10 @@ export const tools = sqliteTable(
     lastServiceAt: integer({ mode: 'timestamp_ms' }),
     status: text({ enum: TOOL_STATUSES }).notNull().default('available'),
     statusNote: text(),
-    /** Drill bits: the size name from the drill table ('#40', 'F', '1/8'). */
+    /** Drill bits: the size name from the drill table ('#40', 'F', '1/8'); countersink cutters: their pilot. */
     drillSize: text(),
+    /** Countersink cutters and dimple dies: the rivet diameter they are made for, in 32nds of an inch. */
+    rivetDiameter32: integer(),
     /** Temporary fastener trays: fastener size in inches and how many a full tray holds. */
     traySize: text(),
     trayCapacity: integer(),
@@ -43,6 +45,7 @@ export const tools = sqliteTable(
     check('tools_value_check', sql`${t.replacementValueCents} >= 0`),
     check('tools_loan_days_check', sql`${t.loanDays} is null or ${t.loanDays} between 1 and 365`),
     check('tools_tray_check', sql`${t.trayCapacity} is null or ${t.trayCapacity} > 0`),
+    check('tools_rivet_size_check', sql`(${t.rivetDiameter32} is not null) = (${t.category} in (${inList(RIVET_SIZED_CATEGORIES)})) and (${t.rivetDiameter32} is null or ${t.rivetDiameter32} between 1 and 16)`),
   ],
 );
 

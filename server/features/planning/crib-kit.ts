@@ -14,11 +14,12 @@ interface CribTool {
   category: ToolCategory;
   accessories: string[];
   drillSize: string | null;
+  rivetDiameter32: number | null;
   traySize: string | null;
   trayCapacity: number | null;
 }
 
-const KIT_CATEGORIES: ToolCategory[] = ['hand_rivet_puller', 'pneumatic_rivet_puller', 'rivet_gun', 'bucking_bar', 'drill_bit', 'temporary_fastener_tray', 'deburring_tool'];
+const KIT_CATEGORIES: ToolCategory[] = ['hand_rivet_puller', 'pneumatic_rivet_puller', 'rivet_gun', 'bucking_bar', 'drill_bit', 'countersink_cutter', 'dimple_dies', 'temporary_fastener_tray', 'deburring_tool'];
 
 /** The crib's tools that could join a kit (lost and retired ones never will); those set aside for `forUserId` say so. */
 function loadCrib(db: Executor, forUserId: number): CribTool[] {
@@ -31,7 +32,7 @@ function loadCrib(db: Executor, forUserId: number): CribTool[] {
       .map((h) => h.toolId),
   );
   return db
-    .select({ id: tools.id, code: tools.code, name: tools.name, status: tools.status, category: tools.category, accessories: tools.accessories, drillSize: tools.drillSize, traySize: tools.traySize, trayCapacity: tools.trayCapacity })
+    .select({ id: tools.id, code: tools.code, name: tools.name, status: tools.status, category: tools.category, accessories: tools.accessories, drillSize: tools.drillSize, rivetDiameter32: tools.rivetDiameter32, traySize: tools.traySize, trayCapacity: tools.trayCapacity })
     .from(tools)
     .where(and(inArray(tools.category, KIT_CATEGORIES), notInArray(tools.status, ['lost', 'retired'])))
     .all()
@@ -141,12 +142,12 @@ export function cribKit(db: Executor, result: EstimateResult, forUserId: number)
   for (const [step, holes] of Object.entries(result.totals.drillHoles)) {
     kit.push(pick('drill_bit', `Drill bit ${step}`, holes, of('drill_bit').filter((t) => t.drillSize === step)));
   }
-  // No crib category holds countersink cutters or dimple dies: they are listed, as "none in the crib", for the builder to bring.
+  // A cutter is made for one rivet size and turns on a pilot that fits the line's final hole; dies for one rivet size.
   for (const f of result.flushTools) {
     kit.push(
       f.prep === 'countersink'
-        ? pick('countersink_cutter', `100° countersink cutter, ${inchFraction(f.diameter32, 32)} in, ${f.pilot} pilot`, null, [])
-        : pick('dimple_dies', `100° dimple dies, ${inchFraction(f.diameter32, 32)} in`, null, []),
+        ? pick('countersink_cutter', `100° countersink cutter, ${inchFraction(f.diameter32, 32)} in, ${f.pilot} pilot`, null, of('countersink_cutter').filter((t) => t.rivetDiameter32 === f.diameter32 && t.drillSize === f.pilot))
+        : pick('dimple_dies', `100° dimple dies, ${inchFraction(f.diameter32, 32)} in`, null, of('dimple_dies').filter((t) => t.rivetDiameter32 === f.diameter32)),
     );
   }
   for (const [size, count] of Object.entries(result.totals.tempFasteners)) kit.push(...trays(crib, size, count));

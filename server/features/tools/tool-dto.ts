@@ -40,6 +40,7 @@ export function toTool(row: ToolRow, extras: ToolExtras): Tool {
     status: row.status,
     statusNote: row.statusNote,
     drillSize: drill ? { name: drill.name, inch: drill.inch, mm: drill.mm } : null,
+    rivetDiameter32: row.rivetDiameter32,
     traySize: (row.traySize as Tool['traySize']) ?? null,
     trayCapacity: row.trayCapacity,
     accessories: JSON.parse(row.accessories) as string[],

@@ -150,6 +150,7 @@ export function editTool(ctx: ServiceContext, actor: UserRow, code: string, chan
       category: merged.category,
       name: merged.name,
       drillSize: merged.drillSize,
+      rivetDiameter32: merged.rivetDiameter32,
       traySize: merged.traySize,
       trayCapacity: merged.trayCapacity,
     });

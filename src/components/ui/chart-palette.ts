@@ -15,6 +15,8 @@ const PALETTE = [
   '#6b4f8a', // plum
   '#c9b8e0', // lilac
   '#2f6f8f', // deep teal
+  '#e8d59e', // sand
+  '#9c4f2f', // rust
 ] as const;
 const OTHER = '#6b7d8a'; // steel
 

@@ -25,9 +25,8 @@ const ROLE_CATEGORIES: Record<KitItem['role'], ToolCategory> = {
   rivet_set: 'rivet_gun',
   bucking_bar: 'bucking_bar',
   drill_bit: 'drill_bit',
-  // A countersink cutter turns in a drill: the drilling cautions. Dimple dies are worked in a squeezer or a frame.
-  countersink_cutter: 'drill_bit',
-  dimple_dies: 'other',
+  countersink_cutter: 'countersink_cutter',
+  dimple_dies: 'dimple_dies',
   temporary_fastener_tray: 'temporary_fastener_tray',
   deburring_tool: 'deburring_tool',
 };

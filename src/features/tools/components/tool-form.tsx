@@ -2,10 +2,12 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import { z } from 'zod';
 import { ALL_DRILLS } from '@shared/drills/drill-sizes';
+import { diameterWords } from '@shared/estimate/length-words';
+import { ESTIMATE_DIAMETERS } from '@shared/estimate/rivet-rules';
 import type { CreateToolBody, Tool } from '@shared/schemas/tools';
 import { chapterDay, startOfDayNamed } from '@shared/time/chapter-time';
 import { HOUR_MS } from '@shared/time/durations';
-import { CATEGORY_LABELS, DEFAULT_LOAN_DAYS, TEMPORARY_FASTENER_SIZES, TOOL_CATEGORIES } from '@shared/tools/categories';
+import { CATEGORY_LABELS, DEFAULT_LOAN_DAYS, isRivetSized, TEMPORARY_FASTENER_SIZES, TOOL_CATEGORIES, type ToolCategory } from '@shared/tools/categories';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
@@ -32,6 +34,7 @@ const formSchema = z.object({
   serviceIntervalDays: optionalWhole('The service interval'),
   lastServiceAt: z.string(),
   drillSize: z.string().trim(),
+  rivetDiameter32: z.string(),
   traySize: z.string(),
   trayCapacity: optionalWhole('The tray capacity'),
   accessories: z.string(),
@@ -40,6 +43,9 @@ const formSchema = z.object({
 type FormValues = z.infer<typeof formSchema>;
 
 const toNumber = (s: string) => (s.trim() === '' ? null : Number(s));
+/** Drill bits record their size; a countersink cutter records its pilot in the same field. */
+const hasDrillSize = (c: ToolCategory) => c === 'drill_bit' || c === 'countersink_cutter';
+const RIVET_SIZE_OPTIONS = [{ value: '', label: 'Choose the rivet size' }, ...ESTIMATE_DIAMETERS.map((d) => ({ value: String(d), label: diameterWords(d) }))];
 
 function toBody(v: FormValues): CreateToolBody {
   return {
@@ -51,7 +57,8 @@ function toBody(v: FormValues): CreateToolBody {
     requiredSignoffId: v.requiredSignoffId ? Number(v.requiredSignoffId) : null,
     serviceIntervalDays: toNumber(v.serviceIntervalDays),
     lastServiceAt: v.lastServiceAt ? new Date(startOfDayNamed(v.lastServiceAt, chapterTimeZone()).getTime() + 12 * HOUR_MS).toISOString() : null,
-    drillSize: v.category === 'drill_bit' && v.drillSize ? v.drillSize : null,
+    drillSize: hasDrillSize(v.category) && v.drillSize ? v.drillSize : null,
+    rivetDiameter32: isRivetSized(v.category) ? toNumber(v.rivetDiameter32) : null,
     traySize: v.category === 'temporary_fastener_tray' && v.traySize ? (v.traySize as CreateToolBody['traySize']) : null,
     trayCapacity: v.category === 'temporary_fastener_tray' ? toNumber(v.trayCapacity) : null,
     accessories: v.accessories
@@ -73,6 +80,7 @@ function toForm(tool?: Tool): FormValues {
     serviceIntervalDays: tool?.serviceIntervalDays?.toString() ?? '',
     lastServiceAt: tool?.lastServiceAt ? chapterDay(new Date(tool.lastServiceAt), chapterTimeZone()) : '',
     drillSize: tool?.drillSize?.name ?? '',
+    rivetDiameter32: tool?.rivetDiameter32?.toString() ?? '',
     traySize: tool?.traySize ?? '',
     trayCapacity: tool?.trayCapacity?.toString() ?? '',
     accessories: tool?.accessories.join('\n') ?? '',
@@ -133,9 +141,19 @@ export function ToolForm({
         />
         <TextField label="Service or calibration every (days)" inputMode="numeric" error={errors.serviceIntervalDays?.message} {...form.register('serviceIntervalDays')} />
         <TextField label="Last serviced on" type="date" {...form.register('lastServiceAt')} />
-        {category === 'drill_bit' && (
+        {isRivetSized(category) && (
+          <SelectField label="For rivet size" options={RIVET_SIZE_OPTIONS} error={errors.rivetDiameter32?.message} {...form.register('rivetDiameter32')} />
+        )}
+        {hasDrillSize(category) && (
           <>
-            <TextField label="Drill size" list="drill-sizes" placeholder="#40" hint="Number (#1–#80), letter (A–Z) or fraction (1/8)." error={errors.drillSize?.message} {...form.register('drillSize')} />
+            <TextField
+              label={category === 'drill_bit' ? 'Drill size' : 'Pilot'}
+              list="drill-sizes"
+              placeholder={category === 'drill_bit' ? '#40' : '#30'}
+              hint={category === 'drill_bit' ? 'Number (#1–#80), letter (A–Z) or fraction (1/8).' : 'The drill size the pilot fits, like #30 for 1/8 in rivets.'}
+              error={errors.drillSize?.message}
+              {...form.register('drillSize')}
+            />
             <datalist id="drill-sizes">
               {ALL_DRILLS.map((d) => (
                 <option key={d.name} value={d.name}>{`${d.inch.toFixed(4)} in`}</option>

@@ -1,3 +1,4 @@
+import { diameterWords } from '@shared/estimate/length-words';
 import { CATEGORY_LABELS, POWERED_CATEGORIES } from '@shared/tools/categories';
 import type { Tool } from '@shared/schemas/tools';
 import { Notice } from '@/components/ui/notice';
@@ -22,9 +23,17 @@ export function ToolSummary({ tool }: { tool: Tool }) {
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1.5">
         <dt className="text-steel">Lives at</dt>
         <dd className="font-medium">{tool.location || 'not set'}</dd>
+        {tool.rivetDiameter32 !== null && (
+          <>
+            <dt className="text-steel">For rivet size</dt>
+            <dd>
+              <Code>{diameterWords(tool.rivetDiameter32)}</Code>
+            </dd>
+          </>
+        )}
         {tool.drillSize && (
           <>
-            <dt className="text-steel">Drill size</dt>
+            <dt className="text-steel">{tool.category === 'countersink_cutter' ? 'Pilot' : 'Drill size'}</dt>
             <dd>
               <Code>{tool.drillSize.name}</Code> · <Code>{tool.drillSize.inch.toFixed(4)} in</Code> · <Code>{tool.drillSize.mm.toFixed(3)} mm</Code>
             </dd>

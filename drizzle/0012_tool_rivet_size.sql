@@ -1,0 +1,1 @@
+ALTER TABLE `tools` ADD `rivet_diameter32` integer;

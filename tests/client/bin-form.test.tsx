@@ -42,6 +42,16 @@ describe('BinForm', () => {
     expect(screen.getByText(/General-purpose \(soft\) blind rivets are not for structure/)).toBeTruthy();
   });
 
+  it('offers the usual final drill of the chosen blind rivet as the hole drill example, not one fixed drill', async () => {
+    renderForm();
+    const holeDrill = () => screen.getByLabelText("Hole drill, if the maker's differs").getAttribute('placeholder');
+    // Blind rivet holes (TM 10-5410-221-14/1 Table 4-3): 3/32 in #40 (common practice inside 0.096–0.100 in), 5/32 in #20.
+    await userEvent.selectOptions(screen.getByLabelText('Diameter'), '3/32 in (−3)');
+    expect(holeDrill()).toBe('#40');
+    await userEvent.selectOptions(screen.getByLabelText('Diameter'), '5/32 in (−5)');
+    expect(holeDrill()).toBe('#20');
+  });
+
   it('for a solid rivet asks for length in 16ths shown in inches and previews the MS number', async () => {
     const onSubmit = renderForm();
     await userEvent.selectOptions(screen.getByLabelText('Kind'), 'solid_rivet');

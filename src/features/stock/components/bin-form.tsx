@@ -3,6 +3,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch, type Resolver } from 'react-hook-form';
 import { z } from 'zod';
 import { ALL_DRILLS } from '@shared/drills/drill-sizes';
+import { FINAL_DRILL } from '@shared/estimate/rivet-rules';
 import { binKindRules, createBinBodySchema, type BinFields } from '@shared/schemas/bins';
 import { BLIND_GRIP_RANGES, blindGripRange, fastenerDesignation } from '@shared/stock/fasteners';
 import { BIN_KIND_LABELS, BIN_KINDS, isBlindKind, isRivetKind, RIVET_MATERIALS, rivetHeadChoices, STEM_MATERIALS } from '@shared/stock/kinds';
@@ -201,7 +202,7 @@ export function BinForm({ bin, submitLabel, onSubmit }: { bin?: BinFields; submi
                 </fieldset>
               )}
               {blind && (
-                <TextField label="Hole drill, if the maker's differs" list={drillListId} placeholder="#30" error={errors.holeDrill?.message} {...form.register('holeDrill', { setValueAs: asNullable })} />
+                <TextField label="Hole drill, if the maker's differs" list={drillListId} placeholder={FINAL_DRILL.blind[Number(diameter32)] ?? '#30'} error={errors.holeDrill?.message} {...form.register('holeDrill', { setValueAs: asNullable })} />
               )}
             </>
           )}

@@ -3,6 +3,7 @@ import { MIN_ONLINE_PAYMENT_CENTS, type CheckoutBody, type CheckoutResponse } fr
 import { centsWords } from '@shared/stock/money';
 import { findUserById } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
+import type { Executor } from '../../db/client';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import type { Logger } from '../../lib/logger';
@@ -10,8 +11,13 @@ import { paymentReceiptMail } from '../../mail/messages';
 import { queueMail } from '../../mail/outbox';
 import type { PaymentsSetup } from '../../payments/payments-client';
 import { readPaymentCurrency } from '../../settings/payment-currency';
-import { recordOnlinePayment, tabBalanceCents } from '../stock/money.service';
 import { closeOnlinePayment, insertOnlinePayment, onlinePaymentBySession } from './payments.repo';
+
+/** The stock feature's tab, handed in by the app: what a member owes, and recording a payment on it. */
+export interface TabLedger {
+  balanceCents(db: Executor, userId: number): number;
+  recordPayment(db: Executor, member: UserRow, amountCents: number, at: Date, note: string): number;
+}
 
 /** The page a member comes back to from the hosted checkout. */
 const myTabUrl = (ctx: ServiceContext, outcome: 'paid' | 'cancelled') => `${ctx.publicUrl}/tab?payment=${outcome}`;
@@ -35,8 +41,8 @@ function amountToPay(balanceCents: number, asked: number | undefined): number {
  * Opens a hosted checkout for the signed-in member's own tab (the whole balance unless a smaller
  * amount is asked) and returns the provider's page to send them to.
  */
-export async function startCheckout(ctx: ServiceContext, setup: PaymentsSetup, member: UserRow, body: CheckoutBody): Promise<CheckoutResponse> {
-  const amountCents = amountToPay(tabBalanceCents(ctx.db, member.id), body.amountCents);
+export async function startCheckout(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, member: UserRow, body: CheckoutBody): Promise<CheckoutResponse> {
+  const amountCents = amountToPay(tab.balanceCents(ctx.db, member.id), body.amountCents);
   const currency = readPaymentCurrency(ctx.db);
   const session = await setup.provider.checkout.sessions.create({
     mode: 'payment',
@@ -67,7 +73,7 @@ function verifiedEvent(setup: PaymentsSetup, rawBody: Buffer, signature: string 
  * A checkout already closed (the same event again, or a second completion) changes nothing; an
  * amount or currency that differs from the checkout Gripline opened is refused and logged.
  */
-function settleCheckout(ctx: ServiceContext, logger: Logger, eventId: string, session: Stripe.Checkout.Session): void {
+function settleCheckout(ctx: ServiceContext, tab: TabLedger, logger: Logger, eventId: string, session: Stripe.Checkout.Session): void {
   ctx.db.transaction((tx) => {
     const row = onlinePaymentBySession(tx, session.id);
     if (!row) {
@@ -85,14 +91,14 @@ function settleCheckout(ctx: ServiceContext, logger: Logger, eventId: string, se
       return;
     }
     const member = findUserById(tx, row.userId)!;
-    const memberPaymentId = recordOnlinePayment(tx, member, row.amountCents, now, 'Paid online');
+    const memberPaymentId = tab.recordPayment(tx, member, row.amountCents, now, 'Paid online');
     if (!closeOnlinePayment(tx, row.id, { state: 'paid', eventId, memberPaymentId, updatedAt: now })) throw new Error(`checkout ${row.id} closed twice`);
-    queueMail(tx, paymentReceiptMail(member.email, member.name, row.amountCents, tabBalanceCents(tx, member.id), myTabUrl(ctx, 'paid').replace(/\?.*$/, '')), now);
+    queueMail(tx, paymentReceiptMail(member.email, member.name, row.amountCents, tab.balanceCents(tx, member.id), myTabUrl(ctx, 'paid').replace(/\?.*$/, '')), now);
   });
 }
 
 /** The provider's webhook: verified first, then a completed checkout is settled; other events are acknowledged. */
-export function receiveProviderEvent(ctx: ServiceContext, setup: PaymentsSetup, logger: Logger, rawBody: Buffer, signature: string | string[] | undefined): void {
+export function receiveProviderEvent(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, logger: Logger, rawBody: Buffer, signature: string | string[] | undefined): void {
   const event = verifiedEvent(setup, rawBody, signature);
-  if (event.type === 'checkout.session.completed') settleCheckout(ctx, logger, event.id, event.data.object);
+  if (event.type === 'checkout.session.completed') settleCheckout(ctx, tab, logger, event.id, event.data.object);
 }

@@ -1,5 +1,6 @@
 import { randomBytes } from 'node:crypto';
-import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
+import { createServer, request as httpRequest, type IncomingMessage, type ServerResponse } from 'node:http';
+import { request as httpsRequest } from 'node:https';
 import type { AddressInfo } from 'node:net';
 import Stripe from 'stripe';
 import { centsWords } from '@shared/stock/money';
@@ -66,6 +67,28 @@ function nested(form: URLSearchParams, prefix: string): Record<string, string> {
     if (match) out[match[1]!] = value;
   }
   return out;
+}
+
+/**
+ * Posts a webhook and waits for the answer. Over HTTPS the certificate is not checked: the target is
+ * Gripline's own loopback listener (often on a self-signed or LAN certificate), and the signature, not
+ * the connection, is what Gripline trusts.
+ */
+function postWebhook(url: string, payload: string, signature: string): Promise<number> {
+  const target = new URL(url);
+  const send = target.protocol === 'https:' ? httpsRequest : httpRequest;
+  return new Promise((resolve, reject) => {
+    const req = send(
+      target,
+      { method: 'POST', rejectUnauthorized: false, headers: { 'content-type': 'application/json', 'content-length': Buffer.byteLength(payload), 'stripe-signature': signature } },
+      (res) => {
+        res.resume();
+        res.on('end', () => resolve(res.statusCode ?? 0));
+      },
+    );
+    req.on('error', reject);
+    req.end(payload);
+  });
 }
 
 const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
@@ -141,7 +164,7 @@ export async function startFakeProvider(options: FakeProviderOptions): Promise<F
     };
     const payload = JSON.stringify(event);
     const signature = signer.webhooks.generateTestHeaderString({ payload, secret: webhookSecret });
-    await fetch(options.webhookUrl, { method: 'POST', headers: { 'content-type': 'application/json', 'stripe-signature': signature }, body: payload });
+    await postWebhook(options.webhookUrl, payload, signature);
   }
 
   async function answerPage(req: IncomingMessage, res: ServerResponse, session: FakeSession) {

@@ -2,7 +2,13 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import type { AddressInfo } from 'node:net';
+import type Stripe from 'stripe';
 import { readEnv } from '../../server/env';
+import { ensureLanCertificate } from '../../server/lan/lan-certificate';
+import { startFakeProvider } from '../../server/payments/fake-provider';
+import { createPaymentsSetup } from '../../server/payments/payments-client';
+import { createTlsServer } from '../../server/tls';
 import { startGripline } from '../../server/main';
 import { DEMO_PASSWORD } from '../../server/seed/demo-chapter';
 import { signIn, type Member } from '../helpers/http-sign-in';
@@ -48,5 +54,55 @@ describe('Gripline started without a payment key', () => {
   it('refuses a real key without its webhook secret, naming the setting', () => {
     expect(() => readEnv({ PAYMENTS_SECRET_KEY: 'sk_live_x' })).toThrow(/PAYMENTS_WEBHOOK_SECRET: not set/);
     expect(readEnv({ PAYMENTS_SECRET_KEY: 'sk_live_x', PAYMENTS_WEBHOOK_SECRET: 'whsec_x' }).PAYMENTS_SECRET_KEY).toBe('sk_live_x');
+  });
+});
+
+describe('the fake provider', () => {
+  it('delivers its signed completion to a Gripline serving HTTPS on its own certificate', async () => {
+    const lan = await ensureLanCertificate({ dir, hostNames: ['localhost'], ipv4: ['127.0.0.1'] });
+    const received: { body: string; signature: string }[] = [];
+    const server = createTlsServer(lan);
+    server.on('request', (req, res) => {
+      let body = '';
+      req.on('data', (chunk: Buffer) => (body += chunk.toString('utf8')));
+      req.on('end', () => {
+        received.push({ body, signature: String(req.headers['stripe-signature']) });
+        res.end('{}');
+      });
+    });
+    await new Promise<void>((ok) => server.listen(0, '127.0.0.1', () => ok()));
+    const fake = await startFakeProvider({ webhookUrl: `https://127.0.0.1:${(server.address() as AddressInfo).port}/api/payments/webhook` });
+    try {
+      const { provider, webhookSecret } = createPaymentsSetup({ secretKey: fake.secretKey, webhookSecret: fake.webhookSecret, fake });
+      const session = await provider.checkout.sessions.create({
+        mode: 'payment',
+        line_items: [{ quantity: 1, price_data: { currency: 'usd', unit_amount: 1240, product_data: { name: 'Consumables tab' } } }],
+        success_url: 'https://127.0.0.1/tab?payment=paid',
+        cancel_url: 'https://127.0.0.1/tab?payment=cancelled',
+      });
+      expect(await (await fetch(session.url!)).text()).toContain('<h1>Pay $12.40 to the chapter</h1>');
+      const paid = await fetch(session.url!, { method: 'POST', body: new URLSearchParams({ choice: 'pay' }), redirect: 'manual' });
+      expect(paid.headers.get('location')).toBe('https://127.0.0.1/tab?payment=paid');
+
+      expect(received).toHaveLength(1);
+      const event = provider.webhooks.constructEvent(received[0]!.body, received[0]!.signature, webhookSecret);
+      expect(event.type).toBe('checkout.session.completed');
+      const completed = event.data.object as Stripe.Checkout.Session;
+      expect(completed).toMatchObject({ id: session.id, amount_total: 1240, payment_status: 'paid', status: 'complete' });
+      expect((await provider.checkout.sessions.retrieve(session.id)).status).toBe('complete');
+    } finally {
+      await fake.close();
+      await new Promise<void>((ok) => server.close(() => ok()));
+    }
+  });
+
+  it('refuses an SDK call made with another key, as the provider would', async () => {
+    const fake = await startFakeProvider({ webhookUrl: 'http://127.0.0.1:9/unused' });
+    try {
+      const { provider } = createPaymentsSetup({ secretKey: 'sk_test_someone_else', webhookSecret: fake.webhookSecret, fake });
+      await expect(provider.checkout.sessions.retrieve('cs_test_x')).rejects.toThrow(/Invalid API Key/);
+    } finally {
+      await fake.close();
+    }
   });
 });

@@ -206,3 +206,14 @@ describe('the hosted page and the signed webhook', () => {
     expect(t.db.select().from(onlinePayments).all()).toMatchObject([{ state: 'refused', eventId: 'evt_test_short' }]);
   });
 });
+
+describe('when the provider cannot be reached', () => {
+  it('answers 502 with a message, and opens no checkout', async () => {
+    await drawOnTab(member, 120);
+    await fake.close();
+    const res = await post(member, '/api/payments/checkout', {});
+    expect(res.status).toBe(502);
+    expect(res.body.error).toMatchObject({ code: 'PROVIDER_UNAVAILABLE', message: 'The payment provider could not be reached. Try again in a minute, or pay the quartermaster in cash.' });
+    expect(t.db.select().from(onlinePayments).all()).toEqual([]);
+  });
+});

@@ -1,4 +1,4 @@
-import type Stripe from 'stripe';
+import Stripe from 'stripe';
 import { MIN_ONLINE_PAYMENT_CENTS, type CheckoutBody, type CheckoutResponse } from '@shared/schemas/payments';
 import { centsWords } from '@shared/stock/money';
 import { findUserById } from '../../accounts/users.repo';
@@ -37,6 +37,18 @@ function amountToPay(balanceCents: number, asked: number | undefined): number {
   return amount;
 }
 
+/** The provider down or unreachable is the chapter's problem to retry, not a fault in Gripline. */
+async function openHostedCheckout(setup: PaymentsSetup, params: Stripe.Checkout.SessionCreateParams): Promise<Stripe.Checkout.Session> {
+  try {
+    return await setup.provider.checkout.sessions.create(params);
+  } catch (err) {
+    if (err instanceof Stripe.errors.StripeConnectionError || err instanceof Stripe.errors.StripeAPIError) {
+      throw new HttpError(502, 'PROVIDER_UNAVAILABLE', 'The payment provider could not be reached. Try again in a minute, or pay the quartermaster in cash.');
+    }
+    throw err;
+  }
+}
+
 /**
  * Opens a hosted checkout for the signed-in member's own tab (the whole balance unless a smaller
  * amount is asked) and returns the provider's page to send them to.
@@ -44,7 +56,7 @@ function amountToPay(balanceCents: number, asked: number | undefined): number {
 export async function startCheckout(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, member: UserRow, body: CheckoutBody): Promise<CheckoutResponse> {
   const amountCents = amountToPay(tab.balanceCents(ctx.db, member.id), body.amountCents);
   const currency = readPaymentCurrency(ctx.db);
-  const session = await setup.provider.checkout.sessions.create({
+  const session = await openHostedCheckout(setup, {
     mode: 'payment',
     line_items: [{ quantity: 1, price_data: { currency, unit_amount: amountCents, product_data: { name: 'Consumables tab' } } }],
     customer_email: member.email,

@@ -1,5 +1,6 @@
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { pino } from 'pino';
 import request from 'supertest';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { checkoutResponseSchema } from '@shared/schemas/payments';
@@ -20,6 +21,8 @@ let t: TestApp;
 let crew: Crew;
 let qm: SignedInAgent;
 let member: SignedInAgent;
+/** What the app logged at warn and above, one JSON line each. */
+let logged: string[];
 
 /** The app listens for real: the fake provider sends its webhook to it over loopback, as in production. */
 beforeEach(async () => {
@@ -28,7 +31,8 @@ beforeEach(async () => {
   const { port } = server.address() as AddressInfo;
   fake = await startFakeProvider({ webhookUrl: `http://127.0.0.1:${port}/api/payments/webhook` });
   setup = createPaymentsSetup({ secretKey: fake.secretKey, webhookSecret: fake.webhookSecret, fake });
-  t = await buildTestApp({ payments: setup });
+  logged = [];
+  t = await buildTestApp({ payments: setup, logger: pino({ level: 'warn' }, { write: (line: string) => logged.push(line) }) });
   server.on('request', t.app);
   crew = await t.addCrew();
   qm = await t.signIn('qm@example.org');
@@ -136,6 +140,22 @@ describe('POST /api/payments/checkout', () => {
     expect(t.db.select().from(onlinePayments).all()).toEqual([]);
   });
 
+  it('answers 400 when the member has paid ahead', async () => {
+    await drawOnTab(member, 10);
+    expect((await post(qm, '/api/stock/payments', { userId: crew.member.id, amountCents: 500 })).status).toBe(201);
+    expect(await balanceOf(member)).toBe(10 * 12 - 500);
+    const res = await post(member, '/api/payments/checkout', { amountCents: 50 });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('NOTHING_OWED');
+  });
+
+  it('answers 400 when the balance is under the online minimum', async () => {
+    await drawOnTab(member, 3);
+    const res = await post(member, '/api/payments/checkout', {});
+    expect(res.status).toBe(400);
+    expect(res.body.error).toMatchObject({ code: 'BELOW_MINIMUM', message: 'Your tab is $0.36, under the $0.50 online minimum. Pay it in cash to the quartermaster.' });
+  });
+
   it('answers 401 when signed out', async () => {
     const anon = await t.anonymous();
     expect((await post(anon, '/api/payments/checkout', {})).status).toBe(401);
@@ -204,6 +224,10 @@ describe('the hosted page and the signed webhook', () => {
     expect(paymentCount()).toBe(0);
     expect(await balanceOf(member)).toBe(TAB_CENTS);
     expect(t.db.select().from(onlinePayments).all()).toMatchObject([{ state: 'refused', eventId: 'evt_test_short' }]);
+    const warning = logged.map((l) => JSON.parse(l) as Record<string, unknown>).find((l) => l.msg === 'an online payment was refused: its amount does not match the checkout');
+    expect(warning).toMatchObject({ eventId: 'evt_test_short', userId: crew.member.id, expected: { amountCents: TAB_CENTS }, received: { amountCents: 100 } });
+    expect(logged.join('')).not.toContain(fake.webhookSecret);
+    expect(logged.join('')).not.toContain(fake.secretKey);
   });
 });
 

@@ -21,6 +21,8 @@ import { forecastRouter, planningSettingsRouter, wasteRouter } from './features/
 import { endHoldsOfPerson, placeHold } from './features/tools/holds.service';
 import { binCsvRouter, binImportBodyParsers } from './features/stock/stock-csv.router';
 import { stockMoneyRouter } from './features/stock/money.router';
+import { recordOnlinePayment, tabBalanceCents } from './features/stock/money.service';
+import { paymentsRouter, paymentsWebhookRouter } from './features/payments/payments.router';
 import { mailRouter } from './features/mail/mail.router';
 import { passwordResetRouter } from './features/password-reset/password-reset.router';
 import { peopleRouter } from './features/people/people.router';
@@ -83,6 +85,11 @@ export function createApp(config: AppConfig) {
   };
   const { middleware: session, store } = sessionMiddleware(config);
 
+  // Tabs belong to stock: the app hands the payments feature the way to read and settle one.
+  const tab = { balanceCents: tabBalanceCents, recordPayment: recordOnlinePayment };
+  // The provider's webhook reads its raw body and carries no session: it goes ahead of the API stack.
+  app.use('/api/payments/webhook', noStore, paymentsWebhookRouter(ctx, config.payments, tab));
+
   const api = express.Router();
   api.use(noStore);
   api.use(compressJson());
@@ -118,6 +125,7 @@ export function createApp(config: AppConfig) {
   api.use('/bins', binCsvRouter({ nameAssemblies: assemblyNames }));
   api.use('/bins', binsRouter({ runQueuedAction, nameAssemblies: assemblyNames, reordersOf: binReorders }));
   api.use('/stock', stockMoneyRouter({ nameAssemblies: assemblyNames }));
+  api.use('/payments', paymentsRouter(config.payments, tab));
   api.use('/estimate', estimateRouter());
   api.use('/builds', buildsRouter());
   // Holds belong to the crib: the app hands its rule to the planning feature.

@@ -1,6 +1,7 @@
 import type { Logger } from './lib/logger';
 import type { Database } from './db/client';
 import type { CertificateDownload } from './lan/certificate.router';
+import type { PaymentsSetup } from './payments/payments-client';
 
 export interface RateLimitConfig {
   /** Window for counting failed sign-ins. */
@@ -31,5 +32,7 @@ export interface AppConfig {
   clientDir?: string;
   /** The certificate Gripline made for itself (npm run start:lan), offered at /certificate. */
   certificateDownload?: CertificateDownload;
+  /** The payment provider's SDK client and webhook secret; unset: online payment is off. */
+  payments?: PaymentsSetup;
   now?: () => Date;
 }

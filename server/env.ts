@@ -18,7 +18,14 @@ const envSchema = z.object({
   SEED_DEMO: z.stringbool().default(true),
   TLS_CERT_FILE: z.string().min(1).optional(),
   TLS_KEY_FILE: z.string().min(1).optional(),
+  /** The payment provider's secret API key; unset: the local fake provider is started instead. */
+  PAYMENTS_SECRET_KEY: z.string().min(1).optional(),
+  /** The secret the provider signs webhooks with; required with a real key. */
+  PAYMENTS_WEBHOOK_SECRET: z.string().min(1).optional(),
 }).superRefine((env, ctx) => {
+  if (env.PAYMENTS_SECRET_KEY !== undefined && env.PAYMENTS_WEBHOOK_SECRET === undefined) {
+    ctx.addIssue({ code: 'custom', path: ['PAYMENTS_WEBHOOK_SECRET'], message: 'not set; a real PAYMENTS_SECRET_KEY needs the webhook signing secret of the endpoint /api/payments/webhook.' });
+  }
   if ((env.TLS_CERT_FILE === undefined) === (env.TLS_KEY_FILE === undefined)) return;
   const missing = env.TLS_CERT_FILE === undefined ? 'TLS_CERT_FILE' : 'TLS_KEY_FILE';
   ctx.addIssue({

@@ -14,6 +14,8 @@ import { sweepIdempotencyKeys } from './features/idempotency/idempotency.service
 import { createLogger } from './lib/logger';
 import { startMailCatcher, type MailCatcher } from './mail/mail-catcher';
 import { createSmtpMailer } from './mail/mailer';
+import { startFakeProvider, type FakeProvider } from './payments/fake-provider';
+import { createPaymentsSetup } from './payments/payments-client';
 import { startOutboxWorker } from './mail/outbox-worker';
 import { seedDemoChapter } from './seed/demo-chapter';
 import { resolveSessionSecret } from './session-secret';
@@ -57,6 +59,14 @@ export async function startGripline(env: Env, options: StartOptions = {}): Promi
   });
   const { port } = server.address() as AddressInfo;
   const url = `${tls ? 'https' : 'http'}://${options.urlHost ?? 'localhost'}:${port}`;
+  // Without a real key the local fake provider takes the payments, and sends its webhooks here over loopback.
+  let fakeProvider: FakeProvider | undefined;
+  if (!env.PAYMENTS_SECRET_KEY) fakeProvider = await startFakeProvider({ webhookUrl: `${tls ? 'https' : 'http'}://127.0.0.1:${port}/api/payments/webhook` });
+  const payments = createPaymentsSetup(
+    fakeProvider
+      ? { secretKey: fakeProvider.secretKey, webhookSecret: fakeProvider.webhookSecret, fake: fakeProvider }
+      : { secretKey: env.PAYMENTS_SECRET_KEY!, webhookSecret: env.PAYMENTS_WEBHOOK_SECRET! },
+  );
   const app = createApp({
     db,
     sessionSecret: resolveSessionSecret(env.SESSION_SECRET, env.DATABASE_PATH),
@@ -68,6 +78,7 @@ export async function startGripline(env: Env, options: StartOptions = {}): Promi
     rateLimit: { windowMs: 15 * 60_000, perIp: 50, perAccount: 10 },
     trustProxyHops: env.TRUST_PROXY_HOPS,
     clientDir: CLIENT_DIR,
+    payments,
     certificateDownload: options.lanCertificate && { pem: options.lanCertificate.authority, fileName: options.lanCertificate.fileName },
   });
   server.on('request', app);
@@ -76,7 +87,7 @@ export async function startGripline(env: Env, options: StartOptions = {}): Promi
   const scheduler = startCribScheduler(jobContext, logger, [{ name: 'sweep-idempotency-keys', run: () => sweepIdempotencyKeys(jobContext) }]);
   const planningScheduler = startPlanningScheduler(jobContext, logger);
   const backupScheduler = env.DATABASE_PATH === ':memory:' ? undefined : startBackupScheduler(db.$client, backupDirFor(env), logger);
-  logger.info({ url, mail: catcher ? 'caught locally' : 'SMTP_URL' }, 'Gripline is listening');
+  logger.info({ url, mail: catcher ? 'caught locally' : 'SMTP_URL', payments: fakeProvider ? 'local fake provider' : 'PAYMENTS_SECRET_KEY' }, 'Gripline is listening');
 
   return {
     url,
@@ -93,6 +104,7 @@ export async function startGripline(env: Env, options: StartOptions = {}): Promi
       app.sessionStore.close();
       mailer.close();
       await catcher?.close();
+      await fakeProvider?.close();
       db.$client.close();
     },
   };

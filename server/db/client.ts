@@ -10,6 +10,7 @@ import * as builds from './schema/builds';
 import * as cribJobs from './schema/crib-jobs';
 import * as idempotency from './schema/idempotency';
 import * as mail from './schema/mail';
+import * as payments from './schema/payments';
 import * as sessions from './schema/sessions';
 import * as signoffRequests from './schema/signoff-requests';
 import * as signoffs from './schema/signoffs';
@@ -17,7 +18,7 @@ import * as stock from './schema/stock';
 import * as tools from './schema/tools';
 import * as users from './schema/users';
 
-export const schema = { ...users, ...accountTokens, ...sessions, ...mail, ...signoffs, ...tools, ...signoffRequests, ...cribJobs, ...stock, ...builds, ...idempotency };
+export const schema = { ...users, ...accountTokens, ...sessions, ...mail, ...signoffs, ...tools, ...signoffRequests, ...cribJobs, ...stock, ...builds, ...idempotency, ...payments };
 export type Database = BetterSQLite3Database<typeof schema> & { $client: BetterSqlite3.Database };
 /** The database or a transaction on it: what repositories take. */
 export type Executor = BaseSQLiteDatabase<'sync', BetterSqlite3.RunResult, typeof schema>;

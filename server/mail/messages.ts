@@ -167,3 +167,20 @@ export function signoffAnswerMail(
     ].join('\n'),
   };
 }
+
+/** The receipt for a tab payment made online; `balanceCents` is what is still owed after it. */
+export function paymentReceiptMail(to: string, name: string, amountCents: number, balanceCents: number, link: string): OutgoingMail {
+  return {
+    to,
+    subject: `Payment received: ${centsWords(amountCents)} on your tab`,
+    text: [
+      `Hello ${name},`,
+      ``,
+      `The chapter received your online payment of ${centsWords(amountCents)} for your consumables tab.`,
+      balanceCents > 0 ? `You still owe ${centsWords(balanceCents)}.` : `Your tab is settled.`,
+      ``,
+      `See your tab:`,
+      link,
+    ].join('\n'),
+  };
+}

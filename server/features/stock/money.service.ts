@@ -3,6 +3,7 @@ import type { Payment, RecordPaymentBody, Spend, SpendMonth, Tab, TabEntry, TabS
 import { BIN_KINDS, type BinKind } from '@shared/stock/kinds';
 import { findUserById } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
+import type { Executor } from '../../db/client';
 import type { MovementRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
@@ -119,6 +120,17 @@ export function recordPayment(ctx: ServiceContext, actor: UserRow, body: RecordP
   const member = userOrThrow(ctx, body.userId, 400);
   const row = insertPayment(ctx.db, { userId: member.id, amountCents: body.amountCents, at: ctx.now(), note: body.note ?? '', recordedById: actor.id });
   return paymentDto(paymentById(ctx.db, row.id)!);
+}
+
+/** What a member still owes: everything drawn onto the tab less everything paid (negative when paid ahead). */
+export function tabBalanceCents(db: Executor, userId: number): number {
+  const charged = tabEntries(db, userId).reduce((sum, e) => sum + chargeOf(e.m), 0);
+  return charged - paymentsOf(db, userId).reduce((sum, p) => sum + p.p.amountCents, 0);
+}
+
+/** A payment the member made online comes off their tab like cash, recorded in their own name, in the caller's transaction. */
+export function recordOnlinePayment(db: Executor, member: UserRow, amountCents: number, at: Date, note: string): number {
+  return insertPayment(db, { userId: member.id, amountCents, at, note, recordedById: member.id }).id;
 }
 
 const noKinds = () => Object.fromEntries(BIN_KINDS.map((k) => [k, 0])) as Record<BinKind, number>;

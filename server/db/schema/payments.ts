@@ -1,0 +1,36 @@
+import { sql } from 'drizzle-orm';
+import { check, index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { memberPayments } from './stock';
+import { users } from './users';
+
+export const ONLINE_PAYMENT_STATES = ['open', 'paid', 'refused'] as const;
+export type OnlinePaymentState = (typeof ONLINE_PAYMENT_STATES)[number];
+
+/**
+ * A hosted checkout a member started to settle their tab. It becomes paid once, when the provider's
+ * signed completion arrives; the payment it made on the tab is `memberPaymentId`.
+ */
+export const onlinePayments = sqliteTable(
+  'online_payments',
+  {
+    id: integer().primaryKey({ autoIncrement: true }),
+    sessionId: text().notNull().unique(),
+    /** The provider's event that completed it; null while open. */
+    eventId: text().unique(),
+    userId: integer()
+      .notNull()
+      .references(() => users.id),
+    amountCents: integer().notNull(),
+    currency: text().notNull(),
+    state: text({ enum: ONLINE_PAYMENT_STATES }).notNull().default('open'),
+    memberPaymentId: integer().references(() => memberPayments.id),
+    createdAt: integer({ mode: 'timestamp_ms' }).notNull(),
+    updatedAt: integer({ mode: 'timestamp_ms' }).notNull(),
+  },
+  (t) => [
+    index('online_payments_user_idx').on(t.userId, t.createdAt),
+    check('online_payments_amount_check', sql`${t.amountCents} > 0`),
+    check('online_payments_state_check', sql`${t.state} in ('open', 'paid', 'refused')`),
+  ],
+);
+export type OnlinePaymentRow = typeof onlinePayments.$inferSelect;

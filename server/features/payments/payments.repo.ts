@@ -1,0 +1,24 @@
+import { and, eq } from 'drizzle-orm';
+import type { Executor } from '../../db/client';
+import { onlinePayments, type OnlinePaymentRow } from '../../db/schema/payments';
+
+export function insertOnlinePayment(db: Executor, values: typeof onlinePayments.$inferInsert): OnlinePaymentRow {
+  return db.insert(onlinePayments).values(values).returning().get();
+}
+
+export function onlinePaymentBySession(db: Executor, sessionId: string): OnlinePaymentRow | undefined {
+  return db.select().from(onlinePayments).where(eq(onlinePayments.sessionId, sessionId)).get();
+}
+
+/** Moves an open checkout to paid or refused, naming the event that did it; false when it was no longer open. */
+export function closeOnlinePayment(
+  db: Executor,
+  id: number,
+  changes: { state: 'paid' | 'refused'; eventId: string; memberPaymentId?: number; updatedAt: Date },
+): boolean {
+  return db
+    .update(onlinePayments)
+    .set(changes)
+    .where(and(eq(onlinePayments.id, id), eq(onlinePayments.state, 'open')))
+    .run().changes === 1;
+}

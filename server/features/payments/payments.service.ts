@@ -1,0 +1,116 @@
+import Stripe from 'stripe';
+import { MIN_ONLINE_PAYMENT_CENTS, type CheckoutBody, type CheckoutResponse } from '@shared/schemas/payments';
+import { centsWords } from '@shared/stock/money';
+import { findUserById } from '../../accounts/users.repo';
+import type { ServiceContext } from '../../context';
+import type { Executor } from '../../db/client';
+import type { UserRow } from '../../db/schema/users';
+import { HttpError } from '../../lib/http-error';
+import type { Logger } from '../../lib/logger';
+import { paymentReceiptMail } from '../../mail/messages';
+import { queueMail } from '../../mail/outbox';
+import type { PaymentsSetup } from '../../payments/payments-client';
+import { readPaymentCurrency } from '../../settings/payment-currency';
+import { closeOnlinePayment, insertOnlinePayment, onlinePaymentBySession } from './payments.repo';
+
+/** The stock feature's tab, handed in by the app: what a member owes, and recording a payment on it. */
+export interface TabLedger {
+  balanceCents(db: Executor, userId: number): number;
+  recordPayment(db: Executor, member: UserRow, amountCents: number, at: Date, note: string): number;
+}
+
+/** The page a member comes back to from the hosted checkout. */
+const myTabUrl = (ctx: ServiceContext, outcome: 'paid' | 'cancelled') => `${ctx.publicUrl}/tab?payment=${outcome}`;
+
+/** Ties a checkout to the member whose tab it settles. */
+export const memberReference = (userId: number) => `member-${userId}`;
+
+function amountToPay(balanceCents: number, asked: number | undefined): number {
+  if (balanceCents <= 0) throw new HttpError(400, 'NOTHING_OWED', 'Your tab is settled: there is nothing to pay.');
+  if (balanceCents < MIN_ONLINE_PAYMENT_CENTS) {
+    throw new HttpError(400, 'BELOW_MINIMUM', `Your tab is ${centsWords(balanceCents)}, under the ${centsWords(MIN_ONLINE_PAYMENT_CENTS)} online minimum. Pay it in cash to the quartermaster.`);
+  }
+  const amount = asked ?? balanceCents;
+  if (amount > balanceCents) {
+    throw new HttpError(400, 'ABOVE_BALANCE', `You owe ${centsWords(balanceCents)}; pay that much or less.`, [{ path: 'amountCents', message: `At most ${centsWords(balanceCents)}.` }]);
+  }
+  return amount;
+}
+
+/** The provider down or unreachable is the chapter's problem to retry, not a fault in Gripline. */
+async function openHostedCheckout(setup: PaymentsSetup, params: Stripe.Checkout.SessionCreateParams): Promise<Stripe.Checkout.Session> {
+  try {
+    return await setup.provider.checkout.sessions.create(params);
+  } catch (err) {
+    if (err instanceof Stripe.errors.StripeConnectionError || err instanceof Stripe.errors.StripeAPIError) {
+      throw new HttpError(502, 'PROVIDER_UNAVAILABLE', 'The payment provider could not be reached. Try again in a minute, or pay the quartermaster in cash.');
+    }
+    throw err;
+  }
+}
+
+/**
+ * Opens a hosted checkout for the signed-in member's own tab (the whole balance unless a smaller
+ * amount is asked) and returns the provider's page to send them to.
+ */
+export async function startCheckout(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, member: UserRow, body: CheckoutBody): Promise<CheckoutResponse> {
+  const amountCents = amountToPay(tab.balanceCents(ctx.db, member.id), body.amountCents);
+  const currency = readPaymentCurrency(ctx.db);
+  const session = await openHostedCheckout(setup, {
+    mode: 'payment',
+    line_items: [{ quantity: 1, price_data: { currency, unit_amount: amountCents, product_data: { name: 'Consumables tab' } } }],
+    customer_email: member.email,
+    client_reference_id: memberReference(member.id),
+    metadata: { userId: String(member.id) },
+    success_url: myTabUrl(ctx, 'paid'),
+    cancel_url: myTabUrl(ctx, 'cancelled'),
+  });
+  if (!session.url) throw new Error(`the provider returned checkout ${session.id} without a page`);
+  const now = ctx.now();
+  insertOnlinePayment(ctx.db, { sessionId: session.id, userId: member.id, amountCents, currency, createdAt: now, updatedAt: now });
+  return { url: session.url };
+}
+
+/** Checks the provider's signature on the raw body; a bad or stale one is 400 and nothing changes. */
+function verifiedEvent(setup: PaymentsSetup, rawBody: Buffer, signature: string | string[] | undefined): Stripe.Event {
+  try {
+    return setup.provider.webhooks.constructEvent(rawBody, signature ?? '', setup.webhookSecret);
+  } catch {
+    throw new HttpError(400, 'BAD_SIGNATURE', 'The webhook signature is missing, wrong or too old.');
+  }
+}
+
+/**
+ * Records a completed checkout once, on the member's tab, with its receipt in the same transaction.
+ * A checkout already closed (the same event again, or a second completion) changes nothing; an
+ * amount or currency that differs from the checkout Gripline opened is refused and logged.
+ */
+function settleCheckout(ctx: ServiceContext, tab: TabLedger, logger: Logger, eventId: string, session: Stripe.Checkout.Session): void {
+  ctx.db.transaction((tx) => {
+    const row = onlinePaymentBySession(tx, session.id);
+    if (!row) {
+      logger.warn({ sessionId: session.id, eventId }, 'a completed checkout that Gripline did not open was ignored');
+      return;
+    }
+    if (row.state !== 'open' || session.payment_status !== 'paid') return;
+    const now = ctx.now();
+    if (session.amount_total !== row.amountCents || session.currency !== row.currency) {
+      closeOnlinePayment(tx, row.id, { state: 'refused', eventId, updatedAt: now });
+      logger.warn(
+        { sessionId: session.id, eventId, userId: row.userId, expected: { amountCents: row.amountCents, currency: row.currency }, received: { amountCents: session.amount_total, currency: session.currency } },
+        'an online payment was refused: its amount does not match the checkout',
+      );
+      return;
+    }
+    const member = findUserById(tx, row.userId)!;
+    const memberPaymentId = tab.recordPayment(tx, member, row.amountCents, now, 'Paid online');
+    if (!closeOnlinePayment(tx, row.id, { state: 'paid', eventId, memberPaymentId, updatedAt: now })) throw new Error(`checkout ${row.id} closed twice`);
+    queueMail(tx, paymentReceiptMail(member.email, member.name, row.amountCents, tab.balanceCents(tx, member.id), myTabUrl(ctx, 'paid').replace(/\?.*$/, '')), now);
+  });
+}
+
+/** The provider's webhook: verified first, then a completed checkout is settled; other events are acknowledged. */
+export function receiveProviderEvent(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, logger: Logger, rawBody: Buffer, signature: string | string[] | undefined): void {
+  const event = verifiedEvent(setup, rawBody, signature);
+  if (event.type === 'checkout.session.completed') settleCheckout(ctx, tab, logger, event.id, event.data.object);
+}

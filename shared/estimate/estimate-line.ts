@@ -1,7 +1,7 @@
 import { BLIND_GRIP_RANGES, blindGripForStack, solidLengthDash } from '../stock/fasteners';
 import type { RivetHead } from '../stock/kinds';
 import { flushPrepForSheet, flushSheetPreps, leavesKnifeEdge, MIN_COUNTERSINK_SHEET_IN, type FlushPrep, type FlushSheets } from './flush-prep';
-import { diameterWords, lengthWords } from './length-words';
+import { cleanLength, diameterWords, lengthWords } from './length-words';
 import { nextDiameter32, noLargerDiameterMessage, repairNotice } from './repair';
 import { sheetRuleFinding } from './sheet-rule';
 import { halfLengthOffer, shopHeadFor, type ShopHead } from './shop-head';
@@ -83,9 +83,7 @@ export interface LineError extends EstimateNotice {
   error: true;
 }
 
-function clean(x: number): number {
-  return Math.round(x * 1e6) / 1e6;
-}
+const clean = cleanLength;
 const NO_WARNINGS: readonly EstimateNotice[] = Object.freeze([]);
 
 /**
@@ -139,9 +137,7 @@ export function estimateLine(line: RivetLineInput, options: LineOptions): LineEs
     if (t > thickest) thickest = t;
   }
   const sheet = sheetRuleFinding(diameter32, thickest, unit);
-  if (sheet !== null) {
-    if (sheet.code === 'DIAMETER_BELOW_SHEET_THICKNESS' && line.structural) return { error: true, code: sheet.code, message: sheet.message };
-  }
+  if (sheet?.code === 'DIAMETER_BELOW_SHEET_THICKNESS' && line.structural) return { error: true, code: sheet.code, message: sheet.message };
 
   const minEdge = minEdgeDiameters(head) * d;
   let edge: number;

@@ -1,6 +1,6 @@
 import { diameterWords, lengthWords } from './length-words';
 import type { LengthUnit } from './estimate-line';
-import { ESTIMATE_DIAMETERS } from './rivet-rules';
+import { ESTIMATE_DIAMETERS, MM_PER_INCH } from './rivet-rules';
 
 /**
  * A rivet's diameter is about three times the thickness of the thickest sheet (AC 43.13-1B
@@ -43,7 +43,7 @@ export function sheetRuleFinding(diameter32: number, thickest: number, unit: Len
   if (!byThickness) findings[slot] = byThickness = new Map<number, SheetRuleFinding | null>();
   const cached = byThickness.get(thickest);
   if (cached !== undefined) return cached;
-  const scale = unit === 'mm' ? 25.4 : 1;
+  const scale = unit === 'mm' ? MM_PER_INCH : 1;
   const found = work(diameter32, thickest / scale, thickest, unit, scale);
   // Thicknesses come from people's input: keep at most a few thousand per slot.
   if (byThickness.size < 2000) byThickness.set(thickest, found);

@@ -1,4 +1,6 @@
 import type { LengthUnit } from './estimate-line';
+import { cleanLength as clean } from './length-words';
+import { MM_PER_INCH } from './rivet-rules';
 
 /**
  * The shop head a solid rivet's length allowance of 1.5D is for: about 1.5D wide and 0.5D high
@@ -12,7 +14,6 @@ export interface ShopHead {
   height: number;
 }
 
-const clean = (x: number) => Math.round(x * 1e6) / 1e6;
 /** Ten shop heads exist (five diameters, two units): each made once and shared, frozen. */
 const heads = new Map<number, Readonly<ShopHead>>();
 
@@ -21,7 +22,7 @@ export function shopHeadFor(diameter32: number, unit: LengthUnit): Readonly<Shop
   const key = unit === 'mm' ? -diameter32 : diameter32;
   let head = heads.get(key);
   if (!head) {
-    const d = (diameter32 / 32) * (unit === 'mm' ? 25.4 : 1);
+    const d = (diameter32 / 32) * (unit === 'mm' ? MM_PER_INCH : 1);
     head = Object.freeze({ width: clean(SHOP_HEAD_WIDTH_DIAMETERS * d), height: clean(SHOP_HEAD_HEIGHT_DIAMETERS * d) });
     if (heads.size < 64) heads.set(key, head);
   }

@@ -19,8 +19,10 @@ export interface TabLedger {
   recordPayment(db: Executor, member: UserRow, amountCents: number, at: Date, note: string): number;
 }
 
+/** My tab, where a receipt points. */
+const myTabPage = (ctx: ServiceContext) => `${ctx.publicUrl}/tab`;
 /** The page a member comes back to from the hosted checkout. */
-const myTabUrl = (ctx: ServiceContext, outcome: 'paid' | 'cancelled') => `${ctx.publicUrl}/tab?payment=${outcome}`;
+const myTabUrl = (ctx: ServiceContext, outcome: 'paid' | 'cancelled') => `${myTabPage(ctx)}?payment=${outcome}`;
 
 /** Ties a checkout to the member whose tab it settles. */
 export const memberReference = (userId: number) => `member-${userId}`;
@@ -105,7 +107,7 @@ function settleCheckout(ctx: ServiceContext, tab: TabLedger, logger: Logger, eve
     const member = findUserById(tx, row.userId)!;
     const memberPaymentId = tab.recordPayment(tx, member, row.amountCents, now, 'Paid online');
     if (!closeOnlinePayment(tx, row.id, { state: 'paid', eventId, memberPaymentId, updatedAt: now })) throw new Error(`checkout ${row.id} closed twice`);
-    queueMail(tx, paymentReceiptMail(member.email, member.name, row.amountCents, tab.balanceCents(tx, member.id), myTabUrl(ctx, 'paid').replace(/\?.*$/, '')), now);
+    queueMail(tx, paymentReceiptMail(member.email, member.name, row.amountCents, tab.balanceCents(tx, member.id), myTabPage(ctx)), now);
   });
 }
 

@@ -2,7 +2,7 @@ import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { FastenerNeed } from '@shared/estimate/estimate';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import type { BillLine, ExtraItem } from '@shared/schemas/builds';
-import { BLIND_GRIP_RANGES, binDesignation, binGripRange, blindGripRange, fastenerDesignation, gripRangeWords, inchFraction, type FastenerSpec } from '@shared/stock/fasteners';
+import { BLIND_GRIP_RANGES, binDesignation, binGripRange, blindGripRange, fastenerDesignation, gripRangeWords, inchFraction, toThousandth as thou, type FastenerSpec } from '@shared/stock/fasteners';
 import { rivetHeadLabel, RIVET_KINDS, type RivetKind } from '@shared/stock/kinds';
 import type { Executor } from '../../db/client';
 import { bins, stockMovements, type BinRow } from '../../db/schema/stock';
@@ -38,9 +38,6 @@ function sameRivet(bin: BinRow, need: FastenerNeed): boolean {
   return need.material === null || bin.material?.toLowerCase() === need.material.toLowerCase();
 }
 
-/** Thousandths of an inch, whole: grip ranges and stacks compare at the table's 0.001 in. */
-const thou = (inches: number) => Math.round(inches * 1000);
-
 /** A blind bin covers a need when its grip range (from the box, else the table's band) holds every line's stack. */
 function gripCovers(bin: BinRow, need: FastenerNeed): boolean {
   const range = binGripRange(bin);
@@ -61,7 +58,7 @@ const mostOnHand = (a: BinRow, b: BinRow) => b.onHand - a.onHand || a.code.local
 function bestBlind(a: BinRow, b: BinRow): number {
   const width = (bin: BinRow) => {
     const r = binGripRange(bin)!;
-    return thou(r.max) - thou(r.min);
+    return Math.round((r.max - r.min) * 1000);
   };
   return Number(b.onHand > 0) - Number(a.onHand > 0) || width(a) - width(b) || mostOnHand(a, b);
 }

@@ -25,6 +25,15 @@ export type CheckoutResponse = z.infer<typeof checkoutResponseSchema>;
 export const PAYMENT_CURRENCIES = ['usd', 'cad', 'eur', 'gbp', 'aud', 'nzd'] as const;
 export type PaymentCurrency = (typeof PAYMENT_CURRENCIES)[number];
 
+export const CURRENCY_NAMES: Record<PaymentCurrency, string> = {
+  usd: 'US dollars',
+  cad: 'Canadian dollars',
+  eur: 'euros',
+  gbp: 'pounds sterling',
+  aud: 'Australian dollars',
+  nzd: 'New Zealand dollars',
+};
+
 export const paymentCurrencySchema = z.enum(PAYMENT_CURRENCIES, { error: `Choose one of ${PAYMENT_CURRENCIES.join(', ')}.` });
 
 /** Replaces both settings at once (PUT). */

@@ -28,10 +28,7 @@ export function TabRoute() {
     <>
       <PageHeader title="My tab" lead="What you drew from the bins, valued at the unit cost on the day, and what you have paid." />
       {returned && <PaymentReturn {...returned} onPaid={refreshTab} />}
-      <div className="mb-4 empty:hidden">
-        <PayOnlineCard balanceCents={tab.balanceCents} />
-      </div>
-      <TabView tab={tab} />
+      <TabView tab={tab} afterBalance={<PayOnlineCard balanceCents={tab.balanceCents} />} />
     </>
   );
 }

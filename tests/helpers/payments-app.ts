@@ -18,11 +18,12 @@ export interface PaymentsApp {
   close(): Promise<void>;
 }
 
-export async function startPaymentsApp(): Promise<PaymentsApp> {
+/** `webhooksLost`: the fake's webhooks go to a closed port, as when the provider's delivery is delayed. */
+export async function startPaymentsApp({ webhooksLost = false } = {}): Promise<PaymentsApp> {
   const server: Server = createServer();
   await new Promise<void>((ok) => server.listen(0, '127.0.0.1', () => ok()));
   const { port } = server.address() as AddressInfo;
-  const fake = await startFakeProvider({ webhookUrl: `http://127.0.0.1:${port}/api/payments/webhook` });
+  const fake = await startFakeProvider({ webhookUrl: `http://127.0.0.1:${webhooksLost ? 1 : port}/api/payments/webhook` });
   const setup = createPaymentsSetup({ secretKey: fake.secretKey, webhookSecret: fake.webhookSecret, fake });
   const logged: string[] = [];
   const t = await buildTestApp({ payments: setup, logger: pino({ level: 'warn' }, { write: (line: string) => logged.push(line) }) });

@@ -29,6 +29,14 @@ const put = (who: SignedInAgent, body: unknown) => who.agent.put('/api/payments/
 const rows = () => p.t.db.select().from(onlinePayments).orderBy(onlinePayments.id).all();
 const balanceOf = async (who: SignedInAgent) => (await who.agent.get('/api/stock/tab')).body.balanceCents as number;
 
+/** An event about a checkout, signed as the provider signs it, delivered to the webhook. */
+async function deliverEvent(type: 'checkout.session.completed' | 'checkout.session.expired', eventId: string, session: object) {
+  const payload = JSON.stringify({ id: eventId, object: 'event', type, created: Math.floor(Date.now() / 1000), data: { object: session } });
+  const signature = p.setup.provider.webhooks.generateTestHeaderString({ payload, secret: p.fake.webhookSecret });
+  const res = await request(p.t.app).post('/api/payments/webhook').set('content-type', 'application/json').set('stripe-signature', signature).send(payload);
+  expect(res.status).toBe(200);
+}
+
 describe('GET /api/payments/settings', () => {
   it('tells any signed-in person that payments are offered in US dollars through the local stand-in, with no key in the answer', async () => {
     const res = await member.agent.get('/api/payments/settings');
@@ -193,10 +201,7 @@ describe('several open checkouts', () => {
     const first = sessionIdOf(await checkout(member));
     await checkout(member);
     const session = await p.setup.provider.checkout.sessions.retrieve(first);
-    const payload = JSON.stringify({ id: 'evt_test_late', object: 'event', type: 'checkout.session.completed', created: Math.floor(Date.now() / 1000), data: { object: { ...session, status: 'complete', payment_status: 'paid' } } });
-    const signature = p.setup.provider.webhooks.generateTestHeaderString({ payload, secret: p.fake.webhookSecret });
-    const res = await request(p.t.app).post('/api/payments/webhook').set('content-type', 'application/json').set('stripe-signature', signature).send(payload);
-    expect(res.status).toBe(200);
+    await deliverEvent('checkout.session.completed', 'evt_test_late', { ...session, status: 'complete', payment_status: 'paid' });
 
     expect(p.t.db.select().from(memberPayments).all()).toEqual([]);
     expect(await balanceOf(member)).toBe(TAB_CENTS);
@@ -209,9 +214,28 @@ describe('several open checkouts', () => {
     await drawOnTab(qm, member, 120);
     const id = sessionIdOf(await checkout(member));
     const session = await p.setup.provider.checkout.sessions.retrieve(id);
-    const payload = JSON.stringify({ id: 'evt_test_lapsed', object: 'event', type: 'checkout.session.expired', created: Math.floor(Date.now() / 1000), data: { object: { ...session, status: 'expired' } } });
-    const signature = p.setup.provider.webhooks.generateTestHeaderString({ payload, secret: p.fake.webhookSecret });
-    expect((await request(p.t.app).post('/api/payments/webhook').set('content-type', 'application/json').set('stripe-signature', signature).send(payload)).status).toBe(200);
+    await deliverEvent('checkout.session.expired', 'evt_test_lapsed', { ...session, status: 'expired' });
     expect(rows()).toMatchObject([{ state: 'expired', eventId: 'evt_test_lapsed' }]);
+  });
+
+  it('leaves open a checkout the provider will not expire (paid, its completion still on the way), and records that completion when it comes', async () => {
+    await p.close();
+    p = await startPaymentsApp({ webhooksLost: true });
+    crew = await p.t.addCrew();
+    qm = await p.t.signIn('qm@example.org');
+    member = await p.t.signIn('member@example.org');
+    await drawOnTab(qm, member, 120);
+    const first = await checkout(member, { amountCents: 1000 });
+    // Paid at the provider; its webhook does not reach Gripline this time.
+    await fetch(first, { method: 'POST', body: new URLSearchParams({ choice: 'pay' }), redirect: 'manual' });
+    expect((await p.setup.provider.checkout.sessions.retrieve(sessionIdOf(first))).status).toBe('complete');
+
+    await checkout(member, { amountCents: 440 });
+    expect(rows().map((r) => r.state)).toEqual(['open', 'open']);
+
+    const session = await p.setup.provider.checkout.sessions.retrieve(sessionIdOf(first));
+    await deliverEvent('checkout.session.completed', 'evt_test_delayed', session);
+    expect(rows().map((r) => r.state)).toEqual(['paid', 'open']);
+    expect(await balanceOf(member)).toBe(TAB_CENTS - 1000);
   });
 });

@@ -35,7 +35,7 @@ function statusMessage(status: CheckoutStatus | undefined, failed: boolean): Rea
   const amount = formatCents(status.amountCents, status.currency);
   if (status.state === 'paid') return <Message tone="ok" title={`Payment received: ${amount}`}>It is on your tab below, and a receipt is on its way by e-mail.</Message>;
   if (status.state === 'expired') return <Message tone="bad" title="This checkout expired: nothing was charged" />;
-  return <Message tone="bad" title={`The provider’s payment did not match the ${amount} asked`}>Nothing came off your tab. Ask the chapter lead, who has been told.</Message>;
+  return <Message tone="bad" title={`The provider’s payment did not match the ${amount} asked`}>Nothing came off your tab; ask the chapter lead about it.</Message>;
 }
 
 /** Asks after the checkout until it is settled either way; once paid, `onPaid` refreshes the tab. */

@@ -22,6 +22,7 @@ import { endHoldsOfPerson, placeHold } from './features/tools/holds.service';
 import { binCsvRouter, binImportBodyParsers } from './features/stock/stock-csv.router';
 import { stockMoneyRouter } from './features/stock/money.router';
 import { recordOnlinePayment, tabBalanceCents } from './features/stock/money.service';
+import { paymentSettingsRouter } from './features/payments/payment-settings.router';
 import { paymentsRouter, paymentsWebhookRouter } from './features/payments/payments.router';
 import { mailRouter } from './features/mail/mail.router';
 import { passwordResetRouter } from './features/password-reset/password-reset.router';
@@ -125,6 +126,7 @@ export function createApp(config: AppConfig) {
   api.use('/bins', binCsvRouter({ nameAssemblies: assemblyNames }));
   api.use('/bins', binsRouter({ runQueuedAction, nameAssemblies: assemblyNames, reordersOf: binReorders }));
   api.use('/stock', stockMoneyRouter({ nameAssemblies: assemblyNames }));
+  api.use('/payments/settings', paymentSettingsRouter(config.payments));
   api.use('/payments', paymentsRouter(config.payments, tab));
   api.use('/estimate', estimateRouter());
   api.use('/builds', buildsRouter());

@@ -31,7 +31,7 @@ interface FakeSession {
   client_reference_id: string | null;
   customer_email: string | null;
   payment_status: 'unpaid' | 'paid';
-  status: 'open' | 'complete';
+  status: 'open' | 'complete' | 'expired';
   mode: string;
   metadata: Record<string, string>;
   success_url: string;
@@ -93,23 +93,49 @@ function postWebhook(url: string, payload: string, signature: string): Promise<n
 
 const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
-function hostedPage(session: FakeSession): string {
-  const amount = escapeHtml(centsWords(session.amount_total));
-  return `<!doctype html>
-<html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1">
-<title>Pay ${amount} to the chapter</title>
-<style>body{font:1rem/1.5 system-ui,sans-serif;max-width:28rem;margin:3rem auto;padding:0 1rem;color:#1d2430}
+const pageStyle = `<style>body{font:1rem/1.5 system-ui,sans-serif;max-width:28rem;margin:3rem auto;padding:0 1rem;color:#1d2430}
 main{border:1px solid #c7ced8;border-radius:.5rem;padding:1.5rem}button{font:inherit;padding:.5rem 1.25rem;margin-right:.5rem}
-.pay{background:#1f5fa8;color:#fff;border:0;border-radius:.25rem}</style></head>
-<body><main><h1>Pay ${amount} to the chapter</h1>
-<p>Local test checkout: no card is charged and nothing leaves this computer.</p>
+.pay{background:#1f5fa8;color:#fff;border:0;border-radius:.25rem}</style>`;
+
+const pageShell = (title: string, body: string) => `<!doctype html>
+<html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1">
+<title>${title}</title>
+${pageStyle}</head>
+<body><main><h1>${title}</h1>
+${body}</main></body></html>`;
+
+/** The payer's way back when there is nothing to pay here: the page the cancel URL names, without its query. */
+const wayBack = (session: FakeSession) => {
+  const back = new URL(session.cancel_url);
+  return `${back.origin}${back.pathname}`;
+};
+
+function hostedPage(session: FakeSession): string {
+  const amount = escapeHtml(centsWords(session.amount_total, session.currency));
+  if (session.status === 'expired') {
+    return pageShell(
+      'This checkout has expired',
+      `<p>Nothing was charged. A newer checkout replaced this one, or it ran out of time.</p>
+<p><a href="${escapeHtml(wayBack(session))}">Back to My tab</a></p>`,
+    );
+  }
+  if (session.status === 'complete') {
+    return pageShell(`${amount} is paid`, `<p>This checkout is paid.</p>\n<p><a href="${escapeHtml(wayBack(session))}">Back to My tab</a></p>`);
+  }
+  return pageShell(
+    `Pay ${amount} to the chapter`,
+    `<p>Local test checkout: no card is charged and nothing leaves this computer.</p>
 <form method="post" action="/pay/${escapeHtml(session.id)}"><button class="pay" type="submit" name="choice" value="pay">Pay</button>
-<button type="submit" name="choice" value="cancel">Cancel</button></form></main></body></html>`;
+<button type="submit" name="choice" value="cancel">Cancel</button></form>`,
+  );
 }
+
+/** As the provider does on its way back: the success URL's {CHECKOUT_SESSION_ID} becomes the session's id. */
+const successUrlOf = (session: FakeSession) => session.success_url.replaceAll('{CHECKOUT_SESSION_ID}', session.id);
 
 /**
  * A stand-in for the hosted payment provider on a free loopback port, started when no real key is
- * set. It answers the SDK calls Gripline makes (create and retrieve a checkout session) in the
+ * set. It answers the SDK calls Gripline makes (create, retrieve and expire a checkout session) in the
  * provider's shapes, serves a plain hosted page, and on Pay sends the signed completion webhook
  * exactly as the provider signs it before sending the payer back to the success URL.
  */
@@ -150,13 +176,11 @@ export async function startFakeProvider(options: FakeProviderOptions): Promise<F
     sendJson(res, 200, session);
   }
 
-  async function completeSession(session: FakeSession): Promise<void> {
-    session.status = 'complete';
-    session.payment_status = 'paid';
+  async function sendEvent(type: 'checkout.session.completed' | 'checkout.session.expired', session: FakeSession): Promise<void> {
     const event = {
       id: token('evt'),
       object: 'event',
-      type: 'checkout.session.completed',
+      type,
       created: Math.floor(Date.now() / 1000),
       livemode: false,
       pending_webhooks: 1,
@@ -167,14 +191,32 @@ export async function startFakeProvider(options: FakeProviderOptions): Promise<F
     await postWebhook(options.webhookUrl, payload, signature);
   }
 
+  async function completeSession(session: FakeSession): Promise<void> {
+    session.status = 'complete';
+    session.payment_status = 'paid';
+    await sendEvent('checkout.session.completed', session);
+  }
+
+  /** Only an open session can be expired, as at the provider; its expiry event goes out before the answer. */
+  async function expireSession(res: ServerResponse, session: FakeSession) {
+    if (session.status !== 'open') {
+      return providerError(res, 400, `Only Checkout Sessions with a status in [open] can be expired. This Checkout Session has a status of ${session.status}.`);
+    }
+    session.status = 'expired';
+    await sendEvent('checkout.session.expired', session);
+    sendJson(res, 200, session);
+  }
+
   async function answerPage(req: IncomingMessage, res: ServerResponse, session: FakeSession) {
     if (req.method === 'GET') {
       res.writeHead(200, { 'content-type': 'text/html; charset=utf-8' }).end(hostedPage(session));
       return;
     }
     const choice = new URLSearchParams(await readBody(req)).get('choice');
-    if (choice === 'pay' && session.status === 'open') await completeSession(session);
-    res.writeHead(303, { location: choice === 'pay' ? session.success_url : session.cancel_url }).end();
+    // A page left open on an expired or paid checkout shows that state again rather than pretending to pay.
+    if (session.status !== 'open') return void res.writeHead(303, { location: `/pay/${session.id}` }).end();
+    if (choice === 'pay') await completeSession(session);
+    res.writeHead(303, { location: choice === 'pay' ? successUrlOf(session) : session.cancel_url }).end();
   }
 
   async function route(req: IncomingMessage, res: ServerResponse) {
@@ -191,6 +233,11 @@ export async function startFakeProvider(options: FakeProviderOptions): Promise<F
     if (req.method === 'GET' && retrieve) {
       const session = sessions.get(retrieve[1]!);
       return session ? sendJson(res, 200, session) : providerError(res, 404, `No such checkout.session: '${retrieve[1]}'`);
+    }
+    const expire = /^\/v1\/checkout\/sessions\/([\w]+)\/expire$/.exec(path);
+    if (req.method === 'POST' && expire) {
+      const session = sessions.get(expire[1]!);
+      return session ? expireSession(res, session) : providerError(res, 404, `No such checkout.session: '${expire[1]}'`);
     }
     providerError(res, 404, `Unrecognized request URL (${req.method} ${path}).`);
   }

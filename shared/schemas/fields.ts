@@ -36,3 +36,13 @@ export const idParam = z.coerce
 
 /** The body of a command that takes no fields: `{}` or none at all; a field sent anyway is refused by name. */
 export const noFieldsBodySchema = z.strictObject({});
+
+/** An amount typed in dollars and cents ("12.50", "$12.50", "1,200"), read as whole cents. */
+export const dollarsAndCentsField = (missing: string) =>
+  z
+    .string({ error: missing })
+    .trim()
+    .transform((s) => s.replace(/^\$/, '').replace(/,/g, ''))
+    .refine((s) => s !== '', { error: missing })
+    .refine((s) => s === '' || /^\d+(\.\d{1,2})?$/.test(s), { error: 'Enter dollars and cents, like 12.50.' })
+    .transform((s) => Math.round(Number(s) * 100));

@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { centsWords } from '../stock/money';
+import { dollarsAndCentsField } from './fields';
 
 /** The hosted checkout takes no less than this; a smaller part of the tab is settled in cash. */
 export const MIN_ONLINE_PAYMENT_CENTS = 50;
@@ -16,3 +18,71 @@ export type CheckoutBody = z.infer<typeof checkoutBodySchema>;
 
 export const checkoutResponseSchema = z.strictObject({ url: z.url() });
 export type CheckoutResponse = z.infer<typeof checkoutResponseSchema>;
+
+// ---- The chapter's payment settings ----
+
+/** Currencies a chapter may ask payments in: ISO 4217 codes in lower case, as the provider takes them. */
+export const PAYMENT_CURRENCIES = ['usd', 'cad', 'eur', 'gbp', 'aud', 'nzd'] as const;
+export type PaymentCurrency = (typeof PAYMENT_CURRENCIES)[number];
+
+export const CURRENCY_NAMES: Record<PaymentCurrency, string> = {
+  usd: 'US dollars',
+  cad: 'Canadian dollars',
+  eur: 'euros',
+  gbp: 'pounds sterling',
+  aud: 'Australian dollars',
+  nzd: 'New Zealand dollars',
+};
+
+export const paymentCurrencySchema = z.enum(PAYMENT_CURRENCIES, { error: `Choose one of ${PAYMENT_CURRENCIES.join(', ')}.` });
+
+/** Replaces both settings at once (PUT). */
+export const updatePaymentSettingsBodySchema = z.strictObject({
+  offered: z.boolean({ error: 'Say whether online payment is offered: true or false.' }),
+  currency: paymentCurrencySchema,
+});
+export type UpdatePaymentSettingsBody = z.infer<typeof updatePaymentSettingsBodySchema>;
+
+/** Whether the chapter reaches the real provider with its own keys, or the local stand-in. */
+export const PAYMENT_PROVIDER_CONNECTIONS = ['local-fake', 'connected'] as const;
+
+export const paymentSettingsSchema = z.strictObject({
+  offered: z.boolean(),
+  currency: paymentCurrencySchema,
+  minimumCents: z.number(),
+  provider: z.enum(PAYMENT_PROVIDER_CONNECTIONS),
+});
+export type PaymentSettingsView = z.infer<typeof paymentSettingsSchema>;
+
+// ---- A checkout's state, for the member coming back from the hosted page ----
+
+/** open: started; paid: the completion was recorded; refused: its amount did not match; expired: replaced or timed out. */
+export const ONLINE_PAYMENT_STATES = ['open', 'paid', 'refused', 'expired'] as const;
+export type OnlinePaymentState = (typeof ONLINE_PAYMENT_STATES)[number];
+
+export const checkoutSessionParams = z.object({
+  sessionId: z
+    .string()
+    .max(255, { error: 'That is not a checkout id.' })
+    .regex(/^\w+$/, { error: 'That is not a checkout id.' }),
+});
+
+export const checkoutStatusSchema = z.strictObject({
+  state: z.enum(ONLINE_PAYMENT_STATES),
+  amountCents: z.number(),
+  currency: paymentCurrencySchema,
+});
+export type CheckoutStatus = z.infer<typeof checkoutStatusSchema>;
+
+// ---- My tab's pay form ----
+
+/** "Pay part": dollars and cents typed by the member, at least the online minimum and at most the balance. */
+export const payPartFormSchema = (balanceCents: number, currency: PaymentCurrency) =>
+  z.object({
+    amount: dollarsAndCentsField('Enter the amount to pay.').pipe(
+      z
+        .number()
+        .min(MIN_ONLINE_PAYMENT_CENTS, { error: `Online payments are at least ${centsWords(MIN_ONLINE_PAYMENT_CENTS, currency)}.` })
+        .max(balanceCents, { error: `You owe ${centsWords(balanceCents, currency)}; pay that much or less.` }),
+    ),
+  });

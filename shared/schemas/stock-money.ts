@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { BIN_KINDS, MOVEMENT_KINDS } from '../stock/kinds';
 import { assemblyNameSchema } from './bins';
-import { idParam } from './fields';
+import { dollarsAndCentsField, idParam } from './fields';
 
 /** A payment is at most $10,000: a larger figure is almost surely a typing slip. */
 export const MAX_PAYMENT_CENTS = 1_000_000;
@@ -22,13 +22,7 @@ export type RecordPaymentBody = z.infer<typeof recordPaymentBodySchema>;
 /** The payment form: the amount typed in dollars and cents ("12.50", "$12.50"), sent as cents. */
 export const paymentFormSchema = z.object({
   userId: payerField,
-  amount: z
-    .string({ error: 'Enter the amount paid.' })
-    .trim()
-    .transform((s) => s.replace(/^\$/, '').replace(/,/g, ''))
-    .refine((s) => /^\d+(\.\d{1,2})?$/.test(s), { error: 'Enter dollars and cents, like 12.50.' })
-    .transform((s) => Math.round(Number(s) * 100))
-    .pipe(amountCentsField),
+  amount: dollarsAndCentsField('Enter the amount paid.').pipe(amountCentsField),
   note: paymentNoteField.optional(),
 });
 

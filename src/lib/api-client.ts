@@ -126,6 +126,7 @@ export const api = {
   getOrGiveUp: <T>(path: string) => send<T>('GET', path, undefined, undefined, 'json', { timeoutMs: ANSWER_TIMEOUT_MS }),
   post: <T>(path: string, body?: unknown, options?: RequestOptions) => mutate<T>('POST', path, body ?? {}, 'json', options),
   patch: <T>(path: string, body: unknown) => mutate<T>('PATCH', path, body),
+  put: <T>(path: string, body: unknown) => mutate<T>('PUT', path, body),
   delete: <T = void>(path: string) => mutate<T>('DELETE', path),
   /** multipart/form-data (photo uploads), with the same CSRF token and error handling. */
   postForm: <T>(path: string, form: FormData) => mutate<T>('POST', path, form),

@@ -71,7 +71,10 @@ function pagesOf(role: Role, ids: DemoIds): string[] {
     `/bins/${ids.binCode}`,
     '/tab',
     '/my-mail',
+    // My tab back from the provider's page: cancelled, and a checkout that is not the member's (its status says so).
+    '/tab?payment=cancelled',
     '/builds',
+    '/tab?payment=paid&checkout=cs_test_not_yours',
     '/settings',
     `/assemblies/${ids.assemblyId}`,
     ...NOT_FOUND_PAGES,

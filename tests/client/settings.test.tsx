@@ -4,6 +4,7 @@ import { Suspense } from 'react';
 import { beforeEach, describe, expect, it } from 'vitest';
 import type { Role } from '@shared/roles';
 import type { ActualWaste, PlanningSettingsDto } from '@shared/schemas/forecast';
+import type { PaymentSettingsView, UpdatePaymentSettingsBody } from '@shared/schemas/payments';
 import { SettingsRoute } from '@/app/routes/app/settings';
 import { setCsrfToken } from '@/lib/api-client';
 import { fakeFetch, renderWithProviders, type FakeCall } from '../helpers/render';
@@ -25,6 +26,7 @@ const NAMES: Record<Role, string> = { member: 'Mia Member', quartermaster: 'Quin
 
 function renderSettings(role: Role, respond?: (call: FakeCall) => { status: number; body?: unknown } | undefined) {
   let settings = SETTINGS;
+  let payments: PaymentSettingsView = { offered: true, currency: 'usd', minimumCents: 50, provider: 'local-fake' };
   const calls = fakeFetch((call) => {
     const own = respond?.(call);
     if (own) return own;
@@ -35,6 +37,11 @@ function renderSettings(role: Role, respond?: (call: FakeCall) => { status: numb
       return { status: 200, body: settings };
     }
     if (call.path === '/api/settings/crib' && call.method === 'GET') return { status: 200, body: { holdHours: 48, timeZone: 'America/Chicago' } };
+    if (call.path === '/api/payments/settings' && call.method === 'GET') return { status: 200, body: payments };
+    if (call.path === '/api/payments/settings' && call.method === 'PUT') {
+      payments = { ...payments, ...(call.body as UpdatePaymentSettingsBody) };
+      return { status: 200, body: payments };
+    }
     if (call.path === '/api/waste') return { status: 200, body: { ...WASTE, currentAllowance: settings.wastePercent } };
     return undefined;
   });
@@ -143,5 +150,29 @@ describe('Settings', () => {
     await screen.findByRole('form', { name: 'Planning settings' });
     await userEvent.click(screen.getByRole('button', { name: 'Save settings' }));
     expect(await screen.findByText('Only a chapter lead can change the planning settings.')).toBeTruthy();
+  });
+
+  it('gives the lead the online payment form: offer off, or another currency, sent whole', async () => {
+    const calls = renderSettings('lead');
+    const form = await screen.findByRole('form', { name: 'Online payment' });
+    expect(screen.getByText('Members may pay their tab online, in US dollars, from $0.50 up.')).toBeTruthy();
+    expect(screen.getByText(/uses its local stand-in for the payment provider/)).toBeTruthy();
+    const offer = within(form).getByRole('checkbox', { name: 'Offer online payment to members' });
+    expect((offer as HTMLInputElement).checked).toBe(true);
+    await userEvent.click(offer);
+    await userEvent.selectOptions(within(form).getByLabelText('Currency of online payments'), 'Canadian dollars (CAD)');
+    await userEvent.click(within(form).getByRole('button', { name: 'Save online payment' }));
+    await waitFor(() => expect(calls.find((c) => c.method === 'PUT')).toMatchObject({ path: '/api/payments/settings', body: { offered: false, currency: 'cad' } }));
+    expect(await screen.findAllByText('Online payment is off: members pay their tab in cash to the quartermaster.')).not.toHaveLength(0);
+  });
+
+  it('shows a member the online payment setting and the provider without a form or any key', async () => {
+    renderSettings('member', ({ path }) =>
+      path === '/api/payments/settings' ? { status: 200, body: { offered: true, currency: 'eur', minimumCents: 50, provider: 'connected' } } : undefined,
+    );
+    expect(await screen.findByText('Members may pay their tab online, in euros, from €0.50 up.')).toBeTruthy();
+    expect(screen.getByText('Gripline is connected to the payment provider with the chapter’s own account.')).toBeTruthy();
+    expect(screen.getByText('Only the chapter lead changes online payment.')).toBeTruthy();
+    expect(screen.queryByRole('form', { name: 'Online payment' })).toBeNull();
   });
 });

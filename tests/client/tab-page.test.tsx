@@ -73,7 +73,7 @@ describe('My tab page', () => {
   it('shows the balance in words and figures, then the tab by month, by assembly and entry by entry', async () => {
     const calls = renderTabPage(TAB);
     expect(await screen.findByRole('heading', { name: 'My tab' })).toBeTruthy();
-    expect(calls.map((c) => c.path)).toEqual(['/api/stock/tab']);
+    expect(calls.map((c) => c.path)).toEqual(['/api/stock/tab', '/api/payments/settings']);
 
     const balance = screen.getByRole('region', { name: 'Balance' });
     expect(within(balance).getByText('$14.40')).toBeTruthy();

@@ -43,7 +43,7 @@ describe('Gripline started without a payment key', () => {
       expect(shown).toContain('to the chapter');
 
       const paid = await fetch(payPage, { method: 'POST', body: new URLSearchParams({ choice: 'pay' }), redirect: 'manual' });
-      expect(paid.headers.get('location')).toBe(`${running.url}/tab?payment=paid`);
+      expect(paid.headers.get('location')).toBe(`${running.url}/tab?payment=paid&checkout=${payPage.split('/').pop()}`);
       expect(await balance()).toBe(0);
     } finally {
       await running.close();

@@ -100,7 +100,7 @@ describe('POST /api/payments/checkout', () => {
       client_reference_id: `member-${crew.member.id}`,
       payment_status: 'unpaid',
       status: 'open',
-      success_url: 'http://gripline.test/tab?payment=paid',
+      success_url: 'http://gripline.test/tab?payment=paid&checkout={CHECKOUT_SESSION_ID}',
       cancel_url: 'http://gripline.test/tab?payment=cancelled',
     });
     expect(t.db.select().from(onlinePayments).all()).toMatchObject([{ sessionId: session.id, userId: crew.member.id, amountCents: TAB_CENTS, state: 'open', eventId: null }]);
@@ -166,7 +166,7 @@ describe('the hosted page and the signed webhook', () => {
   it('Pay completes the payment through the webhook: the balance drops by the amount and a receipt is mailed', async () => {
     await drawOnTab(member, 120);
     const url = await checkout(member, { amountCents: 1000 });
-    expect(await press(url, 'pay')).toBe('http://gripline.test/tab?payment=paid');
+    expect(await press(url, 'pay')).toBe(`http://gripline.test/tab?payment=paid&checkout=${sessionIdOf(url)}`);
 
     expect(await balanceOf(member)).toBe(TAB_CENTS - 1000);
     const [row] = t.db.select().from(onlinePayments).all();

@@ -80,6 +80,8 @@ const GETS = (): string[] => [
   '/api/stock/tabs',
   `/api/stock/tabs/${ids.user}`,
   '/api/stock/spend',
+  '/api/payments/settings',
+  '/api/payments/checkouts/cs_test_none',
   '/api/builds',
   `/api/builds/${ids.build}`,
   '/api/assemblies',

@@ -1,14 +1,15 @@
 import { sql } from 'drizzle-orm';
 import { check, index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { ONLINE_PAYMENT_STATES } from '@shared/schemas/payments';
 import { memberPayments } from './stock';
 import { users } from './users';
 
-export const ONLINE_PAYMENT_STATES = ['open', 'paid', 'refused'] as const;
-export type OnlinePaymentState = (typeof ONLINE_PAYMENT_STATES)[number];
+export { ONLINE_PAYMENT_STATES, type OnlinePaymentState } from '@shared/schemas/payments';
 
 /**
  * A hosted checkout a member started to settle their tab. It becomes paid once, when the provider's
- * signed completion arrives; the payment it made on the tab is `memberPaymentId`.
+ * signed completion arrives; the payment it made on the tab is `memberPaymentId`. It expires when the
+ * member starts another (Gripline expires the older one at the provider) or the provider lets it lapse.
  */
 export const onlinePayments = sqliteTable(
   'online_payments',
@@ -30,7 +31,7 @@ export const onlinePayments = sqliteTable(
   (t) => [
     index('online_payments_user_idx').on(t.userId, t.createdAt),
     check('online_payments_amount_check', sql`${t.amountCents} > 0`),
-    check('online_payments_state_check', sql`${t.state} in ('open', 'paid', 'refused')`),
+    check('online_payments_state_check', sql`${t.state} in ('open', 'paid', 'refused', 'expired')`),
   ],
 );
 export type OnlinePaymentRow = typeof onlinePayments.$inferSelect;

@@ -22,3 +22,22 @@ export function closeOnlinePayment(
     .where(and(eq(onlinePayments.id, id), eq(onlinePayments.state, 'open')))
     .run().changes === 1;
 }
+
+/** The member's checkouts still open at the provider, oldest first. */
+export function openOnlinePaymentsOf(db: Executor, userId: number): OnlinePaymentRow[] {
+  return db
+    .select()
+    .from(onlinePayments)
+    .where(and(eq(onlinePayments.userId, userId), eq(onlinePayments.state, 'open')))
+    .orderBy(onlinePayments.id)
+    .all();
+}
+
+/** Moves an open checkout to expired (naming the provider's event when one told it); false when it was no longer open. */
+export function expireOnlinePayment(db: Executor, id: number, changes: { eventId?: string; updatedAt: Date }): boolean {
+  return db
+    .update(onlinePayments)
+    .set({ state: 'expired', ...changes })
+    .where(and(eq(onlinePayments.id, id), eq(onlinePayments.state, 'open')))
+    .run().changes === 1;
+}

@@ -1,10 +1,11 @@
 import express, { Router } from 'express';
-import { checkoutBodySchema } from '@shared/schemas/payments';
+import { checkoutBodySchema, checkoutSessionParams } from '@shared/schemas/payments';
 import type { ServiceContext } from '../../context';
 import { HttpError } from '../../lib/http-error';
 import { parseInput } from '../../lib/validate';
 import { requireRole, requireUser } from '../../middleware/auth';
 import type { PaymentsSetup } from '../../payments/payments-client';
+import { readCheckoutStatus } from './checkout-status';
 import { receiveProviderEvent, startCheckout, type TabLedger } from './payments.service';
 
 const notSetUp = () => new HttpError(503, 'PAYMENTS_OFF', 'Online payment is not set up for this chapter. Pay the quartermaster in cash.');
@@ -18,6 +19,9 @@ export function paymentsRouter(setup: PaymentsSetup | undefined, tab: TabLedger)
   router.post('/checkout', requireRole('member'), async (req, res) => {
     if (!setup) throw notSetUp();
     res.status(201).json(await startCheckout(req.ctx, setup, tab, requireUser(req), parseInput(checkoutBodySchema, req.body)));
+  });
+  router.get('/checkouts/:sessionId', requireRole('member'), (req, res) => {
+    res.json(readCheckoutStatus(req.ctx.db, requireUser(req).id, parseInput(checkoutSessionParams, req.params, 'path').sessionId));
   });
   return router;
 }

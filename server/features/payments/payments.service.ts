@@ -1,4 +1,4 @@
-import Stripe from 'stripe';
+import type Stripe from 'stripe';
 import { MIN_ONLINE_PAYMENT_CENTS, type CheckoutBody, type CheckoutResponse } from '@shared/schemas/payments';
 import { centsWords } from '@shared/stock/money';
 import { findUserById } from '../../accounts/users.repo';
@@ -10,8 +10,10 @@ import type { Logger } from '../../lib/logger';
 import { paymentReceiptMail } from '../../mail/messages';
 import { queueMail } from '../../mail/outbox';
 import type { PaymentsSetup } from '../../payments/payments-client';
-import { readPaymentCurrency } from '../../settings/payment-currency';
+import { readPaymentSettings } from '../../settings/payment-settings';
+import { expireEarlierCheckouts, recordExpiredCheckout } from './checkout-expiry';
 import { closeOnlinePayment, insertOnlinePayment, onlinePaymentBySession } from './payments.repo';
+import { atProvider } from './provider-call';
 
 /** The stock feature's tab, handed in by the app: what a member owes, and recording a payment on it. */
 export interface TabLedger {
@@ -23,6 +25,8 @@ export interface TabLedger {
 const myTabPage = (ctx: ServiceContext) => `${ctx.publicUrl}/tab`;
 /** The page a member comes back to from the hosted checkout. */
 const myTabUrl = (ctx: ServiceContext, outcome: 'paid' | 'cancelled') => `${myTabPage(ctx)}?payment=${outcome}`;
+/** The provider puts the session's id in place of this placeholder when it sends the payer back. */
+const CHECKOUT_SESSION_ID = '{CHECKOUT_SESSION_ID}';
 
 /** Ties a checkout to the member whose tab it settles. */
 export const memberReference = (userId: number) => `member-${userId}`;
@@ -39,32 +43,31 @@ function amountToPay(balanceCents: number, asked: number | undefined): number {
   return amount;
 }
 
-/** The provider down or unreachable is the chapter's problem to retry, not a fault in Gripline. */
-async function openHostedCheckout(setup: PaymentsSetup, params: Stripe.Checkout.SessionCreateParams): Promise<Stripe.Checkout.Session> {
-  try {
-    return await setup.provider.checkout.sessions.create(params);
-  } catch (err) {
-    if (err instanceof Stripe.errors.StripeConnectionError || err instanceof Stripe.errors.StripeAPIError) {
-      throw new HttpError(502, 'PROVIDER_UNAVAILABLE', 'The payment provider could not be reached. Try again in a minute, or pay the quartermaster in cash.');
-    }
-    throw err;
-  }
+const openHostedCheckout = (setup: PaymentsSetup, params: Stripe.Checkout.SessionCreateParams): Promise<Stripe.Checkout.Session> =>
+  atProvider(() => setup.provider.checkout.sessions.create(params));
+
+function offeredCurrency(ctx: ServiceContext) {
+  const { offered, currency } = readPaymentSettings(ctx.db);
+  if (!offered) throw new HttpError(409, 'ONLINE_PAYMENT_OFF', 'The chapter does not take payments online. Pay your tab in cash to the quartermaster.');
+  return currency;
 }
 
 /**
  * Opens a hosted checkout for the signed-in member's own tab (the whole balance unless a smaller
- * amount is asked) and returns the provider's page to send them to.
+ * amount is asked) and returns the provider's page to send them to. Their earlier checkouts still open
+ * are expired first, so only one can be paid.
  */
 export async function startCheckout(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, member: UserRow, body: CheckoutBody): Promise<CheckoutResponse> {
+  const currency = offeredCurrency(ctx);
   const amountCents = amountToPay(tab.balanceCents(ctx.db, member.id), body.amountCents);
-  const currency = readPaymentCurrency(ctx.db);
+  await expireEarlierCheckouts(ctx, setup, member.id);
   const session = await openHostedCheckout(setup, {
     mode: 'payment',
     line_items: [{ quantity: 1, price_data: { currency, unit_amount: amountCents, product_data: { name: 'Consumables tab' } } }],
     customer_email: member.email,
     client_reference_id: memberReference(member.id),
     metadata: { userId: String(member.id) },
-    success_url: myTabUrl(ctx, 'paid'),
+    success_url: `${myTabUrl(ctx, 'paid')}&checkout=${CHECKOUT_SESSION_ID}`,
     cancel_url: myTabUrl(ctx, 'cancelled'),
   });
   if (!session.url) throw new Error(`the provider returned checkout ${session.id} without a page`);
@@ -94,6 +97,10 @@ function settleCheckout(ctx: ServiceContext, tab: TabLedger, logger: Logger, eve
       logger.warn({ sessionId: session.id, eventId }, 'a completed checkout that Gripline did not open was ignored');
       return;
     }
+    if (row.state === 'expired') {
+      logger.warn({ sessionId: session.id, eventId, userId: row.userId }, 'a completion for an expired checkout was not recorded');
+      return;
+    }
     if (row.state !== 'open' || session.payment_status !== 'paid') return;
     const now = ctx.now();
     if (session.amount_total !== row.amountCents || session.currency !== row.currency) {
@@ -111,8 +118,9 @@ function settleCheckout(ctx: ServiceContext, tab: TabLedger, logger: Logger, eve
   });
 }
 
-/** The provider's webhook: verified first, then a completed checkout is settled; other events are acknowledged. */
+/** The provider's webhook: verified first, then a completed checkout is settled, an expired one closed; other events are acknowledged. */
 export function receiveProviderEvent(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, logger: Logger, rawBody: Buffer, signature: string | string[] | undefined): void {
   const event = verifiedEvent(setup, rawBody, signature);
   if (event.type === 'checkout.session.completed') settleCheckout(ctx, tab, logger, event.id, event.data.object);
+  if (event.type === 'checkout.session.expired') recordExpiredCheckout(ctx, logger, event.id, event.data.object);
 }

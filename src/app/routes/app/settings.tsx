@@ -7,6 +7,8 @@ import { actualWasteQueryOptions, planningSettingsQueryOptions } from '@/feature
 import { WasteByMember } from '@/features/forecast/components/measured-waste';
 import { PlanningSettingsForm } from '@/features/forecast/components/planning-settings-form';
 import { PlanningSettingsView } from '@/features/forecast/components/planning-settings-view';
+import { paymentSettingsQueryOptions } from '@/features/payments/api/get-payment-settings';
+import { PaymentSettingsCard } from '@/features/payments/components/payment-settings-card';
 import { cribSettingsQueryOptions } from '@/features/signoffs/api/get-crib-settings';
 import { HoldTimeCard } from '@/features/signoffs/components/hold-time-card';
 import { TimeZoneCard } from '@/features/signoffs/components/time-zone-card';
@@ -18,6 +20,7 @@ export const settingsLoader = (queryClient: QueryClient) => async ({ request }: 
   await Promise.all([
     queryClient.ensureQueryData(planningSettingsQueryOptions()),
     queryClient.ensureQueryData(cribSettingsQueryOptions()),
+    queryClient.ensureQueryData(paymentSettingsQueryOptions()),
     hasRole(me.role, 'lead') ? queryClient.ensureQueryData(actualWasteQueryOptions()) : null,
   ]);
   return null;
@@ -45,13 +48,14 @@ function LeadPlanning() {
 
 /**
  * The chapter's settings in one place: the figures behind estimates and orders, how long a returned
- * tool is held, and the chapter's clock. Everyone may read them; only a chapter lead gets the forms,
+ * tool is held, the chapter's clock, and whether members may pay their tab online. Everyone may read them; only a chapter lead gets the forms,
  * as only a lead may change them on the server.
  */
 export function SettingsRoute() {
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const { data: planning } = useSuspenseQuery(planningSettingsQueryOptions());
   const { data: crib } = useSuspenseQuery(cribSettingsQueryOptions());
+  const { data: payments } = useSuspenseQuery(paymentSettingsQueryOptions());
   const isLead = !!me && hasRole(me.role, 'lead');
   return (
     <>
@@ -59,8 +63,8 @@ export function SettingsRoute() {
         title="Settings"
         lead={
           isLead
-            ? 'The chapter’s figures behind rivet estimates and suggested orders, how long a returned tool is held, and the chapter’s clock.'
-            : 'The chapter’s figures behind rivet estimates and suggested orders, how long a returned tool is held, and the chapter’s clock. Only the chapter lead changes them.'
+            ? 'The chapter’s figures behind rivet estimates and suggested orders, how long a returned tool is held, the chapter’s clock and online payment.'
+            : 'The chapter’s figures behind rivet estimates and suggested orders, how long a returned tool is held, the chapter’s clock and online payment. Only the chapter lead changes them.'
         }
       />
       <div className="flex flex-col gap-4">
@@ -73,6 +77,7 @@ export function SettingsRoute() {
         )}
         <HoldTimeCard holdHours={crib.holdHours} canChange={isLead} />
         <TimeZoneCard timeZone={crib.timeZone} canChange={isLead} />
+        <PaymentSettingsCard settings={payments} canChange={isLead} />
       </div>
     </>
   );

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import type { Tab } from '@shared/schemas/stock-money';
 import { Card } from '@/components/ui/page';
 import { dayOf, dollars } from './format';
@@ -21,11 +22,15 @@ function PaymentList({ tab }: { tab: Tab }) {
   );
 }
 
-/** A member's tab: the balance, then where the money went (month, assembly, entry) and what was paid. */
-export function TabView({ tab }: { tab: Tab }) {
+/**
+ * A member's tab: the balance, then what the page offers to do about it (`afterBalance`, e.g. paying
+ * online), then where the money went (month, assembly, entry) and what was paid.
+ */
+export function TabView({ tab, afterBalance }: { tab: Tab; afterBalance?: ReactNode }) {
   return (
     <div className="flex flex-col gap-4">
       <TabSummary tab={tab} />
+      {afterBalance}
       <div className="grid gap-4 lg:grid-cols-2">
         <Card title="By month">
           <TabByMonth tab={tab} />

@@ -1,0 +1,28 @@
+import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { migrate } from 'drizzle-orm/better-sqlite3/migrator';
+import { expect } from 'vitest';
+import { MIGRATIONS, openDatabase, type Database } from '../../server/db/client';
+
+/**
+ * An in-memory database migrated up to, not including, the migration whose tag ends with `tagEnd`
+ * (e.g. `_bin_grip_range`), handed to `use` to fill with rows before a test runs the rest with
+ * `migrateDatabase`. The database is closed afterwards.
+ */
+export function withDatabaseBefore(tagEnd: string, use: (db: Database) => void): void {
+  const journal = JSON.parse(readFileSync(join(MIGRATIONS, 'meta/_journal.json'), 'utf8')) as { entries: { tag: string }[] };
+  const at = journal.entries.findIndex((e) => e.tag.endsWith(tagEnd));
+  expect(at).toBeGreaterThan(0);
+  const dir = mkdtempSync(join(tmpdir(), 'gripline-migrations-'));
+  const db = openDatabase(':memory:');
+  try {
+    cpSync(MIGRATIONS, dir, { recursive: true });
+    writeFileSync(join(dir, 'meta/_journal.json'), JSON.stringify({ ...journal, entries: journal.entries.slice(0, at) }));
+    migrate(db, { migrationsFolder: dir });
+    use(db);
+  } finally {
+    db.$client.close();
+    rmSync(dir, { recursive: true, force: true });
+  }
+}

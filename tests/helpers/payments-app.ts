@@ -1,0 +1,67 @@
+import { createServer, type Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { pino } from 'pino';
+import { expect } from 'vitest';
+import { checkoutResponseSchema } from '@shared/schemas/payments';
+import { startFakeProvider, type FakeProvider } from '../../server/payments/fake-provider';
+import { createPaymentsSetup, type PaymentsSetup } from '../../server/payments/payments-client';
+import { addBinAs, blindRivetBin, post } from './crib';
+import { buildTestApp, type SignedInAgent, type TestApp } from './test-app';
+
+/** A test app that listens for real, with the fake provider sending its webhooks to it over loopback. */
+export interface PaymentsApp {
+  t: TestApp;
+  fake: FakeProvider;
+  setup: PaymentsSetup;
+  /** What the app logged at warn and above, one JSON line each. */
+  logged: string[];
+  close(): Promise<void>;
+}
+
+/** `webhooksLost`: the fake's webhooks go to a closed port, as when the provider's delivery is delayed. */
+export async function startPaymentsApp({ webhooksLost = false } = {}): Promise<PaymentsApp> {
+  const server: Server = createServer();
+  await new Promise<void>((ok) => server.listen(0, '127.0.0.1', () => ok()));
+  const { port } = server.address() as AddressInfo;
+  const fake = await startFakeProvider({ webhookUrl: `http://127.0.0.1:${webhooksLost ? 1 : port}/api/payments/webhook` });
+  const setup = createPaymentsSetup({ secretKey: fake.secretKey, webhookSecret: fake.webhookSecret, fake });
+  const logged: string[] = [];
+  const t = await buildTestApp({ payments: setup, logger: pino({ level: 'warn' }, { write: (line: string) => logged.push(line) }) });
+  server.on('request', t.app);
+  return {
+    t,
+    fake,
+    setup,
+    logged,
+    async close() {
+      await new Promise<void>((ok) => {
+        server.close(() => ok());
+        server.closeAllConnections();
+      });
+      await fake.close();
+      await t.close();
+    },
+  };
+}
+
+/** Puts `quantity` blind rivets at $0.12 on `who`'s tab by a real draw from a new bin. */
+export async function drawOnTab(quartermaster: SignedInAgent, who: SignedInAgent, quantity: number): Promise<void> {
+  const rivets = await addBinAs(quartermaster, blindRivetBin());
+  const res = await post(who, `/api/bins/${rivets.code}/draw`, { quantity });
+  expect(res.status).toBe(201);
+}
+
+export async function checkout(who: SignedInAgent, body: object = {}): Promise<string> {
+  const res = await post(who, '/api/payments/checkout', body);
+  expect(res.status, JSON.stringify(res.body)).toBe(201);
+  return checkoutResponseSchema.parse(res.body).url;
+}
+
+/** Presses a button on the fake's hosted page; answers where the payer is sent. */
+export async function press(url: string, choice: 'pay' | 'cancel'): Promise<string> {
+  const res = await fetch(url, { method: 'POST', body: new URLSearchParams({ choice }), redirect: 'manual' });
+  expect(res.status).toBe(303);
+  return res.headers.get('location')!;
+}
+
+export const sessionIdOf = (url: string) => url.split('/').pop()!;

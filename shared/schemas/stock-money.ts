@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { BIN_KINDS, MOVEMENT_KINDS } from '../stock/kinds';
 import { assemblyNameSchema } from './bins';
 import { idParam } from './fields';
+import { PAYMENT_METHODS } from './payment-methods';
 
 /** A payment is at most $10,000: a larger figure is almost surely a typing slip. */
 export const MAX_PAYMENT_CENTS = 1_000_000;
@@ -19,16 +20,20 @@ const paymentNoteField = z.string().trim().max(500, { error: 'Keep the note unde
 export const recordPaymentBodySchema = z.object({ userId: payerField, amountCents: amountCentsField, note: paymentNoteField.optional() }).strict();
 export type RecordPaymentBody = z.infer<typeof recordPaymentBodySchema>;
 
-/** The payment form: the amount typed in dollars and cents ("12.50", "$12.50"), sent as cents. */
-export const paymentFormSchema = z.object({
-  userId: payerField,
-  amount: z
-    .string({ error: 'Enter the amount paid.' })
+/** An amount typed in dollars and cents ("12.50", "$12.50", "1,200"), checked as whole cents by `cents`. */
+export const dollarsField = (missing: string, cents: z.ZodType<number, number>) =>
+  z
+    .string({ error: missing })
     .trim()
     .transform((s) => s.replace(/^\$/, '').replace(/,/g, ''))
     .refine((s) => /^\d+(\.\d{1,2})?$/.test(s), { error: 'Enter dollars and cents, like 12.50.' })
     .transform((s) => Math.round(Number(s) * 100))
-    .pipe(amountCentsField),
+    .pipe(cents);
+
+/** The payment form: the amount typed in dollars and cents ("12.50", "$12.50"), sent as cents. */
+export const paymentFormSchema = z.object({
+  userId: payerField,
+  amount: dollarsField('Enter the amount paid.', amountCentsField),
   note: paymentNoteField.optional(),
 });
 
@@ -57,6 +62,9 @@ export const paymentSchema = z.strictObject({
   at: z.string(),
   note: z.string(),
   recordedBy: person,
+  method: z.enum(PAYMENT_METHODS),
+  /** What has been handed back on it (online payments, through the provider). */
+  refundedCents: z.number(),
 });
 export type Payment = z.infer<typeof paymentSchema>;
 
@@ -82,10 +90,11 @@ export type TabEntry = z.infer<typeof tabEntrySchema>;
 export const tabSchema = z.strictObject({
   member: person,
   chargedCents: z.number(),
+  /** Paid less refunded. */
   paidCents: z.number(),
   /** charged − paid: what the member still owes (negative when paid ahead). */
   balanceCents: z.number(),
-  /** Months with any charge or payment, newest first. */
+  /** Months with any charge, payment or refund, newest first (a refund counts in its own month, against paid). */
   byMonth: z.array(z.strictObject({ month, chargedCents: z.number(), paidCents: z.number() })),
   /** Net units taken and their value per assembly; null is stock not tied to an assembly. */
   byAssembly: z.array(z.strictObject({ assemblyId: z.number().nullable(), assembly: assemblyNameSchema.nullable(), quantity: z.number(), chargedCents: z.number() })),

@@ -1,9 +1,11 @@
-import Stripe from 'stripe';
-import { MIN_ONLINE_PAYMENT_CENTS, type CheckoutBody, type CheckoutResponse } from '@shared/schemas/payments';
+import type Stripe from 'stripe';
+import type { PaymentMethod } from '@shared/schemas/payment-methods';
+import { MIN_ONLINE_PAYMENT_CENTS, type CheckoutBody, type CheckoutResponse, type PaymentListItem } from '@shared/schemas/payments';
 import { centsWords } from '@shared/stock/money';
 import { findUserById } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
 import type { Executor } from '../../db/client';
+import type { PaymentRefundRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import type { Logger } from '../../lib/logger';
@@ -11,16 +13,42 @@ import { paymentReceiptMail } from '../../mail/messages';
 import { queueMail } from '../../mail/outbox';
 import type { PaymentsSetup } from '../../payments/payments-client';
 import { readPaymentCurrency } from '../../settings/payment-currency';
+import { providerCall } from './provider-call';
+import { recordChargeRefunds } from './refunds.service';
 import { closeOnlinePayment, insertOnlinePayment, onlinePaymentBySession } from './payments.repo';
+
+/** Which payments to list: from and before moments, and cash or online. */
+export interface PaymentFilter {
+  from?: Date;
+  to?: Date;
+  method?: PaymentMethod;
+}
+
+/** Money handed back on a payment, once per provider refund id. */
+export interface RefundEntry {
+  memberPaymentId: number;
+  amountCents: number;
+  at: Date;
+  providerRefundId: string;
+  /** Who made it in Gripline; null for a refund made in the provider's dashboard. */
+  recordedById: number | null;
+  note: string;
+}
 
 /** The stock feature's tab, handed in by the app: what a member owes, and recording a payment on it. */
 export interface TabLedger {
   balanceCents(db: Executor, userId: number): number;
   recordPayment(db: Executor, member: UserRow, amountCents: number, at: Date, note: string): number;
+  /** Everyone's payments, cash and online, newest first, with what was refunded and what is left. */
+  listPayments(db: Executor, filter: PaymentFilter): PaymentListItem[];
+  /** One payment on a tab; undefined when there is none. */
+  payment(db: Executor, id: number): PaymentListItem | undefined;
+  /** Records money handed back on a payment (the balance goes up), once per provider refund id. */
+  recordRefund(db: Executor, entry: RefundEntry): { refund: PaymentRefundRow; created: boolean };
 }
 
 /** My tab, where a receipt points. */
-const myTabPage = (ctx: ServiceContext) => `${ctx.publicUrl}/tab`;
+export const myTabPage = (ctx: ServiceContext) => `${ctx.publicUrl}/tab`;
 /** The page a member comes back to from the hosted checkout. */
 const myTabUrl = (ctx: ServiceContext, outcome: 'paid' | 'cancelled') => `${myTabPage(ctx)}?payment=${outcome}`;
 
@@ -39,16 +67,8 @@ function amountToPay(balanceCents: number, asked: number | undefined): number {
   return amount;
 }
 
-/** The provider down or unreachable is the chapter's problem to retry, not a fault in Gripline. */
 async function openHostedCheckout(setup: PaymentsSetup, params: Stripe.Checkout.SessionCreateParams): Promise<Stripe.Checkout.Session> {
-  try {
-    return await setup.provider.checkout.sessions.create(params);
-  } catch (err) {
-    if (err instanceof Stripe.errors.StripeConnectionError || err instanceof Stripe.errors.StripeAPIError) {
-      throw new HttpError(502, 'PROVIDER_UNAVAILABLE', 'The payment provider could not be reached. Try again in a minute, or pay the quartermaster in cash.');
-    }
-    throw err;
-  }
+  return providerCall(() => setup.provider.checkout.sessions.create(params), 'The payment provider could not be reached. Try again in a minute, or pay the quartermaster in cash.');
 }
 
 /**
@@ -106,13 +126,18 @@ function settleCheckout(ctx: ServiceContext, tab: TabLedger, logger: Logger, eve
     }
     const member = findUserById(tx, row.userId)!;
     const memberPaymentId = tab.recordPayment(tx, member, row.amountCents, now, 'Paid online');
-    if (!closeOnlinePayment(tx, row.id, { state: 'paid', eventId, memberPaymentId, updatedAt: now })) throw new Error(`checkout ${row.id} closed twice`);
+    const paymentIntentId = typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
+    if (!closeOnlinePayment(tx, row.id, { state: 'paid', eventId, memberPaymentId, paymentIntentId, updatedAt: now })) throw new Error(`checkout ${row.id} closed twice`);
     queueMail(tx, paymentReceiptMail(member.email, member.name, row.amountCents, tab.balanceCents(tx, member.id), myTabPage(ctx)), now);
   });
 }
 
-/** The provider's webhook: verified first, then a completed checkout is settled; other events are acknowledged. */
-export function receiveProviderEvent(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, logger: Logger, rawBody: Buffer, signature: string | string[] | undefined): void {
+/**
+ * The provider's webhook: verified first, then a completed checkout is settled and refunds on a
+ * charge are recorded; other events are acknowledged.
+ */
+export async function receiveProviderEvent(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, logger: Logger, rawBody: Buffer, signature: string | string[] | undefined): Promise<void> {
   const event = verifiedEvent(setup, rawBody, signature);
   if (event.type === 'checkout.session.completed') settleCheckout(ctx, tab, logger, event.id, event.data.object);
+  if (event.type === 'charge.refunded') await recordChargeRefunds(ctx, setup, tab, logger, event.data.object);
 }

@@ -97,7 +97,8 @@ export async function recordChargeRefunds(ctx: ServiceContext, setup: PaymentsSe
       recordRefundOnTab(ctx, tx, tab, {
         memberPaymentId,
         amountCents: r.amount,
-        at: new Date(r.created * 1000),
+        // When Gripline learned of it, on the same clock as every other entry on the tab.
+        at: ctx.now(),
         providerRefundId: r.id,
         recordedById: null,
         note: 'Refunded in the provider’s dashboard',

@@ -1,7 +1,12 @@
+import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { eq } from 'drizzle-orm';
+import { migrate } from 'drizzle-orm/better-sqlite3/migrator';
 import Papa from 'papaparse';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { paymentListSchema, refundSchema, type PaymentListItem } from '@shared/schemas/payments';
+import { MIGRATIONS, migrateDatabase, openDatabase } from '../../server/db/client';
 import { outboxMail } from '../../server/db/schema/mail';
 import { onlinePayments } from '../../server/db/schema/payments';
 import { memberPayments, paymentRefunds } from '../../server/db/schema/stock';
@@ -286,5 +291,37 @@ describe('GET /api/payments/export.csv', () => {
     const onlineOnly = await lead.agent.get('/api/payments/export.csv?method=online');
     expect(onlineOnly.headers['content-disposition']).toBe('attachment; filename="gripline-payments-2026-12-01-to-2026-12-01-online.csv"');
     expect(Papa.parse(onlineOnly.text.replace(/^\uFEFF/, ''), { skipEmptyLines: true }).data).toHaveLength(2);
+  });
+});
+
+describe('migration payment_refunds', () => {
+  it('marks the payments that a paid checkout made as online, and the rest as cash', () => {
+    const journal = JSON.parse(readFileSync(join(MIGRATIONS, 'meta/_journal.json'), 'utf8')) as { entries: { tag: string }[] };
+    const at = journal.entries.findIndex((e) => e.tag.endsWith('_payment_refunds'));
+    expect(at).toBeGreaterThan(0);
+    const dir = mkdtempSync(join(tmpdir(), 'gripline-migrations-'));
+    try {
+      cpSync(MIGRATIONS, dir, { recursive: true });
+      writeFileSync(join(dir, 'meta/_journal.json'), JSON.stringify({ ...journal, entries: journal.entries.slice(0, at) }));
+      const db = openDatabase(':memory:');
+      migrate(db, { migrationsFolder: dir });
+      db.$client.prepare("insert into users (id, email, name, role, password_hash) values (1, 'm@example.org', 'M', 'member', 'x')").run();
+      const pay = db.$client.prepare('insert into member_payments (id, user_id, amount_cents, at, note, recorded_by_id) values (?, 1, ?, 0, ?, 1)');
+      pay.run(1, 500, 'cash at the bench');
+      pay.run(2, 900, 'Paid online');
+      db.$client
+        .prepare("insert into online_payments (session_id, user_id, amount_cents, currency, state, member_payment_id, created_at, updated_at) values ('cs_1', 1, 900, 'usd', 'paid', 2, 0, 0)")
+        .run();
+      db.$client.prepare("insert into online_payments (session_id, user_id, amount_cents, currency, created_at, updated_at) values ('cs_2', 1, 300, 'usd', 0, 0)").run();
+      migrateDatabase(db);
+      expect(db.$client.prepare('select id, amount_cents, method from member_payments order by id').all()).toEqual([
+        { id: 1, amount_cents: 500, method: 'cash' },
+        { id: 2, amount_cents: 900, method: 'online' },
+      ]);
+      expect(db.$client.prepare('select count(*) as n from payment_refunds').get()).toEqual({ n: 0 });
+      db.$client.close();
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 });

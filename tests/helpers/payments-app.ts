@@ -7,7 +7,7 @@ import { startFakeProvider, type FakeProvider } from '../../server/payments/fake
 import { createPaymentsSetup, type PaymentsSetup } from '../../server/payments/payments-client';
 import { addBinAs, blindRivetBin, post } from './crib';
 import { buildTestApp, type SignedInAgent, type TestApp } from './test-app';
-import type { AppConfig } from '../../server/app';
+import type { AppConfig } from '../../server/config';
 
 export interface PaymentsTestApp {
   t: TestApp;

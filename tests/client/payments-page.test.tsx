@@ -3,8 +3,10 @@ import userEvent from '@testing-library/user-event';
 import { Suspense } from 'react';
 import { beforeEach, describe, expect, it } from 'vitest';
 import type { PaymentListItem } from '@shared/schemas/payments';
+import type { Tab } from '@shared/schemas/stock-money';
 import { PaymentsRoute } from '@/app/routes/app/payments';
 import { stockMoneyKeys } from '@/features/stock-money/api/keys';
+import { TabView } from '@/features/stock-money/components/tab-view';
 import { setCsrfToken } from '@/lib/api-client';
 import { fakeFetch, renderWithProviders, type FakeCall } from '../helpers/render';
 
@@ -133,5 +135,28 @@ describe('the refund step', () => {
     await user.click(screen.getByRole('button', { name: 'Cancel' }));
     expect(screen.queryByRole('region', { name: /Refund/ })).toBeNull();
     expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
+  });
+});
+
+describe('My tab’s payments', () => {
+  it('says what was refunded on a payment', () => {
+    const tab: Tab = {
+      member: MIA,
+      chargedCents: 1440,
+      paidCents: 940,
+      balanceCents: 500,
+      byMonth: [{ month: '2026-12', chargedCents: 1440, paidCents: 940 }],
+      byAssembly: [],
+      recent: [],
+      payments: [
+        { id: 7, userId: 2, amountCents: 1440, at: ONLINE.at, note: 'Paid online', recordedBy: MIA, method: 'online', refundedCents: 500 },
+        { id: 5, userId: 2, amountCents: 700, at: CASH.at, note: 'at the bench', recordedBy: MIA, method: 'cash', refundedCents: 0 },
+      ],
+    };
+    renderWithProviders(<TabView tab={tab} />);
+    const payments = screen.getByRole('heading', { name: 'Payments' }).parentElement!;
+    const [online, cash] = within(payments).getAllByRole('listitem');
+    expect(online!.textContent).toContain('Refunded $5.00');
+    expect(cash!.textContent).not.toContain('Refunded');
   });
 });

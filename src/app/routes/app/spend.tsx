@@ -55,7 +55,7 @@ export function SpendRoute() {
         </Card>
         <Card title="Members’ tabs">
           <MemberTabs tabs={tabs} />
-          <Link to="/payments" className="mt-3 inline-block font-semibold underline underline-offset-4">
+          <Link to="/payments" className="mt-3 inline-flex min-h-12 items-center font-semibold underline underline-offset-4">
             Every payment, cash and online, with refunds
           </Link>
         </Card>

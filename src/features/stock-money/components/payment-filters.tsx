@@ -22,7 +22,7 @@ export function PaymentFilters({ query }: { query: PaymentsQuery }) {
           Show
         </Button>
       </Form>
-      <a href={paymentsCsvUrl(query)} download className="self-start font-semibold underline underline-offset-4">
+      <a href={paymentsCsvUrl(query)} download className="inline-flex min-h-12 items-center self-start rounded-lg border-2 border-ink px-5 font-semibold text-ink">
         Export CSV
       </a>
     </div>

@@ -80,6 +80,8 @@ const GETS = (): string[] => [
   '/api/stock/tabs',
   `/api/stock/tabs/${ids.user}`,
   '/api/stock/spend',
+  '/api/payments?method=online',
+  '/api/payments/export.csv?from=2026-11-01',
   '/api/builds',
   `/api/builds/${ids.build}`,
   '/api/assemblies',

@@ -1,15 +1,12 @@
-import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { migrate } from 'drizzle-orm/better-sqlite3/migrator';
 import Papa from 'papaparse';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { importPreviewSchema } from '@shared/schemas/bin-import';
 import { binFieldsSchema, type BinFields } from '@shared/schemas/bins';
 import { errorEnvelopeSchema } from '@shared/schemas/errors';
-import { MIGRATIONS, migrateDatabase, openDatabase } from '../../server/db/client';
+import { migrateDatabase } from '../../server/db/client';
 import { findBinLabels } from '../../server/features/labels/labels.repo';
 import { addBinAs, blindRivetBin, patch, post } from '../helpers/crib';
+import { beforeMigration } from '../helpers/migrations';
 import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
 
 // Grip bands by dash from TM 10-5410-221-14/1 Table 4-3: −2 0.063–0.125 in, −3 0.126–0.187 in, −4 0.188–0.250 in.
@@ -209,15 +206,7 @@ describe('the grip range in the bins CSV', () => {
 
 describe('migration bin_grip_range', () => {
   it('gives blind bins stocked before it the table’s band for their dash, and other bins none', () => {
-    const journal = JSON.parse(readFileSync(join(MIGRATIONS, 'meta/_journal.json'), 'utf8')) as { entries: { tag: string }[] };
-    const at = journal.entries.findIndex((e) => e.tag.endsWith('_bin_grip_range'));
-    expect(at).toBeGreaterThan(0);
-    const dir = mkdtempSync(join(tmpdir(), 'gripline-migrations-'));
-    try {
-      cpSync(MIGRATIONS, dir, { recursive: true });
-      writeFileSync(join(dir, 'meta/_journal.json'), JSON.stringify({ ...journal, entries: journal.entries.slice(0, at) }));
-      const db = openDatabase(':memory:');
-      migrate(db, { migrationsFolder: dir });
+    beforeMigration('bin_grip_range', (db) => {
       const insert = db.$client.prepare('insert into bins (code, kind, head, material, diameter32, grip16, length16, name) values (?, ?, ?, ?, ?, ?, ?, ?)');
       insert.run('B-0001', 'blind_structural', 'dome', '5056', 4, 1, null, '');
       insert.run('B-0002', 'blind_general', 'dome', 'aluminium', 4, 8, null, '');
@@ -232,9 +221,6 @@ describe('migration bin_grip_range', () => {
         { code: 'B-0003', grip_min: null, grip_max: null },
         { code: 'B-0004', grip_min: null, grip_max: null },
       ]);
-      db.$client.close();
-    } finally {
-      rmSync(dir, { recursive: true, force: true });
-    }
+    });
   });
 });

@@ -1,17 +1,14 @@
-import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { eq } from 'drizzle-orm';
-import { migrate } from 'drizzle-orm/better-sqlite3/migrator';
 import Papa from 'papaparse';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { paymentListSchema, refundSchema, type PaymentListItem } from '@shared/schemas/payments';
-import { MIGRATIONS, migrateDatabase, openDatabase } from '../../server/db/client';
+import { migrateDatabase } from '../../server/db/client';
 import { outboxMail } from '../../server/db/schema/mail';
 import { onlinePayments } from '../../server/db/schema/payments';
 import { memberPayments, paymentRefunds } from '../../server/db/schema/stock';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { post } from '../helpers/crib';
+import { beforeMigration } from '../helpers/migrations';
 import { startPaymentsApp, type PaymentsTestApp } from '../helpers/payments-app';
 import type { Crew, SignedInAgent, TestApp } from '../helpers/test-app';
 
@@ -296,15 +293,7 @@ describe('GET /api/payments/export.csv', () => {
 
 describe('migration payment_refunds', () => {
   it('marks the payments that a paid checkout made as online, and the rest as cash', () => {
-    const journal = JSON.parse(readFileSync(join(MIGRATIONS, 'meta/_journal.json'), 'utf8')) as { entries: { tag: string }[] };
-    const at = journal.entries.findIndex((e) => e.tag.endsWith('_payment_refunds'));
-    expect(at).toBeGreaterThan(0);
-    const dir = mkdtempSync(join(tmpdir(), 'gripline-migrations-'));
-    try {
-      cpSync(MIGRATIONS, dir, { recursive: true });
-      writeFileSync(join(dir, 'meta/_journal.json'), JSON.stringify({ ...journal, entries: journal.entries.slice(0, at) }));
-      const db = openDatabase(':memory:');
-      migrate(db, { migrationsFolder: dir });
+    beforeMigration('payment_refunds', (db) => {
       db.$client.prepare("insert into users (id, email, name, role, password_hash) values (1, 'm@example.org', 'M', 'member', 'x')").run();
       const pay = db.$client.prepare('insert into member_payments (id, user_id, amount_cents, at, note, recorded_by_id) values (?, 1, ?, 0, ?, 1)');
       pay.run(1, 500, 'cash at the bench');
@@ -319,9 +308,6 @@ describe('migration payment_refunds', () => {
         { id: 2, amount_cents: 900, method: 'online' },
       ]);
       expect(db.$client.prepare('select count(*) as n from payment_refunds').get()).toEqual({ n: 0 });
-      db.$client.close();
-    } finally {
-      rmSync(dir, { recursive: true, force: true });
-    }
+    });
   });
 });

@@ -164,3 +164,5 @@ export const paymentRefunds = sqliteTable(
 export type BinRow = typeof bins.$inferSelect;
 export type MovementRow = typeof stockMovements.$inferSelect;
 export type PaymentRefundRow = typeof paymentRefunds.$inferSelect;
+/** A refund to record: always with the provider's refund id, which records it once. */
+export type NewPaymentRefund = Omit<typeof paymentRefunds.$inferInsert, 'id' | 'providerRefundId'> & { providerRefundId: string };

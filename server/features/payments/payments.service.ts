@@ -5,7 +5,7 @@ import { centsWords } from '@shared/stock/money';
 import { findUserById } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
 import type { Executor } from '../../db/client';
-import type { PaymentRefundRow } from '../../db/schema/stock';
+import type { NewPaymentRefund, PaymentRefundRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import type { Logger } from '../../lib/logger';
@@ -24,17 +24,6 @@ export interface PaymentFilter {
   method?: PaymentMethod;
 }
 
-/** Money handed back on a payment, once per provider refund id. */
-export interface RefundEntry {
-  memberPaymentId: number;
-  amountCents: number;
-  at: Date;
-  providerRefundId: string;
-  /** Who made it in Gripline; null for a refund made in the provider's dashboard. */
-  recordedById: number | null;
-  note: string;
-}
-
 /** The stock feature's tab, handed in by the app: what a member owes, and recording a payment on it. */
 export interface TabLedger {
   balanceCents(db: Executor, userId: number): number;
@@ -44,7 +33,7 @@ export interface TabLedger {
   /** One payment on a tab; undefined when there is none. */
   payment(db: Executor, id: number): PaymentListItem | undefined;
   /** Records money handed back on a payment (the balance goes up), once per provider refund id. */
-  recordRefund(db: Executor, entry: RefundEntry): { refund: PaymentRefundRow; created: boolean };
+  recordRefund(db: Executor, entry: NewPaymentRefund): { refund: PaymentRefundRow; created: boolean };
 }
 
 /** My tab, where a receipt points. */

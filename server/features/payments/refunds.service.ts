@@ -4,14 +4,14 @@ import { centsWords } from '@shared/stock/money';
 import { findUserById } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
 import type { Executor } from '../../db/client';
-import type { PaymentRefundRow } from '../../db/schema/stock';
+import type { NewPaymentRefund, PaymentRefundRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import type { Logger } from '../../lib/logger';
 import { paymentRefundMail } from '../../mail/messages';
 import { queueMail } from '../../mail/outbox';
 import type { PaymentsSetup } from '../../payments/payments-client';
-import { myTabPage, type RefundEntry, type TabLedger } from './payments.service';
+import { myTabPage, type TabLedger } from './payments.service';
 import { onlinePaymentByIntent, onlinePaymentByMemberPayment } from './payments.repo';
 import { providerCall } from './provider-call';
 
@@ -39,7 +39,7 @@ function amountToRefund(payment: PaymentListItem, asked: number | undefined): nu
  * Records a refund on the member's tab (their balance goes back up) and, the first time it is
  * recorded, mails the member; in the caller's transaction.
  */
-function recordRefundOnTab(ctx: ServiceContext, tx: Executor, tab: TabLedger, entry: RefundEntry): PaymentRefundRow {
+function recordRefundOnTab(ctx: ServiceContext, tx: Executor, tab: TabLedger, entry: NewPaymentRefund): PaymentRefundRow {
   const { refund, created } = tab.recordRefund(tx, entry);
   if (created) {
     const payment = tab.payment(tx, entry.memberPaymentId)!;

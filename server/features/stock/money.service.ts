@@ -5,7 +5,7 @@ import { BIN_KINDS, type BinKind } from '@shared/stock/kinds';
 import { findUserById } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
 import type { Executor } from '../../db/client';
-import type { MovementRow, PaymentRefundRow } from '../../db/schema/stock';
+import type { MovementRow, NewPaymentRefund, PaymentRefundRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
@@ -188,26 +188,16 @@ export function tabPayment(db: Executor, id: number): PaymentListItem | undefine
   return row && paymentListItem(row);
 }
 
-export interface RefundEntry {
-  memberPaymentId: number;
-  amountCents: number;
-  at: Date;
-  providerRefundId: string;
-  /** Who made it in Gripline; null for a refund made in the provider's dashboard. */
-  recordedById: number | null;
-  note: string;
-}
-
 /**
  * Records money handed back on a payment, in the caller's transaction: the member's balance goes
  * up by it. Once per provider refund: when it is already recorded (the provider's webhook came
  * first), nothing is added, the person who made it is filled in, and `created` is false.
  */
-export function recordRefund(db: Executor, entry: RefundEntry): { refund: PaymentRefundRow; created: boolean } {
+export function recordRefund(db: Executor, entry: NewPaymentRefund): { refund: PaymentRefundRow; created: boolean } {
   const inserted = insertRefund(db, entry);
   if (inserted) return { refund: inserted, created: true };
   const existing = refundByProviderId(db, entry.providerRefundId)!;
-  if (entry.recordedById !== null && existing.recordedById === null) claimRefund(db, existing.id, entry.recordedById, entry.note);
+  if (entry.recordedById != null && existing.recordedById === null) claimRefund(db, existing.id, entry.recordedById, entry.note ?? '');
   return { refund: refundByProviderId(db, entry.providerRefundId)!, created: false };
 }
 

@@ -172,6 +172,34 @@ describe('POST /api/payments/:id/refund', () => {
   });
 });
 
+describe('the fake provider’s refunds', () => {
+  const refundAtFake = (form: Record<string, string>) =>
+    fetch(`http://127.0.0.1:${p.fake.port}/v1/refunds`, { method: 'POST', headers: { authorization: `Bearer ${p.fake.secretKey}` }, body: new URLSearchParams(form) });
+
+  it('refuses an unknown payment or more than is left in the provider’s error shape', async () => {
+    const payment = await paidOnline();
+    const unknown = await refundAtFake({ payment_intent: 'pi_nobody' });
+    expect(unknown.status).toBe(400);
+    expect(await unknown.json()).toEqual({ error: { type: 'invalid_request_error', code: 'resource_missing', message: "No such payment_intent: 'pi_nobody'" } });
+    const over = await refundAtFake({ payment_intent: intentOf(payment.id), amount: String(TAB_CENTS + 1) });
+    expect(over.status).toBe(400);
+    expect(await over.json()).toEqual({
+      error: { type: 'invalid_request_error', code: 'amount_too_large', message: `Refund amount (${TAB_CENTS + 1}) is greater than unrefunded amount on charge (${TAB_CENTS}).` },
+    });
+  });
+
+  it('answers 409 with the provider’s reason when it refuses a refund Gripline thought possible', async () => {
+    const payment = await paidOnline();
+    await p.fake.refundInDashboard(intentOf(payment.id), 1000);
+    // As if the provider's event about it had never arrived.
+    t.db.delete(paymentRefunds).run();
+    const res = await refund(lead, payment.id);
+    expect(res.status).toBe(409);
+    expect(res.body.error).toMatchObject({ code: 'PROVIDER_REFUSED', message: `The payment provider refused: Refund amount (${TAB_CENTS}) is greater than unrefunded amount on charge (${TAB_CENTS - 1000}).` });
+    expect(refundRows()).toEqual([]);
+  });
+});
+
 describe('the provider’s charge.refunded webhook', () => {
   it('records a refund made in the provider’s dashboard once, however often it is delivered', async () => {
     const payment = await paidOnline();

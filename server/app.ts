@@ -21,8 +21,8 @@ import { forecastRouter, planningSettingsRouter, wasteRouter } from './features/
 import { endHoldsOfPerson, placeHold } from './features/tools/holds.service';
 import { binCsvRouter, binImportBodyParsers } from './features/stock/stock-csv.router';
 import { stockMoneyRouter } from './features/stock/money.router';
-import { recordOnlinePayment, tabBalanceCents } from './features/stock/money.service';
 import { paymentSettingsRouter } from './features/payments/payment-settings.router';
+import { listTabPayments, recordOnlinePayment, recordRefund, tabBalanceCents, tabPayment } from './features/stock/money.service';
 import { paymentsRouter, paymentsWebhookRouter } from './features/payments/payments.router';
 import { mailRouter } from './features/mail/mail.router';
 import { passwordResetRouter } from './features/password-reset/password-reset.router';
@@ -87,7 +87,7 @@ export function createApp(config: AppConfig) {
   const { middleware: session, store } = sessionMiddleware(config);
 
   // Tabs belong to stock: the app hands the payments feature the way to read and settle one.
-  const tab = { balanceCents: tabBalanceCents, recordPayment: recordOnlinePayment };
+  const tab = { balanceCents: tabBalanceCents, recordPayment: recordOnlinePayment, listPayments: listTabPayments, payment: tabPayment, recordRefund };
   // The provider's webhook reads its raw body and carries no session: it goes ahead of the API stack.
   app.use('/api/payments/webhook', noStore, paymentsWebhookRouter(ctx, config.payments, tab));
 

@@ -184,3 +184,20 @@ export function paymentReceiptMail(to: string, name: string, amountCents: number
     ].join('\n'),
   };
 }
+
+/** Tells a member that an online payment was refunded; `balanceCents` is what they owe after it. */
+export function paymentRefundMail(to: string, name: string, amountCents: number, balanceCents: number, link: string): OutgoingMail {
+  return {
+    to,
+    subject: `Refund: ${centsWords(amountCents)} back to your card`,
+    text: [
+      `Hello ${name},`,
+      ``,
+      `The chapter refunded ${centsWords(amountCents)} of your online tab payment. It goes back to the card you paid with; the provider may take a few days to show it.`,
+      balanceCents > 0 ? `Your tab now shows ${centsWords(balanceCents)} owed.` : `Your tab is settled.`,
+      ``,
+      `See your tab:`,
+      link,
+    ].join('\n'),
+  };
+}

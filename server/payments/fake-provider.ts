@@ -4,6 +4,7 @@ import { request as httpsRequest } from 'node:https';
 import type { AddressInfo } from 'node:net';
 import Stripe from 'stripe';
 import { centsWords } from '@shared/stock/money';
+import { fakeRefunds } from './fake-refunds';
 
 /** The key the SDK sends to the fake; any other key is refused as the provider would. */
 export const FAKE_SECRET_KEY = 'sk_test_gripline_local_fake';
@@ -13,6 +14,8 @@ export interface FakeProvider {
   port: number;
   secretKey: string;
   webhookSecret: string;
+  /** A refund made in the provider's own dashboard: announced by `charge.refunded` like any other. */
+  refundInDashboard(paymentIntent: string, amountCents?: number): Promise<{ id: string }>;
   close(): Promise<void>;
 }
 
@@ -31,6 +34,8 @@ interface FakeSession {
   client_reference_id: string | null;
   customer_email: string | null;
   payment_status: 'unpaid' | 'paid';
+  /** The payment a paid checkout made; what a refund names. */
+  payment_intent: string | null;
   status: 'open' | 'complete' | 'expired';
   mode: string;
   metadata: Record<string, string>;
@@ -58,6 +63,10 @@ function sendJson(res: ServerResponse, status: number, body: unknown): void {
 
 const providerError = (res: ServerResponse, status: number, message: string) =>
   sendJson(res, status, { error: { type: 'invalid_request_error', message } });
+
+/** A request the provider understood and refused, with its error code (an over-refund, an unknown payment). */
+const providerRefusal = (res: ServerResponse, refusal: { code: string; message: string }) =>
+  sendJson(res, 400, { error: { type: 'invalid_request_error', ...refusal } });
 
 /** metadata[userId]=7 → { userId: '7' }: the SDK sends nested objects form-encoded with brackets. */
 function nested(form: URLSearchParams, prefix: string): Record<string, string> {
@@ -135,9 +144,11 @@ const successUrlOf = (session: FakeSession) => session.success_url.replaceAll('{
 
 /**
  * A stand-in for the hosted payment provider on a free loopback port, started when no real key is
- * set. It answers the SDK calls Gripline makes (create, retrieve and expire a checkout session) in the
- * provider's shapes, serves a plain hosted page, and on Pay sends the signed completion webhook
- * exactly as the provider signs it before sending the payer back to the success URL.
+ * set. It answers the SDK calls Gripline makes (create, retrieve and expire a checkout session, create
+ * and list refunds) in the provider's shapes, serves a plain hosted page, and on Pay sends the signed
+ * completion webhook exactly as the provider signs it before sending the payer back to the success
+ * URL. Every expiry and refund is announced by its signed event (`checkout.session.expired`,
+ * `charge.refunded`) before it is answered.
  */
 export async function startFakeProvider(options: FakeProviderOptions): Promise<FakeProvider> {
   const webhookSecret = options.webhookSecret ?? token('whsec');
@@ -164,6 +175,7 @@ export async function startFakeProvider(options: FakeProviderOptions): Promise<F
       client_reference_id: form.get('client_reference_id'),
       customer_email: form.get('customer_email'),
       payment_status: 'unpaid',
+      payment_intent: null,
       status: 'open',
       mode: form.get('mode') ?? 'payment',
       metadata: nested(form, 'metadata'),
@@ -176,24 +188,21 @@ export async function startFakeProvider(options: FakeProviderOptions): Promise<F
     sendJson(res, 200, session);
   }
 
-  async function sendEvent(type: 'checkout.session.completed' | 'checkout.session.expired', session: FakeSession): Promise<void> {
-    const event = {
-      id: token('evt'),
-      object: 'event',
-      type,
-      created: Math.floor(Date.now() / 1000),
-      livemode: false,
-      pending_webhooks: 1,
-      data: { object: session },
-    };
+  /** Signs an event exactly as the provider does and posts it to Gripline's webhook. */
+  async function sendEvent(type: string, object: object): Promise<void> {
+    const event = { id: token('evt'), object: 'event', type, created: Math.floor(Date.now() / 1000), livemode: false, pending_webhooks: 1, data: { object } };
     const payload = JSON.stringify(event);
     const signature = signer.webhooks.generateTestHeaderString({ payload, secret: webhookSecret });
     await postWebhook(options.webhookUrl, payload, signature);
   }
 
+  // A refund stands whether or not Gripline could be told of it, as with the real provider.
+  const refunds = fakeRefunds((type, object) => sendEvent(type, object).then(() => undefined, () => undefined));
+
   async function completeSession(session: FakeSession): Promise<void> {
     session.status = 'complete';
     session.payment_status = 'paid';
+    session.payment_intent = refunds.takePayment(session.amount_total, session.currency);
     await sendEvent('checkout.session.completed', session);
   }
 
@@ -205,6 +214,14 @@ export async function startFakeProvider(options: FakeProviderOptions): Promise<F
     session.status = 'expired';
     await sendEvent('checkout.session.expired', session);
     sendJson(res, 200, session);
+  }
+
+  /** POST /v1/refunds (payment_intent, optional amount, form-encoded as the SDK sends them). */
+  async function createRefund(req: IncomingMessage, res: ServerResponse) {
+    const form = new URLSearchParams(await readBody(req));
+    const amount = form.get('amount');
+    const refund = await refunds.refund(form.get('payment_intent'), amount === null ? undefined : Number(amount), nested(form, 'metadata'));
+    return 'object' in refund ? sendJson(res, 200, refund) : providerRefusal(res, refund);
   }
 
   async function answerPage(req: IncomingMessage, res: ServerResponse, session: FakeSession) {
@@ -229,6 +246,8 @@ export async function startFakeProvider(options: FakeProviderOptions): Promise<F
     }
     if (req.headers.authorization !== `Bearer ${FAKE_SECRET_KEY}`) return providerError(res, 401, 'Invalid API Key provided.');
     if (req.method === 'POST' && path === '/v1/checkout/sessions') return createSession(req, res);
+    if (req.method === 'POST' && path === '/v1/refunds') return createRefund(req, res);
+    if (req.method === 'GET' && path === '/v1/refunds') return sendJson(res, 200, refunds.list(new URL(req.url ?? '/', 'http://fake').searchParams.get('payment_intent')));
     const retrieve = /^\/v1\/checkout\/sessions\/([\w]+)$/.exec(path);
     if (req.method === 'GET' && retrieve) {
       const session = sessions.get(retrieve[1]!);
@@ -258,6 +277,11 @@ export async function startFakeProvider(options: FakeProviderOptions): Promise<F
     port,
     secretKey: FAKE_SECRET_KEY,
     webhookSecret,
+    async refundInDashboard(paymentIntent, amountCents) {
+      const refund = await refunds.refund(paymentIntent, amountCents);
+      if (!('object' in refund)) throw new Error(refund.message);
+      return { id: refund.id };
+    },
     close: () =>
       new Promise<void>((resolve) => {
         server.close(() => resolve());

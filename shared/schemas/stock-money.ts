@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { BIN_KINDS, MOVEMENT_KINDS } from '../stock/kinds';
 import { assemblyNameSchema } from './bins';
 import { dollarsAndCentsField, idParam } from './fields';
+import { PAYMENT_METHODS } from './payment-methods';
 
 /** A payment is at most $10,000: a larger figure is almost surely a typing slip. */
 export const MAX_PAYMENT_CENTS = 1_000_000;
@@ -51,6 +52,9 @@ export const paymentSchema = z.strictObject({
   at: z.string(),
   note: z.string(),
   recordedBy: person,
+  method: z.enum(PAYMENT_METHODS),
+  /** What has been handed back on it (online payments, through the provider). */
+  refundedCents: z.number(),
 });
 export type Payment = z.infer<typeof paymentSchema>;
 
@@ -76,10 +80,11 @@ export type TabEntry = z.infer<typeof tabEntrySchema>;
 export const tabSchema = z.strictObject({
   member: person,
   chargedCents: z.number(),
+  /** Paid less refunded. */
   paidCents: z.number(),
   /** charged − paid: what the member still owes (negative when paid ahead). */
   balanceCents: z.number(),
-  /** Months with any charge or payment, newest first. */
+  /** Months with any charge, payment or refund, newest first (a refund counts in its own month, against paid). */
   byMonth: z.array(z.strictObject({ month, chargedCents: z.number(), paidCents: z.number() })),
   /** Net units taken and their value per assembly; null is stock not tied to an assembly. */
   byAssembly: z.array(z.strictObject({ assemblyId: z.number().nullable(), assembly: assemblyNameSchema.nullable(), quantity: z.number(), chargedCents: z.number() })),

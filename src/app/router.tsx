@@ -154,6 +154,14 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
           },
         },
         {
+          path: 'payments',
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const { PaymentsRoute, paymentsLoader } = await import('./routes/app/payments');
+            return { loader: paymentsLoader(queryClient), Component: PaymentsRoute };
+          },
+        },
+        {
           path: 'overview',
           ErrorBoundary: RouteError,
           lazy: async () => {

@@ -91,6 +91,7 @@ function pagesOf(role: Role, ids: DemoIds): string[] {
     '/labels',
     '/alerts',
     '/forecast',
+    '/payments',
   ];
   const lead = ['/people', '/mail', '/overdue', '/spend', '/overview', '/signoffs'];
   if (role === 'member') return [...member, ...ownerOnly];

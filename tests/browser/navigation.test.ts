@@ -15,7 +15,7 @@ const MEMBER = { '': ['Home'], Crib: ['Scan', 'Tools'], Stock: ['Bins'], Builds:
 const QUARTERMASTER = {
   '': ['Home'],
   Crib: ['Scan', 'Tools', 'Service', 'Labels'],
-  Stock: ['Bins', 'Restock', 'Reorder alerts', 'Forecast'],
+  Stock: ['Bins', 'Restock', 'Reorder alerts', 'Forecast', 'Payments'],
   Builds: ['My builds'],
   Chapter: ['Settings'],
   Mine: ['My loans', 'My tab', 'My mail'],
@@ -23,7 +23,7 @@ const QUARTERMASTER = {
 const LEAD = {
   '': ['Home'],
   Crib: ['Scan', 'Tools', 'Overdue', 'Service', 'Labels'],
-  Stock: ['Bins', 'Restock', 'Reorder alerts', 'Forecast', 'Consumables'],
+  Stock: ['Bins', 'Restock', 'Reorder alerts', 'Forecast', 'Consumables', 'Payments'],
   Builds: ['My builds'],
   Chapter: ['Overview', 'People', 'Sign-offs', 'Sent mail', 'Settings'],
   Mine: ['My loans', 'My tab', 'My mail'],

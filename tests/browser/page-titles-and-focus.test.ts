@@ -61,6 +61,7 @@ function demoUrls(app: BuiltApp): Record<string, { url: string; who: Who }> {
       '/restock': lead('/restock'),
       '/tab': lead('/tab'),
       '/spend': lead('/spend'),
+      '/payments': lead('/payments'),
       '/overview': lead('/overview'),
       '/people': lead('/people'),
       '/mail': lead('/mail'),

@@ -49,7 +49,7 @@ const TAB: Tab = {
     entry({ id: 2, binCode: 'B-0002', designation: 'Screw #8-32 × 1/2 pan head', quantity: -1206, unitCost: 0.35, chargeCents: 42210, assemblyId: null, assembly: null }),
     entry({ id: 1 }),
   ],
-  payments: [{ id: 1, userId: 2, amountCents: 1000, at: '2026-12-02T12:00:00.000Z', note: 'cash at the bench', recordedBy: { id: 1, name: 'Lee Lead' } }],
+  payments: [{ id: 1, userId: 2, amountCents: 1000, at: '2026-12-02T12:00:00.000Z', note: 'cash at the bench', recordedBy: { id: 1, name: 'Lee Lead' }, method: 'cash', refundedCents: 0 }],
 };
 
 const EMPTY: Tab = { member: { id: 3, name: 'Nell New' }, chargedCents: 0, paidCents: 0, balanceCents: 0, byMonth: [], byAssembly: [], recent: [], payments: [] };

@@ -82,6 +82,8 @@ const GETS = (): string[] => [
   '/api/stock/spend',
   '/api/payments/settings',
   '/api/payments/checkouts/cs_test_none',
+  '/api/payments?method=online',
+  '/api/payments/export.csv?from=2026-11-01',
   '/api/builds',
   `/api/builds/${ids.build}`,
   '/api/assemblies',

@@ -25,6 +25,8 @@ export const onlinePayments = sqliteTable(
     currency: text().notNull(),
     state: text({ enum: ONLINE_PAYMENT_STATES }).notNull().default('open'),
     memberPaymentId: integer().references(() => memberPayments.id),
+    /** The provider's payment behind a paid checkout (what a refund names); set when it settles. */
+    paymentIntentId: text().unique(),
     createdAt: integer({ mode: 'timestamp_ms' }).notNull(),
     updatedAt: integer({ mode: 'timestamp_ms' }).notNull(),
   },

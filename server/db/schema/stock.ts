@@ -1,6 +1,7 @@
 import { sql } from 'drizzle-orm';
 import { blob, check, index, integer, real, sqliteTable, text, uniqueIndex, type AnySQLiteColumn } from 'drizzle-orm/sqlite-core';
 import { BIN_KINDS, MOVEMENT_KINDS, RIVET_HEADS } from '@shared/stock/kinds';
+import { PAYMENT_METHODS } from '@shared/schemas/payment-methods';
 import { users } from './users';
 
 const nowMs = sql`(cast(unixepoch('subsec') * 1000 as integer))`;
@@ -108,7 +109,10 @@ export const stockMovements = sqliteTable(
   ],
 );
 
-/** Money a member paid towards their consumables tab (recorded by the lead or quartermaster). */
+/**
+ * Money a member paid towards their consumables tab: cash recorded by the lead or quartermaster,
+ * or an online payment recorded when the provider confirmed it.
+ */
 export const memberPayments = sqliteTable(
   'member_payments',
   {
@@ -122,9 +126,43 @@ export const memberPayments = sqliteTable(
     recordedById: integer()
       .notNull()
       .references(() => users.id),
+    method: text({ enum: PAYMENT_METHODS }).notNull().default('cash'),
   },
-  (t) => [index('member_payments_user_idx').on(t.userId, t.at), check('member_payments_amount_check', sql`${t.amountCents} > 0`)],
+  (t) => [
+    index('member_payments_user_idx').on(t.userId, t.at),
+    index('member_payments_at_idx').on(t.at),
+    check('member_payments_amount_check', sql`${t.amountCents} > 0`),
+    check('member_payments_method_check', sql`${t.method} in (${inList(PAYMENT_METHODS)})`),
+  ],
+);
+
+/**
+ * Money handed back on a member payment (online payments only: refunded through the provider).
+ * It counts against what was paid in the month it was made. `providerRefundId` makes a refund
+ * recorded once, whether Gripline made it or the provider's dashboard did (then recordedById is null).
+ */
+export const paymentRefunds = sqliteTable(
+  'payment_refunds',
+  {
+    id: integer().primaryKey({ autoIncrement: true }),
+    memberPaymentId: integer()
+      .notNull()
+      .references(() => memberPayments.id),
+    amountCents: integer().notNull(),
+    at: integer({ mode: 'timestamp_ms' }).notNull(),
+    providerRefundId: text().unique(),
+    recordedById: integer().references(() => users.id),
+    note: text().notNull().default(''),
+  },
+  (t) => [
+    index('payment_refunds_payment_idx').on(t.memberPaymentId),
+    index('payment_refunds_at_idx').on(t.at),
+    check('payment_refunds_amount_check', sql`${t.amountCents} > 0`),
+  ],
 );
 
 export type BinRow = typeof bins.$inferSelect;
 export type MovementRow = typeof stockMovements.$inferSelect;
+export type PaymentRefundRow = typeof paymentRefunds.$inferSelect;
+/** A refund to record: always with the provider's refund id, which records it once. */
+export type NewPaymentRefund = Omit<typeof paymentRefunds.$inferInsert, 'id' | 'providerRefundId'> & { providerRefundId: string };

@@ -3,7 +3,7 @@ import type { ServiceContext } from '../../context';
 import type { Logger } from '../../lib/logger';
 import type { PaymentsSetup } from '../../payments/payments-client';
 import { expireOnlinePayment, onlinePaymentBySession, openOnlinePaymentsOf } from './payments.repo';
-import { atProvider } from './provider-call';
+import { CHECKOUT_UNREACHABLE, providerCall } from './provider-call';
 
 /**
  * Before a member opens a new checkout, their earlier ones still open are expired at the provider, so
@@ -12,12 +12,15 @@ import { atProvider } from './provider-call';
  */
 export async function expireEarlierCheckouts(ctx: ServiceContext, setup: PaymentsSetup, userId: number): Promise<void> {
   for (const row of openOnlinePaymentsOf(ctx.db, userId)) {
-    try {
-      await atProvider(() => setup.provider.checkout.sessions.expire(row.sessionId));
-    } catch (err) {
-      if (err instanceof Stripe.errors.StripeInvalidRequestError) continue;
-      throw err;
-    }
+    const expired = await providerCall(
+      () =>
+        setup.provider.checkout.sessions.expire(row.sessionId).catch((err: unknown) => {
+          if (err instanceof Stripe.errors.StripeInvalidRequestError) return null;
+          throw err;
+        }),
+      CHECKOUT_UNREACHABLE,
+    );
+    if (!expired) continue;
     expireOnlinePayment(ctx.db, row.id, { updatedAt: ctx.now() });
   }
 }

@@ -14,7 +14,7 @@ export function onlinePaymentBySession(db: Executor, sessionId: string): OnlineP
 export function closeOnlinePayment(
   db: Executor,
   id: number,
-  changes: { state: 'paid' | 'refused'; eventId: string; memberPaymentId?: number; updatedAt: Date },
+  changes: { state: 'paid' | 'refused'; eventId: string; memberPaymentId?: number; paymentIntentId?: string | null; updatedAt: Date },
 ): boolean {
   return db
     .update(onlinePayments)
@@ -40,4 +40,14 @@ export function expireOnlinePayment(db: Executor, id: number, changes: { eventId
     .set({ state: 'expired', ...changes })
     .where(and(eq(onlinePayments.id, id), eq(onlinePayments.state, 'open')))
     .run().changes === 1;
+}
+
+/** The paid checkout behind a payment on a tab, if it was paid online. */
+export function onlinePaymentByMemberPayment(db: Executor, memberPaymentId: number): OnlinePaymentRow | undefined {
+  return db.select().from(onlinePayments).where(eq(onlinePayments.memberPaymentId, memberPaymentId)).get();
+}
+
+/** The paid checkout that made a provider payment (what a refund names). */
+export function onlinePaymentByIntent(db: Executor, paymentIntentId: string): OnlinePaymentRow | undefined {
+  return db.select().from(onlinePayments).where(eq(onlinePayments.paymentIntentId, paymentIntentId)).get();
 }

@@ -1,18 +1,22 @@
 import express, { Router } from 'express';
-import { checkoutBodySchema, checkoutSessionParams } from '@shared/schemas/payments';
+import { checkoutBodySchema, checkoutSessionParams, paymentParams, paymentsQuerySchema, refundBodySchema } from '@shared/schemas/payments';
+import { sendCsv } from '../../lib/csv';
 import type { ServiceContext } from '../../context';
 import { HttpError } from '../../lib/http-error';
 import { parseInput } from '../../lib/validate';
 import { requireRole, requireUser } from '../../middleware/auth';
 import type { PaymentsSetup } from '../../payments/payments-client';
 import { readCheckoutStatus } from './checkout-status';
+import { listPayments, paymentsCsv } from './payment-list.service';
 import { receiveProviderEvent, startCheckout, type TabLedger } from './payments.service';
+import { refundPayment } from './refunds.service';
 
 const notSetUp = () => new HttpError(503, 'PAYMENTS_OFF', 'Online payment is not set up for this chapter. Pay the quartermaster in cash.');
 
 /**
- * /api/payments: a signed-in member opens a hosted checkout for their own tab. `tab` (from the stock
- * feature) says what they owe and records what they paid.
+ * /api/payments: a signed-in member opens a hosted checkout for their own tab; the lead and the
+ * quartermaster list and export payments, and the lead refunds online ones. `tab` (from the stock
+ * feature) says what members owe and paid and records payments and refunds.
  */
 export function paymentsRouter(setup: PaymentsSetup | undefined, tab: TabLedger) {
   const router = Router();
@@ -23,7 +27,28 @@ export function paymentsRouter(setup: PaymentsSetup | undefined, tab: TabLedger)
   router.get('/checkouts/:sessionId', requireRole('member'), (req, res) => {
     res.json(readCheckoutStatus(req.ctx.db, requireUser(req).id, parseInput(checkoutSessionParams, req.params, 'path').sessionId));
   });
+  paymentsLedgerRoutes(router, setup, tab);
   return router;
+}
+
+/**
+ * The lead's and quartermaster's view of payments: cash and online together, as JSON or CSV, and
+ * the lead's refund of an online payment through the provider.
+ */
+function paymentsLedgerRoutes(router: Router, setup: PaymentsSetup | undefined, tab: TabLedger) {
+  const quartermaster = requireRole('quartermaster');
+  router.get('/', quartermaster, (req, res) => {
+    res.json({ data: listPayments(req.ctx, tab, parseInput(paymentsQuerySchema, req.query, 'query')) });
+  });
+  router.get('/export.csv', quartermaster, (req, res) => {
+    const { filename, csv } = paymentsCsv(req.ctx, tab, parseInput(paymentsQuerySchema, req.query, 'query'));
+    sendCsv(res, filename, csv);
+  });
+  router.post('/:id/refund', requireRole('lead'), async (req, res) => {
+    if (!setup) throw notSetUp();
+    const { id } = parseInput(paymentParams, req.params, 'path');
+    res.status(201).json(await refundPayment(req.ctx, setup, tab, requireUser(req), id, parseInput(refundBodySchema, req.body ?? {})));
+  });
 }
 
 /**
@@ -32,10 +57,10 @@ export function paymentsRouter(setup: PaymentsSetup | undefined, tab: TabLedger)
  */
 export function paymentsWebhookRouter(ctx: ServiceContext, setup: PaymentsSetup | undefined, tab: TabLedger) {
   const router = Router();
-  router.post('/', express.raw({ type: '*/*', limit: '256kb' }), (req, res) => {
+  router.post('/', express.raw({ type: '*/*', limit: '256kb' }), async (req, res) => {
     if (!setup) throw notSetUp();
     const body = Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0);
-    receiveProviderEvent(ctx, setup, tab, req.log, body, req.headers['stripe-signature']);
+    await receiveProviderEvent(ctx, setup, tab, req.log, body, req.headers['stripe-signature']);
     res.json({ received: true });
   });
   return router;

@@ -1,9 +1,11 @@
 import type Stripe from 'stripe';
-import { MIN_ONLINE_PAYMENT_CENTS, type CheckoutBody, type CheckoutResponse } from '@shared/schemas/payments';
+import type { PaymentMethod } from '@shared/schemas/payment-methods';
+import { MIN_ONLINE_PAYMENT_CENTS, type CheckoutBody, type CheckoutResponse, type PaymentListItem } from '@shared/schemas/payments';
 import { centsWords } from '@shared/stock/money';
 import { findUserById } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
 import type { Executor } from '../../db/client';
+import type { NewPaymentRefund, PaymentRefundRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import type { Logger } from '../../lib/logger';
@@ -12,17 +14,31 @@ import { queueMail } from '../../mail/outbox';
 import type { PaymentsSetup } from '../../payments/payments-client';
 import { readPaymentSettings } from '../../settings/payment-settings';
 import { expireEarlierCheckouts, recordExpiredCheckout } from './checkout-expiry';
+import { CHECKOUT_UNREACHABLE, providerCall } from './provider-call';
+import { recordChargeRefunds } from './refunds.service';
 import { closeOnlinePayment, insertOnlinePayment, onlinePaymentBySession } from './payments.repo';
-import { atProvider } from './provider-call';
+
+/** Which payments to list: from and before moments, and cash or online. */
+export interface PaymentFilter {
+  from?: Date;
+  to?: Date;
+  method?: PaymentMethod;
+}
 
 /** The stock feature's tab, handed in by the app: what a member owes, and recording a payment on it. */
 export interface TabLedger {
   balanceCents(db: Executor, userId: number): number;
   recordPayment(db: Executor, member: UserRow, amountCents: number, at: Date, note: string): number;
+  /** Everyone's payments, cash and online, newest first, with what was refunded and what is left. */
+  listPayments(db: Executor, filter: PaymentFilter): PaymentListItem[];
+  /** One payment on a tab; undefined when there is none. */
+  payment(db: Executor, id: number): PaymentListItem | undefined;
+  /** Records money handed back on a payment (the balance goes up), once per provider refund id. */
+  recordRefund(db: Executor, entry: NewPaymentRefund): { refund: PaymentRefundRow; created: boolean };
 }
 
 /** My tab, where a receipt points. */
-const myTabPage = (ctx: ServiceContext) => `${ctx.publicUrl}/tab`;
+export const myTabPage = (ctx: ServiceContext) => `${ctx.publicUrl}/tab`;
 /** The page a member comes back to from the hosted checkout. */
 const myTabUrl = (ctx: ServiceContext, outcome: 'paid' | 'cancelled') => `${myTabPage(ctx)}?payment=${outcome}`;
 /** The provider puts the session's id in place of this placeholder when it sends the payer back. */
@@ -44,7 +60,7 @@ function amountToPay(balanceCents: number, asked: number | undefined): number {
 }
 
 const openHostedCheckout = (setup: PaymentsSetup, params: Stripe.Checkout.SessionCreateParams): Promise<Stripe.Checkout.Session> =>
-  atProvider(() => setup.provider.checkout.sessions.create(params));
+  providerCall(() => setup.provider.checkout.sessions.create(params), CHECKOUT_UNREACHABLE);
 
 function offeredCurrency(ctx: ServiceContext) {
   const { offered, currency } = readPaymentSettings(ctx.db);
@@ -113,14 +129,19 @@ function settleCheckout(ctx: ServiceContext, tab: TabLedger, logger: Logger, eve
     }
     const member = findUserById(tx, row.userId)!;
     const memberPaymentId = tab.recordPayment(tx, member, row.amountCents, now, 'Paid online');
-    if (!closeOnlinePayment(tx, row.id, { state: 'paid', eventId, memberPaymentId, updatedAt: now })) throw new Error(`checkout ${row.id} closed twice`);
+    const paymentIntentId = typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
+    if (!closeOnlinePayment(tx, row.id, { state: 'paid', eventId, memberPaymentId, paymentIntentId, updatedAt: now })) throw new Error(`checkout ${row.id} closed twice`);
     queueMail(tx, paymentReceiptMail(member.email, member.name, row.amountCents, tab.balanceCents(tx, member.id), myTabPage(ctx)), now);
   });
 }
 
-/** The provider's webhook: verified first, then a completed checkout is settled, an expired one closed; other events are acknowledged. */
-export function receiveProviderEvent(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, logger: Logger, rawBody: Buffer, signature: string | string[] | undefined): void {
+/**
+ * The provider's webhook: verified first, then a completed checkout is settled, an expired one
+ * closed and refunds on a charge recorded; other events are acknowledged.
+ */
+export async function receiveProviderEvent(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, logger: Logger, rawBody: Buffer, signature: string | string[] | undefined): Promise<void> {
   const event = verifiedEvent(setup, rawBody, signature);
   if (event.type === 'checkout.session.completed') settleCheckout(ctx, tab, logger, event.id, event.data.object);
   if (event.type === 'checkout.session.expired') recordExpiredCheckout(ctx, logger, event.id, event.data.object);
+  if (event.type === 'charge.refunded') await recordChargeRefunds(ctx, setup, tab, logger, event.data.object);
 }

@@ -1,12 +1,14 @@
-import { and, desc, eq, inArray, isNotNull, sql } from 'drizzle-orm';
+import { and, desc, eq, gte, inArray, isNotNull, isNull, lt, sql, type SQL } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
 import type { Executor } from '../../db/client';
-import { bins, memberPayments, stockMovements } from '../../db/schema/stock';
+import { bins, memberPayments, paymentRefunds, stockMovements, type PaymentRefundRow } from '../../db/schema/stock';
 import { users } from '../../db/schema/users';
+import type { PaymentMethod } from '@shared/schemas/payment-methods';
 
 /** The entry a reversal undoes. */
 const undone = alias(stockMovements, 'undone');
 const recorder = alias(users, 'recorder');
+const payer = alias(users, 'payer');
 
 /**
  * When an entry counts: its own time, or for a reversal the time of the entry it undoes, so a
@@ -36,11 +38,15 @@ export function tabEntries(db: Executor, memberId?: number) {
 }
 export type TabEntryRow = ReturnType<typeof tabEntries>[number];
 
+/** What has been handed back on a payment so far, in cents. */
+const refundedCents = sql<number>`coalesce((select sum(${paymentRefunds.amountCents}) from ${paymentRefunds} where ${paymentRefunds.memberPaymentId} = ${memberPayments.id}), 0)`;
+
 const paymentsWithRecorder = (db: Executor) =>
   db
-    .select({ p: memberPayments, recordedByName: recorder.name })
+    .select({ p: memberPayments, recordedByName: recorder.name, memberName: payer.name, refundedCents })
     .from(memberPayments)
-    .innerJoin(recorder, eq(recorder.id, memberPayments.recordedById));
+    .innerJoin(recorder, eq(recorder.id, memberPayments.recordedById))
+    .innerJoin(payer, eq(payer.id, memberPayments.userId));
 
 /** A person's payments, newest first. */
 export function paymentsOf(db: Executor, userId: number) {
@@ -52,14 +58,54 @@ export function paymentById(db: Executor, id: number): PaymentRow | undefined {
   return paymentsWithRecorder(db).where(eq(memberPayments.id, id)).get();
 }
 
-/** Total paid per person, for everyone who has paid anything. */
-export function paidByPerson(db: Executor): Map<number, number> {
-  const rows = db
-    .select({ userId: memberPayments.userId, cents: sql<number>`sum(${memberPayments.amountCents})` })
-    .from(memberPayments)
-    .groupBy(memberPayments.userId)
+export interface PaymentFilter {
+  /** From this moment on (inclusive). */
+  from?: Date;
+  /** Before this moment (exclusive). */
+  to?: Date;
+  method?: PaymentMethod;
+}
+
+/** Everyone's payments, cash and online, newest first. */
+export function listPayments(db: Executor, filter: PaymentFilter): PaymentRow[] {
+  const where: SQL[] = [];
+  if (filter.from) where.push(gte(memberPayments.at, filter.from));
+  if (filter.to) where.push(lt(memberPayments.at, filter.to));
+  if (filter.method) where.push(eq(memberPayments.method, filter.method));
+  return paymentsWithRecorder(db)
+    .where(and(...where))
+    .orderBy(desc(memberPayments.at), desc(memberPayments.id))
     .all();
-  return new Map(rows.map((r) => [r.userId, r.cents]));
+}
+
+/**
+ * Money paid in, one member or everyone: each payment (positive) at its time and each refund
+ * (negative) at the time it was made, so a refund counts in its own month.
+ */
+export function paidEntries(db: Executor, userId?: number): { userId: number; cents: number; at: Date }[] {
+  const whose = userId === undefined ? undefined : eq(memberPayments.userId, userId);
+  const paid = db.select({ userId: memberPayments.userId, cents: memberPayments.amountCents, at: memberPayments.at }).from(memberPayments).where(whose).all();
+  const refunded = db
+    .select({ userId: memberPayments.userId, cents: sql<number>`-${paymentRefunds.amountCents}`, at: paymentRefunds.at })
+    .from(paymentRefunds)
+    .innerJoin(memberPayments, eq(memberPayments.id, paymentRefunds.memberPaymentId))
+    .where(whose)
+    .all();
+  return [...paid, ...refunded];
+}
+
+/** A refund, once: a second one with the same provider refund id inserts nothing (undefined). */
+export function insertRefund(db: Executor, values: typeof paymentRefunds.$inferInsert): PaymentRefundRow | undefined {
+  return db.insert(paymentRefunds).values(values).onConflictDoNothing({ target: paymentRefunds.providerRefundId }).returning().get();
+}
+
+export function refundByProviderId(db: Executor, providerRefundId: string): PaymentRefundRow | undefined {
+  return db.select().from(paymentRefunds).where(eq(paymentRefunds.providerRefundId, providerRefundId)).get();
+}
+
+/** Names who made a refund that the provider's webhook recorded first, without anyone's name. */
+export function claimRefund(db: Executor, id: number, recordedById: number, note: string): void {
+  db.update(paymentRefunds).set({ recordedById, note }).where(and(eq(paymentRefunds.id, id), isNull(paymentRefunds.recordedById))).run();
 }
 
 export function insertPayment(db: Executor, values: typeof memberPayments.$inferInsert) {

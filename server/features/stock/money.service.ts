@@ -1,10 +1,11 @@
 import { hasRole } from '@shared/roles';
+import type { PaymentListItem } from '@shared/schemas/payments';
 import type { Payment, RecordPaymentBody, Spend, SpendMonth, Tab, TabEntry, TabSummary } from '@shared/schemas/stock-money';
 import { BIN_KINDS, type BinKind } from '@shared/stock/kinds';
 import { findUserById } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
 import type { Executor } from '../../db/client';
-import type { MovementRow } from '../../db/schema/stock';
+import type { MovementRow, NewPaymentRefund, PaymentRefundRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
@@ -12,10 +13,24 @@ import { binDesignation } from '@shared/stock/fasteners';
 import { e4ToDollars, valueCents } from '@shared/stock/money';
 import { chapterMonth, chapterMonthStarts } from '@shared/time/chapter-time';
 import { namesFor, withNames, type NameAssemblies } from './assembly-names';
-import { insertPayment, namesOf, paidByPerson, paymentById, paymentsOf, spendEntries, tabEntries, type PaymentRow, type TabEntryRow } from './money.repo';
+import {
+  claimRefund,
+  insertPayment,
+  insertRefund,
+  listPayments,
+  namesOf,
+  paidEntries,
+  paymentById,
+  paymentsOf,
+  refundByProviderId,
+  spendEntries,
+  tabEntries,
+  type PaymentFilter,
+  type PaymentRow,
+  type TabEntryRow,
+} from './money.repo';
 
 const RECENT_ENTRIES = 25;
-
 
 /**
  * What an entry adds to a member's tab, valued entry by entry at the unit cost it was taken at:
@@ -31,8 +46,23 @@ function userOrThrow(ctx: ServiceContext, userId: number, status: 400 | 404): Us
 }
 
 function paymentDto(r: PaymentRow): Payment {
-  return { id: r.p.id, userId: r.p.userId, amountCents: r.p.amountCents, at: r.p.at.toISOString(), note: r.p.note, recordedBy: { id: r.p.recordedById, name: r.recordedByName } };
+  return {
+    id: r.p.id,
+    userId: r.p.userId,
+    amountCents: r.p.amountCents,
+    at: r.p.at.toISOString(),
+    note: r.p.note,
+    recordedBy: { id: r.p.recordedById, name: r.recordedByName },
+    method: r.p.method,
+    refundedCents: r.refundedCents,
+  };
 }
+
+/** What may still be refunded through the provider: cash is handed back in person, never here. */
+const refundableCents = (r: PaymentRow) => (r.p.method === 'online' ? Math.max(0, r.p.amountCents - r.refundedCents) : 0);
+
+/** Paid in less refunded, over the entries given (the one sum for "paid" on every tab). */
+const netPaidCents = (entries: { cents: number }[]) => entries.reduce((sum, e) => sum + e.cents, 0);
 
 function entryDto(r: TabEntryRow): Omit<TabEntry, 'assembly'> {
   return {
@@ -72,11 +102,9 @@ export function readTab(ctx: ServiceContext, nameAssemblies: NameAssemblies, vie
     a.quantity -= e.m.quantity;
     a.chargedCents += charge;
   }
-  let paidCents = 0;
-  for (const p of payments) {
-    paidCents += p.p.amountCents;
-    monthRow(monthOf(p.p.at)).paidCents += p.p.amountCents;
-  }
+  const paid = paidEntries(ctx.db, member.id);
+  const paidCents = netPaidCents(paid);
+  for (const p of paid) monthRow(monthOf(p.at)).paidCents += p.cents;
 
   // Assemblies in id order; stock not tied to one comes last.
   const byAssembly = [...assemblies]
@@ -102,7 +130,9 @@ export function readTab(ctx: ServiceContext, nameAssemblies: NameAssemblies, vie
 export function listTabs(ctx: ServiceContext): TabSummary[] {
   const charged = new Map<number, number>();
   for (const e of tabEntries(ctx.db)) charged.set(e.m.memberId!, (charged.get(e.m.memberId!) ?? 0) + chargeOf(e.m));
-  const paid = paidByPerson(ctx.db);
+  const paidRows = new Map<number, { cents: number }[]>();
+  for (const p of paidEntries(ctx.db)) (paidRows.get(p.userId) ?? paidRows.set(p.userId, []).get(p.userId)!).push(p);
+  const paid = new Map([...paidRows].map(([id, rows]) => [id, netPaidCents(rows)]));
   const ids = [...new Set([...charged.keys(), ...paid.keys()])];
   const names = namesOf(ctx.db, ids);
   return ids
@@ -125,12 +155,50 @@ export function recordPayment(ctx: ServiceContext, actor: UserRow, body: RecordP
 /** What a member still owes: everything drawn onto the tab less everything paid (negative when paid ahead). */
 export function tabBalanceCents(db: Executor, userId: number): number {
   const charged = tabEntries(db, userId).reduce((sum, e) => sum + chargeOf(e.m), 0);
-  return charged - paymentsOf(db, userId).reduce((sum, p) => sum + p.p.amountCents, 0);
+  return charged - netPaidCents(paidEntries(db, userId));
 }
 
 /** A payment the member made online comes off their tab like cash, recorded in their own name, in the caller's transaction. */
 export function recordOnlinePayment(db: Executor, member: UserRow, amountCents: number, at: Date, note: string): number {
-  return insertPayment(db, { userId: member.id, amountCents, at, note, recordedById: member.id }).id;
+  return insertPayment(db, { userId: member.id, amountCents, at, note, recordedById: member.id, method: 'online' }).id;
+}
+
+function paymentListItem(r: PaymentRow): PaymentListItem {
+  return {
+    id: r.p.id,
+    member: { id: r.p.userId, name: r.memberName },
+    amountCents: r.p.amountCents,
+    method: r.p.method,
+    refundedCents: r.refundedCents,
+    refundableCents: refundableCents(r),
+    at: r.p.at.toISOString(),
+    recordedBy: { id: r.p.recordedById, name: r.recordedByName },
+    note: r.p.note,
+  };
+}
+
+/** Every payment on the tabs, cash and online, newest first, with what was refunded and what is left. */
+export function listTabPayments(db: Executor, filter: PaymentFilter): PaymentListItem[] {
+  return listPayments(db, filter).map(paymentListItem);
+}
+
+/** One payment on a tab as the refund step needs it; undefined when there is no such payment. */
+export function tabPayment(db: Executor, id: number): PaymentListItem | undefined {
+  const row = paymentById(db, id);
+  return row && paymentListItem(row);
+}
+
+/**
+ * Records money handed back on a payment, in the caller's transaction: the member's balance goes
+ * up by it. Once per provider refund: when it is already recorded (the provider's webhook came
+ * first), nothing is added, the person who made it is filled in, and `created` is false.
+ */
+export function recordRefund(db: Executor, entry: NewPaymentRefund): { refund: PaymentRefundRow; created: boolean } {
+  const inserted = insertRefund(db, entry);
+  if (inserted) return { refund: inserted, created: true };
+  const existing = refundByProviderId(db, entry.providerRefundId)!;
+  if (entry.recordedById != null && existing.recordedById === null) claimRefund(db, existing.id, entry.recordedById, entry.note ?? '');
+  return { refund: refundByProviderId(db, entry.providerRefundId)!, created: false };
 }
 
 const noKinds = () => Object.fromEntries(BIN_KINDS.map((k) => [k, 0])) as Record<BinKind, number>;

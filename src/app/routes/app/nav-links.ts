@@ -40,6 +40,7 @@ export const NAV_LINKS: readonly NavLinkEntry[] = [
   { to: '/alerts', label: 'Reorder alerts', role: 'quartermaster', group: 'stock' },
   { to: '/forecast', label: 'Forecast', role: 'quartermaster', group: 'stock' },
   { to: '/spend', label: 'Consumables', role: 'lead', group: 'stock' },
+  { to: '/payments', label: 'Payments', role: 'quartermaster', group: 'stock' },
   { to: '/builds', label: 'My builds', role: 'member', group: 'builds', under: ['/assemblies'] },
   { to: '/overview', label: 'Overview', role: 'lead', group: 'chapter' },
   { to: '/people', label: 'People', role: 'lead', group: 'chapter' },

@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { peopleQueryOptions } from '@/features/people/api/get-people';
 import { spendQueryOptions } from '@/features/stock-money/api/get-spend';
 import { tabsQueryOptions } from '@/features/stock-money/api/get-tabs';
@@ -55,6 +55,9 @@ export function SpendRoute() {
         </Card>
         <Card title="Members’ tabs">
           <MemberTabs tabs={tabs} />
+          <Link to="/payments" className="mt-3 inline-flex min-h-12 items-center font-semibold underline underline-offset-4">
+            Every payment, cash and online, with refunds
+          </Link>
         </Card>
         <Card title="Record payment">
           <RecordPaymentForm payers={[...payers.values()].sort((a, b) => a.name.localeCompare(b.name))} />

@@ -15,7 +15,10 @@ function PaymentList({ tab }: { tab: Tab }) {
             {dayOf(p.at)}
             {p.note && <span className="text-steel"> · {p.note}</span>}
           </span>
-          <span className="font-mono">{dollars(p.amountCents)}</span>
+          <span className="text-right">
+            <span className="font-mono">{dollars(p.amountCents)}</span>
+            {p.refundedCents > 0 && <span className="block text-sm text-steel">Refunded {dollars(p.refundedCents)}</span>}
+          </span>
         </li>
       ))}
     </ul>

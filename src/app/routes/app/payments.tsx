@@ -1,0 +1,47 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { hasRole } from '@shared/roles';
+import { meQueryOptions } from '@/features/auth/api/get-me';
+import { paymentsQueryOptions } from '@/features/stock-money/api/get-payments';
+import { PaymentFilters } from '@/features/stock-money/components/payment-filters';
+import { PaymentsTable } from '@/features/stock-money/components/payments-table';
+import { paymentsQueryOf } from '@/features/stock-money/utils/payments-query';
+import { Card, PageHeader } from '@/components/ui/page';
+import { requireRole } from './guards';
+
+export const paymentsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  await requireRole(queryClient, request, 'quartermaster');
+  await queryClient.ensureQueryData(paymentsQueryOptions(paymentsQueryOf(new URL(request.url).searchParams)));
+  return null;
+};
+
+/** Cash and online payments on members' tabs together; the lead refunds online ones here. */
+export function PaymentsRoute() {
+  const [params] = useSearchParams();
+  const query = paymentsQueryOf(params);
+  const { data: payments } = useSuspenseQuery(paymentsQueryOptions(query));
+  const { data: me } = useSuspenseQuery(meQueryOptions());
+  const canRefund = me !== null && hasRole(me.role, 'lead');
+
+  return (
+    <>
+      <PageHeader
+        title="Payments"
+        lead={
+          canRefund
+            ? 'Every payment on members’ tabs, in cash or online, newest first. Refund an online payment here; cash is handed back in person.'
+            : 'Every payment on members’ tabs, in cash or online, newest first.'
+        }
+      />
+      <div className="flex flex-col gap-4">
+        <Card title="Filters">
+          <PaymentFilters query={query} />
+        </Card>
+        <Card title={payments.length === 1 ? '1 payment' : `${payments.length} payments`}>
+          <PaymentsTable payments={payments} canRefund={canRefund} />
+        </Card>
+      </div>
+    </>
+  );
+}

@@ -1,20 +1,17 @@
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
-import { pino } from 'pino';
 import request from 'supertest';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { checkoutResponseSchema } from '@shared/schemas/payments';
 import { onlinePayments } from '../../server/db/schema/payments';
 import { memberPayments } from '../../server/db/schema/stock';
-import { startFakeProvider, type FakeProvider } from '../../server/payments/fake-provider';
-import { createPaymentsSetup, type PaymentsSetup } from '../../server/payments/payments-client';
-import { addBinAs, blindRivetBin, post } from '../helpers/crib';
-import { buildTestApp, type Crew, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import type { FakeProvider } from '../../server/payments/fake-provider';
+import type { PaymentsSetup } from '../../server/payments/payments-client';
+import { checkout, drawOnTab as drawQuantity, sessionIdOf, startPaymentsApp, type PaymentsApp } from '../helpers/payments-app';
+import { post } from '../helpers/crib';
+import type { Crew, SignedInAgent, TestApp } from '../helpers/test-app';
 
 // blindRivetBin costs $0.12 a rivet: 120 drawn is a tab of 120 × 12 = 1440 cents.
 const TAB_CENTS = 120 * 12;
 
-let server: Server;
+let p: PaymentsApp;
 let fake: FakeProvider;
 let setup: PaymentsSetup;
 let t: TestApp;
@@ -26,41 +23,17 @@ let logged: string[];
 
 /** The app listens for real: the fake provider sends its webhook to it over loopback, as in production. */
 beforeEach(async () => {
-  server = createServer();
-  await new Promise<void>((ok) => server.listen(0, '127.0.0.1', () => ok()));
-  const { port } = server.address() as AddressInfo;
-  fake = await startFakeProvider({ webhookUrl: `http://127.0.0.1:${port}/api/payments/webhook` });
-  setup = createPaymentsSetup({ secretKey: fake.secretKey, webhookSecret: fake.webhookSecret, fake });
-  logged = [];
-  t = await buildTestApp({ payments: setup, logger: pino({ level: 'warn' }, { write: (line: string) => logged.push(line) }) });
-  server.on('request', t.app);
+  p = await startPaymentsApp();
+  ({ t, fake, setup, logged } = p);
   crew = await t.addCrew();
   qm = await t.signIn('qm@example.org');
   member = await t.signIn('member@example.org');
 });
-afterEach(async () => {
-  await new Promise<void>((ok) => {
-    server.close(() => ok());
-    server.closeAllConnections();
-  });
-  await fake.close();
-  await t.close();
-});
+afterEach(() => p.close());
 
-async function drawOnTab(who: SignedInAgent, quantity: number): Promise<void> {
-  const rivets = await addBinAs(qm, blindRivetBin());
-  const res = await post(who, `/api/bins/${rivets.code}/draw`, { quantity });
-  expect(res.status).toBe(201);
-}
+const drawOnTab = (who: SignedInAgent, quantity: number) => drawQuantity(qm, who, quantity);
 
 const balanceOf = async (who: SignedInAgent) => (await who.agent.get('/api/stock/tab')).body.balanceCents as number;
-const sessionIdOf = (url: string) => url.split('/').pop()!;
-
-async function checkout(who: SignedInAgent, body: object = {}): Promise<string> {
-  const res = await post(who, '/api/payments/checkout', body);
-  expect(res.status, JSON.stringify(res.body)).toBe(201);
-  return checkoutResponseSchema.parse(res.body).url;
-}
 
 /** Presses a button on the fake's hosted page; answers where the payer is sent. */
 async function press(url: string, choice: 'pay' | 'cancel'): Promise<string> {

@@ -8,6 +8,7 @@ import { deliverDueMail } from '../mail/outbox';
 import { seedDemoBuilds } from './demo-builds';
 import { seedDemoCrib } from './demo-crib';
 import { seedDemoOrders } from './demo-orders';
+import { seedDemoPayments } from './demo-payments';
 import { seedDemoStock } from './demo-stock';
 
 export const DEMO_PASSWORD = 'gripline-demo';
@@ -34,6 +35,7 @@ export async function seedDemoChapter(db: Database): Promise<boolean> {
   });
   seedDemoCrib(db);
   seedDemoStock(db);
+  seedDemoPayments(db);
   seedDemoBuilds(db);
   seedDemoOrders(db);
   // This morning's reorder check has run, as the daily job would have: the bins running low have their alerts.

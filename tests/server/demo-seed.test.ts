@@ -4,6 +4,8 @@ import { listAssemblies } from '../../server/features/planning/assemblies.repo';
 import { assemblyKit } from '../../server/features/planning/assembly-estimate.service';
 import { loanStats } from '../../server/features/tools/loan-stats.service';
 import { seedDemoChapter } from '../../server/seed/demo-chapter';
+import { findUserByEmail } from '../../server/accounts/users.repo';
+import { tabBalanceCents } from '../../server/features/stock/money.service';
 
 /** Six password hashes, the crib and the stock ledger: slow on a busy test machine. */
 const SEEDING_MS = 30_000;
@@ -116,6 +118,27 @@ describe('the demo chapter', () => {
     // The demo's flush lines: a 1/8 in hinge doubler countersunk, 3/32 and 1/8 in lines over thin skins dimpled.
     expect(new Set(flushItems.map((k) => k.need))).toEqual(new Set(['100° countersink cutter, 1/8 in, #30 pilot', '100° dimple dies, 3/32 in', '100° dimple dies, 1/8 in']));
     for (const k of flushItems) expect(k.tool?.category).toBe(k.role);
+    db.$client.close();
+  }, SEEDING_MS);
+
+  it('has three members who paid part of their tab in cash, in whole dollars and never more than they owe, and leaves Marco’s tab unpaid', async () => {
+    const db = openDatabase(':memory:');
+    migrateDatabase(db);
+    await seedDemoChapter(db);
+    const paid = db.$client
+      .prepare("select u.email, p.amount_cents as cents, p.method, p.at from member_payments p join users u on u.id = p.user_id order by p.at")
+      .all() as { email: string; cents: number; method: string; at: number }[];
+    expect(paid.map((p) => p.email)).toEqual(['kelechi.obi@example.org', 'ines.parra@example.org', 'tomasz.wren@example.org']);
+    for (const p of paid) {
+      expect(p.method).toBe('cash');
+      expect(p.cents % 100).toBe(0);
+      expect(p.cents).toBeGreaterThan(0);
+      expect(p.at).toBeLessThan(Date.now());
+      const user = findUserByEmail(db, p.email)!;
+      expect(tabBalanceCents(db, user.id)).toBeGreaterThan(0);
+    }
+    const marco = findUserByEmail(db, 'member@example.org')!;
+    expect(tabBalanceCents(db, marco.id)).toBeGreaterThan(0);
     db.$client.close();
   }, SEEDING_MS);
 });

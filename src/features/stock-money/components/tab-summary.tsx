@@ -11,7 +11,7 @@ function balanceWords(balanceCents: number): string {
 export function TabSummary({ tab }: { tab: Tab }) {
   const figures = [
     { label: 'Charged', cents: tab.chargedCents, hint: 'What you drew, less returns, at the unit cost of the day' },
-    { label: 'Paid', cents: tab.paidCents, hint: 'Paid online, or recorded by the quartermaster or the lead' },
+    { label: 'Paid', cents: tab.paidCents, hint: 'Paid online, or recorded by the quartermaster or the lead, less any refunds' },
   ];
   return (
     <section aria-labelledby="tab-balance" className="rounded-xl border border-rule bg-card p-4 shadow-sm sm:p-5">

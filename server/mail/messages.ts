@@ -201,3 +201,33 @@ export function paymentRefundMail(to: string, name: string, amountCents: number,
     ].join('\n'),
   };
 }
+
+/** What a refused online checkout asked, and what the provider reported instead. */
+export interface RefusedCheckoutMailLine {
+  memberName: string;
+  askedCents: number;
+  currency: string;
+  receivedCents: number | null;
+  receivedCurrency: string | null;
+}
+
+/** Tells a lead that a completion was refused: the provider may hold money that is on no tab. */
+export function refusedPaymentMail(to: string, name: string, line: RefusedCheckoutMailLine, link: string): OutgoingMail {
+  const received =
+    line.receivedCents === null ? 'the provider reported no amount' : `the provider reported ${centsWords(line.receivedCents, line.receivedCurrency ?? line.currency)}`;
+  return {
+    to,
+    subject: `An online payment from ${line.memberName} was refused`,
+    text: [
+      `Hello ${name},`,
+      ``,
+      `Gripline asked ${line.memberName} for ${centsWords(line.askedCents, line.currency)} at the online checkout, but ${received}.`,
+      `Because the two differ, nothing was recorded on ${line.memberName}’s tab.`,
+      ``,
+      `Settle it with ${line.memberName}: refund it in the provider’s dashboard or record the payment by hand on their tab.`,
+      ``,
+      `See refused checkouts on the Payments page:`,
+      link,
+    ].join('\n'),
+  };
+}

@@ -146,3 +146,23 @@ export const refundSchema = z.strictObject({
   refundableCents: z.number(),
 });
 export type Refund = z.infer<typeof refundSchema>;
+
+/**
+ * A checkout whose completion was refused because the provider reported another amount or currency
+ * than the checkout asked: the provider may hold money that is on no tab, for the lead to settle.
+ */
+export const refusedCheckoutSchema = z.strictObject({
+  id: z.number(),
+  member: person,
+  askedCents: z.number(),
+  currency: z.string(),
+  /** What the provider reported; null when it reported none. */
+  receivedCents: z.number().nullable(),
+  receivedCurrency: z.string().nullable(),
+  /** When the completion was refused. */
+  at: z.string(),
+  sessionId: z.string(),
+});
+export type RefusedCheckout = z.infer<typeof refusedCheckoutSchema>;
+export const refusedCheckoutListSchema = z.strictObject({ data: z.array(refusedCheckoutSchema) });
+export type RefusedCheckoutList = z.infer<typeof refusedCheckoutListSchema>;

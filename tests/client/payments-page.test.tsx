@@ -2,7 +2,7 @@ import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { Suspense } from 'react';
 import { beforeEach, describe, expect, it } from 'vitest';
-import type { PaymentListItem } from '@shared/schemas/payments';
+import type { PaymentListItem, RefusedCheckout } from '@shared/schemas/payments';
 import type { Tab } from '@shared/schemas/stock-money';
 import { PaymentsRoute } from '@/app/routes/app/payments';
 import { stockMoneyKeys } from '@/features/stock-money/api/keys';
@@ -25,12 +25,15 @@ const ONLINE: PaymentListItem = {
 const CASH: PaymentListItem = { ...ONLINE, id: 5, amountCents: 700, method: 'cash', refundableCents: 0, at: '2026-11-20T18:00:00.000Z', recordedBy: { id: 3, name: 'Quinn Quartermaster' }, note: 'at the bench' };
 const REFUNDED: PaymentListItem = { ...ONLINE, id: 4, amountCents: 900, refundedCents: 900, refundableCents: 0, at: '2026-11-02T18:00:00.000Z' };
 
+const REFUSED: RefusedCheckout = { id: 9, member: MIA, askedCents: 1440, currency: 'usd', receivedCents: 900, receivedCurrency: 'eur', at: '2026-12-02T15:00:00.000Z', sessionId: 'cs_test_refused' };
+
 type Answer = { status: number; body?: unknown } | undefined;
 
-function renderPaymentsPage(role: 'lead' | 'quartermaster', onRefund: (call: FakeCall) => Answer = () => undefined, path = '/payments') {
+function renderPaymentsPage(role: 'lead' | 'quartermaster', onRefund: (call: FakeCall) => Answer = () => undefined, path = '/payments', refused: RefusedCheckout[] = []) {
   let payments = [ONLINE, CASH, REFUNDED];
   const calls = fakeFetch((call) => {
     if (call.path === '/api/auth/me') return { status: 200, body: { user: { id: 1, name: 'Lee Lead', email: `${role}@example.org`, role } } };
+    if (call.method === 'GET' && call.path === '/api/payments/refused') return { status: 200, body: { data: refused } };
     if (call.method === 'GET' && call.path.startsWith('/api/payments')) return { status: 200, body: { data: payments } };
     if (call.method === 'POST' && call.path === '/api/payments/7/refund') {
       const answer = onRefund(call);
@@ -64,6 +67,24 @@ describe('Payments page', () => {
     expect(within(online!).getByRole('button', { name: 'Refund Mia Member’s payment of $14.40' })).toBeTruthy();
     expect(within(cash!).queryByRole('button', { name: /Refund/ })).toBeNull();
     expect(within(refunded!).queryByRole('button', { name: /Refund/ })).toBeNull();
+  });
+
+  it('shows the checkouts refused above the list, with what was asked and what the provider reported', async () => {
+    renderPaymentsPage('quartermaster', undefined, '/payments', [REFUSED]);
+    const card = await screen.findByRole('region', { name: 'Checkouts refused' });
+    const [item] = within(card).getAllByRole('listitem');
+    expect(item!.textContent).toContain('Mia Member');
+    expect(item!.textContent).toContain('asked $14.40, the provider reported €9.00');
+    expect(within(card).getByText(/refund it in the provider’s dashboard or record the payment by hand/)).toBeTruthy();
+    expect(card.compareDocumentPosition(screen.getByRole('table', { name: 'Payments, newest first' })) & Node.DOCUMENT_POSITION_FOLLOWING).toBeTruthy();
+  });
+
+  it('shows no refused card when no checkout was refused', async () => {
+    const { calls } = renderPaymentsPage('lead');
+    expect(await screen.findByRole('heading', { name: 'Payments', level: 1 })).toBeTruthy();
+    expect(calls.some((c) => c.path === '/api/payments/refused')).toBe(true);
+    expect(screen.queryByRole('region', { name: 'Checkouts refused' })).toBeNull();
+    expect(screen.queryByText(/refused/i)).toBeNull();
   });
 
   it('offers no refund to the quartermaster', async () => {

@@ -1,5 +1,7 @@
 import request from 'supertest';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { refusedCheckoutListSchema } from '@shared/schemas/payments';
+import { outboxMail } from '../../server/db/schema/mail';
 import { onlinePayments } from '../../server/db/schema/payments';
 import { memberPayments } from '../../server/db/schema/stock';
 import type { FakeProvider } from '../../server/payments/fake-provider';
@@ -201,6 +203,40 @@ describe('the hosted page and the signed webhook', () => {
     expect(warning).toMatchObject({ eventId: 'evt_test_short', userId: crew.member.id, expected: { amountCents: TAB_CENTS }, received: { amountCents: 100 } });
     expect(logged.join('')).not.toContain(fake.webhookSecret);
     expect(logged.join('')).not.toContain(fake.secretKey);
+  });
+
+  it('keeps what the provider reported on a refused completion, mails the lead and lists it for the lead and the quartermaster', async () => {
+    await drawOnTab(member, 120);
+    const sessionId = sessionIdOf(await checkout(member));
+    const payload = await completionEvent(sessionId, 'evt_test_euros', { amount_total: 900, currency: 'eur' });
+    expect((await deliver(payload, signed(payload))).status).toBe(200);
+    expect(t.db.select().from(onlinePayments).all()).toMatchObject([{ state: 'refused', amountCents: TAB_CENTS, currency: 'usd', receivedAmountCents: 900, receivedCurrency: 'eur' }]);
+
+    const mails = t.db.select().from(outboxMail).all();
+    expect(mails.map((m) => m.toAddress)).toEqual(['lead@example.org']);
+    expect(mails[0]!.subject).toBe(`An online payment from ${crew.member.name} was refused`);
+    expect(mails[0]!.textBody).toContain(`asked ${crew.member.name} for $14.40`);
+    expect(mails[0]!.textBody).toContain('the provider reported €9.00');
+    expect(mails[0]!.textBody).toContain('refund it in the provider’s dashboard or record the payment by hand');
+
+    expect((await member.agent.get('/api/payments/refused')).status).toBe(403);
+    const lead = await t.signIn('lead@example.org');
+    for (const who of [qm, lead]) {
+      const res = await who.agent.get('/api/payments/refused');
+      expect(res.status).toBe(200);
+      expect(refusedCheckoutListSchema.parse(res.body).data).toEqual([
+        { id: expect.any(Number), member: { id: crew.member.id, name: crew.member.name }, askedCents: TAB_CENTS, currency: 'usd', receivedCents: 900, receivedCurrency: 'eur', at: expect.any(String), sessionId },
+      ]);
+    }
+  });
+
+  it('lists no refused checkouts when every completion matched', async () => {
+    await drawOnTab(member, 120);
+    await p.payOnline(member);
+    const res = await qm.agent.get('/api/payments/refused');
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ data: [] });
+    expect(t.db.select().from(outboxMail).all().map((m) => m.toAddress)).toEqual(['member@example.org']);
   });
 });
 

@@ -83,6 +83,7 @@ const GETS = (): string[] => [
   '/api/payments/settings',
   '/api/payments/checkouts/cs_test_none',
   '/api/payments?method=online',
+  '/api/payments/refused',
   '/api/payments/export.csv?from=2026-11-01',
   '/api/builds',
   `/api/builds/${ids.build}`,

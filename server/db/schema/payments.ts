@@ -27,6 +27,9 @@ export const onlinePayments = sqliteTable(
     memberPaymentId: integer().references(() => memberPayments.id),
     /** The provider's payment behind a paid checkout (what a refund names); set when it settles. */
     paymentIntentId: text().unique(),
+    /** What the provider reported for a refused completion (another amount or currency than asked); null otherwise. */
+    receivedAmountCents: integer(),
+    receivedCurrency: text(),
     createdAt: integer({ mode: 'timestamp_ms' }).notNull(),
     updatedAt: integer({ mode: 'timestamp_ms' }).notNull(),
   },

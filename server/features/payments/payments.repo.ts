@@ -1,6 +1,7 @@
-import { and, eq } from 'drizzle-orm';
+import { and, desc, eq } from 'drizzle-orm';
 import type { Executor } from '../../db/client';
 import { onlinePayments, type OnlinePaymentRow } from '../../db/schema/payments';
+import { users } from '../../db/schema/users';
 
 export function insertOnlinePayment(db: Executor, values: typeof onlinePayments.$inferInsert): OnlinePaymentRow {
   return db.insert(onlinePayments).values(values).returning().get();
@@ -14,7 +15,15 @@ export function onlinePaymentBySession(db: Executor, sessionId: string): OnlineP
 export function closeOnlinePayment(
   db: Executor,
   id: number,
-  changes: { state: 'paid' | 'refused'; eventId: string; memberPaymentId?: number; paymentIntentId?: string | null; updatedAt: Date },
+  changes: {
+    state: 'paid' | 'refused';
+    eventId: string;
+    memberPaymentId?: number;
+    paymentIntentId?: string | null;
+    receivedAmountCents?: number | null;
+    receivedCurrency?: string | null;
+    updatedAt: Date;
+  },
 ): boolean {
   return db
     .update(onlinePayments)
@@ -50,4 +59,15 @@ export function onlinePaymentByMemberPayment(db: Executor, memberPaymentId: numb
 /** The paid checkout that made a provider payment (what a refund names). */
 export function onlinePaymentByIntent(db: Executor, paymentIntentId: string): OnlinePaymentRow | undefined {
   return db.select().from(onlinePayments).where(eq(onlinePayments.paymentIntentId, paymentIntentId)).get();
+}
+
+/** Checkouts whose completion was refused, with their member, newest refusal first. */
+export function refusedOnlinePayments(db: Executor) {
+  return db
+    .select({ payment: onlinePayments, member: { id: users.id, name: users.name } })
+    .from(onlinePayments)
+    .innerJoin(users, eq(users.id, onlinePayments.userId))
+    .where(eq(onlinePayments.state, 'refused'))
+    .orderBy(desc(onlinePayments.updatedAt), desc(onlinePayments.id))
+    .all();
 }

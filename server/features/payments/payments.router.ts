@@ -10,6 +10,7 @@ import { readCheckoutStatus } from './checkout-status';
 import { listPayments, paymentsCsv } from './payment-list.service';
 import { receiveProviderEvent, startCheckout, type TabLedger } from './payments.service';
 import { refundPayment } from './refunds.service';
+import { listRefusedCheckouts } from './refused-checkouts';
 
 const notSetUp = () => new HttpError(503, 'PAYMENTS_OFF', 'Online payment is not set up for this chapter. Pay the quartermaster in cash.');
 
@@ -43,6 +44,9 @@ function paymentsLedgerRoutes(router: Router, setup: PaymentsSetup | undefined, 
   router.get('/export.csv', quartermaster, (req, res) => {
     const { filename, csv } = paymentsCsv(req.ctx, tab, parseInput(paymentsQuerySchema, req.query, 'query'));
     sendCsv(res, filename, csv);
+  });
+  router.get('/refused', quartermaster, (req, res) => {
+    res.json({ data: listRefusedCheckouts(req.ctx) });
   });
   router.post('/:id/refund', requireRole('lead'), async (req, res) => {
     if (!setup) throw notSetUp();

@@ -16,6 +16,7 @@ import { readPaymentSettings } from '../../settings/payment-settings';
 import { expireEarlierCheckouts, recordExpiredCheckout } from './checkout-expiry';
 import { CHECKOUT_UNREACHABLE, providerCall } from './provider-call';
 import { recordChargeRefunds } from './refunds.service';
+import { refuseCheckout } from './refused-checkouts';
 import { closeOnlinePayment, insertOnlinePayment, onlinePaymentBySession } from './payments.repo';
 
 /** Which payments to list: from and before moments, and cash or online. */
@@ -104,7 +105,8 @@ function verifiedEvent(setup: PaymentsSetup, rawBody: Buffer, signature: string 
 /**
  * Records a completed checkout once, on the member's tab, with its receipt in the same transaction.
  * A checkout already closed (the same event again, or a second completion) changes nothing; an
- * amount or currency that differs from the checkout Gripline opened is refused and logged.
+ * amount or currency that differs from the checkout Gripline opened is refused, kept and reported
+ * to the leads (refuseCheckout).
  */
 function settleCheckout(ctx: ServiceContext, tab: TabLedger, logger: Logger, eventId: string, session: Stripe.Checkout.Session): void {
   ctx.db.transaction((tx) => {
@@ -120,11 +122,7 @@ function settleCheckout(ctx: ServiceContext, tab: TabLedger, logger: Logger, eve
     if (row.state !== 'open' || session.payment_status !== 'paid') return;
     const now = ctx.now();
     if (session.amount_total !== row.amountCents || session.currency !== row.currency) {
-      closeOnlinePayment(tx, row.id, { state: 'refused', eventId, updatedAt: now });
-      logger.warn(
-        { sessionId: session.id, eventId, userId: row.userId, expected: { amountCents: row.amountCents, currency: row.currency }, received: { amountCents: session.amount_total, currency: session.currency } },
-        'an online payment was refused: its amount does not match the checkout',
-      );
+      refuseCheckout(ctx, tx, logger, row, eventId, session, now);
       return;
     }
     const member = findUserById(tx, row.userId)!;

@@ -4,15 +4,20 @@ import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { hasRole } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { paymentsQueryOptions } from '@/features/stock-money/api/get-payments';
+import { refusedCheckoutsQueryOptions } from '@/features/stock-money/api/get-refused-checkouts';
 import { PaymentFilters } from '@/features/stock-money/components/payment-filters';
 import { PaymentsTable } from '@/features/stock-money/components/payments-table';
+import { RefusedCheckouts } from '@/features/stock-money/components/refused-checkouts';
 import { paymentsQueryOf } from '@/features/stock-money/utils/payments-query';
 import { Card, PageHeader } from '@/components/ui/page';
 import { requireRole } from './guards';
 
 export const paymentsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
   await requireRole(queryClient, request, 'quartermaster');
-  await queryClient.ensureQueryData(paymentsQueryOptions(paymentsQueryOf(new URL(request.url).searchParams)));
+  await Promise.all([
+    queryClient.ensureQueryData(paymentsQueryOptions(paymentsQueryOf(new URL(request.url).searchParams))),
+    queryClient.ensureQueryData(refusedCheckoutsQueryOptions()),
+  ]);
   return null;
 };
 
@@ -21,6 +26,7 @@ export function PaymentsRoute() {
   const [params] = useSearchParams();
   const query = paymentsQueryOf(params);
   const { data: payments } = useSuspenseQuery(paymentsQueryOptions(query));
+  const { data: refused } = useSuspenseQuery(refusedCheckoutsQueryOptions());
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const canRefund = me !== null && hasRole(me.role, 'lead');
 
@@ -35,6 +41,7 @@ export function PaymentsRoute() {
         }
       />
       <div className="flex flex-col gap-4">
+        <RefusedCheckouts refused={refused} />
         <Card title="Filters">
           <PaymentFilters query={query} />
         </Card>

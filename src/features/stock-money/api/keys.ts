@@ -12,4 +12,6 @@ export const stockMoneyKeys = {
   anyPayments: () => ['stock-money', 'payments'] as const,
   /** Everyone's payments, cash and online, for one set of filters. */
   payments: (query: PaymentsQuery) => ['stock-money', 'payments', query] as const,
+  /** Online checkouts whose completion was refused: the provider's amount differed from the one asked. */
+  refusedCheckouts: () => ['stock-money', 'refused-checkouts'] as const,
 };

@@ -59,6 +59,12 @@ describe('a page loader on a cold load', () => {
     expect(events).not.toContain('asked /api/waste');
   });
 
+  it('asks for the lead-only figures of Settings once the check says a lead is signed in', async () => {
+    const events = slowSignInCheck(person('lead'));
+    await runLoader(settingsLoader(testQueryClient()), '/settings');
+    expect(events.indexOf('asked /api/waste')).toBeGreaterThan(events.indexOf('signed-in check answered'));
+  });
+
   it('signed out, sends the person to sign-in even though the data requests were refused first', async () => {
     const events = slowSignInCheck(null);
     const thrown = await runLoader(tabLoader(testQueryClient()), '/tab?paid=1');
@@ -68,7 +74,7 @@ describe('a page loader on a cold load', () => {
     expect((thrown as Response).headers.get('Location')).toBe('/sign-in?next=%2Ftab%3Fpaid%3D1');
   });
 
-  it('signed out, a member opening a role page gets the sign-in page, not the error page', async () => {
+  it('signed out, a cold load of My tab lands on sign-in, not on the error page', async () => {
     slowSignInCheck(null);
     const queryClient = testQueryClient();
     const router = renderRoutes(

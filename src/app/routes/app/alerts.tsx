@@ -8,12 +8,14 @@ import { CheckNowButton } from '@/features/forecast/components/check-now-button'
 import { PurchaseList } from '@/features/forecast/components/purchase-list';
 import { SelectField } from '@/components/ui/field';
 import { PageHeading } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 export const alertsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'quartermaster');
   const state = alertFilter(new URL(request.url).searchParams.get('state'));
-  await Promise.all([queryClient.ensureQueryData(alertsQueryOptions(state)), queryClient.ensureQueryData(purchaseListQueryOptions())]);
+  await loadAlongside(
+    requireRole(queryClient, request, 'quartermaster'),
+    Promise.all([queryClient.ensureQueryData(alertsQueryOptions(state)), queryClient.ensureQueryData(purchaseListQueryOptions())]),
+  );
   return null;
 };
 

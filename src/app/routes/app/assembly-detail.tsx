@@ -14,13 +14,15 @@ import { toolKeys } from '@/features/tools/api/keys';
 import { plannedDatesText } from '@/features/planning/utils/words';
 import { Notice } from '@/components/ui/notice';
 import { Card, PageHeader } from '@/components/ui/page';
-import { requireSignedIn } from './guards';
+import { loadAlongside, requireSignedIn } from './guards';
 import { idFrom } from './id-param';
 
 export const assemblyDetailLoader = (queryClient: QueryClient) => async ({ request, params }: LoaderFunctionArgs) => {
-  await requireSignedIn(queryClient, request);
   const id = idFrom(params);
-  await Promise.all([queryClient.ensureQueryData(assemblyQueryOptions(id)), queryClient.ensureQueryData(assemblyEstimateQueryOptions(id))]);
+  await loadAlongside(
+    requireSignedIn(queryClient, request),
+    Promise.all([queryClient.ensureQueryData(assemblyQueryOptions(id)), queryClient.ensureQueryData(assemblyEstimateQueryOptions(id))]),
+  );
   return null;
 };
 

@@ -14,7 +14,7 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Card, PageHeader } from '@/components/ui/page';
 import { messageOf } from '@/lib/errors';
-import { requireSignedIn } from './guards';
+import { loadAlongside, requireSignedIn } from './guards';
 import { idFrom } from './id-param';
 
 /**
@@ -25,15 +25,14 @@ const editorContext = (queryClient: QueryClient) =>
   Promise.all([queryClient.ensureQueryData(preferencesQueryOptions()).catch(() => null), queryClient.ensureQueryData(planningSettingsQueryOptions()).catch(() => null)]);
 
 export const assemblyNewLoader = (queryClient: QueryClient) => async ({ request, params }: LoaderFunctionArgs) => {
-  await requireSignedIn(queryClient, request);
-  await Promise.all([queryClient.ensureQueryData(buildQueryOptions(idFrom(params))), editorContext(queryClient)]);
+  await loadAlongside(requireSignedIn(queryClient, request), Promise.all([queryClient.ensureQueryData(buildQueryOptions(idFrom(params))), editorContext(queryClient)]));
   return null;
 };
 
 export const assemblyEditLoader = (queryClient: QueryClient) => async ({ request, params }: LoaderFunctionArgs) => {
-  await requireSignedIn(queryClient, request);
-  const [assembly] = await Promise.all([queryClient.ensureQueryData(assemblyQueryOptions(idFrom(params))), editorContext(queryClient)]);
-  await queryClient.ensureQueryData(buildQueryOptions(assembly.buildId));
+  // The build is known only from the assembly: that request follows it, not the sign-in check.
+  const assemblyAndBuild = queryClient.ensureQueryData(assemblyQueryOptions(idFrom(params))).then((assembly) => queryClient.ensureQueryData(buildQueryOptions(assembly.buildId)));
+  await loadAlongside(requireSignedIn(queryClient, request), Promise.all([assemblyAndBuild, editorContext(queryClient)]));
   return null;
 };
 

@@ -11,7 +11,7 @@ import { BinActionsPanel } from '@/features/stock/components/bin-actions-panel';
 import { BinDetails, BinSummary } from '@/features/stock/components/bin-summary';
 import { LedgerList } from '@/features/stock/components/ledger-list';
 import { Card } from '@/components/ui/page';
-import { requireSignedIn } from './guards';
+import { loadAlongside, requireSignedIn } from './guards';
 import { loadOrOffline, useOfflinePage, type ScanLoaderData } from './offline-fallback';
 
 const codeOf = (params: { code?: string }) => (params.code ?? '').toUpperCase();
@@ -19,13 +19,15 @@ const codeOf = (params: { code?: string }) => (params.code ?? '').toUpperCase();
 export const binDetailLoader =
   (queryClient: QueryClient) =>
   async ({ request, params }: LoaderFunctionArgs): Promise<ScanLoaderData> => {
-    await requireSignedIn(queryClient, request);
     const code = codeOf(params);
-    return loadOrOffline(() => {
-      void queryClient.prefetchQuery(ledgerQueryOptions(code));
-      void queryClient.prefetchQuery(binReorderQueryOptions(code));
-      return queryClient.ensureQueryData(binQueryOptions(code));
-    });
+    return loadAlongside(
+      requireSignedIn(queryClient, request),
+      loadOrOffline(() => {
+        void queryClient.prefetchQuery(ledgerQueryOptions(code));
+        void queryClient.prefetchQuery(binReorderQueryOptions(code));
+        return queryClient.ensureQueryData(binQueryOptions(code));
+      }),
+    );
   };
 
 /** A bin's page, opened by scanning its label; with no connection, the bin as the phone's offline copy has it. */

@@ -6,7 +6,7 @@ import { binQueryOptions } from '@/features/stock/api/get-bins';
 import { useCreateBin, useEditBin } from '@/features/stock/api/save-bin';
 import { BinForm } from '@/features/stock/components/bin-form';
 import { Card, PageHeader } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 export const binNewLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
   await requireRole(queryClient, request, 'quartermaster');
@@ -14,8 +14,7 @@ export const binNewLoader = (queryClient: QueryClient) => async ({ request }: Lo
 };
 
 export const binEditLoader = (queryClient: QueryClient) => async ({ request, params }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'quartermaster');
-  await queryClient.ensureQueryData(binQueryOptions((params.code ?? '').toUpperCase()));
+  await loadAlongside(requireRole(queryClient, request, 'quartermaster'), queryClient.ensureQueryData(binQueryOptions((params.code ?? '').toUpperCase())));
   return null;
 };
 

@@ -6,11 +6,10 @@ import { meQueryOptions } from '@/features/auth/api/get-me';
 import { binsQueryOptions } from '@/features/stock/api/get-bins';
 import { BinTable } from '@/features/stock/components/bin-table';
 import { PageHeader } from '@/components/ui/page';
-import { requireSignedIn } from './guards';
+import { loadAlongside, requireSignedIn } from './guards';
 
 export const binsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireSignedIn(queryClient, request);
-  await queryClient.ensureQueryData(binsQueryOptions());
+  await loadAlongside(requireSignedIn(queryClient, request), queryClient.ensureQueryData(binsQueryOptions()));
   return null;
 };
 

@@ -12,11 +12,10 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Card, PageHeader } from '@/components/ui/page';
 import { messageOf } from '@/lib/errors';
-import { requireSignedIn } from './guards';
+import { loadAlongside, requireSignedIn } from './guards';
 
 export const buildsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireSignedIn(queryClient, request);
-  await Promise.all([queryClient.ensureQueryData(buildsQueryOptions()), queryClient.ensureQueryData(preferencesQueryOptions()).catch(() => null)]);
+  await loadAlongside(requireSignedIn(queryClient, request), Promise.all([queryClient.ensureQueryData(buildsQueryOptions()), queryClient.ensureQueryData(preferencesQueryOptions()).catch(() => null)]));
   return null;
 };
 

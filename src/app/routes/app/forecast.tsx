@@ -5,11 +5,10 @@ import { forecastQueryOptions } from '@/features/forecast/api/get-forecast';
 import { ForecastList } from '@/features/forecast/components/forecast-list';
 import { formatDay, formatPercent } from '@/features/forecast/utils/format';
 import { PageHeader } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 export const forecastLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'quartermaster');
-  await queryClient.ensureQueryData(forecastQueryOptions());
+  await loadAlongside(requireRole(queryClient, request, 'quartermaster'), queryClient.ensureQueryData(forecastQueryOptions()));
   return null;
 };
 

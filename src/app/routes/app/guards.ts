@@ -52,3 +52,20 @@ export async function requireRole(queryClient: QueryClient, request: Request, ro
   }
   return me;
 }
+
+/**
+ * Runs a page's guard and its data requests at once, so a cold load waits for one round trip, not two.
+ * When the guard refuses (signed out: the redirect to sign-in; the wrong role: the 403), its answer
+ * wins over a data request the server refused meanwhile; otherwise a failed data request is the page's
+ * error. Data that depends on who is signed in starts from the guard: `guard.then((me) => …)`.
+ */
+export async function loadAlongside<T>(guard: Promise<User>, data: Promise<T>): Promise<T> {
+  const loaded = data.then(
+    (value) => ({ value }),
+    (error: unknown) => ({ error }),
+  );
+  await guard;
+  const result = await loaded;
+  if ('error' in result) throw result.error;
+  return result.value;
+}

@@ -6,15 +6,17 @@ import { labelToolsQueryOptions } from '@/features/labels/api/get-label-tools';
 import { sheetLayoutsQueryOptions } from '@/features/labels/api/get-layouts';
 import { LabelSheetBuilder } from '@/features/labels/components/label-sheet-builder';
 import { PageHeader } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 export const labelsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'quartermaster');
-  await Promise.all([
-    queryClient.ensureQueryData(sheetLayoutsQueryOptions()),
-    queryClient.ensureQueryData(labelToolsQueryOptions()),
-    queryClient.ensureQueryData(labelBinsQueryOptions()),
-  ]);
+  await loadAlongside(
+    requireRole(queryClient, request, 'quartermaster'),
+    Promise.all([
+      queryClient.ensureQueryData(sheetLayoutsQueryOptions()),
+      queryClient.ensureQueryData(labelToolsQueryOptions()),
+      queryClient.ensureQueryData(labelBinsQueryOptions()),
+    ]),
+  );
   return null;
 };
 

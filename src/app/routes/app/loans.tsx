@@ -6,11 +6,10 @@ import { meQueryOptions } from '@/features/auth/api/get-me';
 import { myLoansQueryOptions, openLoansQueryOptions } from '@/features/tools/api/get-loans';
 import { LoanHistoryList, OpenLoanList } from '@/features/tools/components/loan-list';
 import { Card, PageHeader } from '@/components/ui/page';
-import { requireSignedIn } from './guards';
+import { loadAlongside, requireSignedIn } from './guards';
 
 export const loansLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireSignedIn(queryClient, request);
-  await queryClient.ensureQueryData(myLoansQueryOptions());
+  await loadAlongside(requireSignedIn(queryClient, request), queryClient.ensureQueryData(myLoansQueryOptions()));
   return null;
 };
 

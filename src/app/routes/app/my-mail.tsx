@@ -5,11 +5,10 @@ import { myMailQueryOptions } from '@/features/mail/api/get-mail';
 import { MailList } from '@/features/mail/components/mail-list';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 export const myMailLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'member');
-  await queryClient.ensureQueryData(myMailQueryOptions());
+  await loadAlongside(requireRole(queryClient, request, 'member'), queryClient.ensureQueryData(myMailQueryOptions()));
   return null;
 };
 

@@ -5,11 +5,10 @@ import { overdueQueryOptions } from '@/features/overdue/api/get-overdue';
 import { LastRunNote } from '@/features/overdue/components/last-run-note';
 import { OverdueTable } from '@/features/overdue/components/overdue-table';
 import { PageHeader } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 export const overdueLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'lead');
-  await queryClient.ensureQueryData(overdueQueryOptions());
+  await loadAlongside(requireRole(queryClient, request, 'lead'), queryClient.ensureQueryData(overdueQueryOptions()));
   return null;
 };
 

@@ -11,14 +11,13 @@ import { OverdueDaysPerWeek } from '@/features/tools/components/overview/overdue
 import { IdleTools, MostUsedTools } from '@/features/tools/components/overview/tool-use-tables';
 import { ChartBesideTable } from '@/components/ui/chart-figure';
 import { Card, PageHeader } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 /** The year of consumables the overview shows, as the Consumables page does by default. */
 const SPEND_MONTHS = 12;
 
 export const overviewLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'lead');
-  await Promise.all([queryClient.ensureQueryData(loanStatsQueryOptions()), queryClient.ensureQueryData(spendQueryOptions(SPEND_MONTHS))]);
+  await loadAlongside(requireRole(queryClient, request, 'lead'), Promise.all([queryClient.ensureQueryData(loanStatsQueryOptions()), queryClient.ensureQueryData(spendQueryOptions(SPEND_MONTHS))]));
   return null;
 };
 

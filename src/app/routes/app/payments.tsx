@@ -10,14 +10,16 @@ import { PaymentsTable } from '@/features/stock-money/components/payments-table'
 import { RefusedCheckouts } from '@/features/stock-money/components/refused-checkouts';
 import { paymentsQueryOf } from '@/features/stock-money/utils/payments-query';
 import { Card, PageHeader } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 export const paymentsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'quartermaster');
-  await Promise.all([
-    queryClient.ensureQueryData(paymentsQueryOptions(paymentsQueryOf(new URL(request.url).searchParams))),
-    queryClient.ensureQueryData(refusedCheckoutsQueryOptions()),
-  ]);
+  await loadAlongside(
+    requireRole(queryClient, request, 'quartermaster'),
+    Promise.all([
+      queryClient.ensureQueryData(paymentsQueryOptions(paymentsQueryOf(new URL(request.url).searchParams))),
+      queryClient.ensureQueryData(refusedCheckoutsQueryOptions()),
+    ]),
+  );
   return null;
 };
 

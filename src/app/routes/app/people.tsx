@@ -8,11 +8,10 @@ import { InviteForm } from '@/features/people/components/invite-form';
 import { PendingInvitations } from '@/features/people/components/pending-invitations';
 import { PeopleTable } from '@/features/people/components/people-table';
 import { Card, PageHeader } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 export const peopleLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'lead');
-  await Promise.all([queryClient.ensureQueryData(peopleQueryOptions()), queryClient.ensureQueryData(invitationsQueryOptions())]);
+  await loadAlongside(requireRole(queryClient, request, 'lead'), Promise.all([queryClient.ensureQueryData(peopleQueryOptions()), queryClient.ensureQueryData(invitationsQueryOptions())]));
   return null;
 };
 

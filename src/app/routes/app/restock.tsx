@@ -4,11 +4,10 @@ import type { LoaderFunctionArgs } from 'react-router';
 import { restockQueryOptions } from '@/features/stock/api/get-restock';
 import { RestockList } from '@/features/stock/components/restock-list';
 import { PageHeader } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 export const restockLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'quartermaster');
-  await queryClient.ensureQueryData(restockQueryOptions());
+  await loadAlongside(requireRole(queryClient, request, 'quartermaster'), queryClient.ensureQueryData(restockQueryOptions()));
   return null;
 };
 

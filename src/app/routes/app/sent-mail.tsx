@@ -5,11 +5,10 @@ import { mailQueryOptions } from '@/features/mail/api/get-mail';
 import { MailList } from '@/features/mail/components/mail-list';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 export const sentMailLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'lead');
-  await queryClient.ensureQueryData(mailQueryOptions());
+  await loadAlongside(requireRole(queryClient, request, 'lead'), queryClient.ensureQueryData(mailQueryOptions()));
   return null;
 };
 

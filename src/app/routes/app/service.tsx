@@ -5,11 +5,10 @@ import { serviceDueQueryOptions } from '@/features/service/api/get-service-due';
 import { ServiceDueTable } from '@/features/service/components/service-due-table';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 export const serviceLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'quartermaster');
-  await queryClient.ensureQueryData(serviceDueQueryOptions());
+  await loadAlongside(requireRole(queryClient, request, 'quartermaster'), queryClient.ensureQueryData(serviceDueQueryOptions()));
   return null;
 };
 

@@ -13,16 +13,20 @@ import { cribSettingsQueryOptions } from '@/features/signoffs/api/get-crib-setti
 import { HoldTimeCard } from '@/features/signoffs/components/hold-time-card';
 import { TimeZoneCard } from '@/features/signoffs/components/time-zone-card';
 import { Card, PageHeader } from '@/components/ui/page';
-import { requireSignedIn } from './guards';
+import { loadAlongside, requireSignedIn } from './guards';
 
 export const settingsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  const me = await requireSignedIn(queryClient, request);
-  await Promise.all([
-    queryClient.ensureQueryData(planningSettingsQueryOptions()),
-    queryClient.ensureQueryData(cribSettingsQueryOptions()),
-    queryClient.ensureQueryData(paymentSettingsQueryOptions()),
-    hasRole(me.role, 'lead') ? queryClient.ensureQueryData(actualWasteQueryOptions()) : null,
-  ]);
+  const guard = requireSignedIn(queryClient, request);
+  await loadAlongside(
+    guard,
+    Promise.all([
+      queryClient.ensureQueryData(planningSettingsQueryOptions()),
+      queryClient.ensureQueryData(cribSettingsQueryOptions()),
+      queryClient.ensureQueryData(paymentSettingsQueryOptions()),
+      // Only a lead sees the measured waste: that request waits to know who is signed in.
+      guard.then((me) => (hasRole(me.role, 'lead') ? queryClient.ensureQueryData(actualWasteQueryOptions()) : null)),
+    ]),
+  );
   return null;
 };
 

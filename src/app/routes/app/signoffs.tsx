@@ -9,15 +9,17 @@ import { SignoffForm } from '@/features/signoffs/components/signoff-form';
 import { SignoffList } from '@/features/signoffs/components/signoff-list';
 import { SignoffRequestList } from '@/features/signoffs/components/signoff-request-list';
 import { Card, PageHeader } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 export const signoffsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'lead');
-  await Promise.all([
-    queryClient.ensureQueryData(signoffsQueryOptions()),
-    queryClient.ensureQueryData(peopleQueryOptions()),
-    queryClient.ensureQueryData(signoffRequestsQueryOptions()),
-  ]);
+  await loadAlongside(
+    requireRole(queryClient, request, 'lead'),
+    Promise.all([
+      queryClient.ensureQueryData(signoffsQueryOptions()),
+      queryClient.ensureQueryData(peopleQueryOptions()),
+      queryClient.ensureQueryData(signoffRequestsQueryOptions()),
+    ]),
+  );
   return null;
 };
 

@@ -11,16 +11,14 @@ import { SpendTable } from '@/features/stock-money/components/spend-table';
 import { kindsUsed, SPEND_WINDOWS, spendWindow } from '@/features/stock-money/utils/kinds-used';
 import { SelectField } from '@/components/ui/field';
 import { Card, PageHeader } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 export const spendLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'lead');
   const months = spendWindow(new URL(request.url).searchParams.get('months'));
-  await Promise.all([
-    queryClient.ensureQueryData(spendQueryOptions(months)),
-    queryClient.ensureQueryData(tabsQueryOptions()),
-    queryClient.ensureQueryData(peopleQueryOptions()),
-  ]);
+  await loadAlongside(
+    requireRole(queryClient, request, 'lead'),
+    Promise.all([queryClient.ensureQueryData(spendQueryOptions(months)), queryClient.ensureQueryData(tabsQueryOptions()), queryClient.ensureQueryData(peopleQueryOptions())]),
+  );
   return null;
 };
 

@@ -9,11 +9,10 @@ import { stockMoneyKeys } from '@/features/stock-money/api/keys';
 import { myTabQueryOptions } from '@/features/stock-money/api/get-my-tab';
 import { TabView } from '@/features/stock-money/components/tab-view';
 import { PageHeader } from '@/components/ui/page';
-import { requireSignedIn } from './guards';
+import { loadAlongside, requireSignedIn } from './guards';
 
 export const tabLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireSignedIn(queryClient, request);
-  await Promise.all([queryClient.ensureQueryData(myTabQueryOptions()), queryClient.prefetchQuery(paymentSettingsQueryOptions())]);
+  await loadAlongside(requireSignedIn(queryClient, request), Promise.all([queryClient.ensureQueryData(myTabQueryOptions()), queryClient.prefetchQuery(paymentSettingsQueryOptions())]));
   return null;
 };
 

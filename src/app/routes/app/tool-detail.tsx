@@ -16,7 +16,7 @@ import { ToolActionsPanel } from '@/features/tools/components/tool-actions-panel
 import { ToolHistory } from '@/features/tools/components/tool-history';
 import { ToolSummary } from '@/features/tools/components/tool-summary';
 import { Card } from '@/components/ui/page';
-import { requireSignedIn } from './guards';
+import { loadAlongside, requireSignedIn } from './guards';
 import { loadOrOffline, useOfflinePage, type ScanLoaderData } from './offline-fallback';
 
 const codeOf = (params: { code?: string }) => (params.code ?? '').toUpperCase();
@@ -24,8 +24,10 @@ const codeOf = (params: { code?: string }) => (params.code ?? '').toUpperCase();
 export const toolDetailLoader =
   (queryClient: QueryClient) =>
   async ({ request, params }: LoaderFunctionArgs): Promise<ScanLoaderData> => {
-    await requireSignedIn(queryClient, request);
-    return loadOrOffline(() => queryClient.ensureQueryData(toolQueryOptions(codeOf(params))));
+    return loadAlongside(
+      requireSignedIn(queryClient, request),
+      loadOrOffline(() => queryClient.ensureQueryData(toolQueryOptions(codeOf(params)))),
+    );
   };
 
 /** A tool's page; with no connection, the tool as the phone's offline copy has it. */

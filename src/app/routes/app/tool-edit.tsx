@@ -7,20 +7,21 @@ import { toolQueryOptions } from '@/features/tools/api/get-tool';
 import { useCreateTool, useEditTool } from '@/features/tools/api/save-tool';
 import { ToolForm } from '@/features/tools/components/tool-form';
 import { Card, PageHeader } from '@/components/ui/page';
-import { requireRole } from './guards';
+import { loadAlongside, requireRole } from './guards';
 
 export const toolNewLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'quartermaster');
-  await queryClient.ensureQueryData(signoffsQueryOptions());
+  await loadAlongside(requireRole(queryClient, request, 'quartermaster'), queryClient.ensureQueryData(signoffsQueryOptions()));
   return null;
 };
 
 export const toolEditLoader = (queryClient: QueryClient) => async ({ request, params }: LoaderFunctionArgs) => {
-  await requireRole(queryClient, request, 'quartermaster');
-  await Promise.all([
-    queryClient.ensureQueryData(toolQueryOptions((params.code ?? '').toUpperCase())),
-    queryClient.ensureQueryData(signoffsQueryOptions()),
-  ]);
+  await loadAlongside(
+    requireRole(queryClient, request, 'quartermaster'),
+    Promise.all([
+      queryClient.ensureQueryData(toolQueryOptions((params.code ?? '').toUpperCase())),
+      queryClient.ensureQueryData(signoffsQueryOptions()),
+    ]),
+  );
   return null;
 };
 

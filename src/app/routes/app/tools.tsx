@@ -6,11 +6,10 @@ import { meQueryOptions } from '@/features/auth/api/get-me';
 import { toolsQueryOptions } from '@/features/tools/api/get-tools';
 import { ToolCatalog } from '@/features/tools/components/tool-catalog';
 import { PageHeader } from '@/components/ui/page';
-import { requireSignedIn } from './guards';
+import { loadAlongside, requireSignedIn } from './guards';
 
 export const toolsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await requireSignedIn(queryClient, request);
-  await queryClient.ensureQueryData(toolsQueryOptions());
+  await loadAlongside(requireSignedIn(queryClient, request), queryClient.ensureQueryData(toolsQueryOptions()));
   return null;
 };
 

@@ -1,34 +1,24 @@
 import { test } from 'vitest';
-import { buildTestApp, type Crew, type SignedInAgent, type TestApp } from './test-app';
-
-export interface CrewFixtures {
-  /** A fresh test app on its own in-memory database, closed after the test. */
-  t: TestApp;
-  /** The test app's clock; move `clock.now` to move the app's time. */
-  clock: TestApp['clock'];
-  /** One person per role (see TestApp.addCrew). */
-  crew: Crew;
-  /** The crew's lead, signed in. */
-  lead: SignedInAgent;
-  /** The crew's quartermaster, signed in. */
-  qm: SignedInAgent;
-  /** The crew's member, signed in. */
-  member: SignedInAgent;
-}
+import { buildTestApp } from './test-app';
 
 /**
- * `it` with the usual server-test setup as fixtures. Each is built only when a test names it:
- * `crewTest('…', async ({ qm, member }) => …)` gets a fresh app, its crew and two signed-in agents.
+ * `it` with the usual server-test setup as fixtures, each built only when a test (or a
+ * `crewTest.beforeEach`) names it:
+ * - `t`: a fresh test app on its own in-memory database, closed after the test;
+ * - `clock`: that app's clock (move `clock.now` to move the app's time);
+ * - `crew`: one person per role (TestApp.addCrew);
+ * - `lead`, `qm`, `member`: those people, signed in.
+ *
+ * `crewTest('…', async ({ qm, member }) => …)` gets an app, its crew and two signed-in agents.
  */
-export const crewTest = test.extend<CrewFixtures>({
-  t: async ({}, use) => {
+export const crewTest = test
+  .extend('t', async ({}, { onCleanup }) => {
     const t = await buildTestApp();
-    await use(t);
-    await t.close();
-  },
-  clock: async ({ t }, use) => use(t.clock),
-  crew: async ({ t }, use) => use(await t.addCrew()),
-  lead: async ({ t, crew }, use) => use(await t.signIn(crew.lead.email)),
-  qm: async ({ t, crew }, use) => use(await t.signIn(crew.quartermaster.email)),
-  member: async ({ t, crew }, use) => use(await t.signIn(crew.member.email)),
-});
+    onCleanup(() => t.close());
+    return t;
+  })
+  .extend('clock', ({ t }) => t.clock)
+  .extend('crew', ({ t }) => t.addCrew())
+  .extend('lead', async ({ t, crew }) => t.signIn(crew.lead.email))
+  .extend('qm', async ({ t, crew }) => t.signIn(crew.quartermaster.email))
+  .extend('member', async ({ t, crew }) => t.signIn(crew.member.email));

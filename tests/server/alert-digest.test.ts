@@ -1,5 +1,5 @@
 import { eq } from 'drizzle-orm';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import type { ServiceContext } from '../../server/context';
 import { jobRuns } from '../../server/db/schema/crib-jobs';
 import { outboxMail } from '../../server/db/schema/mail';
@@ -7,44 +7,34 @@ import { users } from '../../server/db/schema/users';
 import { ALERT_DIGEST_JOB, runAlertDigest } from '../../server/features/planning/alert-digest';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
 import { addAssembly, hundredRivetLine, screwBin } from '../helpers/planning-fixture';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
 
-let t: TestApp;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-let ctx: ServiceContext;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
+const test = crewTest
   // The job gets what the server gives it, with the test's clock; its mail goes to the outbox.
-  ctx = { db: t.db, publicUrl: 'http://gripline.test', now: () => t.clock.now };
-  t.clock.now = new Date('2026-12-01T07:00:00Z');
-});
-afterEach(() => t.close());
-
-const runs = () => t.db.select().from(jobRuns).where(eq(jobRuns.job, ALERT_DIGEST_JOB)).all();
-/** Messages written, sent or not. */
-const mailCount = () => t.db.select().from(outboxMail).all().length;
-
-/** A rivet bin (Cedar Valley) and a screw bin (Harbour Hardware), both short this week. */
-async function twoShortBins() {
-  const rivets = await addBinAs(qm, blindRivetBin({ initialQuantity: 100, leadTimeDays: 14 }));
-  const screws = await addBinAs(qm, screwBin({ supplierPart: 'PS832-8' }));
-  await addAssembly(member, {
-    name: 'Tool chest',
-    plannedStart: '2026-12-01',
-    plannedFinish: '2026-12-06',
-    lines: [hundredRivetLine],
-    extraItems: [{ binCode: screws.code, quantity: 250 }],
+  .extend('ctx', ({ t }): ServiceContext => ({ db: t.db, publicUrl: 'http://gripline.test', now: () => t.clock.now }))
+  .extend('runs', ({ t }) => () => t.db.select().from(jobRuns).where(eq(jobRuns.job, ALERT_DIGEST_JOB)).all())
+  /** Messages written, sent or not. */
+  .extend('mailCount', ({ t }) => () => t.db.select().from(outboxMail).all().length)
+  /** A rivet bin (Cedar Valley) and a screw bin (Harbour Hardware), both short this week. */
+  .extend('twoShortBins', ({ qm, member }) => async () => {
+    const rivets = await addBinAs(qm, blindRivetBin({ initialQuantity: 100, leadTimeDays: 14 }));
+    const screws = await addBinAs(qm, screwBin({ supplierPart: 'PS832-8' }));
+    await addAssembly(member, {
+      name: 'Tool chest',
+      plannedStart: '2026-12-01',
+      plannedFinish: '2026-12-06',
+      lines: [hundredRivetLine],
+      extraItems: [{ binCode: screws.code, quantity: 250 }],
+    });
+    return { rivets, screws };
   });
-  return { rivets, screws };
-}
+
+test.beforeEach(({ clock }) => {
+  clock.now = new Date('2026-12-01T07:00:00Z');
+});
 
 describe('the daily alert digest', () => {
-  it('refreshes the alerts and mails each active quartermaster the list by supplier', async () => {
+  test('refreshes the alerts and mails each active quartermaster the list by supplier', async ({ t, ctx, runs, twoShortBins }) => {
     const { rivets, screws } = await twoShortBins();
     const other = await t.addUser({ email: 'qm2@example.org', name: 'Rowan Restock', role: 'quartermaster' });
     const gone = await t.addUser({ email: 'qm-old@example.org', name: 'Old Quartermaster', role: 'quartermaster' });
@@ -76,7 +66,7 @@ describe('the daily alert digest', () => {
     expect(run).toMatchObject({ startedAt: new Date('2026-12-01T07:00:00Z'), finishedAt: new Date('2026-12-01T07:00:00Z'), summary: result.summary, error: null });
   });
 
-  it('lists orders on their way too, and sends nothing once no alert is still to order', async () => {
+  test('lists orders on their way too, and sends nothing once no alert is still to order', async ({ t, qm, ctx, runs, mailCount, twoShortBins }) => {
     const { rivets, screws } = await twoShortBins();
     runAlertDigest(ctx);
     const alerts = (await qm.agent.get('/api/alerts')).body.data as { id: number; bin: { code: string } }[];
@@ -100,7 +90,7 @@ describe('the daily alert digest', () => {
     expect(runs()).toHaveLength(3);
   });
 
-  it('records a run with nothing to do', async () => {
+  test('records a run with nothing to do', async ({ qm, ctx, runs, mailCount }) => {
     await addBinAs(qm, blindRivetBin());
     const result = runAlertDigest(ctx);
     expect(result).toMatchObject({ raised: 0, digestsSent: 0, error: null });

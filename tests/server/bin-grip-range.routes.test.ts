@@ -1,5 +1,5 @@
 import Papa from 'papaparse';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { importPreviewSchema } from '@shared/schemas/bin-import';
 import { binFieldsSchema, type BinFields } from '@shared/schemas/bins';
 import { errorEnvelopeSchema } from '@shared/schemas/errors';
@@ -7,25 +7,25 @@ import { migrateDatabase } from '../../server/db/client';
 import { findBinLabels } from '../../server/features/labels/labels.repo';
 import { addBinAs, blindRivetBin, patch, post } from '../helpers/crib';
 import { withDatabaseBefore } from '../helpers/migrations-before';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
 
 // Grip bands by dash from TM 10-5410-221-14/1 Table 4-3: −2 0.063–0.125 in, −3 0.126–0.187 in, −4 0.188–0.250 in.
 
-let t: TestApp;
-let qm: SignedInAgent;
+const records = (text: string) => Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: true }).data;
 
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-});
-afterEach(() => t.close());
-
-async function binOf(code: string): Promise<BinFields> {
-  const res = await qm.agent.get(`/api/bins/${code}`);
-  expect(res.status).toBe(200);
-  return binFieldsSchema.parse(res.body);
-}
+const test = crewTest
+  .extend('binOf', ({ qm }) => async (code: string): Promise<BinFields> => {
+    const res = await qm.agent.get(`/api/bins/${code}`);
+    expect(res.status).toBe(200);
+    return binFieldsSchema.parse(res.body);
+  })
+  /** The quartermaster's bins export, each row passed through `edit`. */
+  .extend('editedExport', ({ qm }) => async (edit: (r: Record<string, string>) => void = () => {}): Promise<string> => {
+    const rows = records((await qm.agent.get('/api/bins/export.csv')).text);
+    rows.forEach(edit);
+    return Papa.unparse(rows, { newline: '\r\n' });
+  })
+  .extend('preview', ({ qm }) => async (csv: string) => importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv })).body));
 
 function refused(res: { status: number; body: unknown }) {
   expect(res.status).toBe(400);
@@ -33,7 +33,7 @@ function refused(res: { status: number; body: unknown }) {
 }
 
 describe('a blind bin’s grip range', () => {
-  it('defaults to the table’s band for its grip dash', async () => {
+  test('defaults to the table’s band for its grip dash', async ({ qm, binOf }) => {
     const { code } = await addBinAs(qm, blindRivetBin());
     const bin = await binOf(code);
     // −2: 0.063–0.125 in (TM 10-5410-221-14/1 Table 4-3).
@@ -42,7 +42,7 @@ describe('a blind bin’s grip range', () => {
     expect(bin.designation).toBe('Blind, structural, dome, 5056, steel stem · 1/8 in · grip −2 (0.063–0.125 in)');
   });
 
-  it('keeps the range from the box, to the thousandth, and shows it in the designation and on the label', async () => {
+  test('keeps the range from the box, to the thousandth, and shows it in the designation and on the label', async ({ t, qm, binOf }) => {
     // A maker's −3 box reading 0.0945–0.1875 in: kept to the table's 0.001 in as 0.095–0.188 (rounded half up).
     const { code } = await addBinAs(qm, blindRivetBin({ grip16: 3, gripMin: 0.0945, gripMax: 0.1875 }));
     const bin = await binOf(code);
@@ -51,12 +51,12 @@ describe('a blind bin’s grip range', () => {
     expect(findBinLabels(t.db, [code]).get(code)?.title).toBe(bin.designation);
   });
 
-  it('takes one end from the box and the other from the table', async () => {
+  test('takes one end from the box and the other from the table', async ({ qm, binOf }) => {
     const { code } = await addBinAs(qm, blindRivetBin({ gripMax: 0.14 }));
     expect((await binOf(code)).gripRange).toEqual({ min: 0.063, max: 0.14 });
   });
 
-  it('refuses with 400, naming the field, a minimum at or above the maximum', async () => {
+  test('refuses with 400, naming the field, a minimum at or above the maximum', async ({ qm }) => {
     const error = refused(await post(qm, '/api/bins', blindRivetBin({ gripMin: 0.1, gripMax: 0.1 })));
     expect(error.code).toBe('VALIDATION_FAILED');
     expect(error.issues).toEqual([{ path: 'gripMax', message: 'The smallest grip (0.100 in) must be below the largest (0.100 in).' }]);
@@ -65,7 +65,7 @@ describe('a blind bin’s grip range', () => {
     expect(alone.issues).toEqual([{ path: 'gripMin', message: 'The smallest grip (0.130 in) must be below the largest (0.125 in).' }]);
   });
 
-  it('refuses a range outside 0.010–1.000 in', async () => {
+  test('refuses a range outside 0.010–1.000 in', async ({ qm }) => {
     for (const [field, value] of [['gripMin', 0.005], ['gripMax', 1.2], ['gripMin', -0.1]] as const) {
       const error = refused(await post(qm, '/api/bins', blindRivetBin({ [field]: value })));
       expect(error.issues).toEqual([{ path: field, message: 'A grip range lies between 0.010 and 1.000 in.' }]);
@@ -74,7 +74,7 @@ describe('a blind bin’s grip range', () => {
     expect(text.issues).toEqual([{ path: 'gripMax', message: 'Enter the largest grip from the box in inches, like 0.125.' }]);
   });
 
-  it('refuses a range wholly outside the dash’s band: another dash or a slip of the pen', async () => {
+  test('refuses a range wholly outside the dash’s band: another dash or a slip of the pen', async ({ qm }) => {
     // −2 is 0.063–0.125 in; 0.188–0.250 in is the −4 band.
     const error = refused(await post(qm, '/api/bins', blindRivetBin({ gripMin: 0.188, gripMax: 0.25 })));
     expect(error.issues).toEqual([
@@ -84,7 +84,7 @@ describe('a blind bin’s grip range', () => {
     expect((await post(qm, '/api/bins', blindRivetBin({ gripMin: 0.1, gripMax: 0.15 }))).status).toBe(201);
   });
 
-  it('refuses a range on a solid rivet or a bin that holds no rivets', async () => {
+  test('refuses a range on a solid rivet or a bin that holds no rivets', async ({ qm, binOf }) => {
     const solid = { kind: 'solid_rivet', head: 'dome', material: '2117-T4', diameter32: 4, length16: 6, gripMin: 0.063 };
     expect((refused(await post(qm, '/api/bins', solid))).issues).toEqual([
       { path: 'gripMin', message: 'Solid rivets are sized by length: only blind rivet bins carry a grip range. Leave it empty.' },
@@ -97,7 +97,7 @@ describe('a blind bin’s grip range', () => {
     expect(await binOf(code)).toMatchObject({ gripMin: null, gripMax: null, gripRange: null });
   });
 
-  it('on an edit: keeps the range unless the dash changes, when it takes the new dash’s band; null goes back to the table', async () => {
+  test('on an edit: keeps the range unless the dash changes, when it takes the new dash’s band; null goes back to the table', async ({ qm, binOf }) => {
     const { code } = await addBinAs(qm, blindRivetBin({ gripMin: 0.07, gripMax: 0.13 }));
     expect((await patch(qm, `/api/bins/${code}`, { location: 'Shelf B1' })).status).toBe(200);
     expect((await binOf(code)).gripRange).toEqual({ min: 0.07, max: 0.13 });
@@ -123,15 +123,7 @@ describe('a blind bin’s grip range', () => {
 });
 
 describe('the grip range in the bins CSV', () => {
-  const records = (text: string) => Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: true }).data;
-  async function editedExport(edit: (r: Record<string, string>) => void = () => {}): Promise<string> {
-    const rows = records((await qm.agent.get('/api/bins/export.csv')).text);
-    rows.forEach(edit);
-    return Papa.unparse(rows, { newline: '\r\n' });
-  }
-  const preview = async (csv: string) => importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv })).body);
-
-  it('exports the two columns, and an untouched export reads back unchanged, row by row', async () => {
+  test('exports the two columns, and an untouched export reads back unchanged, row by row', async ({ qm, editedExport, preview }) => {
     await addBinAs(qm, blindRivetBin());
     await addBinAs(qm, blindRivetBin({ grip16: 3, gripMin: 0.095, gripMax: 0.188 }));
     await addBinAs(qm, { kind: 'solid_rivet', head: 'dome', material: '2117-T4', diameter32: 4, length16: 6 });
@@ -149,7 +141,7 @@ describe('the grip range in the bins CSV', () => {
     ]);
   });
 
-  it('updates a range from the file, with its unit written or not, and refuses one outside the band', async () => {
+  test('updates a range from the file, with its unit written or not, and refuses one outside the band', async ({ qm, binOf, editedExport, preview }) => {
     await addBinAs(qm, blindRivetBin());
     const p = await preview(
       await editedExport((r) => {
@@ -174,7 +166,7 @@ describe('the grip range in the bins CSV', () => {
     });
   });
 
-  it('gives a new dash the table’s band when the file has no range columns, and empty cells the table’s band', async () => {
+  test('gives a new dash the table’s band when the file has no range columns, and empty cells the table’s band', async ({ qm, preview }) => {
     await addBinAs(qm, blindRivetBin({ gripMin: 0.07, gripMax: 0.13 }));
     // An older file without the range columns moves the bin to −3: its range becomes the −3 band, 0.126–0.187 in.
     const old = await preview('code,kind,grip_dash\r\nB-0001,blind_structural,3');
@@ -195,7 +187,7 @@ describe('the grip range in the bins CSV', () => {
     expect(kept.rows[0]!.changes).toEqual([{ column: 'location', from: 'Shelf A2', to: 'Shelf B1' }]);
   });
 
-  it('new rows take the table’s band, or the file’s range', async () => {
+  test('new rows take the table’s band, or the file’s range', async ({ preview }) => {
     const p = await preview('kind,head,material,diameter_32nds,grip_dash,grip_min_in,grip_max_in\r\nblind_structural,dome,5056,4,2,,\r\nblind_structural,dome,5056,4,2,.07,.13');
     expect(p.rows.map((r) => [r.status, r.designation])).toEqual([
       ['new', 'Blind, structural, dome, 5056 · 1/8 in · grip −2 (0.063–0.125 in)'],

@@ -1,21 +1,9 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { addBinAs, blindRivetBin, patch, post } from '../helpers/crib';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-});
-afterEach(() => t.close());
+import { crewTest } from '../helpers/crew-test';
 
 describe('bins and their ledger', () => {
-  it('draws, receives and counts, with on hand always the ledger sum', async () => {
+  crewTest('draws, receives and counts, with on hand always the ledger sum', async ({ qm, member }) => {
     const bin = await addBinAs(qm, blindRivetBin());
     expect(bin.code).toBe('B-0001');
     expect(bin.onHand).toBe(500);
@@ -40,7 +28,7 @@ describe('bins and their ledger', () => {
     expect(ledger.body.data.reduce((s: number, m: { quantity: number }) => s + m.quantity, 0)).toBe(575);
   });
 
-  it('refuses to draw more than is on hand, and writes nothing', async () => {
+  crewTest('refuses to draw more than is on hand, and writes nothing', async ({ qm, member }) => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 30 }));
     const res = await post(member, `/api/bins/${bin.code}/draw`, { quantity: 31 });
     expect(res.status).toBe(409);
@@ -50,7 +38,7 @@ describe('bins and their ledger', () => {
     expect(ledger.body.data).toHaveLength(1);
   });
 
-  it('reverses an entry once, naming it, and moves stock between bins of one spec', async () => {
+  crewTest('reverses an entry once, naming it, and moves stock between bins of one spec', async ({ qm, member }) => {
     const a = await addBinAs(qm, blindRivetBin());
     const b = await addBinAs(qm, blindRivetBin({ initialQuantity: 0, location: 'Shelf B1' }));
     const drawn = await post(member, `/api/bins/${a.code}/draw`, { quantity: 50 });
@@ -74,7 +62,7 @@ describe('bins and their ledger', () => {
 });
 
 describe('parallel draws against one bin', () => {
-  it('never oversell: of 40 draws of 7 from 100, exactly 14 succeed and the ledger sums to 2', async () => {
+  crewTest('never oversell: of 40 draws of 7 from 100, exactly 14 succeed and the ledger sums to 2', async ({ t, qm }) => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));
     const members = await Promise.all(
       [1, 2, 3, 4].map(async (i) => {
@@ -96,7 +84,7 @@ describe('parallel draws against one bin', () => {
 });
 
 describe('refusals', () => {
-  it('keeps receive, count, move, write-off and reverse to the quartermaster', async () => {
+  crewTest('keeps receive, count, move, write-off and reverse to the quartermaster', async ({ qm, member }) => {
     const bin = await addBinAs(qm, blindRivetBin());
     for (const [path, body] of [
       ['receive', { quantity: 10 }],
@@ -111,7 +99,7 @@ describe('refusals', () => {
     expect((await patch(member, `/api/bins/${bin.code}`, { location: 'Floor' })).status).toBe(403);
   });
 
-  it('answers bad input with 400 and words, unknown bins with 404', async () => {
+  crewTest('answers bad input with 400 and words, unknown bins with 404', async ({ qm, member }) => {
     const bin = await addBinAs(qm, blindRivetBin());
     const zero = await post(member, `/api/bins/${bin.code}/draw`, { quantity: 0 });
     expect(zero.status).toBe(400);
@@ -131,7 +119,7 @@ describe('refusals', () => {
     expect((await member.agent.get(`/api/bins/${bin.code}/ledger`)).body.data).toHaveLength(1);
   });
 
-  it('refuses a write-off below zero, a return beyond what was drawn, and a move to a different spec', async () => {
+  crewTest('refuses a write-off below zero, a return beyond what was drawn, and a move to a different spec', async ({ qm, member }) => {
     const a = await addBinAs(qm, blindRivetBin({ initialQuantity: 20 }));
     const other = await addBinAs(qm, blindRivetBin({ grip16: 3 }));
     const off = await post(qm, `/api/bins/${a.code}/write-off`, { quantity: 21, note: 'dropped' });
@@ -151,7 +139,7 @@ describe('refusals', () => {
     expect(move.body.error.code).toBe('NOT_SAME_SPEC');
   });
 
-  it('does not reverse a receipt whose stock has already gone', async () => {
+  crewTest('does not reverse a receipt whose stock has already gone', async ({ qm, member }) => {
     const a = await addBinAs(qm, blindRivetBin({ initialQuantity: 0 }));
     const got = await post(qm, `/api/bins/${a.code}/receive`, { quantity: 100 });
     await post(member, `/api/bins/${a.code}/draw`, { quantity: 60 });
@@ -160,7 +148,7 @@ describe('refusals', () => {
     expect(undo.body.error).toMatchObject({ code: 'INSUFFICIENT_STOCK', message: expect.stringContaining('only 40 on hand') });
   });
 
-  it('lets a draw name only the drawing member’s own assembly: 400 ASSEMBLY_NOT_YOURS otherwise, and nothing written', async () => {
+  crewTest('lets a draw name only the drawing member’s own assembly: 400 ASSEMBLY_NOT_YOURS otherwise, and nothing written', async ({ qm, member }) => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));
     const build = await post(member, '/api/builds', { name: 'Tool chest' });
     const lid = await post(member, `/api/builds/${build.body.id}/assemblies`, { name: 'Lid', unit: 'in' });
@@ -185,7 +173,7 @@ describe('refusals', () => {
 });
 
 describe('what a scan offers', () => {
-  it('offers a member Draw, and a quartermaster Receive, Count, Move and Write off', async () => {
+  crewTest('offers a member Draw, and a quartermaster Receive, Count, Move and Write off', async ({ qm, member }) => {
     const bin = await addBinAs(qm, blindRivetBin());
     await addBinAs(qm, blindRivetBin({ initialQuantity: 0, location: 'Overflow shelf' }));
     const forMember = await member.agent.get(`/api/bins/${bin.code}`);
@@ -197,7 +185,7 @@ describe('what a scan offers', () => {
     expect(forQm.body.forYou.sameSpecBins).toEqual([{ code: 'B-0002', location: 'Overflow shelf', onHand: 0 }]);
   });
 
-  it('lists low bins on the Restock list with whole packs to order', async () => {
+  crewTest('lists low bins on the Restock list with whole packs to order', async ({ qm, member }) => {
     await addBinAs(qm, blindRivetBin({ initialQuantity: 150, reorderPoint: 200, reorderQty: 450, packSize: 100 }));
     await addBinAs(qm, blindRivetBin({ initialQuantity: 900 }));
     // Nothing draws from it, so its own point (200) and quantity (450) rule: order up to 650, less 150 on hand = 500.
@@ -209,7 +197,7 @@ describe('what a scan offers', () => {
     expect(low.body.meta.total).toBe(1);
   });
 
-  it('keeps an edited bin valid for its kind and never edits on hand', async () => {
+  crewTest('keeps an edited bin valid for its kind and never edits on hand', async ({ qm }) => {
     const bin = await addBinAs(qm, blindRivetBin());
     const dropGrip = await patch(qm, `/api/bins/${bin.code}`, { grip16: null });
     expect(dropGrip.status).toBe(400);
@@ -228,20 +216,20 @@ describe('a solid rivet bin’s head', () => {
   const FLANGE_WORDS = 'A solid rivet’s head is universal or 100° countersunk; large flange is a blind-rivet head.';
   const solidBin = (head: string) => blindRivetBin({ kind: 'solid_rivet', head, material: '2117-T4', stemMaterial: null, grip16: null, length16: 6 });
 
-  it('refuses a solid rivet bin with a large flange head: 400 naming head, in words', async () => {
+  crewTest('refuses a solid rivet bin with a large flange head: 400 naming head, in words', async ({ qm, member }) => {
     const res = await post(qm, '/api/bins', solidBin('flange'));
     expect(res.status).toBe(400);
     expect(res.body.error).toMatchObject({ code: 'VALIDATION_FAILED', issues: [{ path: 'head', message: FLANGE_WORDS }] });
     expect((await member.agent.get('/api/bins')).body.data).toEqual([]);
   });
 
-  it('takes a universal or 100° countersunk solid rivet, and a large flange blind rivet', async () => {
+  crewTest('takes a universal or 100° countersunk solid rivet, and a large flange blind rivet', async ({ qm }) => {
     expect((await post(qm, '/api/bins', solidBin('dome'))).status).toBe(201);
     expect((await post(qm, '/api/bins', solidBin('countersunk'))).status).toBe(201);
     expect((await post(qm, '/api/bins', blindRivetBin({ kind: 'blind_general', head: 'flange', material: 'aluminium', stemMaterial: 'aluminium' }))).status).toBe(201);
   });
 
-  it('refuses an edit that gives a solid rivet bin a large flange head, or makes a large flange bin solid', async () => {
+  crewTest('refuses an edit that gives a solid rivet bin a large flange head, or makes a large flange bin solid', async ({ qm }) => {
     const solid = await addBinAs(qm, solidBin('dome'));
     const toFlange = await patch(qm, `/api/bins/${solid.code}`, { head: 'flange' });
     expect(toFlange.status).toBe(400);
@@ -254,7 +242,7 @@ describe('a solid rivet bin’s head', () => {
 });
 
 describe('reversing what has moved on', () => {
-  it('refuses to reverse a draw that has a return against it (409 RETURN_AGAINST_DRAW) until the return is reversed', async () => {
+  crewTest('refuses to reverse a draw that has a return against it (409 RETURN_AGAINST_DRAW) until the return is reversed', async ({ qm, member }) => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));
     const drawn = await post(member, `/api/bins/${bin.code}/draw`, { quantity: 25 });
     const back = await post(member, `/api/bins/${bin.code}/return`, { quantity: 5 });
@@ -271,7 +259,7 @@ describe('reversing what has moved on', () => {
     expect((await member.agent.get('/api/stock/tab')).body.chargedCents).toBe(0);
   });
 
-  it('lets a draw be reversed when the member’s other draws cover the return', async () => {
+  crewTest('lets a draw be reversed when the member’s other draws cover the return', async ({ qm, member }) => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));
     const first = await post(member, `/api/bins/${bin.code}/draw`, { quantity: 10 });
     await post(member, `/api/bins/${bin.code}/draw`, { quantity: 20 });
@@ -281,7 +269,7 @@ describe('reversing what has moved on', () => {
     expect((await member.agent.get(`/api/bins/${bin.code}`)).body.forYou.yourNetDrawn).toBe(5);
   });
 
-  it('refuses with 409 to reverse a move whose stock has left the other bin, and writes nothing', async () => {
+  crewTest('refuses with 409 to reverse a move whose stock has left the other bin, and writes nothing', async ({ qm, member }) => {
     const a = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));
     const b = await addBinAs(qm, blindRivetBin({ initialQuantity: 0, location: 'Shelf B1' }));
     const moved = await post(qm, `/api/bins/${a.code}/move`, { to: b.code, quantity: 40 });
@@ -293,7 +281,7 @@ describe('reversing what has moved on', () => {
     expect((await qm.agent.get(`/api/bins/${b.code}`)).body.onHand).toBe(10);
   });
 
-  it('refuses with 409 to reverse a count that found stock when that stock has since been drawn', async () => {
+  crewTest('refuses with 409 to reverse a count that found stock when that stock has since been drawn', async ({ qm, member }) => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 10 }));
     const counted = await post(qm, `/api/bins/${bin.code}/count`, { counted: 50 });
     await post(member, `/api/bins/${bin.code}/draw`, { quantity: 45 });

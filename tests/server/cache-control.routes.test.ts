@@ -1,20 +1,13 @@
 import sharp from 'sharp';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { addBinAs, addToolAs, blindRivetBin, post } from '../helpers/crib';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
+import type { SignedInAgent } from '../helpers/test-app';
 
-let t: TestApp;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
+crewTest.beforeEach(async ({ qm }) => {
   await addToolAs(qm, { name: 'Pneumatic rivet puller', category: 'other' });
   await addBinAs(qm, blindRivetBin());
 });
-afterEach(() => t.close());
 
 /** Reads a binary answer without supertest trying to parse it. */
 const raw = (who: SignedInAgent, path: string) =>
@@ -28,16 +21,16 @@ const raw = (who: SignedInAgent, path: string) =>
     });
 
 describe('Cache-Control on API answers', () => {
-  it.each(['/api/auth/me', '/api/auth/csrf', '/api/tools', '/api/tools/T-0001', '/api/bins', '/api/loans/mine', '/api/nope', '/api/tools/T-9999'])(
+  crewTest.for(['/api/auth/me', '/api/auth/csrf', '/api/tools', '/api/tools/T-0001', '/api/bins', '/api/loans/mine', '/api/nope', '/api/tools/T-9999'])(
     'GET %s signed in answers Cache-Control: no-store',
-    async (path) => {
+    async (path, { member }) => {
       const res = await member.agent.get(path);
       expect(res.status).not.toBe(500);
       expect(res.headers['cache-control']).toBe('no-store');
     },
   );
 
-  it('sends no-store on a refusal, an anonymous answer and a change too', async () => {
+  crewTest('sends no-store on a refusal, an anonymous answer and a change too', async ({ t, qm, member }) => {
     expect((await (await t.anonymous()).agent.get('/api/tools')).headers['cache-control']).toBe('no-store');
     const refused = await post(member, '/api/bins', blindRivetBin());
     expect(refused.status).toBe(403);
@@ -47,7 +40,7 @@ describe('Cache-Control on API answers', () => {
     expect(made.headers['cache-control']).toBe('no-store');
   });
 
-  it('keeps a CSV export and a label sheet PDF out of every cache', async () => {
+  crewTest('keeps a CSV export and a label sheet PDF out of every cache', async ({ qm }) => {
     const csv = await qm.agent.get('/api/bins/export.csv');
     expect(csv.status).toBe(200);
     expect(csv.headers['cache-control']).toBe('no-store');
@@ -57,7 +50,7 @@ describe('Cache-Control on API answers', () => {
     expect(pdf.headers['cache-control']).toBe('no-store');
   });
 
-  it('lets the browser keep a photo and its thumbnail privately for five minutes, not for a year', async () => {
+  crewTest('lets the browser keep a photo and its thumbnail privately for five minutes, not for a year', async ({ qm, member }) => {
     const bytes = await sharp({ create: { width: 400, height: 300, channels: 3, background: '#4080c0' } }).jpeg().toBuffer();
     const up = await qm.agent.post('/api/tools/T-0001/photos').set('X-CSRF-Token', qm.csrf).attach('photo', bytes, { filename: 'p.jpg', contentType: 'image/jpeg' });
     expect(up.status).toBe(201);
@@ -69,7 +62,7 @@ describe('Cache-Control on API answers', () => {
     }
   });
 
-  it('treats a stored packing slip like a photo: private, five minutes', async () => {
+  crewTest('treats a stored packing slip like a photo: private, five minutes', async ({ qm }) => {
     const up = await qm.agent
       .post('/api/bins/slips')
       .set('X-CSRF-Token', qm.csrf)

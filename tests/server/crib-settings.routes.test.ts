@@ -1,35 +1,23 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { cribSettingsSchema } from '@shared/schemas/signoffs';
-import { buildTestApp, PASSWORD, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
+import { PASSWORD, type SignedInAgent } from '../helpers/test-app';
 import { serverTimeZone } from '@shared/time/chapter-time';
 import { post } from '../helpers/crib';
 
-let t: TestApp;
-let lead: SignedInAgent;
-let qm: SignedInAgent;
-let member: SignedInAgent;
 const HOUR_MS = 60 * 60 * 1000;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  lead = await t.signIn('lead@example.org');
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-});
-afterEach(() => t.close());
 
 const patch = (who: SignedInAgent, body: unknown) => who.agent.patch('/api/settings/crib').set('X-CSRF-Token', who.csrf).send(body as object);
 
 describe('GET /api/settings/crib', () => {
-  it('gives everyone signed in the hold time, 48 hours until the lead changes it', async () => {
+  crewTest('gives everyone signed in the hold time, 48 hours until the lead changes it', async ({ member }) => {
     const res = await member.agent.get('/api/settings/crib');
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/application\/json/);
     expect(cribSettingsSchema.parse(res.body)).toEqual({ holdHours: 48, timeZone: serverTimeZone() });
   });
 
-  it('answers 401 when signed out', async () => {
+  crewTest('answers 401 when signed out', async ({ t }) => {
     const res = await (await t.anonymous()).agent.get('/api/settings/crib');
     expect(res.status).toBe(401);
     expect(res.body.error.code).toBe('NOT_SIGNED_IN');
@@ -37,14 +25,14 @@ describe('GET /api/settings/crib', () => {
 });
 
 describe('PATCH /api/settings/crib', () => {
-  it('lets the lead change the hold time, which everyone then reads', async () => {
+  crewTest('lets the lead change the hold time, which everyone then reads', async ({ lead, qm }) => {
     const res = await patch(lead, { holdHours: 24 });
     expect(res.status).toBe(200);
     expect(res.body).toEqual({ holdHours: 24, timeZone: serverTimeZone() });
     expect((await qm.agent.get('/api/settings/crib')).body).toEqual({ holdHours: 24, timeZone: serverTimeZone() });
   });
 
-  it('accepts 1 and 336 hours and refuses 0, 337, a fraction, text or null with 400', async () => {
+  crewTest('accepts 1 and 336 hours and refuses 0, 337, a fraction, text or null with 400', async ({ lead, member }) => {
     expect((await patch(lead, { holdHours: 1 })).status).toBe(200);
     expect((await patch(lead, { holdHours: 336 })).status).toBe(200);
     for (const body of [{ holdHours: 0 }, { holdHours: 337 }, { holdHours: 2.5 }, { holdHours: 'two days' }, { holdHours: null }]) {
@@ -61,7 +49,7 @@ describe('PATCH /api/settings/crib', () => {
     expect(empty.body.error.message).toMatch(/hold time or the time zone/);
   });
 
-  it('answers 403 to a member and a quartermaster, 401 when signed out', async () => {
+  crewTest('answers 403 to a member and a quartermaster, 401 when signed out', async ({ t, qm, member }) => {
     for (const who of [member, qm]) {
       const res = await patch(who, { holdHours: 2 });
       expect(res.status).toBe(403);
@@ -72,7 +60,7 @@ describe('PATCH /api/settings/crib', () => {
     expect((await member.agent.get('/api/settings/crib')).body).toEqual({ holdHours: 48, timeZone: serverTimeZone() });
   });
 
-  it('uses the new hold time for the next hold offer', async () => {
+  crewTest('uses the new hold time for the next hold offer', async ({ t, lead, qm, member }) => {
     await post(qm, '/api/tools', { name: 'Torque wrench', category: 'torque_wrench' }).expect(201);
     await post(member, '/api/tools/T-0001/checkout').expect(201);
     await post(qm, '/api/tools/T-0001/holds').expect(201);
@@ -88,7 +76,7 @@ describe('PATCH /api/settings/crib', () => {
 });
 
 describe('PATCH /api/settings/crib with a time zone', () => {
-  it('lets the lead set the chapter time zone, which everyone then reads and the hold time keeps', async () => {
+  crewTest('lets the lead set the chapter time zone, which everyone then reads and the hold time keeps', async ({ lead, member }) => {
     await patch(lead, { holdHours: 12 }).expect(200);
     const res = await patch(lead, { timeZone: 'America/Denver' });
     expect(res.status).toBe(200);
@@ -96,7 +84,7 @@ describe('PATCH /api/settings/crib with a time zone', () => {
     expect((await member.agent.get('/api/settings/crib')).body).toEqual({ holdHours: 12, timeZone: 'America/Denver' });
   });
 
-  it('refuses a zone the server does not know, an empty one or a number with 400 naming timeZone, and keeps the old one', async () => {
+  crewTest('refuses a zone the server does not know, an empty one or a number with 400 naming timeZone, and keeps the old one', async ({ lead, member }) => {
     await patch(lead, { timeZone: 'Europe/Oslo' }).expect(200);
     for (const timeZone of ['Mars/Olympus_Mons', '', 'GMT+25', 3]) {
       const res = await patch(lead, { timeZone });
@@ -108,13 +96,13 @@ describe('PATCH /api/settings/crib with a time zone', () => {
     expect((await member.agent.get('/api/settings/crib')).body.timeZone).toBe('Europe/Oslo');
   });
 
-  it('answers 403 to a member who tries to change the zone', async () => {
+  crewTest('answers 403 to a member who tries to change the zone', async ({ member }) => {
     const res = await patch(member, { timeZone: 'Asia/Tokyo' });
     expect(res.status).toBe(403);
     expect((await member.agent.get('/api/settings/crib')).body.timeZone).toBe(serverTimeZone());
   });
 
-  it('tells the signed-in person the chapter zone with who they are, at sign-in and after', async () => {
+  crewTest('tells the signed-in person the chapter zone with who they are, at sign-in and after', async ({ t, lead, member }) => {
     await patch(lead, { timeZone: 'Pacific/Auckland' }).expect(200);
     const me = await member.agent.get('/api/auth/me');
     expect(me.body.timeZone).toBe('Pacific/Auckland');

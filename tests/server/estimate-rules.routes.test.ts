@@ -1,25 +1,15 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { estimateResponseSchema } from '@shared/schemas/estimate';
 import { CERTIFICATED_CAUTION, DRILLING_CAUTION, PLANS_GOVERN_CAUTION, SOFT_RIVET_CAUTION } from '@shared/safety/estimate-cautions';
 import { post } from '../helpers/crib';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let member: SignedInAgent;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  member = await t.signIn('member@example.org');
-});
-afterEach(() => t.close());
+import { crewTest } from '../helpers/crew-test';
 
 const blind = { kind: 'blind-structural', head: 'dome', diameter32: 5 };
 type Rule = { value: string; rule: string; source: string };
 const ruleOf = (rules: Rule[], value: string) => rules.find((r) => r.value === value);
 
 describe('POST /api/estimate: every number with its rule and source', () => {
-  it('says why a flush line is dimpled or countersunk, why a solid rivet has its shop head, and why a repair line is one size up', async () => {
+  crewTest('says why a flush line is dimpled or countersunk, why a solid rivet has its shop head, and why a repair line is one size up', async ({ member }) => {
     // 1/8 in countersunk rivets: minimum sheet 0.050 in for a 100° machine countersink (TM 9-2320-363-34-2).
     const flush = (top: number, extra: object = {}) => ({ length: 12, pitch: 1, stack: [top, 0.063], rivet: { kind: 'solid', head: 'countersunk', diameter32: 4 }, ...extra });
     const res = await post(member, '/api/estimate', { unit: 'in', lines: [flush(0.032), flush(0.063), flush(0.032, { flushPrep: 'countersink' }), flush(0.063, { repair: true })] });
@@ -39,7 +29,7 @@ describe('POST /api/estimate: every number with its rule and source', () => {
     expect(ruleOf(repair!.rules, 'edgeDistance')!.rule).toBe('2.5D, countersunk head');
   });
 
-  it('names each value of a one-line estimate with its rule and a published source or common practice', async () => {
+  crewTest('names each value of a one-line estimate with its rule and a published source or common practice', async ({ member }) => {
     // 20 in, 1 in target pitch, 5/32 in structural blind rivets, edge left to the rule (2D = 0.3125 in).
     const res = await post(member, '/api/estimate', { unit: 'in', lines: [{ length: 20, pitch: 1, stack: [0.032, 0.032], rivet: blind }] });
     expect(res.status).toBe(200);
@@ -66,7 +56,7 @@ describe('POST /api/estimate: every number with its rule and source', () => {
     expect(ruleOf(res.body.totals.rules, 'rivetsWithWaste')).toMatchObject({ rule: expect.stringContaining('chapter’s waste allowance of 5 %') });
   });
 
-  it('gives a countersunk line 2.5D, a solid rivet its length rule, rows their transverse pitch, and the request’s waste', async () => {
+  crewTest('gives a countersunk line 2.5D, a solid rivet its length rule, rows their transverse pitch, and the request’s waste', async ({ member }) => {
     const res = await post(member, '/api/estimate', {
       unit: 'mm',
       wastePercent: 8,
@@ -91,7 +81,7 @@ describe('POST /api/estimate: every number with its rule and source', () => {
     expect(ruleOf(res.body.totals.rules, 'rivetsWithWaste')!.rule).toContain('8 % sent with the lines');
   });
 
-  it('always carries the plans, approved data and drilling cautions, and the soft blind rivet one when a line has a general-purpose blind rivet', async () => {
+  crewTest('always carries the plans, approved data and drilling cautions, and the soft blind rivet one when a line has a general-purpose blind rivet', async ({ member }) => {
     const line = { length: 20, pitch: 1, stack: [0.032, 0.032], rivet: blind };
     const plain = await post(member, '/api/estimate', { unit: 'in', lines: [line] });
     expect(plain.body.cautions).toEqual([PLANS_GOVERN_CAUTION, CERTIFICATED_CAUTION, DRILLING_CAUTION]);

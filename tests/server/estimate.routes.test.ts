@@ -1,22 +1,12 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { estimateResponseSchema } from '@shared/schemas/estimate';
 import { post } from '../helpers/crib';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let member: SignedInAgent;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  member = await t.signIn('member@example.org');
-});
-afterEach(() => t.close());
+import { crewTest } from '../helpers/crew-test';
 
 const rivet = { kind: 'blind-structural', head: 'dome', diameter32: 5 };
 
 describe('POST /api/estimate', () => {
-  it('answers the contract for two lines, in inches', async () => {
+  crewTest('answers the contract for two lines, in inches', async ({ member }) => {
     const res = await post(member, '/api/estimate', {
       unit: 'in',
       lines: [
@@ -68,7 +58,7 @@ describe('POST /api/estimate', () => {
     expect(res.body.warnings.map((w: { code: string }) => w.code)).toEqual(['DIAMETER_LARGE_FOR_SHEET']);
   });
 
-  it('lays out staggered rows with their transverse pitch, and warns on a row spacing below 2.5D', async () => {
+  crewTest('lays out staggered rows with their transverse pitch, and warns on a row spacing below 2.5D', async ({ member }) => {
     // 1/8 in blind rivets, 20.5 in line, edge 2D = 0.25 in → 21 holes a row at 1 in (our own arithmetic).
     const rows = { length: 20.5, pitch: 1, rows: 2, stack: [0.032, 0.032], rivet: { ...rivet, diameter32: 4 } };
     const res = await post(member, '/api/estimate', {
@@ -94,7 +84,7 @@ describe('POST /api/estimate', () => {
     expect(bad.body.error.message).toContain('inline or staggered');
   });
 
-  it('reports warnings at the line and at the top', async () => {
+  crewTest('reports warnings at the line and at the top', async ({ member }) => {
     const res = await post(member, '/api/estimate', { unit: 'mm', wastePercent: 0, lines: [{ length: 300, holesPerRow: 3, edgeDistance: 5, stack: [1, 1], rivet }] });
     expect(res.status).toBe(200);
     // 1 mm sheets: 3t = 0.118 in, 3/32 or 1/8 in, so the 5/32 in rivet is large too.
@@ -105,11 +95,11 @@ describe('POST /api/estimate', () => {
     expect(res.body.totals.rivetsWithWaste).toBe(3);
   });
 
-  it.each([
+  crewTest.for([
     ['PITCH_BELOW_MINIMUM', { length: 20, pitch: 0.2, stack: [0.04], rivet }],
     ['LINE_TOO_SHORT', { length: 0.6, pitch: 1, stack: [0.04], rivet }],
     ['SOFT_RIVET_ON_STRUCTURE', { length: 20, pitch: 1, stack: [0.04], structural: true, rivet: { ...rivet, kind: 'blind-general' } }],
-  ])('refuses impossible input with 400 %s', async (code, bad) => {
+  ] as const)('refuses impossible input with 400 %s', async ([code, bad], { member }) => {
     const res = await post(member, '/api/estimate', { unit: 'in', lines: [{ length: 10, pitch: 1, stack: [0.04], rivet }, bad] });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe(code);
@@ -120,7 +110,7 @@ describe('POST /api/estimate', () => {
   describe('builder rules', () => {
     const solid = (diameter32: number, head = 'dome') => ({ kind: 'solid', head, diameter32, material: '2117-T4' });
 
-    it('flush heads: countersinks at the minimum gage, dimples below it, keeps the plans’ choice and warns of a knife edge (TM 9-2320-363-34-2)', async () => {
+    crewTest('flush heads: countersinks at the minimum gage, dimples below it, keeps the plans’ choice and warns of a knife edge (TM 9-2320-363-34-2)', async ({ member }) => {
       const flush = { length: 20, pitch: 1, rivet: solid(4, 'countersunk') };
       const res = await post(member, '/api/estimate', {
         unit: 'in',
@@ -145,7 +135,7 @@ describe('POST /api/estimate', () => {
       expect(badPrep.body.error.message).toContain('countersink or dimple');
     });
 
-    it('diameter against the thickest sheet: warns outside the sizes bracketing 3t, refuses below t on a structural line (AC 43.13-1B para 4-58g; NAVEDTRA 14018)', async () => {
+    crewTest('diameter against the thickest sheet: warns outside the sizes bracketing 3t, refuses below t on a structural line (AC 43.13-1B para 4-58g; NAVEDTRA 14018)', async ({ member }) => {
       // 0.063 in: 3t = 0.189 in → 3/16 or 1/4 in; 1/8 in is small.
       const small = await post(member, '/api/estimate', { unit: 'in', lines: [{ length: 20, pitch: 1, stack: [0.063], rivet: { ...rivet, diameter32: 4 } }] });
       expect(small.status).toBe(200);
@@ -159,7 +149,7 @@ describe('POST /api/estimate', () => {
       expect(thin.body.error.message).toBe('Line 1: A 3/32 in rivet is thinner than the 0.125 in sheet: on a structural line the diameter must be at least the thickest sheet. Use a larger rivet.');
     });
 
-    it('solid rivets: the shop head beside the length and the half-length offer; null on blind lines (FAA-H-8083-31 ch. 4, secondary)', async () => {
+    crewTest('solid rivets: the shop head beside the length and the half-length offer; null on blind lines (FAA-H-8083-31 ch. 4, secondary)', async ({ member }) => {
       const res = await post(member, '/api/estimate', {
         unit: 'mm',
         lines: [
@@ -174,7 +164,7 @@ describe('POST /api/estimate', () => {
       expect(res.body.lines[1]).toMatchObject({ shopHead: null, halfLength: null });
     });
 
-    it('repair lines: the next diameter up, re-checked, and 1/4 in refused (common practice; AC 43.13-1B ch. 4 as restated)', async () => {
+    crewTest('repair lines: the next diameter up, re-checked, and 1/4 in refused (common practice; AC 43.13-1B ch. 4 as restated)', async ({ member }) => {
       const res = await post(member, '/api/estimate', { unit: 'in', wastePercent: 0, lines: [{ length: 20, pitch: 1, stack: [0.05, 0.05], repair: true, rivet: { ...rivet, diameter32: 4 } }] });
       expect(res.status).toBe(200);
       expect(estimateResponseSchema.strict().parse(res.body)).toBeTruthy();
@@ -192,7 +182,7 @@ describe('POST /api/estimate', () => {
     });
   });
 
-  it('answers malformed bodies with 400 VALIDATION_FAILED in words, and needs a signed-in person', async () => {
+  crewTest('answers malformed bodies with 400 VALIDATION_FAILED in words, and needs a signed-in person', async ({ t, member }) => {
     const noPitch = await post(member, '/api/estimate', { unit: 'in', lines: [{ length: 10, stack: [0.04], rivet }] });
     expect(noPitch.status).toBe(400);
     expect(noPitch.body.error.code).toBe('VALIDATION_FAILED');
@@ -207,7 +197,7 @@ describe('POST /api/estimate', () => {
 
   // Solid rivet heads: MS20470 universal and MS20426 100° countersunk (AC 43.13-1B para 4-57a;
   // NAVEDTRA 14315 Table 3-1); a large flange is a blind-rivet head.
-  it('refuses a solid rivet line with a large flange head: 400 naming the head, in words', async () => {
+  crewTest('refuses a solid rivet line with a large flange head: 400 naming the head, in words', async ({ member }) => {
     const line = (kind: string, head: string) => ({ length: 10, pitch: 1, stack: [0.04], rivet: { kind, head, diameter32: 4, material: '2117-T4' } });
     const res = await post(member, '/api/estimate', { unit: 'in', lines: [line('solid', 'dome'), line('solid', 'flange')] });
     expect(res.status).toBe(400);

@@ -1,40 +1,26 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { binForecast } from '@shared/forecast/bin-forecast';
 import { forecastListSchema, type BinForecastDto } from '@shared/schemas/forecast';
+import { crewTest } from '../helpers/crew-test';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
 import { addAssembly, drawFrom, hundredRivetLine, screwBin } from '../helpers/planning-fixture';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-let lead: SignedInAgent;
 
 // The test clock: Tuesday 2026-12-01 12:00 UTC, so week 0 starts Monday 2026-11-30.
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-  lead = await t.signIn('lead@example.org');
-});
-afterEach(() => t.close());
-
-const at = (iso: string) => {
-  t.clock.now = new Date(iso);
-};
-
-async function forecastOf(code: string): Promise<BinForecastDto> {
-  const res = await qm.agent.get(`/api/forecast?bins=${code}`);
-  expect(res.status).toBe(200);
-  const body = forecastListSchema.parse(res.body);
-  expect(body.data).toHaveLength(1);
-  return body.data[0]!;
-}
+const test = crewTest
+  .extend('at', ({ clock }) => (iso: string) => {
+    clock.now = new Date(iso);
+  })
+  .extend('forecastOf', ({ qm }) => async (code: string): Promise<BinForecastDto> => {
+    const res = await qm.agent.get(`/api/forecast?bins=${code}`);
+    expect(res.status).toBe(200);
+    const body = forecastListSchema.parse(res.body);
+    expect(body.data).toHaveLength(1);
+    return body.data[0]!;
+  });
 
 describe('GET /api/forecast', () => {
-  it('counts weeks on the chapter’s calendar: week 0 is the chapter week holding now, and draws fall in the chapter week they were made', async () => {
+  test('counts weeks on the chapter’s calendar: week 0 is the chapter week holding now, and draws fall in the chapter week they were made', async ({ t, qm, member, at, forecastOf }) => {
     writeChapterTimeZone(t.db, 'Pacific/Auckland');
     at('2026-11-10T12:00:00Z');
     const bin = await addBinAs(qm, blindRivetBin({ reorderPoint: 0, initialQuantity: 1000, leadTimeDays: 14, unitCost: 0.05 }));
@@ -51,7 +37,7 @@ describe('GET /api/forecast', () => {
     expect(f.weeklyDemand[0]).toBeCloseTo(66 / 26, 2);
   });
 
-  it('forecasts a bin nobody plans from its weekly draws, net of returns and reversals', async () => {
+  test('forecasts a bin nobody plans from its weekly draws, net of returns and reversals', async ({ qm, member, at, forecastOf }) => {
     at('2026-10-01T12:00:00Z');
     const bin = await addBinAs(qm, blindRivetBin({ reorderPoint: 0, initialQuantity: 1000, leadTimeDays: 14, unitCost: 0.05 }));
     // Six past weeks of draws: 10, 14, 8, 12 (20 drawn, 8 back), 6 (a 50 reversed the same week), 10.
@@ -97,7 +83,7 @@ describe('GET /api/forecast', () => {
     expect(f.eoq).toBeCloseTo(same.eoq, 1);
   });
 
-  it('spreads what planned and in-progress assemblies still need over their weeks, less what was drawn for them', async () => {
+  test('spreads what planned and in-progress assemblies still need over their weeks, less what was drawn for them', async ({ qm, member, forecastOf }) => {
     const rivets = await addBinAs(qm, blindRivetBin({ reorderPoint: 0 }));
     const screws = await addBinAs(qm, screwBin());
     // 105 rivets (100 + 5 % waste) and 24 screws over weeks 1–3 (Mon 2026-12-07 to Sun 2026-12-27).
@@ -136,7 +122,7 @@ describe('GET /api/forecast', () => {
     expect(s.projected.slice(0, 5)).toEqual([190, 182, 174, 166, 166]);
   });
 
-  it('answers every bin in code order with the settings it used', async () => {
+  test('answers every bin in code order with the settings it used', async ({ lead, qm }) => {
     await addBinAs(qm, blindRivetBin({ reorderPoint: 0 }));
     await addBinAs(qm, screwBin());
     const res = await lead.agent.get('/api/forecast');
@@ -149,7 +135,7 @@ describe('GET /api/forecast', () => {
     expect(body.data[0]).toMatchObject({ demandSource: 'history', reorderPoint: 0, safetyStock: 0, suggestedOrder: 0, needsAlert: false });
   });
 
-  it('keeps the reorder point typed on a bin as a floor, so a low bin on the Restock list is also alerted', async () => {
+  test('keeps the reorder point typed on a bin as a floor, so a low bin on the Restock list is also alerted', async ({ qm }) => {
     // No draws, so the computed reorder point is 0; the bin's own is 200 and it holds 150.
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 150, reorderPoint: 200, reorderQty: 450, packSize: 100 }));
     const f = forecastListSchema.parse((await qm.agent.get(`/api/forecast?bins=${bin.code}`)).body).data[0]!;
@@ -158,7 +144,7 @@ describe('GET /api/forecast', () => {
     expect(raised.body.data.map((a: { bin: { code: string } }) => a.bin.code)).toEqual([bin.code]);
   });
 
-  it('names unknown bins with 404 and refuses badly written codes with 400', async () => {
+  test('names unknown bins with 404 and refuses badly written codes with 400', async ({ qm }) => {
     await addBinAs(qm, blindRivetBin({ reorderPoint: 0 }));
     const unknown = await qm.agent.get('/api/forecast?bins=B-0001,B-9999');
     expect(unknown.status).toBe(404);
@@ -169,7 +155,7 @@ describe('GET /api/forecast', () => {
     expect(bad.body.error.message).toContain('A bin code looks like B-0107');
   });
 
-  it('is for quartermasters and leads only', async () => {
+  test('is for quartermasters and leads only', async ({ t, member }) => {
     const res = await member.agent.get('/api/forecast');
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('FORBIDDEN');

@@ -1,28 +1,17 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { serviceDueListSchema } from '@shared/schemas/overdue';
 import { addToolAs, post } from '../helpers/crib';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-let code: string;
+import { crewTest } from '../helpers/crew-test';
 
 const NOSEPIECES = ['Nosepiece 3/32', 'Nosepiece 1/8', 'Nosepiece 5/32'];
 
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-  code = (await addToolAs(qm, { name: 'Hand rivet puller', category: 'hand_rivet_puller', accessories: NOSEPIECES })).code;
-});
-afterEach(() => t.close());
-
-const myLoans = async () => (await member.agent.get('/api/loans/mine')).body.data as { tool: { code: string }; accessoriesOut: string[] | null }[];
+const test = crewTest
+  /** A hand rivet puller with three nosepieces, added by the quartermaster. */
+  .extend('code', async ({ qm }) => (await addToolAs(qm, { name: 'Hand rivet puller', category: 'hand_rivet_puller', accessories: NOSEPIECES })).code)
+  .extend('myLoans', ({ member }) => async () => (await member.agent.get('/api/loans/mine')).body.data as { tool: { code: string }; accessoriesOut: string[] | null }[]);
 
 describe('what goes out with a loan', () => {
-  it('records the accessories ticked at checkout, and My loans shows those, not every accessory', async () => {
+  test('records the accessories ticked at checkout, and My loans shows those, not every accessory', async ({ member, code, myLoans }) => {
     const out = await post(member, `/api/tools/${code}/checkout`, { accessories: ['Nosepiece 1/8'] });
     expect(out.status).toBe(201);
     expect(out.body.accessories).toEqual(['Nosepiece 1/8']);
@@ -30,7 +19,7 @@ describe('what goes out with a loan', () => {
     expect((await member.agent.get(`/api/tools/${code}`)).body.loan.accessoriesOut).toEqual(['Nosepiece 1/8']);
   });
 
-  it('refuses an accessory the tool does not have, naming it', async () => {
+  test('refuses an accessory the tool does not have, naming it', async ({ member, code }) => {
     const res = await post(member, `/api/tools/${code}/checkout`, { accessories: ['Nosepiece 1/8', 'Nosepiece 1/4'] });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('UNKNOWN_ACCESSORY');
@@ -40,7 +29,7 @@ describe('what goes out with a loan', () => {
 });
 
 describe('what comes back', () => {
-  it('asks for what went out at return, and records what did not come back', async () => {
+  test('asks for what went out at return, and records what did not come back', async ({ t, qm, member, code }) => {
     await post(member, `/api/tools/${code}/checkout`, { accessories: ['Nosepiece 1/8', 'Nosepiece 5/32'] }).expect(201);
     const unchecked = await post(member, `/api/tools/${code}/return`, { condition: 'ok' });
     expect(unchecked.status).toBe(400);
@@ -61,7 +50,7 @@ describe('what comes back', () => {
     expect(service.data).toEqual([expect.objectContaining({ code, urgency: 'accessory_missing', missingAccessories: ['Nosepiece 5/32'], words: 'Missing: Nosepiece 5/32 (not back from Mia Member)' })]);
   });
 
-  it('keeps a missing accessory off the next checkout until the quartermaster marks it found or replaced', async () => {
+  test('keeps a missing accessory off the next checkout until the quartermaster marks it found or replaced', async ({ qm, member, code }) => {
     await post(member, `/api/tools/${code}/checkout`, { accessories: ['Nosepiece 5/32'] }).expect(201);
     await post(member, `/api/tools/${code}/return`, { condition: 'ok', accessoriesBack: [] }).expect(200);
     const again = await post(member, `/api/tools/${code}/checkout`, { accessories: ['Nosepiece 5/32'] });
@@ -80,12 +69,12 @@ describe('what comes back', () => {
     expect((await post(member, `/api/tools/${code}/checkout`, { accessories: ['Nosepiece 5/32'] })).status).toBe(201);
   });
 
-  it('needs nothing ticked back for a loan that recorded nothing going out (older loans, tools without accessories)', async () => {
+  test('needs nothing ticked back for a loan that recorded nothing going out (older loans, tools without accessories)', async ({ member, code }) => {
     await post(member, `/api/tools/${code}/checkout`).expect(201);
     expect((await post(member, `/api/tools/${code}/return`, { condition: 'ok' })).status).toBe(200);
   });
 
-  it('takes a queued offline checkout with its accessories, replayed once', async () => {
+  test('takes a queued offline checkout with its accessories, replayed once', async ({ t, member, code }) => {
     const send = () =>
       member.agent
         .post(`/api/tools/${code}/checkout`)

@@ -1,32 +1,19 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { loanStatsSchema } from '@shared/schemas/loan-stats';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { addToolAs, post } from '../helpers/crib';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
 
-let t: TestApp;
-let lead: SignedInAgent;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  lead = await t.signIn('lead@example.org');
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-});
-afterEach(() => t.close());
-
-const at = (iso: string) => {
-  t.clock.now = new Date(iso);
-};
-const addTool = async (name: string, category: string) => (await addToolAs(qm, { name, category })).code;
-const checkOut = (code: string) => post(member, `/api/tools/${code}/checkout`, {}).expect(201);
-const giveBack = (code: string) => post(member, `/api/tools/${code}/return`, { condition: 'ok' }).expect(200);
+const test = crewTest
+  .extend('at', ({ clock }) => (iso: string) => {
+    clock.now = new Date(iso);
+  })
+  .extend('addTool', ({ qm }) => async (name: string, category: string) => (await addToolAs(qm, { name, category })).code)
+  .extend('checkOut', ({ member }) => (code: string) => post(member, `/api/tools/${code}/checkout`, {}).expect(201))
+  .extend('giveBack', ({ member }) => (code: string) => post(member, `/api/tools/${code}/return`, { condition: 'ok' }).expect(200));
 
 describe('GET /api/loans/stats', () => {
-  it('counts loans and late days per chapter week, the tools used most and those idle six months', async () => {
+  test('counts loans and late days per chapter week, the tools used most and those idle six months', async ({ t, lead, at, addTool, checkOut, giveBack }) => {
     // Chicago: CDT (UTC−5) until November 1, 2026, CST (UTC−6) after; chapter weeks start on Monday there.
     writeChapterTimeZone(t.db, 'America/Chicago');
     at('2026-05-01T15:00:00Z');
@@ -112,7 +99,7 @@ describe('GET /api/loans/stats', () => {
     ]);
   });
 
-  it('leaves lost and retired tools out of the idle ones: they are no longer the crib’s to sell or move', async () => {
+  test('leaves lost and retired tools out of the idle ones: they are no longer the crib’s to sell or move', async ({ lead, qm, at, addTool }) => {
     at('2026-01-05T15:00:00Z');
     const kept = await addTool('Fluting pliers', 'other');
     const lost = await addTool('Edge deburring tool', 'deburring_tool');
@@ -124,7 +111,7 @@ describe('GET /api/loans/stats', () => {
     expect(stats.mostUsed).toEqual([]);
   });
 
-  it('is for the lead only', async () => {
+  test('is for the lead only', async ({ t, qm, member }) => {
     expect((await member.agent.get('/api/loans/stats')).status).toBe(403);
     expect((await qm.agent.get('/api/loans/stats')).status).toBe(403);
     const anonymous = await t.anonymous();

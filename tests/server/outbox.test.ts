@@ -1,23 +1,12 @@
 import { pino } from 'pino';
 import { MINUTE_MS } from '@shared/time/durations';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { caughtMail, outboxMail } from '../../server/db/schema/mail';
 import type { Mailer, OutgoingMail } from '../../server/mail/mailer';
 import { OUTBOX_MAX_ATTEMPTS, queueMail, retryDelayMs } from '../../server/mail/outbox';
 import { startOutboxWorker } from '../../server/mail/outbox-worker';
 import { addToolAs, post } from '../helpers/crib';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-});
-afterEach(() => t.close());
+import { crewTest } from '../helpers/crew-test';
 
 /** A mail server that refuses everything, counting what it was offered. */
 function refusingMailer(): Mailer & { offered: OutgoingMail[] } {
@@ -25,14 +14,15 @@ function refusingMailer(): Mailer & { offered: OutgoingMail[] } {
   return { offered, send: (mail) => (offered.push(mail), Promise.reject(new Error('connect ECONNREFUSED 127.0.0.1:25'))), close: () => undefined };
 }
 
-const later = (ms: number) => {
-  t.clock.now = new Date(t.clock.now.getTime() + ms);
-};
-const rows = () => t.db.select().from(outboxMail).all();
-const oneMessage = (to = 'someone@example.org') => queueMail(t.db, { to, subject: 'Test message', text: 'Hello' }, t.clock.now);
+const test = crewTest
+  .extend('later', ({ clock }) => (ms: number) => {
+    clock.now = new Date(clock.now.getTime() + ms);
+  })
+  .extend('rows', ({ t }) => () => t.db.select().from(outboxMail).all())
+  .extend('oneMessage', ({ t }) => (to = 'someone@example.org') => queueMail(t.db, { to, subject: 'Test message', text: 'Hello' }, t.clock.now));
 
 describe('a tool return while the mail server is down', () => {
-  it('answers 200, keeps the hold offer with its e-mail waiting, and a later run with a working server sends it', async () => {
+  test('answers 200, keeps the hold offer with its e-mail waiting, and a later run with a working server sends it', async ({ t, qm, member, later, rows }) => {
     const { code } = await addToolAs(qm, { name: 'Torque wrench', category: 'torque_wrench' });
     await post(member, `/api/tools/${code}/checkout`).expect(201);
     await post(qm, `/api/tools/${code}/holds`).expect(201);
@@ -55,7 +45,7 @@ describe('a tool return while the mail server is down', () => {
     expect((await t.lastMailTo('qm@example.org'))?.subject).toBe(`${code} Torque wrench is back and held for you`);
   });
 
-  it('writes no mail when the return is refused', async () => {
+  test('writes no mail when the return is refused', async ({ qm, member, rows }) => {
     const { code } = await addToolAs(qm, { name: 'Torque wrench', category: 'torque_wrench' });
     await post(qm, `/api/tools/${code}/holds`).expect(201);
     expect((await post(member, `/api/tools/${code}/return`, { condition: 'ok' })).status).toBe(409);
@@ -64,7 +54,7 @@ describe('a tool return while the mail server is down', () => {
 });
 
 describe('deliverDueMail', () => {
-  it('waits 1, 2, 4, 8 … minutes after each failure and sends nothing before the time', async () => {
+  test('waits 1, 2, 4, 8 … minutes after each failure and sends nothing before the time', async ({ t, later, rows, oneMessage }) => {
     expect([1, 2, 3, 4, 5].map(retryDelayMs)).toEqual([1, 2, 4, 8, 16].map((n) => n * MINUTE_MS));
     expect(retryDelayMs(20)).toBe(60 * MINUTE_MS);
     oneMessage();
@@ -79,7 +69,7 @@ describe('deliverDueMail', () => {
     expect(down.offered).toHaveLength(3);
   });
 
-  it('marks a message failed after the last attempt and tries it no more', async () => {
+  test('marks a message failed after the last attempt and tries it no more', async ({ t, later, rows, oneMessage }) => {
     oneMessage();
     const down = refusingMailer();
     for (let i = 1; i < OUTBOX_MAX_ATTEMPTS; i++) {
@@ -93,14 +83,14 @@ describe('deliverDueMail', () => {
     expect(down.offered).toHaveLength(OUTBOX_MAX_ATTEMPTS);
   });
 
-  it('sends each message once even when two runs overlap', async () => {
+  test('sends each message once even when two runs overlap', async ({ t, oneMessage }) => {
     for (let i = 0; i < 5; i++) oneMessage(`person${i}@example.org`);
     const runs = await Promise.all([t.deliverMail(), t.deliverMail()]);
     expect(runs[0].sent + runs[1].sent).toBe(5);
     expect(t.db.select().from(caughtMail).all()).toHaveLength(5);
   });
 
-  it('keeps the messages of a change that rolled back out of the outbox', () => {
+  test('keeps the messages of a change that rolled back out of the outbox', ({ t, rows }) => {
     expect(() =>
       t.db.transaction((tx) => {
         queueMail(tx, { to: 'someone@example.org', subject: 'Never', text: 'Never' }, t.clock.now);
@@ -112,7 +102,7 @@ describe('deliverDueMail', () => {
 });
 
 describe('the outbox worker', () => {
-  it('sends waiting mail in the background until stopped', async () => {
+  test('sends waiting mail in the background until stopped', async ({ t, rows, oneMessage }) => {
     const worker = startOutboxWorker({ db: t.db, mailer: t.mailer, now: () => t.clock.now }, pino({ level: 'silent' }), 20);
     try {
       oneMessage();

@@ -1,0 +1,24 @@
+import { test } from 'vitest';
+import { buildTestApp } from './test-app';
+
+/**
+ * `it` with the usual server-test setup as fixtures, each built only when a test (or a
+ * `crewTest.beforeEach`) names it:
+ * - `t`: a fresh test app on its own in-memory database, closed after the test;
+ * - `clock`: that app's clock (move `clock.now` to move the app's time);
+ * - `crew`: one person per role (TestApp.addCrew);
+ * - `lead`, `qm`, `member`: those people, signed in.
+ *
+ * `crewTest('…', async ({ qm, member }) => …)` gets an app, its crew and two signed-in agents.
+ */
+export const crewTest = test
+  .extend('t', async ({}, { onCleanup }) => {
+    const t = await buildTestApp();
+    onCleanup(() => t.close());
+    return t;
+  })
+  .extend('clock', ({ t }) => t.clock)
+  .extend('crew', ({ t }) => t.addCrew())
+  .extend('lead', async ({ t, crew }) => t.signIn(crew.lead.email))
+  .extend('qm', async ({ t, crew }) => t.signIn(crew.quartermaster.email))
+  .extend('member', async ({ t, crew }) => t.signIn(crew.member.email));

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/seed/demo-chapter';
+import { signedInPhone } from '../helpers/browser';
 import { builtAppWithChromium } from '../helpers/browser-suite';
 import { signIn, type Member } from '../helpers/http-sign-in';
 
@@ -22,13 +23,7 @@ describe('the lead refunds an online payment on Payments', () => {
     expect(paid.status).toBe(303);
     expect(await balanceOf(marco)).toBe(before - 500);
 
-    const context = await suite.browser.newContext({ viewport: { width: 1280, height: 900 } });
-    const page = await context.newPage();
-    await page.goto(`${suite.app.url}/sign-in`);
-    await page.getByLabel('E-mail').fill('lead@example.org');
-    await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD);
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.getByRole('heading', { name: /Hello/ }).waitFor();
+    const page = await signedInPhone(suite.browser, suite.app.url, 'lead@example.org', DEMO_PASSWORD, { context: { viewport: { width: 1280, height: 900 } } });
     await page.goto(`${suite.app.url}/payments?method=online`);
     await page.getByRole('heading', { name: 'Payments', level: 1 }).waitFor();
     expect(await page.title()).toBe('Payments · Gripline');
@@ -45,6 +40,6 @@ describe('the lead refunds an online payment on Payments', () => {
     expect(await step.count()).toBe(0);
 
     expect(await balanceOf(marco)).toBe(before - 300);
-    await context.close();
+    await page.context().close();
   });
 });

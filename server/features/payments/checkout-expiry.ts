@@ -2,7 +2,7 @@ import Stripe from 'stripe';
 import type { ServiceContext } from '../../context';
 import type { Logger } from '../../lib/logger';
 import type { PaymentsSetup } from '../../payments/payments-client';
-import { expireOnlinePayment, onlinePaymentBySession, openOnlinePaymentsOf } from './payments.repo';
+import { closeOnlinePayment, onlinePaymentBySession, openOnlinePaymentsOf } from './payments.repo';
 import { CHECKOUT_UNREACHABLE, providerCall } from './provider-call';
 
 /**
@@ -21,7 +21,7 @@ export async function expireEarlierCheckouts(ctx: ServiceContext, setup: Payment
       CHECKOUT_UNREACHABLE,
     );
     if (!expired) continue;
-    expireOnlinePayment(ctx.db, row.id, { updatedAt: ctx.now() });
+    closeOnlinePayment(ctx.db, row.id, { state: 'expired', updatedAt: ctx.now() });
   }
 }
 
@@ -32,5 +32,5 @@ export function recordExpiredCheckout(ctx: ServiceContext, logger: Logger, event
     logger.warn({ sessionId: session.id, eventId }, 'an expired checkout that Gripline did not open was ignored');
     return;
   }
-  expireOnlinePayment(ctx.db, row.id, { eventId, updatedAt: ctx.now() });
+  closeOnlinePayment(ctx.db, row.id, { state: 'expired', eventId, updatedAt: ctx.now() });
 }

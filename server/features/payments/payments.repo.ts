@@ -11,13 +11,16 @@ export function onlinePaymentBySession(db: Executor, sessionId: string): OnlineP
   return db.select().from(onlinePayments).where(eq(onlinePayments.sessionId, sessionId)).get();
 }
 
-/** Moves an open checkout to paid or refused, naming the event that did it; false when it was no longer open. */
+/**
+ * The one move of a checkout's state: open → paid, refused or expired, naming the provider's event
+ * that did it (a checkout Gripline expired itself has none); false when it was no longer open.
+ */
 export function closeOnlinePayment(
   db: Executor,
   id: number,
   changes: {
-    state: 'paid' | 'refused';
-    eventId: string;
+    state: 'paid' | 'refused' | 'expired';
+    eventId?: string;
     memberPaymentId?: number;
     paymentIntentId?: string | null;
     receivedAmountCents?: number | null;
@@ -40,15 +43,6 @@ export function openOnlinePaymentsOf(db: Executor, userId: number): OnlinePaymen
     .where(and(eq(onlinePayments.userId, userId), eq(onlinePayments.state, 'open')))
     .orderBy(onlinePayments.id)
     .all();
-}
-
-/** Moves an open checkout to expired (naming the provider's event when one told it); false when it was no longer open. */
-export function expireOnlinePayment(db: Executor, id: number, changes: { eventId?: string; updatedAt: Date }): boolean {
-  return db
-    .update(onlinePayments)
-    .set({ state: 'expired', ...changes })
-    .where(and(eq(onlinePayments.id, id), eq(onlinePayments.state, 'open')))
-    .run().changes === 1;
 }
 
 /** The paid checkout behind a payment on a tab, if it was paid online. */

@@ -1,6 +1,7 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { MutationCache, QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { lazy, Suspense, type ReactNode } from 'react';
 import { ApiError } from '@/lib/api-client';
+import { refreshShown } from '@/lib/query-keys';
 
 /** Retries only what a flaky hangar network can explain: no connection or a server hiccup. */
 function shouldRetry(failureCount: number, error: unknown): boolean {
@@ -8,13 +9,23 @@ function shouldRetry(failureCount: number, error: unknown): boolean {
   return failureCount < 3;
 }
 
+/**
+ * One place turns a mutation's declared `meta.invalidates` into refreshed screens (see shownOn in
+ * lib/query-keys.ts). On settle, not only success: a refusal (the bin ran empty, the tool went out
+ * meanwhile) or a lost answer to a change the server made means the screen is out of date too.
+ * The mutation resolves after the refresh, so a caller that awaits it sees the new figures.
+ */
 export function createQueryClient(): QueryClient {
-  return new QueryClient({
+  const queryClient: QueryClient = new QueryClient({
+    mutationCache: new MutationCache({
+      onSettled: (_data, _error, _variables, _onMutateResult, mutation) => refreshShown(queryClient, mutation.meta?.invalidates ?? []),
+    }),
     defaultOptions: {
       queries: { retry: shouldRetry, staleTime: 15_000, refetchOnWindowFocus: true },
       mutations: { retry: false },
     },
   });
+  return queryClient;
 }
 
 /**

@@ -1,11 +1,19 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
 import { render } from '@testing-library/react';
 import type { ReactElement } from 'react';
 import { createMemoryRouter, RouterProvider, type RouteObject } from 'react-router';
 import { vi } from 'vitest';
+import { createQueryClient } from '@/app/provider';
 
-/** A fresh QueryClient that never retries, so a failing fake answer shows at once. */
-export const testQueryClient = () => new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+/**
+ * The app's own QueryClient (so a mutation refreshes what its meta declares), fresh, never
+ * retrying and never holding an answer fresh, so a failing fake answer shows at once.
+ */
+export function testQueryClient(): QueryClient {
+  const queryClient = createQueryClient();
+  queryClient.setDefaultOptions({ queries: { retry: false }, mutations: { retry: false } });
+  return queryClient;
+}
 
 /** Renders `routes` in a memory router opened at `path`, inside `queryClient`; the router lets a test see where it went. */
 export function renderRoutes(queryClient: QueryClient, routes: RouteObject[], path: string) {

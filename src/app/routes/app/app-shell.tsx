@@ -1,15 +1,14 @@
-import type { QueryClient } from '@tanstack/react-query';
+import type { QueryClient, QueryKey } from '@tanstack/react-query';
 import { useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
 import { lazy, Suspense, useCallback } from 'react';
 import { Outlet, useLocation, useNavigate, type LoaderFunctionArgs } from 'react-router';
 import { ROLE_LABELS } from '@shared/roles';
+import type { QueuedActionKind } from '@shared/schemas/offline';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { useLogout } from '@/features/auth/api/logout';
 import { MainLandmark } from '@/components/ui/main-landmark';
 import type { QueuedAction } from '@/features/offline/db';
-import { invalidateReorderFamily } from '@/lib/reorder-queries';
-import { stockMoneyKeys } from '@/features/stock-money/api/keys';
-import { toolKeys } from '@/features/tools/api/keys';
+import { refreshShown, shownOn } from '@/lib/query-keys';
 import { messageOf } from '@/lib/errors';
 import { requireSignedIn } from './guards';
 import { currentLink, linksFor } from './nav-links';
@@ -26,20 +25,18 @@ export const appShellLoader = (queryClient: QueryClient) => async ({ request }: 
   return null;
 };
 
+/** What each queued action shows on: the same as the online mutation that does it. */
+const QUEUED_SHOWN_ON: Record<QueuedActionKind, readonly QueryKey[]> = {
+  check_out: shownOn.toolState,
+  return: shownOn.toolState,
+  draw: shownOn.stockMovement,
+  return_unused: shownOn.stockMovement,
+};
+
 /** A queued action reached the server (or was refused): refresh what it changes. */
 function useRefreshAfterQueue() {
   const queryClient = useQueryClient();
-  return useCallback(
-    (entry: QueuedAction) => {
-      if (entry.kind === 'check_out' || entry.kind === 'return') {
-        void queryClient.invalidateQueries({ queryKey: toolKeys.all });
-      } else {
-        void invalidateReorderFamily(queryClient);
-        void queryClient.invalidateQueries({ queryKey: stockMoneyKeys.all });
-      }
-    },
-    [queryClient],
-  );
+  return useCallback((entry: QueuedAction) => void refreshShown(queryClient, QUEUED_SHOWN_ON[entry.kind]), [queryClient]);
 }
 
 /**

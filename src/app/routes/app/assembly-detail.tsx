@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { assemblyEstimateQueryOptions, assemblyQueryOptions } from '@/features/planning/api/get-assembly';
@@ -10,7 +10,6 @@ import { HoldKit } from '@/features/planning/components/hold-kit';
 import { KitList } from '@/features/planning/components/kit-list';
 import { LineEstimateView } from '@/features/planning/components/line-estimate';
 import { PlanningCaution } from '@/features/planning/components/planning-caution';
-import { toolKeys } from '@/features/tools/api/keys';
 import { plannedDatesText } from '@/features/planning/utils/words';
 import { Notice } from '@/components/ui/notice';
 import { Card, PageHeader } from '@/components/ui/page';
@@ -31,7 +30,6 @@ export function AssemblyDetailRoute() {
   const id = idFrom(useParams());
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const { data: assembly } = useSuspenseQuery(assemblyQueryOptions(id));
-  const queryClient = useQueryClient();
   const { data: estimate } = useSuspenseQuery(assemblyEstimateQueryOptions(id));
   const mine = me?.id === assembly.owner.id;
   const edit = `/assemblies/${id}/edit`;
@@ -90,7 +88,7 @@ export function AssemblyDetailRoute() {
       <Card title="From the crib">
         <div className="flex flex-col gap-4">
           <KitList kit={estimate.kit} />
-          {mine && estimate.kit.length > 0 && <HoldKit assemblyId={id} plannedStart={assembly.plannedStart} onHeld={() => void queryClient.invalidateQueries({ queryKey: toolKeys.all })} />}
+          {mine && estimate.kit.length > 0 && <HoldKit assemblyId={id} plannedStart={assembly.plannedStart} />}
         </div>
       </Card>
       <Card title="Rivet lines">

@@ -1,6 +1,5 @@
-import { useQueryClient, type QueryClient } from '@tanstack/react-query';
+import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router';
-import { invalidateReorderFamily } from '@/lib/reorder-queries';
 import { BinImportPanel } from '@/features/stock-import/components/bin-import-panel';
 import { StockExportPanel } from '@/features/stock-import/components/stock-export-panel';
 import { Card, PageHeader } from '@/components/ui/page';
@@ -12,13 +11,12 @@ export const binImportLoader = (queryClient: QueryClient) => async ({ request }:
 };
 
 export function BinImportRoute() {
-  const queryClient = useQueryClient();
   return (
     <>
       <PageHeader title="Import and export bins" lead="Bring a list of bins in from a spreadsheet, or take the bins and the ledger out to one." />
       <div className="flex flex-col gap-5">
         <Card title="Import bins from a CSV file">
-          <BinImportPanel onImported={() => invalidateReorderFamily(queryClient)} />
+          <BinImportPanel />
         </Card>
         <Card title="Export">
           <StockExportPanel />

@@ -5,10 +5,10 @@ import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { paymentSettingsQueryOptions } from '@/features/payments/api/get-payment-settings';
 import { PayOnlineCard } from '@/features/payments/components/pay-online-card';
 import { PaymentReturn, paymentReturnOf } from '@/features/payments/components/payment-return';
-import { stockMoneyKeys } from '@/features/stock-money/api/keys';
 import { myTabQueryOptions } from '@/features/stock-money/api/get-my-tab';
 import { TabView } from '@/features/stock-money/components/tab-view';
 import { PageHeader } from '@/components/ui/page';
+import { refreshShown, shownOn } from '@/lib/query-keys';
 import { loadAlongside, requireSignedIn } from './guards';
 
 export const tabLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
@@ -22,7 +22,7 @@ export function TabRoute() {
   const queryClient = useQueryClient();
   const returned = paymentReturnOf(search);
   // The provider's confirmation came in: the balance on this page drops without a reload.
-  const refreshTab = useCallback(() => void queryClient.invalidateQueries({ queryKey: stockMoneyKeys.tab('me') }), [queryClient]);
+  const refreshTab = useCallback(() => void refreshShown(queryClient, shownOn.payment), [queryClient]);
   return (
     <>
       <PageHeader title="My tab" lead="What you drew from the bins, valued at the unit cost on the day, and what you have paid." />

@@ -1,15 +1,13 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link, useLoaderData, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { hasRole } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { OfflineToolView } from '@/features/offline/components/offline-tool-view';
 import { ReturnPhotoPicker } from '@/features/photos/components/return-photo-picker';
-import { serviceKeys } from '@/features/service/api/keys';
 import { AskForSignoff } from '@/features/signoffs/components/ask-for-signoff';
 import { ToolPhotos } from '@/features/photos/components/tool-photos';
 import { toolQueryOptions } from '@/features/tools/api/get-tool';
-import { toolKeys } from '@/features/tools/api/keys';
 import { MissingAccessories } from '@/features/tools/components/missing-accessories';
 import { QuartermasterCommands } from '@/features/tools/components/quartermaster-commands';
 import { ToolActionsPanel } from '@/features/tools/components/tool-actions-panel';
@@ -44,11 +42,8 @@ function OnlineToolDetail({ code }: { code: string }) {
   const navigate = useNavigate();
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const { data: tool } = useSuspenseQuery(toolQueryOptions(code));
-  const queryClient = useQueryClient();
   const isQuartermaster = !!me && hasRole(me.role, 'quartermaster');
   const holdsIt = tool.loan?.holder.id === me?.id;
-  // A return can leave an accessory missing, and marking it found or replaced closes it: both change the Service list.
-  const serviceChanged = () => void queryClient.invalidateQueries({ queryKey: serviceKeys.all });
   return (
     <div className="grid gap-4 lg:grid-cols-[3fr_2fr]">
       <div className="flex flex-col gap-4">
@@ -57,7 +52,7 @@ function OnlineToolDetail({ code }: { code: string }) {
         </Card>
         {tool.missingAccessories.length > 0 && (
           <Card>
-            <MissingAccessories tool={tool} canResolve={isQuartermaster} onResolved={serviceChanged} />
+            <MissingAccessories tool={tool} canResolve={isQuartermaster} />
           </Card>
         )}
         {tool.notes && <Card title="Notes">{tool.notes}</Card>}
@@ -68,7 +63,6 @@ function OnlineToolDetail({ code }: { code: string }) {
               photoIds={tool.photoIds}
               canUpload={isQuartermaster}
               canDelete={isQuartermaster}
-              onChange={() => void queryClient.invalidateQueries({ queryKey: toolKeys.all })}
             />
           </Card>
         )}
@@ -77,10 +71,7 @@ function OnlineToolDetail({ code }: { code: string }) {
         <ToolActionsPanel
           tool={tool}
           photoSlot={holdsIt || isQuartermaster ? (onUploaded) => <ReturnPhotoPicker code={tool.code} onUploaded={onUploaded} /> : undefined}
-          onDone={() => {
-            serviceChanged();
-            void navigate(`/tools/${tool.code}`, { replace: true });
-          }}
+          onDone={() => void navigate(`/tools/${tool.code}`, { replace: true })}
         />
         {tool.requiredSignoff && <AskForSignoff toolCode={tool.code} signoff={tool.requiredSignoff} />}
         <Link to="/scan" className="inline-flex min-h-12 items-center justify-center rounded-lg border-2 border-ink bg-card px-5 font-semibold">

@@ -1,5 +1,2 @@
-export const authKeys = {
-  all: ['auth'] as const,
-  me: () => ['auth', 'me'] as const,
-  invitation: (token: string) => ['auth', 'invitation', token] as const,
-};
+/** This feature's query keys; every family lives in the one registry (lib/query-keys.ts). */
+export { authKeys } from '@/lib/query-keys';

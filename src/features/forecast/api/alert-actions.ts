@@ -1,15 +1,14 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import type { Alert, MarkOrderedBody } from '@shared/schemas/forecast';
 import { api } from '@/lib/api-client';
-import { invalidateReorderFamily } from '@/lib/reorder-queries';
+import { shownOn } from '@/lib/query-keys';
 
 /**
  * An alert's state moves the alert lists, the purchase list, the forecast (an order is an expected
  * receipt) and the bins (on order, to order, the Restock list).
  */
 function useAlertMutation<V, R>(send: (v: V) => Promise<R>) {
-  const queryClient = useQueryClient();
-  return useMutation({ mutationFn: send, onSettled: () => invalidateReorderFamily(queryClient) });
+  return useMutation({ mutationFn: send, meta: { invalidates: shownOn.alertState } });
 }
 
 export const useMarkOrdered = () =>

@@ -1,7 +1,8 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ActualWaste, PlanningSettingsDto } from '@shared/schemas/forecast';
 import { api } from '@/lib/api-client';
-import { forecastKeys, planningKeys } from './keys';
+import { shownOn } from '@/lib/query-keys';
+import { planningKeys } from './keys';
 
 export const planningSettingsQueryOptions = () =>
   queryOptions({
@@ -21,9 +22,7 @@ export function useUpdatePlanningSettings() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (body: Partial<PlanningSettingsDto>) => api.patch<PlanningSettingsDto>('/api/settings/planning', body),
-    onSuccess: (saved) => {
-      queryClient.setQueryData(planningKeys.settings(), saved);
-      return Promise.all([queryClient.invalidateQueries({ queryKey: planningKeys.waste() }), queryClient.invalidateQueries({ queryKey: forecastKeys.all })]);
-    },
+    onSuccess: (saved) => queryClient.setQueryData(planningKeys.settings(), saved),
+    meta: { invalidates: shownOn.planningSettings },
   });
 }

@@ -1,6 +1,2 @@
-export const labelKeys = {
-  all: ['labels'] as const,
-  layouts: () => ['labels', 'layouts'] as const,
-  tools: () => ['labels', 'tools'] as const,
-  bins: () => ['labels', 'bins'] as const,
-};
+/** This feature's query keys; every family lives in the one registry (lib/query-keys.ts). */
+export { labelKeys } from '@/lib/query-keys';

@@ -1,5 +1,2 @@
-export const mailKeys = {
-  all: ['mail'] as const,
-  list: () => ['mail', 'list'] as const,
-  mine: () => ['mail', 'mine'] as const,
-};
+/** This feature's query keys; every family lives in the one registry (lib/query-keys.ts). */
+export { mailKeys } from '@/lib/query-keys';

@@ -1,12 +1,11 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import type { MailMessage } from '@shared/schemas/mail';
 import { api } from '@/lib/api-client';
-import { mailKeys } from './keys';
+import { shownOn } from '@/lib/query-keys';
 
 export function useRetryMail() {
-  const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (id: number) => api.post<MailMessage>(`/api/mail/${id}/retry`, {}),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: mailKeys.all }),
+    meta: { invalidates: shownOn.mail },
   });
 }

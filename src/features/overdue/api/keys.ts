@@ -1,4 +1,2 @@
-export const overdueKeys = {
-  all: ['overdue'] as const,
-  list: () => ['overdue', 'list'] as const,
-};
+/** This feature's query keys; every family lives in the one registry (lib/query-keys.ts). */
+export { overdueKeys } from '@/lib/query-keys';

@@ -1,5 +1,2 @@
-export const paymentKeys = {
-  all: ['payments'] as const,
-  settings: () => ['payments', 'settings'] as const,
-  checkout: (sessionId: string) => ['payments', 'checkout', sessionId] as const,
-};
+/** This feature's query keys; every family lives in the one registry (lib/query-keys.ts). */
+export { paymentKeys } from '@/lib/query-keys';

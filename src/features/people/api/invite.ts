@@ -1,12 +1,11 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import type { InviteBody, PendingInvitation } from '@shared/schemas/people';
 import { api } from '@/lib/api-client';
-import { peopleKeys } from './keys';
+import { shownOn } from '@/lib/query-keys';
 
 export function useInvite() {
-  const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (body: InviteBody) => api.post<PendingInvitation>('/api/invitations', body),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: peopleKeys.invitations() }),
+    meta: { invalidates: shownOn.invitations },
   });
 }

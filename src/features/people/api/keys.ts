@@ -1,5 +1,2 @@
-export const peopleKeys = {
-  all: ['people'] as const,
-  list: () => ['people', 'list'] as const,
-  invitations: () => ['people', 'invitations'] as const,
-};
+/** This feature's query keys; every family lives in the one registry (lib/query-keys.ts). */
+export { peopleKeys } from '@/lib/query-keys';

@@ -1,6 +1,7 @@
 import { useMutation } from '@tanstack/react-query';
 import { PHOTO_FIELD, PHOTO_MAX_BYTES, type Photo } from '@shared/schemas/photos';
 import { api, ApiError } from '@/lib/api-client';
+import { shownOn } from '@/lib/query-keys';
 
 /** Refuses a file the server would refuse anyway, before it crawls over the hangar Wi-Fi. */
 export function uploadPhoto(code: string, file: File): Promise<Photo> {
@@ -12,7 +13,7 @@ export function uploadPhoto(code: string, file: File): Promise<Photo> {
   return api.postForm<Photo>(`/api/tools/${encodeURIComponent(code)}/photos`, form);
 }
 
-/** Photos live in the tool's data: the caller refreshes the tool (onChange) after a change. */
+/** Photos live in the tool's data: the tool refreshes after a change. */
 export function useUploadPhoto() {
-  return useMutation({ mutationFn: ({ code, file }: { code: string; file: File }) => uploadPhoto(code, file) });
+  return useMutation({ mutationFn: ({ code, file }: { code: string; file: File }) => uploadPhoto(code, file), meta: { invalidates: shownOn.toolSpec } });
 }

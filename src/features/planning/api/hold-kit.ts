@@ -1,13 +1,12 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import type { KitHoldsResult } from '@shared/schemas/builds';
 import { api } from '@/lib/api-client';
-import { assemblyKeys } from './keys';
+import { shownOn } from '@/lib/query-keys';
 
-/** One action places holds on every free tool of the assembly's crib kit; the kit's statuses change. */
+/** One action places holds on every free tool of the assembly's crib kit; the kit's statuses and the tools' holds change. */
 export function useHoldKit(id: number) {
-  const queryClient = useQueryClient();
   return useMutation({
     mutationFn: () => api.post<KitHoldsResult>(`/api/assemblies/${id}/kit/holds`),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: assemblyKeys.estimate(id) }),
+    meta: { invalidates: shownOn.toolState },
   });
 }

@@ -1,4 +1,2 @@
-export const serviceKeys = {
-  all: ['service'] as const,
-  due: () => ['service', 'due'] as const,
-};
+/** This feature's query keys; every family lives in the one registry (lib/query-keys.ts). */
+export { serviceKeys } from '@/lib/query-keys';

@@ -1,11 +1,2 @@
-export const signoffKeys = {
-  all: ['signoffs'] as const,
-  list: () => ['signoffs', 'list'] as const,
-  mine: () => ['signoffs', 'mine'] as const,
-  requests: () => ['signoffs', 'requests'] as const,
-  myRequests: () => ['signoffs', 'requests', 'mine'] as const,
-};
-
-export const cribSettingsKeys = {
-  all: ['crib-settings'] as const,
-};
+/** This feature's query keys; every family lives in the one registry (lib/query-keys.ts). */
+export { signoffKeys, cribSettingsKeys } from '@/lib/query-keys';

@@ -1,11 +1,10 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { signoffKeys } from './keys';
+import { shownOn } from '@/lib/query-keys';
 
 export function useRevokeSignoff() {
-  const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ signoffId, userId }: { signoffId: number; userId: number }) => api.delete(`/api/signoffs/${signoffId}/holders/${userId}`),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: signoffKeys.all }),
+    meta: { invalidates: shownOn.signoffs },
   });
 }

@@ -1,14 +1,13 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import type { CreateSignoffInput, Signoff, UpdateSignoffBody } from '@shared/schemas/signoffs';
 import { api } from '@/lib/api-client';
-import { signoffKeys } from './keys';
+import { shownOn } from '@/lib/query-keys';
 
 /** Defines a new sign-off, or renames and describes one when `id` is given. */
 export function useSaveSignoff() {
-  const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ id, body }: { id?: number; body: CreateSignoffInput | UpdateSignoffBody }) =>
       id === undefined ? api.post<Signoff>('/api/signoffs', body) : api.patch<Signoff>(`/api/signoffs/${id}`, body),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: signoffKeys.all }),
+    meta: { invalidates: shownOn.signoffs },
   });
 }

@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { CribSettingsView, UpdateCribSettingsBody } from '@shared/schemas/signoffs';
 import { api } from '@/lib/api-client';
 import { setChapterTimeZone } from '@/lib/chapter-zone';
+import { shownOn } from '@/lib/query-keys';
 import { cribSettingsKeys } from './keys';
 
 export function useUpdateCribSettings() {
@@ -12,5 +13,6 @@ export function useUpdateCribSettings() {
       setChapterTimeZone(saved.timeZone);
       queryClient.setQueryData(cribSettingsKeys.all, saved);
     },
+    meta: { invalidates: shownOn.chapterSettings },
   });
 }

@@ -1,7 +1,7 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import type { CountBody, CountResult, DrawBody, MoveBody, Movement, ReceiveBody, ReturnUnusedBody, ReverseBody, WriteOffBody } from '@shared/schemas/bins';
 import { api } from '@/lib/api-client';
-import { invalidateReorderFamily } from '@/lib/reorder-queries';
+import { shownOn } from '@/lib/query-keys';
 
 const path = (code: string, rest: string) => `/api/bins/${encodeURIComponent(code)}/${rest}`;
 
@@ -11,15 +11,13 @@ function withoutEmptyNote<T extends { note?: string }>(body: T): T {
 }
 
 /**
- * A movement changes the bin's on-hand, its ledger, the bins list and the Restock list (a move
- * changes two bins), and with them the bin's alert (a receipt counts against its order) and the
- * forecast: refresh the whole reorder family so every figure on screen agrees at once.
+ * A movement changes the bin's on-hand and ledger (a move changes two bins), what to order, the
+ * tab it is charged to and the bill of the assembly it is for: every screen showing one refreshes.
  */
 function useStockMutation<B extends { note?: string }, R>(rest: string) {
-  const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ code, body }: { code: string; body: B }) => api.post<R>(path(code, rest), withoutEmptyNote(body)),
-    onSettled: () => invalidateReorderFamily(queryClient),
+    meta: { invalidates: shownOn.stockMovement },
   });
 }
 
@@ -31,9 +29,8 @@ export const useMove = () => useStockMutation<MoveBody, Movement>('move');
 export const useWriteOff = () => useStockMutation<WriteOffBody, Movement>('write-off');
 
 export function useReverse() {
-  const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ code, id, body }: { code: string; id: number; body: ReverseBody }) => api.post<Movement>(path(code, `ledger/${id}/reverse`), body),
-    onSettled: () => invalidateReorderFamily(queryClient),
+    meta: { invalidates: shownOn.stockMovement },
   });
 }

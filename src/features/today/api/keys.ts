@@ -1,7 +1,2 @@
-import type { Role } from '@shared/roles';
-
-/** Home's "today" answers, one per role. Home refetches them whenever it is opened. */
-export const todayKeys = {
-  all: ['today'] as const,
-  role: (role: Role) => ['today', role] as const,
-};
+/** This feature's query keys; every family lives in the one registry (lib/query-keys.ts). */
+export { todayKeys } from '@/lib/query-keys';

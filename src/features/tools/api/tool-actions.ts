@@ -1,16 +1,15 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import type { CheckoutBody, ResolveAccessoryBody, ReturnBody } from '@shared/schemas/tools';
 import { api } from '@/lib/api-client';
-import { toolKeys } from './keys';
+import { shownOn } from '@/lib/query-keys';
 
 const path = (code: string, rest: string) => `/api/tools/${encodeURIComponent(code)}/${rest}`;
 
-/** Every action on a tool changes its state, its audit trail and someone's loans: refresh the tool family. */
+/** Every action on a tool changes its state, its audit trail, someone's loans or holds, and the lists and kits that show them. */
 function useToolMutation<V, R>(run: (vars: V) => Promise<R>) {
-  const queryClient = useQueryClient();
   return useMutation({
     mutationFn: run,
-    onSettled: () => queryClient.invalidateQueries({ queryKey: toolKeys.all }),
+    meta: { invalidates: shownOn.toolState },
   });
 }
 

@@ -1,11 +1,10 @@
-import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router';
 import type { LeadToday as LeadTodayAnswer } from '@shared/schemas/today-lead';
 import { LateBadge } from '@/features/overdue/components/late-badge';
 import { ReminderButton } from '@/features/overdue/components/reminder-button';
 import { monthName } from '@/features/stock-money/components/format';
 import { SignoffRequestList } from '@/features/signoffs/components/signoff-request-list';
-import { todayKeys } from '@/features/today/api/keys';
 import { leadTodayQueryOptions } from '@/features/today/api/get-lead-today';
 import { Card, Code } from '@/components/ui/page';
 import { formatCents, formatCount, formatQuantity } from '@/lib/format';
@@ -24,7 +23,7 @@ function AllLink({ to, total, what, page }: { to: string; total: number; what: s
   );
 }
 
-function Overdue({ overdue, onChanged }: { overdue: LeadTodayAnswer['overdue']; onChanged: () => void }) {
+function Overdue({ overdue }: { overdue: LeadTodayAnswer['overdue'] }) {
   if (overdue.total === 0) return <Card title="Overdue"><p>Nothing is overdue.</p></Card>;
   return (
     <Card title={`Overdue (${formatCount(overdue.total)})`}>
@@ -41,7 +40,7 @@ function Overdue({ overdue, onChanged }: { overdue: LeadTodayAnswer['overdue']; 
               <span>{loan.holder.name} has it</span>
               <LateBadge daysLate={loan.daysLate} />
             </div>
-            <ReminderButton loan={loan} onSettled={onChanged} />
+            <ReminderButton loan={loan} />
           </li>
         ))}
       </ul>
@@ -105,10 +104,10 @@ function Reorder({ reorder }: { reorder: LeadTodayAnswer['reorder'] }) {
   );
 }
 
-function Requests({ requests, onChanged }: { requests: LeadTodayAnswer['signoffRequests']; onChanged: () => void }) {
+function Requests({ requests }: { requests: LeadTodayAnswer['signoffRequests'] }) {
   return (
     <Card title="Sign-off requests">
-      <SignoffRequestList requests={requests.requests} onAnswered={onChanged} />
+      <SignoffRequestList requests={requests.requests} />
       {requests.total > 0 && <AllLink to="/signoffs" total={requests.total} what="sign-off requests" page="Sign-offs" />}
     </Card>
   );
@@ -130,14 +129,13 @@ function Spend({ spend }: { spend: LeadTodayAnswer['spend'] }) {
 
 /** The lead's part of home: what needs them today, each figure a way to where it is dealt with. */
 export function LeadToday() {
-  const queryClient = useQueryClient();
+  // What the panels' buttons change refreshes them: a reminder and an answered request name the day panels.
   const { data } = useQuery(leadTodayQueryOptions());
   if (!data) return null;
-  const changed = () => void queryClient.invalidateQueries({ queryKey: todayKeys.all });
   return (
     <div className="mb-4 grid gap-4 lg:grid-cols-2" data-testid="lead-today">
-      <Overdue overdue={data.overdue} onChanged={changed} />
-      <Requests requests={data.signoffRequests} onChanged={changed} />
+      <Overdue overdue={data.overdue} />
+      <Requests requests={data.signoffRequests} />
       <OnLoan onLoan={data.onLoan} />
       <Holders holders={data.holders} />
       <Reorder reorder={data.reorder} />

@@ -46,12 +46,14 @@ import { signInLimiters } from './middleware/rate-limit';
 import { sessionMiddleware } from './middleware/session';
 import { wellFormedPath } from './middleware/well-formed-path';
 import { clientStatic } from './static/client-static';
+import { installReactions } from './events/reactions';
 
 /** Link tokens never reach the logs. */
 const hideTokens = (url: string) => url.replace(/[A-Za-z0-9_-]{43}/g, '[token]');
 
 /** Builds the whole app from a config; it does not listen (server/index.ts does). */
 export function createApp(config: AppConfig) {
+  installReactions();
   const app = express();
   if (config.trustProxyHops > 0) app.set('trust proxy', config.trustProxyHops);
   app.disable('x-powered-by');

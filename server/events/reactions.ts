@@ -1,3 +1,4 @@
+import { countReceiptAgainstAlert } from '../features/planning/planning.reactions';
 import { appReactionsInstalled, installAppReactions, type Reactions } from './domain-events';
 
 /**
@@ -5,7 +6,7 @@ import { appReactionsInstalled, installAppReactions, type Reactions } from './do
  * import each other). Each feature's reactions live in its `<feature>.reactions.ts`.
  */
 export const REACTIONS: Reactions = {
-  'stock.received': [],
+  'stock.received': [countReceiptAgainstAlert],
   'person.deactivated': [],
   'payment.received': [],
   'tab.online_payment_recorded': [],

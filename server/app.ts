@@ -18,7 +18,7 @@ import { estimateRouter } from './features/estimate/estimate.router';
 import { assembliesRouter, buildsRouter, preferencesRouter } from './features/planning/planning.router';
 import { alertsRouter } from './features/planning/alerts.router';
 import { forecastRouter, planningSettingsRouter, wasteRouter } from './features/planning/forecast.router';
-import { endHoldsOfPerson, placeHold } from './features/tools/holds.service';
+import { placeHold } from './features/tools/holds.service';
 import { binCsvRouter, binImportBodyParsers } from './features/stock/stock-csv.router';
 import { stockMoneyRouter } from './features/stock/money.router';
 import { paymentSettingsRouter } from './features/payments/payment-settings.router';
@@ -110,7 +110,7 @@ export function createApp(config: AppConfig) {
   api.use('/auth', authRouter(signInLimiters(config.rateLimit)));
   api.use('/auth/password-reset', passwordResetRouter());
   api.use('/invitations', invitationsRouter());
-  api.use('/users', peopleRouter({ endHoldsOf: endHoldsOfPerson }));
+  api.use('/users', peopleRouter());
   api.use('/mail', mailRouter(config.catchingMail));
   api.use('/reference', referenceRouter());
   api.use('/tools', toolPhotosRouter());

@@ -1,4 +1,5 @@
 import { countReceiptAgainstAlert } from '../features/planning/planning.reactions';
+import { endHoldsOfDeactivated } from '../features/tools/tools.reactions';
 import { appReactionsInstalled, installAppReactions, type Reactions } from './domain-events';
 
 /**
@@ -7,7 +8,7 @@ import { appReactionsInstalled, installAppReactions, type Reactions } from './do
  */
 export const REACTIONS: Reactions = {
   'stock.received': [countReceiptAgainstAlert],
-  'person.deactivated': [],
+  'person.deactivated': [endHoldsOfDeactivated],
   'payment.received': [],
   'tab.online_payment_recorded': [],
   'payment.refunded': [],

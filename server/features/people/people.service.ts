@@ -3,6 +3,7 @@ import { toPerson } from '../../accounts/public-user';
 import { countActiveLeads, findUserById, listUsers, updateUser } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
+import { publish } from '../../events/domain-events';
 import { HttpError } from '../../lib/http-error';
 import { endSessionsOf } from '../../lib/session-helpers';
 
@@ -11,13 +12,11 @@ export function listPeople(ctx: ServiceContext): Person[] {
 }
 
 /**
- * The crib's rule for a person who leaves: their holds and queue places end in the same transaction
- * (a tool set aside for them passes on), writing any e-mail to the outbox. The app hands it in.
+ * Role changes and (de)activation; the chapter always keeps at least one active lead. Deactivating
+ * ends the person's sessions and publishes `person.deactivated` in the same transaction (the crib ends
+ * their holds).
  */
-export type EndHoldsOf = (ctx: ServiceContext, personId: number, now: Date) => void;
-
-/** Role changes and (de)activation; the chapter always keeps at least one active lead. */
-export function updatePerson(ctx: ServiceContext, actor: UserRow, id: number, change: UpdatePersonBody, endHoldsOf: EndHoldsOf): Person {
+export function updatePerson(ctx: ServiceContext, actor: UserRow, id: number, change: UpdatePersonBody): Person {
   return ctx.db.transaction((db) => {
     const person = findUserById(db, id);
     if (!person) throw new HttpError(404, 'PERSON_NOT_FOUND', `No person has id ${id}.`);
@@ -34,7 +33,7 @@ export function updatePerson(ctx: ServiceContext, actor: UserRow, id: number, ch
       ...(change.active !== undefined && { deactivatedAt: change.active ? null : (person.deactivatedAt ?? ctx.now()) }),
     });
     if (deactivating) endSessionsOf(ctx.db, id);
-    if (deactivating) endHoldsOf(ctx, id, ctx.now());
+    if (deactivating) publish(ctx, { type: 'person.deactivated', userId: id, at: ctx.now() });
     return toPerson(updated ?? person);
   });
 }

@@ -22,7 +22,6 @@ import { placeHold } from './features/tools/holds.service';
 import { binCsvRouter, binImportBodyParsers } from './features/stock/stock-csv.router';
 import { stockMoneyRouter } from './features/stock/money.router';
 import { paymentSettingsRouter } from './features/payments/payment-settings.router';
-import { listTabPayments, recordOnlinePayment, recordRefund, tabBalanceCents, tabPayment } from './features/stock/money.service';
 import { paymentsRouter, paymentsWebhookRouter } from './features/payments/payments.router';
 import { mailRouter } from './features/mail/mail.router';
 import { passwordResetRouter } from './features/password-reset/password-reset.router';
@@ -88,10 +87,8 @@ export function createApp(config: AppConfig) {
   };
   const { middleware: session, store } = sessionMiddleware(config);
 
-  // Tabs belong to stock: the app hands the payments feature the way to read and settle one.
-  const tab = { balanceCents: tabBalanceCents, recordPayment: recordOnlinePayment, listPayments: listTabPayments, payment: tabPayment, recordRefund };
   // The provider's webhook reads its raw body and carries no session: it goes ahead of the API stack.
-  app.use('/api/payments/webhook', noStore, paymentsWebhookRouter(ctx, config.payments, tab));
+  app.use('/api/payments/webhook', noStore, paymentsWebhookRouter(ctx, config.payments));
 
   const api = express.Router();
   api.use(noStore);
@@ -129,7 +126,7 @@ export function createApp(config: AppConfig) {
   api.use('/bins', binsRouter({ runQueuedAction, nameAssemblies: assemblyNames, reordersOf: binReorders }));
   api.use('/stock', stockMoneyRouter({ nameAssemblies: assemblyNames }));
   api.use('/payments/settings', paymentSettingsRouter(config.payments));
-  api.use('/payments', paymentsRouter(config.payments, tab));
+  api.use('/payments', paymentsRouter(config.payments));
   api.use('/estimate', estimateRouter());
   api.use('/builds', buildsRouter());
   // Holds belong to the crib: the app hands its rule to the planning feature.

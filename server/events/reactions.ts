@@ -1,5 +1,7 @@
 import { countReceiptAgainstAlert } from '../features/planning/planning.reactions';
 import { endHoldsOfDeactivated } from '../features/tools/tools.reactions';
+import { linkCheckoutToTabPayment } from '../features/payments/payments.reactions';
+import { putOnlinePaymentOnTab, putRefundOnTab } from '../features/stock/stock.reactions';
 import { appReactionsInstalled, installAppReactions, type Reactions } from './domain-events';
 
 /**
@@ -9,9 +11,9 @@ import { appReactionsInstalled, installAppReactions, type Reactions } from './do
 export const REACTIONS: Reactions = {
   'stock.received': [countReceiptAgainstAlert],
   'person.deactivated': [endHoldsOfDeactivated],
-  'payment.received': [],
-  'tab.online_payment_recorded': [],
-  'payment.refunded': [],
+  'payment.received': [putOnlinePaymentOnTab],
+  'tab.online_payment_recorded': [linkCheckoutToTabPayment],
+  'payment.refunded': [putRefundOnTab],
 };
 
 /** Installs the reactions for this process; every entry point that writes calls it (a second call does nothing). */

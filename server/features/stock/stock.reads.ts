@@ -16,7 +16,7 @@ export interface TabRefund {
   memberPaymentId: number;
   amountCents: number;
   at: Date;
-  providerRefundId: string;
+  providerRefundId: string | null;
   /** The lead who made it; null when it came from the provider's dashboard and nobody has claimed it. */
   recordedById: number | null;
 }

@@ -1,11 +1,11 @@
 import type { Person, UpdatePersonBody } from '@shared/schemas/people';
 import { toPerson } from '../../accounts/public-user';
-import { countActiveLeads, findUserById, listUsers, updateUser } from '../../accounts/users.repo';
+import { changeAccess, countActiveLeads, findUserById, listUsers } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { publish } from '../../events/domain-events';
 import { HttpError } from '../../lib/http-error';
-import { endSessionsOf } from '../../lib/session-helpers';
+import { endSessionsOf } from '../../session/sessions-of';
 
 export function listPeople(ctx: ServiceContext): Person[] {
   return listUsers(ctx.db).map(toPerson);
@@ -28,7 +28,7 @@ export function updatePerson(ctx: ServiceContext, actor: UserRow, id: number, ch
     if ((deactivating || demoting) && person.role === 'lead' && person.deactivatedAt === null && countActiveLeads(db) <= 1) {
       throw new HttpError(409, 'LAST_LEAD', 'The chapter needs at least one active lead. Make someone else lead first.');
     }
-    const updated = updateUser(db, id, {
+    const updated = changeAccess(db, id, {
       ...(change.role !== undefined && { role: change.role }),
       ...(change.active !== undefined && { deactivatedAt: change.active ? null : (person.deactivatedAt ?? ctx.now()) }),
     });

@@ -73,7 +73,8 @@ export default defineConfig(
     },
   },
   ...featureBoundaries('src', (f) => [`@/features/${f}`, `@/features/${f}/**`]),
-  ...featureBoundaries('server', (f) => [`../${f}/*`, `../../features/${f}/*`, `**/features/${f}/**`]),
+  // A server feature may read another through that feature's one read-model file, `<other>.reads`, and nothing else of it.
+  ...featureBoundaries('server', (f) => [`../${f}/*`, `../../features/${f}/*`, `**/features/${f}/**`, `!../${f}/${f}.reads`, `!**/features/${f}/${f}.reads`]),
   {
     files: ['tests/**/*.{ts,tsx}'],
     rules: {

@@ -18,11 +18,10 @@ import { estimateRouter } from './features/estimate/estimate.router';
 import { assembliesRouter, buildsRouter, preferencesRouter } from './features/planning/planning.router';
 import { alertsRouter } from './features/planning/alerts.router';
 import { forecastRouter, planningSettingsRouter, wasteRouter } from './features/planning/forecast.router';
-import { endHoldsOfPerson, placeHold } from './features/tools/holds.service';
+import { placeHold } from './features/tools/holds.service';
 import { binCsvRouter, binImportBodyParsers } from './features/stock/stock-csv.router';
 import { stockMoneyRouter } from './features/stock/money.router';
 import { paymentSettingsRouter } from './features/payments/payment-settings.router';
-import { listTabPayments, recordOnlinePayment, recordRefund, tabBalanceCents, tabPayment } from './features/stock/money.service';
 import { paymentsRouter, paymentsWebhookRouter } from './features/payments/payments.router';
 import { mailRouter } from './features/mail/mail.router';
 import { passwordResetRouter } from './features/password-reset/password-reset.router';
@@ -46,12 +45,14 @@ import { signInLimiters } from './middleware/rate-limit';
 import { sessionMiddleware } from './middleware/session';
 import { wellFormedPath } from './middleware/well-formed-path';
 import { clientStatic } from './static/client-static';
+import { installReactions } from './events/reactions';
 
 /** Link tokens never reach the logs. */
 const hideTokens = (url: string) => url.replace(/[A-Za-z0-9_-]{43}/g, '[token]');
 
 /** Builds the whole app from a config; it does not listen (server/index.ts does). */
 export function createApp(config: AppConfig) {
+  installReactions();
   const app = express();
   if (config.trustProxyHops > 0) app.set('trust proxy', config.trustProxyHops);
   app.disable('x-powered-by');
@@ -86,10 +87,8 @@ export function createApp(config: AppConfig) {
   };
   const { middleware: session, store } = sessionMiddleware(config);
 
-  // Tabs belong to stock: the app hands the payments feature the way to read and settle one.
-  const tab = { balanceCents: tabBalanceCents, recordPayment: recordOnlinePayment, listPayments: listTabPayments, payment: tabPayment, recordRefund };
   // The provider's webhook reads its raw body and carries no session: it goes ahead of the API stack.
-  app.use('/api/payments/webhook', noStore, paymentsWebhookRouter(ctx, config.payments, tab));
+  app.use('/api/payments/webhook', noStore, paymentsWebhookRouter(ctx, config.payments));
 
   const api = express.Router();
   api.use(noStore);
@@ -108,7 +107,7 @@ export function createApp(config: AppConfig) {
   api.use('/auth', authRouter(signInLimiters(config.rateLimit)));
   api.use('/auth/password-reset', passwordResetRouter());
   api.use('/invitations', invitationsRouter());
-  api.use('/users', peopleRouter({ endHoldsOf: endHoldsOfPerson }));
+  api.use('/users', peopleRouter());
   api.use('/mail', mailRouter(config.catchingMail));
   api.use('/reference', referenceRouter());
   api.use('/tools', toolPhotosRouter());
@@ -127,7 +126,7 @@ export function createApp(config: AppConfig) {
   api.use('/bins', binsRouter({ runQueuedAction, nameAssemblies: assemblyNames, reordersOf: binReorders }));
   api.use('/stock', stockMoneyRouter({ nameAssemblies: assemblyNames }));
   api.use('/payments/settings', paymentSettingsRouter(config.payments));
-  api.use('/payments', paymentsRouter(config.payments, tab));
+  api.use('/payments', paymentsRouter(config.payments));
   api.use('/estimate', estimateRouter());
   api.use('/builds', buildsRouter());
   // Holds belong to the crib: the app hands its rule to the planning feature.

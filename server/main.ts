@@ -17,6 +17,7 @@ import { createSmtpMailer } from './mail/mailer';
 import { startFakeProvider, type FakeProvider } from './payments/fake-provider';
 import { createPaymentsSetup } from './payments/payments-client';
 import { startOutboxWorker } from './mail/outbox-worker';
+import { installReactions } from './events/reactions';
 import { seedDemoChapter } from './seed/demo-chapter';
 import { resolveSessionSecret } from './session-secret';
 import { createTlsServer, tlsFromEnv } from './tls';
@@ -45,6 +46,8 @@ export async function startGripline(env: Env, options: StartOptions = {}): Promi
   const tls = options.lanCertificate ?? tlsFromEnv(env);
   const server = tls ? createTlsServer(tls) : createHttpServer();
   const logger = createLogger(env.LOG_LEVEL);
+  // Before anything writes: the seed, the app and the jobs all publish domain events.
+  installReactions();
   const db = openDatabase(env.DATABASE_PATH);
   migrateDatabase(db);
   if (env.SEED_DEMO && (await seedDemoChapter(db))) logger.info('seeded the demo chapter into an empty database');

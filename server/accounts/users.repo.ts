@@ -36,12 +36,23 @@ export function insertUser(
   return db.insert(users).values(values).returning().get();
 }
 
-export function updateUser(
-  db: Executor,
-  id: number,
-  values: Partial<Pick<UserRow, 'role' | 'passwordHash' | 'deactivatedAt' | 'name' | 'preferredUnit'>>,
-): UserRow | undefined {
+/*
+ * The writes on a person, one per change a feature may ask for: users are written only here.
+ */
+
+/** A lead changes someone's role, or (de)activates them (`deactivatedAt` null is active). */
+export function changeAccess(db: Executor, id: number, values: Partial<Pick<UserRow, 'role' | 'deactivatedAt'>>): UserRow | undefined {
   return db.update(users).set(values).where(eq(users.id, id)).returning().get();
+}
+
+/** A new password (a reset link was used). */
+export function setPasswordHash(db: Executor, id: number, passwordHash: string): void {
+  db.update(users).set({ passwordHash }).where(eq(users.id, id)).run();
+}
+
+/** The length unit a person types rivet lines in. */
+export function setPreferredUnit(db: Executor, id: number, preferredUnit: UserRow['preferredUnit']): UserRow | undefined {
+  return db.update(users).set({ preferredUnit }).where(eq(users.id, id)).returning().get();
 }
 
 export function countActiveLeads(db: Executor): number {

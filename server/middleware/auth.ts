@@ -4,7 +4,7 @@ import { loadUserById } from '../accounts/users.repo';
 import type { Database } from '../db/client';
 import type { UserRow } from '../db/schema/users';
 import { HttpError } from '../lib/http-error';
-import { endSessionsOf } from '../lib/session-helpers';
+import { endSessionsOf } from '../session/sessions-of';
 import { SESSION_COOKIE } from './session';
 
 declare module 'express-serve-static-core' {

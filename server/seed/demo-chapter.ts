@@ -4,6 +4,7 @@ import { hashPassword } from '../accounts/passwords';
 import { countUsers, insertUser } from '../accounts/users.repo';
 import type { Database } from '../db/client';
 import { refreshAlerts } from '../features/planning/alerts.service';
+import { installReactions } from '../events/reactions';
 import { deliverDueMail } from '../mail/outbox';
 import { seedDemoBuilds } from './demo-builds';
 import { seedDemoCrib } from './demo-crib';
@@ -28,6 +29,7 @@ export const DEMO_PEOPLE: { email: string; name: string; role: Role; phone: stri
 /** Seeds the demo chapter into an empty database; returns false (and does nothing) otherwise. */
 export async function seedDemoChapter(db: Database): Promise<boolean> {
   if (countUsers(db) > 0) return false;
+  installReactions();
   const hashes = await Promise.all(DEMO_PEOPLE.map(() => hashPassword(DEMO_PASSWORD)));
   const now = Date.now();
   db.transaction((tx) => {

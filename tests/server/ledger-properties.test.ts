@@ -10,6 +10,7 @@ import { insertNewBin } from '../../server/features/stock/bins.service';
 import { findBinByCode } from '../../server/features/stock/bins.repo';
 import { ledgerSum } from '../../server/features/stock/ledger.repo';
 import { count, draw, ledgerFor, receive, returnUnused, reverse, writeOff } from '../../server/features/stock/ledger.service';
+import { installReactions } from '../../server/events/reactions';
 import { HttpError } from '../../server/lib/http-error';
 import { blindRivetBin } from '../helpers/crib';
 
@@ -25,6 +26,7 @@ const opArb: fc.Arbitrary<Op> = fc.oneof(
 );
 
 function freshChapter() {
+  installReactions();
   const db = openDatabase(':memory:');
   migrateDatabase(db);
   let clock = new Date('2026-06-01T08:00:00Z');

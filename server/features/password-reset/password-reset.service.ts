@@ -3,10 +3,10 @@ import { claimAccountToken, countTokensSince, insertAccountToken, revokeOpenToke
 import { linkUrl, openLinkToken } from '../../accounts/link-token.service';
 import { hashLinkToken, LINK_PAGES, newLinkToken } from '../../accounts/link-tokens';
 import { hashPassword } from '../../accounts/passwords';
-import { findUserByEmail, updateUser } from '../../accounts/users.repo';
+import { findUserByEmail, setPasswordHash } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
 import { HttpError } from '../../lib/http-error';
-import { endSessionsOf } from '../../lib/session-helpers';
+import { endSessionsOf } from '../../session/sessions-of';
 import { passwordResetMail } from '../../mail/messages';
 import { queueMail } from '../../mail/outbox';
 
@@ -50,7 +50,7 @@ export async function confirmPasswordReset(ctx: ServiceContext, token: string, p
     if (!claimAccountToken(db, row.id, ctx.now())) {
       throw new HttpError(410, 'LINK_USED', 'This password reset link has already been used. Each link works once.');
     }
-    updateUser(db, userId, { passwordHash });
+    setPasswordHash(db, userId, passwordHash);
   });
   endSessionsOf(ctx.db, userId);
 }

@@ -4,7 +4,8 @@ import { chapterDay, chapterDaySpan, startOfDayNamed } from '@shared/time/chapte
 import type { ServiceContext } from '../../context';
 import { centsCell, textCell as text, toCsv, type CsvCell as Cell } from '../../lib/csv';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
-import type { PaymentFilter, TabLedger } from './payments.service';
+import { listTabPayments } from '../stock/stock.reads';
+import type { PaymentFilter } from './payments.service';
 
 /** The query's chapter days as moments: from the start of the first day to the end of the last. */
 function filterOf(query: PaymentsQuery, zone: string): PaymentFilter {
@@ -16,8 +17,8 @@ function filterOf(query: PaymentsQuery, zone: string): PaymentFilter {
 }
 
 /** Cash and online payments together, newest first (quartermaster and lead). */
-export function listPayments(ctx: ServiceContext, tab: TabLedger, query: PaymentsQuery): PaymentListItem[] {
-  return tab.listPayments(ctx.db, filterOf(query, readChapterTimeZone(ctx.db)));
+export function listPayments(ctx: ServiceContext, query: PaymentsQuery): PaymentListItem[] {
+  return listTabPayments(ctx.db, filterOf(query, readChapterTimeZone(ctx.db)));
 }
 
 const CSV_FIELDS = ['payment_id', 'day', 'at_utc', 'member', 'method', 'amount', 'refunded', 'left_to_refund', 'recorded_by', 'note'];
@@ -27,9 +28,9 @@ const CSV_FIELDS = ['payment_id', 'day', 'at_utc', 'member', 'method', 'amount',
  * UTC), amounts in dollars with two places. The file is named for the days it covers: the days
  * asked, or from the oldest payment listed to today.
  */
-export function paymentsCsv(ctx: ServiceContext, tab: TabLedger, query: PaymentsQuery): { filename: string; csv: string } {
+export function paymentsCsv(ctx: ServiceContext, query: PaymentsQuery): { filename: string; csv: string } {
   const zone = readChapterTimeZone(ctx.db);
-  const payments = tab.listPayments(ctx.db, filterOf(query, zone));
+  const payments = listTabPayments(ctx.db, filterOf(query, zone));
   const dayOf = (iso: string) => chapterDay(new Date(iso), zone);
   const rows = payments.map((p): Cell[] => [
     p.id,

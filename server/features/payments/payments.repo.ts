@@ -21,7 +21,6 @@ export function closeOnlinePayment(
   changes: {
     state: 'paid' | 'refused' | 'expired';
     eventId?: string;
-    memberPaymentId?: number;
     paymentIntentId?: string | null;
     receivedAmountCents?: number | null;
     receivedCurrency?: string | null;
@@ -33,6 +32,11 @@ export function closeOnlinePayment(
     .set(changes)
     .where(and(eq(onlinePayments.id, id), eq(onlinePayments.state, 'open')))
     .run().changes === 1;
+}
+
+/** Names the payment on the member's tab that a paid checkout became (stock tells it, `tab.online_payment_recorded`). */
+export function linkMemberPayment(db: Executor, id: number, memberPaymentId: number): void {
+  db.update(onlinePayments).set({ memberPaymentId }).where(eq(onlinePayments.id, id)).run();
 }
 
 /** The member's checkouts still open at the provider, oldest first. */

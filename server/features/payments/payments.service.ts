@@ -1,12 +1,11 @@
 import type Stripe from 'stripe';
 import type { PaymentMethod } from '@shared/schemas/payment-methods';
-import { MIN_ONLINE_PAYMENT_CENTS, type CheckoutBody, type CheckoutResponse, type PaymentListItem } from '@shared/schemas/payments';
+import { MIN_ONLINE_PAYMENT_CENTS, type CheckoutBody, type CheckoutResponse } from '@shared/schemas/payments';
 import { centsWords } from '@shared/stock/money';
 import { findUserById } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
-import type { Executor } from '../../db/client';
-import type { NewPaymentRefund, PaymentRefundRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
+import { publish } from '../../events/domain-events';
 import { HttpError } from '../../lib/http-error';
 import type { Logger } from '../../lib/logger';
 import { paymentReceiptMail } from '../../mail/messages';
@@ -18,24 +17,13 @@ import { CHECKOUT_UNREACHABLE, providerCall } from './provider-call';
 import { recordChargeRefunds } from './refunds.service';
 import { refuseCheckout } from './refused-checkouts';
 import { closeOnlinePayment, insertOnlinePayment, onlinePaymentBySession } from './payments.repo';
+import { tabBalanceCents } from '../stock/stock.reads';
 
 /** Which payments to list: from and before moments, and cash or online. */
 export interface PaymentFilter {
   from?: Date;
   to?: Date;
   method?: PaymentMethod;
-}
-
-/** The stock feature's tab, handed in by the app: what a member owes, and recording a payment on it. */
-export interface TabLedger {
-  balanceCents(db: Executor, userId: number): number;
-  recordPayment(db: Executor, member: UserRow, amountCents: number, at: Date, note: string): number;
-  /** Everyone's payments, cash and online, newest first, with what was refunded and what is left. */
-  listPayments(db: Executor, filter: PaymentFilter): PaymentListItem[];
-  /** One payment on a tab; undefined when there is none. */
-  payment(db: Executor, id: number): PaymentListItem | undefined;
-  /** Records money handed back on a payment (the balance goes up), once per provider refund id. */
-  recordRefund(db: Executor, entry: NewPaymentRefund): { refund: PaymentRefundRow; created: boolean };
 }
 
 /** My tab, where a receipt points. */
@@ -74,9 +62,9 @@ function offeredCurrency(ctx: ServiceContext) {
  * amount is asked) and returns the provider's page to send them to. Their earlier checkouts still open
  * are expired first, so only one can be paid.
  */
-export async function startCheckout(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, member: UserRow, body: CheckoutBody): Promise<CheckoutResponse> {
+export async function startCheckout(ctx: ServiceContext, setup: PaymentsSetup, member: UserRow, body: CheckoutBody): Promise<CheckoutResponse> {
   const currency = offeredCurrency(ctx);
-  const amountCents = amountToPay(tab.balanceCents(ctx.db, member.id), body.amountCents);
+  const amountCents = amountToPay(tabBalanceCents(ctx.db, member.id), body.amountCents);
   await expireEarlierCheckouts(ctx, setup, member.id);
   const session = await openHostedCheckout(setup, {
     mode: 'payment',
@@ -103,12 +91,13 @@ function verifiedEvent(setup: PaymentsSetup, rawBody: Buffer, signature: string 
 }
 
 /**
- * Records a completed checkout once, on the member's tab, with its receipt in the same transaction.
+ * Records a completed checkout once, with its receipt in the same transaction: `payment.received`
+ * puts it on the member's tab (stock), which names the tab's payment back (`tab.online_payment_recorded`).
  * A checkout already closed (the same event again, or a second completion) changes nothing; an
  * amount or currency that differs from the checkout Gripline opened is refused, kept and reported
  * to the leads (refuseCheckout).
  */
-function settleCheckout(ctx: ServiceContext, tab: TabLedger, logger: Logger, eventId: string, session: Stripe.Checkout.Session): void {
+function settleCheckout(ctx: ServiceContext, logger: Logger, eventId: string, session: Stripe.Checkout.Session): void {
   ctx.db.transaction((tx) => {
     const row = onlinePaymentBySession(tx, session.id);
     if (!row) {
@@ -126,10 +115,10 @@ function settleCheckout(ctx: ServiceContext, tab: TabLedger, logger: Logger, eve
       return;
     }
     const member = findUserById(tx, row.userId)!;
-    const memberPaymentId = tab.recordPayment(tx, member, row.amountCents, now, 'Paid online');
     const paymentIntentId = typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
-    if (!closeOnlinePayment(tx, row.id, { state: 'paid', eventId, memberPaymentId, paymentIntentId, updatedAt: now })) throw new Error(`checkout ${row.id} closed twice`);
-    queueMail(tx, paymentReceiptMail(member.email, member.name, row.amountCents, tab.balanceCents(tx, member.id), myTabPage(ctx)), now);
+    if (!closeOnlinePayment(tx, row.id, { state: 'paid', eventId, paymentIntentId, updatedAt: now })) throw new Error(`checkout ${row.id} closed twice`);
+    publish(ctx, { type: 'payment.received', onlinePaymentId: row.id, userId: member.id, amountCents: row.amountCents, at: now, note: 'Paid online' });
+    queueMail(tx, paymentReceiptMail(member.email, member.name, row.amountCents, tabBalanceCents(tx, member.id), myTabPage(ctx)), now);
   });
 }
 
@@ -137,9 +126,9 @@ function settleCheckout(ctx: ServiceContext, tab: TabLedger, logger: Logger, eve
  * The provider's webhook: verified first, then a completed checkout is settled, an expired one
  * closed and refunds on a charge recorded; other events are acknowledged.
  */
-export async function receiveProviderEvent(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, logger: Logger, rawBody: Buffer, signature: string | string[] | undefined): Promise<void> {
+export async function receiveProviderEvent(ctx: ServiceContext, setup: PaymentsSetup, logger: Logger, rawBody: Buffer, signature: string | string[] | undefined): Promise<void> {
   const event = verifiedEvent(setup, rawBody, signature);
-  if (event.type === 'checkout.session.completed') settleCheckout(ctx, tab, logger, event.id, event.data.object);
+  if (event.type === 'checkout.session.completed') settleCheckout(ctx, logger, event.id, event.data.object);
   if (event.type === 'checkout.session.expired') recordExpiredCheckout(ctx, logger, event.id, event.data.object);
-  if (event.type === 'charge.refunded') await recordChargeRefunds(ctx, setup, tab, logger, event.data.object);
+  if (event.type === 'charge.refunded') await recordChargeRefunds(ctx, setup, logger, event.data.object);
 }

@@ -4,14 +4,15 @@ import { centsWords } from '@shared/stock/money';
 import { findUserById } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
 import type { Executor } from '../../db/client';
-import type { NewPaymentRefund, PaymentRefundRow } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
+import { publish, type EventOfType } from '../../events/domain-events';
 import { HttpError } from '../../lib/http-error';
 import type { Logger } from '../../lib/logger';
 import { paymentRefundMail } from '../../mail/messages';
 import { queueMail } from '../../mail/outbox';
 import type { PaymentsSetup } from '../../payments/payments-client';
-import { myTabPage, type TabLedger } from './payments.service';
+import { tabBalanceCents, tabPayment, tabRefund, type TabRefund } from '../stock/stock.reads';
+import { myTabPage } from './payments.service';
 import { onlinePaymentByIntent, onlinePaymentByMemberPayment } from './payments.repo';
 import { providerCall } from './provider-call';
 
@@ -35,16 +36,20 @@ function amountToRefund(payment: PaymentListItem, asked: number | undefined): nu
   return amount;
 }
 
+type RefundEntry = Omit<EventOfType<'payment.refunded'>, 'type'>;
+
 /**
- * Records a refund on the member's tab (their balance goes back up) and, the first time it is
- * recorded, mails the member; in the caller's transaction.
+ * Tells stock of a refund (`payment.refunded`: the member's balance goes back up) and, the first
+ * time it is recorded, mails the member; in the caller's transaction.
  */
-function recordRefundOnTab(ctx: ServiceContext, tx: Executor, tab: TabLedger, entry: NewPaymentRefund): PaymentRefundRow {
-  const { refund, created } = tab.recordRefund(tx, entry);
-  if (created) {
-    const payment = tab.payment(tx, entry.memberPaymentId)!;
+function recordRefundOnTab(ctx: ServiceContext, tx: Executor, entry: RefundEntry): TabRefund {
+  const known = tabRefund(tx, entry.providerRefundId) !== undefined;
+  publish(ctx, { type: 'payment.refunded', ...entry });
+  const refund = tabRefund(tx, entry.providerRefundId)!;
+  if (!known) {
+    const payment = tabPayment(tx, entry.memberPaymentId)!;
     const member = findUserById(tx, payment.member.id)!;
-    queueMail(tx, paymentRefundMail(member.email, member.name, refund.amountCents, tab.balanceCents(tx, member.id), myTabPage(ctx)), ctx.now());
+    queueMail(tx, paymentRefundMail(member.email, member.name, refund.amountCents, tabBalanceCents(tx, member.id), myTabPage(ctx)), ctx.now());
   }
   return refund;
 }
@@ -54,8 +59,8 @@ function recordRefundOnTab(ctx: ServiceContext, tx: Executor, tab: TabLedger, en
  * then records it on the tab once: the provider's own `charge.refunded` event for the same refund
  * may have arrived first, and then it is not added again.
  */
-export async function refundPayment(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, lead: UserRow, paymentId: number, body: RefundBody): Promise<Refund> {
-  const payment = tab.payment(ctx.db, paymentId);
+export async function refundPayment(ctx: ServiceContext, setup: PaymentsSetup, lead: UserRow, paymentId: number, body: RefundBody): Promise<Refund> {
+  const payment = tabPayment(ctx.db, paymentId);
   if (!payment) throw new HttpError(404, 'PAYMENT_NOT_FOUND', `There is no payment with id ${paymentId}. Choose one from the list of payments.`);
   const amountCents = amountToRefund(payment, body.amountCents);
   const paymentIntent = onlinePaymentByMemberPayment(ctx.db, payment.id)?.paymentIntentId;
@@ -64,9 +69,9 @@ export async function refundPayment(ctx: ServiceContext, setup: PaymentsSetup, t
   }
   const made = await providerCall(() => setup.provider.refunds.create({ payment_intent: paymentIntent, amount: amountCents, metadata: { memberPaymentId: String(payment.id) } }), UNREACHABLE);
   const refund = ctx.db.transaction((tx) =>
-    recordRefundOnTab(ctx, tx, tab, { memberPaymentId: payment.id, amountCents: made.amount, at: ctx.now(), providerRefundId: made.id, recordedById: lead.id, note: '' }),
+    recordRefundOnTab(ctx, tx, { memberPaymentId: payment.id, amountCents: made.amount, at: ctx.now(), providerRefundId: made.id, recordedById: lead.id, note: '' }),
   );
-  const after = tab.payment(ctx.db, payment.id)!;
+  const after = tabPayment(ctx.db, payment.id)!;
   return {
     id: refund.id,
     paymentId: payment.id,
@@ -84,7 +89,7 @@ export async function refundPayment(ctx: ServiceContext, setup: PaymentsSetup, t
  * recorded already) is not counted twice. The event names the charge; its refunds are read
  * through the SDK.
  */
-export async function recordChargeRefunds(ctx: ServiceContext, setup: PaymentsSetup, tab: TabLedger, logger: Logger, charge: Stripe.Charge): Promise<void> {
+export async function recordChargeRefunds(ctx: ServiceContext, setup: PaymentsSetup, logger: Logger, charge: Stripe.Charge): Promise<void> {
   const intentId = intentIdOf(charge.payment_intent);
   const memberPaymentId = intentId ? onlinePaymentByIntent(ctx.db, intentId)?.memberPaymentId : undefined;
   if (!intentId || !memberPaymentId) {
@@ -94,7 +99,7 @@ export async function recordChargeRefunds(ctx: ServiceContext, setup: PaymentsSe
   const refunds = await providerCall(() => setup.provider.refunds.list({ payment_intent: intentId, limit: 100 }), UNREACHABLE);
   ctx.db.transaction((tx) => {
     for (const r of refunds.data.filter(handsMoneyBack).reverse()) {
-      recordRefundOnTab(ctx, tx, tab, {
+      recordRefundOnTab(ctx, tx, {
         memberPaymentId,
         amountCents: r.amount,
         // When Gripline learned of it, on the same clock as every other entry on the tab.

@@ -4,11 +4,11 @@ import { updatePersonBodySchema } from '@shared/schemas/people';
 import { z } from 'zod';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { parseInput } from '../../lib/validate';
-import { listPeople, updatePerson, type EndHoldsOf } from './people.service';
+import { listPeople, updatePerson } from './people.service';
 
 const idParams = z.object({ id: idParam });
 
-export function peopleRouter(deps: { endHoldsOf: EndHoldsOf }) {
+export function peopleRouter() {
   const router = Router();
   router.use(requireRole('lead'));
 
@@ -19,7 +19,7 @@ export function peopleRouter(deps: { endHoldsOf: EndHoldsOf }) {
   router.patch('/:id', (req, res) => {
     const { id } = parseInput(idParams, req.params, 'path');
     const body = parseInput(updatePersonBodySchema, req.body);
-    res.json(updatePerson(req.ctx, requireUser(req), id, body, deps.endHoldsOf));
+    res.json(updatePerson(req.ctx, requireUser(req), id, body));
   });
 
   return router;

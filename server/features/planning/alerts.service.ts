@@ -5,7 +5,7 @@ import type { Database, Executor } from '../../db/client';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
-import { moveAlert, raiseAlerts, statesAllowing, type AlertEvent } from '../../reorder-alerts/alert-state';
+import { moveAlert, raiseAlerts, statesAllowing, type AlertEvent } from './alert-state';
 import { activeAlertBinIds, findAlert, listAlerts, type AlertWithBin } from './alerts.repo';
 import { binBrief } from './bin-brief';
 import { reorderPlan, type PlannedOrder, type ReorderPlan } from './reorder-plan';

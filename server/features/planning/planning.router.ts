@@ -11,7 +11,7 @@ import {
   updateAssemblyBodySchema,
   updateBuildBodySchema,
 } from '@shared/schemas/builds';
-import { updateUser } from '../../accounts/users.repo';
+import { setPreferredUnit } from '../../accounts/users.repo';
 import { parseInput } from '../../lib/validate';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { createAssembly, deleteAssembly, getAssembly, listAssembliesFor, updateAssembly } from './assemblies.service';
@@ -82,7 +82,7 @@ export function preferencesRouter() {
   });
   router.patch('/preferences', (req, res) => {
     const body = parseInput(preferredUnitBodySchema, req.body);
-    const user = updateUser(req.ctx.db, requireUser(req).id, { preferredUnit: body.preferredUnit });
+    const user = setPreferredUnit(req.ctx.db, requireUser(req).id, body.preferredUnit);
     res.json({ preferredUnit: user?.preferredUnit ?? body.preferredUnit });
   });
   return router;

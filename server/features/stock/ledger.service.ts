@@ -12,7 +12,7 @@ import { assemblyOwnerId, findMovement, findPairedWith, findReversalOf, insertMo
 import { dollarsToE4, e4ToDollars, valueCents } from '@shared/stock/money';
 import { slipExists } from './slips.repo';
 import { withAssemblyNames, type NameAssemblies } from './assembly-names';
-import { receiptOnBin } from '../../reorder-alerts/alert-state';
+import { publish } from '../../events/domain-events';
 
 export function binOrThrow(db: Database, code: string): BinRow {
   const bin = findBinByCode(db, code);
@@ -144,7 +144,10 @@ export function returnUnused(ctx: ServiceContext, actor: UserRow, code: string, 
   return loadMovement(ctx, id);
 }
 
-/** The quartermaster books an order in; a new unit cost becomes the bin's cost from now on. */
+/**
+ * The quartermaster books an order in; a new unit cost becomes the bin's cost from now on. Publishes
+ * `stock.received` in the same transaction (planning's reorder alerts count it).
+ */
 export function receive(ctx: ServiceContext, actor: UserRow, code: string, body: ReceiveBody): Movement {
   const id = inTransaction(ctx, () => {
     const bin = binOrThrow(ctx.db, code);
@@ -155,7 +158,7 @@ export function receive(ctx: ServiceContext, actor: UserRow, code: string, body:
     const unitCostE4 = body.unitCost !== undefined ? dollarsToE4(body.unitCost) : bin.unitCostE4;
     if (unitCostE4 !== bin.unitCostE4) Object.assign(bin, updateBin(ctx.db, bin.id, { unitCostE4, updatedAt: at }));
     const row = post(ctx.db, bin, { kind: 'receive', quantity: body.quantity, actor, at, unitCostE4, note: body.note, slipId: body.slipId }, 'receive');
-    receiptOnBin(ctx.db, bin.id, { event: 'receive', at, quantity: body.quantity, movementId: row.id });
+    publish(ctx, { type: 'stock.received', binId: bin.id, quantity: body.quantity, movementId: row.id, at });
     return row.id;
   });
   return loadMovement(ctx, id);

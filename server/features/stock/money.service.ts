@@ -5,7 +5,7 @@ import { BIN_KINDS, type BinKind } from '@shared/stock/kinds';
 import { findUserById } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
 import type { Executor } from '../../db/client';
-import type { MovementRow, NewPaymentRefund, PaymentRefundRow } from '../../db/schema/stock';
+import type { MovementRow, NewPaymentRefund } from '../../db/schema/stock';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
@@ -159,8 +159,8 @@ export function tabBalanceCents(db: Executor, userId: number): number {
 }
 
 /** A payment the member made online comes off their tab like cash, recorded in their own name, in the caller's transaction. */
-export function recordOnlinePayment(db: Executor, member: UserRow, amountCents: number, at: Date, note: string): number {
-  return insertPayment(db, { userId: member.id, amountCents, at, note, recordedById: member.id, method: 'online' }).id;
+export function recordOnlinePayment(db: Executor, userId: number, amountCents: number, at: Date, note: string): number {
+  return insertPayment(db, { userId, amountCents, at, note, recordedById: userId, method: 'online' }).id;
 }
 
 function paymentListItem(r: PaymentRow): PaymentListItem {
@@ -191,14 +191,12 @@ export function tabPayment(db: Executor, id: number): PaymentListItem | undefine
 /**
  * Records money handed back on a payment, in the caller's transaction: the member's balance goes
  * up by it. Once per provider refund: when it is already recorded (the provider's webhook came
- * first), nothing is added, the person who made it is filled in, and `created` is false.
+ * first), nothing is added and the person who made it is filled in.
  */
-export function recordRefund(db: Executor, entry: NewPaymentRefund): { refund: PaymentRefundRow; created: boolean } {
-  const inserted = insertRefund(db, entry);
-  if (inserted) return { refund: inserted, created: true };
+export function recordRefund(db: Executor, entry: NewPaymentRefund): void {
+  if (insertRefund(db, entry)) return;
   const existing = refundByProviderId(db, entry.providerRefundId)!;
   if (entry.recordedById != null && existing.recordedById === null) claimRefund(db, existing.id, entry.recordedById, entry.note ?? '');
-  return { refund: refundByProviderId(db, entry.providerRefundId)!, created: false };
 }
 
 const noKinds = () => Object.fromEntries(BIN_KINDS.map((k) => [k, 0])) as Record<BinKind, number>;

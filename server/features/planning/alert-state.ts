@@ -1,12 +1,12 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import type { AlertState } from '@shared/schemas/forecast';
-import type { Executor } from '../db/client';
-import { binAlerts, type BinAlertRow } from '../db/schema/builds';
+import type { Executor } from '../../db/client';
+import { binAlerts, type BinAlertRow } from '../../db/schema/builds';
 
 /**
  * The one writer of a reorder alert's state. Planning raises, orders, closes and dismisses alerts;
- * stock's receipts count against them; both go through here, in the caller's transaction. It is
- * no feature of its own (like accounts/): the two features share it.
+ * stock's receipts count against them through the `stock.received` domain event (planning.reactions.ts);
+ * all go through here, in the caller's transaction.
  */
 
 export type NewAlertRow = typeof binAlerts.$inferInsert;

@@ -53,17 +53,30 @@ const ROUTERS_CALL_SERVICES = {
     ],
   },
 } satisfies Linter.Config;
+const NO_HTTP = [
+  { name: 'express', message: 'Services never see req or res: the router reads the request and hands over plain data.' },
+  { name: 'multer', message: 'Uploads are read by server/middleware/upload.ts; a service takes the UploadedFile it hands over.' },
+];
 const SERVICES_TAKE_PLAIN_DATA = {
   files: ['server/**/*.ts'],
   // The HTTP edge: the app, routers, middleware, the static client and lib's request helpers.
   ignores: ['server/app.ts', 'server/**/*.router.ts', 'server/middleware/**', 'server/lib/**', 'server/static/**'],
+  rules: { '@typescript-eslint/no-restricted-imports': ['error', { paths: NO_HTTP }] },
+} satisfies Linter.Config;
+/** Services hold the rules and leave the queries to their repositories (row types may still be imported). */
+const SERVICES_QUERY_THROUGH_REPOS = {
+  files: ['server/**/*.service.ts'],
   rules: {
     '@typescript-eslint/no-restricted-imports': [
       'error',
       {
-        paths: [
-          { name: 'express', message: 'Services never see req or res: the router reads the request and hands over plain data.' },
-          { name: 'multer', message: 'Uploads are read by server/middleware/upload.ts; a service takes the UploadedFile it hands over.' },
+        paths: NO_HTTP,
+        patterns: [
+          {
+            group: ['drizzle-orm', 'drizzle-orm/*', '**/db/schema', '**/db/schema/*'],
+            allowTypeImports: true,
+            message: "A service leaves queries to its feature's repository (*.repo.ts); import row types with `import type`.",
+          },
         ],
       },
     ],
@@ -114,6 +127,7 @@ export default defineConfig(
   ...featureBoundaries('server', (f) => [`../${f}/*`, `../../features/${f}/*`, `**/features/${f}/**`]),
   ROUTERS_CALL_SERVICES,
   SERVICES_TAKE_PLAIN_DATA,
+  SERVICES_QUERY_THROUGH_REPOS,
   {
     files: ['tests/**/*.{ts,tsx}'],
     rules: {

@@ -1,4 +1,4 @@
-import { and, asc, eq, inArray, isNull, lte, or } from 'drizzle-orm';
+import { and, asc, eq, inArray, isNull, lte, or, type SQL } from 'drizzle-orm';
 import type { Executor } from '../../db/client';
 import { holds, tools } from '../../db/schema/tools';
 import { users } from '../../db/schema/users';
@@ -16,47 +16,31 @@ export interface HoldWithPerson {
   email: string;
 }
 
-const withPerson = { hold: holds, name: users.name, email: users.email };
+/** Holds matching `where`, each with the person it is for. */
+const holdsWithPerson = (db: Executor, where: SQL | undefined) =>
+  db.select({ hold: holds, name: users.name, email: users.email }).from(holds).innerJoin(users, eq(users.id, holds.userId)).where(where);
 
 /** The first active person waiting for a tool whose hold has begun by `now`: queue order is who asked first. */
 export function firstWaitingHold(db: Executor, toolId: number, now: Date): HoldWithPerson | undefined {
-  return db
-    .select(withPerson)
-    .from(holds)
-    .innerJoin(users, eq(users.id, holds.userId))
-    .where(and(eq(holds.toolId, toolId), eq(holds.status, 'waiting'), isNull(users.deactivatedAt), or(isNull(holds.startsAt), lte(holds.startsAt, now))))
+  const begun = or(isNull(holds.startsAt), lte(holds.startsAt, now));
+  return holdsWithPerson(db, and(eq(holds.toolId, toolId), eq(holds.status, 'waiting'), isNull(users.deactivatedAt), begun))
     .orderBy(asc(holds.createdAt), asc(holds.id))
     .get();
 }
 
 /** A tool's holds in the given states, with the person each is for. */
 export function holdsOnTool(db: Executor, toolId: number, statuses: readonly HoldStatus[]): HoldWithPerson[] {
-  return db
-    .select(withPerson)
-    .from(holds)
-    .innerJoin(users, eq(users.id, holds.userId))
-    .where(and(eq(holds.toolId, toolId), inArray(holds.status, [...statuses])))
-    .all();
+  return holdsWithPerson(db, and(eq(holds.toolId, toolId), inArray(holds.status, [...statuses]))).all();
 }
 
 /** One person's waiting and offered holds, on every tool. */
 export function activeHoldsOfPerson(db: Executor, userId: number): HoldWithPerson[] {
-  return db
-    .select(withPerson)
-    .from(holds)
-    .innerJoin(users, eq(users.id, holds.userId))
-    .where(and(eq(holds.userId, userId), inArray(holds.status, [...ACTIVE_HOLD_STATUSES])))
-    .all();
+  return holdsWithPerson(db, and(eq(holds.userId, userId), inArray(holds.status, [...ACTIVE_HOLD_STATUSES]))).all();
 }
 
 /** Offers whose time to collect ran out by `now`. */
 export function lapsedOffers(db: Executor, now: Date): HoldWithPerson[] {
-  return db
-    .select(withPerson)
-    .from(holds)
-    .innerJoin(users, eq(users.id, holds.userId))
-    .where(and(eq(holds.status, 'offered'), lte(holds.offerExpiresAt, now)))
-    .all();
+  return holdsWithPerson(db, and(eq(holds.status, 'offered'), lte(holds.offerExpiresAt, now))).all();
 }
 
 /** Tools on the shelf with someone whose hold from a later day has begun by `now`. */

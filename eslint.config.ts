@@ -32,6 +32,57 @@ const CLIENT_ONLY = { group: ['**/server/**', '../server/*', '../../server/*'], 
 const SERVER_ONLY = { group: ['@/*', '**/src/**', 'react', 'react-dom', 'react-router'], message: 'server/ never imports the client; share code through shared/.' };
 const sideRules = { src: [CLIENT_ONLY], server: [SERVER_ONLY] };
 
+/**
+ * Routers call services only, and services never see the request: plain data in, plain data out.
+ * These use the typescript-eslint copy of the rule, so they add to the import rules above instead
+ * of replacing them (a later block's options for the same rule would).
+ */
+const ROUTERS_CALL_SERVICES = {
+  files: ['server/**/*.router.ts'],
+  rules: {
+    '@typescript-eslint/no-restricted-imports': [
+      'error',
+      {
+        patterns: [
+          {
+            group: ['**/*.repo', '**/db/schema', '**/db/schema/*'],
+            message: "A router calls its feature's services only; give the query or the write a service function.",
+          },
+        ],
+      },
+    ],
+  },
+} satisfies Linter.Config;
+const NO_HTTP = [
+  { name: 'express', message: 'Services never see req or res: the router reads the request and hands over plain data.' },
+  { name: 'multer', message: 'Uploads are read by server/middleware/upload.ts; a service takes the UploadedFile it hands over.' },
+];
+const SERVICES_TAKE_PLAIN_DATA = {
+  files: ['server/**/*.ts'],
+  // The HTTP edge: the app, routers, middleware, the static client and lib's request helpers.
+  ignores: ['server/app.ts', 'server/**/*.router.ts', 'server/middleware/**', 'server/lib/**', 'server/static/**'],
+  rules: { '@typescript-eslint/no-restricted-imports': ['error', { paths: NO_HTTP }] },
+} satisfies Linter.Config;
+/** Services hold the rules and leave the queries to their repositories (row types may still be imported). */
+const SERVICES_QUERY_THROUGH_REPOS = {
+  files: ['server/**/*.service.ts'],
+  rules: {
+    '@typescript-eslint/no-restricted-imports': [
+      'error',
+      {
+        paths: NO_HTTP,
+        patterns: [
+          {
+            group: ['drizzle-orm', 'drizzle-orm/*', '**/db/schema', '**/db/schema/*'],
+            allowTypeImports: true,
+            message: "A service leaves queries to its feature's repository (*.repo.ts); import row types with `import type`.",
+          },
+        ],
+      },
+    ],
+  },
+} satisfies Linter.Config;
+
 export default defineConfig(
   { ignores: ['dist/**', 'node_modules/**', 'drizzle/**', 'coverage/**'] },
   tseslint.configs.recommendedTypeChecked,
@@ -75,6 +126,9 @@ export default defineConfig(
   ...featureBoundaries('src', (f) => [`@/features/${f}`, `@/features/${f}/**`]),
   // A server feature may read another through that feature's one read-model file, `<other>.reads`, and nothing else of it.
   ...featureBoundaries('server', (f) => [`../${f}/*`, `../../features/${f}/*`, `**/features/${f}/**`, `!../${f}/${f}.reads`, `!**/features/${f}/${f}.reads`]),
+  ROUTERS_CALL_SERVICES,
+  SERVICES_TAKE_PLAIN_DATA,
+  SERVICES_QUERY_THROUGH_REPOS,
   {
     files: ['tests/**/*.{ts,tsx}'],
     rules: {

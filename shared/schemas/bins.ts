@@ -432,6 +432,11 @@ export const countResultSchema = movementSchema.extend({
 });
 export type CountResult = z.infer<typeof countResultSchema>;
 
+/** Packing slip upload limits, shared so the client can refuse a too-large file before sending it. */
+export const SLIP_MAX_BYTES = 10 * 1024 * 1024;
+/** The multipart form field that carries the packing slip. */
+export const SLIP_FIELD = 'slip';
+
 export const slipSchema = z.object({ id: z.number(), contentType: z.string(), filename: z.string(), size: z.number() });
 export type Slip = z.infer<typeof slipSchema>;
 

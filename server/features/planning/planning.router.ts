@@ -11,7 +11,7 @@ import {
   updateAssemblyBodySchema,
   updateBuildBodySchema,
 } from '@shared/schemas/builds';
-import { setPreferredUnit } from '../../accounts/users.repo';
+import { readPreferences, setPreferredUnit } from '../../accounts/preferences.service';
 import { parseInput } from '../../lib/validate';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { createAssembly, deleteAssembly, getAssembly, listAssembliesFor, updateAssembly } from './assemblies.service';
@@ -78,12 +78,11 @@ export function preferencesRouter() {
   const router = Router();
   router.use(requireRole('member'));
   router.get('/preferences', (req, res) => {
-    res.json({ preferredUnit: requireUser(req).preferredUnit });
+    res.json(readPreferences(requireUser(req)));
   });
   router.patch('/preferences', (req, res) => {
-    const body = parseInput(preferredUnitBodySchema, req.body);
-    const user = setPreferredUnit(req.ctx.db, requireUser(req).id, body.preferredUnit);
-    res.json({ preferredUnit: user?.preferredUnit ?? body.preferredUnit });
+    const { preferredUnit } = parseInput(preferredUnitBodySchema, req.body);
+    res.json(setPreferredUnit(req.ctx, requireUser(req), preferredUnit));
   });
   return router;
 }

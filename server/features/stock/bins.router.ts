@@ -19,6 +19,7 @@ import { chapterDaySpan, startOfDayNamed } from '@shared/time/chapter-time';
 import { z } from 'zod';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { PRIVATE_FILE_CACHE } from '../../middleware/cache-control';
+import { singleUpload } from '../../middleware/upload';
 import type { RunQueuedAction } from '../../lib/queued-action';
 import { parseInput } from '../../lib/validate';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
@@ -26,8 +27,9 @@ import { createBin, editBin, getBinForYou, getBinReorder, listBinPage, restockLi
 import { count, draw, ledgerFor, move, receive, returnUnused, reverse, writeOff } from './ledger.service';
 import type { NameAssemblies } from './assembly-names';
 import type { ReordersOf } from './bin-reorders';
-import { readSlip, receiveSlipUpload, storeSlip } from './slips.service';
+import { readSlip, SLIP_UPLOAD, storeSlip } from './slips.service';
 
+const slipUpload = singleUpload(SLIP_UPLOAD);
 
 /**
  * /api/bins: the bins, their ledger, and the movements members and the quartermaster make by scan.
@@ -53,8 +55,8 @@ export function binsRouter({ runQueuedAction, nameAssemblies, reordersOf }: { ru
     res.json({ data: restockList(req.ctx, reordersOf) });
   });
 
-  router.post('/slips', quartermaster, receiveSlipUpload, async (req, res) => {
-    res.status(201).json(await storeSlip(req.ctx, requireUser(req), req.file!));
+  router.post('/slips', quartermaster, slipUpload.receive, (req, res) => {
+    res.status(201).json(storeSlip(req.ctx, requireUser(req), slipUpload.fileOf(req)));
   });
 
   router.get('/slips/:id', quartermaster, (req, res) => {

@@ -1,17 +1,27 @@
-import { and, asc, eq, inArray, isNull, lte, or } from 'drizzle-orm';
 import { dayInWords, momentInWords } from '@shared/time/chapter-time';
 import type { ServiceContext } from '../../context';
-import { holds, tools } from '../../db/schema/tools';
-import { users, type UserRow } from '../../db/schema/users';
+import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { holdEndedMail, holdOfferedMail } from '../../mail/messages';
 import { queueMail } from '../../mail/outbox';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { readCribSettings } from '../../settings/crib-settings';
+import {
+  ACTIVE_HOLD_STATUSES,
+  activeHoldsOfPerson,
+  closeHold,
+  firstWaitingHold,
+  holdsOnTool,
+  insertHold,
+  lapsedOffers,
+  markHoldOffered,
+  shelvedToolsWithHoldsBegun,
+  withdrawOffer,
+} from './holds.repo';
 import { refuseWithoutSignoff } from './signoffs.service';
 import { recordToolEvent } from './tool-events.repo';
 import { moveTool, type ToolStateEvent } from './tool-state';
-import { findActiveHold, findToolByCode, openLoanHolderId, queuePosition, type ToolRow } from './tools.repo';
+import { findActiveHold, findToolByCode, findToolById, openLoanHolderId, queuePosition, type ToolRow } from './tools.repo';
 
 import { HOUR_MS } from '@shared/time/durations';
 
@@ -19,8 +29,6 @@ export interface Offer {
   userId: number;
   name: string;
 }
-
-const ACTIVE = ['waiting', 'offered'] as const;
 
 const toolLink = (ctx: ServiceContext, code: string) => `${ctx.publicUrl.replace(/\/$/, '')}/tools/${code}`;
 const offerEnds = (ctx: ServiceContext, now: Date) => new Date(now.getTime() + readCribSettings(ctx.db).holdHours * HOUR_MS);
@@ -32,21 +40,15 @@ const offerEnds = (ctx: ServiceContext, now: Date) => new Date(now.getTime() + r
  * transaction, so the offer and its e-mail are kept together.
  */
 export function offerToNextInQueue(ctx: ServiceContext, tool: ToolRow, now: Date): Offer | undefined {
-  const next = ctx.db
-    .select({ id: holds.id, userId: holds.userId, name: users.name, email: users.email })
-    .from(holds)
-    .innerJoin(users, eq(users.id, holds.userId))
-    .where(and(eq(holds.toolId, tool.id), eq(holds.status, 'waiting'), isNull(users.deactivatedAt), or(isNull(holds.startsAt), lte(holds.startsAt, now))))
-    .orderBy(asc(holds.createdAt), asc(holds.id))
-    .get();
+  const next = firstWaitingHold(ctx.db, tool.id, now);
   if (!next) return undefined;
   const until = offerEnds(ctx, now);
-  ctx.db.update(holds).set({ status: 'offered', offeredAt: now, offerExpiresAt: until }).where(eq(holds.id, next.id)).run();
+  markHoldOffered(ctx.db, next.hold.id, now, until);
   const event: ToolStateEvent = tool.status === 'held' ? 'pass_offer' : 'offer';
   const zone = readChapterTimeZone(ctx.db);
   moveTool(ctx.db, tool, event, { actorId: null, at: now, detail: `Set aside for ${next.name} until ${momentInWords(until, zone)}` });
   queueMail(ctx.db, holdOfferedMail(next.email, next.name, tool, until, toolLink(ctx, tool.code), { zone, now }), now);
-  return { userId: next.userId, name: next.name };
+  return { userId: next.hold.userId, name: next.name };
 }
 
 export interface PlaceHoldOptions {
@@ -72,7 +74,7 @@ export function placeHold(ctx: ServiceContext, user: UserRow, code: string, opti
     if (findActiveHold(ctx.db, tool.id, user.id)) throw new HttpError(409, 'HOLD_EXISTS', `You are already in the queue for ${tool.code}.`);
     if (openLoanHolderId(ctx.db, tool.id) === user.id) throw new HttpError(409, 'YOU_HOLD_IT', `You have ${tool.code} on loan already.`);
     if (tool.status === 'available' && !from) return setAside(ctx, tool, user, now);
-    const hold = ctx.db.insert(holds).values({ toolId: tool.id, userId: user.id, createdAt: now, startsAt: from ?? null }).returning().get();
+    const hold = insertHold(ctx.db, { toolId: tool.id, userId: user.id, createdAt: now, startsAt: from ?? null });
     const when = from ? ` from ${dayInWords(from, readChapterTimeZone(ctx.db), now)}` : '';
     recordToolEvent(ctx.db, { toolId: tool.id, actorId: user.id, at: now, action: 'hold_placed', detail: `${user.name} joined the queue${when}` });
     return { id: hold.id, code: tool.code, status: hold.status, position: queuePosition(ctx.db, tool.id, hold.id), startsAt: from?.toISOString() ?? null };
@@ -81,7 +83,7 @@ export function placeHold(ctx: ServiceContext, user: UserRow, code: string, opti
 
 function setAside(ctx: ServiceContext, tool: ToolRow, user: UserRow, now: Date) {
   const until = offerEnds(ctx, now);
-  const hold = ctx.db.insert(holds).values({ toolId: tool.id, userId: user.id, createdAt: now, status: 'offered', offeredAt: now, offerExpiresAt: until }).returning().get();
+  const hold = insertHold(ctx.db, { toolId: tool.id, userId: user.id, createdAt: now, status: 'offered', offeredAt: now, offerExpiresAt: until });
   moveTool(ctx.db, tool, 'offer', { actorId: user.id, at: now, detail: `Set aside for ${user.name} until ${momentInWords(until, readChapterTimeZone(ctx.db))}` });
   return { id: hold.id, code: tool.code, status: hold.status, position: 1, startsAt: null };
 }
@@ -93,7 +95,7 @@ export function cancelHold(ctx: ServiceContext, user: UserRow, code: string): vo
     if (!tool) throw new HttpError(404, 'TOOL_NOT_FOUND', `No tool has the code ${code}.`);
     const hold = findActiveHold(ctx.db, tool.id, user.id);
     if (!hold) throw new HttpError(404, 'HOLD_NOT_FOUND', `You have no hold on ${tool.code}.`);
-    ctx.db.update(holds).set({ status: 'cancelled', closedAt: now }).where(eq(holds.id, hold.id)).run();
+    closeHold(ctx.db, hold.id, 'cancelled', now);
     recordToolEvent(ctx.db, { toolId: tool.id, actorId: user.id, at: now, action: 'hold_cancelled', detail: `${user.name} left the queue` });
     if (hold.status === 'offered') releaseHeldTool(ctx, tool.id, now);
   });
@@ -104,7 +106,7 @@ export function cancelHold(ctx: ServiceContext, user: UserRow, code: string): vo
  * next person waiting or back on the shelf. A tool no longer held is left as it is.
  */
 function releaseHeldTool(ctx: ServiceContext, toolId: number, now: Date): Offer | undefined {
-  const tool = ctx.db.select().from(tools).where(eq(tools.id, toolId)).get();
+  const tool = findToolById(ctx.db, toolId);
   if (!tool || tool.status !== 'held') return undefined;
   const offer = offerToNextInQueue(ctx, tool, now);
   if (!offer) moveTool(ctx.db, tool, 'offer_ended', { actorId: null, at: now, detail: 'Nobody else is waiting' });
@@ -115,14 +117,9 @@ function releaseHeldTool(ctx: ServiceContext, toolId: number, now: Date): Offer 
 export function expireHoldOffers(ctx: ServiceContext): number {
   const now = ctx.now();
   return ctx.db.transaction(() => {
-    const expired = ctx.db
-      .select({ hold: holds, name: users.name })
-      .from(holds)
-      .innerJoin(users, eq(users.id, holds.userId))
-      .where(and(eq(holds.status, 'offered'), lte(holds.offerExpiresAt, now)))
-      .all();
+    const expired = lapsedOffers(ctx.db, now);
     for (const { hold, name } of expired) {
-      ctx.db.update(holds).set({ status: 'expired', closedAt: now }).where(eq(holds.id, hold.id)).run();
+      closeHold(ctx.db, hold.id, 'expired', now);
       recordToolEvent(ctx.db, { toolId: hold.toolId, actorId: null, at: now, action: 'hold_expired', detail: `${name} did not collect it in time` });
       releaseHeldTool(ctx, hold.toolId, now);
     }
@@ -132,13 +129,7 @@ export function expireHoldOffers(ctx: ServiceContext): number {
 
 /** Tools on the shelf with someone whose hold from a later day has now begun: set aside for them. */
 function offerHoldsThatBegan(ctx: ServiceContext, now: Date): Offer[] {
-  const due = ctx.db
-    .selectDistinct({ tool: tools })
-    .from(holds)
-    .innerJoin(tools, eq(tools.id, holds.toolId))
-    .where(and(eq(holds.status, 'waiting'), lte(holds.startsAt, now), eq(tools.status, 'available')))
-    .all();
-  return due.flatMap(({ tool }) => offerToNextInQueue(ctx, tool, now) ?? []);
+  return shelvedToolsWithHoldsBegun(ctx.db, now).flatMap((tool) => offerToNextInQueue(ctx, tool, now) ?? []);
 }
 
 /**
@@ -150,19 +141,14 @@ function offerHoldsThatBegan(ctx: ServiceContext, now: Date): Offer[] {
 export function endHoldsForToolOutOfUse(ctx: ServiceContext, tool: ToolRow, event: ToolStateEvent, now: Date): void {
   const forGood = event === 'mark_lost' || event === 'retire';
   const why = event === 'mark_lost' ? 'has been marked lost' : event === 'retire' ? 'has been retired from the crib' : 'has been taken out of service';
-  const affected = ctx.db
-    .select({ hold: holds, name: users.name, email: users.email })
-    .from(holds)
-    .innerJoin(users, eq(users.id, holds.userId))
-    .where(and(eq(holds.toolId, tool.id), forGood ? inArray(holds.status, [...ACTIVE]) : eq(holds.status, 'offered')))
-    .all();
+  const affected = holdsOnTool(ctx.db, tool.id, forGood ? ACTIVE_HOLD_STATUSES : ['offered']);
   const link = toolLink(ctx, tool.code);
   for (const { hold, name, email } of affected) {
     if (forGood) {
-      ctx.db.update(holds).set({ status: 'cancelled', closedAt: now }).where(eq(holds.id, hold.id)).run();
+      closeHold(ctx.db, hold.id, 'cancelled', now);
       recordToolEvent(ctx.db, { toolId: tool.id, actorId: null, at: now, action: 'hold_cancelled', detail: `${name}'s hold ended: the tool ${why.replace('has been ', 'was ')}` });
     } else {
-      ctx.db.update(holds).set({ status: 'waiting', offeredAt: null, offerExpiresAt: null }).where(eq(holds.id, hold.id)).run();
+      withdrawOffer(ctx.db, hold.id);
       recordToolEvent(ctx.db, { toolId: tool.id, actorId: null, at: now, action: 'hold_offer_ended', detail: `${name} stays first in the queue` });
     }
     queueMail(ctx.db, holdEndedMail(email, name, tool, why, !forGood, link), now);
@@ -174,14 +160,8 @@ export function endHoldsForToolOutOfUse(ctx: ServiceContext, tool: ToolRow, even
  * set aside for them goes to the next person or back on the shelf. Runs in the caller's transaction.
  */
 export function endHoldsOfPerson(ctx: ServiceContext, userId: number, now: Date): void {
-  const active = ctx.db
-    .select({ hold: holds, name: users.name })
-    .from(holds)
-    .innerJoin(users, eq(users.id, holds.userId))
-    .where(and(eq(holds.userId, userId), inArray(holds.status, [...ACTIVE])))
-    .all();
-  for (const { hold, name } of active) {
-    ctx.db.update(holds).set({ status: 'cancelled', closedAt: now }).where(eq(holds.id, hold.id)).run();
+  for (const { hold, name } of activeHoldsOfPerson(ctx.db, userId)) {
+    closeHold(ctx.db, hold.id, 'cancelled', now);
     recordToolEvent(ctx.db, { toolId: hold.toolId, actorId: null, at: now, action: 'hold_cancelled', detail: `${name} no longer belongs to the chapter` });
     if (hold.status === 'offered') releaseHeldTool(ctx, hold.toolId, now);
   }

@@ -1,5 +1,5 @@
 import { and, eq, isNull, sql } from 'drizzle-orm';
-import type { Database } from '../../db/client';
+import type { Database, Executor } from '../../db/client';
 import { preparedPerDatabase } from '../../db/prepared';
 import { memberSignoffs, signoffs } from '../../db/schema/signoffs';
 import { holds, loans, missingAccessories, tools } from '../../db/schema/tools';
@@ -73,3 +73,11 @@ function prepareLoanStatements(db: Database) {
 
 export type LoanStatements = ReturnType<typeof prepareLoanStatements>;
 export const loanStatements: (db: Database) => LoanStatements = preparedPerDatabase(prepareLoanStatements);
+
+/** A tool marked lost while on loan: its open loan closes with the reason, so the record says who had it last. */
+export function closeLoanOfLostTool(db: Executor, toolId: number, at: Date, actorId: number, note: string): void {
+  db.update(loans)
+    .set({ returnedAt: at, returnedById: actorId, returnCondition: 'needs_attention', returnNote: `Marked lost: ${note}` })
+    .where(and(eq(loans.toolId, toolId), isNull(loans.returnedAt)))
+    .run();
+}

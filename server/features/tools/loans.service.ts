@@ -1,4 +1,4 @@
-import type { CheckoutBody, ReturnBody } from '@shared/schemas/tools';
+import type { CheckoutBody, Loan, ReturnBody } from '@shared/schemas/tools';
 import { hasRole } from '@shared/roles';
 import { dayInWords, loanDueAt } from '@shared/time/chapter-time';
 import { DAY_MS } from '@shared/time/durations';
@@ -8,6 +8,7 @@ import { HttpError } from '../../lib/http-error';
 import { isUniqueViolation } from '../../lib/sqlite-errors';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { offerToNextInQueue } from './holds.service';
+import { listLoans } from './loan-history.repo';
 import { loanStatements } from './loans.repo';
 import { accessoryList, recordMissingAccessories } from './missing-accessories';
 import { checkReturnPhoto } from './photos.service';
@@ -18,6 +19,11 @@ import { heldWords, loanWords } from '@shared/tools/tool-words';
 import type { ToolRow } from './tools.repo';
 
 const MAX_LOAN_MS = 365 * DAY_MS;
+
+/** Loans with their tool and holder (one person's, or everyone's), open ones soonest due first, then history. */
+export function listLoanHistory(ctx: ServiceContext, filter: { userId?: number; open?: boolean }): Loan[] {
+  return listLoans(ctx.db, filter);
+}
 
 export interface LoanResult {
   id: number;

@@ -4,8 +4,10 @@ import { toolCodeParams } from '@shared/schemas/tools';
 import { parseInput } from '../../lib/validate';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { PRIVATE_FILE_CACHE } from '../../middleware/cache-control';
-import { addPhoto, photoUploadTarget, readPhoto, removePhoto } from './photos.service';
-import { receivePhoto } from './receive-photo';
+import { singleUpload } from '../../middleware/upload';
+import { addPhoto, PHOTO_UPLOAD, photoUploadTarget, readPhoto, removePhoto } from './photos.service';
+
+const photoUpload = singleUpload(PHOTO_UPLOAD);
 
 /** POST /api/tools/:code/photos; mounted before the tools router, whose /:code/:command route is for quartermasters. */
 export function toolPhotosRouter() {
@@ -17,10 +19,10 @@ export function toolPhotosRouter() {
       photoUploadTarget(req.ctx, requireUser(req), parseInput(toolCodeParams, req.params, 'path').code);
       next();
     },
-    receivePhoto,
+    photoUpload.receive,
     async (req, res) => {
       const { code } = parseInput(toolCodeParams, req.params, 'path');
-      res.status(201).json(await addPhoto(req.ctx, requireUser(req), code, req.file!.buffer));
+      res.status(201).json(await addPhoto(req.ctx, requireUser(req), code, photoUpload.fileOf(req)));
     },
   );
   return router;

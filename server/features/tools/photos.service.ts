@@ -1,12 +1,30 @@
 import { hasRole } from '@shared/roles';
-import { photoThumbnailUrl, photoUrl, type Photo } from '@shared/schemas/photos';
+import { PHOTO_FIELD, PHOTO_MAX_BYTES, photoThumbnailUrl, photoUrl, type Photo } from '@shared/schemas/photos';
 import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
+import type { UploadedFile, UploadRules } from '../../lib/upload-rules';
 import { processPhoto } from './photo-image';
 import { deletePhotoRow, findPhotoBytes, findPhotoInfo, insertPhoto } from './photos.repo';
 import { recordToolEvent } from './tool-events.repo';
 import { findToolByCode, openLoanHolderId, type ToolRow } from './tools.repo';
+
+/**
+ * A photo is one file of at most 10 MB in the form field "photo". Its type is not checked on arrival:
+ * `processPhoto` decodes the bytes whole and says why it refuses them.
+ */
+export const PHOTO_UPLOAD: UploadRules = {
+  field: PHOTO_FIELD,
+  maxBytes: PHOTO_MAX_BYTES,
+  maxFields: 10,
+  tooLarge: { code: 'PHOTO_TOO_LARGE', message: 'That photo is larger than 10 MB. Take it again at the camera’s normal size.' },
+  words: {
+    choose: 'Choose or take a photo.',
+    notOneFile: `Send one photo in the form field named "${PHOTO_FIELD}".`,
+    unreadable: 'The photo did not arrive whole. Try again.',
+    missing: `Send the photo as multipart/form-data in the field named "${PHOTO_FIELD}".`,
+  },
+};
 
 /** A catalogue photo (quartermaster or lead) or a photo taken by the member who has the tool on loan. */
 export type PhotoPurpose = 'catalogue' | 'on_loan';
@@ -25,8 +43,8 @@ export function photoUploadTarget(ctx: ServiceContext, user: UserRow, code: stri
 
 const toPhoto = (id: number, width: number, height: number): Photo => ({ id, width, height, url: photoUrl(id), thumbnailUrl: photoThumbnailUrl(id) });
 
-export async function addPhoto(ctx: ServiceContext, user: UserRow, code: string, bytes: Buffer): Promise<Photo> {
-  const processed = await processPhoto(bytes);
+export async function addPhoto(ctx: ServiceContext, user: UserRow, code: string, file: UploadedFile): Promise<Photo> {
+  const processed = await processPhoto(file.buffer);
   const now = ctx.now();
   return ctx.db.transaction(() => {
     const { tool, purpose } = photoUploadTarget(ctx, user, code);

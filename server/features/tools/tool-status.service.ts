@@ -1,12 +1,11 @@
-import { and, eq, isNull } from 'drizzle-orm';
 import type { ServiceContext } from '../../context';
-import { loans, tools } from '../../db/schema/tools';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { endHoldsForToolOutOfUse, offerToNextInQueue } from './holds.service';
+import { closeLoanOfLostTool } from './loans.repo';
 import { recordToolEvent } from './tool-events.repo';
 import { moveTool, refusalOf, type ToolStateEvent } from './tool-state';
-import { findToolByCode } from './tools.repo';
+import { findToolByCode, updateTool } from './tools.repo';
 
 export type StatusCommand = 'out_of_service' | 'back_in_service' | 'lost' | 'found' | 'retire';
 
@@ -34,17 +33,11 @@ export function changeToolStatus(ctx: ServiceContext, actor: UserRow, code: stri
     if (!tool) throw new HttpError(404, 'TOOL_NOT_FOUND', `No tool has the code ${code}.`);
     const refusal = refusalOf(tool, event);
     if (refusal) throw new HttpError(409, 'WRONG_STATE', refusal);
-    if (event === 'mark_lost' && tool.status === 'on_loan') {
-      ctx.db
-        .update(loans)
-        .set({ returnedAt: now, returnedById: actor.id, returnCondition: 'needs_attention', returnNote: `Marked lost: ${note}` })
-        .where(and(eq(loans.toolId, tool.id), isNull(loans.returnedAt)))
-        .run();
-    }
+    if (event === 'mark_lost' && tool.status === 'on_loan') closeLoanOfLostTool(ctx.db, tool.id, now, actor.id, note);
     if (event === 'take_out_of_service' || event === 'mark_lost' || event === 'retire') endHoldsForToolOutOfUse(ctx, tool, event, now);
     const moved = moveTool(ctx.db, tool, event, { actorId: actor.id, at: now, detail: note });
     if (serviced) {
-      ctx.db.update(tools).set({ lastServiceAt: now }).where(eq(tools.id, tool.id)).run();
+      updateTool(ctx.db, tool.id, { lastServiceAt: now });
       recordToolEvent(ctx.db, { toolId: tool.id, actorId: actor.id, at: now, action: 'serviced', detail: note });
     }
     const offer = moved.status === 'available' ? offerToNextInQueue(ctx, { ...tool, status: moved.status }, now) : undefined;

@@ -6,6 +6,7 @@ import { signoffs } from '../../db/schema/signoffs';
 import { holds, loans, photos, tools } from '../../db/schema/tools';
 import { users } from '../../db/schema/users';
 import type { MissingAccessory } from '@shared/schemas/tools';
+import { ACTIVE_HOLD_STATUSES } from './holds.repo';
 import { loanStatements } from './loans.repo';
 import { openMissingAccessories } from './missing-accessories';
 
@@ -16,6 +17,10 @@ export type NewToolRow = Omit<typeof tools.$inferInsert, 'status' | 'statusNote'
 /** Every scan starts here, so the lookup is the checkout's own prepared statement. */
 export function findToolByCode(db: Database, code: string): ToolRow | undefined {
   return loanStatements(db).toolByCode.get({ code });
+}
+
+export function findToolById(db: Executor, id: number): ToolRow | undefined {
+  return db.select().from(tools).where(eq(tools.id, id)).get();
 }
 
 /** A new tool starts on the shelf (the column's default). */
@@ -76,7 +81,6 @@ interface ExtrasRows {
   photos: { id: number; toolId: number }[];
 }
 
-const ACTIVE_HOLD = ['waiting', 'offered'] as const;
 const p = sql.placeholder;
 
 /** The same four queries for one tool (a scan opens one), prepared once per database. */
@@ -91,19 +95,19 @@ const oneToolStatements = preparedPerDatabase((db) => ({
     .select({ toolId: holds.toolId, status: holds.status, userId: holds.userId, name: users.name, offerExpiresAt: holds.offerExpiresAt })
     .from(holds)
     .innerJoin(users, eq(users.id, holds.userId))
-    .where(and(eq(holds.toolId, p('toolId')), inArray(holds.status, [...ACTIVE_HOLD])))
+    .where(and(eq(holds.toolId, p('toolId')), inArray(holds.status, [...ACTIVE_HOLD_STATUSES])))
     .prepare(),
   signoffs: db.select({ id: signoffs.id, name: signoffs.name }).from(signoffs).where(eq(signoffs.id, p('signoffId'))).prepare(),
   photos: db.select({ id: photos.id, toolId: photos.toolId }).from(photos).where(eq(photos.toolId, p('toolId'))).orderBy(asc(photos.id)).prepare(),
   activeHold: db
     .select()
     .from(holds)
-    .where(and(eq(holds.toolId, p('toolId')), eq(holds.userId, p('userId')), inArray(holds.status, [...ACTIVE_HOLD])))
+    .where(and(eq(holds.toolId, p('toolId')), eq(holds.userId, p('userId')), inArray(holds.status, [...ACTIVE_HOLD_STATUSES])))
     .prepare(),
   queuePosition: db
     .select({ n: count() })
     .from(holds)
-    .where(and(eq(holds.toolId, p('toolId')), inArray(holds.status, [...ACTIVE_HOLD]), lte(holds.id, p('holdId'))))
+    .where(and(eq(holds.toolId, p('toolId')), inArray(holds.status, [...ACTIVE_HOLD_STATUSES]), lte(holds.id, p('holdId'))))
     .prepare(),
 }));
 
@@ -132,7 +136,7 @@ function pageRows(db: Database, rows: ToolRow[], withPhotos: boolean): ExtrasRow
       .select({ toolId: holds.toolId, status: holds.status, userId: holds.userId, name: users.name, offerExpiresAt: holds.offerExpiresAt })
       .from(holds)
       .innerJoin(users, eq(users.id, holds.userId))
-      .where(and(inArray(holds.toolId, ids), inArray(holds.status, [...ACTIVE_HOLD])))
+      .where(and(inArray(holds.toolId, ids), inArray(holds.status, [...ACTIVE_HOLD_STATUSES])))
       .all(),
     signoffs: signoffIds.length > 0 ? db.select({ id: signoffs.id, name: signoffs.name }).from(signoffs).where(inArray(signoffs.id, signoffIds)).all() : [],
     photos: withPhotos ? db.select({ id: photos.id, toolId: photos.toolId }).from(photos).where(inArray(photos.toolId, ids)).orderBy(asc(photos.id)).all() : [],

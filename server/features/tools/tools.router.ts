@@ -17,9 +17,8 @@ import { parseInput } from '../../lib/validate';
 import { cancelHold, placeHold } from './holds.service';
 import { checkOut, returnTool } from './loans.service';
 import { resolveMissingAccessory } from './missing-accessories';
-import { listToolEvents } from './tool-events.repo';
 import { changeToolStatus, type StatusCommand } from './tool-status.service';
-import { createTool, editTool, getToolForYou, getToolRow, listToolPage } from './tools.service';
+import { createTool, editTool, getToolForYou, listToolPage, toolHistory } from './tools.service';
 
 const STATUS_PATHS: Record<string, StatusCommand> = {
   'out-of-service': 'out_of_service',
@@ -55,7 +54,7 @@ export function toolsRouter({ runQueuedAction }: { runQueuedAction: RunQueuedAct
   });
 
   router.get('/:code/events', (req, res) => {
-    res.json({ data: listToolEvents(req.ctx.db, getToolRow(req.ctx, code(req.params)).id) });
+    res.json({ data: toolHistory(req.ctx, code(req.params)) });
   });
 
   router.post('/:code/checkout', (req, res) =>

@@ -1,6 +1,6 @@
 import { hasRole } from '@shared/roles';
 import { loanDueAt } from '@shared/time/chapter-time';
-import type { CreateToolInput, Tool, ToolAction, ToolForYou, ToolList, ToolListQuery, UpdateToolBody } from '@shared/schemas/tools';
+import type { CreateToolInput, Tool, ToolAction, ToolEvent, ToolForYou, ToolList, ToolListQuery, UpdateToolBody } from '@shared/schemas/tools';
 import { createToolBodySchema } from '@shared/schemas/tools';
 import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
@@ -8,7 +8,7 @@ import { HttpError } from '../../lib/http-error';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { loanStatements } from './loans.repo';
 import { signOffAdvice } from './signoffs.service';
-import { recordToolEvent } from './tool-events.repo';
+import { listToolEvents, recordToolEvent } from './tool-events.repo';
 import { toTool } from './tool-dto';
 import { heldWords, loanWords } from '@shared/tools/tool-words';
 import {
@@ -35,6 +35,11 @@ export function getToolRow(ctx: ServiceContext, code: string): ToolRow {
   const row = findToolByCode(ctx.db, code);
   if (!row) throw new HttpError(404, 'TOOL_NOT_FOUND', `No tool has the code ${code}. Check the label, or type the code.`);
   return row;
+}
+
+/** A tool's audit trail, newest first. */
+export function toolHistory(ctx: ServiceContext, code: string): ToolEvent[] {
+  return listToolEvents(ctx.db, getToolRow(ctx, code).id);
 }
 
 export function getTool(ctx: ServiceContext, code: string): Tool {

@@ -1,16 +1,14 @@
 import { useMutation } from '@tanstack/react-query';
-import type { Slip } from '@shared/schemas/bins';
+import { SLIP_FIELD, SLIP_MAX_BYTES, type Slip } from '@shared/schemas/bins';
 import { api, ApiError } from '@/lib/api-client';
 
-/** The server's limit: refuse a bigger file here, before it crawls over the hangar Wi-Fi. */
-export const SLIP_MAX_BYTES = 10 * 1024 * 1024;
-
+/** Refuses a file over the server's limit here, before it crawls over the hangar Wi-Fi. */
 export function uploadSlip(file: File): Promise<Slip> {
   if (file.size > SLIP_MAX_BYTES) {
     return Promise.reject(new ApiError(413, 'SLIP_TOO_LARGE', 'That packing slip is larger than 10 MB. Scan or photograph it at a lower resolution.'));
   }
   const form = new FormData();
-  form.append('slip', file, file.name || 'packing-slip');
+  form.append(SLIP_FIELD, file, file.name || 'packing-slip');
   return api.postForm<Slip>('/api/bins/slips', form);
 }
 

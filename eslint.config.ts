@@ -4,8 +4,11 @@ import { defineConfig } from 'eslint/config';
 import tseslint from 'typescript-eslint';
 import type { Linter } from 'eslint';
 
-/** One block per feature folder: a feature may not import another feature (compose them in routes). */
-function featureBoundaries(root: 'src' | 'server', importPrefix: (feature: string) => string[]) {
+/**
+ * One block per feature folder: a feature may not import another feature (compose them in routes).
+ * On the server a feature may import exactly one file of another: its read models, `<other>/<other>.reads`.
+ */
+function featureBoundaries(root: 'src' | 'server', importPrefix: (feature: string) => string[], message: string) {
   const features = readdirSync(`${root}/features`, { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name);
   return features.map((feature): Linter.Config => {
     const others = features.filter((f) => f !== feature);
@@ -18,7 +21,7 @@ function featureBoundaries(root: 'src' | 'server', importPrefix: (feature: strin
             patterns: [
               ...sideRules[root],
               ...(others.length > 0
-                ? [{ group: others.flatMap(importPrefix), message: 'Features do not import each other; compose them in a route or move the shared part down.' }]
+                ? [{ group: others.flatMap(importPrefix), message }]
                 : []),
             ],
           },
@@ -123,9 +126,13 @@ export default defineConfig(
       ],
     },
   },
-  ...featureBoundaries('src', (f) => [`@/features/${f}`, `@/features/${f}/**`]),
-  // A server feature may read another through that feature's one read-model file, `<other>.reads`, and nothing else of it.
-  ...featureBoundaries('server', (f) => [`../${f}/*`, `../../features/${f}/*`, `**/features/${f}/**`, `!../${f}/${f}.reads`, `!**/features/${f}/${f}.reads`]),
+  ...featureBoundaries('src', (f) => [`@/features/${f}`, `@/features/${f}/**`], 'Features do not import each other; compose them in a route or move the shared part down.'),
+  ...featureBoundaries(
+    'server',
+    // Later `!` patterns let through the one file a feature offers others: its read models.
+    (f) => [`../${f}/*`, `../../features/${f}/*`, `**/features/${f}/**`, `!../${f}/${f}.reads`, `!../../features/${f}/${f}.reads`, `!**/features/${f}/${f}.reads`],
+    "Features do not import each other, except another feature's read models (`<other>/<other>.reads`); for a write, publish a domain event. Compose the rest in a route or move the shared part down.",
+  ),
   ROUTERS_CALL_SERVICES,
   SERVICES_TAKE_PLAIN_DATA,
   SERVICES_QUERY_THROUGH_REPOS,

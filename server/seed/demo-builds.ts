@@ -1,14 +1,13 @@
-import { eq, max } from 'drizzle-orm';
 import { createAssemblyBodySchema, createBuildBodySchema, type AssemblyStatus, type CreateAssemblyBody } from '@shared/schemas/builds';
 import { findUserByEmail } from '../accounts/users.repo';
 import type { ServiceContext } from '../context';
 import type { Database } from '../db/client';
-import { bins, stockMovements } from '../db/schema/stock';
 import { findAssembly } from '../features/planning/assemblies.repo';
 import { createAssembly } from '../features/planning/assemblies.service';
 import { assemblyBill } from '../features/planning/assembly-estimate.service';
 import { createBuild } from '../features/planning/builds.service';
 import { findBinByCode } from '../features/stock/bins.repo';
+import { binCodeNamed, lastEntryAt } from '../features/stock/stock.reads';
 import { draw } from '../features/stock/ledger.service';
 import { addChapterDays, chapterDay, startOfChapterDay } from '@shared/time/chapter-time';
 import { DAY_MS, HOUR_MS, MINUTE_MS } from '@shared/time/durations';
@@ -149,8 +148,6 @@ export function seedDemoBuilds(db: Database, now: Date = new Date()): DemoBuilds
   const zone = readChapterTimeZone(db);
   const today = startOfChapterDay(now, zone);
   const day = (offset: number) => chapterDay(addChapterDays(today, offset, zone), zone);
-  const binCode = (name: string) => db.select({ code: bins.code }).from(bins).where(eq(bins.name, name)).get()?.code;
-  const lastEntryAt = (binId: number) => db.select({ at: max(stockMovements.at) }).from(stockMovements).where(eq(stockMovements.binId, binId)).get()?.at?.getTime() ?? 0;
   const summary: DemoBuildsSummary = { builds: 0, assemblies: 0, draws: 0 };
 
   db.$client.transaction(() => {
@@ -161,7 +158,7 @@ export function seedDemoBuilds(db: Database, now: Date = new Date()): DemoBuilds
       for (const a of b.assemblies) {
         clock = new Date(now.getTime() - 60 * DAY_MS);
         const extraItems = (a.extras ?? []).flatMap(([name, quantity]) => {
-          const code = binCode(name);
+          const code = binCodeNamed(db, name);
           return code ? [{ binCode: code, quantity }] : [];
         });
         const body: CreateAssemblyBody = { name: a.name, status: a.status, plannedStart: day(a.days[0]), plannedFinish: day(a.days[1]), unit: 'in', lines: a.lines, extraItems, notes: a.notes ?? '' };
@@ -178,7 +175,7 @@ export function seedDemoBuilds(db: Database, now: Date = new Date()): DemoBuilds
           // Two sessions: the first on the day work began, or just after the bin's last entry.
           for (const [i, part] of [Math.ceil(quantity / 2), Math.floor(quantity / 2)].entries()) {
             if (part <= 0) continue;
-            clock = new Date(Math.min(now.getTime(), Math.max(begun + i * 2 * DAY_MS, lastEntryAt(bin.id) + MINUTE_MS)));
+            clock = new Date(Math.min(now.getTime(), Math.max(begun + i * 2 * DAY_MS, (lastEntryAt(db, bin.id)?.getTime() ?? 0) + MINUTE_MS)));
             draw(ctx, owner, bin.code, { quantity: part, assemblyId: assembly.id, note: a.name });
             summary.draws++;
           }

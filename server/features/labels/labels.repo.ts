@@ -1,17 +1,7 @@
-import { inArray } from 'drizzle-orm';
 import { binDesignation } from '@shared/stock/fasteners';
 import { binLabelCaution } from '@shared/stock/rivet-cautions';
 import type { Executor } from '../../db/client';
-import { bins } from '../../db/schema/stock';
-import { tools } from '../../db/schema/tools';
-
-/** Code and name of the tools with these codes; codes that match no tool are simply absent. */
-export function findToolNames(db: Executor, codes: readonly string[]): Map<string, string> {
-  const unique = [...new Set(codes)];
-  if (unique.length === 0) return new Map();
-  const rows = db.select({ code: tools.code, name: tools.name }).from(tools).where(inArray(tools.code, unique)).all();
-  return new Map(rows.map((r) => [r.code, r.name]));
-}
+import { binsWithCodes } from '../stock/stock.reads';
 
 /** What a label prints under its code: a title and, for some bins, a short caution. */
 export interface LabelText {
@@ -25,29 +15,10 @@ export interface LabelText {
  * ("Not for structure" on general-purpose blind rivets). Codes that match no bin are absent.
  */
 export function findBinLabels(db: Executor, codes: readonly string[]): Map<string, LabelText> {
-  const unique = [...new Set(codes)];
-  if (unique.length === 0) return new Map();
-  const rows = db
-    .select({
-      code: bins.code,
-      name: bins.name,
-      kind: bins.kind,
-      head: bins.head,
-      material: bins.material,
-      stemMaterial: bins.stemMaterial,
-      diameter32: bins.diameter32,
-      grip16: bins.grip16,
-      gripMin: bins.gripMin,
-      gripMax: bins.gripMax,
-      length16: bins.length16,
-    })
-    .from(bins)
-    .where(inArray(bins.code, unique))
-    .all();
   return new Map(
-    rows.map((r) => {
-      const caution = binLabelCaution(r.kind);
-      return [r.code, caution ? { title: binDesignation(r), caution } : { title: binDesignation(r) }];
+    [...binsWithCodes(db, codes).values()].map((bin) => {
+      const caution = binLabelCaution(bin.kind);
+      return [bin.code, caution ? { title: binDesignation(bin), caution } : { title: binDesignation(bin) }];
     }),
   );
 }

@@ -5,7 +5,8 @@ import { findSheetLayout, labelsPerPage, SHEET_LAYOUTS, type SheetLayout } from 
 import type { ServiceContext } from '../../context';
 import { HttpError } from '../../lib/http-error';
 import { renderLabelSheet, type LabelItem } from './label-sheet.renderer';
-import { findBinLabels, findToolNames, type LabelText } from './labels.repo';
+import { toolNamesByCode } from '../tools/tools.reads';
+import { findBinLabels, type LabelText } from './labels.repo';
 
 export function listLayouts(): readonly SheetLayout[] {
   return SHEET_LAYOUTS;
@@ -19,7 +20,7 @@ export interface LabelSheetFile {
 /** A PDF of tool and bin labels, one per code in the order given (a code may repeat for a second label). */
 export async function buildLabelSheet(ctx: ServiceContext, input: LabelSheetInput): Promise<LabelSheetFile> {
   const layout = layoutFor(input.layoutId, input.skip);
-  const toolLabels = [...findToolNames(ctx.db, input.codes.filter(isToolCode))].map(([code, name]): [string, LabelText] => [code, { title: name }]);
+  const toolLabels = [...toolNamesByCode(ctx.db, input.codes.filter(isToolCode))].map(([code, name]): [string, LabelText] => [code, { title: name }]);
   const titles = new Map([...toolLabels, ...findBinLabels(ctx.db, input.codes.filter(isBinCode))]);
   const unknown = [...new Set(input.codes.filter((code) => !titles.has(code)))];
   if (unknown.length > 0) {

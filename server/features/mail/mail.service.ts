@@ -1,12 +1,11 @@
 import type { MailMessage } from '@shared/schemas/mail';
 import { maskResetLinks } from '../../accounts/link-tokens';
 import type { ServiceContext } from '../../context';
-import type { OutboxMailRow } from '../../db/schema/mail';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { linksIn } from '../../mail/links';
 import { retryFailedMail } from '../../mail/outbox';
-import { findOutboxMail, listCaughtMailTo, listOutboxMail } from './mail.repo';
+import { findOutboxMail, listCaughtMailTo, listOutboxMail, type OutboxMailRow } from '../../mail/mail.repo';
 
 const SHOWN = 200;
 

@@ -2,7 +2,8 @@ import type { ActualWaste } from '@shared/schemas/forecast';
 import type { ServiceContext } from '../../context';
 import { readPlanningSettings } from '../../settings/planning-settings';
 import { assemblyBinNeeds, binIndex } from './assembly-needs';
-import { allBins, assembliesIn, drawnForAssemblies } from './forecast.repo';
+import { allBins, drawnForAssemblies } from '../stock/stock.reads';
+import { assembliesIn } from './forecast.repo';
 
 type Tally = { estimated: number; drawn: number };
 
@@ -17,10 +18,11 @@ const wastePercent = ({ estimated, drawn }: Tally) => (estimated > 0 ? Math.roun
 export function actualWaste(ctx: ServiceContext): ActualWaste {
   const settings = readPlanningSettings(ctx.db);
   const index = binIndex(allBins(ctx.db));
-  const drawn = drawnForAssemblies(ctx.db, ['done']);
+  const done = assembliesIn(ctx.db, ['done']);
+  const drawn = drawnForAssemblies(ctx.db, done.map((a) => a.id));
   const chapter: Tally = { estimated: 0, drawn: 0 };
   const members = new Map<number, Tally & { name: string }>();
-  for (const a of assembliesIn(ctx.db, ['done'])) {
+  for (const a of done) {
     const needs = assemblyBinNeeds(a, settings, index).filter((n) => n.rivet);
     if (needs.length === 0) continue;
     const estimated = needs.reduce((sum, n) => sum + n.estimated, 0);

@@ -1,10 +1,10 @@
-import { and, desc, eq, gte, inArray, min } from 'drizzle-orm';
+import { and, desc, eq, gte, inArray, min, type SQL } from 'drizzle-orm';
 import type { AlertState } from '@shared/schemas/forecast';
 import type { Executor } from '../../db/client';
 import { activePeopleWithRole } from '../../jobs/job-runs.repo';
 import { binAlerts, type BinAlertRow } from '../../db/schema/builds';
-import { bins, type BinRow } from '../../db/schema/stock';
 import { users } from '../../db/schema/users';
+import { binsWithIds, type BinRow } from '../stock/stock.reads';
 
 export interface AlertWithBin {
   alert: BinAlertRow;
@@ -14,24 +14,29 @@ export interface AlertWithBin {
 
 const ACTIVE: AlertState[] = ['open', 'ordered'];
 
-function withBin(db: Executor) {
-  return db
-    .select({ alert: binAlerts, bin: bins, orderedByName: users.name })
+/** The alerts that match, newest first, each with its bin (read from stock in one query) and who ordered it. */
+function alertsWithBins(db: Executor, where: SQL | undefined): AlertWithBin[] {
+  const rows = db
+    .select({ alert: binAlerts, orderedByName: users.name })
     .from(binAlerts)
-    .innerJoin(bins, eq(bins.id, binAlerts.binId))
-    .leftJoin(users, eq(users.id, binAlerts.orderedById));
+    .leftJoin(users, eq(users.id, binAlerts.orderedById))
+    .where(where)
+    .orderBy(desc(binAlerts.raisedAt), desc(binAlerts.id))
+    .all();
+  const bins = binsWithIds(db, rows.map((r) => r.alert.binId));
+  return rows.flatMap(({ alert, orderedByName }) => {
+    const bin = bins.get(alert.binId);
+    return bin ? [{ alert, bin, orderedByName }] : [];
+  });
 }
 
 /** Alerts in these states (all when null), the newest first. */
 export function listAlerts(db: Executor, states: AlertState[] | null): AlertWithBin[] {
-  return withBin(db)
-    .where(states ? inArray(binAlerts.state, states) : undefined)
-    .orderBy(desc(binAlerts.raisedAt), desc(binAlerts.id))
-    .all();
+  return alertsWithBins(db, states ? inArray(binAlerts.state, states) : undefined);
 }
 
 export function findAlert(db: Executor, id: number): AlertWithBin | undefined {
-  return withBin(db).where(eq(binAlerts.id, id)).get();
+  return alertsWithBins(db, eq(binAlerts.id, id))[0];
 }
 
 /** The active (open or ordered) alert of each bin that has one: bin id → alert id. */

@@ -1,8 +1,7 @@
-import { and, asc, count, eq, inArray, type SQL } from 'drizzle-orm';
+import { and, asc, eq, inArray, type SQL } from 'drizzle-orm';
 import type { AssemblyStatus } from '@shared/schemas/builds';
 import type { Executor } from '../../db/client';
 import { assemblies, builds, type AssemblyRow, type BuildRow } from '../../db/schema/builds';
-import { stockMovements } from '../../db/schema/stock';
 import { users } from '../../db/schema/users';
 import { undatedLast } from './builds.repo';
 
@@ -45,11 +44,6 @@ export function listAssemblies(db: Executor, f: { ownerId?: number; status?: Ass
     .orderBy(asc(assemblies.plannedStart), asc(assemblies.id))
     .all()
     .sort((a, b) => undatedLast(a.assembly, b.assembly));
-}
-
-/** Ledger entries that name the assembly (draws, returns and their reversals). */
-export function countEntriesNaming(db: Executor, assemblyId: number): number {
-  return db.select({ n: count() }).from(stockMovements).where(eq(stockMovements.assemblyId, assemblyId)).get()?.n ?? 0;
 }
 
 /** The assemblies with these ids and their builds' names (ids that name nothing are left out). */

@@ -3,7 +3,8 @@ import type { Assembly, AssemblyStatus, CreateAssemblyInput, UpdateAssemblyBody 
 import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
-import { countEntriesNaming, deleteAssemblyRow, findAssembly, insertAssembly, listAssemblies, updateAssemblyRow, type AssemblyInBuild, type NewAssemblyRow } from './assemblies.repo';
+import { countEntriesNamingAssembly } from '../stock/stock.reads';
+import { deleteAssemblyRow, findAssembly, insertAssembly, listAssemblies, updateAssemblyRow, type AssemblyInBuild, type NewAssemblyRow } from './assemblies.repo';
 import { buildToChange, mayChange, mayRead, refuseChange, refuseRead } from './builds.service';
 import { dateToDay, dayToDate, toAssemblyDto } from './planning-dto';
 
@@ -70,7 +71,7 @@ export function updateAssembly(ctx: ServiceContext, user: UserRow, id: number, b
 /** An assembly that stock was drawn for stays: the ledger names it. */
 export function deleteAssembly(ctx: ServiceContext, user: UserRow, id: number): void {
   const { assembly } = assemblyToChange(ctx, user, id);
-  const entries = countEntriesNaming(ctx.db, id);
+  const entries = countEntriesNamingAssembly(ctx.db, id);
   if (entries > 0) {
     throw new HttpError(
       409,

@@ -1,6 +1,6 @@
 import { estimate, isEstimateErrors } from '@shared/estimate/estimate';
 import { isRivetKind } from '@shared/stock/kinds';
-import type { BinRow } from '../../db/schema/stock';
+import type { BinRow } from '../stock/stock.reads';
 import type { PlanningSettings } from '../../settings/planning-settings';
 import { binsStocking } from './bill';
 import { parseExtraItems, parseLines } from './planning-dto';

@@ -1,11 +1,10 @@
-import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { FastenerNeed } from '@shared/estimate/estimate';
 import type { EstimateRivetKind } from '@shared/estimate/rivet-rules';
 import type { BillLine, ExtraItem } from '@shared/schemas/builds';
 import { BLIND_GRIP_RANGES, binDesignation, binGripRange, blindGripRange, fastenerDesignation, gripRangeWords, inchFraction, toThousandth as thou, type FastenerSpec } from '@shared/stock/fasteners';
-import { rivetHeadLabel, RIVET_KINDS, type RivetKind } from '@shared/stock/kinds';
+import { rivetHeadLabel, type RivetKind } from '@shared/stock/kinds';
 import type { Executor } from '../../db/client';
-import { bins, stockMovements, type BinRow } from '../../db/schema/stock';
+import { binsWithCodes, drawnForAssembly, rivetBins as loadRivetBins, type BinRow } from '../stock/stock.reads';
 
 /** The bin kind that stocks each kind of rivet the estimator names. */
 export const BIN_KIND_FOR: Record<EstimateRivetKind, RivetKind> = {
@@ -69,7 +68,7 @@ export function binsStocking(rivetBins: readonly BinRow[], need: FastenerNeed): 
 }
 
 export function matchNeeds(db: Executor, needs: FastenerNeed[]): NeedMatch[] {
-  const rivetBins = db.select().from(bins).where(inArray(bins.kind, [...RIVET_KINDS])).all();
+  const rivetBins = loadRivetBins(db);
   return needs.map((need) => ({
     need,
     bins: binsStocking(rivetBins, need),
@@ -124,17 +123,6 @@ export function unstockedMessage(need: FastenerNeed, otherGrips: readonly BinRow
   return `No bin stocks a ${inchFraction(need.diameter32, 32)} in ${rivetHeadLabel(need.head, need.kind === 'solid')} ${material}${KIND_WORDS[need.kind]}${size}.`;
 }
 
-/** Units drawn for the assembly from each bin, net of returns and reversals. */
-function drawnByBin(db: Executor, assemblyId: number): Map<number, number> {
-  const rows = db
-    .select({ binId: stockMovements.binId, n: sql<number>`-sum(${stockMovements.quantity})` })
-    .from(stockMovements)
-    .where(and(eq(stockMovements.assemblyId, assemblyId), inArray(stockMovements.kind, ['draw', 'return_unused', 'reversal'])))
-    .groupBy(stockMovements.binId)
-    .all();
-  return new Map(rows.map((r) => [r.binId, r.n]));
-}
-
 const binRef = (b: BinRow) => ({ code: b.code, designation: binDesignation(b), onHand: b.onHand, location: b.location });
 
 /**
@@ -152,7 +140,7 @@ function stillToDraw(need: number, drawnSoFar: number, bin: BinRow | null | unde
  * the same rivet still counts against the assembly.
  */
 export function billLines(db: Executor, assemblyId: number, matches: NeedMatch[], extras: ExtraItem[]): BillLine[] {
-  const drawn = drawnByBin(db, assemblyId);
+  const drawn = drawnForAssembly(db, assemblyId);
   const fasteners = matches.map(({ need, bins: found, otherGrips }): BillLine => {
     const bin = found[0] ?? null;
     const unstocked = bin ? null : unstockedMessage(need, otherGrips);
@@ -170,8 +158,7 @@ export function billLines(db: Executor, assemblyId: number, matches: NeedMatch[]
       ...stillToDraw(need.withWaste, drawnSoFar, bin),
     };
   });
-  const codes = [...new Set(extras.map((e) => e.binCode))];
-  const byCode = new Map((codes.length ? db.select().from(bins).where(inArray(bins.code, codes)).all() : []).map((b) => [b.code, b]));
+  const byCode = binsWithCodes(db, extras.map((e) => e.binCode));
   const items = extras.map((e): BillLine => {
     const bin = byCode.get(e.binCode);
     const drawnSoFar = bin ? (drawn.get(bin.id) ?? 0) : 0;

@@ -1,7 +1,7 @@
 import type { BinForecastDto } from '@shared/schemas/forecast';
 import { binDesignation } from '@shared/stock/fasteners';
 import { e4ToDollars } from '@shared/stock/money';
-import type { BinRow } from '../../db/schema/stock';
+import type { BinRow } from '../stock/stock.reads';
 
 export type BinBrief = BinForecastDto['bin'];
 

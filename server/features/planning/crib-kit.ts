@@ -1,42 +1,19 @@
-import { and, eq, inArray, notInArray } from 'drizzle-orm';
 import type { EstimateResult } from '@shared/estimate/estimate';
 import type { KitItem, KitRole } from '@shared/schemas/builds';
 import { inchFraction } from '@shared/stock/fasteners';
 import { rivetSetSentence, type RivetHead } from '@shared/stock/kinds';
 import type { ToolCategory } from '@shared/tools/categories';
 import type { Executor } from '../../db/client';
-import { holds, tools } from '../../db/schema/tools';
+import { kitCandidateTools, toolIdsOfferedTo, type KitCandidateTool } from '../tools/tools.reads';
 
-interface CribTool {
-  code: string;
-  name: string;
-  status: string;
-  category: ToolCategory;
-  accessories: string[];
-  drillSize: string | null;
-  rivetDiameter32: number | null;
-  traySize: string | null;
-  trayCapacity: number | null;
-}
+type CribTool = Omit<KitCandidateTool, 'id'>;
 
 const KIT_CATEGORIES: ToolCategory[] = ['hand_rivet_puller', 'pneumatic_rivet_puller', 'rivet_gun', 'bucking_bar', 'drill_bit', 'countersink_cutter', 'dimple_dies', 'temporary_fastener_tray', 'deburring_tool'];
 
 /** The crib's tools that could join a kit (lost and retired ones never will); those set aside for `forUserId` say so. */
 function loadCrib(db: Executor, forUserId: number): CribTool[] {
-  const heldForYou = new Set(
-    db
-      .select({ toolId: holds.toolId })
-      .from(holds)
-      .where(and(eq(holds.userId, forUserId), eq(holds.status, 'offered')))
-      .all()
-      .map((h) => h.toolId),
-  );
-  return db
-    .select({ id: tools.id, code: tools.code, name: tools.name, status: tools.status, category: tools.category, accessories: tools.accessories, drillSize: tools.drillSize, rivetDiameter32: tools.rivetDiameter32, traySize: tools.traySize, trayCapacity: tools.trayCapacity })
-    .from(tools)
-    .where(and(inArray(tools.category, KIT_CATEGORIES), notInArray(tools.status, ['lost', 'retired'])))
-    .all()
-    .map(({ id, ...t }) => ({ ...t, status: heldForYou.has(id) ? HELD_FOR_YOU : t.status, accessories: JSON.parse(t.accessories) as string[] }));
+  const heldForYou = toolIdsOfferedTo(db, forUserId);
+  return kitCandidateTools(db, KIT_CATEGORIES).map(({ id, ...t }) => ({ ...t, status: heldForYou.has(id) ? HELD_FOR_YOU : t.status }));
 }
 
 /** A tool already set aside for the person the kit is for: the best pick of all. */

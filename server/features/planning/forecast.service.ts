@@ -13,11 +13,11 @@ import {
 import { chapterDay, startOfDayNamed } from '@shared/time/chapter-time';
 import type { ServiceContext } from '../../context';
 import type { Executor } from '../../db/client';
-import type { BinRow } from '../../db/schema/stock';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { readPlanningSettings, type PlanningSettings } from '../../settings/planning-settings';
 import { assemblyBinNeeds, binIndex } from './assembly-needs';
-import { allBins, assembliesIn, drawnForAssemblies, orderedAlerts, weeklyConsumption } from './forecast.repo';
+import { allBins, drawnForAssemblies, weeklyConsumption, type BinRow } from '../stock/stock.reads';
+import { assembliesIn, orderedAlerts } from './forecast.repo';
 
 export interface BinPlan {
   bin: BinRow;
@@ -41,8 +41,9 @@ const ACTIVE = ['planned', 'in_progress'] as const;
  */
 function plannedDemand(db: Executor, settings: PlanningSettings, bins: readonly BinRow[], weeks: Date[]): Map<number, number[]> {
   const index = binIndex(bins);
-  const drawn = drawnForAssemblies(db, [...ACTIVE]);
-  const planned = assembliesIn(db, [...ACTIVE]).map((a): PlannedAssembly<number> => {
+  const active = assembliesIn(db, [...ACTIVE]);
+  const drawn = drawnForAssemblies(db, active.map((a) => a.id));
+  const planned = active.map((a): PlannedAssembly<number> => {
     const byBin = new Map<number, { need: number; from: Set<number> }>();
     for (const need of assemblyBinNeeds(a, settings, index)) {
       const entry = byBin.get(need.binIds[0]!) ?? { need: 0, from: new Set<number>() };

@@ -4,7 +4,6 @@ import type { MovementKind } from '@shared/stock/kinds';
 import type { Database, Executor } from '../../db/client';
 import { insertRows } from '../../db/bulk-write';
 import { preparedPerDatabase } from '../../db/prepared';
-import { assemblies, builds } from '../../db/schema/builds';
 import { bins, stockMovements, type MovementRow } from '../../db/schema/stock';
 import { users } from '../../db/schema/users';
 
@@ -17,11 +16,6 @@ export function insertMovement(db: Executor, values: NewMovementRow): MovementRo
 /** Many entries at once (the opening stock of an import's new bins). */
 export function insertMovements(db: Database, values: readonly NewMovementRow[]): void {
   insertRows(db, stockMovements, values);
-}
-
-/** Who owns the build an assembly belongs to; undefined when there is no such assembly. */
-export function assemblyOwnerId(db: Executor, assemblyId: number): number | undefined {
-  return db.select({ ownerId: builds.ownerId }).from(assemblies).innerJoin(builds, eq(builds.id, assemblies.buildId)).where(eq(assemblies.id, assemblyId)).get()?.ownerId;
 }
 
 export function findMovement(db: Executor, id: number): MovementRow | undefined {

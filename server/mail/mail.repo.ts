@@ -1,6 +1,8 @@
 import { desc, eq, sql } from 'drizzle-orm';
-import type { Executor } from '../../db/client';
-import { caughtMail, outboxMail, type CaughtMailRow, type OutboxMailRow } from '../../db/schema/mail';
+import type { Executor } from '../db/client';
+import { caughtMail, outboxMail, type CaughtMailRow, type OutboxMailRow } from '../db/schema/mail';
+
+export type { OutboxMailRow };
 
 /** The outbox, newest first. */
 export function listOutboxMail(db: Executor, limit: number): OutboxMailRow[] {

@@ -1,17 +1,13 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { Link, type LoaderFunctionArgs } from 'react-router';
+import { Link } from 'react-router';
 import { hasRole } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { binsQueryOptions } from '@/features/stock/api/get-bins';
 import { BinTable } from '@/features/stock/components/bin-table';
 import { PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireSignedIn } from './guards';
+import { pageLoader } from './guards';
 
-export const binsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(requireSignedIn(queryClient, request), queryClient.ensureQueryData(binsQueryOptions()));
-  return null;
-};
+export const binsLoader = pageLoader('signed-in', [binsQueryOptions()]);
 
 export function BinsRoute() {
   const { data: me } = useSuspenseQuery(meQueryOptions());

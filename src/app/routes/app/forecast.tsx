@@ -1,16 +1,12 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { Link, type LoaderFunctionArgs } from 'react-router';
+import { Link } from 'react-router';
 import { forecastQueryOptions } from '@/features/forecast/api/get-forecast';
 import { ForecastList } from '@/features/forecast/components/forecast-list';
 import { formatDay, formatPercent } from '@/features/forecast/utils/format';
 import { PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireRole } from './guards';
+import { pageLoader } from './guards';
 
-export const forecastLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(requireRole(queryClient, request, 'quartermaster'), queryClient.ensureQueryData(forecastQueryOptions()));
-  return null;
-};
+export const forecastLoader = pageLoader('quartermaster', [forecastQueryOptions()]);
 
 export function ForecastRoute() {
   const { data } = useSuspenseQuery(forecastQueryOptions());

@@ -1,6 +1,5 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { Link, type LoaderFunctionArgs } from 'react-router';
+import { Link } from 'react-router';
 import { peopleQueryOptions } from '@/features/people/api/get-people';
 import { signoffRequestsQueryOptions } from '@/features/signoffs/api/get-signoff-requests';
 import { signoffsQueryOptions } from '@/features/signoffs/api/get-signoffs';
@@ -9,19 +8,9 @@ import { SignoffForm } from '@/features/signoffs/components/signoff-form';
 import { SignoffList } from '@/features/signoffs/components/signoff-list';
 import { SignoffRequestList } from '@/features/signoffs/components/signoff-request-list';
 import { Card, PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireRole } from './guards';
+import { pageLoader } from './guards';
 
-export const signoffsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(
-    requireRole(queryClient, request, 'lead'),
-    Promise.all([
-      queryClient.ensureQueryData(signoffsQueryOptions()),
-      queryClient.ensureQueryData(peopleQueryOptions()),
-      queryClient.ensureQueryData(signoffRequestsQueryOptions()),
-    ]),
-  );
-  return null;
-};
+export const signoffsLoader = pageLoader('lead', [signoffsQueryOptions(), peopleQueryOptions(), signoffRequestsQueryOptions()]);
 
 export function SignoffsRoute() {
   const { data: signoffs } = useSuspenseQuery(signoffsQueryOptions());

@@ -1,17 +1,13 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { Link, type LoaderFunctionArgs } from 'react-router';
+import { Link } from 'react-router';
 import { hasRole } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { toolsQueryOptions } from '@/features/tools/api/get-tools';
 import { ToolCatalog } from '@/features/tools/components/tool-catalog';
 import { PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireSignedIn } from './guards';
+import { pageLoader } from './guards';
 
-export const toolsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(requireSignedIn(queryClient, request), queryClient.ensureQueryData(toolsQueryOptions()));
-  return null;
-};
+export const toolsLoader = pageLoader('signed-in', [toolsQueryOptions()]);
 
 export function ToolsRoute() {
   const { data: me } = useSuspenseQuery(meQueryOptions());

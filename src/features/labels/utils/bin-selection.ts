@@ -1,4 +1,5 @@
 import { BIN_KIND_LABELS, BIN_KINDS, type BinKind } from '@shared/stock/kinds';
+import { filterOptions } from '@/components/ui/filter-options';
 import { filterItems, type PickerFacet } from '@/components/ui/item-picking';
 
 /** What the picker shows of a bin; a Bin from GET /api/bins has all of it. */
@@ -22,7 +23,7 @@ export const NO_BIN_FILTER: BinFilter = { search: '', kind: '' };
 export const binSearchText = (b: PickableBin) => [b.code, b.designation, b.location];
 
 export const BIN_FACETS: readonly PickerFacet<PickableBin, 'kind'>[] = [
-  { id: 'kind', label: 'Kind', options: [{ value: '', label: 'All kinds' }, ...BIN_KINDS.map((k) => ({ value: k, label: BIN_KIND_LABELS[k] }))], of: (b) => b.kind },
+  { id: 'kind', label: 'Kind', options: filterOptions('All kinds', BIN_KINDS, (k) => BIN_KIND_LABELS[k]), of: (b) => b.kind },
 ];
 
 /** Bins matching the search (code, designation or location, any case) and the kind filter. */

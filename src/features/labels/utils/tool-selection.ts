@@ -1,4 +1,5 @@
 import { CATEGORY_LABELS, STATUS_LABELS, TOOL_CATEGORIES, TOOL_STATUSES, type ToolCategory, type ToolStatus } from '@shared/tools/categories';
+import { filterOptions } from '@/components/ui/filter-options';
 import { filterItems, type PickerFacet } from '@/components/ui/item-picking';
 
 export interface PickableTool {
@@ -21,8 +22,8 @@ export const NO_FILTER: ToolFilter = { search: '', category: '', status: '' };
 export const toolSearchText = (t: PickableTool) => [t.code, t.name, t.location];
 
 export const TOOL_FACETS: readonly PickerFacet<PickableTool, 'category' | 'status'>[] = [
-  { id: 'category', label: 'Category', options: [{ value: '', label: 'All categories' }, ...TOOL_CATEGORIES.map((c) => ({ value: c, label: CATEGORY_LABELS[c] }))], of: (t) => t.category },
-  { id: 'status', label: 'Status', options: [{ value: '', label: 'Any status' }, ...TOOL_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }))], of: (t) => t.status },
+  { id: 'category', label: 'Category', options: filterOptions('All categories', TOOL_CATEGORIES, (c) => CATEGORY_LABELS[c]), of: (t) => t.category },
+  { id: 'status', label: 'Status', options: filterOptions('Any status', TOOL_STATUSES, (s) => STATUS_LABELS[s]), of: (t) => t.status },
 ];
 
 /** Tools matching the search (code, name or location, any case) and the category and status filters. */

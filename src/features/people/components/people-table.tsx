@@ -3,10 +3,11 @@ import { ROLE_LABELS, ROLES } from '@shared/roles';
 import type { Person } from '@shared/schemas/people';
 import { DataTable } from '@/components/ui/data-table';
 import { SelectField, TextField } from '@/components/ui/field';
+import { filterOptions } from '@/components/ui/filter-options';
 import { useListTable } from '@/components/ui/use-list-table';
 import { peopleColumns } from './people-columns';
 
-const ROLE_FILTER = [{ value: '', label: 'All roles' }, ...ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }))];
+const ROLE_FILTER = filterOptions('All roles', ROLES, (r) => ROLE_LABELS[r]);
 const STATUS_FILTER = [
   { value: '', label: 'Everyone' },
   { value: 'active', label: 'Active' },

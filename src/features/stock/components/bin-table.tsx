@@ -4,6 +4,7 @@ import { BLIND_GRIP_RANGES } from '@shared/stock/fasteners';
 import { BIN_KIND_LABELS, BIN_KINDS } from '@shared/stock/kinds';
 import { DataTable } from '@/components/ui/data-table';
 import { SelectField, TextField } from '@/components/ui/field';
+import { distinctOptions, filterOptions } from '@/components/ui/filter-options';
 import { useListTable } from '@/components/ui/use-list-table';
 import { diameterText, gripDashText } from '../utils/format';
 import { binColumns, type SpecFilter } from './bin-columns';
@@ -11,17 +12,15 @@ import { binColumns, type SpecFilter } from './bin-columns';
 /** The rivet diameters a chapter shop stocks, as dashes in 32nds: 3/32 to 1/4 in. */
 const SHOP_DIAMETERS = [3, 4, 5, 6, 8];
 
-const KIND_FILTER = [{ value: '', label: 'All kinds' }, ...BIN_KINDS.map((k) => ({ value: k, label: BIN_KIND_LABELS[k] }))];
-const DIAMETER_FILTER = [{ value: '', label: 'Any diameter' }, ...SHOP_DIAMETERS.map((d) => ({ value: String(d), label: diameterText(d) }))];
+const KIND_FILTER = filterOptions('All kinds', BIN_KINDS, (k) => BIN_KIND_LABELS[k]);
+const DIAMETER_FILTER = filterOptions('Any diameter', SHOP_DIAMETERS, diameterText);
 const GRIP_FILTER = [{ value: '', label: 'Any grip' }, ...BLIND_GRIP_RANGES.map((g) => ({ value: String(g.dash), label: gripDashText(g.dash, g) }))];
-
-const choices = (values: string[], any: string) => [{ value: '', label: any }, ...[...new Set(values.filter(Boolean))].sort().map((v) => ({ value: v, label: v }))];
 
 /** Every bin on the shelves: search, filter by kind, spec, shelf and low stock, sort, page. */
 export function BinTable({ bins }: { bins: Bin[] }) {
   const list = useListTable({ columns: binColumns, data: bins, sort: { id: 'code', desc: false } });
-  const materials = useMemo(() => choices(bins.map((b) => b.material ?? ''), 'Any material'), [bins]);
-  const locations = useMemo(() => choices(bins.map((b) => b.location), 'Any shelf'), [bins]);
+  const materials = useMemo(() => distinctOptions('Any material', bins.map((b) => b.material ?? '')), [bins]);
+  const locations = useMemo(() => distinctOptions('Any shelf', bins.map((b) => b.location)), [bins]);
 
   const filterValue = (id: string) => list.filter(id).value;
   const setFilter = (id: string, value: string) => list.filter(id).set(value);

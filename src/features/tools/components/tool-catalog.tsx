@@ -3,19 +3,17 @@ import { CATEGORY_LABELS, STATUS_LABELS, TOOL_CATEGORIES, TOOL_STATUSES } from '
 import type { Tool } from '@shared/schemas/tools';
 import { DataTable } from '@/components/ui/data-table';
 import { SelectField, TextField } from '@/components/ui/field';
+import { distinctOptions, filterOptions } from '@/components/ui/filter-options';
 import { useListTable } from '@/components/ui/use-list-table';
 import { toolColumns } from './tool-columns';
 
-const CATEGORY_FILTER = [{ value: '', label: 'All kinds' }, ...TOOL_CATEGORIES.map((c) => ({ value: c, label: CATEGORY_LABELS[c] }))];
-const STATUS_FILTER = [{ value: '', label: 'Any state' }, ...TOOL_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }))];
+const CATEGORY_FILTER = filterOptions('All kinds', TOOL_CATEGORIES, (c) => CATEGORY_LABELS[c]);
+const STATUS_FILTER = filterOptions('Any state', TOOL_STATUSES, (s) => STATUS_LABELS[s]);
 
 /** The crib's catalogue: search, filter by kind, state and place, sort, page. */
 export function ToolCatalog({ tools }: { tools: Tool[] }) {
   const list = useListTable({ columns: toolColumns, data: tools, sort: { id: 'code', desc: false } });
-  const locations = useMemo(
-    () => [{ value: '', label: 'Anywhere' }, ...[...new Set(tools.map((t) => t.location).filter(Boolean))].sort().map((l) => ({ value: l, label: l }))],
-    [tools],
-  );
+  const locations = useMemo(() => distinctOptions('Anywhere', tools.map((t) => t.location)), [tools]);
   const filterValue = (id: string) => list.filter(id).value;
   const setFilter = (id: string, value: string) => list.filter(id).set(value);
   const activeFilters = ['category', 'status', 'location'].filter((id) => filterValue(id) !== '').length;

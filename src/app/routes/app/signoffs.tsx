@@ -1,5 +1,4 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { Link } from 'react-router';
 import { peopleQueryOptions } from '@/features/people/api/get-people';
 import { signoffRequestsQueryOptions } from '@/features/signoffs/api/get-signoff-requests';
 import { signoffsQueryOptions } from '@/features/signoffs/api/get-signoffs';
@@ -7,6 +6,7 @@ import { SignoffCaution } from '@/features/signoffs/components/signoff-caution';
 import { SignoffForm } from '@/features/signoffs/components/signoff-form';
 import { SignoffList } from '@/features/signoffs/components/signoff-list';
 import { SignoffRequestList } from '@/features/signoffs/components/signoff-request-list';
+import { LinkButton } from '@/components/ui/link-button';
 import { Card, PageHeader } from '@/components/ui/page';
 import { pageLoader } from './guards';
 
@@ -23,9 +23,9 @@ export function SignoffsRoute() {
         title="Sign-offs"
         lead="Who may use which powered tools."
         actions={
-          <Link to="/settings" className="inline-flex min-h-12 items-center rounded-lg border-2 border-ink px-5 font-semibold text-ink">
+          <LinkButton to="/settings" variant="secondary">
             Hold time and time zone
-          </Link>
+          </LinkButton>
         }
       />
       <div className="flex flex-col gap-4">

@@ -1,5 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { createBrowserRouter, type RouteObject } from 'react-router';
+import type { ComponentType } from 'react';
+import { createBrowserRouter, type LoaderFunction, type RouteObject } from 'react-router';
 import { AppShell, appShellLoader } from './routes/app/app-shell';
 import { HomeRoute } from './routes/app/home';
 import { SignInRoute, signInLoader } from './routes/auth/sign-in';
@@ -15,8 +16,24 @@ export function createAppRouter(queryClient: QueryClient) {
   return createBrowserRouter(appRoutes(queryClient));
 }
 
+/** What a page's module gives the router: its component, and the loader that fills its queries. */
+interface LazyPage {
+  Component: ComponentType;
+  loader?: (queryClient: QueryClient) => LoaderFunction;
+}
+
 /** Every page of the client, with its loader. */
 export function appRoutes(queryClient: QueryClient): RouteObject[] {
+  /** A page of the signed-in app that downloads with its own chunk when it is first opened. */
+  const page = (path: string, load: () => Promise<LazyPage>): RouteObject => ({
+    path,
+    ErrorBoundary: RouteError,
+    lazy: async () => {
+      const { Component, loader } = await load();
+      return loader ? { Component, loader: loader(queryClient) } : { Component };
+    },
+  });
+
   return [
     { path: '/sign-in', loader: signInLoader(queryClient), Component: SignInRoute, ErrorBoundary: RouteError, HydrateFallback: LoadingRoute },
     {
@@ -39,252 +56,41 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
       HydrateFallback: LoadingRoute,
       children: [
         { index: true, Component: HomeRoute },
-        {
-          path: 'scan',
-          ErrorBoundary: RouteError,
-          lazy: async () => ({ Component: (await import('./routes/app/scan')).ScanRoute }),
-        },
-        {
-          path: 'tools',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { ToolsRoute, toolsLoader } = await import('./routes/app/tools');
-            return { loader: toolsLoader(queryClient), Component: ToolsRoute };
-          },
-        },
-        {
-          path: 'queue',
-          ErrorBoundary: RouteError,
-          lazy: async () => ({ Component: (await import('./routes/app/queue')).QueueRoute }),
-        },
-        {
-          path: 'tools/new',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { ToolNewRoute, toolNewLoader } = await import('./routes/app/tool-edit');
-            return { loader: toolNewLoader(queryClient), Component: ToolNewRoute };
-          },
-        },
-        {
-          path: 'tools/:code',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { ToolDetailRoute, toolDetailLoader } = await import('./routes/app/tool-detail');
-            return { loader: toolDetailLoader(queryClient), Component: ToolDetailRoute };
-          },
-        },
-        {
-          path: 'tools/:code/edit',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { ToolEditRoute, toolEditLoader } = await import('./routes/app/tool-edit');
-            return { loader: toolEditLoader(queryClient), Component: ToolEditRoute };
-          },
-        },
-        {
-          path: 'loans',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { LoansRoute, loansLoader } = await import('./routes/app/loans');
-            return { loader: loansLoader(queryClient), Component: LoansRoute };
-          },
-        },
-        {
-          path: 'bins',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { BinsRoute, binsLoader } = await import('./routes/app/bins');
-            return { loader: binsLoader(queryClient), Component: BinsRoute };
-          },
-        },
-        {
-          path: 'bins/import',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { BinImportRoute, binImportLoader } = await import('./routes/app/bin-import');
-            return { loader: binImportLoader(queryClient), Component: BinImportRoute };
-          },
-        },
-        {
-          path: 'bins/new',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { BinNewRoute, binNewLoader } = await import('./routes/app/bin-edit');
-            return { loader: binNewLoader(queryClient), Component: BinNewRoute };
-          },
-        },
-        {
-          path: 'bins/:code',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { BinDetailRoute, binDetailLoader } = await import('./routes/app/bin-detail');
-            return { loader: binDetailLoader(queryClient), Component: BinDetailRoute };
-          },
-        },
-        {
-          path: 'bins/:code/edit',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { BinEditRoute, binEditLoader } = await import('./routes/app/bin-edit');
-            return { loader: binEditLoader(queryClient), Component: BinEditRoute };
-          },
-        },
-        {
-          path: 'restock',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { RestockRoute, restockLoader } = await import('./routes/app/restock');
-            return { loader: restockLoader(queryClient), Component: RestockRoute };
-          },
-        },
-        {
-          path: 'tab',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { TabRoute, tabLoader } = await import('./routes/app/tab');
-            return { loader: tabLoader(queryClient), Component: TabRoute };
-          },
-        },
-        {
-          path: 'spend',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { SpendRoute, spendLoader } = await import('./routes/app/spend');
-            return { loader: spendLoader(queryClient), Component: SpendRoute };
-          },
-        },
-        {
-          path: 'payments',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { PaymentsRoute, paymentsLoader } = await import('./routes/app/payments');
-            return { loader: paymentsLoader(queryClient), Component: PaymentsRoute };
-          },
-        },
-        {
-          path: 'overview',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { OverviewRoute, overviewLoader } = await import('./routes/app/overview');
-            return { loader: overviewLoader(queryClient), Component: OverviewRoute };
-          },
-        },
-        {
-          path: 'people',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { PeopleRoute, peopleLoader } = await import('./routes/app/people');
-            return { loader: peopleLoader(queryClient), Component: PeopleRoute };
-          },
-        },
-        {
-          path: 'mail',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { SentMailRoute, sentMailLoader } = await import('./routes/app/sent-mail');
-            return { loader: sentMailLoader(queryClient), Component: SentMailRoute };
-          },
-        },
-        {
-          path: 'my-mail',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { MyMailRoute, myMailLoader } = await import('./routes/app/my-mail');
-            return { loader: myMailLoader(queryClient), Component: MyMailRoute };
-          },
-        },
-        {
-          path: 'overdue',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { OverdueRoute, overdueLoader } = await import('./routes/app/overdue');
-            return { loader: overdueLoader(queryClient), Component: OverdueRoute };
-          },
-        },
-        {
-          path: 'service',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { ServiceRoute, serviceLoader } = await import('./routes/app/service');
-            return { loader: serviceLoader(queryClient), Component: ServiceRoute };
-          },
-        },
-        {
-          path: 'signoffs',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { SignoffsRoute, signoffsLoader } = await import('./routes/app/signoffs');
-            return { loader: signoffsLoader(queryClient), Component: SignoffsRoute };
-          },
-        },
-        {
-          path: 'labels',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { LabelsRoute, labelsLoader } = await import('./routes/app/labels');
-            return { loader: labelsLoader(queryClient), Component: LabelsRoute };
-          },
-        },
-        {
-          path: 'alerts',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { AlertsRoute, alertsLoader } = await import('./routes/app/alerts');
-            return { loader: alertsLoader(queryClient), Component: AlertsRoute };
-          },
-        },
-        {
-          path: 'forecast',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { ForecastRoute, forecastLoader } = await import('./routes/app/forecast');
-            return { loader: forecastLoader(queryClient), Component: ForecastRoute };
-          },
-        },
-        {
-          path: 'settings',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { SettingsRoute, settingsLoader } = await import('./routes/app/settings');
-            return { loader: settingsLoader(queryClient), Component: SettingsRoute };
-          },
-        },
+        page('scan', () => import('./routes/app/scan').then((m) => ({ Component: m.ScanRoute }))),
+        page('tools', () => import('./routes/app/tools').then((m) => ({ Component: m.ToolsRoute, loader: m.toolsLoader }))),
+        page('queue', () => import('./routes/app/queue').then((m) => ({ Component: m.QueueRoute }))),
+        page('tools/new', () => import('./routes/app/tool-edit').then((m) => ({ Component: m.ToolNewRoute, loader: m.toolNewLoader }))),
+        page('tools/:code', () => import('./routes/app/tool-detail').then((m) => ({ Component: m.ToolDetailRoute, loader: m.toolDetailLoader }))),
+        page('tools/:code/edit', () => import('./routes/app/tool-edit').then((m) => ({ Component: m.ToolEditRoute, loader: m.toolEditLoader }))),
+        page('loans', () => import('./routes/app/loans').then((m) => ({ Component: m.LoansRoute, loader: m.loansLoader }))),
+        page('bins', () => import('./routes/app/bins').then((m) => ({ Component: m.BinsRoute, loader: m.binsLoader }))),
+        page('bins/import', () => import('./routes/app/bin-import').then((m) => ({ Component: m.BinImportRoute, loader: m.binImportLoader }))),
+        page('bins/new', () => import('./routes/app/bin-edit').then((m) => ({ Component: m.BinNewRoute, loader: m.binNewLoader }))),
+        page('bins/:code', () => import('./routes/app/bin-detail').then((m) => ({ Component: m.BinDetailRoute, loader: m.binDetailLoader }))),
+        page('bins/:code/edit', () => import('./routes/app/bin-edit').then((m) => ({ Component: m.BinEditRoute, loader: m.binEditLoader }))),
+        page('restock', () => import('./routes/app/restock').then((m) => ({ Component: m.RestockRoute, loader: m.restockLoader }))),
+        page('tab', () => import('./routes/app/tab').then((m) => ({ Component: m.TabRoute, loader: m.tabLoader }))),
+        page('spend', () => import('./routes/app/spend').then((m) => ({ Component: m.SpendRoute, loader: m.spendLoader }))),
+        page('payments', () => import('./routes/app/payments').then((m) => ({ Component: m.PaymentsRoute, loader: m.paymentsLoader }))),
+        page('overview', () => import('./routes/app/overview').then((m) => ({ Component: m.OverviewRoute, loader: m.overviewLoader }))),
+        page('people', () => import('./routes/app/people').then((m) => ({ Component: m.PeopleRoute, loader: m.peopleLoader }))),
+        page('mail', () => import('./routes/app/sent-mail').then((m) => ({ Component: m.SentMailRoute, loader: m.sentMailLoader }))),
+        page('my-mail', () => import('./routes/app/my-mail').then((m) => ({ Component: m.MyMailRoute, loader: m.myMailLoader }))),
+        page('overdue', () => import('./routes/app/overdue').then((m) => ({ Component: m.OverdueRoute, loader: m.overdueLoader }))),
+        page('service', () => import('./routes/app/service').then((m) => ({ Component: m.ServiceRoute, loader: m.serviceLoader }))),
+        page('signoffs', () => import('./routes/app/signoffs').then((m) => ({ Component: m.SignoffsRoute, loader: m.signoffsLoader }))),
+        page('labels', () => import('./routes/app/labels').then((m) => ({ Component: m.LabelsRoute, loader: m.labelsLoader }))),
+        page('alerts', () => import('./routes/app/alerts').then((m) => ({ Component: m.AlertsRoute, loader: m.alertsLoader }))),
+        page('forecast', () => import('./routes/app/forecast').then((m) => ({ Component: m.ForecastRoute, loader: m.forecastLoader }))),
+        page('settings', () => import('./routes/app/settings').then((m) => ({ Component: m.SettingsRoute, loader: m.settingsLoader }))),
         {
           path: 'settings/planning',
           lazy: async () => ({ loader: (await import('./routes/app/settings')).planningSettingsRedirect }),
         },
-        {
-          path: 'builds',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { BuildsRoute, buildsLoader } = await import('./routes/app/builds');
-            return { loader: buildsLoader(queryClient), Component: BuildsRoute };
-          },
-        },
-        {
-          path: 'builds/:id/assemblies/new',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { AssemblyNewRoute, assemblyNewLoader } = await import('./routes/app/assembly-edit');
-            return { loader: assemblyNewLoader(queryClient), Component: AssemblyNewRoute };
-          },
-        },
-        {
-          path: 'assemblies/:id',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { AssemblyDetailRoute, assemblyDetailLoader } = await import('./routes/app/assembly-detail');
-            return { loader: assemblyDetailLoader(queryClient), Component: AssemblyDetailRoute };
-          },
-        },
-        {
-          path: 'assemblies/:id/edit',
-          ErrorBoundary: RouteError,
-          lazy: async () => {
-            const { AssemblyEditRoute, assemblyEditLoader } = await import('./routes/app/assembly-edit');
-            return { loader: assemblyEditLoader(queryClient), Component: AssemblyEditRoute };
-          },
-        },
+        page('builds', () => import('./routes/app/builds').then((m) => ({ Component: m.BuildsRoute, loader: m.buildsLoader }))),
+        page('builds/:id/assemblies/new', () => import('./routes/app/assembly-edit').then((m) => ({ Component: m.AssemblyNewRoute, loader: m.assemblyNewLoader }))),
+        page('assemblies/:id', () => import('./routes/app/assembly-detail').then((m) => ({ Component: m.AssemblyDetailRoute, loader: m.assemblyDetailLoader }))),
+        page('assemblies/:id/edit', () => import('./routes/app/assembly-edit').then((m) => ({ Component: m.AssemblyEditRoute, loader: m.assemblyEditLoader }))),
       ],
     },
     { path: '*', Component: NotFoundRoute },

@@ -3,10 +3,11 @@ import userEvent from '@testing-library/user-event';
 import { beforeEach, describe, expect, it, vi } from 'vitest';
 import type { SheetLayoutDto } from '@shared/schemas/labels';
 import { SHEET_LAYOUTS } from '../../labels/layouts';
+import { selectAll, unselectAll } from '@/components/ui/item-picking';
 import { LabelSheetBuilder } from '@/features/labels/components/label-sheet-builder';
 import { filterBins, NO_BIN_FILTER, type PickableBin } from '@/features/labels/utils/bin-selection';
 import { describeSheet } from '@/features/labels/utils/sheet-summary';
-import { filterTools, NO_FILTER, selectAll, unselectAll, type PickableTool } from '@/features/labels/utils/tool-selection';
+import { filterTools, NO_FILTER, type PickableTool } from '@/features/labels/utils/tool-selection';
 import { setCsrfToken } from '@/lib/api-client';
 import { renderWithProviders } from '../helpers/render';
 

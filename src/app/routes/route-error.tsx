@@ -1,5 +1,6 @@
 import { lazy, Suspense } from 'react';
-import { isRouteErrorResponse, Link, useRouteError } from 'react-router';
+import { isRouteErrorResponse, useRouteError } from 'react-router';
+import { LinkButton } from '@/components/ui/link-button';
 import { MainLandmark } from '@/components/ui/main-landmark';
 import { PageHeading } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';
@@ -29,9 +30,9 @@ export function RouteError() {
     <MainLandmark className="mx-auto flex max-w-md flex-col gap-4 px-4 py-10">
       <PageHeading title={title} />
       <p role="alert">{message}</p>
-      <Link to="/" className="inline-flex min-h-12 items-center self-start rounded-lg bg-ink px-5 font-semibold text-card">
+      <LinkButton to="/" className="self-start">
         Go to home
-      </Link>
+      </LinkButton>
     </MainLandmark>
   );
 }
@@ -53,9 +54,9 @@ export function NotFoundRoute() {
     <MainLandmark className="mx-auto flex max-w-md flex-col gap-4 px-4 py-10">
       <PageHeading title="Page not found" />
       <p>There is nothing at this address.</p>
-      <Link to="/" className="inline-flex min-h-12 items-center self-start rounded-lg bg-ink px-5 font-semibold text-card">
+      <LinkButton to="/" className="self-start">
         Go to home
-      </Link>
+      </LinkButton>
     </MainLandmark>
   );
 }

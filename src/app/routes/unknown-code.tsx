@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { Link, useNavigate } from 'react-router';
+import { LinkButton } from '@/components/ui/link-button';
 import { Notice } from '@/components/ui/notice';
 import { PageHeading } from '@/components/ui/page';
 import { CodeEntry } from '@/features/tools/components/code-entry';
@@ -22,9 +23,9 @@ export function UnknownCode({ message }: { message: string }) {
     <div className="mx-auto flex max-w-md flex-col gap-4 px-4 py-10">
       <PageHeading title="Code not found" />
       <p role="alert">{message}</p>
-      <Link to="/scan" className="inline-flex min-h-12 items-center self-start rounded-lg bg-ink px-5 font-semibold text-card">
+      <LinkButton to="/scan" className="self-start">
         Scan again
-      </Link>
+      </LinkButton>
       {problem && <Notice tone="warn">{problem}</Notice>}
       <CodeEntry onCode={open} />
       <Link to="/" className="inline-flex min-h-12 items-center self-start font-semibold underline underline-offset-4">

@@ -11,6 +11,7 @@ import { KitList } from '@/features/planning/components/kit-list';
 import { LineEstimateView } from '@/features/planning/components/line-estimate';
 import { PlanningCaution } from '@/features/planning/components/planning-caution';
 import { plannedDatesText } from '@/features/planning/utils/words';
+import { LinkButton } from '@/components/ui/link-button';
 import { Notice } from '@/components/ui/notice';
 import { Card, PageHeader } from '@/components/ui/page';
 import { loadAlongside, requireSignedIn } from './guards';
@@ -48,9 +49,9 @@ export function AssemblyDetailRoute() {
         }
         actions={
           mine && (
-            <Link to={edit} className="inline-flex min-h-12 items-center justify-center rounded-lg border-2 border-ink bg-card px-5 font-semibold max-sm:w-full">
+            <LinkButton to={edit} variant="secondary" className="max-sm:w-full">
               Edit the assembly
-            </Link>
+            </LinkButton>
           )
         }
       />

@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
-import { Link, useLoaderData, useParams, type LoaderFunctionArgs } from 'react-router';
+import { useLoaderData, useParams, type LoaderFunctionArgs } from 'react-router';
 import { hasRole } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { OfflineBinView } from '@/features/offline/components/offline-bin-view';
@@ -10,6 +10,7 @@ import { ledgerQueryOptions } from '@/features/stock/api/get-ledger';
 import { BinActionsPanel } from '@/features/stock/components/bin-actions-panel';
 import { BinDetails, BinSummary } from '@/features/stock/components/bin-summary';
 import { LedgerList } from '@/features/stock/components/ledger-list';
+import { LinkButton } from '@/components/ui/link-button';
 import { Card } from '@/components/ui/page';
 import { loadAlongside, requireSignedIn } from './guards';
 import { loadOrOffline, useOfflinePage, type ScanLoaderData } from './offline-fallback';
@@ -54,9 +55,9 @@ function OnlineBinDetail({ code }: { code: string }) {
       </Card>
       <div className="flex flex-col gap-4 lg:col-start-2 lg:row-span-2 lg:row-start-1">
         <BinActionsPanel bin={bin} />
-        <Link to="/scan" className="inline-flex min-h-12 items-center justify-center rounded-lg border-2 border-ink bg-card px-5 font-semibold">
+        <LinkButton to="/scan" variant="secondary">
           Scan another label
-        </Link>
+        </LinkButton>
       </div>
       <Card className="lg:col-start-1">
         <BinDetails bin={bin} reorder={reorder} isQuartermaster={isQuartermaster} />

@@ -1,17 +1,13 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { Link, type LoaderFunctionArgs } from 'react-router';
 import { hasRole } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { binsQueryOptions } from '@/features/stock/api/get-bins';
 import { BinTable } from '@/features/stock/components/bin-table';
+import { LinkButton } from '@/components/ui/link-button';
 import { PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireSignedIn } from './guards';
+import { pageLoader } from './guards';
 
-export const binsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(requireSignedIn(queryClient, request), queryClient.ensureQueryData(binsQueryOptions()));
-  return null;
-};
+export const binsLoader = pageLoader('signed-in', [binsQueryOptions()]);
 
 export function BinsRoute() {
   const { data: me } = useSuspenseQuery(meQueryOptions());
@@ -24,12 +20,12 @@ export function BinsRoute() {
         actions={
           me && hasRole(me.role, 'quartermaster') ? (
             <div className="flex flex-wrap gap-2">
-              <Link to="/bins/new" className="inline-flex min-h-12 items-center rounded-lg bg-ink px-5 font-semibold text-card">
+              <LinkButton to="/bins/new">
                 Add bin
-              </Link>
-              <Link to="/bins/import" className="inline-flex min-h-12 items-center rounded-lg border-2 border-ink px-5 font-semibold text-ink">
+              </LinkButton>
+              <LinkButton to="/bins/import" variant="secondary">
                 Import or export (CSV)
-              </Link>
+              </LinkButton>
             </div>
           ) : undefined
         }

@@ -1,16 +1,12 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { Link, type LoaderFunctionArgs } from 'react-router';
 import { forecastQueryOptions } from '@/features/forecast/api/get-forecast';
 import { ForecastList } from '@/features/forecast/components/forecast-list';
 import { formatDay, formatPercent } from '@/features/forecast/utils/format';
+import { LinkButton } from '@/components/ui/link-button';
 import { PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireRole } from './guards';
+import { pageLoader } from './guards';
 
-export const forecastLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(requireRole(queryClient, request, 'quartermaster'), queryClient.ensureQueryData(forecastQueryOptions()));
-  return null;
-};
+export const forecastLoader = pageLoader('quartermaster', [forecastQueryOptions()]);
 
 export function ForecastRoute() {
   const { data } = useSuspenseQuery(forecastQueryOptions());
@@ -20,9 +16,9 @@ export function ForecastRoute() {
         title="Forecast"
         lead={`Each bin's next ${data.meta.horizonWeeks} weeks: demand from planned assemblies (or past draws), projected on hand, and when to reorder. Worked out ${formatDay(data.meta.generatedAt)} at a ${formatPercent(data.meta.serviceLevel)} service level.`}
         actions={
-          <Link to="/settings" className="inline-flex min-h-12 items-center rounded-lg border-2 border-ink px-5 font-semibold text-ink">
+          <LinkButton to="/settings" variant="secondary">
             Planning settings
-          </Link>
+          </LinkButton>
         }
       />
       <ForecastList list={data} />

@@ -1,5 +1,5 @@
-import type { QueryClient } from '@tanstack/react-query';
-import { data, redirect } from 'react-router';
+import type { EnsureQueryDataOptions, QueryClient } from '@tanstack/react-query';
+import { data, redirect, type LoaderFunctionArgs } from 'react-router';
 import { hasRole, ROLE_LABELS, type Role } from '@shared/roles';
 import type { User } from '@shared/schemas/auth';
 import { meQueryOptions } from '@/features/auth/api/get-me';
@@ -68,4 +68,21 @@ export async function loadAlongside<T>(guard: Promise<User>, data: Promise<T>): 
   const result = await loaded;
   if ('error' in result) throw result.error;
   return result.value;
+}
+
+/** Any query a page fills before it shows (its data type does not matter to the loader). */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- one list holds queries of every data type
+type PageQuery = EnsureQueryDataOptions<any, Error, any, any>;
+
+/**
+ * The loader of a page that needs only a guard and a fixed set of queries: who may open it
+ * ('signed-in' for anyone signed in, or the least role), and the queries, all started with the guard.
+ */
+export function pageLoader(who: Role | 'signed-in', queries: readonly PageQuery[]) {
+  return (queryClient: QueryClient) =>
+    async ({ request }: LoaderFunctionArgs) => {
+      const guard = who === 'signed-in' ? requireSignedIn(queryClient, request) : requireRole(queryClient, request, who);
+      await loadAlongside(guard, Promise.all(queries.map((query) => queryClient.ensureQueryData(query))));
+      return null;
+    };
 }

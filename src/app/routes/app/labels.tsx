@@ -1,24 +1,12 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router';
 import { labelBinsQueryOptions } from '@/features/labels/api/get-label-bins';
 import { labelToolsQueryOptions } from '@/features/labels/api/get-label-tools';
 import { sheetLayoutsQueryOptions } from '@/features/labels/api/get-layouts';
 import { LabelSheetBuilder } from '@/features/labels/components/label-sheet-builder';
 import { PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireRole } from './guards';
+import { pageLoader } from './guards';
 
-export const labelsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(
-    requireRole(queryClient, request, 'quartermaster'),
-    Promise.all([
-      queryClient.ensureQueryData(sheetLayoutsQueryOptions()),
-      queryClient.ensureQueryData(labelToolsQueryOptions()),
-      queryClient.ensureQueryData(labelBinsQueryOptions()),
-    ]),
-  );
-  return null;
-};
+export const labelsLoader = pageLoader('quartermaster', [sheetLayoutsQueryOptions(), labelToolsQueryOptions(), labelBinsQueryOptions()]);
 
 export function LabelsRoute() {
   const { data: layouts } = useSuspenseQuery(sheetLayoutsQueryOptions());

@@ -1,17 +1,12 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router';
 import { hasRole } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { myLoansQueryOptions, openLoansQueryOptions } from '@/features/tools/api/get-loans';
 import { LoanHistoryList, OpenLoanList } from '@/features/tools/components/loan-list';
 import { Card, PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireSignedIn } from './guards';
+import { pageLoader } from './guards';
 
-export const loansLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(requireSignedIn(queryClient, request), queryClient.ensureQueryData(myLoansQueryOptions()));
-  return null;
-};
+export const loansLoader = pageLoader('signed-in', [myLoansQueryOptions()]);
 
 function EveryonesLoans() {
   const loans = useQuery(openLoansQueryOptions());

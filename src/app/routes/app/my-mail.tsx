@@ -1,16 +1,11 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router';
 import { myMailQueryOptions } from '@/features/mail/api/get-mail';
 import { MailList } from '@/features/mail/components/mail-list';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireRole } from './guards';
+import { pageLoader } from './guards';
 
-export const myMailLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(requireRole(queryClient, request, 'member'), queryClient.ensureQueryData(myMailQueryOptions()));
-  return null;
-};
+export const myMailLoader = pageLoader('member', [myMailQueryOptions()]);
 
 export function MyMailRoute() {
   const { data } = useSuspenseQuery(myMailQueryOptions());

@@ -1,16 +1,11 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router';
 import { overdueQueryOptions } from '@/features/overdue/api/get-overdue';
 import { LastRunNote } from '@/features/overdue/components/last-run-note';
 import { OverdueTable } from '@/features/overdue/components/overdue-table';
 import { PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireRole } from './guards';
+import { pageLoader } from './guards';
 
-export const overdueLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(requireRole(queryClient, request, 'lead'), queryClient.ensureQueryData(overdueQueryOptions()));
-  return null;
-};
+export const overdueLoader = pageLoader('lead', [overdueQueryOptions()]);
 
 export function OverdueRoute() {
   const { data } = useSuspenseQuery(overdueQueryOptions());

@@ -1,6 +1,4 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router';
 import { spendQueryOptions } from '@/features/stock-money/api/get-spend';
 import { SpendChart } from '@/features/stock-money/components/spend-chart';
 import { SpendFigures } from '@/features/stock-money/components/spend-figures';
@@ -11,15 +9,12 @@ import { OverdueDaysPerWeek } from '@/features/tools/components/overview/overdue
 import { IdleTools, MostUsedTools } from '@/features/tools/components/overview/tool-use-tables';
 import { ChartBesideTable } from '@/components/ui/chart-figure';
 import { Card, PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireRole } from './guards';
+import { pageLoader } from './guards';
 
 /** The year of consumables the overview shows, as the Consumables page does by default. */
 const SPEND_MONTHS = 12;
 
-export const overviewLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(requireRole(queryClient, request, 'lead'), Promise.all([queryClient.ensureQueryData(loanStatsQueryOptions()), queryClient.ensureQueryData(spendQueryOptions(SPEND_MONTHS))]));
-  return null;
-};
+export const overviewLoader = pageLoader('lead', [loanStatsQueryOptions(), spendQueryOptions(SPEND_MONTHS)]);
 
 /** The lead's overview: the crib's use week by week, its busiest and idle tools, and what consumables cost. */
 export function OverviewRoute() {

@@ -1,6 +1,4 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { invitationsQueryOptions } from '@/features/people/api/get-invitations';
 import { peopleQueryOptions } from '@/features/people/api/get-people';
@@ -8,12 +6,9 @@ import { InviteForm } from '@/features/people/components/invite-form';
 import { PendingInvitations } from '@/features/people/components/pending-invitations';
 import { PeopleTable } from '@/features/people/components/people-table';
 import { Card, PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireRole } from './guards';
+import { pageLoader } from './guards';
 
-export const peopleLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(requireRole(queryClient, request, 'lead'), Promise.all([queryClient.ensureQueryData(peopleQueryOptions()), queryClient.ensureQueryData(invitationsQueryOptions())]));
-  return null;
-};
+export const peopleLoader = pageLoader('lead', [peopleQueryOptions(), invitationsQueryOptions()]);
 
 export function PeopleRoute() {
   const { data: me } = useSuspenseQuery(meQueryOptions());

@@ -1,15 +1,10 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router';
 import { restockQueryOptions } from '@/features/stock/api/get-restock';
 import { RestockList } from '@/features/stock/components/restock-list';
 import { PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireRole } from './guards';
+import { pageLoader } from './guards';
 
-export const restockLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(requireRole(queryClient, request, 'quartermaster'), queryClient.ensureQueryData(restockQueryOptions()));
-  return null;
-};
+export const restockLoader = pageLoader('quartermaster', [restockQueryOptions()]);
 
 export function RestockRoute() {
   const { data } = useSuspenseQuery(restockQueryOptions());

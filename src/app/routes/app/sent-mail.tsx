@@ -1,16 +1,11 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router';
 import { mailQueryOptions } from '@/features/mail/api/get-mail';
 import { MailList } from '@/features/mail/components/mail-list';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireRole } from './guards';
+import { pageLoader } from './guards';
 
-export const sentMailLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(requireRole(queryClient, request, 'lead'), queryClient.ensureQueryData(mailQueryOptions()));
-  return null;
-};
+export const sentMailLoader = pageLoader('lead', [mailQueryOptions()]);
 
 export function SentMailRoute() {
   const { data } = useSuspenseQuery(mailQueryOptions());

@@ -1,16 +1,11 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router';
 import { serviceDueQueryOptions } from '@/features/service/api/get-service-due';
 import { ServiceDueTable } from '@/features/service/components/service-due-table';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireRole } from './guards';
+import { pageLoader } from './guards';
 
-export const serviceLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(requireRole(queryClient, request, 'quartermaster'), queryClient.ensureQueryData(serviceDueQueryOptions()));
-  return null;
-};
+export const serviceLoader = pageLoader('quartermaster', [serviceDueQueryOptions()]);
 
 export function ServiceRoute() {
   const { data } = useSuspenseQuery(serviceDueQueryOptions());

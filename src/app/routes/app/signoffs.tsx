@@ -1,6 +1,4 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { Link, type LoaderFunctionArgs } from 'react-router';
 import { peopleQueryOptions } from '@/features/people/api/get-people';
 import { signoffRequestsQueryOptions } from '@/features/signoffs/api/get-signoff-requests';
 import { signoffsQueryOptions } from '@/features/signoffs/api/get-signoffs';
@@ -8,20 +6,11 @@ import { SignoffCaution } from '@/features/signoffs/components/signoff-caution';
 import { SignoffForm } from '@/features/signoffs/components/signoff-form';
 import { SignoffList } from '@/features/signoffs/components/signoff-list';
 import { SignoffRequestList } from '@/features/signoffs/components/signoff-request-list';
+import { LinkButton } from '@/components/ui/link-button';
 import { Card, PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireRole } from './guards';
+import { pageLoader } from './guards';
 
-export const signoffsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(
-    requireRole(queryClient, request, 'lead'),
-    Promise.all([
-      queryClient.ensureQueryData(signoffsQueryOptions()),
-      queryClient.ensureQueryData(peopleQueryOptions()),
-      queryClient.ensureQueryData(signoffRequestsQueryOptions()),
-    ]),
-  );
-  return null;
-};
+export const signoffsLoader = pageLoader('lead', [signoffsQueryOptions(), peopleQueryOptions(), signoffRequestsQueryOptions()]);
 
 export function SignoffsRoute() {
   const { data: signoffs } = useSuspenseQuery(signoffsQueryOptions());
@@ -34,9 +23,9 @@ export function SignoffsRoute() {
         title="Sign-offs"
         lead="Who may use which powered tools."
         actions={
-          <Link to="/settings" className="inline-flex min-h-12 items-center rounded-lg border-2 border-ink px-5 font-semibold text-ink">
+          <LinkButton to="/settings" variant="secondary">
             Hold time and time zone
-          </Link>
+          </LinkButton>
         }
       />
       <div className="flex flex-col gap-4">

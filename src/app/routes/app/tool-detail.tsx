@@ -13,6 +13,7 @@ import { QuartermasterCommands } from '@/features/tools/components/quartermaster
 import { ToolActionsPanel } from '@/features/tools/components/tool-actions-panel';
 import { ToolHistory } from '@/features/tools/components/tool-history';
 import { ToolSummary } from '@/features/tools/components/tool-summary';
+import { LinkButton } from '@/components/ui/link-button';
 import { Card } from '@/components/ui/page';
 import { loadAlongside, requireSignedIn } from './guards';
 import { loadOrOffline, useOfflinePage, type ScanLoaderData } from './offline-fallback';
@@ -74,9 +75,9 @@ function OnlineToolDetail({ code }: { code: string }) {
           onDone={() => void navigate(`/tools/${tool.code}`, { replace: true })}
         />
         {tool.requiredSignoff && <AskForSignoff toolCode={tool.code} signoff={tool.requiredSignoff} />}
-        <Link to="/scan" className="inline-flex min-h-12 items-center justify-center rounded-lg border-2 border-ink bg-card px-5 font-semibold">
+        <LinkButton to="/scan" variant="secondary">
           Scan another label
-        </Link>
+        </LinkButton>
         {isQuartermaster && <QuartermasterCommands tool={tool} />}
         {isQuartermaster && (
           <Link to={`/tools/${tool.code}/edit`} className="inline-flex min-h-12 items-center font-semibold underline underline-offset-4">

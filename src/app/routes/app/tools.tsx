@@ -1,17 +1,13 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { Link, type LoaderFunctionArgs } from 'react-router';
 import { hasRole } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { toolsQueryOptions } from '@/features/tools/api/get-tools';
 import { ToolCatalog } from '@/features/tools/components/tool-catalog';
+import { LinkButton } from '@/components/ui/link-button';
 import { PageHeader } from '@/components/ui/page';
-import { loadAlongside, requireSignedIn } from './guards';
+import { pageLoader } from './guards';
 
-export const toolsLoader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  await loadAlongside(requireSignedIn(queryClient, request), queryClient.ensureQueryData(toolsQueryOptions()));
-  return null;
-};
+export const toolsLoader = pageLoader('signed-in', [toolsQueryOptions()]);
 
 export function ToolsRoute() {
   const { data: me } = useSuspenseQuery(meQueryOptions());
@@ -23,9 +19,9 @@ export function ToolsRoute() {
         lead="Everything in the crib: what it is, where it lives, who has it."
         actions={
           me && hasRole(me.role, 'quartermaster') ? (
-            <Link to="/tools/new" className="inline-flex min-h-12 items-center rounded-lg bg-ink px-5 font-semibold text-card">
+            <LinkButton to="/tools/new">
               Add a tool
-            </Link>
+            </LinkButton>
           ) : undefined
         }
       />

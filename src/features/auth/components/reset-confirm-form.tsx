@@ -1,9 +1,9 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { Link } from 'react-router';
 import { z } from 'zod';
 import { newPasswordField } from '@shared/schemas/fields';
 import { Button } from '@/components/ui/button';
+import { LinkButton } from '@/components/ui/link-button';
 import { Notice } from '@/components/ui/notice';
 import { messageOf } from '@/lib/errors';
 import { useConfirmPasswordReset } from '../api/password-reset';
@@ -20,9 +20,9 @@ export function ResetConfirmForm({ token }: { token: string }) {
     return (
       <div className="flex flex-col gap-4">
         <Notice tone="ok" title="Password changed">{confirm.data.message}</Notice>
-        <Link to="/sign-in" className="inline-flex min-h-12 items-center justify-center rounded-lg bg-ink px-5 font-semibold text-card">
+        <LinkButton to="/sign-in">
           Go to sign in
-        </Link>
+        </LinkButton>
       </div>
     );
   }

@@ -3,8 +3,8 @@ import { useForm } from 'react-hook-form';
 import { toast } from 'sonner';
 import type { z } from 'zod';
 import { dismissBodySchema, type Alert } from '@shared/schemas/forecast';
-import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
 import { applyServerErrors } from '@/lib/errors';
 import { useDismissAlert } from '../api/alert-actions';
@@ -38,14 +38,7 @@ export function DismissForm({ alert, onDone }: { alert: Alert; onDone: () => voi
         error={errors.reason?.message}
         {...form.register('reason')}
       />
-      <div className="flex flex-wrap gap-2">
-        <Button type="submit" variant="danger" busy={dismiss.isPending}>
-          Dismiss alert
-        </Button>
-        <Button variant="quiet" onClick={onDone}>
-          Cancel
-        </Button>
-      </div>
+      <FormFooter submit="Dismiss alert" variant="danger" busy={dismiss.isPending} onCancel={onDone} />
     </form>
   );
 }

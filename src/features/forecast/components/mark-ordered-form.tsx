@@ -3,8 +3,8 @@ import { useForm, useWatch } from 'react-hook-form';
 import { toast } from 'sonner';
 import type { z } from 'zod';
 import { markOrderedBodySchema, type Alert } from '@shared/schemas/forecast';
-import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
 import { applyServerErrors } from '@/lib/errors';
 import { useMarkOrdered } from '../api/alert-actions';
@@ -58,14 +58,7 @@ export function MarkOrderedForm({ alert, onDone }: { alert: Alert; onDone: () =>
         />
       </div>
       <TextField label="Note (optional)" placeholder="Order number, who placed it…" error={errors.note?.message} {...form.register('note')} />
-      <div className="flex flex-wrap gap-2">
-        <Button type="submit" busy={markOrdered.isPending}>
-          Save order
-        </Button>
-        <Button variant="quiet" onClick={onDone}>
-          Cancel
-        </Button>
-      </div>
+      <FormFooter submit="Save order" busy={markOrdered.isPending} onCancel={onDone} />
     </form>
   );
 }

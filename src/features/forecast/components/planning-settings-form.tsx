@@ -2,8 +2,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { toast } from 'sonner';
 import type { ActualWaste, PlanningSettingsDto } from '@shared/schemas/forecast';
-import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
 import { applyServerErrors } from '@/lib/errors';
 import { useUpdatePlanningSettings } from '../api/planning-settings';
@@ -54,9 +54,7 @@ export function PlanningSettingsForm({ settings, waste }: { settings: PlanningSe
         {field('orderCost')}
         {field('holdingRate')}
       </div>
-      <Button type="submit" busy={update.isPending} className="self-start">
-        Save settings
-      </Button>
+      <FormFooter submit="Save settings" busy={update.isPending} />
     </form>
   );
 }

@@ -1,11 +1,13 @@
 import { useState } from 'react';
 import type { SheetLayoutDto } from '@shared/schemas/labels';
+import { BIN_KIND_LABELS } from '@shared/stock/kinds';
+import { CATEGORY_LABELS, STATUS_LABELS } from '@shared/tools/categories';
+import { ItemPicker } from '@/components/ui/item-picker';
+import { codesInListOrder } from '@/components/ui/item-picking';
 import { Card } from '@/components/ui/page';
-import type { PickableBin } from '../utils/bin-selection';
-import { codesInListOrder, type PickableTool } from '../utils/tool-selection';
-import { BinPicker } from './bin-picker';
+import { BIN_FACETS, binSearchText, type PickableBin } from '../utils/bin-selection';
+import { TOOL_FACETS, toolSearchText, type PickableTool } from '../utils/tool-selection';
 import { LabelSheetForm } from './label-sheet-form';
-import { ToolPicker } from './tool-picker';
 
 type Source = 'tools' | 'bins';
 
@@ -32,9 +34,29 @@ export function LabelSheetBuilder({ tools, bins, layouts }: LabelSheetBuilderPro
           </div>
         )}
         {bins && source === 'bins' ? (
-          <BinPicker bins={bins} selected={binsPicked} onChange={setBinsPicked} />
+          <ItemPicker
+            key="bins"
+            items={bins}
+            selected={binsPicked}
+            onChange={setBinsPicked}
+            noun={{ one: 'bin', many: 'bins' }}
+            searchLabel="Search code, designation or place"
+            searchIn={binSearchText}
+            facets={BIN_FACETS}
+            describe={describeBin}
+          />
         ) : (
-          <ToolPicker tools={tools} selected={toolsPicked} onChange={setToolsPicked} />
+          <ItemPicker
+            key="tools"
+            items={tools}
+            selected={toolsPicked}
+            onChange={setToolsPicked}
+            noun={{ one: 'tool', many: 'tools' }}
+            searchLabel="Search code, name or place"
+            searchIn={toolSearchText}
+            facets={TOOL_FACETS}
+            describe={describeTool}
+          />
         )}
       </Card>
       <Card title="2. Choose the sheet and download">
@@ -43,6 +65,25 @@ export function LabelSheetBuilder({ tools, bins, layouts }: LabelSheetBuilderPro
     </div>
   );
 }
+
+const describeTool = (tool: PickableTool) => (
+  <>
+    <span className="block break-words">{tool.name}</span>
+    <span className="block text-sm text-steel">
+      {CATEGORY_LABELS[tool.category]} · {STATUS_LABELS[tool.status]}
+    </span>
+  </>
+);
+
+const describeBin = (bin: PickableBin) => (
+  <>
+    <span className="block break-words">{bin.designation}</span>
+    <span className="block text-sm text-steel">
+      {BIN_KIND_LABELS[bin.kind]}
+      {bin.location && ` · ${bin.location}`}
+    </span>
+  </>
+);
 
 function SourceButton({ active, onClick, label, picked }: { active: boolean; onClick: () => void; label: string; picked: number }) {
   return (

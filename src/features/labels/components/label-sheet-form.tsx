@@ -3,8 +3,8 @@ import { useForm, useWatch } from 'react-hook-form';
 import { toast } from 'sonner';
 import type { z } from 'zod';
 import { labelSheetBodySchema, MAX_LABELS_PER_REQUEST, type SheetLayoutDto } from '@shared/schemas/labels';
-import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
 import { applyServerErrors } from '@/lib/errors';
 import { useDownloadLabelSheet } from '../api/download-label-sheet';
@@ -91,9 +91,7 @@ export function LabelSheetForm({ layouts, codes, nothingPicked }: LabelSheetForm
         Print the PDF at 100 % (not “fit to page”), or the labels drift off the sheet. Try a first page on plain paper and hold it
         against a label sheet to the light.
       </Notice>
-      <Button type="submit" busy={download.isPending} disabled={codes.length === 0 || tooMany} className="self-start">
-        Download label sheet (PDF)
-      </Button>
+      <FormFooter submit="Download label sheet (PDF)" busy={download.isPending} disabled={codes.length === 0 || tooMany} />
     </form>
   );
 }

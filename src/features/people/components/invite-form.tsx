@@ -4,8 +4,8 @@ import { toast } from 'sonner';
 import type { z } from 'zod';
 import { ROLE_LABELS, ROLES } from '@shared/roles';
 import { inviteBodySchema } from '@shared/schemas/people';
-import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
 import { applyServerErrors } from '@/lib/errors';
 import { useInvite } from '../api/invite';
@@ -37,9 +37,7 @@ export function InviteForm() {
         <SelectField label="Role" options={ROLE_OPTIONS} error={errors.role?.message} {...form.register('role')} />
       </div>
       <p className="text-sm text-steel">The link in the e-mail works once, for 7 days. Inviting the same address again replaces it.</p>
-      <Button type="submit" busy={invite.isPending} className="self-start">
-        Send invitation
-      </Button>
+      <FormFooter submit="Send invitation" busy={invite.isPending} />
     </form>
   );
 }

@@ -2,8 +2,8 @@ import { useForm } from 'react-hook-form';
 import { toast } from 'sonner';
 import { MM_PER_INCH } from '@shared/estimate/rivet-rules';
 import { createBuildBodySchema, type LengthUnit } from '@shared/schemas/builds';
-import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
 import { applyServerErrors } from '@/lib/errors';
 import { useCreateBuild } from '../api/save-build';
@@ -62,9 +62,7 @@ export function NewBuildForm({ unit, onDone }: { unit: LengthUnit; onDone?: () =
         error={errors.edgeFloor?.message}
         {...form.register('edgeFloor')}
       />
-      <Button type="submit" busy={isSubmitting} className="self-start">
-        Start the build
-      </Button>
+      <FormFooter submit="Start the build" busy={isSubmitting} />
     </form>
   );
 }

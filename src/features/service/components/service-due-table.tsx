@@ -1,20 +1,14 @@
-import { useTable } from '@tanstack/react-table';
 import type { ServiceDueItem } from '@shared/schemas/overdue';
-import { DataTable, listFeatures } from '@/components/ui/data-table';
+import { DataTable } from '@/components/ui/data-table';
+import { useListTable } from '@/components/ui/use-list-table';
 import { serviceColumns } from './service-columns';
 
 /** Tools needing the quartermaster, most urgent first. */
 export function ServiceDueTable({ items, withinDays }: { items: ServiceDueItem[]; withinDays: number }) {
-  const table = useTable({
-    features: listFeatures,
-    columns: serviceColumns,
-    data: items,
-    globalFilterFn: 'includesString',
-    initialState: { sorting: [{ id: 'urgency', desc: false }], pagination: { pageIndex: 0, pageSize: 25 } },
-  });
+  const list = useListTable({ columns: serviceColumns, data: items, sort: { id: 'urgency', desc: false } });
   return (
     <DataTable
-      table={table}
+      table={list.table}
       caption="Tools due for service or calibration"
       empty={`Nothing is out of service, and no service or calibration falls due in the next ${withinDays} days.`}
     />

@@ -3,8 +3,8 @@ import { useForm } from 'react-hook-form';
 import { toast } from 'sonner';
 import type { z } from 'zod';
 import { statusChangeBodySchema } from '@shared/schemas/tools';
-import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
 import { applyServerErrors } from '@/lib/errors';
 import { useServiceCommand, type ServiceCommand } from '../api/service-commands';
@@ -46,14 +46,7 @@ export function ServiceNoteForm({ code, command, submitLabel, onDone }: { code: 
     <form onSubmit={submit} noValidate className="flex w-full min-w-56 flex-col gap-3">
       {errors.root?.message && <Notice tone="bad">{errors.root.message}</Notice>}
       <TextField label={words.label} hint={words.hint} error={errors.note?.message} autoFocus {...form.register('note')} />
-      <div className="flex flex-wrap gap-2">
-        <Button type="submit" busy={run.isPending}>
-          {submitLabel}
-        </Button>
-        <Button variant="quiet" onClick={onDone}>
-          Cancel
-        </Button>
-      </div>
+      <FormFooter submit={submitLabel} busy={run.isPending} onCancel={onDone} />
     </form>
   );
 }

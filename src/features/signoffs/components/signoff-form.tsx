@@ -3,8 +3,8 @@ import { useForm } from 'react-hook-form';
 import { toast } from 'sonner';
 import type { z } from 'zod';
 import { createSignoffBodySchema, type Signoff } from '@shared/schemas/signoffs';
-import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
 import { applyServerErrors } from '@/lib/errors';
 import { useSaveSignoff } from '../api/save-signoff';
@@ -43,16 +43,7 @@ export function SignoffForm({ signoff, onDone }: { signoff?: Signoff; onDone?: (
         error={errors.description?.message}
         {...form.register('description')}
       />
-      <div className="flex flex-wrap gap-2">
-        <Button type="submit" busy={save.isPending}>
-          {signoff ? 'Save changes' : 'Define sign-off'}
-        </Button>
-        {signoff && onDone && (
-          <Button variant="quiet" onClick={onDone}>
-            Cancel
-          </Button>
-        )}
-      </div>
+      <FormFooter submit={signoff ? 'Save changes' : 'Define sign-off'} busy={save.isPending} onCancel={signoff ? onDone : undefined} />
     </form>
   );
 }

@@ -1,7 +1,8 @@
-import { createColumnHelper, useTable } from '@tanstack/react-table';
+import { createColumnHelper } from '@tanstack/react-table';
 import type { TabSummary } from '@shared/schemas/stock-money';
-import { DataTable, listFeatures, type ListFeatures } from '@/components/ui/data-table';
+import { DataTable, type ListFeatures } from '@/components/ui/data-table';
 import { TextField } from '@/components/ui/field';
+import { useListTable } from '@/components/ui/use-list-table';
 import { dollars } from './format';
 import { Cents } from './tab-columns';
 
@@ -29,21 +30,15 @@ const columns = helper.columns([
 
 /** Everyone with something charged or paid, the most owed first. */
 export function MemberTabs({ tabs }: { tabs: TabSummary[] }) {
-  const table = useTable({
-    features: listFeatures,
-    columns,
-    data: tabs,
-    globalFilterFn: 'includesString',
-    initialState: { sorting: [{ id: 'balanceCents', desc: true }], pagination: { pageIndex: 0, pageSize: 25 } },
-  });
+  const list = useListTable({ columns, data: tabs, sort: { id: 'balanceCents', desc: true } });
   const owed = tabs.reduce((s, t) => s + Math.max(0, t.balanceCents), 0);
   return (
     <div className="flex flex-col gap-3">
-      <TextField label="Search members" type="search" value={String(table.state.globalFilter ?? '')} onChange={(e) => table.setGlobalFilter(e.target.value)} />
+      <TextField label="Search members" {...list.searchProps} />
       <p className="text-sm text-steel" aria-live="polite">
         {tabs.length === 1 ? '1 member has' : `${tabs.length} members have`} a tab; {dollars(owed)} is owed to the chapter in all.
       </p>
-      <DataTable table={table} caption="Members’ tabs" empty={tabs.length === 0 ? 'Nobody has drawn or paid anything yet.' : 'Nobody matches this search.'} />
+      <DataTable table={list.table} caption="Members’ tabs" empty={tabs.length === 0 ? 'Nobody has drawn or paid anything yet.' : 'Nobody matches this search.'} />
     </div>
   );
 }

@@ -1,9 +1,10 @@
-import { createColumnHelper, useTable } from '@tanstack/react-table';
+import { createColumnHelper } from '@tanstack/react-table';
 import { useState } from 'react';
 import { PAYMENT_METHOD_LABELS } from '@shared/schemas/payment-methods';
 import type { PaymentListItem } from '@shared/schemas/payments';
 import { Button } from '@/components/ui/button';
-import { DataTable, listFeatures, type ListFeatures } from '@/components/ui/data-table';
+import { DataTable, type ListFeatures } from '@/components/ui/data-table';
+import { useListTable } from '@/components/ui/use-list-table';
 import { formatCents, formatDateTime } from '@/lib/format';
 import { RefundForm } from './refund-form';
 import { Cents } from './tab-columns';
@@ -51,13 +52,7 @@ export function PaymentsTable({ payments, canRefund }: { payments: PaymentListIt
         </Button>
       ) : null,
   });
-  const table = useTable({
-    features: listFeatures,
-    columns: canRefund ? [...columns, refundColumn] : columns,
-    data: payments,
-    globalFilterFn: 'includesString',
-    initialState: { sorting: [{ id: 'at', desc: true }], pagination: { pageIndex: 0, pageSize: 25 } },
-  });
+  const list = useListTable({ columns: canRefund ? [...columns, refundColumn] : columns, data: payments, sort: { id: 'at', desc: true } });
   return (
     <div className="flex flex-col gap-3">
       {refunding && (
@@ -68,7 +63,7 @@ export function PaymentsTable({ payments, canRefund }: { payments: PaymentListIt
           <RefundForm key={refunding.id} payment={refunding} onClose={() => setRefundingId(null)} />
         </section>
       )}
-      <DataTable table={table} caption="Payments, newest first" empty="No payments match these filters." />
+      <DataTable table={list.table} caption="Payments, newest first" empty="No payments match these filters." />
     </div>
   );
 }

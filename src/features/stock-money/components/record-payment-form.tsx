@@ -3,8 +3,8 @@ import { useForm } from 'react-hook-form';
 import { toast } from 'sonner';
 import type { z } from 'zod';
 import { paymentFormSchema } from '@shared/schemas/stock-money';
-import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { applyServerErrors } from '@/lib/errors';
@@ -52,9 +52,7 @@ export function RecordPaymentForm({ payers }: { payers: Payer[] }) {
         <TextField label="Amount" inputMode="decimal" autoComplete="off" placeholder="12.50" hint="In dollars and cents, up to $10,000.00." error={errors.amount?.message} {...form.register('amount')} />
       </div>
       <TextField label="Note (optional)" placeholder="Cash at the bench, cheque 1042…" error={errors.note?.message} {...form.register('note')} />
-      <Button type="submit" busy={record.isPending} className="self-start">
-        Record payment
-      </Button>
+      <FormFooter submit="Record payment" busy={record.isPending} />
     </form>
   );
 }

@@ -3,8 +3,8 @@ import { useForm } from 'react-hook-form';
 import { toast } from 'sonner';
 import type { z } from 'zod';
 import { refundFormSchema, type PaymentListItem } from '@shared/schemas/payments';
-import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { applyServerErrors } from '@/lib/errors';
@@ -55,14 +55,7 @@ export function RefundForm({ payment, onClose }: { payment: PaymentListItem; onC
           {...form.register('amount')}
         />
       </div>
-      <div className="flex flex-wrap gap-3">
-        <Button type="submit" variant="danger" busy={refund.isPending}>
-          Refund
-        </Button>
-        <Button variant="secondary" onClick={onClose}>
-          Cancel
-        </Button>
-      </div>
+      <FormFooter submit="Refund" variant="danger" busy={refund.isPending} onCancel={onClose} cancelVariant="secondary" />
     </form>
   );
 }

@@ -1,8 +1,8 @@
-import { useTable } from '@tanstack/react-table';
 import { useMemo } from 'react';
 import type { SpendMonth } from '@shared/schemas/stock-money';
 import type { BinKind } from '@shared/stock/kinds';
-import { DataTable, listFeatures } from '@/components/ui/data-table';
+import { DataTable } from '@/components/ui/data-table';
+import { useListTable } from '@/components/ui/use-list-table';
 import { dollars } from './format';
 import { spendColumns } from './spend-columns';
 
@@ -10,7 +10,7 @@ import { spendColumns } from './spend-columns';
 export function SpendTable({ months, kinds }: { months: SpendMonth[]; kinds: BinKind[] }) {
   const columns = useMemo(() => spendColumns(kinds), [kinds]);
   const rows = useMemo(() => [...months].reverse(), [months]);
-  const table = useTable({ features: listFeatures, columns, data: rows, initialState: { pagination: { pageIndex: 0, pageSize: 24 } } });
+  const list = useListTable({ columns, data: rows, pageSize: 24 });
   const sum = (pick: (m: SpendMonth) => number) => months.reduce((s, m) => s + pick(m), 0);
   const shrink = sum((m) => m.countAdjustmentCents);
   return (
@@ -23,7 +23,7 @@ export function SpendTable({ months, kinds }: { months: SpendMonth[]; kinds: Bin
             ? `Counts found ${dollars(shrink)} more stock than the ledger had (kept apart from use).`
             : 'Counts found the shelves matching the ledger.'}
       </p>
-      <DataTable table={table} caption="Consumables by month" empty="No months to show." />
+      <DataTable table={list.table} caption="Consumables by month" empty="No months to show." />
     </div>
   );
 }

@@ -1,11 +1,12 @@
-import { useTable, type ColumnDef, type RowData } from '@tanstack/react-table';
+import type { ColumnDef, RowData } from '@tanstack/react-table';
 import type { Tab } from '@shared/schemas/stock-money';
-import { DataTable, listFeatures, type ListFeatures } from '@/components/ui/data-table';
+import { DataTable, type ListFeatures } from '@/components/ui/data-table';
+import { useListTable } from '@/components/ui/use-list-table';
 import { tabAssemblyColumns, tabEntryColumns, tabMonthColumns } from './tab-columns';
 
 function SmallTable<T extends RowData>({ rows, columns, caption, empty }: { rows: T[]; columns: ColumnDef<ListFeatures, T>[]; caption: string; empty: string }) {
-  const table = useTable({ features: listFeatures, columns, data: rows, initialState: { pagination: { pageIndex: 0, pageSize: 12 } } });
-  return <DataTable table={table} caption={caption} empty={empty} />;
+  const list = useListTable({ columns, data: rows, pageSize: 12 });
+  return <DataTable table={list.table} caption={caption} empty={empty} />;
 }
 
 export const TabByMonth = ({ tab }: { tab: Tab }) => (

@@ -7,8 +7,8 @@ import { FINAL_DRILL } from '@shared/estimate/rivet-rules';
 import { binKindRules, createBinBodySchema, type BinFields } from '@shared/schemas/bins';
 import { BLIND_GRIP_RANGES, blindGripRange, fastenerDesignation } from '@shared/stock/fasteners';
 import { BIN_KIND_LABELS, BIN_KINDS, isBlindKind, isRivetKind, RIVET_MATERIALS, rivetHeadChoices, STEM_MATERIALS } from '@shared/stock/kinds';
-import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
 import { applyServerErrors } from '@/lib/errors';
 import { diameterText, gripDashText, lengthText } from '../utils/format';
@@ -251,9 +251,7 @@ export function BinForm({ bin, submitLabel, onSubmit }: { bin?: BinFields; submi
         <TextAreaField label="Notes" {...form.register('notes')} />
       </fieldset>
 
-      <Button type="submit" busy={isSubmitting} className="self-start">
-        {submitLabel}
-      </Button>
+      <FormFooter submit={submitLabel} busy={isSubmitting} />
     </form>
   );
 }

@@ -1,37 +1,30 @@
 import { useMemo } from 'react';
-import { useTable } from '@tanstack/react-table';
 import type { Bin } from '@shared/schemas/bins';
 import { BLIND_GRIP_RANGES } from '@shared/stock/fasteners';
 import { BIN_KIND_LABELS, BIN_KINDS } from '@shared/stock/kinds';
-import { columnFilter, DataTable, listFeatures } from '@/components/ui/data-table';
+import { DataTable } from '@/components/ui/data-table';
 import { SelectField, TextField } from '@/components/ui/field';
+import { distinctOptions, filterOptions } from '@/components/ui/filter-options';
+import { useListTable } from '@/components/ui/use-list-table';
 import { diameterText, gripDashText } from '../utils/format';
 import { binColumns, type SpecFilter } from './bin-columns';
 
 /** The rivet diameters a chapter shop stocks, as dashes in 32nds: 3/32 to 1/4 in. */
 const SHOP_DIAMETERS = [3, 4, 5, 6, 8];
 
-const KIND_FILTER = [{ value: '', label: 'All kinds' }, ...BIN_KINDS.map((k) => ({ value: k, label: BIN_KIND_LABELS[k] }))];
-const DIAMETER_FILTER = [{ value: '', label: 'Any diameter' }, ...SHOP_DIAMETERS.map((d) => ({ value: String(d), label: diameterText(d) }))];
+const KIND_FILTER = filterOptions('All kinds', BIN_KINDS, (k) => BIN_KIND_LABELS[k]);
+const DIAMETER_FILTER = filterOptions('Any diameter', SHOP_DIAMETERS, diameterText);
 const GRIP_FILTER = [{ value: '', label: 'Any grip' }, ...BLIND_GRIP_RANGES.map((g) => ({ value: String(g.dash), label: gripDashText(g.dash, g) }))];
-
-const choices = (values: string[], any: string) => [{ value: '', label: any }, ...[...new Set(values.filter(Boolean))].sort().map((v) => ({ value: v, label: v }))];
 
 /** Every bin on the shelves: search, filter by kind, spec, shelf and low stock, sort, page. */
 export function BinTable({ bins }: { bins: Bin[] }) {
-  const table = useTable({
-    features: listFeatures,
-    columns: binColumns,
-    data: bins,
-    globalFilterFn: 'includesString',
-    initialState: { sorting: [{ id: 'code', desc: false }], pagination: { pageIndex: 0, pageSize: 25 } },
-  });
-  const materials = useMemo(() => choices(bins.map((b) => b.material ?? ''), 'Any material'), [bins]);
-  const locations = useMemo(() => choices(bins.map((b) => b.location), 'Any shelf'), [bins]);
+  const list = useListTable({ columns: binColumns, data: bins, sort: { id: 'code', desc: false } });
+  const materials = useMemo(() => distinctOptions('Any material', bins.map((b) => b.material ?? '')), [bins]);
+  const locations = useMemo(() => distinctOptions('Any shelf', bins.map((b) => b.location)), [bins]);
 
-  const filterValue = (id: string) => columnFilter(table, id).value;
-  const setFilter = (id: string, value: string) => columnFilter(table, id).set(value);
-  const designation = table.getColumn('designation');
+  const filterValue = (id: string) => list.filter(id).value;
+  const setFilter = (id: string, value: string) => list.filter(id).set(value);
+  const designation = list.table.getColumn('designation');
   const spec = (designation?.getFilterValue() as SpecFilter | undefined) ?? {};
   const setSpec = (part: keyof SpecFilter, value: string) => designation?.setFilterValue({ ...spec, [part]: value });
   const lowOnly = filterValue('onHand') === 'low';
@@ -39,12 +32,7 @@ export function BinTable({ bins }: { bins: Bin[] }) {
 
   return (
     <div className="flex flex-col gap-3">
-      <TextField
-        label="Search code, designation or shelf"
-        type="search"
-        value={String(table.state.globalFilter ?? '')}
-        onChange={(e) => table.setGlobalFilter(e.target.value)}
-      />
+      <TextField label="Search code, designation or shelf" {...list.searchProps} />
       <label className="flex min-h-12 cursor-pointer items-center gap-3 self-start rounded-lg border-2 border-rule bg-card px-3 font-semibold">
         <input type="checkbox" className="size-5 accent-ink" checked={lowOnly} onChange={(e) => setFilter('onHand', e.target.checked ? 'low' : '')} />
         Low stock only
@@ -62,9 +50,9 @@ export function BinTable({ bins }: { bins: Bin[] }) {
         </div>
       </details>
       <p className="text-sm text-steel" aria-live="polite">
-        Showing {table.getFilteredRowModel().rows.length} of {bins.length} bins
+        Showing {list.shown} of {bins.length} bins
       </p>
-      <DataTable table={table} caption="Bins on the shelves" empty="No bin matches these filters." />
+      <DataTable table={list.table} caption="Bins on the shelves" empty="No bin matches these filters." />
     </div>
   );
 }

@@ -8,8 +8,8 @@ import type { CreateToolBody, Tool } from '@shared/schemas/tools';
 import { chapterDay, startOfDayNamed } from '@shared/time/chapter-time';
 import { HOUR_MS } from '@shared/time/durations';
 import { CATEGORY_LABELS, DEFAULT_LOAN_DAYS, isRivetSized, TEMPORARY_FASTENER_SIZES, TOOL_CATEGORIES, type ToolCategory } from '@shared/tools/categories';
-import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
 import { chapterTimeZone } from '@/lib/chapter-zone';
 import { applyServerErrors } from '@/lib/errors';
@@ -181,9 +181,7 @@ export function ToolForm({
         <span className="text-sm font-semibold">Notes</span>
         <textarea rows={3} className="rounded-lg border-2 border-edge bg-card p-3" {...form.register('notes')} />
       </label>
-      <Button type="submit" busy={isSubmitting} className="self-start">
-        {submitLabel}
-      </Button>
+      <FormFooter submit={submitLabel} busy={isSubmitting} />
     </form>
   );
 }

@@ -1,27 +1,45 @@
-import type { ReactNode } from 'react';
-import { Button } from '@/components/ui/button';
-import { selectAll, toggleCode, unselectAll } from '../utils/tool-selection';
+import { useMemo, useState, type ReactNode } from 'react';
+import { Button } from './button';
+import { SelectField, TextField } from './field';
+import { filterItems, selectAll, toggleCode, unselectAll, type Coded, type ItemFilter, type PickerFacet } from './item-picking';
 
-interface PickListProps<T extends { code: string }> {
-  /** Everything there is to pick, and what the filters let through. */
+/** The search box takes the columns the facets leave on a row of three. */
+const SEARCH_SPAN = ['sm:col-span-3', 'sm:col-span-2', ''];
+
+export interface ItemPickerProps<T extends Coded, K extends string> {
+  /** Everything there is to pick, in list order. */
   items: readonly T[];
-  shown: readonly T[];
   selected: ReadonlySet<string>;
   onChange: (selected: Set<string>) => void;
   noun: { one: string; many: string };
-  /** The search box and filter fields above the list. */
-  filters: ReactNode;
+  searchLabel: string;
+  /** The texts the search box looks in, the code among them. */
+  searchIn: (item: T) => string[];
+  facets: readonly PickerFacet<T, K>[];
   /** The words beside an item's code. */
   describe: (item: T) => ReactNode;
 }
 
-/** A searchable checkbox list with select-all and clear for what is shown. */
-export function PickList<T extends { code: string }>({ items, shown, selected, onChange, noun, filters, describe }: PickListProps<T>) {
+function noFilter<K extends string>(facets: readonly { id: K }[]): ItemFilter<K> {
+  return Object.fromEntries([['search', ''], ...facets.map((f) => [f.id, ''])]) as ItemFilter<K>;
+}
+
+/** A searchable checkbox list of coded items (tools, bins), with select-all and clear for what is shown. */
+export function ItemPicker<T extends Coded, K extends string>({ items, selected, onChange, noun, searchLabel, searchIn, facets, describe }: ItemPickerProps<T, K>) {
+  const [filter, setFilter] = useState<ItemFilter<K>>(() => noFilter(facets));
+  const shown = useMemo(() => filterItems(items, searchIn, facets, filter), [items, searchIn, facets, filter]);
   const shownSelected = shown.filter((t) => selected.has(t.code)).length;
   const hiddenSelected = selected.size - shownSelected;
   return (
     <div className="flex flex-col gap-3">
-      {filters}
+      <div className="grid gap-3 sm:grid-cols-3">
+        <div className={SEARCH_SPAN[facets.length] ?? ''}>
+          <TextField label={searchLabel} type="search" value={filter.search} onChange={(e) => setFilter({ ...filter, search: e.target.value })} />
+        </div>
+        {facets.map((f) => (
+          <SelectField key={f.id} label={f.label} options={f.options} value={filter[f.id]} onChange={(e) => setFilter({ ...filter, [f.id]: e.target.value })} />
+        ))}
+      </div>
       <div className="flex flex-wrap items-center gap-2">
         <Button variant="secondary" onClick={() => onChange(selectAll(selected, shown))} disabled={shown.length === 0 || shownSelected === shown.length}>
           Select all {shown.length} shown

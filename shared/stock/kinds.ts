@@ -1,19 +1,7 @@
-/** What a bin holds. The first three are rivets and carry a fastener spec. */
-export const BIN_KINDS = [
-  'blind_structural',
-  'blind_general',
-  'solid_rivet',
-  'screw',
-  'nut',
-  'washer',
-  'drill_bit',
-  'deburring_blade',
-  'sealant_primer',
-  'other',
-] as const;
-export type BinKind = (typeof BIN_KINDS)[number];
+import { valuesOf } from '../words/labelled-values';
 
-export const BIN_KIND_LABELS: Record<BinKind, string> = {
+/** What a bin holds, with its words. The first three are rivets and carry a fastener spec. */
+export const BIN_KIND_LABELS = {
   blind_structural: 'Blind rivet – structural',
   blind_general: 'Blind rivet – general purpose',
   solid_rivet: 'Solid rivet',
@@ -24,7 +12,9 @@ export const BIN_KIND_LABELS: Record<BinKind, string> = {
   deburring_blade: 'Deburring blade',
   sealant_primer: 'Sealant or primer',
   other: 'Other',
-};
+} as const;
+export type BinKind = keyof typeof BIN_KIND_LABELS;
+export const BIN_KINDS = valuesOf(BIN_KIND_LABELS);
 
 export const RIVET_KINDS = ['blind_structural', 'blind_general', 'solid_rivet'] as const satisfies readonly BinKind[];
 export type RivetKind = (typeof RIVET_KINDS)[number];

@@ -1,22 +1,7 @@
-export const TOOL_CATEGORIES = [
-  'hand_rivet_puller',
-  'pneumatic_rivet_puller',
-  'air_drill',
-  'rivet_gun',
-  'bucking_bar',
-  'drill_bit',
-  'countersink_cutter',
-  'dimple_dies',
-  'temporary_fastener_tray',
-  'deburring_tool',
-  'spacing_fan',
-  'torque_wrench',
-  'measuring',
-  'other',
-] as const;
-export type ToolCategory = (typeof TOOL_CATEGORIES)[number];
+import { valuesOf } from '../words/labelled-values';
 
-export const CATEGORY_LABELS: Record<ToolCategory, string> = {
+/** What a tool is, with its words. */
+export const CATEGORY_LABELS = {
   hand_rivet_puller: 'Hand rivet puller',
   pneumatic_rivet_puller: 'Pneumatic rivet puller',
   air_drill: 'Air drill',
@@ -31,7 +16,9 @@ export const CATEGORY_LABELS: Record<ToolCategory, string> = {
   torque_wrench: 'Torque wrench',
   measuring: 'Measuring tool',
   other: 'Other',
-};
+} as const;
+export type ToolCategory = keyof typeof CATEGORY_LABELS;
+export const TOOL_CATEGORIES = valuesOf(CATEGORY_LABELS);
 
 /**
  * Default loan period in days per category (chapter practice, editable per tool): powered and

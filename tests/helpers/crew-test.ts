@@ -7,7 +7,8 @@ import { buildTestApp } from './test-app';
  * - `t`: a fresh test app on its own in-memory database, closed after the test;
  * - `clock`: that app's clock (move `clock.now` to move the app's time);
  * - `crew`: one person per role (TestApp.addCrew);
- * - `lead`, `qm`, `member`: those people, signed in.
+ * - `lead`, `qm`, `member`: those people, signed in;
+ * - `otherMember`: a second member, Ines Other (ines@example.org), added after the crew and signed in.
  *
  * `crewTest('…', async ({ qm, member }) => …)` gets an app, its crew and two signed-in agents.
  */
@@ -21,4 +22,8 @@ export const crewTest = test
   .extend('crew', ({ t }) => t.addCrew())
   .extend('lead', async ({ t, crew }) => t.signIn(crew.lead.email))
   .extend('qm', async ({ t, crew }) => t.signIn(crew.quartermaster.email))
-  .extend('member', async ({ t, crew }) => t.signIn(crew.member.email));
+  .extend('member', async ({ t, crew }) => t.signIn(crew.member.email))
+  .extend('otherMember', async ({ t, crew: _crew }) => {
+    const ines = await t.addUser({ email: 'ines@example.org', name: 'Ines Other', role: 'member' });
+    return t.signIn(ines.email);
+  });

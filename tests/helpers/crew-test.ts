@@ -27,3 +27,9 @@ export const crewTest = test
     const ines = await t.addUser({ email: 'ines@example.org', name: 'Ines Other', role: 'member' });
     return t.signIn(ines.email);
   });
+
+/**
+ * `crewTest` for tests that use the crew's accounts by address with nobody signed in (sign-in, password
+ * reset, response contracts): the crew is added before every test, named or not.
+ */
+export const accountsTest = crewTest.extend('accounts', { auto: true }, ({ crew }) => crew);

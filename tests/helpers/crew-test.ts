@@ -1,4 +1,5 @@
 import { test } from 'vitest';
+import type { ServiceContext } from '../../server/context';
 import { buildTestApp } from './test-app';
 
 /**
@@ -8,7 +9,10 @@ import { buildTestApp } from './test-app';
  * - `clock`: that app's clock (move `clock.now` to move the app's time);
  * - `crew`: one person per role (TestApp.addCrew);
  * - `lead`, `qm`, `member`: those people, signed in;
- * - `otherMember`: a second member, Ines Other (ines@example.org), added after the crew and signed in.
+ * - `ctx`: the context the server gives a job or service (the app's database, public URL and clock; mail goes
+ *   to the outbox);
+ * - `otherMember`: a second member, added after the crew and signed in: `otherMemberPerson`, Ines Other
+ *   (ines@example.org) unless a file overrides it (`crewTest.override('otherMemberPerson', { … })`).
  *
  * `crewTest('…', async ({ qm, member }) => …)` gets an app, its crew and two signed-in agents.
  */
@@ -23,9 +27,11 @@ export const crewTest = test
   .extend('lead', async ({ t, crew }) => t.signIn(crew.lead.email))
   .extend('qm', async ({ t, crew }) => t.signIn(crew.quartermaster.email))
   .extend('member', async ({ t, crew }) => t.signIn(crew.member.email))
-  .extend('otherMember', async ({ t, crew: _crew }) => {
-    const ines = await t.addUser({ email: 'ines@example.org', name: 'Ines Other', role: 'member' });
-    return t.signIn(ines.email);
+  .extend('ctx', ({ t }): ServiceContext => ({ db: t.db, publicUrl: 'http://gripline.test', now: () => t.clock.now }))
+  .extend('otherMemberPerson', { email: 'ines@example.org', name: 'Ines Other' })
+  .extend('otherMember', async ({ t, crew: _crew, otherMemberPerson }) => {
+    const person = await t.addUser({ ...otherMemberPerson, role: 'member' });
+    return t.signIn(person.email);
   });
 
 /**

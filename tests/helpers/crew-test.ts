@@ -1,5 +1,6 @@
 import { test } from 'vitest';
 import type { ServiceContext } from '../../server/context';
+import type { PaymentsApp } from './payments-app';
 import { buildTestApp } from './test-app';
 
 /**
@@ -39,3 +40,15 @@ export const crewTest = test
  * reset, response contracts): the crew is added before every test, named or not.
  */
 export const accountsTest = crewTest.extend('accounts', { auto: true }, ({ crew }) => crew);
+
+/**
+ * `crewTest` with `payments`, the payments app (a listening test app with the local fake provider, see
+ * payments-app.ts), closed after the test. A file using it makes that app the crew's:
+ * `paymentsTest.override('t', ({ payments }) => payments.t)`.
+ */
+export const paymentsTest = crewTest.extend('payments', async ({}, { onCleanup }): Promise<PaymentsApp> => {
+  const { startPaymentsApp } = await import('./payments-app');
+  const payments = await startPaymentsApp();
+  onCleanup(() => payments.close());
+  return payments;
+});

@@ -1,4 +1,6 @@
 import { test } from 'vitest';
+import type { ServiceContext } from '../../server/context';
+import type { PaymentsApp } from './payments-app';
 import { buildTestApp } from './test-app';
 
 /**
@@ -7,7 +9,11 @@ import { buildTestApp } from './test-app';
  * - `t`: a fresh test app on its own in-memory database, closed after the test;
  * - `clock`: that app's clock (move `clock.now` to move the app's time);
  * - `crew`: one person per role (TestApp.addCrew);
- * - `lead`, `qm`, `member`: those people, signed in.
+ * - `lead`, `qm`, `member`: those people, signed in;
+ * - `ctx`: the context the server gives a job or service (the app's database, public URL and clock; mail goes
+ *   to the outbox);
+ * - `otherMember`: a second member, added after the crew and signed in: `otherMemberPerson`, Ines Other
+ *   (ines@example.org) unless a file overrides it (`crewTest.override('otherMemberPerson', { … })`).
  *
  * `crewTest('…', async ({ qm, member }) => …)` gets an app, its crew and two signed-in agents.
  */
@@ -21,4 +27,28 @@ export const crewTest = test
   .extend('crew', ({ t }) => t.addCrew())
   .extend('lead', async ({ t, crew }) => t.signIn(crew.lead.email))
   .extend('qm', async ({ t, crew }) => t.signIn(crew.quartermaster.email))
-  .extend('member', async ({ t, crew }) => t.signIn(crew.member.email));
+  .extend('member', async ({ t, crew }) => t.signIn(crew.member.email))
+  .extend('ctx', ({ t }): ServiceContext => ({ db: t.db, publicUrl: 'http://gripline.test', now: () => t.clock.now }))
+  .extend('otherMemberPerson', { email: 'ines@example.org', name: 'Ines Other' })
+  .extend('otherMember', async ({ t, crew: _crew, otherMemberPerson }) => {
+    const person = await t.addUser({ ...otherMemberPerson, role: 'member' });
+    return t.signIn(person.email);
+  });
+
+/**
+ * `crewTest` for tests that use the crew's accounts by address with nobody signed in (sign-in, password
+ * reset, response contracts): the crew is added before every test, named or not.
+ */
+export const accountsTest = crewTest.extend('accounts', { auto: true }, ({ crew }) => crew);
+
+/**
+ * `crewTest` with `payments`, the payments app (a listening test app with the local fake provider, see
+ * payments-app.ts), closed after the test. A file using it makes that app the crew's:
+ * `paymentsTest.override('t', ({ payments }) => payments.t)`.
+ */
+export const paymentsTest = crewTest.extend('payments', async ({}, { onCleanup }): Promise<PaymentsApp> => {
+  const { startPaymentsApp } = await import('./payments-app');
+  const payments = await startPaymentsApp();
+  onCleanup(() => payments.close());
+  return payments;
+});

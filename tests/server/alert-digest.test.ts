@@ -1,6 +1,5 @@
 import { eq } from 'drizzle-orm';
 import { describe, expect } from 'vitest';
-import type { ServiceContext } from '../../server/context';
 import { jobRuns } from '../../server/db/schema/crib-jobs';
 import { outboxMail } from '../../server/db/schema/mail';
 import { users } from '../../server/db/schema/users';
@@ -10,8 +9,6 @@ import { addAssembly, hundredRivetLine, screwBin } from '../helpers/planning-fix
 import { crewTest } from '../helpers/crew-test';
 
 const test = crewTest
-  // The job gets what the server gives it, with the test's clock; its mail goes to the outbox.
-  .extend('ctx', ({ t }): ServiceContext => ({ db: t.db, publicUrl: 'http://gripline.test', now: () => t.clock.now }))
   .extend('runs', ({ t }) => () => t.db.select().from(jobRuns).where(eq(jobRuns.job, ALERT_DIGEST_JOB)).all())
   /** Messages written, sent or not. */
   .extend('mailCount', ({ t }) => () => t.db.select().from(outboxMail).all().length)

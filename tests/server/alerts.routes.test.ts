@@ -1,5 +1,5 @@
 import { eq, inArray } from 'drizzle-orm';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { alertListSchema, purchaseListSchema, type Alert } from '@shared/schemas/forecast';
 import { binAlerts } from '../../server/db/schema/builds';
 import { REFRESH_AFTER_MS, refreshIfStale } from '../../server/features/planning/alerts.service';
@@ -7,44 +7,45 @@ import { addBinAs, blindRivetBin, post } from '../helpers/crib';
 import { addAssembly, DAY_MS, drawFrom, hundredRivetLine, screwBin } from '../helpers/planning-fixture';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { dataSnapshot } from '../helpers/db-snapshot';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-let lead: SignedInAgent;
-
-// Tuesday 2026-12-01 12:00 UTC: week 0 runs Monday 2026-11-30 to Sunday 2026-12-06.
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-  lead = await t.signIn('lead@example.org');
-});
-afterEach(() => t.close());
+import { crewTest } from '../helpers/crew-test';
+import type { SignedInAgent } from '../helpers/test-app';
 
 /**
  * A bin of 100 rivets (lead time 14 days) and an assembly needing 105 of them this week. Forecast:
  * week 0 demand 105, projected −5; reorder point 105 (σ = 0, no safety stock). Suggested order:
  * EOQ √(2 × 210 × $15 / (25 % × $0.12)) = √210,000 = 458.3 (D = 105 / 26 × 52 = 210 a year) → 5 packs = 500.
  */
-async function binRunningLow(over: Record<string, unknown> = {}, line: Record<string, unknown> = hundredRivetLine) {
-  const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100, leadTimeDays: 14, reorderPoint: 0, ...over }));
-  await addAssembly(member, { name: `Rib bay for ${bin.code}`, plannedStart: '2026-12-01', plannedFinish: '2026-12-06', lines: [line] });
-  return bin;
-}
-
-const refresh = async (who = qm) => {
-  const res = await post(who, '/api/alerts/refresh');
-  expect(res.status).toBe(200);
-  return res.body as { raised: number; data: Alert[] };
-};
-const alertsIn = async (state: string) => alertListSchema.parse((await qm.agent.get(`/api/alerts?state=${state}`)).body).data;
-const activeRows = () => t.db.select().from(binAlerts).where(inArray(binAlerts.state, ['open', 'ordered'])).all();
+// Tuesday 2026-12-01 12:00 UTC: week 0 runs Monday 2026-11-30 to Sunday 2026-12-06.
+const test = crewTest
+  .extend('binRunningLow', ({ qm, member }) =>
+    async (over: Record<string, unknown> = {}, line: Record<string, unknown> = hundredRivetLine) => {
+      const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100, leadTimeDays: 14, reorderPoint: 0, ...over }));
+      await addAssembly(member, { name: `Rib bay for ${bin.code}`, plannedStart: '2026-12-01', plannedFinish: '2026-12-06', lines: [line] });
+      return bin;
+    })
+  .extend('refresh', ({ qm }) => async (who: SignedInAgent = qm) => {
+    const res = await post(who, '/api/alerts/refresh');
+    expect(res.status).toBe(200);
+    return res.body as { raised: number; data: Alert[] };
+  })
+  .extend('alertsIn', ({ qm }) => async (state: string) => alertListSchema.parse((await qm.agent.get(`/api/alerts?state=${state}`)).body).data)
+  .extend('activeRows', ({ t }) => () => t.db.select().from(binAlerts).where(inArray(binAlerts.state, ['open', 'ordered'])).all())
+  /** Two rivet bins from one supplier and a screw bin from another, all running low. */
+  .extend('threeLowBins', ({ qm, member, binRunningLow, refresh }) => async () => {
+    const dome = await binRunningLow();
+    const fat = await binRunningLow({ diameter32: 5 }, { ...hundredRivetLine, rivet: { ...hundredRivetLine.rivet, diameter32: 5 } });
+    // 250 screws this week against 200 on hand (lead time 7 days): reorder point 250;
+    // EOQ √(2 × 500 × $15 / (25 % × $0.09)) = 816.5 → Q = 817; order up to 250 + 817 = 1,067:
+    // 1,067 − 200 = 867 → 18 packs of 50 = 900, $81.00.
+    const screws = await addBinAs(qm, screwBin({ supplierPart: '=HYPERLINK("http://x.test")' }));
+    await addAssembly(member, { name: 'Tool chest', plannedStart: '2026-12-01', plannedFinish: '2026-12-06', extraItems: [{ binCode: screws.code, quantity: 250 }] });
+    const { data } = await refresh();
+    expect(data).toHaveLength(3);
+    return { dome, fat, screws, alerts: data };
+  });
 
 describe('reorder alerts', () => {
-  it('are a pure read: opening the list raises nothing, however long since the last check; the check raises them', async () => {
+  test('are a pure read: opening the list raises nothing, however long since the last check; the check raises them', async ({ t, qm, binRunningLow, refresh, alertsIn }) => {
     await binRunningLow();
     const before = dataSnapshot(t.db);
     for (const state of ['active', 'open', 'all']) expect((await qm.agent.get(`/api/alerts?state=${state}`)).status).toBe(200);
@@ -55,7 +56,7 @@ describe('reorder alerts', () => {
     expect(await alertsIn('open')).toHaveLength(1);
   });
 
-  it('are checked by the 5-minute job once the last check is over 5 minutes old', async () => {
+  test('are checked by the 5-minute job once the last check is over 5 minutes old', async ({ t, binRunningLow, activeRows }) => {
     const ctx = { db: t.db, publicUrl: 'http://localhost', now: () => t.clock.now };
     expect(refreshIfStale(ctx)).toBeDefined(); // the first check after a start always runs
     await binRunningLow();
@@ -66,7 +67,7 @@ describe('reorder alerts', () => {
     expect(activeRows()).toHaveLength(1);
   });
 
-  it('goes open → ordered → closed by the next receipt, the order counting as an expected receipt meanwhile', async () => {
+  test('goes open → ordered → closed by the next receipt, the order counting as an expected receipt meanwhile', async ({ t, qm, binRunningLow, refresh, alertsIn }) => {
     const bin = await binRunningLow();
     const raised = await refresh();
     expect(raised.raised).toBe(1);
@@ -108,7 +109,7 @@ describe('reorder alerts', () => {
     expect((await refresh()).raised).toBe(0);
   });
 
-  it('keeps the rest of a partly received order on order, and closes the alert when all of it has come', async () => {
+  test('keeps the rest of a partly received order on order, and closes the alert when all of it has come', async ({ t, qm, binRunningLow, refresh, alertsIn }) => {
     const bin = await binRunningLow();
     const alert = (await refresh()).data[0]!;
     await post(qm, `/api/alerts/${alert.id}/ordered`, { quantity: 500, expectedAt: '2026-12-10' });
@@ -131,7 +132,7 @@ describe('reorder alerts', () => {
     expect(t.db.select().from(binAlerts).where(eq(binAlerts.id, alert.id)).get()).toMatchObject({ closedByMovementId: rest.body.id, closedById: null });
   });
 
-  it('records more ordered on top of an order on its way, as the purchase list asks, and the forecast expects the whole of it', async () => {
+  test('records more ordered on top of an order on its way, as the purchase list asks, and the forecast expects the whole of it', async ({ qm, binRunningLow, refresh }) => {
     const bin = await binRunningLow();
     const [alert] = (await refresh()).data;
     expect((await post(qm, `/api/alerts/${alert!.id}/ordered`, { quantity: 5, expectedAt: '2026-12-10' })).status).toBe(200);
@@ -152,7 +153,7 @@ describe('reorder alerts', () => {
     expect(late.body.error.message).toMatch(/still to order or already ordered/);
   });
 
-  it('lets the quartermaster close an order whose rest will not come, and only an ordered one', async () => {
+  test('lets the quartermaster close an order whose rest will not come, and only an ordered one', async ({ t, qm, member, binRunningLow, refresh }) => {
     const bin = await binRunningLow();
     const alert = (await refresh()).data[0]!;
     const notOrdered = await post(qm, `/api/alerts/${alert.id}/close`);
@@ -172,14 +173,14 @@ describe('reorder alerts', () => {
     expect((await post(qm, `/api/alerts/${alert.id}/close`)).status).toBe(409);
   });
 
-  it('closes an open alert too when stock is received before anyone marked it ordered', async () => {
+  test('closes an open alert too when stock is received before anyone marked it ordered', async ({ qm, binRunningLow, refresh, alertsIn }) => {
     const bin = await binRunningLow();
     const { data } = await refresh();
     await post(qm, `/api/bins/${bin.code}/receive`, { quantity: 100 });
     expect((await alertsIn('closed')).map((a) => a.id)).toEqual([data[0]!.id]);
   });
 
-  it('closes an open alert the reorder rule no longer asks for, so no screen shows an alert with nothing to order', async () => {
+  test('closes an open alert the reorder rule no longer asks for, so no screen shows an alert with nothing to order', async ({ qm, binRunningLow, refresh, alertsIn }) => {
     const bin = await binRunningLow();
     const [alert] = (await refresh()).data;
     expect(alert).toMatchObject({ state: 'open', toOrder: 500 });
@@ -193,7 +194,7 @@ describe('reorder alerts', () => {
     expect((await qm.agent.get('/api/bins/restock')).body.data).toEqual([]);
   });
 
-  it('dismisses an open or ordered alert with a reason, and keeps the bin quiet until stock falls or two weeks pass', async () => {
+  test('dismisses an open or ordered alert with a reason, and keeps the bin quiet until stock falls or two weeks pass', async ({ t, qm, member, binRunningLow, refresh, alertsIn }) => {
     const bin = await binRunningLow();
     const { data } = await refresh();
     const dismissed = await post(qm, `/api/alerts/${data[0]!.id}/dismiss`, { reason: '  The kit ships with a bag of these.  ' });
@@ -222,7 +223,7 @@ describe('reorder alerts', () => {
     expect(await alertsIn('dismissed')).toHaveLength(2);
   });
 
-  it('keeps at most one active alert per bin however often and however fast it is refreshed', async () => {
+  test('keeps at most one active alert per bin however often and however fast it is refreshed', async ({ t, lead, qm, binRunningLow, refresh, activeRows }) => {
     await binRunningLow();
     const results = await Promise.all([refresh(), refresh(lead), refresh()]);
     expect(results.map((r) => r.raised).reduce((a, b) => a + b)).toBe(1);
@@ -235,7 +236,7 @@ describe('reorder alerts', () => {
     expect(activeRows()).toHaveLength(1);
   });
 
-  it('filters by state and refuses bad input in words', async () => {
+  test('filters by state and refuses bad input in words', async ({ qm, binRunningLow, refresh, alertsIn }) => {
     await binRunningLow();
     const { data } = await refresh();
     const id = data[0]!.id;
@@ -267,7 +268,7 @@ describe('reorder alerts', () => {
     expect((await alertsIn('open')).map((a) => a.id)).toEqual([id]);
   });
 
-  it('takes “today” from the chapter’s calendar for the expected day and the purchase list’s file name', async () => {
+  test('takes “today” from the chapter’s calendar for the expected day and the purchase list’s file name', async ({ t, qm, binRunningLow, refresh }) => {
     await binRunningLow();
     const { data } = await refresh();
     // Tuesday 20:00 in Chicago is already Wednesday in UTC: the chapter's today is still Tuesday, December 1.
@@ -280,7 +281,7 @@ describe('reorder alerts', () => {
     expect(today.body.expectedAt).toBe('2026-12-01');
   });
 
-  it('is for quartermasters and leads', async () => {
+  test('is for quartermasters and leads', async ({ lead, member }) => {
     for (const path of ['/api/alerts', '/api/alerts/purchase-list', '/api/alerts/purchase-list.csv']) {
       const res = await member.agent.get(path);
       expect(res.status).toBe(403);
@@ -292,21 +293,7 @@ describe('reorder alerts', () => {
 });
 
 describe('the purchase list', () => {
-  /** Two rivet bins from one supplier and a screw bin from another, all running low. */
-  async function threeLowBins() {
-    const dome = await binRunningLow();
-    const fat = await binRunningLow({ diameter32: 5 }, { ...hundredRivetLine, rivet: { ...hundredRivetLine.rivet, diameter32: 5 } });
-    // 250 screws this week against 200 on hand (lead time 7 days): reorder point 250;
-    // EOQ √(2 × 500 × $15 / (25 % × $0.09)) = 816.5 → Q = 817; order up to 250 + 817 = 1,067:
-    // 1,067 − 200 = 867 → 18 packs of 50 = 900, $81.00.
-    const screws = await addBinAs(qm, screwBin({ supplierPart: '=HYPERLINK("http://x.test")' }));
-    await addAssembly(member, { name: 'Tool chest', plannedStart: '2026-12-01', plannedFinish: '2026-12-06', extraItems: [{ binCode: screws.code, quantity: 250 }] });
-    const { data } = await refresh();
-    expect(data).toHaveLength(3);
-    return { dome, fat, screws, alerts: data };
-  }
-
-  it('is a pure read: opening it raises no alert, and after a refresh it lists the same lines, each naming its alert', async () => {
+  test('is a pure read: opening it raises no alert, and after a refresh it lists the same lines, each naming its alert', async ({ t, qm, binRunningLow, refresh, activeRows }) => {
     const dome = await binRunningLow();
     const before = dataSnapshot(t.db);
     const read = await qm.agent.get('/api/alerts/purchase-list');
@@ -323,7 +310,7 @@ describe('the purchase list', () => {
     expect(raised).toEqual(unraised.map((l) => ({ ...l, alertId: alert!.id })));
   });
 
-  it('groups open alerts by supplier with packs and cost, leaving ordered ones out', async () => {
+  test('groups open alerts by supplier with packs and cost, leaving ordered ones out', async ({ qm, threeLowBins }) => {
     const { dome, fat, screws, alerts } = await threeLowBins();
     const fatAlert = alerts.find((a) => a.bin.code === fat.code)!;
     await post(qm, `/api/alerts/${fatAlert.id}/ordered`, { quantity: 500, expectedAt: '2026-12-08' });
@@ -338,7 +325,7 @@ describe('the purchase list', () => {
     expect(list.data[1]!.totalCents).toBe(8100);
   });
 
-  it('exports the list as CSV with formula-like text made harmless', async () => {
+  test('exports the list as CSV with formula-like text made harmless', async ({ qm, threeLowBins }) => {
     const { dome, fat, screws } = await threeLowBins();
     const res = await qm.agent.get('/api/alerts/purchase-list.csv');
     expect(res.status).toBe(200);

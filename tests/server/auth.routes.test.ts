@@ -1,16 +1,20 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it, onTestFinished } from 'vitest';
 import { meResponseSchema } from '@shared/schemas/auth';
-import { buildTestApp, PASSWORD, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { accountsTest } from '../helpers/crew-test';
+import { buildTestApp, PASSWORD, type SignedInAgent } from '../helpers/test-app';
 
-let t: TestApp;
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-});
-afterEach(() => t.close());
+const test = accountsTest
+  .extend('sessionsOf', ({ t }) => (email: string) =>
+    (
+      t.db.$client
+        .prepare("select count(*) as n from sessions where json_extract(sess, '$.userId') = (select id from users where email = ?)")
+        .get(email) as { n: number }
+    ).n)
+  .extend('deactivate', ({ t }) => (email: string) => t.db.$client.prepare('update users set deactivated_at = 1 where email = ?').run(email))
+  .extend('remove', ({ t }) => (email: string) => t.db.$client.prepare('delete from users where email = ?').run(email));
 
 describe('GET /api/health', () => {
-  it('answers 200 { ok: true } without a session', async () => {
+  test('answers 200 { ok: true } without a session', async ({ t }) => {
     const res = await (await t.anonymous()).agent.get('/api/health');
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/json/);
@@ -19,7 +23,7 @@ describe('GET /api/health', () => {
 });
 
 describe('POST /api/auth/login', () => {
-  it('signs in with the right password and returns the user and a fresh CSRF token', async () => {
+  test('signs in with the right password and returns the user and a fresh CSRF token', async ({ t }) => {
     const { agent, csrf } = await t.anonymous();
     const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'Lead@Example.org', password: PASSWORD });
     expect(res.status).toBe(200);
@@ -35,7 +39,7 @@ describe('POST /api/auth/login', () => {
     expect(me.body.user.email).toBe('lead@example.org');
   });
 
-  it('gives a new session id at sign-in', async () => {
+  test('gives a new session id at sign-in', async ({ t }) => {
     const { agent, csrf } = await t.anonymous();
     const before = (await agent.get('/api/auth/csrf')).headers['set-cookie'];
     const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'lead@example.org', password: PASSWORD });
@@ -45,7 +49,7 @@ describe('POST /api/auth/login', () => {
     expect(sid(after)).not.toBe(sid(before) ?? 'none');
   });
 
-  it('answers 401 with the same message for a wrong password and an unknown e-mail', async () => {
+  test('answers 401 with the same message for a wrong password and an unknown e-mail', async ({ t }) => {
     const { agent, csrf } = await t.anonymous();
     const wrong = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'lead@example.org', password: 'not the password' });
     const unknown = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'nobody@example.org', password: 'not the password' });
@@ -55,28 +59,28 @@ describe('POST /api/auth/login', () => {
     expect(unknown.body.error).toEqual(wrong.body.error);
   });
 
-  it('refuses a request without the CSRF token with 403', async () => {
+  test('refuses a request without the CSRF token with 403', async ({ t }) => {
     const { agent } = await t.anonymous();
     const res = await agent.post('/api/auth/login').send({ email: 'lead@example.org', password: PASSWORD });
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('CSRF_TOKEN_INVALID');
   });
 
-  it('refuses a wrong CSRF token with 403', async () => {
+  test('refuses a wrong CSRF token with 403', async ({ t }) => {
     const { agent } = await t.anonymous();
     const res = await agent.post('/api/auth/login').set('X-CSRF-Token', 'made-up').send({ email: 'lead@example.org', password: PASSWORD });
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('CSRF_TOKEN_INVALID');
   });
 
-  it('rejects the token from before sign-in once signed in', async () => {
+  test('rejects the token from before sign-in once signed in', async ({ t }) => {
     const { agent, csrf } = await t.anonymous();
     await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'lead@example.org', password: PASSWORD }).expect(200);
     const res = await agent.post('/api/auth/logout').set('X-CSRF-Token', csrf);
     expect(res.status).toBe(403);
   });
 
-  it('answers 400 with the fields at fault for a malformed body', async () => {
+  test('answers 400 with the fields at fault for a malformed body', async ({ t }) => {
     const { agent, csrf } = await t.anonymous();
     const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'not-an-email' });
     expect(res.status).toBe(400);
@@ -85,14 +89,14 @@ describe('POST /api/auth/login', () => {
     expect(res.body.error.issues.map((i: { path: string }) => i.path).sort()).toEqual(['email', 'password']);
   });
 
-  it('answers 400 INVALID_JSON for a body that is not JSON', async () => {
+  test('answers 400 INVALID_JSON for a body that is not JSON', async ({ t }) => {
     const { agent, csrf } = await t.anonymous();
     const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).set('Content-Type', 'application/json').send('{"email":');
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('INVALID_JSON');
   });
 
-  it('refuses a deactivated person with 403 even with the right password', async () => {
+  test('refuses a deactivated person with 403 even with the right password', async ({ t }) => {
     const lead = await t.signIn('lead@example.org');
     const people = await lead.agent.get('/api/users');
     const member = people.body.data.find((p: { email: string }) => p.email === 'member@example.org');
@@ -105,7 +109,7 @@ describe('POST /api/auth/login', () => {
 });
 
 describe('GET /api/auth/me and POST /api/auth/logout', () => {
-  it('answers 200 with no one for a signed-out visitor (not an error), while the other routes still answer 401', async () => {
+  test('answers 200 with no one for a signed-out visitor (not an error), while the other routes still answer 401', async ({ t }) => {
     const { agent } = await t.anonymous();
     const res = await agent.get('/api/auth/me');
     expect(res.status).toBe(200);
@@ -115,7 +119,7 @@ describe('GET /api/auth/me and POST /api/auth/logout', () => {
     expect(tools.body.error.code).toBe('NOT_SIGNED_IN');
   });
 
-  it('signs out with 204 and the session no longer works', async () => {
+  test('signs out with 204 and the session no longer works', async ({ t }) => {
     const { agent, csrf } = await t.signIn('member@example.org');
     const res = await agent.post('/api/auth/logout').set('X-CSRF-Token', csrf);
     expect(res.status).toBe(204);
@@ -125,15 +129,6 @@ describe('GET /api/auth/me and POST /api/auth/logout', () => {
 });
 
 describe('a session whose person was deactivated or removed outside the People screens', () => {
-  const sessionsOf = (email: string) =>
-    (
-      t.db.$client
-        .prepare("select count(*) as n from sessions where json_extract(sess, '$.userId') = (select id from users where email = ?)")
-        .get(email) as { n: number }
-    ).n;
-  const deactivate = (email: string) => t.db.$client.prepare('update users set deactivated_at = 1 where email = ?').run(email);
-  const remove = (email: string) => t.db.$client.prepare('delete from users where email = ?').run(email);
-
   type Send = (s: SignedInAgent) => Promise<{ status: number; body: { error?: { code: string } } }>;
   const requests: Array<[string, Send]> = [
     ['GET /api/auth/me', (s) => s.agent.get('/api/auth/me')],
@@ -143,7 +138,7 @@ describe('a session whose person was deactivated or removed outside the People s
     ['PATCH /api/me/preferences', (s) => s.agent.patch('/api/me/preferences').set('X-CSRF-Token', s.csrf).send({ preferredUnit: 'mm' })],
   ];
 
-  it.each(requests)('%s answers 401 NOT_SIGNED_IN once the person is deactivated in the database, and ends their sessions', async (_name, send) => {
+  test.for(requests)('%s answers 401 NOT_SIGNED_IN once the person is deactivated in the database, and ends their sessions', async ([_name, send], { t, sessionsOf, deactivate }) => {
     const phone = await t.signIn('member@example.org');
     await t.signIn('member@example.org');
     expect(sessionsOf('member@example.org')).toBe(2);
@@ -155,7 +150,7 @@ describe('a session whose person was deactivated or removed outside the People s
     expect((await phone.agent.get('/api/auth/me')).body.user).toBeNull();
   });
 
-  it.each(requests)('%s answers 401 NOT_SIGNED_IN once the person’s row is deleted', async (_name, send) => {
+  test.for(requests)('%s answers 401 NOT_SIGNED_IN once the person’s row is deleted', async ([_name, send], { t, remove }) => {
     const phone = await t.signIn('member@example.org');
     const id = (await phone.agent.get('/api/auth/me')).body.user.id as number;
     remove('member@example.org');
@@ -166,7 +161,7 @@ describe('a session whose person was deactivated or removed outside the People s
     expect(left.n).toBe(0);
   });
 
-  it('lets someone else sign in on the same phone afterwards', async () => {
+  test('lets someone else sign in on the same phone afterwards', async ({ t, deactivate }) => {
     const phone = await t.signIn('member@example.org');
     deactivate('member@example.org');
     expect((await phone.agent.get('/api/tools')).status).toBe(401);
@@ -179,8 +174,8 @@ describe('a session whose person was deactivated or removed outside the People s
 
 describe('sign-in rate limiting', () => {
   it('answers 429 with Retry-After after too many failures for one account, and a success is not counted', async () => {
-    await t.close();
-    t = await buildTestApp({ rateLimit: { windowMs: 60_000, perIp: 100, perAccount: 3 } });
+    const t = await buildTestApp({ rateLimit: { windowMs: 60_000, perIp: 100, perAccount: 3 } });
+    onTestFinished(() => t.close());
     await t.addUser({ email: 'member@example.org' });
     const { agent, csrf } = await t.anonymous();
     const login = (password: string) =>
@@ -201,8 +196,8 @@ describe('sign-in rate limiting', () => {
   });
 
   it('after too many failures from one address, refuses it on the accounts it failed on, yet lets a member behind it sign in', async () => {
-    await t.close();
-    t = await buildTestApp({ rateLimit: { windowMs: 60_000, perIp: 3, perAccount: 100 } });
+    const t = await buildTestApp({ rateLimit: { windowMs: 60_000, perIp: 3, perAccount: 100 } });
+    onTestFinished(() => t.close());
     await t.addUser({ email: 'member@example.org' });
     const { agent, csrf } = await t.anonymous();
     for (let i = 0; i < 3; i++) {
@@ -220,8 +215,8 @@ describe('sign-in rate limiting', () => {
   });
 
   it("does not lock the owner out when someone else keeps guessing the account's password from another address", async () => {
-    await t.close();
-    t = await buildTestApp({ rateLimit: { windowMs: 60_000, perIp: 100, perAccount: 3 }, trustProxyHops: 1 });
+    const t = await buildTestApp({ rateLimit: { windowMs: 60_000, perIp: 100, perAccount: 3 }, trustProxyHops: 1 });
+    onTestFinished(() => t.close());
     await t.addUser({ email: 'member@example.org' });
     const { agent, csrf } = await t.anonymous();
     const from = (address: string, password: string) =>

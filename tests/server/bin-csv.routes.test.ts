@@ -1,28 +1,16 @@
 import Papa from 'papaparse';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { importPreviewSchema, importResultSchema } from '@shared/schemas/bin-import';
 import { errorEnvelopeSchema } from '@shared/schemas/errors';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
 import { giveAssemblies } from '../helpers/planning';
 import { findUserByEmail } from '../../server/accounts/users.repo';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-});
-afterEach(() => t.close());
+import { crewTest } from '../helpers/crew-test';
+import { buildTestApp, type SignedInAgent } from '../helpers/test-app';
 
 const HEADER = 'code,kind,name,head,material,stem_material,diameter_32nds,grip_dash,length_16ths,unit,pack_size,unit_cost,notes,opening_stock';
 const csvOf = (...rows: string[]) => [HEADER, ...rows].join('\r\n');
-const binCount = async (who: SignedInAgent = qm) => ((await who.agent.get('/api/bins')).body as { meta: { total: number } }).meta.total;
 
 /** Reads a CSV answer as records by column name (the byte-order mark off). */
 function records(text: string): Record<string, string>[] {
@@ -32,8 +20,25 @@ function records(text: string): Record<string, string>[] {
 const GOOD_BLIND = ',blind_structural,,dome,5056,steel,1/8,2,,each,100,0.12,,500';
 const GOOD_SCREW = ',Screw,Screw #8-32 × 1/2 pan head,,,,,,,each,50,0.09,,120';
 
+const test = crewTest
+  .extend('binCount', ({ qm }) => async (who: SignedInAgent = qm) => ((await who.agent.get('/api/bins')).body as { meta: { total: number } }).meta.total)
+  .extend('at', ({ clock }) => (iso: string) => {
+    clock.now = new Date(iso);
+  })
+  /** The crib's export, read back as records, and written again with `edit` applied to each record. */
+  .extend('editedExport', ({ qm }) => async (edit: (r: Record<string, string>) => void = () => {}): Promise<string> => {
+    const rows = records((await qm.agent.get('/api/bins/export.csv')).text);
+    rows.forEach(edit);
+    return Papa.unparse(rows, { newline: '\r\n' });
+  })
+  .extend('twoBins', ({ qm, member }) => async () => {
+    await addBinAs(qm, blindRivetBin({ initialQuantity: 500, supplier: 'Cedar Valley Fastener Supply', location: 'Shelf A2' }));
+    await addBinAs(qm, { kind: 'screw', name: 'Screw #8-32 × 1/2 pan head', unit: 'each', packSize: 50, unitCost: 0.09, initialQuantity: 120, notes: 'Keep dry.\nSecond line' });
+    expect((await post(member, '/api/bins/B-0001/draw', { quantity: 20 })).status).toBe(201);
+  });
+
 describe('POST /api/bins/import/preview', () => {
-  it('checks each row, naming the line and column of every problem, and creates nothing', async () => {
+  test('checks each row, naming the line and column of every problem, and creates nothing', async ({ qm, binCount }) => {
     await addBinAs(qm, blindRivetBin());
     const csv = csvOf(
       GOOD_BLIND, // line 2
@@ -81,7 +86,7 @@ describe('POST /api/bins/import/preview', () => {
     expect(await binCount()).toBe(1);
   });
 
-  it('reads kinds by label in any case, diameters as fractions, dashes with the trade’s leading dash, and a text/csv body', async () => {
+  test('reads kinds by label in any case, diameters as fractions, dashes with the trade’s leading dash, and a text/csv body', async ({ qm }) => {
     const csv = csvOf(',BLIND RIVET - STRUCTURAL,,Dome,5056,Steel,-5,-3,,each,100,$0.14,,0', ',blind rivet – general purpose,,large flange,aluminum,aluminium,3/32 in,1,,each,100,0.05,,0', ',Solid rivet,,Universal head,2117-T4,,4,,6,each,100,0.03,,0');
     const res = await qm.agent.post('/api/bins/import/preview').set('X-CSRF-Token', qm.csrf).type('text/csv').send(csv);
     expect(res.status).toBe(200);
@@ -96,7 +101,7 @@ describe('POST /api/bins/import/preview', () => {
     ]);
   });
 
-  it('flags an empty file, a header without bins, unknown and missing columns, and cells that are not numbers', async () => {
+  test('flags an empty file, a header without bins, unknown and missing columns, and cells that are not numbers', async ({ qm }) => {
     const empty = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: ' \r\n' })).body);
     expect(empty).toMatchObject({ rows: [], canImport: false, fileErrors: [{ column: '', message: expect.stringContaining('The file is empty') }] });
 
@@ -113,7 +118,7 @@ describe('POST /api/bins/import/preview', () => {
     expect(odd.canImport).toBe(false);
   });
 
-  it('numbers the lines of a long file right, with quoted cells over two lines all through it', async () => {
+  test('numbers the lines of a long file right, with quoted cells over two lines all through it', async ({ qm }) => {
     // Long enough to be read in several pieces; every note spans two lines, so bin k starts on line 2 + 2k.
     const rows = Array.from({ length: 1200 }, (_, k) => `,screw,"Screw #8-32 × ${k + 1}/64, ""pan"" head",,,,,,,each,50,${k === 777 ? 'cheap' : '0.09'},"Top shelf,\nleft bin ${k}",10`);
     const preview = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: csvOf(...rows) })).body);
@@ -124,7 +129,7 @@ describe('POST /api/bins/import/preview', () => {
     expect(preview.rows[777]!.errors).toEqual([{ column: 'unit_cost', message: 'Line 1556, unit_cost: enter a number, not "cheap".' }]);
   });
 
-  it('takes a file larger than the API’s usual body limit, refuses one over 2 MB, and is for the quartermaster only', async () => {
+  test('takes a file larger than the API’s usual body limit, refuses one over 2 MB, and is for the quartermaster only', async ({ lead, qm, member }) => {
     const many = csvOf(...Array.from({ length: 1500 }, (_, i) => `,screw,Screw #8-32 × ${i + 1}/16 pan head stainless,,,,,,,each,50,0.09,,10`));
     expect(many.length).toBeGreaterThan(100_000);
     const big = await post(qm, '/api/bins/import/preview', { csv: many });
@@ -139,7 +144,6 @@ describe('POST /api/bins/import/preview', () => {
     const refused = await post(member, '/api/bins/import/preview', { csv: csvOf(GOOD_BLIND) });
     expect(refused.status).toBe(403);
     expect(refused.body.error.code).toBe('FORBIDDEN');
-    const lead = await t.signIn('lead@example.org');
     expect((await post(lead, '/api/bins/import/preview', { csv: csvOf(GOOD_BLIND) })).status).toBe(200);
     // Paths the CSV router does not know still reach the bins router, for members too.
     expect((await member.agent.get('/api/bins')).status).toBe(200);
@@ -148,7 +152,7 @@ describe('POST /api/bins/import/preview', () => {
 
 describe('POST /api/bins/import', () => {
   // Solid rivet heads: MS20470 universal and MS20426 100° countersunk (AC 43.13-1B para 4-57a; NAVEDTRA 14315 Table 3-1).
-  it('refuses a solid rivet row with a large flange head, naming the head column in words', async () => {
+  test('refuses a solid rivet row with a large flange head, naming the head column in words', async ({ qm, binCount }) => {
     const before = await binCount();
     const res = await post(qm, '/api/bins/import', { csv: csvOf(GOOD_BLIND, ',Solid rivet,,Large flange,2117-T4,,4,,6,each,100,0.03,,0') });
     expect(res.status).toBe(400);
@@ -158,7 +162,7 @@ describe('POST /api/bins/import', () => {
     expect(await binCount()).toBe(before);
   });
 
-  it('refuses the whole file when one row is bad, and writes nothing', async () => {
+  test('refuses the whole file when one row is bad, and writes nothing', async ({ qm, binCount }) => {
     await addBinAs(qm, blindRivetBin());
     const before = await binCount();
     const res = await post(qm, '/api/bins/import', { csv: csvOf(GOOD_BLIND, GOOD_SCREW, ',blind_structural,,dome,5056,steel,4,7,,each,1,0.1,,10') });
@@ -175,7 +179,7 @@ describe('POST /api/bins/import', () => {
     expect(empty.body.error.issues[0].path).toBe('file');
   });
 
-  it('creates every bin in one go, with its opening stock as the first ledger entry', async () => {
+  test('creates every bin in one go, with its opening stock as the first ledger entry', async ({ qm, binCount }) => {
     await addBinAs(qm, blindRivetBin());
     const res = await post(qm, '/api/bins/import', { csv: csvOf(GOOD_BLIND, 'B-0050' + GOOD_SCREW) });
     expect(res.status).toBe(201);
@@ -198,7 +202,7 @@ describe('POST /api/bins/import', () => {
 });
 
 describe('GET /api/bins/export.csv', () => {
-  it('exports every bin so that the file imports into an empty crib with the same designations and stock', async () => {
+  test('exports every bin so that the file imports into an empty crib with the same designations and stock', async ({ t, qm, member }) => {
     await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
     await addBinAs(qm, { kind: 'solid_rivet', head: 'countersunk', material: '2117-T4', diameter32: 4, length16: 3.5, unitCost: 0.0275, initialQuantity: 300, location: 'Drawer D1' });
     await addBinAs(qm, { kind: 'drill_bit', name: 'Drill #40 jobber, cobalt', drillSize: '#40', unit: 'each', unitCost: 2.5, initialQuantity: 12, notes: 'Keep dry.\nOne box "spare", opened' });
@@ -235,7 +239,7 @@ describe('GET /api/bins/export.csv', () => {
     }
   });
 
-  it('gives a monel solid rivet bin a plain description and no MS number, on its page and in the file', async () => {
+  test('gives a monel solid rivet bin a plain description and no MS number, on its page and in the file', async ({ qm }) => {
     // MS20470 and MS20426 designate aluminium-alloy rivets only: material codes A, AD, D, DD, B (trade-checks.md §4).
     const bin = await addBinAs(qm, { kind: 'solid_rivet', head: 'dome', material: 'monel', diameter32: 4, length16: 6, unitCost: 0.09, initialQuantity: 100 });
     const plain = 'Solid, universal head, monel · 1/8 in · 3/8 in long';
@@ -243,23 +247,18 @@ describe('GET /api/bins/export.csv', () => {
     expect(records((await qm.agent.get('/api/bins/export.csv')).text)[0]).toMatchObject({ code: bin.code, designation: plain });
   });
 
-  it('is for the quartermaster and the lead only, as are the import and its template', async () => {
+  test('is for the quartermaster and the lead only, as are the import and its template', async ({ t, lead, member, binCount }) => {
     expect((await member.agent.get('/api/bins/export.csv')).status).toBe(403);
     expect((await member.agent.get('/api/bins/import/template.csv')).status).toBe(403);
     expect((await post(member, '/api/bins/import', { csv: csvOf(GOOD_BLIND) })).status).toBe(403);
     expect((await (await t.anonymous()).agent.get('/api/bins/export.csv')).status).toBe(401);
     expect(await binCount()).toBe(0);
-    const lead = await t.signIn('lead@example.org');
     expect((await lead.agent.get('/api/bins/export.csv')).status).toBe(200);
   });
 });
 
 describe('GET /api/bins/ledger.csv', () => {
-  const at = (iso: string) => {
-    t.clock.now = new Date(iso);
-  };
-
-  it('lists every entry of the days asked for, both ends included, oldest first', async () => {
+  test('lists every entry of the days asked for, both ends included, oldest first', async ({ t, qm, member, at }) => {
     at('2026-11-28T23:59:59.999Z');
     giveAssemblies(t.db, findUserByEmail(t.db, 'member@example.org')!.id, [7], { build: 'Two-seat kit', assemblies: { 7: 'Left aileron' } });
     await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
@@ -291,7 +290,7 @@ describe('GET /api/bins/ledger.csv', () => {
     expect(day.map((r) => r.note)).toEqual(['Opening stock']);
   });
 
-  it('answers 400 when the start is after the end or a date is malformed', async () => {
+  test('answers 400 when the start is after the end or a date is malformed', async ({ qm, member }) => {
     const reversed = await qm.agent.get('/api/bins/ledger.csv?from=2026-12-01&to=2026-11-01');
     expect(reversed.status).toBe(400);
     expect(reversed.body.error).toMatchObject({ code: 'VALIDATION_FAILED', issues: [{ path: 'to', message: 'The end date is before the start date: swap them.' }] });
@@ -305,7 +304,7 @@ describe('GET /api/bins/ledger.csv', () => {
 });
 
 describe('GET /api/bins/import/template.csv', () => {
-  it('serves a header and two example rows that preview as valid', async () => {
+  test('serves a header and two example rows that preview as valid', async ({ qm }) => {
     const res = await qm.agent.get('/api/bins/import/template.csv');
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
@@ -320,14 +319,14 @@ describe('a CSV file that is not UTF-8', () => {
   const latin = (text: string) => Buffer.from(text, 'latin1');
   const screwRow = ',Screw,Screw #8-32 × 1/2 pan head,,,,,,,each,50,0.09,Société Aéro,120';
 
-  it('is read as Windows-1252 when it plainly is, so accents arrive intact', async () => {
+  test('is read as Windows-1252 when it plainly is, so accents arrive intact', async ({ qm }) => {
     const res = await qm.agent.post('/api/bins/import').set('X-CSRF-Token', qm.csrf).type('text/csv').send(latin(csvOf(screwRow)));
     expect(res.status).toBe(201);
     const bins = (await qm.agent.get('/api/bins')).body as { data: { name: string; notes: string }[] };
     expect(bins.data.map((b) => [b.name, b.notes])).toEqual([['Screw #8-32 × 1/2 pan head', 'Société Aéro']]);
   });
 
-  it('is refused with 400 CSV_NOT_TEXT when it is neither UTF-8 nor Windows-1252, and nothing is created', async () => {
+  test('is refused with 400 CSV_NOT_TEXT when it is neither UTF-8 nor Windows-1252, and nothing is created', async ({ qm, binCount }) => {
     const bytes = Buffer.concat([Buffer.from(csvOf(GOOD_BLIND), 'utf8'), Buffer.from([0x0d, 0x0a, 0x81, 0x2c, 0x00])]);
     const res = await qm.agent.post('/api/bins/import').set('X-CSRF-Token', qm.csrf).type('text/csv').send(bytes);
     expect(res.status).toBe(400);
@@ -335,7 +334,7 @@ describe('a CSV file that is not UTF-8', () => {
     expect(await binCount()).toBe(0);
   });
 
-  it('is refused, naming the line, when its text was already mangled into replacement characters', async () => {
+  test('is refused, naming the line, when its text was already mangled into replacement characters', async ({ qm }) => {
     const res = await post(qm, '/api/bins/import/preview', { csv: csvOf(GOOD_BLIND, screwRow.replace('Société', 'Soci\uFFFDt\uFFFD')) });
     expect(res.status).toBe(400);
     const { error } = errorEnvelopeSchema.parse(res.body);
@@ -345,19 +344,8 @@ describe('a CSV file that is not UTF-8', () => {
 });
 
 describe('re-importing bins by code', () => {
-  /** The crib's export, read back as records, and written again with `edit` applied to each record. */
-  async function editedExport(edit: (r: Record<string, string>) => void = () => {}): Promise<string> {
-    const rows = records((await qm.agent.get('/api/bins/export.csv')).text);
-    rows.forEach(edit);
-    return Papa.unparse(rows, { newline: '\r\n' });
-  }
-  const twoBins = async () => {
-    await addBinAs(qm, blindRivetBin({ initialQuantity: 500, supplier: 'Cedar Valley Fastener Supply', location: 'Shelf A2' }));
-    await addBinAs(qm, { kind: 'screw', name: 'Screw #8-32 × 1/2 pan head', unit: 'each', packSize: 50, unitCost: 0.09, initialQuantity: 120, notes: 'Keep dry.\nSecond line' });
-    expect((await post(member, '/api/bins/B-0001/draw', { quantity: 20 })).status).toBe(201);
-  };
 
-  it('reports every row of an untouched export as unchanged and writes nothing', async () => {
+  test('reports every row of an untouched export as unchanged and writes nothing', async ({ qm, editedExport, twoBins }) => {
     await twoBins();
     const before = (await qm.agent.get('/api/bins')).body.data;
     const csv = await editedExport();
@@ -376,7 +364,7 @@ describe('re-importing bins by code', () => {
     expect((await qm.agent.get('/api/bins')).body.data).toEqual(before);
   });
 
-  it('updates the descriptive fields of bins named by code, shows each change old → new, and never moves stock', async () => {
+  test('updates the descriptive fields of bins named by code, shows each change old → new, and never moves stock', async ({ qm, binCount, editedExport, twoBins }) => {
     await twoBins();
     const csv = await editedExport((r) => {
       if (r.code === 'B-0001') Object.assign(r, { unit_cost: '0.15', location: 'Shelf B1', reorder_point: '250', opening_stock: '999', on_hand: '999' });
@@ -409,7 +397,7 @@ describe('re-importing bins by code', () => {
     expect(ledger.map((e) => e.kind)).toEqual(['draw', 'receive']);
   });
 
-  it('keeps the values of columns the file leaves out, and checks the updated bin as a whole', async () => {
+  test('keeps the values of columns the file leaves out, and checks the updated bin as a whole', async ({ qm, twoBins }) => {
     await twoBins();
     const counted = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: 'code,kind,on_hand,opening_stock\r\nB-0001,blind_structural,480,500' })).body);
     expect(counted.rows[0]).toMatchObject({ status: 'unchanged', warnings: [{ column: 'opening_stock', message: expect.stringContaining('the file says 500 on hand and the bin holds 480') }] });
@@ -423,7 +411,7 @@ describe('re-importing bins by code', () => {
     expect(broken.canImport).toBe(false);
   });
 
-  it('warns, without refusing, when a new bin has the specification of a bin already in the crib', async () => {
+  test('warns, without refusing, when a new bin has the specification of a bin already in the crib', async ({ qm, twoBins }) => {
     await twoBins();
     const preview = importPreviewSchema.parse((await post(qm, '/api/bins/import/preview', { csv: csvOf(GOOD_BLIND, GOOD_SCREW.replace('Screw #8-32 × 1/2 pan head', 'screw #8-32 × 1/2 PAN HEAD')) })).body);
     expect(preview.rows.map((r) => [r.code, r.status, r.warnings.map((w) => w.message)])).toEqual([
@@ -434,7 +422,7 @@ describe('re-importing bins by code', () => {
     expect((await post(qm, '/api/bins/import', { csv: csvOf(GOOD_BLIND) })).status).toBe(201);
   });
 
-  it('reads the template and the export alike: the template imports, its bins export with the same columns and values, and read back unchanged', async () => {
+  test('reads the template and the export alike: the template imports, its bins export with the same columns and values, and read back unchanged', async ({ qm }) => {
     const template = (await qm.agent.get('/api/bins/import/template.csv')).text;
     const first = await post(qm, '/api/bins/import', { csv: template });
     expect(first.status).toBe(201);

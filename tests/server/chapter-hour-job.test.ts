@@ -1,19 +1,10 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import type { ServiceContext } from '../../server/context';
+import { describe, expect } from 'vitest';
 import { atChapterHour } from '../../server/jobs/chapter-hour';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
-import { buildTestApp, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let ctx: ServiceContext;
-beforeEach(async () => {
-  t = await buildTestApp();
-  ctx = { db: t.db, publicUrl: 'http://gripline.test', now: () => t.clock.now };
-});
-afterEach(() => t.close());
+import { crewTest } from '../helpers/crew-test';
 
 describe('atChapterHour', () => {
-  it('runs a daily job in the hour it is due on the chapter’s clock, whatever the server’s zone, and follows a new zone at once', async () => {
+  crewTest('runs a daily job in the hour it is due on the chapter’s clock, whatever the server’s zone, and follows a new zone at once', async ({ t, ctx }) => {
     const runs: string[] = [];
     const tick = atChapterHour(ctx, 7, () => {
       runs.push(t.clock.now.toISOString());

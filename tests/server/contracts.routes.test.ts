@@ -1,4 +1,4 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import {
   csrfResponseSchema,
   invitationPreviewSchema,
@@ -8,21 +8,15 @@ import {
 import { errorEnvelopeSchema } from '@shared/schemas/errors';
 import { mailListSchema } from '@shared/schemas/mail';
 import { peopleListSchema, pendingInvitationListSchema, pendingInvitationSchema, personSchema } from '@shared/schemas/people';
-import { buildTestApp, PASSWORD, tokenFromLink, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-});
-afterEach(() => t.close());
+import { accountsTest } from '../helpers/crew-test';
+import { PASSWORD, tokenFromLink } from '../helpers/test-app';
 
 /**
  * Every response matches the shared schema exactly (strict objects: an extra field, such as a
  * password hash, fails the parse), so client and server cannot drift apart.
  */
 describe('response contracts', () => {
-  it('auth: csrf, login and me', async () => {
+  accountsTest('auth: csrf, login and me', async ({ t }) => {
     const { agent, csrf } = await t.anonymous();
     expect(csrfResponseSchema.safeParse({ token: csrf }).success).toBe(true);
     const login = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'lead@example.org', password: PASSWORD });
@@ -32,7 +26,7 @@ describe('response contracts', () => {
     expect(JSON.stringify(login.body) + JSON.stringify(me.body)).not.toMatch(/argon2|password/i);
   });
 
-  it('people, invitations and mail', async () => {
+  accountsTest('people, invitations and mail', async ({ t }) => {
     const lead = await t.signIn('lead@example.org');
     const people = await lead.agent.get('/api/users');
     expect(peopleListSchema.parse(people.body).data).toHaveLength(3);
@@ -52,7 +46,7 @@ describe('response contracts', () => {
     expect(personSchema.parse(changed.body).role).toBe('quartermaster');
   });
 
-  it('errors use the one envelope', async () => {
+  accountsTest('errors use the one envelope', async ({ t }) => {
     const { agent, csrf } = await t.anonymous();
     const bad = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({});
     const parsed = errorEnvelopeSchema.parse(bad.body);

@@ -1,13 +1,6 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { buildTestApp, PASSWORD, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let memberId: number;
-beforeEach(async () => {
-  t = await buildTestApp();
-  memberId = (await t.addCrew()).member.id;
-});
-afterEach(() => t.close());
+import { describe, expect } from 'vitest';
+import { accountsTest } from '../helpers/crew-test';
+import { PASSWORD, type SignedInAgent } from '../helpers/test-app';
 
 /** Nothing of a stack trace or of the database's own wording reaches the client. */
 function expectNoInternals(body: unknown) {
@@ -17,15 +10,17 @@ function expectNoInternals(body: unknown) {
   expect(text).not.toMatch(/sqlite|no such table|users/i);
 }
 
+const test = accountsTest.extend('agentFor', ({ t }) => async (as: As): Promise<SignedInAgent> => (as === 'lead' ? t.signIn('lead@example.org') : t.anonymous()));
+
 describe('unknown API paths', () => {
-  it.each(['/api/nope', '/api/auth/nope', '/api/health/nope', '/api/auth'])('GET %s answers 404 NOT_FOUND in the JSON envelope', async (path) => {
+  test.for(['/api/nope', '/api/auth/nope', '/api/health/nope', '/api/auth'])('GET %s answers 404 NOT_FOUND in the JSON envelope', async (path, { t }) => {
     const res = await (await t.anonymous()).agent.get(path);
     expect(res.status).toBe(404);
     expect(res.headers['content-type']).toMatch(/application\/json/);
     expect(res.body).toEqual({ error: { code: 'NOT_FOUND', message: expect.stringContaining(path) } });
   });
 
-  it('answers 404 NOT_FOUND to a signed-in lead too, for any method that passes the CSRF check', async () => {
+  test('answers 404 NOT_FOUND to a signed-in lead too, for any method that passes the CSRF check', async ({ t }) => {
     const { agent, csrf } = await t.signIn('lead@example.org');
     const res = await agent.delete('/api/nope').set('X-CSRF-Token', csrf);
     expect(res.status).toBe(404);
@@ -42,25 +37,25 @@ describe('a path with a malformed percent-encoding', () => {
     expectNoInternals(res.body);
   };
 
-  it.each(['/api/tools/%', '/api/bins/%', '/api/users/%', '/api/assemblies/%zz', '/api/tools/%E0%A4%A', '/api/nope/%', '/api/tools/T-1%/photos'])(
+  test.for(['/api/tools/%', '/api/bins/%', '/api/users/%', '/api/assemblies/%zz', '/api/tools/%E0%A4%A', '/api/nope/%', '/api/tools/T-1%/photos'])(
     'GET %s answers 400 BAD_REQUEST_PATH to a signed-in lead',
-    async (path) => {
+    async (path, { t }) => {
       const { agent } = await t.signIn('lead@example.org');
       expectBadPath(await agent.get(path));
     },
   );
 
-  it.each(['/api/invitations/by-token/abc%', '/api/tools/%', '/api/health/%', '/%', '/tools/%zz'])('GET %s answers 400 BAD_REQUEST_PATH to anyone', async (path) => {
+  test.for(['/api/invitations/by-token/abc%', '/api/tools/%', '/api/health/%', '/%', '/tools/%zz'])('GET %s answers 400 BAD_REQUEST_PATH to anyone', async (path, { t }) => {
     const { agent } = await t.anonymous();
     expectBadPath(await agent.get(path));
   });
 
-  it('answers 400 to a POST as well, before its CSRF check', async () => {
+  test('answers 400 to a POST as well, before its CSRF check', async ({ t }) => {
     const { agent, csrf } = await t.signIn('lead@example.org');
     expectBadPath(await agent.post('/api/tools/%/checkout').set('X-CSRF-Token', csrf).send({}));
   });
 
-  it('reads a well-formed encoding as usual (%2D is a hyphen; %25 is a percent sign the code schema refuses)', async () => {
+  test('reads a well-formed encoding as usual (%2D is a hyphen; %25 is a percent sign the code schema refuses)', async ({ t }) => {
     const { agent } = await t.signIn('lead@example.org');
     const missing = await agent.get('/api/tools/T%2D0042');
     expect(missing.status).toBe(404);
@@ -72,7 +67,7 @@ describe('a path with a malformed percent-encoding', () => {
 });
 
 describe('unexpected failures', () => {
-  it('answers 500 INTERNAL_ERROR without internals when an async handler rejects (sign-in with the users table gone)', async () => {
+  test('answers 500 INTERNAL_ERROR without internals when an async handler rejects (sign-in with the users table gone)', async ({ t }) => {
     const { agent, csrf } = await t.anonymous();
     t.db.$client.exec('drop table users');
     const res = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'lead@example.org', password: PASSWORD });
@@ -82,7 +77,7 @@ describe('unexpected failures', () => {
     expectNoInternals(res.body);
   });
 
-  it('answers 500 INTERNAL_ERROR without internals when middleware throws (a signed-in request with the users table gone)', async () => {
+  test('answers 500 INTERNAL_ERROR without internals when middleware throws (a signed-in request with the users table gone)', async ({ t }) => {
     const { agent } = await t.signIn('member@example.org');
     t.db.$client.exec('drop table users');
     const res = await agent.get('/api/auth/me');
@@ -92,7 +87,7 @@ describe('unexpected failures', () => {
     expectNoInternals(res.body);
   });
 
-  it('keeps answering normally after a 500', async () => {
+  test('keeps answering normally after a 500', async ({ t }) => {
     const { agent, csrf } = await t.anonymous();
     t.db.$client.exec('alter table users rename to users_away');
     expect((await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: 'lead@example.org', password: PASSWORD })).status).toBe(500);
@@ -101,7 +96,7 @@ describe('unexpected failures', () => {
     expect(res.status).toBe(200);
   });
 
-  it('answers 413 BODY_TOO_LARGE for a body over 100 kB', async () => {
+  test('answers 413 BODY_TOO_LARGE for a body over 100 kB', async ({ t }) => {
     const { agent, csrf } = await t.anonymous();
     const res = await agent
       .post('/api/auth/login')
@@ -113,7 +108,7 @@ describe('unexpected failures', () => {
 });
 
 describe('security headers', () => {
-  it.each(['/api/health', '/api/nope'])('sets helmet’s headers on %s and hides the framework', async (path) => {
+  test.for(['/api/health', '/api/nope'])('sets helmet’s headers on %s and hides the framework', async (path, { t }) => {
     const res = await (await t.anonymous()).agent.get(path);
     expect(res.headers['x-content-type-options']).toBe('nosniff');
     expect(res.headers['content-security-policy']).toMatch(/default-src 'self'/);
@@ -122,7 +117,7 @@ describe('security headers', () => {
     expect(res.headers['x-powered-by']).toBeUndefined();
   });
 
-  it('sends no Strict-Transport-Security and no upgrade-insecure-requests without secure cookies', async () => {
+  test('sends no Strict-Transport-Security and no upgrade-insecure-requests without secure cookies', async ({ t }) => {
     const res = await (await t.anonymous()).agent.get('/api/health');
     expect(res.headers['strict-transport-security']).toBeUndefined();
     expect(res.headers['content-security-policy']).not.toMatch(/upgrade-insecure-requests/);
@@ -165,13 +160,9 @@ describe('bad input on every mutating route', () => {
     { route: 'PATCH /api/users/:id', as: 'lead', method: 'patch', path: ({ member }) => `/api/users/${member}`, body: { role: 7, active: 'yes' }, paths: ['active', 'role'] },
   ];
 
-  async function agentFor(as: As): Promise<SignedInAgent> {
-    return as === 'lead' ? t.signIn('lead@example.org') : t.anonymous();
-  }
-
-  it.each(cases)('$route answers 400 VALIDATION_FAILED naming each field for a body of the wrong shape', async ({ as, method, path, body, paths }) => {
+  test.for(cases)('$route answers 400 VALIDATION_FAILED naming each field for a body of the wrong shape', async ({ as, method, path, body, paths }, { t, crew, agentFor }) => {
     const { agent, csrf } = await agentFor(as);
-    const res = await agent[method](path({ member: memberId })).set('X-CSRF-Token', csrf).send(body as object);
+    const res = await agent[method](path({ member: crew.member.id })).set('X-CSRF-Token', csrf).send(body as object);
     expect(res.status).toBe(400);
     expect(res.headers['content-type']).toMatch(/application\/json/);
     expect(res.body.error.code).toBe('VALIDATION_FAILED');
@@ -183,9 +174,9 @@ describe('bad input on every mutating route', () => {
     expect(await t.lastMailTo('lead@example.org')).toBeUndefined();
   });
 
-  it.each(cases)('$route answers 400 VALIDATION_FAILED for a JSON array instead of an object', async ({ as, method, path }) => {
+  test.for(cases)('$route answers 400 VALIDATION_FAILED for a JSON array instead of an object', async ({ as, method, path }, { crew, agentFor }) => {
     const { agent, csrf } = await agentFor(as);
-    const res = await agent[method](path({ member: memberId })).set('X-CSRF-Token', csrf).send([1, 2, 3]);
+    const res = await agent[method](path({ member: crew.member.id })).set('X-CSRF-Token', csrf).send([1, 2, 3]);
     expect(res.status).toBe(400);
     expect(res.headers['content-type']).toMatch(/application\/json/);
     expect(res.body.error.code).toBe('VALIDATION_FAILED');
@@ -193,17 +184,17 @@ describe('bad input on every mutating route', () => {
     expect(res.body.error.issues.length).toBeGreaterThan(0);
   });
 
-  it.each(cases)('$route answers 400 VALIDATION_FAILED for no body at all', async ({ as, method, path }) => {
+  test.for(cases)('$route answers 400 VALIDATION_FAILED for no body at all', async ({ as, method, path }, { crew, agentFor }) => {
     const { agent, csrf } = await agentFor(as);
-    const res = await agent[method](path({ member: memberId })).set('X-CSRF-Token', csrf);
+    const res = await agent[method](path({ member: crew.member.id })).set('X-CSRF-Token', csrf);
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('VALIDATION_FAILED');
     expect(res.body.error.issues.length).toBeGreaterThan(0);
   });
 
-  it.each(cases)('$route answers 400 INVALID_JSON for a body that is not JSON', async ({ as, method, path }) => {
+  test.for(cases)('$route answers 400 INVALID_JSON for a body that is not JSON', async ({ as, method, path }, { crew, agentFor }) => {
     const { agent, csrf } = await agentFor(as);
-    const res = await agent[method](path({ member: memberId }))
+    const res = await agent[method](path({ member: crew.member.id }))
       .set('X-CSRF-Token', csrf)
       .set('Content-Type', 'application/json')
       .send('{"email": ');

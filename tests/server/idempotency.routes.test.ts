@@ -1,25 +1,11 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { sweepIdempotencyKeys } from '../../server/features/idempotency/idempotency.service';
 import { addBinAs, addToolAs, blindRivetBin } from '../helpers/crib';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
+import type { SignedInAgent } from '../helpers/test-app';
 
 const HOUR = 60 * 60 * 1000;
 const DAY = 24 * HOUR;
-
-let t: TestApp;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-let other: SignedInAgent;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  await t.addUser({ email: 'ines@example.org', name: 'Ines Other' });
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-  other = await t.signIn('ines@example.org');
-});
-afterEach(() => t.close());
 
 /** A POST as a queued action would send it: CSRF token plus the queue's headers. */
 const send = (who: SignedInAgent, path: string, body: object, headers: Record<string, string> = {}) => {
@@ -28,12 +14,13 @@ const send = (who: SignedInAgent, path: string, body: object, headers: Record<st
   return req.send(body);
 };
 const iso = (ms: number) => new Date(ms).toISOString();
-const now = () => t.clock.now.getTime();
-const onHand = async (code: string) => (await member.agent.get(`/api/bins/${code}`)).body.onHand as number;
-const openLoans = async () => (await qm.agent.get('/api/loans/open')).body.data as { tool: { code: string }; holder: { name: string } }[];
+const test = crewTest
+  .extend('now', ({ clock }) => () => clock.now.getTime())
+  .extend('onHand', ({ member }) => async (code: string) => (await member.agent.get(`/api/bins/${code}`)).body.onHand as number)
+  .extend('openLoans', ({ qm }) => async () => (await qm.agent.get('/api/loans/open')).body.data as { tool: { code: string }; holder: { name: string } }[]);
 
 describe('Idempotency-Key on check out, return, draw and return unused', () => {
-  it('checks a tool out once for two sends of one key, and answers the same both times, the second marked replayed', async () => {
+  test('checks a tool out once for two sends of one key, and answers the same both times, the second marked replayed', async ({ t, qm, member, now, openLoans }) => {
     const tool = await addToolAs(qm, { name: 'Air drill, straight', category: 'other', loanDays: 3 });
     const first = await send(member, `/api/tools/${tool.code}/checkout`, {}, { 'Idempotency-Key': 'checkout-key-0001' });
     expect(first.status).toBe(201);
@@ -49,7 +36,7 @@ describe('Idempotency-Key on check out, return, draw and return unused', () => {
     expect(events.filter((e) => e.action === 'checked_out')).toHaveLength(1);
   });
 
-  it('draws once for two sends of one key: stock drops once and both answers match', async () => {
+  test('draws once for two sends of one key: stock drops once and both answers match', async ({ qm, member, onHand }) => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
     const first = await send(member, `/api/bins/${bin.code}/draw`, { quantity: 40, note: 'left flap' }, { 'Idempotency-Key': 'draw-key-0001' });
     expect(first.status).toBe(201);
@@ -63,7 +50,7 @@ describe('Idempotency-Key on check out, return, draw and return unused', () => {
     expect(ledger.filter((m) => m.kind === 'draw')).toHaveLength(1);
   });
 
-  it('returns unused and returns a tool once per key', async () => {
+  test('returns unused and returns a tool once per key', async ({ qm, member, onHand }) => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));
     await send(member, `/api/bins/${bin.code}/draw`, { quantity: 30 });
     const back = [0, 1].map(() => send(member, `/api/bins/${bin.code}/return`, { quantity: 10 }, { 'Idempotency-Key': 'return-unused-01' }));
@@ -82,7 +69,7 @@ describe('Idempotency-Key on check out, return, draw and return unused', () => {
     expect(r2.body).toEqual(r1.body);
   });
 
-  it('answers 422 IDEMPOTENCY_KEY_REUSED for the same key with another body or path, and changes nothing', async () => {
+  test('answers 422 IDEMPOTENCY_KEY_REUSED for the same key with another body or path, and changes nothing', async ({ qm, member, onHand }) => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
     const other = await addBinAs(qm, blindRivetBin({ initialQuantity: 500, location: 'Shelf B1' }));
     await send(member, `/api/bins/${bin.code}/draw`, { quantity: 40 }, { 'Idempotency-Key': 'draw-key-0002' });
@@ -99,10 +86,10 @@ describe('Idempotency-Key on check out, return, draw and return unused', () => {
     expect(await onHand(other.code)).toBe(500);
   });
 
-  it('keeps keys per member: another member’s same key is a new action', async () => {
+  test('keeps keys per member: another member’s same key is a new action', async ({ qm, member, otherMember, onHand }) => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
     const mine = await send(member, `/api/bins/${bin.code}/draw`, { quantity: 40 }, { 'Idempotency-Key': 'shared-key-0001' });
-    const theirs = await send(other, `/api/bins/${bin.code}/draw`, { quantity: 40 }, { 'Idempotency-Key': 'shared-key-0001' });
+    const theirs = await send(otherMember, `/api/bins/${bin.code}/draw`, { quantity: 40 }, { 'Idempotency-Key': 'shared-key-0001' });
     expect(theirs.status).toBe(201);
     expect(theirs.headers['idempotent-replayed']).toBeUndefined();
     expect(theirs.body.member.name).toBe('Ines Other');
@@ -110,14 +97,14 @@ describe('Idempotency-Key on check out, return, draw and return unused', () => {
     expect(await onHand(bin.code)).toBe(420);
   });
 
-  it('replays a refusal as the same refusal, even once the action would succeed', async () => {
+  test('replays a refusal as the same refusal, even once the action would succeed', async ({ qm, member, otherMember, onHand, openLoans }) => {
     const tool = await addToolAs(qm, { name: 'Rivet gun, 2X', category: 'other' });
     await send(member, `/api/tools/${tool.code}/checkout`, {});
-    const refused = await send(other, `/api/tools/${tool.code}/checkout`, {}, { 'Idempotency-Key': 'queued-checkout-1' });
+    const refused = await send(otherMember, `/api/tools/${tool.code}/checkout`, {}, { 'Idempotency-Key': 'queued-checkout-1' });
     expect(refused.status).toBe(409);
     expect(refused.body.error.code).toBe('TOOL_ON_LOAN');
     await send(member, `/api/tools/${tool.code}/return`, { condition: 'ok' });
-    const again = await send(other, `/api/tools/${tool.code}/checkout`, {}, { 'Idempotency-Key': 'queued-checkout-1' });
+    const again = await send(otherMember, `/api/tools/${tool.code}/checkout`, {}, { 'Idempotency-Key': 'queued-checkout-1' });
     expect(again.status).toBe(409);
     expect(again.headers['idempotent-replayed']).toBe('true');
     expect(again.body).toEqual(refused.body);
@@ -134,7 +121,7 @@ describe('Idempotency-Key on check out, return, draw and return unused', () => {
     expect(await onHand(bin.code)).toBe(110);
   });
 
-  it('stores nothing for an unexpected failure, so the same key runs the action when sent again', async () => {
+  test('stores nothing for an unexpected failure, so the same key runs the action when sent again', async ({ t, qm, member, openLoans }) => {
     const tool = await addToolAs(qm, { name: 'Rivet puller, long reach', category: 'other' });
     // The audit trail refusing a row stands in for a fault the service does not expect.
     t.db.$client.exec("create trigger fail_event before insert on tool_events begin select raise(abort, 'disk trouble'); end");
@@ -149,7 +136,7 @@ describe('Idempotency-Key on check out, return, draw and return unused', () => {
     expect(await openLoans()).toHaveLength(1);
   });
 
-  it('answers 400 INVALID_HEADER naming a malformed key or time, and does nothing', async () => {
+  test('answers 400 INVALID_HEADER naming a malformed key or time, and does nothing', async ({ qm, member, now, onHand }) => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
     const shortKey = await send(member, `/api/bins/${bin.code}/draw`, { quantity: 1 }, { 'Idempotency-Key': 'short' });
     expect(shortKey.status).toBe(400);
@@ -167,7 +154,7 @@ describe('Idempotency-Key on check out, return, draw and return unused', () => {
 });
 
 describe('X-Performed-At and X-Catalogue-At', () => {
-  it('records a check out at the member’s time, with the due date counted from it and the arrival beside it', async () => {
+  test('records a check out at the member’s time, with the due date counted from it and the arrival beside it', async ({ qm, member, now }) => {
     const tool = await addToolAs(qm, { name: 'Air drill, angle', category: 'other', loanDays: 3 });
     const performed = now() - 13 * HOUR; // Monday 23:00, the chapter day before it reached the server
     const res = await send(member, `/api/tools/${tool.code}/checkout`, {}, { 'X-Performed-At': iso(performed), 'X-Catalogue-At': iso(now() - 14 * HOUR) });
@@ -180,13 +167,13 @@ describe('X-Performed-At and X-Catalogue-At', () => {
     expect(mine[0]).toMatchObject({ checkedOutAt: iso(performed), dueAt: due, checkoutRecordedAt: iso(now()) });
   });
 
-  it('records a time in the future as the arrival time', async () => {
+  test('records a time in the future as the arrival time', async ({ qm, member, now }) => {
     const tool = await addToolAs(qm, { name: 'Spacing fan', category: 'other' });
     const res = await send(member, `/api/tools/${tool.code}/checkout`, {}, { 'X-Performed-At': iso(now() + 3 * HOUR) });
     expect(res.body.checkedOutAt).toBe(iso(now()));
   });
 
-  it('records a time before the catalogue copy as the copy’s time, and keeps the arrival on the ledger entry', async () => {
+  test('records a time before the catalogue copy as the copy’s time, and keeps the arrival on the ledger entry', async ({ qm, member, now }) => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
     const copy = now() - HOUR;
     const res = await send(member, `/api/bins/${bin.code}/draw`, { quantity: 5 }, { 'X-Performed-At': iso(now() - 5 * HOUR), 'X-Catalogue-At': iso(copy) });
@@ -195,13 +182,13 @@ describe('X-Performed-At and X-Catalogue-At', () => {
     expect(res.body.arrivedAt).toBe(iso(now()));
   });
 
-  it('records a time more than 7 days old as 7 days before arrival', async () => {
+  test('records a time more than 7 days old as 7 days before arrival', async ({ qm, member, now }) => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
     const res = await send(member, `/api/bins/${bin.code}/draw`, { quantity: 5 }, { 'X-Performed-At': iso(now() - 30 * DAY) });
     expect(res.body.at).toBe(iso(now() - 7 * DAY));
   });
 
-  it('never records a return before its check out', async () => {
+  test('never records a return before its check out', async ({ t, qm, member, now }) => {
     const tool = await addToolAs(qm, { name: 'Deburring tool', category: 'other' });
     const out = await send(member, `/api/tools/${tool.code}/checkout`, {});
     t.clock.now = new Date(now() + HOUR);
@@ -217,7 +204,7 @@ describe('X-Performed-At and X-Catalogue-At', () => {
 });
 
 describe('sweeping old keys', () => {
-  it('deletes keys older than 7 days and keeps newer ones', async () => {
+  test('deletes keys older than 7 days and keeps newer ones', async ({ t, qm, member, now, onHand }) => {
     const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 500 }));
     await send(member, `/api/bins/${bin.code}/draw`, { quantity: 1 }, { 'Idempotency-Key': 'old-key-00001' });
     t.clock.now = new Date(now() + 6 * DAY);

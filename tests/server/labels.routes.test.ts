@@ -1,5 +1,5 @@
 import type { Response } from 'superagent';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { sheetLayoutListSchema } from '@shared/schemas/labels';
 import { findSheetLayout } from '../../labels/layouts';
 import { pageSizeInPoints } from '../../labels/sheet-geometry';
@@ -7,28 +7,17 @@ import { tools } from '../../server/db/schema/tools';
 import { addBinAs, blindRivetBin } from '../helpers/crib';
 import { pdfPageCount, pdfRects, pdfStreams, shownText } from '../helpers/pdf-read';
 import { decodeQrPng, rectsToPng } from '../helpers/qr-raster';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let qm: SignedInAgent;
-let lead: SignedInAgent;
-let member: SignedInAgent;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  [qm, lead, member] = await Promise.all([t.signIn('qm@example.org'), t.signIn('lead@example.org'), t.signIn('member@example.org')]);
-});
-afterEach(() => t.close());
+import { crewTest } from '../helpers/crew-test';
+import type { SignedInAgent } from '../helpers/test-app';
 
 const code = (n: number) => `T-${String(n).padStart(4, '0')}`;
 
-function addTools(count: number, name = (n: number) => `Hand rivet puller ${n}`) {
+const test = crewTest.extend('addTools', ({ t }) => (count: number, name = (n: number) => `Hand rivet puller ${n}`) => {
   t.db
     .insert(tools)
     .values(Array.from({ length: count }, (_, i) => ({ code: code(i + 1), name: name(i + 1), category: 'hand_rivet_puller' as const })))
     .run();
-}
+});
 
 /** Collects a PDF answer as bytes; a JSON answer (an error) is parsed as usual. */
 function bytesOrJson(res: Response, done: (err: Error | null, body: unknown) => void) {
@@ -46,7 +35,7 @@ const postSheet = (who: SignedInAgent, body: unknown) =>
 const textOf = (pdf: Buffer) => pdfStreams(pdf).flatMap(shownText);
 
 describe('GET /api/labels/layouts', () => {
-  it('lists the sheet layouts to a quartermaster and to a lead', async () => {
+  test('lists the sheet layouts to a quartermaster and to a lead', async ({ lead, qm }) => {
     for (const who of [qm, lead]) {
       const res = await who.agent.get('/api/labels/layouts');
       expect(res.status).toBe(200);
@@ -55,13 +44,13 @@ describe('GET /api/labels/layouts', () => {
     }
   });
 
-  it('answers 403 FORBIDDEN to a member', async () => {
+  test('answers 403 FORBIDDEN to a member', async ({ member }) => {
     const res = await member.agent.get('/api/labels/layouts');
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('FORBIDDEN');
   });
 
-  it('answers 401 NOT_SIGNED_IN when signed out', async () => {
+  test('answers 401 NOT_SIGNED_IN when signed out', async ({ t }) => {
     const { agent } = await t.anonymous();
     const res = await agent.get('/api/labels/layouts');
     expect(res.status).toBe(401);
@@ -70,7 +59,7 @@ describe('GET /api/labels/layouts', () => {
 });
 
 describe('POST /api/labels/sheet', () => {
-  it('answers a PDF download with every requested code and tool name', async () => {
+  test('answers a PDF download with every requested code and tool name', async ({ qm, addTools }) => {
     addTools(3, (n) => ['Pneumatic rivet puller', 'Air drill, 90 degree', 'Bucking bar, 1 lb'][n - 1]!);
     const res = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001', 'T-0002', 'T-0003'] });
     expect(res.status).toBe(200);
@@ -82,21 +71,21 @@ describe('POST /api/labels/sheet', () => {
     expect(textOf(pdf)).toEqual(['T-0001', 'Pneumatic rivet puller', 'T-0002', 'Air drill, 90 degree', 'T-0003', 'Bucking bar, 1 lb']);
   });
 
-  it('lets a lead print labels too', async () => {
+  test('lets a lead print labels too', async ({ lead, addTools }) => {
     addTools(1);
     const res = await postSheet(lead, { layoutId: 'a4-3x8-70x37mm', codes: ['T-0001'] });
     expect(res.status).toBe(200);
     expect(res.headers['content-disposition']).toBe('attachment; filename="gripline-labels-a4-3x8-70x37mm.pdf"');
   });
 
-  it.each([
+  test.for<[string, string, number, number, number]>([
     ['30 labels fill one Letter page', 'letter-3x10-2.625x1in', 30, 0, 1],
     ['31 labels need a second page', 'letter-3x10-2.625x1in', 31, 0, 2],
     ['25 labels after 5 used ones still fit one page', 'letter-3x10-2.625x1in', 25, 5, 1],
     ['26 labels after 5 used ones spill onto a second page', 'letter-3x10-2.625x1in', 26, 5, 2],
     ['24 labels after 23 used ones take two A4 pages', 'a4-3x8-70x37mm', 24, 23, 2],
     ['a thermal roll prints one label per page', 'thermal-1x1-2x1in', 4, 0, 4],
-  ])('pages: %s', async (_name, layoutId, count, skip, pages) => {
+  ])('pages: %s', async ([_name, layoutId, count, skip, pages], { qm, addTools }) => {
     addTools(count);
     const codes = Array.from({ length: count }, (_, i) => code(i + 1));
     const res = await postSheet(qm, { layoutId, codes, skip });
@@ -107,14 +96,14 @@ describe('POST /api/labels/sheet', () => {
     for (const c of codes) expect(text).toContain(c);
   });
 
-  it('prints a label for each time a code is listed, and reads codes in any case', async () => {
+  test('prints a label for each time a code is listed, and reads codes in any case', async ({ qm, addTools }) => {
     addTools(2);
     const res = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: ['t-0001', ' T-0002 ', 'T-0001'] });
     expect(res.status).toBe(200);
     expect(textOf(res.body as Buffer).filter((s) => s.startsWith('T-'))).toEqual(['T-0001', 'T-0002', 'T-0001']);
   });
 
-  it('answers 400 UNKNOWN_CODES naming every code no tool has', async () => {
+  test('answers 400 UNKNOWN_CODES naming every code no tool has', async ({ qm, addTools }) => {
     addTools(1);
     const res = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001', 'T-0404', 'T-0500', 'T-0404'] });
     expect(res.status).toBe(400);
@@ -123,7 +112,7 @@ describe('POST /api/labels/sheet', () => {
     expect(res.body.error.issues.map((i: { path: string }) => i.path)).toEqual(['codes.1', 'codes.2', 'codes.3']);
   });
 
-  it('answers 400 for a layout that does not exist', async () => {
+  test('answers 400 for a layout that does not exist', async ({ qm, addTools }) => {
     addTools(1);
     const res = await postSheet(qm, { layoutId: 'letter-99x99', codes: ['T-0001'] });
     expect(res.status).toBe(400);
@@ -132,7 +121,7 @@ describe('POST /api/labels/sheet', () => {
     expect(res.body.error.message).toMatch(/letter-3x10-2\.625x1in/);
   });
 
-  it('answers 400 when more labels are said to be used than a page has', async () => {
+  test('answers 400 when more labels are said to be used than a page has', async ({ qm, addTools }) => {
     addTools(1);
     const thermal = await postSheet(qm, { layoutId: 'thermal-1x1-2x1in', codes: ['T-0001'], skip: 1 });
     expect(thermal.status).toBe(400);
@@ -144,7 +133,7 @@ describe('POST /api/labels/sheet', () => {
     expect((await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'], skip: 29 })).status).toBe(200);
   });
 
-  it.each([
+  test.for([
     ['no codes', { layoutId: 'letter-3x10-2.625x1in', codes: [] }, 'codes'],
     ['more than 300 codes', { layoutId: 'letter-3x10-2.625x1in', codes: Array.from({ length: 301 }, (_, i) => code(i + 1)) }, 'codes'],
     ['a code that is not a tool code', { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001', 'drill'] }, 'codes.1'],
@@ -153,7 +142,7 @@ describe('POST /api/labels/sheet', () => {
     ['a negative skip', { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'], skip: -1 }, 'skip'],
     ['a fractional skip', { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'], skip: 1.5 }, 'skip'],
     ['an unknown field', { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'], copies: 2 }, 'copies'],
-  ])('answers 400 VALIDATION_FAILED for %s', async (_name, body, path) => {
+  ])('answers 400 VALIDATION_FAILED for %s', async ([_name, body, path], { qm, addTools }) => {
     addTools(1);
     const res = await postSheet(qm, body);
     expect(res.status).toBe(400);
@@ -162,7 +151,7 @@ describe('POST /api/labels/sheet', () => {
     expect(res.body.error.message.length).toBeGreaterThan(10);
   });
 
-  it('answers 403 FORBIDDEN to a member and 401 NOT_SIGNED_IN when signed out', async () => {
+  test('answers 403 FORBIDDEN to a member and 401 NOT_SIGNED_IN when signed out', async ({ t, member, addTools }) => {
     addTools(1);
     const body = { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001'] };
     const refused = await postSheet(member, body);
@@ -179,7 +168,7 @@ describe('POST /api/labels/sheet with bin codes', () => {
   const solidRivetBin = { kind: 'solid_rivet', head: 'dome', material: '2117-T4', diameter32: 4, length16: 6, packSize: 1000, unitCost: 0.021 };
   const screwBin = { kind: 'screw', name: 'Screw #8-32 × 1/2 pan head, stainless', packSize: 100, unitCost: 0.18 };
 
-  it('prints a bin label with its code and designation, and its QR reads back as the bin code', async () => {
+  test('prints a bin label with its code and designation, and its QR reads back as the bin code', async ({ qm }) => {
     const bin = await addBinAs(qm, solidRivetBin);
     const res = await postSheet(qm, { layoutId: 'thermal-1x1-2x1in', codes: [bin.code] });
     expect(res.status).toBe(200);
@@ -191,7 +180,7 @@ describe('POST /api/labels/sheet with bin codes', () => {
     expect(decodeQrPng(rectsToPng(page.width, page.height, pdfRects(content!), 8))).toBe(bin.code);
   });
 
-  it('titles a blind rivet bin with its readable designation and grip range, and other bins with their name', async () => {
+  test('titles a blind rivet bin with its readable designation and grip range, and other bins with their name', async ({ qm }) => {
     const blind = await addBinAs(qm, blindRivetBin());
     const screw = await addBinAs(qm, screwBin);
     const res = await postSheet(qm, { layoutId: 'a4-3x8-70x37mm', codes: [blind.code, screw.code] });
@@ -203,7 +192,7 @@ describe('POST /api/labels/sheet with bin codes', () => {
     expect(text.slice(at(screw.code) + 1).join(' ')).toBe('Screw #8-32 × 1/2 pan head, stainless');
   });
 
-  it('prints a general-purpose blind rivet bin label with its whole grip range and "Not for structure" on every layout', async () => {
+  test('prints a general-purpose blind rivet bin label with its whole grip range and "Not for structure" on every layout', async ({ qm }) => {
     // Grip dash -1 covers 0.020–0.062 in (TM 10-5410-221-14/1 Table 4-3); general-purpose pull-type blind rivets
     // are not approved for aircraft structure (AC 43.13-1B p. 4-24).
     const bin = await addBinAs(qm, blindRivetBin({ kind: 'blind_general', material: 'aluminium', grip16: 1 }));
@@ -217,7 +206,7 @@ describe('POST /api/labels/sheet with bin codes', () => {
     }
   });
 
-  it('puts no structure caution on a structural blind rivet or a solid rivet bin', async () => {
+  test('puts no structure caution on a structural blind rivet or a solid rivet bin', async ({ qm }) => {
     const blind = await addBinAs(qm, blindRivetBin());
     const solid = await addBinAs(qm, solidRivetBin);
     const res = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: [blind.code, solid.code] });
@@ -225,7 +214,7 @@ describe('POST /api/labels/sheet with bin codes', () => {
     expect(textOf(res.body as Buffer).join(' ')).not.toContain('structure');
   });
 
-  it('prints tool and bin labels together, in the order given, each QR reading back as its code', async () => {
+  test('prints tool and bin labels together, in the order given, each QR reading back as its code', async ({ qm, addTools }) => {
     addTools(2, (n) => ['Rivet gun', 'Air drill'][n - 1]!);
     const bin = await addBinAs(qm, solidRivetBin);
     const codes = ['T-0002', bin.code, 'T-0001'];
@@ -239,7 +228,7 @@ describe('POST /api/labels/sheet with bin codes', () => {
     expect(pages.map((content) => decodeQrPng(rectsToPng(page.width, page.height, pdfRects(content), 8)))).toEqual(codes);
   });
 
-  it('answers 400 UNKNOWN_CODES for a bin code no bin has', async () => {
+  test('answers 400 UNKNOWN_CODES for a bin code no bin has', async ({ qm }) => {
     const bin = await addBinAs(qm, solidRivetBin);
     const res = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: [bin.code, 'B-0404'] });
     expect(res.status).toBe(400);
@@ -248,7 +237,7 @@ describe('POST /api/labels/sheet with bin codes', () => {
     expect(res.body.error.issues).toEqual([{ path: 'codes.1', message: 'No bin has the code B-0404.' }]);
   });
 
-  it('names tools and bins together when both kinds of code are unknown', async () => {
+  test('names tools and bins together when both kinds of code are unknown', async ({ qm, addTools }) => {
     addTools(1);
     const res = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001', 'B-0404', 'T-0404'] });
     expect(res.status).toBe(400);
@@ -260,10 +249,10 @@ describe('POST /api/labels/sheet with bin codes', () => {
     ]);
   });
 
-  it.each([
+  test.for([
     ['a code of neither kind', 'X-0001'],
     ['a bin code with too few digits', 'B-107'],
-  ])('answers 400 VALIDATION_FAILED for %s', async (_name, bad) => {
+  ])('answers 400 VALIDATION_FAILED for %s', async ([_name, bad], { qm, addTools }) => {
     addTools(1);
     const res = await postSheet(qm, { layoutId: 'letter-3x10-2.625x1in', codes: ['T-0001', bad] });
     expect(res.status).toBe(400);

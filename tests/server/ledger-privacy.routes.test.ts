@@ -1,36 +1,19 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { ledgerSchema, type LedgerEntry } from '@shared/schemas/bins';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
 import { addAssembly } from '../helpers/planning-fixture';
-import { buildTestApp, type Crew, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let crew: Crew;
-let qm: SignedInAgent;
-let lead: SignedInAgent;
-let mia: SignedInAgent;
-let ines: SignedInAgent;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  crew = await t.addCrew();
-  await t.addUser({ email: 'ines@example.org', name: 'Ines Other', role: 'member' });
-  qm = await t.signIn('qm@example.org');
-  lead = await t.signIn('lead@example.org');
-  mia = await t.signIn('member@example.org');
-  ines = await t.signIn('ines@example.org');
-});
-afterEach(() => t.close());
+import { crewTest } from '../helpers/crew-test';
+import type { SignedInAgent } from '../helpers/test-app';
 
 /** A bin with an opening receipt, a draw and a return by Mia (for her assembly), and a draw by Ines. */
-async function sharedBin() {
+const test = crewTest.extend('sharedBin', ({ qm, member, otherMember }) => async () => {
   const bin = await addBinAs(qm, blindRivetBin({ initialQuantity: 500, unitCost: 0.12 }));
-  const wing = await addAssembly(mia, { name: 'Left wing skin' });
-  expect((await post(mia, `/api/bins/${bin.code}/draw`, { quantity: 40, assemblyId: wing, note: 'for the wing' })).status).toBe(201);
-  expect((await post(mia, `/api/bins/${bin.code}/return`, { quantity: 5, assemblyId: wing })).status).toBe(201);
-  expect((await post(ines, `/api/bins/${bin.code}/draw`, { quantity: 25, note: 'Ines, tail fairing' })).status).toBe(201);
+  const wing = await addAssembly(member, { name: 'Left wing skin' });
+  expect((await post(member, `/api/bins/${bin.code}/draw`, { quantity: 40, assemblyId: wing, note: 'for the wing' })).status).toBe(201);
+  expect((await post(member, `/api/bins/${bin.code}/return`, { quantity: 5, assemblyId: wing })).status).toBe(201);
+  expect((await post(otherMember, `/api/bins/${bin.code}/draw`, { quantity: 25, note: 'Ines, tail fairing' })).status).toBe(201);
   return bin;
-}
+});
 
 async function ledgerAs(who: SignedInAgent, code: string): Promise<LedgerEntry[]> {
   const res = await who.agent.get(`/api/bins/${code}/ledger`);
@@ -39,9 +22,9 @@ async function ledgerAs(who: SignedInAgent, code: string): Promise<LedgerEntry[]
 }
 
 describe('GET /api/bins/:code/ledger for a member', () => {
-  it('shows their own entries in full and others’ without the person, the value or the note: kinds and quantities stay', async () => {
+  test('shows their own entries in full and others’ without the person, the value or the note: kinds and quantities stay', async ({ crew, member, sharedBin }) => {
     const bin = await sharedBin();
-    const entries = await ledgerAs(mia, bin.code);
+    const entries = await ledgerAs(member, bin.code);
     expect(entries.map((e) => [e.kind, e.quantity, e.balanceAfter])).toEqual([
       ['draw', -25, 440],
       ['return_unused', 5, 465],
@@ -58,16 +41,16 @@ describe('GET /api/bins/:code/ledger for a member', () => {
     expect(JSON.stringify(entries)).not.toMatch(/Ines/);
   });
 
-  it('shows another member only their own draw of the same bin', async () => {
+  test('shows another member only their own draw of the same bin', async ({ otherMember, sharedBin }) => {
     const bin = await sharedBin();
-    const entries = await ledgerAs(ines, bin.code);
+    const entries = await ledgerAs(otherMember, bin.code);
     expect(entries.filter((e) => !e.masked).map((e) => [e.kind, e.quantity, e.valueCents])).toEqual([['draw', -25, -300]]);
     expect(JSON.stringify(entries)).not.toMatch(/Mia|wing/);
   });
 });
 
 describe('quartermasters and leads', () => {
-  it('see every entry in full', async () => {
+  test('see every entry in full', async ({ lead, qm, sharedBin }) => {
     const bin = await sharedBin();
     for (const who of [qm, lead]) {
       const entries = await ledgerAs(who, bin.code);
@@ -78,15 +61,15 @@ describe('quartermasters and leads', () => {
 });
 
 describe('siblings a member could read another’s tab from', () => {
-  it('refuses the ledger CSV and another member’s tab with 403, and gives their own tab', async () => {
+  test('refuses the ledger CSV and another member’s tab with 403, and gives their own tab', async ({ crew, member, sharedBin }) => {
     await sharedBin();
-    const csv = await mia.agent.get('/api/bins/ledger.csv?from=2026-11-01&to=2026-12-31');
+    const csv = await member.agent.get('/api/bins/ledger.csv?from=2026-11-01&to=2026-12-31');
     expect(csv.status).toBe(403);
-    const tabs = await mia.agent.get('/api/stock/tabs');
+    const tabs = await member.agent.get('/api/stock/tabs');
     expect(tabs.status).toBe(403);
-    const inesTab = await mia.agent.get(`/api/stock/tabs/${crew.lead.id}`);
+    const inesTab = await member.agent.get(`/api/stock/tabs/${crew.lead.id}`);
     expect(inesTab.status).toBe(403);
     expect(inesTab.body.error.code).toBe('FORBIDDEN');
-    expect((await mia.agent.get(`/api/stock/tabs/${crew.member.id}`)).status).toBe(200);
+    expect((await member.agent.get(`/api/stock/tabs/${crew.member.id}`)).status).toBe(200);
   });
 });

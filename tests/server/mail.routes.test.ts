@@ -1,46 +1,38 @@
 import { eq } from 'drizzle-orm';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { mailListSchema, mailMessageSchema } from '@shared/schemas/mail';
 import { hashLinkToken } from '../../server/accounts/link-tokens';
 import { accountTokens } from '../../server/db/schema/account-tokens';
 import { caughtMail, outboxMail } from '../../server/db/schema/mail';
 import { OUTBOX_MAX_ATTEMPTS } from '../../server/mail/outbox';
 import { post } from '../helpers/crib';
-import { buildTestApp, tokenFromLink, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let lead: SignedInAgent;
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  lead = await t.signIn('lead@example.org');
-});
-afterEach(() => t.close());
+import { crewTest } from '../helpers/crew-test';
+import { buildTestApp, tokenFromLink } from '../helpers/test-app';
 
 const deadMailer = { send: () => Promise.reject(new Error('421 mail server busy')), close: () => undefined };
 
-async function requestReset(email: string) {
-  const { agent, csrf } = await t.anonymous();
-  await agent.post('/api/auth/password-reset').set('X-CSRF-Token', csrf).send({ email }).expect(202);
-}
-
-/** Fails every attempt of the waiting mail until it is marked failed. */
-async function failForGood() {
-  for (let i = 0; i < OUTBOX_MAX_ATTEMPTS; i++) {
-    await t.deliverMail(deadMailer);
-    t.clock.now = new Date(t.clock.now.getTime() + 2 * 60 * 60_000);
-  }
-}
+const test = crewTest
+  .extend('requestReset', ({ t }) => async (email: string) => {
+    const { agent, csrf } = await t.anonymous();
+    await agent.post('/api/auth/password-reset').set('X-CSRF-Token', csrf).send({ email }).expect(202);
+  })
+  /** Fails every attempt of the waiting mail until it is marked failed. */
+  .extend('failForGood', ({ t }) => async () => {
+    for (let i = 0; i < OUTBOX_MAX_ATTEMPTS; i++) {
+      await t.deliverMail(deadMailer);
+      t.clock.now = new Date(t.clock.now.getTime() + 2 * 60 * 60_000);
+    }
+  });
 
 describe('GET /api/mail', () => {
-  it('answers an empty list and catching: true before any mail was written', async () => {
+  test('answers an empty list and catching: true before any mail was written', async ({ lead }) => {
     const res = await lead.agent.get('/api/mail');
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/json/);
     expect(res.body).toEqual({ data: [], catching: true });
   });
 
-  it('lists an invitation as waiting at once, with its working link, and as sent once delivered', async () => {
+  test('lists an invitation as waiting at once, with its working link, and as sent once delivered', async ({ t, lead }) => {
     await post(lead, '/api/invitations', { email: 'newcomer@example.org', role: 'member' }).expect(201);
     const waiting = mailListSchema.parse((await lead.agent.get('/api/mail')).body).data;
     expect(waiting).toEqual([
@@ -67,7 +59,7 @@ describe('GET /api/mail', () => {
     expect(sent).toMatchObject({ state: 'sent', attempts: 0, nextAttemptAt: null, sentAt: t.clock.now.toISOString() });
   });
 
-  it('lists the newest message first', async () => {
+  test('lists the newest message first', async ({ t, lead, requestReset }) => {
     await post(lead, '/api/invitations', { email: 'first@example.org', role: 'member' }).expect(201);
     t.clock.now = new Date(t.clock.now.getTime() + 1000);
     await requestReset('member@example.org');
@@ -75,24 +67,27 @@ describe('GET /api/mail', () => {
     expect(res.body.data.map((m: { to: string }) => m.to)).toEqual(['member@example.org', 'first@example.org']);
   });
 
-  it('shows a message the mail server refused as waiting, with its attempts, last error and next try', async () => {
+  test('shows a message the mail server refused as waiting, with its attempts, last error and next try', async ({ t, lead, requestReset }) => {
     await requestReset('member@example.org');
     expect(await t.deliverMail(deadMailer)).toEqual({ sent: 0, retrying: 1, failed: 0 });
     const [m] = (await lead.agent.get('/api/mail')).body.data;
     expect(m).toMatchObject({ state: 'waiting', attempts: 1, lastError: '421 mail server busy', nextAttemptAt: new Date(t.clock.now.getTime() + 60_000).toISOString() });
   });
 
-  it('says catching: false when a real mail server is configured', async () => {
-    await t.close();
-    t = await buildTestApp({ catchingMail: false });
-    await t.addUser({ email: 'lead@example.org', role: 'lead' });
-    const res = await (await t.signIn('lead@example.org')).agent.get('/api/mail');
-    expect(res.status).toBe(200);
-    expect(res.body.catching).toBe(false);
+  test('says catching: false when a real mail server is configured', async () => {
+    const t = await buildTestApp({ catchingMail: false });
+    try {
+      await t.addUser({ email: 'lead@example.org', role: 'lead' });
+      const res = await (await t.signIn('lead@example.org')).agent.get('/api/mail');
+      expect(res.status).toBe(200);
+      expect(res.body.catching).toBe(false);
+    } finally {
+      await t.close();
+    }
   });
 
-  it('answers 403 FORBIDDEN for a member and a quartermaster', async () => {
-    for (const email of ['member@example.org', 'qm@example.org']) {
+  test('answers 403 FORBIDDEN for a member and a quartermaster', async ({ t, crew }) => {
+    for (const email of [crew.member.email, crew.quartermaster.email]) {
       const res = await (await t.signIn(email)).agent.get('/api/mail');
       expect(res.status).toBe(403);
       expect(res.headers['content-type']).toMatch(/json/);
@@ -100,7 +95,7 @@ describe('GET /api/mail', () => {
     }
   });
 
-  it('answers 401 NOT_SIGNED_IN when signed out', async () => {
+  test('answers 401 NOT_SIGNED_IN when signed out', async ({ t }) => {
     const res = await (await t.anonymous()).agent.get('/api/mail');
     expect(res.status).toBe(401);
     expect(res.body.error.code).toBe('NOT_SIGNED_IN');
@@ -108,7 +103,7 @@ describe('GET /api/mail', () => {
 });
 
 describe('reset links on Sent mail', () => {
-  it('keeps the message but masks the link in someone else’s reset mail: the lead finds no usable link', async () => {
+  test('keeps the message but masks the link in someone else’s reset mail: the lead finds no usable link', async ({ t, lead, requestReset }) => {
     await requestReset('member@example.org');
     await t.deliverMail();
     const body = JSON.stringify((await lead.agent.get('/api/mail')).body);
@@ -127,14 +122,14 @@ describe('reset links on Sent mail', () => {
     expect(confirmed.status).toBe(200);
   });
 
-  it('shows the lead their own reset link whole', async () => {
+  test('shows the lead their own reset link whole', async ({ lead, requestReset }) => {
     await requestReset('lead@example.org');
     const [m] = (await lead.agent.get('/api/mail')).body.data;
     expect(m.links).toEqual([expect.stringMatching(/^http:\/\/gripline\.test\/reset-password\/[A-Za-z0-9_-]{43}$/)]);
   });
 
-  it('keeps no usable reset token in the database once the mail has gone to a real mail server', async () => {
-    await requestReset('member@example.org');
+  test('keeps no usable reset token in the database once the mail has gone to a real mail server', async ({ t, crew, requestReset }) => {
+    await requestReset(crew.member.email);
     const offered: string[] = [];
     await t.deliverMail({ send: (m) => (offered.push(m.text), Promise.resolve()), close: () => undefined });
     const token = tokenFromLink(offered[0]!.match(/http:\/\/gripline\.test\/reset-password\/\S+/)![0]);
@@ -148,9 +143,9 @@ describe('reset links on Sent mail', () => {
 });
 
 describe('GET /api/mail/mine', () => {
-  it('shows each person only the mail caught for them, links whole', async () => {
-    await requestReset('member@example.org');
-    await requestReset('qm@example.org');
+  test('shows each person only the mail caught for them, links whole', async ({ t, crew, requestReset }) => {
+    await requestReset(crew.member.email);
+    await requestReset(crew.quartermaster.email);
     await t.deliverMail();
     const member = await t.signIn('member@example.org');
     const res = await member.agent.get('/api/mail/mine');
@@ -160,7 +155,7 @@ describe('GET /api/mail/mine', () => {
     expect(data[0]!.links).toEqual([expect.stringMatching(/\/reset-password\/[A-Za-z0-9_-]{43}$/)]);
   });
 
-  it('answers 401 NOT_SIGNED_IN when signed out', async () => {
+  test('answers 401 NOT_SIGNED_IN when signed out', async ({ t }) => {
     const res = await (await t.anonymous()).agent.get('/api/mail/mine');
     expect(res.status).toBe(401);
     expect(res.body.error.code).toBe('NOT_SIGNED_IN');
@@ -168,7 +163,7 @@ describe('GET /api/mail/mine', () => {
 });
 
 describe('POST /api/mail/:id/retry', () => {
-  it('puts a failed message back to waiting with a fresh round of attempts; the next run sends it', async () => {
+  test('puts a failed message back to waiting with a fresh round of attempts; the next run sends it', async ({ t, lead, requestReset, failForGood }) => {
     await requestReset('member@example.org');
     await failForGood();
     const [failed] = (await lead.agent.get('/api/mail')).body.data;
@@ -182,7 +177,7 @@ describe('POST /api/mail/:id/retry', () => {
     expect(t.db.select().from(caughtMail).all()).toHaveLength(1);
   });
 
-  it('answers 409 MAIL_NOT_FAILED for a waiting or sent message', async () => {
+  test('answers 409 MAIL_NOT_FAILED for a waiting or sent message', async ({ t, lead, requestReset }) => {
     await requestReset('member@example.org');
     const [m] = (await lead.agent.get('/api/mail')).body.data;
     const waiting = await post(lead, `/api/mail/${m.id}/retry`);
@@ -192,14 +187,14 @@ describe('POST /api/mail/:id/retry', () => {
     expect((await post(lead, `/api/mail/${m.id}/retry`)).body.error.code).toBe('MAIL_NOT_FAILED');
   });
 
-  it('answers 404 MAIL_NOT_FOUND for an unknown id and 400 for one that is not a number', async () => {
+  test('answers 404 MAIL_NOT_FOUND for an unknown id and 400 for one that is not a number', async ({ lead }) => {
     expect((await post(lead, '/api/mail/999/retry')).body.error.code).toBe('MAIL_NOT_FOUND');
     const bad = await post(lead, '/api/mail/abc/retry');
     expect(bad.status).toBe(400);
     expect(bad.body.error.code).toBe('VALIDATION_FAILED');
   });
 
-  it('answers 403 FORBIDDEN for a member, and the message stays failed', async () => {
+  test('answers 403 FORBIDDEN for a member, and the message stays failed', async ({ t, lead, requestReset, failForGood }) => {
     await requestReset('member@example.org');
     await failForGood();
     const [failed] = (await lead.agent.get('/api/mail')).body.data;

@@ -1,37 +1,26 @@
 import { eq } from 'drizzle-orm';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { overdueListSchema, reminderSentSchema } from '@shared/schemas/overdue';
 import { users } from '../../server/db/schema/users';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { addToolAs, lend, post } from '../helpers/crib';
 
-let t: TestApp;
-let lead: SignedInAgent;
-let qm: SignedInAgent;
-let member: SignedInAgent;
 const DAY_MS = 24 * 60 * 60 * 1000;
 const HOUR_MS = 60 * 60 * 1000;
 
-beforeEach(async () => {
-  t = await buildTestApp();
-  const crew = await t.addCrew();
+const test = crewTest
+  .extend('later', ({ clock }) => (ms: number) => {
+    clock.now = new Date(clock.now.getTime() + ms);
+  })
+  .extend('addTool', ({ qm }) => async (body: Record<string, unknown>) => (await addToolAs(qm, body)).code);
+
+test.beforeEach(({ t, crew }) => {
   t.db.update(users).set({ phone: '555-0100' }).where(eq(users.id, crew.member.id)).run();
-  lead = await t.signIn('lead@example.org');
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
 });
-afterEach(() => t.close());
-
-const later = (ms: number) => {
-  t.clock.now = new Date(t.clock.now.getTime() + ms);
-};
-
-const addTool = async (body: Record<string, unknown>) => (await addToolAs(qm, body)).code;
-
 
 describe('GET /api/overdue', () => {
-  it('lists open loans past due with the holder’s contact, most days late first', async () => {
+  test('lists open loans past due with the holder’s contact, most days late first', async ({ t, lead, qm, member, later, addTool }) => {
     const wrench = await addTool({ name: 'Torque wrench', category: 'torque_wrench', location: 'Cabinet B', replacementValueCents: 25_000 });
     const drill = await addTool({ name: 'Air drill', category: 'air_drill', replacementValueCents: 18_000 });
     const puller = await addTool({ name: 'Hand rivet puller', category: 'hand_rivet_puller' });
@@ -62,7 +51,7 @@ describe('GET /api/overdue', () => {
     ]);
   });
 
-  it('counts whole days late, and a loan less than a day late as 1 day late', async () => {
+  test('counts whole days late, and a loan less than a day late as 1 day late', async ({ t, lead, member, later, addTool }) => {
     const code = await addTool({ name: 'Deburring tool', category: 'deburring_tool' });
     await lend(t, member, code, 1 * DAY_MS);
     const daysLate = async () => ((await lead.agent.get('/api/overdue')).body.data as { daysLate: number }[]).map((l) => l.daysLate);
@@ -75,7 +64,7 @@ describe('GET /api/overdue', () => {
     expect(await daysLate()).toEqual([2]);
   });
 
-  it('counts days late in chapter days, whatever the server’s zone', async () => {
+  test('counts days late in chapter days, whatever the server’s zone', async ({ t, lead, member, addTool }) => {
     writeChapterTimeZone(t.db, 'America/Chicago');
     const code = await addTool({ name: 'Deburring tool', category: 'deburring_tool', loanDays: 1 });
     await post(member, `/api/tools/${code}/checkout`).expect(201); // Tuesday 06:00 in Chicago: due by the end of Wednesday
@@ -90,7 +79,7 @@ describe('GET /api/overdue', () => {
     expect(await late()).toEqual([2]);
   });
 
-  it('answers 403 to a member and a quartermaster, and 401 when signed out', async () => {
+  test('answers 403 to a member and a quartermaster, and 401 when signed out', async ({ t, qm, member }) => {
     for (const who of [member, qm]) {
       const res = await who.agent.get('/api/overdue');
       expect(res.status).toBe(403);
@@ -104,7 +93,7 @@ describe('GET /api/overdue', () => {
 });
 
 describe('POST /api/overdue/:loanId/remind', () => {
-  it('e-mails the holder a reminder with the tool, due date, days late, where it lives and a link', async () => {
+  test('e-mails the holder a reminder with the tool, due date, days late, where it lives and a link', async ({ t, lead, member, later, addTool }) => {
     const code = await addTool({ name: 'Torque wrench', category: 'torque_wrench', location: 'Cabinet B, shelf 2' });
     const loanId = await lend(t, member, code, 1 * DAY_MS);
     later(6 * DAY_MS);
@@ -124,7 +113,7 @@ describe('POST /api/overdue/:loanId/remind', () => {
     expect(list.body.data[0]).toMatchObject({ loanId, lastReminderAt: t.clock.now.toISOString(), remindedToday: true });
   });
 
-  it('writes the reminder in the chapter’s days: its day, the due day in words and the days late', async () => {
+  test('writes the reminder in the chapter’s days: its day, the due day in words and the days late', async ({ t, lead, member, addTool }) => {
     writeChapterTimeZone(t.db, 'Pacific/Auckland');
     const code = await addTool({ name: 'Torque wrench', category: 'torque_wrench', loanDays: 1 });
     const out = await post(member, `/api/tools/${code}/checkout`); // Wednesday 01:00 in Auckland
@@ -139,7 +128,7 @@ describe('POST /api/overdue/:loanId/remind', () => {
     expect((await lead.agent.get('/api/overdue')).body.data[0]).toMatchObject({ daysLate: 3, remindedToday: true });
   });
 
-  it('sends at most one reminder per loan per day: a second the same day answers 409 REMINDER_ALREADY_SENT, the next day works', async () => {
+  test('sends at most one reminder per loan per day: a second the same day answers 409 REMINDER_ALREADY_SENT, the next day works', async ({ t, lead, member, later, addTool }) => {
     const code = await addTool({ name: 'Air drill', category: 'air_drill' });
     const loanId = await lend(t, member, code, 1 * DAY_MS);
     later(3 * DAY_MS);
@@ -158,7 +147,7 @@ describe('POST /api/overdue/:loanId/remind', () => {
     expect(list.body.data[0]).toMatchObject({ remindedToday: true, lastReminderAt: t.clock.now.toISOString() });
   });
 
-  it('answers 409 LOAN_NOT_OVERDUE for a loan not yet due and 409 LOAN_RETURNED for one that came back', async () => {
+  test('answers 409 LOAN_NOT_OVERDUE for a loan not yet due and 409 LOAN_RETURNED for one that came back', async ({ t, lead, member, later, addTool }) => {
     const code = await addTool({ name: 'Rivet gun', category: 'rivet_gun' });
     const loanId = await lend(t, member, code, 2 * DAY_MS);
     const early = await post(lead, `/api/overdue/${loanId}/remind`);
@@ -174,7 +163,7 @@ describe('POST /api/overdue/:loanId/remind', () => {
     expect(await t.lastMailTo('member@example.org')).toBeUndefined();
   });
 
-  it('answers 404 LOAN_NOT_FOUND for an unknown loan and 400 VALIDATION_FAILED for a malformed id', async () => {
+  test('answers 404 LOAN_NOT_FOUND for an unknown loan and 400 VALIDATION_FAILED for a malformed id', async ({ lead }) => {
     const unknown = await post(lead, '/api/overdue/9999/remind');
     expect(unknown.status).toBe(404);
     expect(unknown.body.error.code).toBe('LOAN_NOT_FOUND');
@@ -187,7 +176,7 @@ describe('POST /api/overdue/:loanId/remind', () => {
     }
   });
 
-  it('answers 403 to a member and a quartermaster', async () => {
+  test('answers 403 to a member and a quartermaster', async ({ t, qm, member, later, addTool }) => {
     const code = await addTool({ name: 'Bucking bar', category: 'bucking_bar' });
     const loanId = await lend(t, member, code, 1 * DAY_MS);
     later(2 * DAY_MS);

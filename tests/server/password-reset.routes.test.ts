@@ -1,46 +1,37 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { outboxMail } from '../../server/db/schema/mail';
 import { RESETS_PER_HOUR } from '../../server/features/password-reset/password-reset.service';
-import { buildTestApp, PASSWORD, tokenFromLink, type TestApp } from '../helpers/test-app';
+import { accountsTest } from '../helpers/crew-test';
+import { PASSWORD, tokenFromLink } from '../helpers/test-app';
 
 const NEW_PASSWORD = 'fresh bucking bar 42';
 const HOUR_MS = 60 * 60 * 1000;
 
-let t: TestApp;
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-});
-afterEach(() => t.close());
-
-async function requestReset(email: string) {
-  const { agent, csrf } = await t.anonymous();
-  return agent.post('/api/auth/password-reset').set('X-CSRF-Token', csrf).send({ email });
-}
-
-/** Asks for a reset and returns the token from the link in the e-mail. */
-async function resetToken(email: string): Promise<string> {
-  expect((await requestReset(email)).status).toBe(202);
-  const link = (await t.lastMailTo(email))?.links.find((l) => l.startsWith('http://gripline.test/reset-password/'));
-  expect(link).toBeDefined();
-  return tokenFromLink(link!);
-}
-
-async function confirm(token: string, password = NEW_PASSWORD) {
-  const { agent, csrf } = await t.anonymous();
-  return agent.post('/api/auth/password-reset/confirm').set('X-CSRF-Token', csrf).send({ token, password });
-}
-
-async function login(email: string, password: string) {
-  const { agent, csrf } = await t.anonymous();
-  return agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email, password });
-}
-
-/** Messages written, sent or not. */
-const mailCount = () => t.db.select().from(outboxMail).all().length;
+const test = accountsTest
+  .extend('requestReset', ({ t }) => async (email: string) => {
+    const { agent, csrf } = await t.anonymous();
+    return agent.post('/api/auth/password-reset').set('X-CSRF-Token', csrf).send({ email });
+  })
+  /** Asks for a reset and returns the token from the link in the e-mail. */
+  .extend('resetToken', ({ t, requestReset }) => async (email: string): Promise<string> => {
+    expect((await requestReset(email)).status).toBe(202);
+    const link = (await t.lastMailTo(email))?.links.find((l) => l.startsWith('http://gripline.test/reset-password/'));
+    expect(link).toBeDefined();
+    return tokenFromLink(link!);
+  })
+  .extend('confirm', ({ t }) => async (token: string, password = NEW_PASSWORD) => {
+    const { agent, csrf } = await t.anonymous();
+    return agent.post('/api/auth/password-reset/confirm').set('X-CSRF-Token', csrf).send({ token, password });
+  })
+  .extend('login', ({ t }) => async (email: string, password: string) => {
+    const { agent, csrf } = await t.anonymous();
+    return agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email, password });
+  })
+  /** Messages written, sent or not. */
+  .extend('mailCount', ({ t }) => () => t.db.select().from(outboxMail).all().length);
 
 describe('POST /api/auth/password-reset', () => {
-  it('answers 202 with the same body for a known and an unknown address', async () => {
+  test('answers 202 with the same body for a known and an unknown address', async ({ requestReset }) => {
     const known = await requestReset('member@example.org');
     const unknown = await requestReset('nobody@example.org');
     expect(known.status).toBe(202);
@@ -50,7 +41,7 @@ describe('POST /api/auth/password-reset', () => {
     expect(unknown.body).toEqual(known.body);
   });
 
-  it('e-mails a one-hour link only to the known address', async () => {
+  test('e-mails a one-hour link only to the known address', async ({ t, requestReset, mailCount }) => {
     await requestReset('Member@Example.org');
     await requestReset('nobody@example.org');
     expect(mailCount()).toBe(1);
@@ -61,7 +52,7 @@ describe('POST /api/auth/password-reset', () => {
     expect(mail?.links).toEqual([expect.stringMatching(/^http:\/\/gripline\.test\/reset-password\/[A-Za-z0-9_-]{43}$/)]);
   });
 
-  it('sends no mail to a deactivated account, with the same 202', async () => {
+  test('sends no mail to a deactivated account, with the same 202', async ({ t, requestReset, mailCount }) => {
     const lead = await t.signIn('lead@example.org');
     const people = (await lead.agent.get('/api/users')).body.data as { id: number; email: string }[];
     const member = people.find((p) => p.email === 'member@example.org')!;
@@ -72,7 +63,7 @@ describe('POST /api/auth/password-reset', () => {
     expect(mailCount()).toBe(0);
   });
 
-  it('writes at most 3 reset mails per address an hour: 30 requests answer alike and queue 3', async () => {
+  test('writes at most 3 reset mails per address an hour: 30 requests answer alike and queue 3', async ({ t, requestReset, confirm, mailCount }) => {
     const answers = [];
     for (let i = 0; i < 30; i++) answers.push(await requestReset('member@example.org'));
     expect(new Set(answers.map((r) => `${r.status} ${JSON.stringify(r.body)}`)).size).toBe(1);
@@ -88,13 +79,13 @@ describe('POST /api/auth/password-reset', () => {
     expect(mailCount()).toBe(4);
   });
 
-  it('counts each address on its own', async () => {
+  test('counts each address on its own', async ({ requestReset, mailCount }) => {
     for (let i = 0; i < 5; i++) await requestReset('member@example.org');
     await requestReset('qm@example.org');
     expect(mailCount()).toBe(4);
   });
 
-  it('takes as long for an address without an account as for one with it', async () => {
+  test('takes as long for an address without an account as for one with it', async ({ t, mailCount }) => {
     const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
     const { agent, csrf } = await t.anonymous();
     const timed = async (email: string) => {
@@ -119,7 +110,7 @@ describe('POST /api/auth/password-reset', () => {
     expect(ratio).toBeLessThan(3);
   });
 
-  it('answers 400 VALIDATION_FAILED for an address that is not one', async () => {
+  test('answers 400 VALIDATION_FAILED for an address that is not one', async ({ requestReset, mailCount }) => {
     const res = await requestReset('not an address');
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('VALIDATION_FAILED');
@@ -129,7 +120,7 @@ describe('POST /api/auth/password-reset', () => {
 });
 
 describe('POST /api/auth/password-reset/confirm', () => {
-  it('answers 200 and changes the password: the old one fails with 401, the new one works', async () => {
+  test('answers 200 and changes the password: the old one fails with 401, the new one works', async ({ resetToken, confirm, login }) => {
     const token = await resetToken('member@example.org');
     const res = await confirm(token);
     expect(res.status).toBe(200);
@@ -143,14 +134,14 @@ describe('POST /api/auth/password-reset/confirm', () => {
     expect(fresh.body.user.email).toBe('member@example.org');
   });
 
-  it('leaves the person signed out: confirming does not start a session', async () => {
+  test('leaves the person signed out: confirming does not start a session', async ({ t, resetToken }) => {
     const token = await resetToken('member@example.org');
     const { agent, csrf } = await t.anonymous();
     await agent.post('/api/auth/password-reset/confirm').set('X-CSRF-Token', csrf).send({ token, password: NEW_PASSWORD }).expect(200);
     expect((await agent.get('/api/auth/me')).body.user).toBeNull();
   });
 
-  it('works once: a second confirm answers 410 LINK_USED and the first password stands', async () => {
+  test('works once: a second confirm answers 410 LINK_USED and the first password stands', async ({ resetToken, confirm, login }) => {
     const token = await resetToken('member@example.org');
     expect((await confirm(token)).status).toBe(200);
     const again = await confirm(token, 'a different long password');
@@ -161,13 +152,13 @@ describe('POST /api/auth/password-reset/confirm', () => {
     expect((await login('member@example.org', NEW_PASSWORD)).status).toBe(200);
   });
 
-  it('still works just before an hour has passed', async () => {
+  test('still works just before an hour has passed', async ({ t, resetToken, confirm }) => {
     const token = await resetToken('member@example.org');
     t.clock.now = new Date(t.clock.now.getTime() + HOUR_MS - 60_000);
     expect((await confirm(token)).status).toBe(200);
   });
 
-  it('answers 410 LINK_EXPIRED after an hour and keeps the old password', async () => {
+  test('answers 410 LINK_EXPIRED after an hour and keeps the old password', async ({ t, resetToken, confirm, login }) => {
     const token = await resetToken('member@example.org');
     t.clock.now = new Date(t.clock.now.getTime() + HOUR_MS + 60_000);
     const res = await confirm(token);
@@ -176,7 +167,7 @@ describe('POST /api/auth/password-reset/confirm', () => {
     expect((await login('member@example.org', PASSWORD)).status).toBe(200);
   });
 
-  it('answers 410 LINK_REVOKED for an older link once a newer one was sent', async () => {
+  test('answers 410 LINK_REVOKED for an older link once a newer one was sent', async ({ resetToken, confirm }) => {
     const first = await resetToken('member@example.org');
     const second = await resetToken('member@example.org');
     expect(second).not.toBe(first);
@@ -186,7 +177,7 @@ describe('POST /api/auth/password-reset/confirm', () => {
     expect((await confirm(second)).status).toBe(200);
   });
 
-  it('ends the person’s other sessions, but not other people’s', async () => {
+  test('ends the person’s other sessions, but not other people’s', async ({ t, resetToken, confirm }) => {
     const memberBefore = await t.signIn('member@example.org');
     const lead = await t.signIn('lead@example.org');
     expect((await memberBefore.agent.get('/api/auth/me')).status).toBe(200);
@@ -199,7 +190,7 @@ describe('POST /api/auth/password-reset/confirm', () => {
     expect((await lead.agent.get('/api/auth/me')).status).toBe(200);
   });
 
-  it('does not accept an invitation token as a reset token', async () => {
+  test('does not accept an invitation token as a reset token', async ({ t, confirm }) => {
     const lead = await t.signIn('lead@example.org');
     await lead.agent.post('/api/invitations').set('X-CSRF-Token', lead.csrf).send({ email: 'new@example.org', role: 'member' }).expect(201);
     const inviteToken = tokenFromLink((await t.lastMailTo('new@example.org'))!.links[0]!);
@@ -208,13 +199,13 @@ describe('POST /api/auth/password-reset/confirm', () => {
     expect(res.body.error.code).toBe('LINK_NOT_FOUND');
   });
 
-  it('answers 404 LINK_NOT_FOUND for a well-formed token nobody was sent', async () => {
+  test('answers 404 LINK_NOT_FOUND for a well-formed token nobody was sent', async ({ confirm }) => {
     const res = await confirm('Z'.repeat(43));
     expect(res.status).toBe(404);
     expect(res.body.error.code).toBe('LINK_NOT_FOUND');
   });
 
-  it('answers 400 VALIDATION_FAILED naming the password when it is too short, and changes nothing', async () => {
+  test('answers 400 VALIDATION_FAILED naming the password when it is too short, and changes nothing', async ({ resetToken, confirm }) => {
     const token = await resetToken('member@example.org');
     const res = await confirm(token, 'short');
     expect(res.status).toBe(400);
@@ -226,7 +217,7 @@ describe('POST /api/auth/password-reset/confirm', () => {
     expect((await confirm(token)).status).toBe(200);
   });
 
-  it('answers 400 VALIDATION_FAILED naming the token when it has the wrong shape', async () => {
+  test('answers 400 VALIDATION_FAILED naming the token when it has the wrong shape', async ({ confirm }) => {
     const res = await confirm('not-a-token');
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('VALIDATION_FAILED');

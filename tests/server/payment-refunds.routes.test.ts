@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
 import Papa from 'papaparse';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { paymentListSchema, refundSchema, type PaymentListItem } from '@shared/schemas/payments';
 import { migrateDatabase } from '../../server/db/client';
 import { outboxMail } from '../../server/db/schema/mail';
@@ -9,50 +9,15 @@ import { memberPayments, paymentRefunds } from '../../server/db/schema/stock';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { post } from '../helpers/crib';
 import { withDatabaseBefore } from '../helpers/migrations-before';
-import { startPaymentsApp, type PaymentsTestApp } from '../helpers/payments-app';
-import type { Crew, SignedInAgent, TestApp } from '../helpers/test-app';
+import { paymentsTest } from '../helpers/crew-test';
+import type { SignedInAgent } from '../helpers/test-app';
 
 // blindRivetBin costs $0.12 a rivet: 120 drawn is a tab of 120 × 12 = 1440 cents.
 const TAB_CENTS = 120 * 12;
 
-let p: PaymentsTestApp;
-let t: TestApp;
-let crew: Crew;
-let lead: SignedInAgent;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-
-beforeEach(async () => {
-  p = await startPaymentsApp();
-  t = p.t;
-  crew = await t.addCrew();
-  lead = await t.signIn('lead@example.org');
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-});
-afterEach(() => p.close());
-
 const balanceOf = async (who: SignedInAgent) => (await who.agent.get('/api/stock/tab')).body.balanceCents as number;
 
-async function listed(who: SignedInAgent = lead, query = ''): Promise<PaymentListItem[]> {
-  const res = await who.agent.get(`/api/payments${query}`);
-  expect(res.status, JSON.stringify(res.body)).toBe(200);
-  return paymentListSchema.parse(res.body).data;
-}
-
-/** The member draws 120 rivets and pays `amountCents` of it online; answers the member payment. */
-async function paidOnline(amountCents = TAB_CENTS): Promise<PaymentListItem> {
-  await p.drawOnTab(qm, member, 120);
-  await p.payOnline(member, amountCents);
-  const [payment] = await listed();
-  expect(payment).toMatchObject({ method: 'online', amountCents, refundedCents: 0, refundableCents: amountCents });
-  return payment!;
-}
-
 const refund = (who: SignedInAgent, id: number, body: object = {}) => post(who, `/api/payments/${id}/refund`, body);
-const refundRows = () => t.db.select().from(paymentRefunds).all();
-const refundMails = () => t.db.select().from(outboxMail).all().filter((m) => m.subject.startsWith('Refund:'));
-const intentOf = (memberPaymentId: number) => t.db.select().from(onlinePayments).where(eq(onlinePayments.memberPaymentId, memberPaymentId)).get()!.paymentIntentId!;
 
 /** A `charge.refunded` event for a payment intent, as the provider sends it. */
 function chargeRefunded(paymentIntent: string, eventId: string): string {
@@ -60,8 +25,35 @@ function chargeRefunded(paymentIntent: string, eventId: string): string {
   return JSON.stringify({ id: eventId, object: 'event', type: 'charge.refunded', created: Math.floor(Date.now() / 1000), data: { object: charge } });
 }
 
+paymentsTest.override('t', ({ payments }) => payments.t);
+
+const test = paymentsTest
+  .extend('listed', ({ lead }) => async (who: SignedInAgent = lead, query = ''): Promise<PaymentListItem[]> => {
+    const res = await who.agent.get(`/api/payments${query}`);
+    expect(res.status, JSON.stringify(res.body)).toBe(200);
+    return paymentListSchema.parse(res.body).data;
+  })
+  /** The member draws 120 rivets and pays `amountCents` of it online; answers the member payment. */
+  .extend('paidOnline', ({ qm, member, payments, listed }) => async (amountCents = TAB_CENTS): Promise<PaymentListItem> => {
+    await payments.drawOnTab(qm, member, 120);
+    await payments.payOnline(member, amountCents);
+    const [payment] = await listed();
+    expect(payment).toMatchObject({ method: 'online', amountCents, refundedCents: 0, refundableCents: amountCents });
+    return payment!;
+  })
+  .extend('refundRows', ({ t }) => () => t.db.select().from(paymentRefunds).all())
+  .extend('refundMails', ({ t }) => () => t.db.select().from(outboxMail).all().filter((m) => m.subject.startsWith('Refund:')))
+  .extend('intentOf', ({ t }) => (memberPaymentId: number) => t.db.select().from(onlinePayments).where(eq(onlinePayments.memberPaymentId, memberPaymentId)).get()!.paymentIntentId!)
+  .extend('refundAtFake', ({ payments }) => (form: Record<string, string>) =>
+    fetch(`http://127.0.0.1:${payments.fake.port}/v1/refunds`, { method: 'POST', headers: { authorization: `Bearer ${payments.fake.secretKey}` }, body: new URLSearchParams(form) }))
+  .extend('cashPayment', ({ t, qm, crew }) => async (amountCents: number, at: string, note = '') => {
+    t.clock.now = new Date(at);
+    const res = await post(qm, '/api/stock/payments', { userId: crew.member.id, amountCents, note });
+    expect(res.status).toBe(201);
+  });
+
 describe('POST /api/payments/:id/refund', () => {
-  it('refunds the whole online payment through the provider: the balance goes back up and the member is mailed', async () => {
+  test('refunds the whole online payment through the provider: the balance goes back up and the member is mailed', async ({ t, crew, lead, member, payments, listed, paidOnline, refundRows, refundMails, intentOf }) => {
     const payment = await paidOnline();
     expect(await balanceOf(member)).toBe(0);
     const intent = intentOf(payment.id);
@@ -72,7 +64,7 @@ describe('POST /api/payments/:id/refund', () => {
     const made = refundSchema.parse(res.body);
     expect(made).toMatchObject({ paymentId: payment.id, amountCents: TAB_CENTS, refundedCents: TAB_CENTS, refundableCents: 0, providerRefundId: expect.stringMatching(/^re_/) });
 
-    const atProvider = await p.setup.provider.refunds.list({ payment_intent: intent });
+    const atProvider = await payments.setup.provider.refunds.list({ payment_intent: intent });
     expect(atProvider.data).toMatchObject([{ id: made.providerRefundId, object: 'refund', amount: TAB_CENTS, currency: 'usd', payment_intent: intent, status: 'succeeded' }]);
     expect(await balanceOf(member)).toBe(TAB_CENTS);
     // The provider's charge.refunded reached Gripline before the SDK call answered: still one refund, in the lead's name.
@@ -84,7 +76,7 @@ describe('POST /api/payments/:id/refund', () => {
     expect(await listed()).toMatchObject([{ id: payment.id, refundedCents: TAB_CENTS, refundableCents: 0 }]);
   });
 
-  it('refunds a part, then the rest when no amount is given, then refuses a third time', async () => {
+  test('refunds a part, then the rest when no amount is given, then refuses a third time', async ({ lead, member, paidOnline, refundRows }) => {
     const payment = await paidOnline();
     const part = await refund(lead, payment.id, { amountCents: 500 });
     expect(part.status).toBe(201);
@@ -102,7 +94,7 @@ describe('POST /api/payments/:id/refund', () => {
     expect(refundRows().map((r) => r.amountCents)).toEqual([500, TAB_CENTS - 500]);
   });
 
-  it('refuses more than is left with 400 naming amountCents, and refunds nothing', async () => {
+  test('refuses more than is left with 400 naming amountCents, and refunds nothing', async ({ lead, member, payments, paidOnline, intentOf }) => {
     const payment = await paidOnline();
     expect((await refund(lead, payment.id, { amountCents: 1000 })).status).toBe(201);
     const over = await refund(lead, payment.id, { amountCents: TAB_CENTS - 1000 + 1 });
@@ -111,12 +103,12 @@ describe('POST /api/payments/:id/refund', () => {
     const zero = await refund(lead, payment.id, { amountCents: 0 });
     expect(zero.status).toBe(400);
     expect(zero.body.error.issues).toEqual([{ path: 'amountCents', message: 'A refund is more than $0.00.' }]);
-    expect((await p.setup.provider.refunds.list({ payment_intent: intentOf(payment.id) })).data).toHaveLength(1);
+    expect((await payments.setup.provider.refunds.list({ payment_intent: intentOf(payment.id) })).data).toHaveLength(1);
     expect(await balanceOf(member)).toBe(1000);
   });
 
-  it('refuses a cash payment with 409: cash is handed back in person', async () => {
-    await p.drawOnTab(qm, member, 120);
+  test('refuses a cash payment with 409: cash is handed back in person', async ({ crew, lead, qm, member, payments, refundRows }) => {
+    await payments.drawOnTab(qm, member, 120);
     const cash = await post(qm, '/api/stock/payments', { userId: crew.member.id, amountCents: 700, note: 'at the bench' });
     expect(cash.status).toBe(201);
     const res = await refund(lead, cash.body.id as number);
@@ -127,15 +119,15 @@ describe('POST /api/payments/:id/refund', () => {
     expect(await balanceOf(member)).toBe(TAB_CENTS - 700);
   });
 
-  it('is the lead’s alone: the member and the quartermaster get 403 and nothing is refunded', async () => {
+  test('is the lead’s alone: the member and the quartermaster get 403 and nothing is refunded', async ({ qm, member, payments, paidOnline, refundRows, intentOf }) => {
     const payment = await paidOnline();
     expect((await refund(member, payment.id)).status).toBe(403);
     expect((await refund(qm, payment.id)).status).toBe(403);
     expect(refundRows()).toEqual([]);
-    expect((await p.setup.provider.refunds.list({ payment_intent: intentOf(payment.id) })).data).toEqual([]);
+    expect((await payments.setup.provider.refunds.list({ payment_intent: intentOf(payment.id) })).data).toEqual([]);
   });
 
-  it('answers 404 for a payment that does not exist and 400 for an id that is not one', async () => {
+  test('answers 404 for a payment that does not exist and 400 for an id that is not one', async ({ lead }) => {
     const missing = await refund(lead, 999);
     expect(missing.status).toBe(404);
     expect(missing.body.error.code).toBe('PAYMENT_NOT_FOUND');
@@ -144,9 +136,9 @@ describe('POST /api/payments/:id/refund', () => {
     expect(bad.body.error.issues[0].path).toBe('id');
   });
 
-  it('answers 502 when the provider cannot be reached, and records nothing', async () => {
+  test('answers 502 when the provider cannot be reached, and records nothing', async ({ lead, member, payments, paidOnline, refundRows }) => {
     const payment = await paidOnline();
-    await p.fake.close();
+    await payments.fake.close();
     const res = await refund(lead, payment.id);
     expect(res.status).toBe(502);
     expect(res.body.error).toMatchObject({ code: 'PROVIDER_UNAVAILABLE', message: 'The payment provider could not be reached, so nothing was refunded. Try again in a minute.' });
@@ -154,7 +146,7 @@ describe('POST /api/payments/:id/refund', () => {
     expect(await balanceOf(member)).toBe(0);
   });
 
-  it('counts a refund in the month it was made: the payment’s month keeps it, this month takes the refund off paid', async () => {
+  test('counts a refund in the month it was made: the payment’s month keeps it, this month takes the refund off paid', async ({ t, crew, lead, qm, member, paidOnline }) => {
     const payment = await paidOnline();
     t.db.update(memberPayments).set({ at: new Date('2026-10-20T12:00:00Z') }).where(eq(memberPayments.id, payment.id)).run();
     expect((await refund(lead, payment.id, { amountCents: 400 })).status).toBe(201);
@@ -173,10 +165,7 @@ describe('POST /api/payments/:id/refund', () => {
 });
 
 describe('the fake provider’s refunds', () => {
-  const refundAtFake = (form: Record<string, string>) =>
-    fetch(`http://127.0.0.1:${p.fake.port}/v1/refunds`, { method: 'POST', headers: { authorization: `Bearer ${p.fake.secretKey}` }, body: new URLSearchParams(form) });
-
-  it('refuses an unknown payment or more than is left in the provider’s error shape', async () => {
+  test('refuses an unknown payment or more than is left in the provider’s error shape', async ({ paidOnline, intentOf, refundAtFake }) => {
     const payment = await paidOnline();
     const unknown = await refundAtFake({ payment_intent: 'pi_nobody' });
     expect(unknown.status).toBe(400);
@@ -188,9 +177,9 @@ describe('the fake provider’s refunds', () => {
     });
   });
 
-  it('answers 409 with the provider’s reason when it refuses a refund Gripline thought possible', async () => {
+  test('answers 409 with the provider’s reason when it refuses a refund Gripline thought possible', async ({ t, lead, payments, paidOnline, refundRows, intentOf }) => {
     const payment = await paidOnline();
-    await p.fake.refundInDashboard(intentOf(payment.id), 1000);
+    await payments.fake.refundInDashboard(intentOf(payment.id), 1000);
     // As if the provider's event about it had never arrived.
     t.db.delete(paymentRefunds).run();
     const res = await refund(lead, payment.id);
@@ -201,15 +190,15 @@ describe('the fake provider’s refunds', () => {
 });
 
 describe('the provider’s charge.refunded webhook', () => {
-  it('records a refund made in the provider’s dashboard once, however often it is delivered', async () => {
+  test('records a refund made in the provider’s dashboard once, however often it is delivered', async ({ lead, member, payments, listed, paidOnline, refundRows, refundMails, intentOf }) => {
     const payment = await paidOnline();
-    const made = await p.fake.refundInDashboard(intentOf(payment.id), 600);
+    const made = await payments.fake.refundInDashboard(intentOf(payment.id), 600);
     expect(refundRows()).toMatchObject([{ memberPaymentId: payment.id, amountCents: 600, providerRefundId: made.id, recordedById: null }]);
     expect(await balanceOf(member)).toBe(600);
 
     const event = chargeRefunded(intentOf(payment.id), 'evt_test_dashboard_again');
-    expect((await p.deliverSigned(event)).status).toBe(200);
-    expect((await p.deliverSigned(event)).status).toBe(200);
+    expect((await payments.deliverSigned(event)).status).toBe(200);
+    expect((await payments.deliverSigned(event)).status).toBe(200);
     expect(refundRows()).toHaveLength(1);
     expect(refundMails()).toHaveLength(1);
 
@@ -220,30 +209,24 @@ describe('the provider’s charge.refunded webhook', () => {
     expect(await balanceOf(member)).toBe(TAB_CENTS);
   });
 
-  it('never doubles a refund Gripline made and recorded when the provider’s event for it comes later', async () => {
+  test('never doubles a refund Gripline made and recorded when the provider’s event for it comes later', async ({ crew, lead, member, payments, paidOnline, refundRows, refundMails, intentOf }) => {
     const payment = await paidOnline();
     const made = await refund(lead, payment.id, { amountCents: 300 });
     expect(made.status).toBe(201);
-    expect((await p.deliverSigned(chargeRefunded(intentOf(payment.id), 'evt_test_late'))).status).toBe(200);
+    expect((await payments.deliverSigned(chargeRefunded(intentOf(payment.id), 'evt_test_late'))).status).toBe(200);
     expect(refundRows()).toMatchObject([{ amountCents: 300, providerRefundId: made.body.providerRefundId, recordedById: crew.lead.id }]);
     expect(refundMails()).toHaveLength(1);
     expect(await balanceOf(member)).toBe(300);
   });
 
-  it('ignores a refund on a payment Gripline never recorded', async () => {
-    expect((await p.deliverSigned(chargeRefunded('pi_not_ours', 'evt_test_stranger'))).status).toBe(200);
+  test('ignores a refund on a payment Gripline never recorded', async ({ payments, refundRows }) => {
+    expect((await payments.deliverSigned(chargeRefunded('pi_not_ours', 'evt_test_stranger'))).status).toBe(200);
     expect(refundRows()).toEqual([]);
   });
 });
 
 describe('GET /api/payments', () => {
-  async function cashPayment(amountCents: number, at: string, note = '') {
-    t.clock.now = new Date(at);
-    const res = await post(qm, '/api/stock/payments', { userId: crew.member.id, amountCents, note });
-    expect(res.status).toBe(201);
-  }
-
-  it('lists cash and online payments together, newest first, for the quartermaster and the lead only', async () => {
+  test('lists cash and online payments together, newest first, for the quartermaster and the lead only', async ({ t, crew, qm, member, listed, paidOnline, cashPayment }) => {
     await cashPayment(200, '2026-11-10T18:00:00Z', 'at the bench');
     t.clock.now = new Date('2026-12-01T12:00:00Z');
     const online = await paidOnline(1000);
@@ -257,9 +240,9 @@ describe('GET /api/payments', () => {
     expect((await member.agent.get('/api/payments/export.csv')).status).toBe(403);
   });
 
-  it('filters by method and by chapter days, both ends included', async () => {
+  test('filters by method and by chapter days, both ends included', async ({ t, lead, qm, member, payments, listed, paidOnline, cashPayment }) => {
     writeChapterTimeZone(t.db, 'America/Chicago');
-    await p.drawOnTab(qm, member, 120);
+    await payments.drawOnTab(qm, member, 120);
     // 03:00 UTC on Nov 11 is still Nov 10 in Chicago.
     await cashPayment(100, '2026-11-11T03:00:00Z');
     await cashPayment(200, '2026-11-20T18:00:00Z');
@@ -275,7 +258,7 @@ describe('GET /api/payments', () => {
     expect((await listed(lead, '?to=2026-11-20&method=cash')).map((r) => r.amountCents)).toEqual([200, 100]);
   });
 
-  it('answers 400 saying what is wrong with a filter', async () => {
+  test('answers 400 saying what is wrong with a filter', async ({ lead }) => {
     const cases: [string, string, string][] = [
       ['?from=11/10/2026', 'from', 'Give the first day like 2026-11-30.'],
       ['?to=yesterday', 'to', 'Give the last day like 2026-11-30.'],
@@ -293,9 +276,9 @@ describe('GET /api/payments', () => {
 });
 
 describe('GET /api/payments/export.csv', () => {
-  it('exports the payments with a header row, dollars with two places and chapter days, named for the days asked', async () => {
+  test('exports the payments with a header row, dollars with two places and chapter days, named for the days asked', async ({ t, crew, lead, qm, member, payments, paidOnline }) => {
     writeChapterTimeZone(t.db, 'America/Chicago');
-    await p.drawOnTab(qm, member, 120);
+    await payments.drawOnTab(qm, member, 120);
     t.clock.now = new Date('2026-11-11T03:00:00Z');
     expect((await post(qm, '/api/stock/payments', { userId: crew.member.id, amountCents: 1250, note: '=cash, with a comma' })).status).toBe(201);
     t.clock.now = new Date('2026-12-01T12:00:00Z');
@@ -320,7 +303,7 @@ describe('GET /api/payments/export.csv', () => {
 });
 
 describe('migration payment_refunds', () => {
-  it('marks the payments that a paid checkout made as online, and the rest as cash', () => {
+  test('marks the payments that a paid checkout made as online, and the rest as cash', () => {
     withDatabaseBefore('_payment_refunds', (db) => {
       db.$client.prepare("insert into users (id, email, name, role, password_hash) values (1, 'm@example.org', 'M', 'member', 'x')").run();
       const pay = db.$client.prepare('insert into member_payments (id, user_id, amount_cents, at, note, recorded_by_id) values (?, 1, ?, 0, ?, 1)');

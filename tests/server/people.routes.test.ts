@@ -1,33 +1,21 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import type { UserRow } from '../../server/db/schema/users';
-import { buildTestApp, PASSWORD, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { describe, expect } from 'vitest';
+import { crewTest } from '../helpers/crew-test';
+import { PASSWORD, type SignedInAgent } from '../helpers/test-app';
 
-let t: TestApp;
-let leadRow: UserRow;
-let memberRow: UserRow;
-let qmRow: UserRow;
-let lead: SignedInAgent;
-beforeEach(async () => {
-  t = await buildTestApp();
-  ({ lead: leadRow, member: memberRow, quartermaster: qmRow } = await t.addCrew());
-  lead = await t.signIn('lead@example.org');
-});
-afterEach(() => t.close());
-
-function patch(id: number | string, body: unknown, as: SignedInAgent = lead) {
-  return as.agent.patch(`/api/users/${id}`).set('X-CSRF-Token', as.csrf).send(body as object);
-}
-
-const sessionCount = () => (t.db.$client.prepare('select count(*) as n from sessions').get() as { n: number }).n;
+const test = crewTest
+  .extend('patch', ({ lead }) => (id: number | string, body: unknown, as: SignedInAgent = lead) => {
+    return as.agent.patch(`/api/users/${id}`).set('X-CSRF-Token', as.csrf).send(body as object);
+  })
+  .extend('sessionCount', ({ t }) => () => (t.db.$client.prepare('select count(*) as n from sessions').get() as { n: number }).n);
 
 describe('GET /api/users', () => {
-  it('lists everyone by name with role and active flag for a lead', async () => {
+  test('lists everyone by name with role and active flag for a lead', async ({ crew, lead }) => {
     const res = await lead.agent.get('/api/users');
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/json/);
     expect(res.body.data.map((p: { name: string }) => p.name)).toEqual(['Lee Lead', 'Mia Member', 'Quinn Quartermaster']);
     expect(res.body.data[1]).toEqual({
-      id: memberRow.id,
+      id: crew.member.id,
       email: 'member@example.org',
       name: 'Mia Member',
       role: 'member',
@@ -39,8 +27,8 @@ describe('GET /api/users', () => {
     expect(JSON.stringify(res.body)).not.toMatch(/argon2|passwordHash/);
   });
 
-  it('answers 403 FORBIDDEN for a member and a quartermaster', async () => {
-    for (const email of ['member@example.org', 'qm@example.org']) {
+  test('answers 403 FORBIDDEN for a member and a quartermaster', async ({ t, crew }) => {
+    for (const email of [crew.member.email, crew.quartermaster.email]) {
       const res = await (await t.signIn(email)).agent.get('/api/users');
       expect(res.status).toBe(403);
       expect(res.headers['content-type']).toMatch(/json/);
@@ -48,7 +36,7 @@ describe('GET /api/users', () => {
     }
   });
 
-  it('answers 401 NOT_SIGNED_IN when signed out', async () => {
+  test('answers 401 NOT_SIGNED_IN when signed out', async ({ t }) => {
     const res = await (await t.anonymous()).agent.get('/api/users');
     expect(res.status).toBe(401);
     expect(res.body.error.code).toBe('NOT_SIGNED_IN');
@@ -56,24 +44,24 @@ describe('GET /api/users', () => {
 });
 
 describe('PATCH /api/users/:id', () => {
-  it('changes a role, and the change applies on the person’s next request', async () => {
+  test('changes a role, and the change applies on the person’s next request', async ({ t, crew, patch }) => {
     const qm = await t.signIn('qm@example.org');
     expect((await qm.agent.get('/api/users')).status).toBe(403);
-    const res = await patch(qmRow.id, { role: 'lead' });
+    const res = await patch(crew.quartermaster.id, { role: 'lead' });
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/json/);
-    expect(res.body).toMatchObject({ id: qmRow.id, role: 'lead', active: true });
+    expect(res.body).toMatchObject({ id: crew.quartermaster.id, role: 'lead', active: true });
     expect((await qm.agent.get('/api/auth/me')).body.user.role).toBe('lead');
     expect((await qm.agent.get('/api/users')).status).toBe(200);
   });
 
-  it('deactivates a person: they are signed out at once and cannot sign in again', async () => {
+  test('deactivates a person: they are signed out at once and cannot sign in again', async ({ t, crew, lead, patch, sessionCount }) => {
     const member = await t.signIn('member@example.org');
     expect((await member.agent.get('/api/auth/me')).status).toBe(200);
     const before = sessionCount();
-    const res = await patch(memberRow.id, { active: false });
+    const res = await patch(crew.member.id, { active: false });
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ id: memberRow.id, active: false, deactivatedAt: t.clock.now.toISOString() });
+    expect(res.body).toMatchObject({ id: crew.member.id, active: false, deactivatedAt: t.clock.now.toISOString() });
     expect(sessionCount()).toBe(before - 1);
     expect((await member.agent.get('/api/auth/me')).body.user).toBeNull();
     const tools = await member.agent.get('/api/tools');
@@ -87,92 +75,92 @@ describe('PATCH /api/users/:id', () => {
     expect((await lead.agent.get('/api/auth/me')).status).toBe(200);
   });
 
-  it('keeps the first deactivation time when asked to deactivate again', async () => {
+  test('keeps the first deactivation time when asked to deactivate again', async ({ t, crew, patch }) => {
     const first = t.clock.now.toISOString();
-    await patch(memberRow.id, { active: false }).expect(200);
+    await patch(crew.member.id, { active: false }).expect(200);
     t.clock.now = new Date(t.clock.now.getTime() + 60_000);
-    const res = await patch(memberRow.id, { active: false });
+    const res = await patch(crew.member.id, { active: false });
     expect(res.status).toBe(200);
     expect(res.body.deactivatedAt).toBe(first);
   });
 
-  it('reactivates a person, who can then sign in again', async () => {
-    await patch(memberRow.id, { active: false }).expect(200);
-    const res = await patch(memberRow.id, { active: true });
+  test('reactivates a person, who can then sign in again', async ({ t, crew, patch }) => {
+    await patch(crew.member.id, { active: false }).expect(200);
+    const res = await patch(crew.member.id, { active: true });
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ id: memberRow.id, active: true, deactivatedAt: null });
+    expect(res.body).toMatchObject({ id: crew.member.id, active: true, deactivatedAt: null });
     const member = await t.signIn('member@example.org');
     expect((await member.agent.get('/api/auth/me')).body.user.email).toBe('member@example.org');
   });
 
-  it('changes role and active flag together', async () => {
-    const res = await patch(memberRow.id, { role: 'quartermaster', active: false });
+  test('changes role and active flag together', async ({ crew, patch }) => {
+    const res = await patch(crew.member.id, { role: 'quartermaster', active: false });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ role: 'quartermaster', active: false });
   });
 
-  it('answers 409 CANNOT_DEACTIVATE_SELF when a lead deactivates themself, even with a second lead', async () => {
-    await patch(qmRow.id, { role: 'lead' }).expect(200);
-    const res = await patch(leadRow.id, { active: false });
+  test('answers 409 CANNOT_DEACTIVATE_SELF when a lead deactivates themself, even with a second lead', async ({ crew, lead, patch }) => {
+    await patch(crew.quartermaster.id, { role: 'lead' }).expect(200);
+    const res = await patch(crew.lead.id, { active: false });
     expect(res.status).toBe(409);
     expect(res.headers['content-type']).toMatch(/json/);
     expect(res.body.error.code).toBe('CANNOT_DEACTIVATE_SELF');
     expect((await lead.agent.get('/api/auth/me')).status).toBe(200);
   });
 
-  it('answers 409 and keeps the chapter’s only lead active when that lead deactivates themself', async () => {
-    const res = await patch(leadRow.id, { active: false });
+  test('answers 409 and keeps the chapter’s only lead active when that lead deactivates themself', async ({ crew, lead, patch }) => {
+    const res = await patch(crew.lead.id, { active: false });
     expect(res.status).toBe(409);
     // A lead can only be deactivated by another active lead, so for the only lead the self rule is the one that answers.
     expect(res.body.error.code).toBe('CANNOT_DEACTIVATE_SELF');
-    const me = (await lead.agent.get('/api/users')).body.data.find((p: { id: number }) => p.id === leadRow.id);
+    const me = (await lead.agent.get('/api/users')).body.data.find((p: { id: number }) => p.id === crew.lead.id);
     expect(me).toMatchObject({ role: 'lead', active: true });
   });
 
-  it('answers 409 LAST_LEAD when the only active lead would be demoted', async () => {
-    const res = await patch(leadRow.id, { role: 'quartermaster' });
+  test('answers 409 LAST_LEAD when the only active lead would be demoted', async ({ crew, lead, patch }) => {
+    const res = await patch(crew.lead.id, { role: 'quartermaster' });
     expect(res.status).toBe(409);
     expect(res.body.error.code).toBe('LAST_LEAD');
     expect((await lead.agent.get('/api/auth/me')).body.user.role).toBe('lead');
   });
 
-  it('answers 409 LAST_LEAD when the only other lead is deactivated: a deactivated lead does not count', async () => {
-    await patch(memberRow.id, { role: 'lead' }).expect(200);
-    await patch(memberRow.id, { active: false }).expect(200);
-    const res = await patch(leadRow.id, { role: 'member' });
+  test('answers 409 LAST_LEAD when the only other lead is deactivated: a deactivated lead does not count', async ({ crew, patch }) => {
+    await patch(crew.member.id, { role: 'lead' }).expect(200);
+    await patch(crew.member.id, { active: false }).expect(200);
+    const res = await patch(crew.lead.id, { role: 'member' });
     expect(res.status).toBe(409);
     expect(res.body.error.code).toBe('LAST_LEAD');
     // Reactivated, the other lead counts again.
-    await patch(memberRow.id, { active: true }).expect(200);
-    expect((await patch(leadRow.id, { role: 'member' })).status).toBe(200);
+    await patch(crew.member.id, { active: true }).expect(200);
+    expect((await patch(crew.lead.id, { role: 'member' })).status).toBe(200);
   });
 
-  it('lets a lead be demoted or deactivated when there is a second active lead', async () => {
-    await patch(qmRow.id, { role: 'lead' }).expect(200);
-    const demoted = await patch(leadRow.id, { role: 'member' });
+  test('lets a lead be demoted or deactivated when there is a second active lead', async ({ t, crew, lead, patch }) => {
+    await patch(crew.quartermaster.id, { role: 'lead' }).expect(200);
+    const demoted = await patch(crew.lead.id, { role: 'member' });
     expect(demoted.status).toBe(200);
     expect(demoted.body.role).toBe('member');
     // Lee is now a member and loses the People page on the next request.
     expect((await lead.agent.get('/api/users')).status).toBe(403);
     const second = await t.signIn('qm@example.org');
-    await patch(leadRow.id, { role: 'lead' }, second).expect(200);
-    const deactivated = await patch(leadRow.id, { active: false }, second);
+    await patch(crew.lead.id, { role: 'lead' }, second).expect(200);
+    const deactivated = await patch(crew.lead.id, { active: false }, second);
     expect(deactivated.status).toBe(200);
     expect(deactivated.body.active).toBe(false);
     expect((await lead.agent.get('/api/auth/me')).body.user).toBeNull();
     // Quinn is the last active lead now.
-    const last = await patch(qmRow.id, { role: 'member' }, second);
+    const last = await patch(crew.quartermaster.id, { role: 'member' }, second);
     expect(last.status).toBe(409);
     expect(last.body.error.code).toBe('LAST_LEAD');
   });
 
-  it('answers 404 PERSON_NOT_FOUND for an id nobody has', async () => {
+  test('answers 404 PERSON_NOT_FOUND for an id nobody has', async ({ patch }) => {
     const res = await patch(9999, { role: 'member' });
     expect(res.status).toBe(404);
     expect(res.body.error.code).toBe('PERSON_NOT_FOUND');
   });
 
-  it.each(['abc', '-1', '0', '2.5'])('answers 400 VALIDATION_FAILED for the id %s', async (id) => {
+  test.for(['abc', '-1', '0', '2.5'])('answers 400 VALIDATION_FAILED for the id %s', async (id, { patch }) => {
     const res = await patch(id, { role: 'member' });
     expect(res.status).toBe(400);
     expect(res.headers['content-type']).toMatch(/json/);
@@ -180,39 +168,39 @@ describe('PATCH /api/users/:id', () => {
     expect(res.body.error.issues).toEqual([{ path: 'id', message: expect.any(String) }]);
   });
 
-  it.each([
+  test.for([
     ['an empty body', {}, ''],
     ['an unknown field', { role: 'member', nickname: 'Bucky' }, 'nickname'],
     ['an unknown role', { role: 'admiral' }, 'role'],
     ['an active flag that is not a boolean', { active: 'no' }, 'active'],
-  ])('answers 400 VALIDATION_FAILED with issues for %s', async (_what, body, path) => {
-    const res = await patch(memberRow.id, body);
+  ])('answers 400 VALIDATION_FAILED with issues for %s', async ([_what, body, path], { crew, lead, patch }) => {
+    const res = await patch(crew.member.id, body);
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('VALIDATION_FAILED');
     expect(res.body.error.message).toEqual(expect.any(String));
     expect(res.body.error.issues.length).toBeGreaterThan(0);
     expect(res.body.error.issues[0]).toEqual({ path, message: expect.any(String) });
     // Nothing changed.
-    const me = (await lead.agent.get('/api/users')).body.data.find((p: { id: number }) => p.id === memberRow.id);
+    const me = (await lead.agent.get('/api/users')).body.data.find((p: { id: number }) => p.id === crew.member.id);
     expect(me).toMatchObject({ role: 'member', active: true });
   });
 
-  it('names the unknown field in the message', async () => {
-    const res = await patch(memberRow.id, { nickname: 'Bucky' });
+  test('names the unknown field in the message', async ({ crew, patch }) => {
+    const res = await patch(crew.member.id, { nickname: 'Bucky' });
     expect(res.status).toBe(400);
     expect(res.body.error.message).toMatch(/nickname/);
   });
 
-  it('answers 403 FORBIDDEN for a member and a quartermaster and 401 when signed out, changing nothing', async () => {
+  test('answers 403 FORBIDDEN for a member and a quartermaster and 401 when signed out, changing nothing', async ({ t, crew, lead, patch }) => {
     for (const email of ['member@example.org', 'qm@example.org']) {
-      const res = await patch(memberRow.id, { role: 'lead' }, await t.signIn(email));
+      const res = await patch(crew.member.id, { role: 'lead' }, await t.signIn(email));
       expect(res.status).toBe(403);
       expect(res.body.error.code).toBe('FORBIDDEN');
     }
-    const res = await patch(memberRow.id, { role: 'lead' }, await t.anonymous());
+    const res = await patch(crew.member.id, { role: 'lead' }, await t.anonymous());
     expect(res.status).toBe(401);
     expect(res.body.error.code).toBe('NOT_SIGNED_IN');
-    const member = (await lead.agent.get('/api/users')).body.data.find((p: { id: number }) => p.id === memberRow.id);
+    const member = (await lead.agent.get('/api/users')).body.data.find((p: { id: number }) => p.id === crew.member.id);
     expect(member.role).toBe('member');
   });
 });

@@ -1,27 +1,10 @@
 import sharp from 'sharp';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { photoSchema } from '@shared/schemas/photos';
 import { loanSchema } from '@shared/schemas/tools';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
+import type { SignedInAgent } from '../helpers/test-app';
 import { addToolAs, post } from '../helpers/crib';
-
-let t: TestApp;
-let qm: SignedInAgent;
-let lead: SignedInAgent;
-let member: SignedInAgent;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  lead = await t.signIn('lead@example.org');
-  member = await t.signIn('member@example.org');
-  await addTool('Pneumatic rivet puller');
-  await addTool('Air drill');
-});
-afterEach(() => t.close());
-
-const addTool = (name: string) => addToolAs(qm, { name, category: 'other' });
 
 /** A real picture made by sharp: a gradient, so the encoders have something to compress. */
 function picture(width: number, height: number) {
@@ -38,19 +21,25 @@ function picture(width: number, height: number) {
 const upload = (who: SignedInAgent, code: string, bytes: Buffer, filename = 'photo.jpg', contentType = 'image/jpeg') =>
   who.agent.post(`/api/tools/${code}/photos`).set('X-CSRF-Token', who.csrf).attach('photo', bytes, { filename, contentType });
 
-
-/** The stored bytes, fetched through the API. */
-async function stored(url: string) {
-  const res = await member.agent.get(url).buffer(true).parse((r, done) => {
-    const chunks: Buffer[] = [];
-    r.on('data', (c: Buffer) => chunks.push(c));
-    r.on('end', () => done(null, Buffer.concat(chunks)));
+const test = crewTest
+  .extend('addTool', ({ qm }) => (name: string) => addToolAs(qm, { name, category: 'other' }))
+  /** The stored bytes, fetched through the API. */
+  .extend('stored', ({ member }) => async (url: string) => {
+    const res = await member.agent.get(url).buffer(true).parse((r, done) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => done(null, Buffer.concat(chunks)));
+    });
+    return { res, bytes: res.body as Buffer, meta: await sharp(res.body as Buffer).metadata() };
   });
-  return { res, bytes: res.body as Buffer, meta: await sharp(res.body as Buffer).metadata() };
-}
+
+test.beforeEach(async ({ addTool }) => {
+  await addTool('Pneumatic rivet puller');
+  await addTool('Air drill');
+});
 
 describe('POST /api/tools/:code/photos', () => {
-  it('stores a 3000×2000 JPEG re-encoded with its longest side at 1600 px and a 320 px thumbnail', async () => {
+  test('stores a 3000×2000 JPEG re-encoded with its longest side at 1600 px and a 320 px thumbnail', async ({ qm, member, stored }) => {
     const res = await upload(qm, 'T-0001', await picture(3000, 2000).jpeg().toBuffer());
     expect(res.status).toBe(201);
     expect(res.headers['content-type']).toMatch(/application\/json/);
@@ -73,7 +62,7 @@ describe('POST /api/tools/:code/photos', () => {
     expect(events[0]).toMatchObject({ action: 'photo_added', actor: { name: 'Quinn Quartermaster' }, detail: `Photo ${photo.id} added` });
   });
 
-  it('reads PNG and WebP by their content, whatever the name and declared type, and stores JPEG', async () => {
+  test('reads PNG and WebP by their content, whatever the name and declared type, and stores JPEG', async ({ lead, qm, stored }) => {
     const png = await upload(lead, 'T-0001', await picture(2400, 3200).ensureAlpha(0.5).png().toBuffer(), 'upload.bin', 'application/octet-stream');
     expect(png.status).toBe(201);
     expect(png.body).toMatchObject({ width: 1200, height: 1600 });
@@ -86,7 +75,7 @@ describe('POST /api/tools/:code/photos', () => {
     expect((await stored(webp.body.thumbnailUrl)).meta).toMatchObject({ format: 'jpeg', width: 320, height: 240 });
   });
 
-  it('turns the picture upright by its EXIF orientation and strips the metadata', async () => {
+  test('turns the picture upright by its EXIF orientation and strips the metadata', async ({ qm, stored }) => {
     const sideways = await picture(1200, 800)
       .jpeg()
       .withExif({ IFD0: { Artist: 'Hangar camera 7', Copyright: 'Chapter 1234' } })
@@ -108,7 +97,7 @@ describe('POST /api/tools/:code/photos', () => {
     expect(bytes.includes('Hangar camera 7')).toBe(false);
   });
 
-  it('answers 415 NOT_AN_IMAGE for a text file named photo.jpg', async () => {
+  test('answers 415 NOT_AN_IMAGE for a text file named photo.jpg', async ({ qm }) => {
     const res = await upload(qm, 'T-0001', Buffer.from('Torque wrench calibrated 2026-11-02, see the log book.'), 'photo.jpg', 'image/jpeg');
     expect(res.status).toBe(415);
     expect(res.headers['content-type']).toMatch(/application\/json/);
@@ -116,7 +105,7 @@ describe('POST /api/tools/:code/photos', () => {
     expect(res.body.error.message).toMatch(/not a picture/);
   });
 
-  it('answers 415 NOT_AN_IMAGE for a JPEG cut short', async () => {
+  test('answers 415 NOT_AN_IMAGE for a JPEG cut short', async ({ qm }) => {
     const whole = await picture(1200, 800).jpeg().toBuffer();
     const res = await upload(qm, 'T-0001', whole.subarray(0, Math.floor(whole.length / 2)));
     expect(res.status).toBe(415);
@@ -124,14 +113,14 @@ describe('POST /api/tools/:code/photos', () => {
     expect(res.body.error.message).toMatch(/damaged or cut short/);
   });
 
-  it('answers 415 NOT_AN_IMAGE for a picture in a format it does not take (GIF)', async () => {
+  test('answers 415 NOT_AN_IMAGE for a picture in a format it does not take (GIF)', async ({ qm }) => {
     const res = await upload(qm, 'T-0001', await picture(40, 30).gif().toBuffer(), 'photo.jpg');
     expect(res.status).toBe(415);
     expect(res.body.error.code).toBe('NOT_AN_IMAGE');
     expect(res.body.error.message).toMatch(/GIF/);
   });
 
-  it('answers 413 PHOTO_TOO_LARGE in the error envelope for a file over 10 MB', async () => {
+  test('answers 413 PHOTO_TOO_LARGE in the error envelope for a file over 10 MB', async ({ qm }) => {
     const res = await upload(qm, 'T-0001', Buffer.alloc(10 * 1024 * 1024 + 1, 0xff));
     expect(res.status).toBe(413);
     expect(res.headers['content-type']).toMatch(/application\/json/);
@@ -139,7 +128,7 @@ describe('POST /api/tools/:code/photos', () => {
     expect(res.body.error.message).toMatch(/10 MB/);
   });
 
-  it('answers 400 VALIDATION_FAILED when no photo is sent, or it is in another field', async () => {
+  test('answers 400 VALIDATION_FAILED when no photo is sent, or it is in another field', async ({ qm }) => {
     const json = await post(qm, '/api/tools/T-0001/photos', { photo: 'abc' });
     expect(json.status).toBe(400);
     expect(json.body.error).toMatchObject({ code: 'VALIDATION_FAILED', issues: [{ path: 'photo' }] });
@@ -152,7 +141,7 @@ describe('POST /api/tools/:code/photos', () => {
     expect(wrongField.body.error.message).toMatch(/field named "photo"/);
   });
 
-  it('answers 404 for an unknown tool and 400 for a malformed code', async () => {
+  test('answers 404 for an unknown tool and 400 for a malformed code', async ({ qm }) => {
     const jpeg = await picture(100, 100).jpeg().toBuffer();
     const unknown = await upload(qm, 'T-9999', jpeg);
     expect(unknown.status).toBe(404);
@@ -162,7 +151,7 @@ describe('POST /api/tools/:code/photos', () => {
     expect(malformed.body.error.code).toBe('VALIDATION_FAILED');
   });
 
-  it('refuses a member who does not hold the tool, signed-out people and a missing CSRF token', async () => {
+  test('refuses a member who does not hold the tool, signed-out people and a missing CSRF token', async ({ t, qm, member }) => {
     const jpeg = await picture(100, 100).jpeg().toBuffer();
     const notOnLoan = await upload(member, 'T-0001', jpeg);
     expect(notOnLoan.status).toBe(403);
@@ -184,7 +173,7 @@ describe('POST /api/tools/:code/photos', () => {
     expect(noToken.body.error.code).toBe('CSRF_TOKEN_INVALID');
   });
 
-  it('lets the member who holds the tool on loan add a photo', async () => {
+  test('lets the member who holds the tool on loan add a photo', async ({ member }) => {
     await post(member, '/api/tools/T-0001/checkout').expect(201);
     const res = await upload(member, 'T-0001', await picture(640, 480).jpeg().toBuffer());
     expect(res.status).toBe(201);
@@ -194,7 +183,7 @@ describe('POST /api/tools/:code/photos', () => {
 });
 
 describe('GET /api/photos/:id', () => {
-  it('answers 404 PHOTO_NOT_FOUND as JSON for an unknown photo, 400 for a malformed id, 401 when signed out', async () => {
+  test('answers 404 PHOTO_NOT_FOUND as JSON for an unknown photo, 400 for a malformed id, 401 when signed out', async ({ t, qm, member }) => {
     for (const path of ['/api/photos/999', '/api/photos/999/thumbnail']) {
       const res = await member.agent.get(path);
       expect(res.status).toBe(404);
@@ -211,7 +200,7 @@ describe('GET /api/photos/:id', () => {
 });
 
 describe('DELETE /api/photos/:id', () => {
-  it('lets the quartermaster remove a photo, which then answers 404 and leaves the tool', async () => {
+  test('lets the quartermaster remove a photo, which then answers 404 and leaves the tool', async ({ qm, member }) => {
     const photo = await upload(qm, 'T-0001', await picture(100, 100).jpeg().toBuffer());
     const res = await qm.agent.delete(photo.body.url).set('X-CSRF-Token', qm.csrf);
     expect(res.status).toBe(204);
@@ -221,7 +210,7 @@ describe('DELETE /api/photos/:id', () => {
     expect(events[0]).toMatchObject({ action: 'photo_removed', detail: `Photo ${photo.body.id} removed` });
   });
 
-  it('refuses a member with 403, and answers 404 for an unknown photo', async () => {
+  test('refuses a member with 403, and answers 404 for an unknown photo', async ({ lead, qm, member }) => {
     const photo = await upload(qm, 'T-0001', await picture(100, 100).jpeg().toBuffer());
     const refused = await member.agent.delete(photo.body.url).set('X-CSRF-Token', member.csrf);
     expect(refused.status).toBe(403);
@@ -234,7 +223,7 @@ describe('DELETE /api/photos/:id', () => {
 });
 
 describe('POST /api/tools/:code/return with a photo', () => {
-  it('stores the photo on the loan and shows it in GET /api/loans/mine', async () => {
+  test('stores the photo on the loan and shows it in GET /api/loans/mine', async ({ member }) => {
     await post(member, '/api/tools/T-0001/checkout').expect(201);
     const photo = await upload(member, 'T-0001', await picture(1200, 900).jpeg().toBuffer());
     const back = await post(member, '/api/tools/T-0001/return', { condition: 'needs_attention', note: 'Nosepiece jaws slip', photoId: photo.body.id });
@@ -246,13 +235,13 @@ describe('POST /api/tools/:code/return with a photo', () => {
     expect((await upload(member, 'T-0001', await picture(100, 100).jpeg().toBuffer())).status).toBe(403);
   });
 
-  it('returns without a photo as before, with returnPhotoId null', async () => {
+  test('returns without a photo as before, with returnPhotoId null', async ({ member }) => {
     await post(member, '/api/tools/T-0001/checkout').expect(201);
     await post(member, '/api/tools/T-0001/return', { condition: 'ok' }).expect(200);
     expect((await member.agent.get('/api/loans/mine')).body.data[0].returnPhotoId).toBeNull();
   });
 
-  it('answers 400 PHOTO_NOT_FOR_TOOL for a photo of another tool or no photo at all, and keeps the loan open', async () => {
+  test('answers 400 PHOTO_NOT_FOR_TOOL for a photo of another tool or no photo at all, and keeps the loan open', async ({ qm, member }) => {
     const otherTool = await upload(qm, 'T-0002', await picture(100, 100).jpeg().toBuffer());
     await post(member, '/api/tools/T-0001/checkout').expect(201);
     for (const photoId of [otherTool.body.id, 999]) {
@@ -264,7 +253,7 @@ describe('POST /api/tools/:code/return with a photo', () => {
     expect((await member.agent.get('/api/tools/T-0001')).body.status).toBe('on_loan');
   });
 
-  it('answers 400 VALIDATION_FAILED for a photo id that is not a positive whole number', async () => {
+  test('answers 400 VALIDATION_FAILED for a photo id that is not a positive whole number', async ({ member }) => {
     await post(member, '/api/tools/T-0001/checkout').expect(201);
     for (const photoId of [0, 1.5, '3']) {
       const res = await post(member, '/api/tools/T-0001/return', { condition: 'ok', photoId });
@@ -274,7 +263,7 @@ describe('POST /api/tools/:code/return with a photo', () => {
     }
   });
 
-  it('clears the loan’s photo when the quartermaster removes that photo', async () => {
+  test('clears the loan’s photo when the quartermaster removes that photo', async ({ qm, member }) => {
     await post(member, '/api/tools/T-0001/checkout').expect(201);
     const photo = await upload(member, 'T-0001', await picture(100, 100).jpeg().toBuffer());
     await post(member, '/api/tools/T-0001/return', { condition: 'ok', photoId: photo.body.id }).expect(200);

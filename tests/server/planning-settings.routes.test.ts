@@ -1,25 +1,11 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { actualWasteSchema, planningSettingsSchema } from '@shared/schemas/forecast';
 import { addBinAs, blindRivetBin, patch, post } from '../helpers/crib';
 import { addAssembly, drawFrom, hundredRivetLine, screwBin, setAssemblyStatus } from '../helpers/planning-fixture';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-let lead: SignedInAgent;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-  lead = await t.signIn('lead@example.org');
-});
-afterEach(() => t.close());
+import { crewTest } from '../helpers/crew-test';
 
 describe('/api/settings/planning', () => {
-  it('shows everyone the defaults and lets only a chapter lead change them', async () => {
+  crewTest('shows everyone the defaults and lets only a chapter lead change them', async ({ lead, qm, member }) => {
     const read = await member.agent.get('/api/settings/planning');
     expect(read.status).toBe(200);
     expect(planningSettingsSchema.parse(read.body)).toEqual({ wastePercent: 5, maxPitchDiameters: 10, serviceLevel: 0.95, orderCost: 15, holdingRate: 0.25 });
@@ -35,7 +21,7 @@ describe('/api/settings/planning', () => {
     expect((await member.agent.get('/api/settings/planning')).body.wastePercent).toBe(4.5);
   });
 
-  it('refuses settings out of range, unknown or missing, in words', async () => {
+  crewTest('refuses settings out of range, unknown or missing, in words', async ({ lead }) => {
     const cases: [unknown, string][] = [
       [{}, 'Send at least one setting to change.'],
       [{ serviceLevel: 1 }, 'The service level is below 100 %, like 0.95.'],
@@ -52,7 +38,7 @@ describe('/api/settings/planning', () => {
     expect((await lead.agent.get('/api/settings/planning')).body.serviceLevel).toBe(0.95);
   });
 
-  it('feeds the forecast: a 90 % service level gives z = 1.2816', async () => {
+  crewTest('feeds the forecast: a 90 % service level gives z = 1.2816', async ({ lead, qm }) => {
     await addBinAs(qm, blindRivetBin());
     // Exact inverse normal at 90 %: 1.2816 (tables round to 1.28; trade-checks §6).
     await patch(lead, '/api/settings/planning', { serviceLevel: 0.9 });
@@ -63,7 +49,7 @@ describe('/api/settings/planning', () => {
 });
 
 describe('GET /api/waste', () => {
-  it('compares drawn with estimated on finished assemblies, per member and for the chapter', async () => {
+  crewTest('compares drawn with estimated on finished assemblies, per member and for the chapter', async ({ lead, qm, member }) => {
     const shelf = await addBinAs(qm, blindRivetBin({ initialQuantity: 1000 }));
     const spare = await addBinAs(qm, blindRivetBin({ initialQuantity: 1000, location: 'Shelf B1' }));
     const screws = await addBinAs(qm, screwBin());
@@ -101,7 +87,7 @@ describe('GET /api/waste', () => {
     expect((await lead.agent.get('/api/waste')).body.currentAllowance).toBe(4.5);
   });
 
-  it('has no figure before any assembly is done, and is not for members', async () => {
+  crewTest('has no figure before any assembly is done, and is not for members', async ({ lead, member }) => {
     const res = await lead.agent.get('/api/waste');
     expect(res.status).toBe(200);
     expect(res.body).toEqual({ chapter: { estimated: 0, drawn: 0, wastePercent: null }, members: [], currentAllowance: 5 });

@@ -1,24 +1,8 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { assemblyEstimateSchema, assemblyListSchema, assemblySchema, buildListSchema, buildSchema, kitHoldsResultSchema, type AssemblyEstimate, type BillLine, type KitItem } from '@shared/schemas/builds';
 import { addBinAs, addToolAs, blindRivetBin, del, lend, patch, post } from '../helpers/crib';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let member: SignedInAgent;
-let other: SignedInAgent;
-let qm: SignedInAgent;
-let lead: SignedInAgent;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  await t.addUser({ email: 'other@example.org', name: 'Otto Other' });
-  member = await t.signIn('member@example.org');
-  other = await t.signIn('other@example.org');
-  qm = await t.signIn('qm@example.org');
-  lead = await t.signIn('lead@example.org');
-});
-afterEach(() => t.close());
+import { crewTest } from '../helpers/crew-test';
+import type { SignedInAgent } from '../helpers/test-app';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 const blind = (diameter32: number, material?: string) => ({ kind: 'blind-structural', head: 'dome', diameter32, ...(material && { material }) });
@@ -48,8 +32,28 @@ async function estimateOf(who: SignedInAgent, id: number): Promise<AssemblyEstim
   return assemblyEstimateSchema.strict().parse(res.body);
 }
 
+crewTest.override('otherMemberPerson', { email: 'other@example.org', name: 'Otto Other' });
+
+const test = crewTest
+  .extend('billOf', ({ member }) => async (lines: object[]) => (await estimateOf(member, await newAssembly(member, { lines }))).bill.filter((b) => b.lines.length > 0))
+  .extend('crib', ({ t, qm, member }) => async () => {
+    const tool = (body: Record<string, unknown>) => addToolAs(qm, body);
+    const puller18 = await tool({ name: 'Hand rivet puller, short', category: 'hand_rivet_puller', accessories: ['Nosepiece 1/8'] });
+    const puller532 = await tool({ name: 'Hand rivet puller, long', category: 'hand_rivet_puller', accessories: ['Nosepiece 3/32', 'Nosepiece 5/32'] });
+    const bit40 = await tool({ name: 'Drill bit #40', category: 'drill_bit', drillSize: '#40' });
+    const bit30 = await tool({ name: 'Drill bit #30', category: 'drill_bit', drillSize: '#30' });
+    const tray18 = await tool({ name: 'Temporary fasteners 1/8', category: 'temporary_fastener_tray', traySize: '1/8', trayCapacity: 50 });
+    const small = await tool({ name: 'Temporary fasteners 5/32, small', category: 'temporary_fastener_tray', traySize: '5/32', trayCapacity: 10 });
+    const trayA = await tool({ name: 'Temporary fasteners 5/32', category: 'temporary_fastener_tray', traySize: '5/32', trayCapacity: 12 });
+    const trayB = await tool({ name: 'Temporary fasteners 5/32', category: 'temporary_fastener_tray', traySize: '5/32', trayCapacity: 12 });
+    const deburr = await tool({ name: 'Deburring tool', category: 'deburring_tool' });
+    await lend(t, qm, bit30.code, 7 * DAY_MS);
+    await lend(t, member, deburr.code, 7 * DAY_MS);
+    return { puller18, puller532, bit40, bit30, tray18, small, trayA, trayB, deburr };
+  });
+
 describe('builds and assemblies', () => {
-  it('lets a member plan a build with dated assemblies, listed in planned order', async () => {
+  test('lets a member plan a build with dated assemblies, listed in planned order', async ({ member }) => {
     const created = await post(member, '/api/builds', { name: 'Two-seat kit', description: 'Tail first', edgeFloorIn: 0.375 });
     expect(created.status).toBe(201);
     expect(buildSchema.strict().parse(created.body)).toMatchObject({ name: 'Two-seat kit', owner: { name: 'Mia Member' }, edgeFloorIn: 0.375, assemblies: [] });
@@ -89,25 +93,25 @@ describe('builds and assemblies', () => {
     expect(renamed.body.assemblies).toHaveLength(3);
   });
 
-  it('keeps each member to their own plans: others get 403, the quartermaster reads, a lead reads and changes', async () => {
+  test('keeps each member to their own plans: others get 403, the quartermaster reads, a lead reads and changes', async ({ lead, qm, member, otherMember }) => {
     const buildId = await newBuild(member);
     const id = await newAssembly(member, { name: 'Elevator' }, buildId);
 
     for (const res of [
-      await other.agent.get(`/api/assemblies/${id}`),
-      await other.agent.get(`/api/assemblies/${id}/estimate`),
-      await other.agent.get(`/api/builds/${buildId}`),
-      await patch(other, `/api/assemblies/${id}`, { name: 'Mine now' }),
-      await patch(other, `/api/builds/${buildId}`, { name: 'Mine now' }),
-      await post(other, `/api/builds/${buildId}/assemblies`, { name: 'Sneaky', unit: 'in' }),
-      await del(other, `/api/assemblies/${id}`),
-      await post(other, `/api/assemblies/${id}/kit/holds`),
+      await otherMember.agent.get(`/api/assemblies/${id}`),
+      await otherMember.agent.get(`/api/assemblies/${id}/estimate`),
+      await otherMember.agent.get(`/api/builds/${buildId}`),
+      await patch(otherMember, `/api/assemblies/${id}`, { name: 'Mine now' }),
+      await patch(otherMember, `/api/builds/${buildId}`, { name: 'Mine now' }),
+      await post(otherMember, `/api/builds/${buildId}/assemblies`, { name: 'Sneaky', unit: 'in' }),
+      await del(otherMember, `/api/assemblies/${id}`),
+      await post(otherMember, `/api/assemblies/${id}/kit/holds`),
       await patch(qm, `/api/assemblies/${id}`, { name: 'Quartermaster edit' }),
     ]) {
       expect(res.status).toBe(403);
       expect(res.body.error.code).toBe('FORBIDDEN');
     }
-    expect((await other.agent.get(`/api/assemblies/${id}`)).body.error.message).toBe('This assembly is Mia Member’s: only they, a quartermaster or a chapter lead can see it.');
+    expect((await otherMember.agent.get(`/api/assemblies/${id}`)).body.error.message).toBe('This assembly is Mia Member’s: only they, a quartermaster or a chapter lead can see it.');
 
     expect((await qm.agent.get(`/api/assemblies/${id}`)).status).toBe(200);
     expect((await qm.agent.get(`/api/assemblies/${id}/estimate`)).status).toBe(200);
@@ -115,17 +119,17 @@ describe('builds and assemblies', () => {
     expect(byLead.status).toBe(200);
     expect(byLead.body.notes).toBe('Check the hinge brackets first');
 
-    expect((await other.agent.get('/api/builds')).body.data).toEqual([]);
-    const everyone = await other.agent.get('/api/builds?all=true');
+    expect((await otherMember.agent.get('/api/builds')).body.data).toEqual([]);
+    const everyone = await otherMember.agent.get('/api/builds?all=true');
     expect(everyone.status).toBe(403);
     expect((await qm.agent.get('/api/builds?all=true')).body.data).toHaveLength(1);
   });
 
-  it('lists assemblies: a member their own, the quartermaster everyone’s or only theirs, by status', async () => {
+  test('lists assemblies: a member their own, the quartermaster everyone’s or only theirs, by status', async ({ qm, member, otherMember }) => {
     await newAssembly(member, { name: 'Elevator', status: 'in_progress' });
     await newAssembly(member, { name: 'Lid', status: 'done' });
     await newAssembly(qm, { name: 'Demo panel' });
-    await newAssembly(other, { name: 'Trailer skin' });
+    await newAssembly(otherMember, { name: 'Trailer skin' });
 
     const names = async (who: SignedInAgent, query: string) => {
       const res = await who.agent.get(`/api/assemblies${query}`);
@@ -140,7 +144,7 @@ describe('builds and assemblies', () => {
     expect((await member.agent.get('/api/assemblies?status=finished')).body.error.code).toBe('VALIDATION_FAILED');
   });
 
-  it('answers bad input with 400 in words and unknown ids with 404', async () => {
+  test('answers bad input with 400 in words and unknown ids with 404', async ({ t, member }) => {
     const buildId = await newBuild(member);
     const id = await newAssembly(member, { plannedStart: '2027-03-01', plannedFinish: '2027-03-20' }, buildId);
 
@@ -164,7 +168,7 @@ describe('builds and assemblies', () => {
     expect((await signedOut.agent.get('/api/builds')).status).toBe(401);
   });
 
-  it('deletes an assembly nobody drew stock for, and refuses one the ledger names with 409 ASSEMBLY_HAS_DRAWS', async () => {
+  test('deletes an assembly nobody drew stock for, and refuses one the ledger names with 409 ASSEMBLY_HAS_DRAWS', async ({ qm, member }) => {
     const bin = await addBinAs(qm, blindRivetBin());
     const used = await newAssembly(member, { name: 'Lid' });
     const unused = await newAssembly(member, { name: 'Drawer' });
@@ -183,7 +187,7 @@ describe('builds and assemblies', () => {
 describe('GET /api/assemblies/:id/estimate: the bill', () => {
   const billFor = (e: AssemblyEstimate, grip: number) => e.bill.find((b) => b.grip === grip && b.lines.length > 0)!;
 
-  it('maps each fastener need to the bin that stocks it, with on hand against needed and how many short', async () => {
+  test('maps each fastener need to the bin that stocks it, with on hand against needed and how many short', async ({ qm, member }) => {
     const fiveOhFive = await addBinAs(qm, blindRivetBin({ initialQuantity: 20 }));
     const stainless = await addBinAs(qm, blindRivetBin({ material: 'stainless', stemMaterial: 'stainless', initialQuantity: 300, location: 'Shelf C1' }));
     const id = await newAssembly(member, { lines: [twentyInchLine(blind(4, '5056')), twentyInchLine(blind(4), { label: 'Any 1/8 dome, grip 2', rows: 2 })] });
@@ -218,7 +222,7 @@ describe('GET /api/assemblies/:id/estimate: the bill', () => {
     expect(e.caution).toContain('does not design structures');
   });
 
-  it('says plainly when no bin stocks a need, and names the bin of the rivet stocked for another grip', async () => {
+  test('says plainly when no bin stocks a need, and names the bin of the rivet stocked for another grip', async ({ qm, member }) => {
     // 0.063 + 0.063 = 0.126 in: grip −3, 0.126–0.187 in (TM 10-5410-221-14/1 Table 4-3); 10 in → ⌈9.25⌉ + 1 = 11 holes.
     const id = await newAssembly(member, { lines: [twentyInchLine(blind(4, '5056'), { length: 10, stack: [0.063, 0.063] })] });
     const unstocked = {
@@ -243,9 +247,8 @@ describe('GET /api/assemblies/:id/estimate: the bill', () => {
     // 10 in at a 1 in pitch, 0.375 in from each end: ⌈9.25⌉ + 1 = 11 holes; 5 % waste → ⌈11.55⌉ = 12.
     const thin = (over: object = {}) => twentyInchLine(blind(4, '5056'), { length: 10, stack: [0.04, 0.09], ...over }); // 0.130 in
     const thick = (over: object = {}) => twentyInchLine(blind(4, '5056'), { length: 10, stack: [0.08, 0.08], ...over }); // 0.160 in
-    const billOf = async (lines: object[]) => (await estimateOf(member, await newAssembly(member, { lines }))).bill.filter((b) => b.lines.length > 0);
 
-    it('chooses the bin whose range covers every line’s stack: with stock first, then the tightest range', async () => {
+    test('chooses the bin whose range covers every line’s stack: with stock first, then the tightest range', async ({ qm, billOf }) => {
       // Both −3: the table's 0.126–0.187 in (0.061 in wide) and a box reading 0.140–0.187 in (0.047 in wide).
       const wide = await addBinAs(qm, blindRivetBin({ grip16: 3, initialQuantity: 100 }));
       const narrow = await addBinAs(qm, blindRivetBin({ grip16: 3, gripMin: 0.14, gripMax: 0.187, initialQuantity: 100, location: 'Shelf A3' }));
@@ -264,7 +267,7 @@ describe('GET /api/assemblies/:id/estimate: the bill', () => {
       expect(await billOf([thick()])).toEqual([expect.objectContaining({ bin: expect.objectContaining({ code: wide.code, onHand: 100 }) })]);
     });
 
-    it('says when no bin’s range covers the stack, and names the bins of the rivet with other ranges', async () => {
+    test('says when no bin’s range covers the stack, and names the bins of the rivet with other ranges', async ({ qm, billOf }) => {
       const two = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));
       const narrow = await addBinAs(qm, blindRivetBin({ grip16: 3, gripMin: 0.14, gripMax: 0.187, initialQuantity: 100 }));
       expect(await billOf([thin()])).toEqual([
@@ -283,7 +286,7 @@ describe('GET /api/assemblies/:id/estimate: the bill', () => {
     });
   });
 
-  it('names an unstocked monel solid rivet plainly, with the universal head and no MS number', async () => {
+  test('names an unstocked monel solid rivet plainly, with the universal head and no MS number', async ({ member }) => {
     // MS20470 and MS20426 designate aluminium-alloy rivets only (trade-checks.md §4). Length: 0.064 + 1.5 × 1/8 = 0.2515 in
     // → next 1/16 up is 5/16 in, −5 (NAVEDTRA 14018 ch. 13).
     const id = await newAssembly(member, { lines: [twentyInchLine({ kind: 'solid', head: 'dome', diameter32: 4, material: 'monel' })] });
@@ -294,7 +297,7 @@ describe('GET /api/assemblies/:id/estimate: the bill', () => {
     });
   });
 
-  it('drills to the hole drill the matching bin names, instead of the published one', async () => {
+  test('drills to the hole drill the matching bin names, instead of the published one', async ({ qm, member }) => {
     const line = twentyInchLine(blind(5, '5056'));
     const before = await estimateOf(member, await newAssembly(member, { lines: [line] }));
     // 5/32 blind rivet: #40 → #30 → #20 (TM 10-5410-221-14/1 Table 4-3 hole 0.160–0.164 in; step drilling, common practice).
@@ -307,7 +310,7 @@ describe('GET /api/assemblies/:id/estimate: the bill', () => {
     expect(after.kit.filter((k) => k.role === 'drill_bit').map((k) => k.need)).toEqual(['Drill bit #40', 'Drill bit #30', 'Drill bit #21']);
   });
 
-  it('returns refused lines in errors with 200, so the editor can show them, and still bills the extra items', async () => {
+  test('returns refused lines in errors with 200, so the editor can show them, and still bills the extra items', async ({ qm, member }) => {
     const screws = await addBinAs(qm, { kind: 'screw', name: 'Screw #8-32 × 1/2 pan head', unitCost: 0.35, initialQuantity: 10, location: 'Hardware drawer 2' });
     const id = await newAssembly(member, {
       lines: [twentyInchLine(blind(4)), twentyInchLine(blind(4), { pitch: 0.2, edgeDistance: undefined })],
@@ -326,7 +329,7 @@ describe('GET /api/assemblies/:id/estimate: the bill', () => {
     ]);
   });
 
-  it('tallies what was drawn for the assembly, net of returns and reversals, and nothing drawn for other work', async () => {
+  test('tallies what was drawn for the assembly, net of returns and reversals, and nothing drawn for other work', async ({ qm, member }) => {
     const bin = await addBinAs(qm, blindRivetBin());
     const id = await newAssembly(member, { lines: [twentyInchLine(blind(4, '5056'))] });
     const first = await post(member, `/api/bins/${bin.code}/draw`, { quantity: 15, assemblyId: id });
@@ -339,7 +342,7 @@ describe('GET /api/assemblies/:id/estimate: the bill', () => {
     expect(billFor(e, 2)).toMatchObject({ bin: { code: bin.code, onHand: 500 - 10 + 3 - 40 }, drawn: 10 - 3 });
   });
 
-  it('counts a line short only by what is still to draw: what was drawn for the assembly is no longer needed from the bin', async () => {
+  test('counts a line short only by what is still to draw: what was drawn for the assembly is no longer needed from the bin', async ({ qm, member }) => {
     const screws = await addBinAs(qm, { kind: 'screw', name: 'Screw #6-32 × 3/8 pan head', unitCost: 0.2, initialQuantity: 30, location: 'Hardware drawer 3' });
     const id = await newAssembly(member, { lines: [], extraItems: [{ binCode: screws.code, quantity: 40 }] });
     expect((await estimateOf(member, id)).bill[0]).toMatchObject({ withWaste: 40, drawn: 0, shortBy: 10 });
@@ -354,26 +357,11 @@ describe('GET /api/assemblies/:id/estimate: the bill', () => {
 });
 
 describe('the crib kit', () => {
-  async function crib() {
-    const tool = (body: Record<string, unknown>) => addToolAs(qm, body);
-    const puller18 = await tool({ name: 'Hand rivet puller, short', category: 'hand_rivet_puller', accessories: ['Nosepiece 1/8'] });
-    const puller532 = await tool({ name: 'Hand rivet puller, long', category: 'hand_rivet_puller', accessories: ['Nosepiece 3/32', 'Nosepiece 5/32'] });
-    const bit40 = await tool({ name: 'Drill bit #40', category: 'drill_bit', drillSize: '#40' });
-    const bit30 = await tool({ name: 'Drill bit #30', category: 'drill_bit', drillSize: '#30' });
-    const tray18 = await tool({ name: 'Temporary fasteners 1/8', category: 'temporary_fastener_tray', traySize: '1/8', trayCapacity: 50 });
-    const small = await tool({ name: 'Temporary fasteners 5/32, small', category: 'temporary_fastener_tray', traySize: '5/32', trayCapacity: 10 });
-    const trayA = await tool({ name: 'Temporary fasteners 5/32', category: 'temporary_fastener_tray', traySize: '5/32', trayCapacity: 12 });
-    const trayB = await tool({ name: 'Temporary fasteners 5/32', category: 'temporary_fastener_tray', traySize: '5/32', trayCapacity: 12 });
-    const deburr = await tool({ name: 'Deburring tool', category: 'deburring_tool' });
-    await lend(t, qm, bit30.code, 7 * DAY_MS);
-    await lend(t, member, deburr.code, 7 * DAY_MS);
-    return { puller18, puller532, bit40, bit30, tray18, small, trayA, trayB, deburr };
-  }
   /** 5/32 blind rivets: 60 in, 0.5 in from each end, 1 in pitch → ⌈59⌉ + 1 = 60 holes; ⌈60/3⌉ = 20 temporary fasteners per drill step. */
   const sixtyHoles = { label: 'Skin lap', length: 60, pitch: 1, edgeDistance: 0.5, stack: [0.04, 0.04], structural: true, rivet: blind(5, '5056') };
   const short = (k: KitItem) => [k.role, k.need, k.count, k.tool?.code ?? null, k.note];
 
-  it('picks the puller that carries the nosepiece, a bit per drill step, trays that hold the count, a deburring tool', async () => {
+  test('picks the puller that carries the nosepiece, a bit per drill step, trays that hold the count, a deburring tool', async ({ member, crib }) => {
     const c = await crib();
     const e = await estimateOf(member, await newAssembly(member, { lines: [sixtyHoles] }));
     expect(e.totals.tempFasteners).toEqual({ '3/32': 20, '1/8': 20, '5/32': 20 });
@@ -394,7 +382,7 @@ describe('the crib kit', () => {
     expect(e.kit[3]!.tool).toEqual({ code: c.bit30.code, name: 'Drill bit #30', status: 'on_loan', category: 'drill_bit' });
   });
 
-  it('picks a rivet gun with the set for each head, and a bucking bar', async () => {
+  test('picks a rivet gun with the set for each head, and a bucking bar', async ({ qm, member }) => {
     const plain = await addToolAs(qm, { name: 'Rivet gun, 2X', category: 'rivet_gun', accessories: ['Universal-head rivet set'] });
     const both = await addToolAs(qm, { name: 'Rivet gun, 3X', category: 'rivet_gun', accessories: ['Universal-head rivet set', 'Flush set'] });
     const bar = await addToolAs(qm, { name: 'Bucking bar, steel', category: 'bucking_bar' });
@@ -417,7 +405,7 @@ describe('the crib kit', () => {
     const flushLines = [flush(4, [0.05, 0.04]), flush(3, [0.025, 0.032])];
     const flushItems = (e: AssemblyEstimate) => e.kit.filter((k) => k.role === 'countersink_cutter' || k.role === 'dimple_dies').map(short);
 
-    it('picks the cutter of the rivet size with the line’s final drill as its pilot, and the dies of the size, free ones first', async () => {
+    test('picks the cutter of the rivet size with the line’s final drill as its pilot, and the dies of the size, free ones first', async ({ t, qm, member, otherMember }) => {
       const cutter = await addToolAs(qm, { name: '100° countersink cutter, 1/8 in', category: 'countersink_cutter', rivetDiameter32: 4, drillSize: '#30' });
       // Wrong pilot, wrong size: never picked for this line.
       await addToolAs(qm, { name: '100° countersink cutter, 1/8 in, #40 pilot', category: 'countersink_cutter', rivetDiameter32: 4, drillSize: '#40' });
@@ -425,7 +413,7 @@ describe('the crib kit', () => {
       const lentDies = await addToolAs(qm, { name: '100° dimple dies, 3/32 in', category: 'dimple_dies', rivetDiameter32: 3 });
       const freeDies = await addToolAs(qm, { name: '100° dimple dies, 3/32 in', category: 'dimple_dies', rivetDiameter32: 3 });
       await addToolAs(qm, { name: '100° dimple dies, 1/8 in', category: 'dimple_dies', rivetDiameter32: 4 });
-      await lend(t, other, lentDies.code, 7 * DAY_MS);
+      await lend(t, otherMember, lentDies.code, 7 * DAY_MS);
       const e = await estimateOf(member, await newAssembly(member, { lines: flushLines }));
       expect(e.lines.map((l) => l.flushPrep)).toEqual(['countersink', 'dimple']);
       expect(flushItems(e)).toEqual([
@@ -435,12 +423,12 @@ describe('the crib kit', () => {
       expect(e.kit.find((k) => k.role === 'dimple_dies')!.tool!.category).toBe('dimple_dies');
 
       // With the free dies on loan too, the lent pair is the pick and the kit says so.
-      await lend(t, other, freeDies.code, 7 * DAY_MS);
+      await lend(t, otherMember, freeDies.code, 7 * DAY_MS);
       const later = await estimateOf(member, await newAssembly(member, { lines: flushLines }));
       expect(flushItems(later)[1]).toEqual(['dimple_dies', '100° dimple dies, 3/32 in', null, lentDies.code, 'all on loan']);
     });
 
-    it('says none in the crib when no cutter or dies of that size (or that pilot) is there', async () => {
+    test('says none in the crib when no cutter or dies of that size (or that pilot) is there', async ({ qm, member }) => {
       await addToolAs(qm, { name: '100° countersink cutter, 1/8 in, #40 pilot', category: 'countersink_cutter', rivetDiameter32: 4, drillSize: '#40' });
       await addToolAs(qm, { name: '100° countersink cutter, 5/32 in', category: 'countersink_cutter', rivetDiameter32: 5, drillSize: '#30' });
       await addToolAs(qm, { name: '100° dimple dies, 1/8 in', category: 'dimple_dies', rivetDiameter32: 4 });
@@ -452,7 +440,7 @@ describe('the crib kit', () => {
     });
   });
 
-  it('holds the kit: free tools are set aside, tools someone else has are queued for, and it says why it skipped the rest', async () => {
+  test('holds the kit: free tools are set aside, tools someone else has are queued for, and it says why it skipped the rest', async ({ t, member, crib }) => {
     const c = await crib();
     const id = await newAssembly(member, { lines: [sixtyHoles] });
     const res = await post(member, `/api/assemblies/${id}/kit/holds`);
@@ -477,13 +465,13 @@ describe('the crib kit', () => {
 });
 
 describe('/api/me/preferences', () => {
-  it('keeps each person’s length unit', async () => {
+  test('keeps each person’s length unit', async ({ member, otherMember }) => {
     expect((await member.agent.get('/api/me/preferences')).body).toEqual({ preferredUnit: 'in' });
     const changed = await patch(member, '/api/me/preferences', { preferredUnit: 'mm' });
     expect(changed.status).toBe(200);
     expect(changed.body).toEqual({ preferredUnit: 'mm' });
     expect((await member.agent.get('/api/me/preferences')).body).toEqual({ preferredUnit: 'mm' });
-    expect((await other.agent.get('/api/me/preferences')).body).toEqual({ preferredUnit: 'in' });
+    expect((await otherMember.agent.get('/api/me/preferences')).body).toEqual({ preferredUnit: 'in' });
     const bad = await patch(member, '/api/me/preferences', { preferredUnit: 'cm' });
     expect(bad.status).toBe(400);
     expect(bad.body.error.issues[0].message).toBe('Choose in or mm.');

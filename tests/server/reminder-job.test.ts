@@ -1,59 +1,42 @@
 import { eq } from 'drizzle-orm';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { overdueListSchema } from '@shared/schemas/overdue';
-import type { ServiceContext } from '../../server/context';
 import { jobRuns } from '../../server/db/schema/crib-jobs';
 import { outboxMail } from '../../server/db/schema/mail';
 import { users } from '../../server/db/schema/users';
 import { runOverdueReminders } from '../../server/features/tools/reminder-job';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
-import { buildTestApp, type Crew, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
 import { addToolAs, lend, post } from '../helpers/crib';
 
-let t: TestApp;
-let crew: Crew;
-let lead: SignedInAgent;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-let ctx: ServiceContext;
 const DAY_MS = 24 * 60 * 60 * 1000;
 const HOUR_MS = 60 * 60 * 1000;
 
-beforeEach(async () => {
-  t = await buildTestApp();
-  crew = await t.addCrew();
+const test = crewTest
+  .extend('later', ({ t }) => (ms: number) => {
+    t.clock.now = new Date(t.clock.now.getTime() + ms);
+  })
+  /** Messages written to an address, sent or not. */
+  .extend('mailsTo', ({ t }) => (address: string) => t.db.select().from(outboxMail).where(eq(outboxMail.toAddress, address)).all())
+  .extend('addTool', ({ qm }) => async (body: Record<string, unknown>) => (await addToolAs(qm, body)).code)
+  /** Two overdue loans (the member's wrench 9 days late, the quartermaster's drill 6) and one not yet due. */
+  .extend('twoOverdueLoans', ({ t, qm, member, later, addTool }) => async () => {
+    const wrench = await addTool({ name: 'Torque wrench', category: 'torque_wrench', location: 'Cabinet B', replacementValueCents: 25_000 });
+    const drill = await addTool({ name: 'Air drill', category: 'air_drill', replacementValueCents: 18_050 });
+    const puller = await addTool({ name: 'Hand rivet puller', category: 'hand_rivet_puller' });
+    const wrenchLoan = await lend(t, member, wrench, 1 * DAY_MS);
+    const drillLoan = await lend(t, qm, drill, 4 * DAY_MS);
+    await lend(t, member, puller, 30 * DAY_MS);
+    later(10 * DAY_MS);
+    return { wrench, drill, wrenchLoan, drillLoan };
+  });
+
+test.beforeEach(({ t, crew }) => {
   t.db.update(users).set({ phone: '555-0100' }).where(eq(users.id, crew.member.id)).run();
-  lead = await t.signIn('lead@example.org');
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-  // The job gets the same kind of context the server gives it; its mail goes to the outbox.
-  ctx = { db: t.db, publicUrl: 'http://gripline.test', now: () => t.clock.now };
 });
-afterEach(() => t.close());
-
-const later = (ms: number) => {
-  t.clock.now = new Date(t.clock.now.getTime() + ms);
-};
-/** Messages written to an address, sent or not. */
-const mailsTo = (address: string) => t.db.select().from(outboxMail).where(eq(outboxMail.toAddress, address)).all();
-
-const addTool = async (body: Record<string, unknown>) => (await addToolAs(qm, body)).code;
-
-
-/** Two overdue loans (the member's wrench 9 days late, the quartermaster's drill 6) and one not yet due. */
-async function twoOverdueLoans() {
-  const wrench = await addTool({ name: 'Torque wrench', category: 'torque_wrench', location: 'Cabinet B', replacementValueCents: 25_000 });
-  const drill = await addTool({ name: 'Air drill', category: 'air_drill', replacementValueCents: 18_050 });
-  const puller = await addTool({ name: 'Hand rivet puller', category: 'hand_rivet_puller' });
-  const wrenchLoan = await lend(t, member, wrench, 1 * DAY_MS);
-  const drillLoan = await lend(t, qm, drill, 4 * DAY_MS);
-  await lend(t, member, puller, 30 * DAY_MS);
-  later(10 * DAY_MS);
-  return { wrench, drill, wrenchLoan, drillLoan };
-}
 
 describe('runOverdueReminders', () => {
-  it('reminds each holder of an overdue tool and sends every active lead a digest with who, what, days late and value', async () => {
+  test('reminds each holder of an overdue tool and sends every active lead a digest with who, what, days late and value', async ({ t, mailsTo, twoOverdueLoans, ctx }) => {
     const { wrench, drill } = await twoOverdueLoans();
     await t.addUser({ email: 'second-lead@example.org', name: 'Sam Second', role: 'lead' });
     const gone = await t.addUser({ email: 'former-lead@example.org', name: 'Fay Former', role: 'lead' });
@@ -77,7 +60,7 @@ describe('runOverdueReminders', () => {
     expect(await t.lastMailTo('former-lead@example.org')).toBeUndefined();
   });
 
-  it('records the run with its summary, and GET /api/overdue shows it as the last run', async () => {
+  test('records the run with its summary, and GET /api/overdue shows it as the last run', async ({ t, lead, twoOverdueLoans, ctx }) => {
     await twoOverdueLoans();
     const startedAt = t.clock.now;
     runOverdueReminders(ctx);
@@ -90,7 +73,7 @@ describe('runOverdueReminders', () => {
     expect(res.body.data.every((l: { remindedToday: boolean }) => l.remindedToday)).toBe(true);
   });
 
-  it('sends no second reminder when it runs twice the same day, and reminds again the next day', async () => {
+  test('sends no second reminder when it runs twice the same day, and reminds again the next day', async ({ t, later, mailsTo, twoOverdueLoans, ctx }) => {
     await twoOverdueLoans();
     runOverdueReminders(ctx);
     later(6 * HOUR_MS);
@@ -106,7 +89,7 @@ describe('runOverdueReminders', () => {
     expect((await t.lastMailTo('member@example.org'))?.text).toContain('is now 10 days late'); // 10 days and 6 hours past due: whole days count
   });
 
-  it('counts “today” on the chapter’s calendar: a run after midnight in the chapter reminds again though the server’s day has not turned', async () => {
+  test('counts “today” on the chapter’s calendar: a run after midnight in the chapter reminds again though the server’s day has not turned', async ({ t, mailsTo, twoOverdueLoans, ctx }) => {
     writeChapterTimeZone(t.db, 'Pacific/Auckland');
     await twoOverdueLoans(); // now 2026-12-11T12:00Z, Saturday 01:00 in Auckland
     t.clock.now = new Date('2026-12-11T10:30:00Z'); // Friday 23:30 in Auckland
@@ -120,7 +103,7 @@ describe('runOverdueReminders', () => {
     expect((await t.lastMailTo('member@example.org'))?.text).toContain('It was due back on Thursday, December 3 and is now 9 days late.');
   });
 
-  it('sends no reminder for a loan the lead already reminded by hand that day', async () => {
+  test('sends no reminder for a loan the lead already reminded by hand that day', async ({ lead, mailsTo, twoOverdueLoans, ctx }) => {
     const { wrenchLoan } = await twoOverdueLoans();
     await post(lead, `/api/overdue/${wrenchLoan}/remind`).expect(201);
     const result = runOverdueReminders(ctx);
@@ -129,7 +112,7 @@ describe('runOverdueReminders', () => {
     expect(mailsTo('qm@example.org')).toHaveLength(1);
   });
 
-  it('sends no digest when nothing is overdue', async () => {
+  test('sends no digest when nothing is overdue', async ({ t, member, addTool, ctx }) => {
     const code = await addTool({ name: 'Spacing fan', category: 'spacing_fan' });
     await lend(t, member, code, 3 * DAY_MS);
     const result = runOverdueReminders(ctx);
@@ -137,7 +120,7 @@ describe('runOverdueReminders', () => {
     expect(await t.lastMailTo('lead@example.org')).toBeUndefined();
   });
 
-  it('moves expired hold offers on: the next person in the queue is offered the tool', async () => {
+  test('moves expired hold offers on: the next person in the queue is offered the tool', async ({ t, lead, qm, member, later, addTool, ctx }) => {
     const code = await addTool({ name: 'Pneumatic rivet puller', category: 'pneumatic_rivet_puller' });
     await lend(t, member, code, 2 * DAY_MS);
     await post(qm, `/api/tools/${code}/holds`).expect(201);
@@ -153,7 +136,7 @@ describe('runOverdueReminders', () => {
     expect(tool.body).toMatchObject({ status: 'held', holds: { offeredTo: { name: 'Lee Lead' } } });
   });
 
-  it('finishes the run when the mail server is down: the reminders wait in the outbox and a later delivery sends them', async () => {
+  test('finishes the run when the mail server is down: the reminders wait in the outbox and a later delivery sends them', async ({ t, lead, later, mailsTo, twoOverdueLoans, ctx }) => {
     await twoOverdueLoans();
     const result = runOverdueReminders(ctx);
     expect(result).toMatchObject({ remindersSent: 2, error: null });

@@ -1,33 +1,15 @@
 import sharp from 'sharp';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { binForYouSchema, binListSchema, type BinForYou } from '@shared/schemas/bins';
 import { toolForYouSchema, toolListSchema, type ToolForYou } from '@shared/schemas/tools';
 import { loanDueAt } from '@shared/time/chapter-time';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
+import type { SignedInAgent } from '../helpers/test-app';
 import { addBinAs, addToolAs, blindRivetBin, lend, post } from '../helpers/crib';
 import { screwBin } from '../helpers/planning-fixture';
 
-/**
- * What a scan opens, GET /api/tools/:code and GET /api/bins/:code, in each state: the whole answer
- * parses with the shared schema and loses nothing in the parse (no field the client does not know),
- * says what the person may do, and shows the tool or bin exactly as the list does.
- */
-let t: TestApp;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-let other: SignedInAgent;
 const HOUR = 3600_000;
 const DAY = 24 * HOUR;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  await t.addUser({ email: 'other@example.org', name: 'Otto Other' });
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-  other = await t.signIn('other@example.org');
-});
-afterEach(() => t.close());
 
 async function openTool(who: SignedInAgent, code: string): Promise<ToolForYou> {
   const res = await who.agent.get(`/api/tools/${code}`);
@@ -47,20 +29,28 @@ async function openBin(who: SignedInAgent, code: string): Promise<BinForYou> {
   return parsed;
 }
 
-/** The one item opened by a scan is the same as that item in the list. */
-async function expectSameAsInList(kind: 'tools' | 'bins', opened: ToolForYou | BinForYou) {
-  const res = await qm.agent.get(`/api/${kind}?pageSize=500`);
-  const list = kind === 'tools' ? toolListSchema.parse(res.body) : binListSchema.parse(res.body);
-  const { forYou: _forYou, ...item } = opened;
-  // A bin's scan answer leaves the reorder computation out; GET /api/bins/:code/reorder gives the list's figures.
-  const reorder = kind === 'bins' ? (await qm.agent.get(`/api/bins/${opened.code}/reorder`)).body : {};
-  expect(list.data.find((x) => x.code === opened.code)).toEqual({ ...item, ...reorder });
-}
-
 const iso = (ms: number) => new Date(ms).toISOString();
 
+/**
+ * What a scan opens, GET /api/tools/:code and GET /api/bins/:code, in each state: the whole answer
+ * parses with the shared schema and loses nothing in the parse (no field the client does not know),
+ * says what the person may do, and shows the tool or bin exactly as the list does.
+ */
+crewTest.override('otherMemberPerson', { email: 'other@example.org', name: 'Otto Other' });
+
+const test = crewTest
+  /** The one item opened by a scan is the same as that item in the list. */
+  .extend('expectSameAsInList', ({ qm }) => async (kind: 'tools' | 'bins', opened: ToolForYou | BinForYou) => {
+    const res = await qm.agent.get(`/api/${kind}?pageSize=500`);
+    const list = kind === 'tools' ? toolListSchema.parse(res.body) : binListSchema.parse(res.body);
+    const { forYou: _forYou, ...item } = opened;
+    // A bin's scan answer leaves the reorder computation out; GET /api/bins/:code/reorder gives the list's figures.
+    const reorder = kind === 'bins' ? (await qm.agent.get(`/api/bins/${opened.code}/reorder`)).body : {};
+    expect(list.data.find((x) => x.code === opened.code)).toEqual({ ...item, ...reorder });
+  });
+
 describe('GET /api/tools/:code in each state', () => {
-  it('answers the tool and what the person may do, on the shelf, behind a sign-off, on loan, queued, held, out of service, lost and retired', async () => {
+  test('answers the tool and what the person may do, on the shelf, behind a sign-off, on loan, queued, held, out of service, lost and retired', async ({ t, qm, member, otherMember, expectSameAsInList }) => {
     const now = t.clock.now.getTime();
     const lead = await t.signIn('lead@example.org');
     const signoff = await post(lead, '/api/signoffs', { name: 'Air tools', description: 'Air drills and rivet guns' });
@@ -89,11 +79,11 @@ describe('GET /api/tools/:code in each state', () => {
     });
     await expectSameAsInList('tools', gated);
 
-    await lend(t, other, 'T-0003', 3 * DAY);
+    await lend(t, otherMember, 'T-0003', 3 * DAY);
     const lent = await openTool(member, 'T-0003');
     expect(lent.loan).toMatchObject({ holder: { name: 'Otto Other' }, dueAt: iso(now + 3 * DAY) });
     expect(lent.forYou).toEqual({ actions: ['place_hold'], reason: 'Otto Other has it until Friday, December 4.', defaultDueAt: '2026-12-06T23:59:59.999Z', yourHold: null });
-    expect((await openTool(other, 'T-0003')).forYou).toMatchObject({ actions: ['return'], reason: null });
+    expect((await openTool(otherMember, 'T-0003')).forYou).toMatchObject({ actions: ['return'], reason: null });
     expect((await openTool(qm, 'T-0003')).forYou.actions).toEqual(['return', 'place_hold']);
     await expectSameAsInList('tools', lent);
 
@@ -104,7 +94,7 @@ describe('GET /api/tools/:code in each state', () => {
     expect(queued.forYou).toMatchObject({ actions: ['cancel_hold'], yourHold: { status: 'waiting', position: 1, offerExpiresAt: null } });
     expect((await openTool(qm, 'T-0003')).forYou).toMatchObject({ actions: ['return', 'cancel_hold'], yourHold: { status: 'waiting', position: 2 } });
 
-    expect((await post(other, '/api/tools/T-0003/return', { condition: 'ok' })).status).toBe(200);
+    expect((await post(otherMember, '/api/tools/T-0003/return', { condition: 'ok' })).status).toBe(200);
     const offerEnds = iso(now + 48 * HOUR);
     const heldForMe = await openTool(member, 'T-0003');
     expect(heldForMe).toMatchObject({ status: 'held', loan: null, holds: { waiting: 1, offeredTo: { name: 'Mia Member' }, offerExpiresAt: offerEnds } });
@@ -115,7 +105,7 @@ describe('GET /api/tools/:code in each state', () => {
       reason: 'It is set aside for Mia Member until Dec 3, 2026, 12:00 PM.',
       yourHold: { status: 'waiting', position: 2 },
     });
-    expect((await openTool(other, 'T-0003')).forYou.actions).toEqual(['place_hold']);
+    expect((await openTool(otherMember, 'T-0003')).forYou.actions).toEqual(['place_hold']);
     await expectSameAsInList('tools', heldForMe);
 
     expect((await post(qm, '/api/tools/T-0004/out-of-service', { note: 'Worn retaining spring' })).status).toBe(200);
@@ -134,7 +124,7 @@ describe('GET /api/tools/:code in each state', () => {
     }
   });
 
-  it('answers 404 TOOL_NOT_FOUND for a code on no tool', async () => {
+  test('answers 404 TOOL_NOT_FOUND for a code on no tool', async ({ member }) => {
     const res = await member.agent.get('/api/tools/T-0404');
     expect(res.status).toBe(404);
     expect(res.body.error.code).toBe('TOOL_NOT_FOUND');
@@ -142,7 +132,7 @@ describe('GET /api/tools/:code in each state', () => {
 });
 
 describe('GET /api/bins/:code in each state', () => {
-  it('answers the bin, what the person may do and where its stock may move', async () => {
+  test('answers the bin, what the person may do and where its stock may move', async ({ t, qm, member, otherMember, expectSameAsInList }) => {
     const a = await addBinAs(qm, blindRivetBin({ location: 'Shelf A2' }));
     const b = await addBinAs(qm, blindRivetBin({ location: 'Shelf B1', initialQuantity: 0 }));
     await addBinAs(qm, blindRivetBin({ location: 'Shelf B2', grip16: 3 }));
@@ -158,7 +148,7 @@ describe('GET /api/bins/:code in each state', () => {
     expect((await post(member, `/api/bins/${a.code}/draw`, { quantity: 30 })).status).toBe(201);
     expect((await post(member, `/api/bins/${a.code}/return`, { quantity: 5 })).status).toBe(201);
     expect((await openBin(member, a.code)).forYou).toEqual({ actions: ['draw', 'return_unused'], yourNetDrawn: 25, sameSpecBins: [] });
-    expect((await openBin(other, a.code)).forYou).toEqual({ actions: ['draw'], yourNetDrawn: 0, sameSpecBins: [] });
+    expect((await openBin(otherMember, a.code)).forYou).toEqual({ actions: ['draw'], yourNetDrawn: 0, sameSpecBins: [] });
 
     expect((await post(qm, `/api/bins/${a.code}/count`, { counted: 470 })).status).toBe(201);
     const counted = await openBin(qm, a.code);
@@ -180,7 +170,7 @@ describe('GET /api/bins/:code in each state', () => {
     await expectSameAsInList('bins', screws);
   });
 
-  it('answers 404 BIN_NOT_FOUND for a code on no bin', async () => {
+  test('answers 404 BIN_NOT_FOUND for a code on no bin', async ({ member }) => {
     const res = await member.agent.get('/api/bins/B-0404');
     expect(res.status).toBe(404);
     expect(res.body.error.code).toBe('BIN_NOT_FOUND');

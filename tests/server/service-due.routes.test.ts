@@ -1,33 +1,20 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { serviceDueListSchema } from '@shared/schemas/overdue';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { addToolAs, post } from '../helpers/crib';
 
-let t: TestApp;
-let lead: SignedInAgent;
-let qm: SignedInAgent;
-let member: SignedInAgent;
 const DAY_MS = 24 * 60 * 60 * 1000;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  lead = await t.signIn('lead@example.org');
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-});
-afterEach(() => t.close());
-
-const daysAgo = (n: number) => new Date(t.clock.now.getTime() - n * DAY_MS).toISOString();
-
-const addTool = async (body: Record<string, unknown>) => (await addToolAs(qm, body)).code;
 
 /** Yearly calibration of a torque wrench: common practice; the wrench's maker may say otherwise. */
 const wrench = (name: string, lastServiceAt: string) => ({ name, category: 'torque_wrench', serviceIntervalDays: 365, lastServiceAt });
 
+const test = crewTest
+  .extend('daysAgo', ({ t }) => (n: number) => new Date(t.clock.now.getTime() - n * DAY_MS).toISOString())
+  .extend('addTool', ({ qm }) => async (body: Record<string, unknown>) => (await addToolAs(qm, body)).code);
+
 describe('GET /api/service-due', () => {
-  it('counts the days to a calibration in chapter days: due tomorrow 01:00 in the chapter is due in 1 day, not today', async () => {
+  test('counts the days to a calibration in chapter days: due tomorrow 01:00 in the chapter is due in 1 day, not today', async ({ t, qm, addTool }) => {
     writeChapterTimeZone(t.db, 'America/Chicago'); // now: Tuesday 06:00 there
     const hours = (n: number) => new Date(t.clock.now.getTime() - 365 * DAY_MS + n * 60 * 60 * 1000).toISOString();
     const code = await addTool(wrench('Torque wrench, 1/2 drive', hours(19))); // due Wednesday 01:00 in Chicago, 19 hours on
@@ -38,7 +25,7 @@ describe('GET /api/service-due', () => {
     expect(item(late)).toMatchObject({ daysUntilDue: -1, words: 'Calibration overdue by 1 day' });
   });
 
-  it('lists a torque wrench due within 14 days but not one serviced yesterday', async () => {
+  test('lists a torque wrench due within 14 days but not one serviced yesterday', async ({ t, qm, daysAgo, addTool }) => {
     const due = await addTool(wrench('Torque wrench, 1/4 drive', daysAgo(360)));
     await addTool(wrench('Torque wrench, 3/8 drive', daysAgo(1)));
     const res = await qm.agent.get('/api/service-due');
@@ -65,7 +52,7 @@ describe('GET /api/service-due', () => {
     ]);
   });
 
-  it('puts overdue service first, then tools out of service with their reason, then those due soon', async () => {
+  test('puts overdue service first, then tools out of service with their reason, then those due soon', async ({ qm, daysAgo, addTool }) => {
     const soon = await addTool(wrench('Torque wrench, due soon', daysAgo(355)));
     const broken = await addTool({ name: 'Rivet gun', category: 'rivet_gun' });
     await post(qm, `/api/tools/${broken}/out-of-service`, { note: 'Trigger sticks' }).expect(200);
@@ -82,7 +69,7 @@ describe('GET /api/service-due', () => {
     expect(res.body.data[2]).toMatchObject({ outOfServiceReason: 'Trigger sticks', status: 'out_of_service', daysUntilDue: null });
   });
 
-  it('leaves out retired and lost tools', async () => {
+  test('leaves out retired and lost tools', async ({ qm, daysAgo, addTool }) => {
     const retired = await addTool(wrench('Old torque wrench', daysAgo(400)));
     await post(qm, `/api/tools/${retired}/retire`, { note: 'Worn ratchet' }).expect(200);
     const lost = await addTool(wrench('Missing torque wrench', daysAgo(400)));
@@ -90,7 +77,7 @@ describe('GET /api/service-due', () => {
     expect((await qm.agent.get('/api/service-due')).body.data).toEqual([]);
   });
 
-  it('drops a tool once it is back in service and serviced, but keeps an overdue one brought back without service', async () => {
+  test('drops a tool once it is back in service and serviced, but keeps an overdue one brought back without service', async ({ t, qm, daysAgo, addTool }) => {
     const code = await addTool(wrench('Torque wrench, 1/2 drive', daysAgo(370)));
     await post(qm, `/api/tools/${code}/out-of-service`, { note: 'Sent for calibration' }).expect(200);
     let list = await qm.agent.get('/api/service-due');
@@ -108,7 +95,7 @@ describe('GET /api/service-due', () => {
     expect(tool.body.lastServiceAt).toBe(t.clock.now.toISOString());
   });
 
-  it('lets the lead read it, answers 403 to a member and 401 when signed out', async () => {
+  test('lets the lead read it, answers 403 to a member and 401 when signed out', async ({ t, lead, member }) => {
     expect((await lead.agent.get('/api/service-due')).status).toBe(200);
     const refused = await member.agent.get('/api/service-due');
     expect(refused.status).toBe(403);

@@ -1,36 +1,28 @@
 import { eq } from 'drizzle-orm';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { signoffRequestListSchema, signoffRequestSchema } from '@shared/schemas/signoff-requests';
 import { outboxMail } from '../../server/db/schema/mail';
 import { signoffRequests } from '../../server/db/schema/signoff-requests';
 import { addToolAs, patch, post } from '../helpers/crib';
-import { buildTestApp, type Crew, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
+import type { SignedInAgent } from '../helpers/test-app';
 
-let t: TestApp;
-let crew: Crew;
-let lead: SignedInAgent;
-let qm: SignedInAgent;
-let member: SignedInAgent;
 let signoffId: number;
 let drill: string;
 
-beforeEach(async () => {
-  t = await buildTestApp();
-  crew = await t.addCrew();
-  lead = await t.signIn('lead@example.org');
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
+const ask = (who: SignedInAgent, body: Record<string, unknown>) => post(who, '/api/signoffs/requests', body);
+
+const test = crewTest
+  .extend('openRequests', ({ lead }) => async () => signoffRequestListSchema.parse((await lead.agent.get('/api/signoffs/requests').expect(200)).body).data)
+  .extend('mailTo', ({ t }) => (address: string) => t.db.select().from(outboxMail).where(eq(outboxMail.toAddress, address)).all());
+
+test.beforeEach(async ({ lead, qm }) => {
   signoffId = ((await post(lead, '/api/signoffs', { name: 'Air tools' })).body as { id: number }).id;
   drill = (await addToolAs(qm, { name: 'Air drill', category: 'air_drill', requiredSignoffId: signoffId })).code;
 });
-afterEach(() => t.close());
-
-const ask = (who: SignedInAgent, body: Record<string, unknown>) => post(who, '/api/signoffs/requests', body);
-const openRequests = async () => signoffRequestListSchema.parse((await lead.agent.get('/api/signoffs/requests').expect(200)).body).data;
-const mailTo = (address: string) => t.db.select().from(outboxMail).where(eq(outboxMail.toAddress, address)).all();
 
 describe('POST /api/signoffs/requests', () => {
-  it('records a member’s request from a tool, with the note, for the lead to see', async () => {
+  test('records a member’s request from a tool, with the note, for the lead to see', async ({ crew, member, openRequests }) => {
     const res = await ask(member, { toolCode: drill, note: '  I did the drill course in March. ' });
     expect(res.status).toBe(201);
     expect(res.headers['content-type']).toMatch(/application\/json/);
@@ -50,7 +42,7 @@ describe('POST /api/signoffs/requests', () => {
     expect(mine).toEqual([res.body]);
   });
 
-  it('answers 409 SIGNOFF_REQUEST_OPEN while one is open for the same sign-off, from this tool or another', async () => {
+  test('answers 409 SIGNOFF_REQUEST_OPEN while one is open for the same sign-off, from this tool or another', async ({ qm, member, openRequests }) => {
     const rivetGun = (await addToolAs(qm, { name: 'Rivet gun', category: 'other', requiredSignoffId: signoffId })).code;
     expect((await ask(member, { toolCode: drill })).status).toBe(201);
     for (const toolCode of [drill, rivetGun]) {
@@ -62,7 +54,7 @@ describe('POST /api/signoffs/requests', () => {
     expect(await openRequests()).toHaveLength(1);
   });
 
-  it('refuses a tool without a sign-off, an unknown tool, one already signed off, and unknown fields', async () => {
+  test('refuses a tool without a sign-off, an unknown tool, one already signed off, and unknown fields', async ({ crew, lead, qm, member }) => {
     const fan = (await addToolAs(qm, { name: 'Spacing fan', category: 'spacing_fan' })).code;
     expect((await ask(member, { toolCode: fan })).body.error.code).toBe('NO_SIGNOFF_NEEDED');
     const unknown = await ask(member, { toolCode: 'T-9999' });
@@ -80,7 +72,7 @@ describe('POST /api/signoffs/requests', () => {
 });
 
 describe('answering a sign-off request', () => {
-  it('closes the request as granted when the lead signs the member off, and mails them', async () => {
+  test('closes the request as granted when the lead signs the member off, and mails them', async ({ t, crew, lead, member, openRequests }) => {
     const id = ((await ask(member, { toolCode: drill })).body as { id: number }).id;
     await post(lead, `/api/signoffs/${signoffId}/holders`, { userId: crew.member.id }).expect(201);
     expect(await openRequests()).toEqual([]);
@@ -93,12 +85,12 @@ describe('answering a sign-off request', () => {
     expect((await post(member, `/api/tools/${drill}/checkout`, {})).status).toBe(201);
   });
 
-  it('grants without a request as before, sending no answer', async () => {
+  test('grants without a request as before, sending no answer', async ({ crew, lead, mailTo }) => {
     await post(lead, `/api/signoffs/${signoffId}/holders`, { userId: crew.member.id }).expect(201);
     expect(mailTo('member@example.org')).toEqual([]);
   });
 
-  it('declines with a reason the member reads in the mail; the member may then ask again', async () => {
+  test('declines with a reason the member reads in the mail; the member may then ask again', async ({ t, lead, member, openRequests }) => {
     const id = ((await ask(member, { toolCode: drill })).body as { id: number }).id;
     const noReason = await post(lead, `/api/signoffs/requests/${id}/decline`, { reason: '  ' });
     expect(noReason.status).toBe(400);
@@ -118,7 +110,7 @@ describe('answering a sign-off request', () => {
     expect((await ask(member, { toolCode: drill })).status).toBe(201);
   });
 
-  it('leaves a deactivated person’s request off the lead’s list, and shows it again on reactivation', async () => {
+  test('leaves a deactivated person’s request off the lead’s list, and shows it again on reactivation', async ({ crew, lead, member, openRequests }) => {
     await ask(member, { toolCode: drill }).expect(201);
     await patch(lead, `/api/users/${crew.member.id}`, { active: false }).expect(200);
     expect(await openRequests()).toEqual([]);
@@ -126,7 +118,7 @@ describe('answering a sign-off request', () => {
     expect((await openRequests()).map((r) => r.member.name)).toEqual(['Mia Member']);
   });
 
-  it('lets only a lead list or decline requests', async () => {
+  test('lets only a lead list or decline requests', async ({ t, qm, member, openRequests }) => {
     const id = ((await ask(member, { toolCode: drill })).body as { id: number }).id;
     for (const who of [qm, member]) {
       expect((await who.agent.get('/api/signoffs/requests')).status).toBe(403);

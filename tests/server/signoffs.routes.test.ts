@@ -1,38 +1,22 @@
 import { eq } from 'drizzle-orm';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { mySignoffListSchema, signoffGrantSchema, signoffListSchema, signoffSchema } from '@shared/schemas/signoffs';
 import { memberSignoffs } from '../../server/db/schema/signoffs';
-import { buildTestApp, type Crew, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
 import { del, patch, post } from '../helpers/crib';
 
-let t: TestApp;
-let crew: Crew;
-let lead: SignedInAgent;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  crew = await t.addCrew();
-  lead = await t.signIn('lead@example.org');
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-});
-afterEach(() => t.close());
-
-
-async function define(name: string, description?: string): Promise<number> {
-  const res = await post(lead, '/api/signoffs', { name, description });
-  if (res.status !== 201) throw new Error(`could not define ${name}: ${res.status} ${JSON.stringify(res.body)}`);
-  return (res.body as { id: number }).id;
-}
-
-async function list() {
-  return signoffListSchema.parse((await member.agent.get('/api/signoffs').expect(200)).body).data;
-}
+const test = crewTest
+  .extend('define', ({ lead }) => async (name: string, description?: string): Promise<number> => {
+    const res = await post(lead, '/api/signoffs', { name, description });
+    if (res.status !== 201) throw new Error(`could not define ${name}: ${res.status} ${JSON.stringify(res.body)}`);
+    return (res.body as { id: number }).id;
+  })
+  .extend('list', ({ member }) => async () => {
+    return signoffListSchema.parse((await member.agent.get('/api/signoffs').expect(200)).body).data;
+  });
 
 describe('POST /api/signoffs', () => {
-  it('defines a sign-off that everyone signed in can read, with no holders and no tools yet', async () => {
+  test('defines a sign-off that everyone signed in can read, with no holders and no tools yet', async ({ lead, list }) => {
     const res = await post(lead, '/api/signoffs', { name: '  Air tools ', description: 'Air drill, rivet gun, die grinder' });
     expect(res.status).toBe(201);
     expect(res.headers['content-type']).toMatch(/application\/json/);
@@ -40,7 +24,7 @@ describe('POST /api/signoffs', () => {
     expect(await list()).toEqual([res.body]);
   });
 
-  it('answers 409 SIGNOFF_NAME_TAKEN for a name already used, whatever its case', async () => {
+  test('answers 409 SIGNOFF_NAME_TAKEN for a name already used, whatever its case', async ({ lead, define }) => {
     await define('Air tools');
     const res = await post(lead, '/api/signoffs', { name: 'AIR TOOLS' });
     expect(res.status).toBe(409);
@@ -48,7 +32,7 @@ describe('POST /api/signoffs', () => {
     expect(res.body.error.message).toMatch(/"AIR TOOLS" already exists/);
   });
 
-  it('answers 400 VALIDATION_FAILED for a missing name or an unknown field', async () => {
+  test('answers 400 VALIDATION_FAILED for a missing name or an unknown field', async ({ lead }) => {
     const empty = await post(lead, '/api/signoffs', { name: '   ' });
     expect(empty.status).toBe(400);
     expect(empty.body.error.code).toBe('VALIDATION_FAILED');
@@ -58,7 +42,7 @@ describe('POST /api/signoffs', () => {
     expect(extra.body.error.code).toBe('VALIDATION_FAILED');
   });
 
-  it('answers 403 to a member and a quartermaster, and 401 when signed out', async () => {
+  test('answers 403 to a member and a quartermaster, and 401 when signed out', async ({ t, qm, member, list }) => {
     for (const who of [member, qm]) {
       const res = await post(who, '/api/signoffs', { name: 'Air tools' });
       expect(res.status).toBe(403);
@@ -75,14 +59,14 @@ describe('POST /api/signoffs', () => {
 });
 
 describe('PATCH /api/signoffs/:id', () => {
-  it('renames and describes a sign-off', async () => {
+  test('renames and describes a sign-off', async ({ lead, define }) => {
     const id = await define('Air tools');
     const res = await patch(lead, `/api/signoffs/${id}`, { name: 'Pneumatic tools', description: 'Anything on the air line' });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ id, name: 'Pneumatic tools', description: 'Anything on the air line' });
   });
 
-  it('refuses a name another sign-off has, an empty change, an unknown id, and anyone but a lead', async () => {
+  test('refuses a name another sign-off has, an empty change, an unknown id, and anyone but a lead', async ({ lead, qm, define }) => {
     const id = await define('Air tools');
     await define('Drill press');
     const taken = await patch(lead, `/api/signoffs/${id}`, { name: 'drill press' });
@@ -103,7 +87,7 @@ describe('PATCH /api/signoffs/:id', () => {
 });
 
 describe('POST /api/signoffs/:id/holders and DELETE /api/signoffs/:id/holders/:userId', () => {
-  it('signs a member off dated now by the lead, shows them as a holder and in their own list', async () => {
+  test('signs a member off dated now by the lead, shows them as a holder and in their own list', async ({ t, crew, lead, qm, member, define, list }) => {
     const id = await define('Air tools');
     const res = await post(lead, `/api/signoffs/${id}/holders`, { userId: crew.member.id });
     expect(res.status).toBe(201);
@@ -121,7 +105,7 @@ describe('POST /api/signoffs/:id/holders and DELETE /api/signoffs/:id/holders/:u
     expect(mySignoffListSchema.parse((await qm.agent.get('/api/signoffs/mine')).body).data).toEqual([]);
   });
 
-  it('answers 409 ALREADY_SIGNED_OFF when the person already holds it', async () => {
+  test('answers 409 ALREADY_SIGNED_OFF when the person already holds it', async ({ crew, lead, define }) => {
     const id = await define('Air tools');
     await post(lead, `/api/signoffs/${id}/holders`, { userId: crew.member.id }).expect(201);
     const again = await post(lead, `/api/signoffs/${id}/holders`, { userId: crew.member.id });
@@ -130,7 +114,7 @@ describe('POST /api/signoffs/:id/holders and DELETE /api/signoffs/:id/holders/:u
     expect(again.body.error.message).toMatch(/Mia Member already holds the "Air tools" sign-off/);
   });
 
-  it('refuses an unknown person (404), a deactivated person (409), an unknown sign-off (404) and a bad body (400)', async () => {
+  test('refuses an unknown person (404), a deactivated person (409), an unknown sign-off (404) and a bad body (400)', async ({ crew, lead, define }) => {
     const id = await define('Air tools');
     const nobody = await post(lead, `/api/signoffs/${id}/holders`, { userId: 999 });
     expect(nobody.status).toBe(404);
@@ -151,7 +135,7 @@ describe('POST /api/signoffs/:id/holders and DELETE /api/signoffs/:id/holders/:u
     }
   });
 
-  it('revokes with 204, keeps the grant on record with who revoked it and when, and allows a new grant later', async () => {
+  test('revokes with 204, keeps the grant on record with who revoked it and when, and allows a new grant later', async ({ t, crew, lead, member, define, list }) => {
     const id = await define('Air tools');
     await post(lead, `/api/signoffs/${id}/holders`, { userId: crew.member.id }).expect(201);
     t.clock.now = new Date('2026-12-05T09:30:00Z');
@@ -173,7 +157,7 @@ describe('POST /api/signoffs/:id/holders and DELETE /api/signoffs/:id/holders/:u
     expect((await list())[0]!.holders.map((h) => h.grantedAt)).toEqual(['2026-12-09T08:00:00.000Z']);
   });
 
-  it('keeps a deactivated holder on the list, marked inactive, and lets the lead revoke them', async () => {
+  test('keeps a deactivated holder on the list, marked inactive, and lets the lead revoke them', async ({ crew, lead, define, list }) => {
     const id = await define('Air tools');
     await post(lead, `/api/signoffs/${id}/holders`, { userId: crew.quartermaster.id }).expect(201);
     await patch(lead, `/api/users/${crew.quartermaster.id}`, { active: false }).expect(200);
@@ -182,7 +166,7 @@ describe('POST /api/signoffs/:id/holders and DELETE /api/signoffs/:id/holders/:u
     expect((await list())[0]!.holders).toEqual([]);
   });
 
-  it('grants once when the same grant is sent many times at once', async () => {
+  test('grants once when the same grant is sent many times at once', async ({ t, crew, lead, define }) => {
     const id = await define('Air tools');
     const results = await Promise.all(Array.from({ length: 6 }, () => post(lead, `/api/signoffs/${id}/holders`, { userId: crew.member.id })));
     expect(results.filter((r) => r.status === 201)).toHaveLength(1);
@@ -190,7 +174,7 @@ describe('POST /api/signoffs/:id/holders and DELETE /api/signoffs/:id/holders/:u
     expect(t.db.select().from(memberSignoffs).all()).toHaveLength(1);
   });
 
-  it('answers 403 to a member or quartermaster granting or revoking, and 400 for a malformed id', async () => {
+  test('answers 403 to a member or quartermaster granting or revoking, and 400 for a malformed id', async ({ crew, lead, qm, member, define }) => {
     const id = await define('Air tools');
     for (const who of [member, qm]) {
       expect((await post(who, `/api/signoffs/${id}/holders`, { userId: crew.member.id })).body.error.code).toBe('FORBIDDEN');
@@ -201,7 +185,7 @@ describe('POST /api/signoffs/:id/holders and DELETE /api/signoffs/:id/holders/:u
     expect(bad.body.error.code).toBe('VALIDATION_FAILED');
   });
 
-  it('counts the tools in the crib that need the sign-off', async () => {
+  test('counts the tools in the crib that need the sign-off', async ({ qm, define, list }) => {
     const id = await define('Air tools');
     await post(qm, '/api/tools', { name: 'Air drill', category: 'air_drill', requiredSignoffId: id }).expect(201);
     await post(qm, '/api/tools', { name: 'Rivet gun 3X', category: 'rivet_gun', requiredSignoffId: id }).expect(201);
@@ -211,7 +195,7 @@ describe('POST /api/signoffs/:id/holders and DELETE /api/signoffs/:id/holders/:u
 });
 
 describe('checkout of a tool that needs a sign-off', () => {
-  it('refuses a member without it and names the sign-off and the lead, allows it after the grant, refuses again after revoking', async () => {
+  test('refuses a member without it and names the sign-off and the lead, allows it after the grant, refuses again after revoking', async ({ crew, lead, qm, member, define }) => {
     const id = await define('Air tools');
     await post(qm, '/api/tools', { name: 'Air drill', category: 'air_drill', requiredSignoffId: id }).expect(201);
 
@@ -232,7 +216,7 @@ describe('checkout of a tool that needs a sign-off', () => {
     expect(again.body.error.code).toBe('SIGNOFF_REQUIRED');
   });
 
-  it('names every active lead, and leaves out a deactivated one', async () => {
+  test('names every active lead, and leaves out a deactivated one', async ({ t, lead, qm, member, define }) => {
     const id = await define('Air tools');
     await post(qm, '/api/tools', { name: 'Die grinder', category: 'other', requiredSignoffId: id }).expect(201);
     await t.addUser({ email: 'dana@example.org', name: 'Dana Okafor', role: 'lead' });

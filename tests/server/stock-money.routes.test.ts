@@ -1,9 +1,9 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { paymentSchema, spendSchema, tabListSchema, tabSchema } from '@shared/schemas/stock-money';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { addBinAs, blindRivetBin, post } from '../helpers/crib';
 import { giveAssemblies } from '../helpers/planning';
-import { buildTestApp, type Crew, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
 
 // Expected money is worked out here as quantity × unit cost in whole cents (arithmetic, no outside source).
 const A_1 = 12; // blindRivetBin's unit cost, $0.12
@@ -12,33 +12,23 @@ const SCREW = 35; // $0.35 a screw
 
 const screwBin = (over: Record<string, unknown> = {}) => ({ kind: 'screw', name: 'Screw #8-32 × 1/2 pan head', unitCost: 0.35, packSize: 100, initialQuantity: 200, ...over });
 
-let t: TestApp;
-let crew: Crew;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-let lead: SignedInAgent;
-
-const at = (iso: string) => {
-  t.clock.now = new Date(iso);
-};
 async function created<T = { id: number }>(res: Promise<{ status: number; body: unknown }>): Promise<T> {
   const r = await res;
   if (r.status !== 201) throw new Error(`expected 201, got ${r.status} ${JSON.stringify(r.body)}`);
   return r.body as T;
 }
 
-beforeEach(async () => {
-  t = await buildTestApp();
-  crew = await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-  lead = await t.signIn('lead@example.org');
+const test = crewTest
+  .extend('at', ({ t }) => (iso: string) => {
+    t.clock.now = new Date(iso);
+  });
+
+test.beforeEach(({ t, crew }) => {
   giveAssemblies(t.db, crew.member.id, [7, 8], { build: 'Two-seat kit', assemblies: { 7: 'Left aileron', 8: 'Right flap' } });
 });
-afterEach(() => t.close());
 
 describe('GET /api/stock/tab', () => {
-  it('values each draw at the unit cost of its day, by assembly and by month, net of returns and reversals', async () => {
+  test('values each draw at the unit cost of its day, by assembly and by month, net of returns and reversals', async ({ crew, qm, member, at }) => {
     at('2026-09-10T15:00:00Z');
     const rivets = await addBinAs(qm, blindRivetBin());
     const screws = await addBinAs(qm, screwBin());
@@ -88,7 +78,7 @@ describe('GET /api/stock/tab', () => {
     expect(screwDraw).toMatchObject({ assembly: null });
   });
 
-  it('keeps other people’s draws off the tab', async () => {
+  test('keeps other people’s draws off the tab', async ({ t, qm, member }) => {
     const other = await t.addUser({ email: 'other@example.org', name: 'Otto Other' });
     const otherAgent = await t.signIn('other@example.org');
     const rivets = await addBinAs(qm, blindRivetBin());
@@ -98,7 +88,7 @@ describe('GET /api/stock/tab', () => {
     expect((await otherAgent.agent.get('/api/stock/tab')).body).toMatchObject({ member: { id: other.id }, chargedCents: 40 * A_1 });
   });
 
-  it('answers 401 when signed out', async () => {
+  test('answers 401 when signed out', async ({ t }) => {
     const anon = await t.anonymous();
     const res = await anon.agent.get('/api/stock/tab');
     expect(res.status).toBe(401);
@@ -107,7 +97,7 @@ describe('GET /api/stock/tab', () => {
 });
 
 describe('payments and other people’s tabs', () => {
-  it('records a payment, which lowers the balance and shows in the month it was paid', async () => {
+  test('records a payment, which lowers the balance and shows in the month it was paid', async ({ crew, lead, qm, member, at }) => {
     at('2026-11-20T12:00:00Z');
     const rivets = await addBinAs(qm, blindRivetBin());
     await created(post(member, `/api/bins/${rivets.code}/draw`, { quantity: 120 }));
@@ -133,7 +123,7 @@ describe('payments and other people’s tabs', () => {
     expect(list.body.data).toEqual([{ member: { id: crew.member.id, name: 'Mia Member' }, chargedCents: 1440, paidCents: 1250, balanceCents: 190 }]);
   });
 
-  it('lets the quartermaster and the lead read a member’s tab, and refuses a member reading another’s', async () => {
+  test('lets the quartermaster and the lead read a member’s tab, and refuses a member reading another’s', async ({ crew, lead, qm, member }) => {
     const rivets = await addBinAs(qm, blindRivetBin());
     await created(post(member, `/api/bins/${rivets.code}/draw`, { quantity: 2 }));
     for (const who of [qm, lead]) {
@@ -152,7 +142,7 @@ describe('payments and other people’s tabs', () => {
     expect((await lead.agent.get('/api/stock/tabs/abc')).status).toBe(400);
   });
 
-  it('refuses a payment of 0, one over $10,000, one for nobody, and one recorded by a member', async () => {
+  test('refuses a payment of 0, one over $10,000, one for nobody, and one recorded by a member', async ({ crew, lead, member }) => {
     const zero = await post(lead, '/api/stock/payments', { userId: crew.member.id, amountCents: 0 });
     expect(zero.status).toBe(400);
     expect(zero.body.error).toMatchObject({ code: 'VALIDATION_FAILED', issues: [{ path: 'amountCents', message: 'A payment is more than $0.00.' }] });
@@ -170,7 +160,7 @@ describe('payments and other people’s tabs', () => {
 });
 
 describe('GET /api/stock/spend', () => {
-  it('reports use by month and bin kind, purchases and count adjustments apart, with empty months present', async () => {
+  test('reports use by month and bin kind, purchases and count adjustments apart, with empty months present', async ({ lead, qm, member, at }) => {
     at('2026-08-20T12:00:00Z');
     await addBinAs(qm, screwBin({ name: 'Nut #8-32 nylon insert', kind: 'nut', unitCost: 0.1 })); // before the window
 
@@ -218,7 +208,7 @@ describe('GET /api/stock/spend', () => {
     expect(defaultWindow.body.months[7]).toMatchObject({ month: '2026-08', purchasedCents: 200 * 10 });
   });
 
-  it('counts months on the chapter’s calendar: a draw on the evening of November 30 in Chicago is November’s', async () => {
+  test('counts months on the chapter’s calendar: a draw on the evening of November 30 in Chicago is November’s', async ({ t, lead, qm, member, at }) => {
     writeChapterTimeZone(t.db, 'America/Chicago');
     at('2026-11-10T12:00:00Z');
     const screws = await addBinAs(qm, screwBin());
@@ -232,7 +222,7 @@ describe('GET /api/stock/spend', () => {
     expect(tab.body.byMonth).toEqual([expect.objectContaining({ month: '2026-11', chargedCents: 5 * SCREW })]);
   });
 
-  it('is for the chapter lead only, and checks the window', async () => {
+  test('is for the chapter lead only, and checks the window', async ({ lead, qm, member }) => {
     for (const who of [qm, member]) {
       const res = await who.agent.get('/api/stock/spend');
       expect(res.status).toBe(403);

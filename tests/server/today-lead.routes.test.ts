@@ -1,38 +1,25 @@
-import { afterEach, beforeEach, describe, expect, it, onTestFinished } from 'vitest';
+import { describe, expect, onTestFinished } from 'vitest';
 import { leadTodaySchema, type LeadToday } from '@shared/schemas/today-lead';
 import { addBinAs, addToolAs, blindRivetBin, lend, post } from '../helpers/crib';
 import { addAssembly, DAY_MS, drawFrom, hundredRivetLine } from '../helpers/planning-fixture';
 import { DEMO_PASSWORD, seedDemoChapter } from '../../server/seed/demo-chapter';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let lead: SignedInAgent;
-let qm: SignedInAgent;
-let member: SignedInAgent;
+import { crewTest } from '../helpers/crew-test';
+import { buildTestApp } from '../helpers/test-app';
 
 // The test clock starts on Tuesday 2026-12-01 at 12:00 UTC.
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  lead = await t.signIn('lead@example.org');
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-});
-afterEach(() => t.close());
-
-const today = async (): Promise<LeadToday> => {
-  const res = await lead.agent.get('/api/today/lead');
-  expect(res.status).toBe(200);
-  expect(res.headers['content-type']).toMatch(/application\/json/);
-  return leadTodaySchema.parse(res.body);
-};
-
-const at = (iso: string) => {
-  t.clock.now = new Date(iso);
-};
+const test = crewTest
+  .extend('today', ({ lead }) => async (): Promise<LeadToday> => {
+    const res = await lead.agent.get('/api/today/lead');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toMatch(/application\/json/);
+    return leadTodaySchema.parse(res.body);
+  })
+  .extend('at', ({ t }) => (iso: string) => {
+    t.clock.now = new Date(iso);
+  });
 
 describe('GET /api/today/lead', () => {
-  it('says there is nothing to do in an empty chapter', async () => {
+  test('says there is nothing to do in an empty chapter', async ({ today }) => {
     expect(await today()).toEqual({
       overdue: { total: 0, loans: [] },
       onLoan: { toolCount: 0, valueCents: 0 },
@@ -43,7 +30,7 @@ describe('GET /api/today/lead', () => {
     });
   });
 
-  it('lists overdue loans, the value out on loan, who holds what, reorder alerts, sign-off requests and the spend', async () => {
+  test('lists overdue loans, the value out on loan, who holds what, reorder alerts, sign-off requests and the spend', async ({ t, lead, qm, member, today, at }) => {
     // Last month: 100 rivets drawn at $0.12.
     at('2026-11-10T12:00:00Z');
     const bin = await addBinAs(qm, blindRivetBin({ diameter32: 5, initialQuantity: 500 }));
@@ -91,7 +78,7 @@ describe('GET /api/today/lead', () => {
     expect(spend.months.map((m) => m.consumedCents)).toEqual([1200, 600]);
   });
 
-  it('shows a reminder sent from home as sent today', async () => {
+  test('shows a reminder sent from home as sent today', async ({ t, lead, qm, member, today, at }) => {
     const code = (await addToolAs(qm, { name: 'Deburring tool', category: 'deburring_tool' })).code;
     const loanId = await lend(t, member, code, DAY_MS);
     at('2026-12-05T12:00:00Z');
@@ -100,7 +87,7 @@ describe('GET /api/today/lead', () => {
     expect((await today()).overdue.loans[0]).toMatchObject({ loanId, remindedToday: true });
   });
 
-  it('lists at most five of each, with the totals', async () => {
+  test('lists at most five of each, with the totals', async ({ t, qm, today, at }) => {
     for (let i = 0; i < 7; i++) {
       const who = await t.addUser({ email: `m${i}@example.org`, name: `Member ${i}` });
       const agent = await t.signIn(who.email);
@@ -115,7 +102,7 @@ describe('GET /api/today/lead', () => {
     expect(answer.holders.people).toHaveLength(5);
   });
 
-  it('refuses a quartermaster and a member with 403, and a signed-out visitor with 401', async () => {
+  test('refuses a quartermaster and a member with 403, and a signed-out visitor with 401', async ({ t, qm, member }) => {
     for (const who of [qm, member]) {
       const res = await who.agent.get('/api/today/lead');
       expect(res.status).toBe(403);
@@ -126,7 +113,7 @@ describe('GET /api/today/lead', () => {
 });
 
 describe('GET /api/today/lead on the demo chapter', () => {
-  it('shows the demo’s real work: its two overdue loans, the tools out and with whom, bins to order, two sign-off requests and the spend', async () => {
+  test('shows the demo’s real work: its two overdue loans, the tools out and with whom, bins to order, two sign-off requests and the spend', async () => {
     const demo = await buildTestApp();
     onTestFinished(() => demo.close());
     expect(await seedDemoChapter(demo.db)).toBe(true);

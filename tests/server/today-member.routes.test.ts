@@ -1,41 +1,32 @@
-import { afterEach, beforeEach, describe, expect, it, onTestFinished } from 'vitest';
+import { describe, expect, onTestFinished } from 'vitest';
 import { memberTodaySchema, type MemberToday } from '@shared/schemas/today-member';
 import { DEMO_PASSWORD, seedDemoChapter } from '../../server/seed/demo-chapter';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { addBinAs, addToolAs, blindRivetBin, lend, post } from '../helpers/crib';
 import { addAssembly, setAssemblyStatus } from '../helpers/planning-fixture';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
+import { buildTestApp, type SignedInAgent } from '../helpers/test-app';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 
-let t: TestApp;
-let member: SignedInAgent;
-let other: SignedInAgent;
-let qm: SignedInAgent;
+crewTest.override('otherMemberPerson', { email: 'other@example.org', name: 'Otto Other' });
 
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  await t.addUser({ email: 'other@example.org', name: 'Otto Other' });
+const test = crewTest
+  .extend('today', ({ member }) => async (who: SignedInAgent = member): Promise<MemberToday> => {
+    const res = await who.agent.get('/api/today/member');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toMatch(/json/);
+    return memberTodaySchema.parse(res.body);
+  })
+  .extend('tool', ({ qm }) => (name: string, over: Record<string, unknown> = {}) => addToolAs(qm, { name, category: 'other', ...over }));
+
+test.beforeEach(({ t }) => {
   // Tuesday, December 1, 2026, 05:00 in Denver.
   writeChapterTimeZone(t.db, 'America/Denver');
-  member = await t.signIn('member@example.org');
-  other = await t.signIn('other@example.org');
-  qm = await t.signIn('qm@example.org');
 });
-afterEach(() => t.close());
-
-async function today(who: SignedInAgent = member): Promise<MemberToday> {
-  const res = await who.agent.get('/api/today/member');
-  expect(res.status).toBe(200);
-  expect(res.headers['content-type']).toMatch(/json/);
-  return memberTodaySchema.parse(res.body);
-}
-
-const tool = (name: string, over: Record<string, unknown> = {}) => addToolAs(qm, { name, category: 'other', ...over });
 
 describe('GET /api/today/member', () => {
-  it('answers an empty day with empty lists and a zero tab', async () => {
+  test('answers an empty day with empty lists and a zero tab', async ({ today }) => {
     expect(await today()).toEqual({
       asOf: '2026-12-01T12:00:00.000Z',
       loans: { total: 0, items: [] },
@@ -47,7 +38,7 @@ describe('GET /api/today/member', () => {
     });
   });
 
-  it('lists my loans overdue first, with the due day and due words of My loans, five of them and the total', async () => {
+  test('lists my loans overdue first, with the due day and due words of My loans, five of them and the total', async ({ t, member, otherMember, today, tool }) => {
     t.clock.now = new Date('2026-11-20T18:00:00Z');
     const late = await tool('Temporary fastener pliers');
     await lend(t, member, late.code, 3 * DAY_MS);
@@ -57,7 +48,7 @@ describe('GET /api/today/member', () => {
     const tomorrow = await tool('Hand rivet puller');
     await lend(t, member, tomorrow.code, 1 * DAY_MS);
     for (const name of ['Dimple die', 'Countersink cage', 'Tin snips']) await lend(t, member, (await tool(name)).code, 10 * DAY_MS);
-    await lend(t, other, (await tool('Not mine')).code, 1 * DAY_MS);
+    await lend(t, otherMember, (await tool('Not mine')).code, 1 * DAY_MS);
 
     const { loans } = await today();
     expect(loans.total).toBe(6);
@@ -70,13 +61,13 @@ describe('GET /api/today/member', () => {
     expect(loans.items.map((l) => l.tool.name)).not.toContain('Not mine');
   });
 
-  it('says which tools are set aside for me and until when, and my place in each queue', async () => {
+  test('says which tools are set aside for me and until when, and my place in each queue', async ({ t, qm, member, otherMember, today, tool }) => {
     const shelf = await tool('Rivet cutter');
     const busy = await tool('Squeezer');
     const later = await tool('Rivet gun, 2X');
     await lend(t, qm, busy.code, 7 * DAY_MS);
     await lend(t, qm, later.code, 7 * DAY_MS);
-    expect((await post(other, `/api/tools/${busy.code}/holds`)).status).toBe(201);
+    expect((await post(otherMember, `/api/tools/${busy.code}/holds`)).status).toBe(201);
     expect((await post(member, `/api/tools/${busy.code}/holds`)).status).toBe(201);
     expect((await post(member, `/api/tools/${later.code}/holds`)).status).toBe(201);
     expect((await post(member, `/api/tools/${shelf.code}/holds`)).status).toBe(201);
@@ -92,15 +83,15 @@ describe('GET /api/today/member', () => {
       { tool: { code: later.code, name: 'Rivet gun, 2X' }, status: 'waiting', position: 1, until: null, words: '1st in line' },
     ]);
     // Someone else's queue place is not mine.
-    expect((await today(other)).queue.items.map((h) => h.words)).toEqual(['1st in line']);
+    expect((await today(otherMember)).queue.items.map((h) => h.words)).toEqual(['1st in line']);
   });
 
-  it('names what each assembly in progress still lacks: crib tools not free for me and bins short for its bill', async () => {
+  test('names what each assembly in progress still lacks: crib tools not free for me and bins short for its bill', async ({ t, qm, member, otherMember, today }) => {
     const puller = await addToolAs(qm, { name: 'Hand rivet puller, long', category: 'hand_rivet_puller', accessories: ['Nosepiece 5/32'] });
     const bit40 = await addToolAs(qm, { name: 'Drill bit #40', category: 'drill_bit', drillSize: '#40' });
     const bit30 = await addToolAs(qm, { name: 'Drill bit #30', category: 'drill_bit', drillSize: '#30' });
     const deburr = await addToolAs(qm, { name: 'Deburring tool', category: 'deburring_tool' });
-    await lend(t, other, bit30.code, 7 * DAY_MS);
+    await lend(t, otherMember, bit30.code, 7 * DAY_MS);
     await lend(t, member, deburr.code, 7 * DAY_MS);
     const rivets = await addBinAs(qm, blindRivetBin({ diameter32: 5, grip16: 2, initialQuantity: 20 }));
     // 5/32 blind rivets: 60 in, 0.5 in from each end, 1 in pitch → 60 holes; 5 % waste → 63 still to draw, 20 on hand.
@@ -123,21 +114,21 @@ describe('GET /api/today/member', () => {
     expect(lap!.bins).toEqual([{ description: expect.stringContaining('5/32 in'), binCode: rivets.code, words: 'short by 43: 20 on hand, 63 still to draw' }]);
   });
 
-  it('shows my tab balance from the tab’s own sum', async () => {
+  test('shows my tab balance from the tab’s own sum', async ({ qm, member, otherMember, today }) => {
     const rivets = await addBinAs(qm, blindRivetBin());
     expect((await post(member, `/api/bins/${rivets.code}/draw`, { quantity: 25 })).status).toBe(201);
-    expect((await post(other, `/api/bins/${rivets.code}/draw`, { quantity: 100 })).status).toBe(201);
+    expect((await post(otherMember, `/api/bins/${rivets.code}/draw`, { quantity: 100 })).status).toBe(201);
     const tab = await member.agent.get('/api/stock/tab');
     // 25 × $0.12 = $3.00.
     expect((await today()).tab).toEqual({ balanceCents: 300 });
     expect(tab.body.balanceCents).toBe(300);
   });
 
-  it('lists returns I flagged "needs attention" while the tool is still out of service', async () => {
+  test('lists returns I flagged "needs attention" while the tool is still out of service', async ({ t, qm, member, otherMember, today, tool }) => {
     const gun = await tool('Rivet gun, 3X');
     const drill = await tool('Angle drill');
     const theirs = await tool('Squeezer yoke');
-    for (const [who, code] of [[member, gun.code], [member, drill.code], [other, theirs.code]] as const) {
+    for (const [who, code] of [[member, gun.code], [member, drill.code], [otherMember, theirs.code]] as const) {
       await lend(t, who, code, 7 * DAY_MS);
       expect((await post(who, `/api/tools/${code}/return`, { condition: 'needs_attention', note: 'Throttle leaks air' })).status).toBe(200);
     }
@@ -149,7 +140,7 @@ describe('GET /api/today/member', () => {
     });
   });
 
-  it('answers every role (leads and quartermasters borrow too), and 401 when signed out', async () => {
+  test('answers every role (leads and quartermasters borrow too), and 401 when signed out', async ({ t, qm }) => {
     const lead = await t.signIn('lead@example.org');
     expect((await lead.agent.get('/api/today/member')).status).toBe(200);
     expect((await qm.agent.get('/api/today/member')).status).toBe(200);
@@ -161,7 +152,7 @@ describe('GET /api/today/member', () => {
 });
 
 describe('GET /api/today/member on the demo chapter', () => {
-  it('shows each demo member their own real work: loans, a tool set aside, a queue place, assemblies short of kit, tabs, a return for attention', async () => {
+  test('shows each demo member their own real work: loans, a tool set aside, a queue place, assemblies short of kit, tabs, a return for attention', async ({ today }) => {
     // The demo seeds an empty chapter, at today's date.
     const demo = await buildTestApp();
     onTestFinished(() => demo.close());

@@ -1,4 +1,4 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { purchaseListSchema } from '@shared/schemas/forecast';
 import { quartermasterTodaySchema, type QuartermasterToday } from '@shared/schemas/today-quartermaster';
 import { DEMO_PASSWORD, seedDemoChapter } from '../../server/seed/demo-chapter';
@@ -6,33 +6,11 @@ import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { addBinAs, addToolAs, blindRivetBin, post } from '../helpers/crib';
 import { dataSnapshot } from '../helpers/db-snapshot';
 import { DAY_MS, screwBin } from '../helpers/planning-fixture';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
-
-let t: TestApp;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-let lead: SignedInAgent;
+import { crewTest } from '../helpers/crew-test';
+import { buildTestApp } from '../helpers/test-app';
 
 // Today is Tuesday 2026-12-01 in the chapter (UTC); the setup happens at earlier moments.
 const TODAY = new Date('2026-12-01T12:00:00Z');
-const at = (day: string, hour = 12) => (t.clock.now = new Date(`${day}T${String(hour).padStart(2, '0')}:00:00Z`));
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  writeChapterTimeZone(t.db, 'UTC');
-  await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-  lead = await t.signIn('lead@example.org');
-});
-afterEach(() => t.close());
-
-async function today(who = qm): Promise<QuartermasterToday> {
-  const res = await who.agent.get('/api/today/quartermaster');
-  expect(res.status).toBe(200);
-  expect(res.headers['content-type']).toMatch(/application\/json/);
-  return quartermasterTodaySchema.parse(res.body);
-}
 
 const ok = async (res: Promise<{ status: number; body: unknown }> | { status: number; body: unknown }, status = 200) => {
   const r = await res;
@@ -40,8 +18,21 @@ const ok = async (res: Promise<{ status: number; body: unknown }> | { status: nu
   return r.body as { id: number };
 };
 
+const test = crewTest
+  .extend('at', ({ t }) => (day: string, hour = 12) => (t.clock.now = new Date(`${day}T${String(hour).padStart(2, '0')}:00:00Z`)))
+  .extend('today', ({ qm }) => async (who = qm): Promise<QuartermasterToday> => {
+    const res = await who.agent.get('/api/today/quartermaster');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toMatch(/application\/json/);
+    return quartermasterTodaySchema.parse(res.body);
+  });
+
+test.beforeEach(({ t }) => {
+  writeChapterTimeZone(t.db, 'UTC');
+});
+
 describe('GET /api/today/quartermaster', () => {
-  it('is for quartermasters and leads: 403 for a member, 401 signed out', async () => {
+  test('is for quartermasters and leads: 403 for a member, 401 signed out', async ({ t, lead, member }) => {
     const refused = await member.agent.get('/api/today/quartermaster');
     expect(refused.status).toBe(403);
     expect(refused.body.error.code).toBe('FORBIDDEN');
@@ -49,7 +40,7 @@ describe('GET /api/today/quartermaster', () => {
     expect((await lead.agent.get('/api/today/quartermaster')).status).toBe(200);
   });
 
-  it('says there is nothing to do in an empty chapter', async () => {
+  test('says there is nothing to do in an empty chapter', async ({ today }) => {
     expect(await today()).toEqual({
       toOrder: { bins: 0, totalCents: 0, top: [] },
       deliveries: { withinDays: 7, expected: [], late: [] },
@@ -61,7 +52,7 @@ describe('GET /api/today/quartermaster', () => {
     });
   });
 
-  it('lists what to order from the purchase list, orders due within 7 days and late ones, and writes nothing', async () => {
+  test('lists what to order from the purchase list, orders due within 7 days and late ones, and writes nothing', async ({ t, qm, at, today }) => {
     at('2026-11-20');
     const late = await addBinAs(qm, blindRivetBin({ initialQuantity: 100 }));
     const soon = await addBinAs(qm, blindRivetBin({ diameter32: 5, initialQuantity: 100 }));
@@ -110,7 +101,7 @@ describe('GET /api/today/quartermaster', () => {
     expect((await today()).deliveries.expected.map((d) => [d.code, d.words])).toEqual([[far.code, 'expected in 7 days']]);
   });
 
-  it('suggests bins to count: from the 10 counted longest ago (never first), the 5 most valuable', async () => {
+  test('suggests bins to count: from the 10 counted longest ago (never first), the 5 most valuable', async ({ t, qm, at, today }) => {
     at('2026-11-10');
     const bins = [];
     for (let i = 1; i <= 12; i++) {
@@ -131,7 +122,7 @@ describe('GET /api/today/quartermaster', () => {
     expect(binsToCount.bins[1]).toMatchObject({ code: w9!.code, valueCents: 900, lastCountedAt: null });
   });
 
-  it('lists returns needing attention, missing accessories and service due, each from the tools’ own functions', async () => {
+  test('lists returns needing attention, missing accessories and service due, each from the tools’ own functions', async ({ t, qm, member, at, today }) => {
     at('2026-11-28');
     const gun = (await addToolAs(qm, { name: 'Rivet gun, 2X', category: 'rivet_gun' })).code;
     const puller = (await addToolAs(qm, { name: 'Hand rivet puller', category: 'hand_rivet_puller', accessories: ['Nosepiece 1/8', 'Nosepiece 5/32'] })).code;
@@ -170,7 +161,7 @@ describe('GET /api/today/quartermaster', () => {
     expect(after.missingAccessories).toEqual([]);
   });
 
-  it('lists write-offs of the last 14 days that still stand, newest first, with who and when', async () => {
+  test('lists write-offs of the last 14 days that still stand, newest first, with who and when', async ({ t, qm, at, today }) => {
     at('2026-11-10');
     const sealant = await addBinAs(qm, { kind: 'sealant_primer', name: 'Fuel tank sealant, 3.5 oz', unit: 'tube', unitCost: 18, initialQuantity: 6 });
     const rivets = await addBinAs(qm, blindRivetBin());
@@ -194,7 +185,7 @@ describe('GET /api/today/quartermaster', () => {
 });
 
 describe('the quartermaster’s today in the demo chapter', () => {
-  it('shows the demo’s real work: its purchase list, the late and coming orders, the gun back needing attention, the calibration due, a write-off', async () => {
+  test('shows the demo’s real work: its purchase list, the late and coming orders, the gun back needing attention, the calibration due, a write-off', async () => {
     const demo = await buildTestApp({ now: () => new Date() });
     try {
       expect(await seedDemoChapter(demo.db)).toBe(true);

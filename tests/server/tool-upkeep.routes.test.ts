@@ -1,25 +1,17 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { describe, expect } from 'vitest';
+import { crewTest } from '../helpers/crew-test';
 import { post } from '../helpers/crib';
 
-let t: TestApp;
-let qm: SignedInAgent;
-let member: SignedInAgent;
+const test = crewTest
+  .extend('events', ({ member }) => async () => (await member.agent.get('/api/tools/T-0001/events')).body.data as { action: string; fromStatus: string | null; toStatus: string | null; detail: string; actor: { name: string } | null }[]);
 
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
+test.beforeEach(async ({ qm }) => {
   const res = await post(qm, '/api/tools', { name: 'Rivet gun 2X', category: 'rivet_gun', location: 'Air tool shelf' });
   expect(res.status).toBe(201);
 });
-afterEach(() => t.close());
-
-const events = async () => (await member.agent.get('/api/tools/T-0001/events')).body.data as { action: string; fromStatus: string | null; toStatus: string | null; detail: string; actor: { name: string } | null }[];
 
 describe('PATCH /api/tools/:code', () => {
-  it('changes details, records who changed what, and refuses a member', async () => {
+  test('changes details, records who changed what, and refuses a member', async ({ qm, member, events }) => {
     const res = await qm.agent.patch('/api/tools/T-0001').set('X-CSRF-Token', qm.csrf).send({ location: 'Cabinet B', loanDays: 3 });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ location: 'Cabinet B', loanDays: 3, loanDaysOverride: 3 });
@@ -28,7 +20,7 @@ describe('PATCH /api/tools/:code', () => {
     expect(refused.status).toBe(403);
   });
 
-  it('refuses an empty change, an unknown field and a change that breaks the kind rules', async () => {
+  test('refuses an empty change, an unknown field and a change that breaks the kind rules', async ({ qm }) => {
     const patch = (body: object) => qm.agent.patch('/api/tools/T-0001').set('X-CSRF-Token', qm.csrf).send(body);
     expect((await patch({})).body.error.code).toBe('VALIDATION_FAILED');
     expect((await patch({ colour: 'red' })).status).toBe(400);
@@ -39,7 +31,7 @@ describe('PATCH /api/tools/:code', () => {
 });
 
 describe('quartermaster state changes', () => {
-  it('takes a tool out of service with a reason, blocks checkout, and brings it back serviced', async () => {
+  test('takes a tool out of service with a reason, blocks checkout, and brings it back serviced', async ({ t, qm, member, events }) => {
     const out = await post(qm, '/api/tools/T-0001/out-of-service', { note: 'Throttle valve leaks' });
     expect(out.status).toBe(200);
     expect(out.body.status).toBe('out_of_service');
@@ -52,7 +44,7 @@ describe('quartermaster state changes', () => {
     expect((await events()).slice(0, 3).map((e) => e.action)).toEqual(['serviced', 'back_in_service', 'out_of_service']);
   });
 
-  it('refuses a change that does not fit the state, with the state in words', async () => {
+  test('refuses a change that does not fit the state, with the state in words', async ({ qm, member }) => {
     const res = await post(qm, '/api/tools/T-0001/back-in-service', { note: 'x' });
     expect(res.status).toBe(409);
     expect(res.body.error.code).toBe('WRONG_STATE');
@@ -61,7 +53,7 @@ describe('quartermaster state changes', () => {
     expect((await post(qm, '/api/tools/T-0001/retire', { note: 'worn' })).body.error.code).toBe('WRONG_STATE');
   });
 
-  it('marks a tool on loan lost, closing the loan with the reason, then finds it again', async () => {
+  test('marks a tool on loan lost, closing the loan with the reason, then finds it again', async ({ qm, member }) => {
     await post(member, '/api/tools/T-0001/checkout').expect(201);
     const lost = await post(qm, '/api/tools/T-0001/lost', { note: 'Not seen since the fly-in' });
     expect(lost.body.status).toBe('lost');
@@ -73,7 +65,7 @@ describe('quartermaster state changes', () => {
     expect((await post(member, '/api/tools/T-0001/checkout')).status).toBe(201);
   });
 
-  it('needs a reason, is refused to members, and retires for good', async () => {
+  test('needs a reason, is refused to members, and retires for good', async ({ qm, member }) => {
     expect((await post(qm, '/api/tools/T-0001/retire', {})).body.error.code).toBe('VALIDATION_FAILED');
     expect((await post(member, '/api/tools/T-0001/retire', { note: 'x' })).status).toBe(403);
     expect((await post(qm, '/api/tools/T-0001/retire', { note: 'Cracked housing' })).body.status).toBe('retired');
@@ -82,7 +74,7 @@ describe('quartermaster state changes', () => {
     expect(res.body.error.message).toMatch(/retired/);
   });
 
-  it('offers a tool coming back into service to the first person waiting', async () => {
+  test('offers a tool coming back into service to the first person waiting', async ({ t, qm, member }) => {
     await post(qm, '/api/tools/T-0001/out-of-service', { note: 'Worn set' });
     expect((await post(member, '/api/tools/T-0001/holds')).status).toBe(201);
     const back = await post(qm, '/api/tools/T-0001/back-in-service', { note: 'New set' });
@@ -92,7 +84,7 @@ describe('quartermaster state changes', () => {
 });
 
 describe('GET /api/tools', () => {
-  it('filters by status, category and text, and pages', async () => {
+  test('filters by status, category and text, and pages', async ({ t, qm, member }) => {
     await post(qm, '/api/tools', { name: 'Air drill', category: 'air_drill' }).expect(201);
     await post(qm, '/api/tools', { name: 'Deburring tool', category: 'deburring_tool' }).expect(201);
     await post(member, '/api/tools/T-0002/checkout').expect(201);

@@ -1,26 +1,14 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { memberSignoffs, signoffs } from '../../server/db/schema/signoffs';
-import { buildTestApp, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
 import { writeChapterTimeZone } from '../../server/settings/chapter-time-zone';
 import { addToolAs, patch, post } from '../helpers/crib';
 
-let t: TestApp;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-});
-afterEach(() => t.close());
-
-const addTool = (body: Record<string, unknown>) => addToolAs(qm, body);
-
+const test = crewTest
+  .extend('addTool', ({ qm }) => (body: Record<string, unknown>) => addToolAs(qm, body));
 
 describe('POST /api/tools', () => {
-  it('adds a tool with the next free code and the category default loan period', async () => {
+  test('adds a tool with the next free code and the category default loan period', async ({ member, addTool }) => {
     const tool = await addTool({ name: 'Hand rivet puller, long handle', category: 'hand_rivet_puller', accessories: ['Nosepiece 3/32', 'Nosepiece 1/8'] });
     expect(tool.code).toBe('T-0001');
     const res = await member.agent.get('/api/tools/T-0001');
@@ -29,13 +17,13 @@ describe('POST /api/tools', () => {
     expect(res.body.forYou.actions).toEqual(['check_out']);
   });
 
-  it('answers 403 to a member', async () => {
+  test('answers 403 to a member', async ({ member }) => {
     const res = await post(member, '/api/tools', { name: 'x', category: 'other' });
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('FORBIDDEN');
   });
 
-  it('needs a drill size for a drill bit and a size and capacity for a tray', async () => {
+  test('needs a drill size for a drill bit and a size and capacity for a tray', async ({ qm }) => {
     const bit = await post(qm, '/api/tools', { name: 'Bit', category: 'drill_bit' });
     expect(bit.status).toBe(400);
     expect(bit.body.error.issues.map((i: { path: string }) => i.path)).toEqual(['drillSize']);
@@ -45,7 +33,7 @@ describe('POST /api/tools', () => {
     expect(badSize.status).toBe(400);
   });
 
-  it('stores a drill bit with its size from the drill table', async () => {
+  test('stores a drill bit with its size from the drill table', async ({ member, addTool }) => {
     await addTool({ name: 'Drill bit, 12 in long', category: 'drill_bit', drillSize: '40' });
     const res = await member.agent.get('/api/tools/T-0001');
     // ASME B94.11M: #40 = 0.0980 in.
@@ -56,7 +44,7 @@ describe('POST /api/tools', () => {
 describe('countersink cutters and dimple dies: the rivet size they are for', () => {
   const paths = (res: { body: { error: { issues: { path: string }[] } } }) => res.body.error.issues.map((i) => i.path).sort();
 
-  it('needs the rivet size for both, and the pilot drill for a cutter, naming each missing field', async () => {
+  test('needs the rivet size for both, and the pilot drill for a cutter, naming each missing field', async ({ qm }) => {
     const cutter = await post(qm, '/api/tools', { name: 'Countersink cutter', category: 'countersink_cutter' });
     expect(cutter.status).toBe(400);
     expect(cutter.headers['content-type']).toMatch(/json/);
@@ -68,7 +56,7 @@ describe('countersink cutters and dimple dies: the rivet size they are for', () 
     expect(dies.body.error.issues[0].message).toMatch(/rivet size/i);
   });
 
-  it('refuses a rivet size that is not one of 3/32 to 1/4 in, and a rivet size on any other kind of tool', async () => {
+  test('refuses a rivet size that is not one of 3/32 to 1/4 in, and a rivet size on any other kind of tool', async ({ qm }) => {
     const odd = await post(qm, '/api/tools', { name: 'Dimple dies', category: 'dimple_dies', rivetDiameter32: 7 });
     expect(odd.status).toBe(400);
     expect(paths(odd)).toEqual(['rivetDiameter32']);
@@ -78,7 +66,7 @@ describe('countersink cutters and dimple dies: the rivet size they are for', () 
     expect(onABit.body.error.issues[0].message).toMatch(/only countersink cutters and dimple dies/i);
   });
 
-  it('stores a cutter with its rivet size and pilot, and dies with their rivet size, and shows them on the tool', async () => {
+  test('stores a cutter with its rivet size and pilot, and dies with their rivet size, and shows them on the tool', async ({ member, addTool }) => {
     const cutter = await addTool({ name: '100° countersink cutter, 1/8 in', category: 'countersink_cutter', rivetDiameter32: 4, drillSize: '30' });
     const dies = await addTool({ name: '100° dimple dies, 3/32 in', category: 'dimple_dies', rivetDiameter32: 3 });
     const c = await member.agent.get(`/api/tools/${cutter.code}`);
@@ -91,7 +79,7 @@ describe('countersink cutters and dimple dies: the rivet size they are for', () 
     expect((await member.agent.get(`/api/tools/${other.code}`)).body.rivetDiameter32).toBeNull();
   });
 
-  it('checks an edit against the whole tool: clearing the size or moving it to another kind with its size answers 400', async () => {
+  test('checks an edit against the whole tool: clearing the size or moving it to another kind with its size answers 400', async ({ qm, addTool }) => {
     const dies = await addTool({ name: '100° dimple dies, 1/8 in', category: 'dimple_dies', rivetDiameter32: 4 });
     const cleared = await patch(qm, `/api/tools/${dies.code}`, { rivetDiameter32: null });
     expect(cleared.status).toBe(400);
@@ -109,7 +97,7 @@ describe('countersink cutters and dimple dies: the rivet size they are for', () 
 });
 
 describe('POST /api/tools/:code/checkout and /return', () => {
-  it('checks out with a due date from the loan period, then refuses a second checkout with the holder and date', async () => {
+  test('checks out with a due date from the loan period, then refuses a second checkout with the holder and date', async ({ qm, member, addTool }) => {
     await addTool({ name: 'Pneumatic rivet puller', category: 'pneumatic_rivet_puller' });
     const out = await post(member, '/api/tools/T-0001/checkout');
     expect(out.status).toBe(201);
@@ -121,7 +109,7 @@ describe('POST /api/tools/:code/checkout and /return', () => {
     expect(again.body.error.message).toBe('T-0001 is on loan. Mia Member has it until Tuesday, December 8.');
   });
 
-  it('makes a loan taken at 23:30 chapter time, on a server running in UTC, due at the end of the chapter day 7 days on', async () => {
+  test('makes a loan taken at 23:30 chapter time, on a server running in UTC, due at the end of the chapter day 7 days on', async ({ t, qm, member, addTool }) => {
     writeChapterTimeZone(t.db, 'America/Chicago');
     await addTool({ name: 'Pneumatic rivet puller', category: 'pneumatic_rivet_puller' });
     t.clock.now = new Date('2026-12-02T05:30:00Z'); // Tuesday, December 1, 23:30 in Chicago; already Wednesday in UTC
@@ -136,7 +124,7 @@ describe('POST /api/tools/:code/checkout and /return', () => {
     expect(JSON.stringify(history.body)).toContain('Due Tuesday, December 8');
   });
 
-  it('keeps the due date a week on in chapter days across the change of clocks', async () => {
+  test('keeps the due date a week on in chapter days across the change of clocks', async ({ t, member, addTool }) => {
     writeChapterTimeZone(t.db, 'Europe/Berlin');
     await addTool({ name: 'Air drill', category: 'air_drill', loanDays: 7 });
     t.clock.now = new Date('2027-03-25T09:00:00Z'); // Thursday 10:00 CET; the clocks go forward on Sunday the 28th
@@ -144,7 +132,7 @@ describe('POST /api/tools/:code/checkout and /return', () => {
     expect(out.body.dueAt).toBe('2027-04-01T21:59:59.999Z'); // Thursday, April 1, 23:59:59.999 CEST
   });
 
-  it('lets exactly one of many simultaneous checkouts win', async () => {
+  test('lets exactly one of many simultaneous checkouts win', async ({ t, addTool }) => {
     await addTool({ name: 'Air drill', category: 'air_drill' });
     const agents = await Promise.all(['a', 'b', 'c', 'd', 'e', 'f', 'g', 'h'].map(async (n) => {
       await t.addUser({ email: `${n}@example.org` });
@@ -157,7 +145,7 @@ describe('POST /api/tools/:code/checkout and /return', () => {
     expect(open.n).toBe(1);
   });
 
-  it('falls back on the database: an open loan written by another process makes the checkout answer 409', async () => {
+  test('falls back on the database: an open loan written by another process makes the checkout answer 409', async ({ t, member, addTool }) => {
     const tool = await addTool({ name: 'Air drill', category: 'air_drill' });
     const qmId = (t.db.$client.prepare("select id from users where email = 'qm@example.org'").get() as { id: number }).id;
     // Another process wrote a loan but the tool row still says available.
@@ -168,7 +156,7 @@ describe('POST /api/tools/:code/checkout and /return', () => {
     expect(res.body.error.message).toMatch(/just checked out by someone else/);
   });
 
-  it('returns a tool: ok makes it available, needs attention takes it out of service with the note', async () => {
+  test('returns a tool: ok makes it available, needs attention takes it out of service with the note', async ({ member, addTool }) => {
     await addTool({ name: 'Rivet gun 3X', category: 'rivet_gun' });
     await post(member, '/api/tools/T-0001/checkout').expect(201);
     const back = await post(member, '/api/tools/T-0001/return', { condition: 'ok' });
@@ -185,7 +173,7 @@ describe('POST /api/tools/:code/checkout and /return', () => {
     expect(refused.body.error.message).toMatch(/Trigger sticks/);
   });
 
-  it('records the shortfall when a temporary fastener tray comes back short', async () => {
+  test('records the shortfall when a temporary fastener tray comes back short', async ({ member, addTool }) => {
     await addTool({ name: 'Temporary fasteners 1/8, tray', category: 'temporary_fastener_tray', traySize: '1/8', trayCapacity: 50 });
     await post(member, '/api/tools/T-0001/checkout').expect(201);
     const noCount = await post(member, '/api/tools/T-0001/return', { condition: 'ok' });
@@ -197,7 +185,7 @@ describe('POST /api/tools/:code/checkout and /return', () => {
     expect(mine.body.data[0]).toMatchObject({ returnedCount: 46, shortfall: 4 });
   });
 
-  it('refuses a member returning someone else’s tool, but lets the quartermaster do it', async () => {
+  test('refuses a member returning someone else’s tool, but lets the quartermaster do it', async ({ t, qm, member, addTool }) => {
     await addTool({ name: 'Bucking bar', category: 'bucking_bar' });
     await post(member, '/api/tools/T-0001/checkout').expect(201);
     await t.addUser({ email: 'other@example.org' });
@@ -206,8 +194,7 @@ describe('POST /api/tools/:code/checkout and /return', () => {
     expect((await post(qm, '/api/tools/T-0001/return', { condition: 'ok' })).status).toBe(200);
   });
 
-  it('refuses a tool that needs a sign-off the member lacks, and allows it once signed off', async () => {
-    const lead = await t.signIn('lead@example.org');
+  test('refuses a tool that needs a sign-off the member lacks, and allows it once signed off', async ({ t, lead, member, addTool }) => {
     const signoff = t.db.insert(signoffs).values({ name: 'Air tools' }).returning().get();
     await addTool({ name: 'Air drill', category: 'air_drill', requiredSignoffId: signoff.id });
     const refused = await post(member, '/api/tools/T-0001/checkout');
@@ -222,14 +209,14 @@ describe('POST /api/tools/:code/checkout and /return', () => {
     expect((await post(member, '/api/tools/T-0001/checkout')).status).toBe(201);
   });
 
-  it('answers 404 for an unknown code and 400 for a malformed one', async () => {
+  test('answers 404 for an unknown code and 400 for a malformed one', async ({ member }) => {
     expect((await post(member, '/api/tools/T-9999/checkout')).body.error.code).toBe('TOOL_NOT_FOUND');
     const bad = await post(member, '/api/tools/hammer/checkout');
     expect(bad.status).toBe(400);
     expect(bad.body.error.code).toBe('VALIDATION_FAILED');
   });
 
-  it('refuses a due date in the past', async () => {
+  test('refuses a due date in the past', async ({ member, addTool }) => {
     await addTool({ name: 'Deburring tool', category: 'deburring_tool' });
     const res = await post(member, '/api/tools/T-0001/checkout', { dueAt: '2026-11-01T00:00:00Z' });
     expect(res.status).toBe(400);
@@ -238,7 +225,7 @@ describe('POST /api/tools/:code/checkout and /return', () => {
 });
 
 describe('holds', () => {
-  it('queues people and holds the returned tool for the first, who is e-mailed; others are refused until the hold ends', async () => {
+  test('queues people and holds the returned tool for the first, who is e-mailed; others are refused until the hold ends', async ({ t, qm, member, addTool }) => {
     await addTool({ name: 'Torque wrench', category: 'torque_wrench', location: 'Cabinet B, shelf 2' });
     await post(member, '/api/tools/T-0001/checkout').expect(201);
     const hold = await post(qm, '/api/tools/T-0001/holds');
@@ -255,7 +242,7 @@ describe('holds', () => {
     expect((await post(qm, '/api/tools/T-0001/checkout')).status).toBe(201);
   });
 
-  it('sets an available tool aside for the person at once, for the chapter’s hold time', async () => {
+  test('sets an available tool aside for the person at once, for the chapter’s hold time', async ({ t, qm, member, addTool }) => {
     await addTool({ name: 'Spacing fan', category: 'spacing_fan' });
     const held = await post(member, '/api/tools/T-0001/holds');
     expect(held.status).toBe(201);
@@ -270,7 +257,7 @@ describe('holds', () => {
 });
 
 describe('GET /api/reference/drills', () => {
-  it('lists numbered and letter drills with inch and mm', async () => {
+  test('lists numbered and letter drills with inch and mm', async ({ t }) => {
     const res = await (await t.anonymous()).agent.get('/api/reference/drills');
     expect(res.status).toBe(200);
     expect(res.body).toHaveLength(106);

@@ -1,15 +1,8 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { addBinAs, addToolAs, blindRivetBin, lend, patch, post } from '../helpers/crib';
-import { buildTestApp, PASSWORD, type SignedInAgent, type TestApp } from '../helpers/test-app';
+import { crewTest } from '../helpers/crew-test';
+import { PASSWORD, type SignedInAgent } from '../helpers/test-app';
 
-/**
- * A mistyped field (loanDay for loanDays) must never be dropped without a word: every route that
- * reads a body refuses a field it does not know, at any depth, and names it.
- */
-let t: TestApp;
-let member: SignedInAgent;
-let qm: SignedInAgent;
-let lead: SignedInAgent;
 let binCode: string;
 let buildId: number;
 let assemblyId: number;
@@ -17,21 +10,6 @@ let loanId: number;
 
 const rivet = { kind: 'blind-structural', head: 'dome', diameter32: 4 };
 const line = { label: 'Spar flange', length: 20, pitch: 1, edgeDistance: 0.375, stack: [0.032, 0.032], rivet };
-
-beforeEach(async () => {
-  t = await buildTestApp();
-  await t.addCrew();
-  member = await t.signIn('member@example.org');
-  qm = await t.signIn('qm@example.org');
-  lead = await t.signIn('lead@example.org');
-  await addToolAs(qm, { name: 'Pneumatic rivet puller', category: 'other', loanDays: 7 });
-  await addToolAs(qm, { name: 'Air drill', category: 'other' });
-  binCode = (await addBinAs(qm, blindRivetBin())).code;
-  buildId = (await post(member, '/api/builds', { name: 'Two-seat kit' })).body.id as number;
-  assemblyId = (await post(member, `/api/builds/${buildId}/assemblies`, { name: 'Rudder', unit: 'in', lines: [line] })).body.id as number;
-  loanId = await lend(t, member, 'T-0002', 3 * 24 * 3600_000);
-});
-afterEach(() => t.close());
 
 type Who = 'anonymous' | 'member' | 'qm' | 'lead';
 interface Case {
@@ -78,12 +56,26 @@ const cases: Case[] = [
   { route: 'POST /api/auth/password-reset', who: 'anonymous', method: 'post', path: () => '/api/auth/password-reset', body: () => ({ email: 'lead@example.org', mail: 'x' }), field: 'mail' },
 ];
 
-async function agentFor(who: Who): Promise<SignedInAgent> {
-  return who === 'anonymous' ? t.anonymous() : { member, qm, lead }[who];
-}
+/**
+ * A mistyped field (loanDay for loanDays) must never be dropped without a word: every route that
+ * reads a body refuses a field it does not know, at any depth, and names it.
+ */
+const test = crewTest
+  .extend('agentFor', ({ t, lead, qm, member }) => async (who: Who): Promise<SignedInAgent> => {
+    return who === 'anonymous' ? t.anonymous() : { member, qm, lead }[who];
+  });
+
+test.beforeEach(async ({ qm, member, t }) => {
+  await addToolAs(qm, { name: 'Pneumatic rivet puller', category: 'other', loanDays: 7 });
+  await addToolAs(qm, { name: 'Air drill', category: 'other' });
+  binCode = (await addBinAs(qm, blindRivetBin())).code;
+  buildId = (await post(member, '/api/builds', { name: 'Two-seat kit' })).body.id as number;
+  assemblyId = (await post(member, `/api/builds/${buildId}/assemblies`, { name: 'Rudder', unit: 'in', lines: [line] })).body.id as number;
+  loanId = await lend(t, member, 'T-0002', 3 * 24 * 3600_000);
+});
 
 describe('an unknown field in a request body', () => {
-  it.each(cases)('$route answers 400 VALIDATION_FAILED naming $field', async ({ who, method, path, body, field }) => {
+  test.for(cases)('$route answers 400 VALIDATION_FAILED naming $field', async ({ who, method, path, body, field }, { agentFor }) => {
     const as = await agentFor(who);
     const res = await (method === 'post' ? post(as, path(), body()) : patch(as, path(), body()));
     expect(res.status).toBe(400);
@@ -94,21 +86,21 @@ describe('an unknown field in a request body', () => {
     expect(res.body.error.message).toContain(`Unknown field "${name}".`);
   });
 
-  it('changes nothing: a mistyped loanDay leaves the loan period as it was', async () => {
+  test('changes nothing: a mistyped loanDay leaves the loan period as it was', async ({ qm }) => {
     expect((await patch(qm, '/api/tools/T-0001', { loanDay: 14 })).status).toBe(400);
     expect((await qm.agent.get('/api/tools/T-0001')).body.loanDays).toBe(7);
     expect((await post(qm, '/api/tools', { name: 'Rivet gun', category: 'other', loanDay: 7 })).status).toBe(400);
     expect((await qm.agent.get('/api/tools')).body.meta.total).toBe(2);
   });
 
-  it('names every unknown field together with the other problems', async () => {
+  test('names every unknown field together with the other problems', async ({ qm }) => {
     const res = await patch(qm, '/api/tools/T-0001', { loanDay: 14, locaton: 'Shelf 3', name: '' });
     expect(res.status).toBe(400);
     const paths = (res.body.error.issues as Array<{ path: string }>).map((i) => i.path).sort();
     expect(paths).toEqual(['loanDay', 'locaton', 'name']);
   });
 
-  it('still takes the same bodies without the unknown field', async () => {
+  test('still takes the same bodies without the unknown field', async ({ t, lead, qm, member }) => {
     expect((await patch(qm, '/api/tools/T-0001', { loanDays: 14 })).status).toBe(200);
     expect((await patch(member, `/api/assemblies/${assemblyId}`, { lines: [line], extraItems: [{ binCode, quantity: 2 }] })).status).toBe(200);
     const { label: _label, ...estimateLine } = line;

@@ -7,10 +7,6 @@ import { authRouter } from './features/auth/auth.router';
 import { healthRouter } from './features/health/health.router';
 import { runQueuedAction } from './features/idempotency/queued-action';
 import { offlineRouter } from './features/offline/offline.router';
-import { assemblyNames, openAssembliesOf } from './features/planning/assembly-catalogue';
-import { binReorders } from './features/planning/reorder-plan';
-import { catalogueBins } from './features/stock/bin-catalogue';
-import { catalogueTools, signoffIdsOf } from './features/tools/tool-catalogue';
 import { invitationsRouter } from './features/invitations/invitations.router';
 import { labelsRouter } from './features/labels/labels.router';
 import { binsRouter } from './features/stock/bins.router';
@@ -121,10 +117,9 @@ export function createApp(config: AppConfig) {
   api.use('/settings/planning', planningSettingsRouter());
   api.use('/settings', cribSettingsRouter());
   api.use('/labels', labelsRouter());
-  // Assemblies belong to planning: the app hands stock the way to name them.
-  api.use('/bins', binCsvRouter({ nameAssemblies: assemblyNames }));
-  api.use('/bins', binsRouter({ runQueuedAction, nameAssemblies: assemblyNames, reordersOf: binReorders }));
-  api.use('/stock', stockMoneyRouter({ nameAssemblies: assemblyNames }));
+  api.use('/bins', binCsvRouter());
+  api.use('/bins', binsRouter({ runQueuedAction }));
+  api.use('/stock', stockMoneyRouter());
   api.use('/payments/settings', paymentSettingsRouter(config.payments));
   api.use('/payments', paymentsRouter(config.payments));
   api.use('/estimate', estimateRouter());
@@ -136,7 +131,7 @@ export function createApp(config: AppConfig) {
   api.use('/alerts', alertsRouter());
   api.use('/waste', wasteRouter());
   api.use('/today', todayRouter());
-  api.use('/offline', offlineRouter({ tools: catalogueTools, signoffIds: signoffIdsOf, bins: catalogueBins, assemblies: openAssembliesOf }));
+  api.use('/offline', offlineRouter());
   api.use(apiNotFound);
   app.use('/api', api);
   app.use(certificateRouter(config.certificateDownload));

@@ -4,7 +4,6 @@ import { dayInWords, dueState, momentInWords } from '@shared/time/chapter-time';
 import type { ServiceContext } from '../context';
 import type { UserRow } from '../db/schema/users';
 import { listAssemblies } from '../features/planning/assemblies.repo';
-import { assemblyNames } from '../features/planning/assembly-catalogue';
 import { estimateAssembly } from '../features/planning/assembly-estimate.service';
 import { readTab } from '../features/stock/money.service';
 import { openAttentionReturns } from '../features/tools/attention-returns';
@@ -57,7 +56,7 @@ export function memberToday(ctx: ServiceContext, me: UserRow): MemberToday {
     setAside: short(holds.filter((h) => h.status === 'offered').map((h) => holdDto(h, now, zone))),
     queue: short(holds.filter((h) => h.status === 'waiting').map((h) => holdDto(h, now, zone))),
     assemblies: short(assemblies),
-    tab: { balanceCents: readTab(ctx, assemblyNames, me, me.id).balanceCents },
+    tab: { balanceCents: readTab(ctx, me, me.id).balanceCents },
     attention: short(openAttentionReturns(ctx.db, { flaggedById: me.id }).map((r) => ({ loanId: r.loanId, tool: r.tool, note: r.note, returnedAt: r.returnedAt.toISOString() }))),
   };
 }

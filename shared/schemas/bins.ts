@@ -14,7 +14,7 @@ import {
   STEM_MATERIALS,
   type BinKind,
 } from '../stock/kinds';
-import { idParam } from './fields';
+import { changeBody, idParam } from './fields';
 
 export const binCodeField = z
   .string({ error: 'Enter the code on the bin label, like B-0107.' })
@@ -206,11 +206,7 @@ export const createBinBodySchema = binDefaults
 export type CreateBinBody = z.input<typeof createBinBodySchema>;
 export type CreateBinInput = z.output<typeof createBinBodySchema>;
 
-export const updateBinBodySchema = z
-  .object(binFields)
-  .partial()
-  .strict()
-  .refine((b) => Object.keys(b).length > 0, { error: 'Send at least one field to change.' });
+export const updateBinBodySchema = changeBody(binFields);
 export type UpdateBinBody = z.infer<typeof updateBinBodySchema>;
 
 const booleanQuery = z

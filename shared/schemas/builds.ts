@@ -3,7 +3,7 @@ import { BIN_KINDS } from '../stock/kinds';
 import { TOOL_CATEGORIES } from '../tools/categories';
 import { binCodeField } from './bins';
 import { estimateTotalsSchema, lineEstimateSchema, rivetLineSchema } from './estimate';
-import { idParam } from './fields';
+import { changeBody, idParam } from './fields';
 
 export const ASSEMBLY_STATUSES = ['planned', 'in_progress', 'done'] as const;
 export type AssemblyStatus = (typeof ASSEMBLY_STATUSES)[number];
@@ -28,11 +28,7 @@ export const createBuildBodySchema = z
   })
   .strict();
 export type CreateBuildBody = z.input<typeof createBuildBodySchema>;
-export const updateBuildBodySchema = z
-  .object({ name: nameField('build'), description: z.string().trim().max(1000), edgeFloorIn: z.number().positive().max(2).nullable() })
-  .partial()
-  .strict()
-  .refine((b) => Object.keys(b).length > 0, { error: 'Send at least one field to change.' });
+export const updateBuildBodySchema = changeBody({ name: nameField('build'), description: z.string().trim().max(1000), edgeFloorIn: z.number().positive().max(2).nullable() });
 
 /** Something an assembly takes from a bin besides its rivet lines: 24 screws from B-0210. */
 export const extraItemSchema = z.strictObject({
@@ -73,12 +69,7 @@ export const createAssemblyBodySchema = z
   .refine(datesInOrder, datesMessage);
 export type CreateAssemblyBody = z.input<typeof createAssemblyBodySchema>;
 export type CreateAssemblyInput = z.output<typeof createAssemblyBodySchema>;
-export const updateAssemblyBodySchema = z
-  .object(assemblyFields)
-  .partial()
-  .strict()
-  .refine((b) => Object.keys(b).length > 0, { error: 'Send at least one field to change.' })
-  .refine(datesInOrder, datesMessage);
+export const updateAssemblyBodySchema = changeBody(assemblyFields).refine(datesInOrder, datesMessage);
 export type UpdateAssemblyBody = z.infer<typeof updateAssemblyBodySchema>;
 
 const person = z.object({ id: z.number(), name: z.string() });

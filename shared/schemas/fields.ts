@@ -37,6 +37,14 @@ export const idParam = z.coerce
 /** The body of a command that takes no fields: `{}` or none at all; a field sent anyway is refused by name. */
 export const noFieldsBodySchema = z.strictObject({});
 
+/** A body that changes part of a record: any of these fields, at least one, and none it does not know. */
+export const changeBody = <S extends z.ZodRawShape>(fields: S) =>
+  z
+    .object(fields)
+    .partial()
+    .strict()
+    .refine((b) => Object.keys(b).length > 0, { error: 'Send at least one field to change.' });
+
 /** An amount typed in dollars and cents ("12.50", "$12.50", "1,200"), read as whole cents. */
 export const dollarsAndCentsField = (missing: string) =>
   z

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { findDrill } from '../drills/drill-sizes';
 import { ESTIMATE_DIAMETERS } from '../estimate/rivet-rules';
 import { CATEGORY_LABELS, isRivetSized, TEMPORARY_FASTENER_SIZES, TOOL_CATEGORIES, TOOL_STATUSES } from '../tools/categories';
+import { changeBody } from './fields';
 
 export const TOOL_CODE_PATTERN = /^T-\d{4,6}$/;
 
@@ -87,11 +88,7 @@ export const createToolBodySchema = toolFieldsSchema.extend({ code: toolCodeFiel
 export type CreateToolBody = z.input<typeof createToolBodySchema>;
 export type CreateToolInput = z.output<typeof createToolBodySchema>;
 
-export const updateToolBodySchema = z
-  .object(toolFields)
-  .partial()
-  .strict()
-  .refine((b) => Object.keys(b).length > 0, { error: 'Send at least one field to change.' });
+export const updateToolBodySchema = changeBody(toolFields);
 export type UpdateToolBody = z.infer<typeof updateToolBodySchema>;
 
 export const toolListQuerySchema = z.object({

@@ -17,9 +17,6 @@ import { bins, stockMovements } from '../../server/db/schema/stock';
 import { loans, tools } from '../../server/db/schema/tools';
 import { users, type UserRow } from '../../server/db/schema/users';
 import { takeCatalogue } from '../../server/features/offline/offline.service';
-import { openAssembliesOf } from '../../server/features/planning/assembly-catalogue';
-import { catalogueBins } from '../../server/features/stock/bin-catalogue';
-import { catalogueTools, signoffIdsOf } from '../../server/features/tools/tool-catalogue';
 import { median } from './median';
 
 const RUNS = 15;
@@ -27,7 +24,6 @@ const MEMBERS = 40;
 const DRAWS_PER_BIN = 20;
 const NOW = new Date('2026-12-03T08:00:00Z');
 const DAY_MS = 86_400_000;
-const sources = { tools: catalogueTools, signoffIds: signoffIdsOf, bins: catalogueBins, assemblies: openAssembliesOf };
 
 function fill(db: Database, size: number): UserRow {
   const random = seededRandom(417 + size);
@@ -99,10 +95,10 @@ function measure(size: number) {
   const bareTools = db.$client.prepare('select * from tools');
   const bareBins = db.$client.prepare('select * from bins');
   // Interleaved (ABBA) so both sides see the same neighbours on a shared machine.
-  const catalogue = [timed(() => takeCatalogue(ctx, member, sources))];
+  const catalogue = [timed(() => takeCatalogue(ctx, member))];
   const baseline = [timed(() => [bareTools.all(), bareBins.all()]), timed(() => [bareTools.all(), bareBins.all()])];
-  catalogue.push(timed(() => takeCatalogue(ctx, member, sources)));
-  const copy = takeCatalogue(ctx, member, sources);
+  catalogue.push(timed(() => takeCatalogue(ctx, member)));
+  const copy = takeCatalogue(ctx, member);
   db.$client.close();
   const catalogueMs = (catalogue[0]! + catalogue[1]!) / 2;
   const baselineMs = (baseline[0]! + baseline[1]!) / 2;

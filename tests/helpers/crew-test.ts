@@ -1,6 +1,6 @@
 import { test } from 'vitest';
 import type { ServiceContext } from '../../server/context';
-import type { PaymentsApp } from './payments-app';
+import type { PaymentsApp, PaymentsAppOptions } from './payments-app';
 import { buildTestApp } from './test-app';
 
 /**
@@ -43,12 +43,13 @@ export const accountsTest = crewTest.extend('accounts', { auto: true }, ({ crew 
 
 /**
  * `crewTest` with `payments`, the payments app (a listening test app with the local fake provider, see
- * payments-app.ts), closed after the test. A file using it makes that app the crew's:
- * `paymentsTest.override('t', ({ payments }) => payments.t)`.
+ * payments-app.ts), closed after the test, started with `paymentsOptions` (none by default; a test that
+ * needs others runs on `paymentsTest.extend('paymentsOptions', { webhooksLost: true })`). A file using it
+ * makes that app the crew's: `paymentsTest.override('t', ({ payments }) => payments.t)`.
  */
-export const paymentsTest = crewTest.extend('payments', async ({}, { onCleanup }): Promise<PaymentsApp> => {
+export const paymentsTest = crewTest.extend('paymentsOptions', {} as PaymentsAppOptions).extend('payments', async ({ paymentsOptions }, { onCleanup }): Promise<PaymentsApp> => {
   const { startPaymentsApp } = await import('./payments-app');
-  const payments = await startPaymentsApp();
+  const payments = await startPaymentsApp(paymentsOptions);
   onCleanup(() => payments.close());
   return payments;
 });

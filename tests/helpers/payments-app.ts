@@ -49,8 +49,12 @@ export interface PaymentsApp {
 }
 export type PaymentsTestApp = PaymentsApp;
 
-/** `webhooksLost`: the fake's webhooks go to a closed port, as when the provider's delivery is delayed. */
-export async function startPaymentsApp({ webhooksLost = false } = {}): Promise<PaymentsApp> {
+export interface PaymentsAppOptions {
+  /** The fake's webhooks go to a closed port, as when the provider's delivery is delayed. */
+  webhooksLost?: boolean;
+}
+
+export async function startPaymentsApp({ webhooksLost = false }: PaymentsAppOptions = {}): Promise<PaymentsApp> {
   const server: Server = createServer();
   await new Promise<void>((ok) => server.listen(0, '127.0.0.1', () => ok()));
   const { port } = server.address() as AddressInfo;

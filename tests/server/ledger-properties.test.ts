@@ -5,7 +5,6 @@ import { insertUser } from '../../server/accounts/users.repo';
 import type { ServiceContext } from '../../server/context';
 import { migrateDatabase, openDatabase } from '../../server/db/client';
 import type { UserRow } from '../../server/db/schema/users';
-import { assemblyNames } from '../../server/features/planning/assembly-catalogue';
 import { insertNewBin } from '../../server/features/stock/bins.service';
 import { findBinByCode } from '../../server/features/stock/bins.repo';
 import { ledgerSum } from '../../server/features/stock/ledger.repo';
@@ -98,7 +97,7 @@ describe('the ledger under random sequences of movements', () => {
       fc.property(fc.integer({ min: 0, max: 200 }), fc.array(opArb, { minLength: 10, maxLength: 40 }), (opening, ops) => {
         {
           const bin = insertNewBin(ctx, people[0]!, createBinBodySchema.parse(blindRivetBin({ initialQuantity: opening })));
-          const model = { onHand: opening, entries: ledgerFor(ctx, assemblyNames, people[0]!, bin.code).map((e) => ({ id: e.id, qty: e.quantity, member: null, kind: e.kind, reversed: false })) };
+          const model = { onHand: opening, entries: ledgerFor(ctx, people[0]!, bin.code).map((e) => ({ id: e.id, qty: e.quantity, member: null, kind: e.kind, reversed: false })) };
           for (const op of ops) {
             const result = apply(ctx, people, bin.code, op, model);
             tally(result === 'skipped' ? 'skipped' : 'accepted' in result ? `${op.op} accepted` : `${op.op} refused`);
@@ -111,7 +110,7 @@ describe('the ledger under random sequences of movements', () => {
             for (const p of people) expect(rawNetDrawn(db, row.id, p.id), `net drawn by ${p.name}`).toBeGreaterThanOrEqual(0);
             if (result !== 'skipped' && 'accepted' in result && op.op === 'count') expect(row.onHand).toBe(op.n);
           }
-          const ledger = ledgerFor(ctx, assemblyNames, people[0]!, bin.code, undefined, undefined, 5000);
+          const ledger = ledgerFor(ctx, people[0]!, bin.code, undefined, undefined, 5000);
           expect(ledger.every((e) => e.balanceAfter >= 0)).toBe(true);
           // Newest first, and each entry's balance is the previous balance plus its quantity.
           const oldestFirst = [...ledger].reverse();

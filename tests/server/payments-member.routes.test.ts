@@ -1,44 +1,37 @@
 import request from 'supertest';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { checkoutStatusSchema, paymentSettingsSchema } from '@shared/schemas/payments';
 import { onlinePayments } from '../../server/db/schema/payments';
 import { memberPayments } from '../../server/db/schema/stock';
 import { post } from '../helpers/crib';
-import { checkout, drawOnTab, press, sessionIdOf, startPaymentsApp, type PaymentsApp } from '../helpers/payments-app';
-import { buildTestApp, type Crew, type SignedInAgent } from '../helpers/test-app';
+import { paymentsTest } from '../helpers/crew-test';
+import { checkout, drawOnTab, press, sessionIdOf } from '../helpers/payments-app';
+import { buildTestApp, type SignedInAgent } from '../helpers/test-app';
 
 // blindRivetBin costs $0.12 a rivet: 120 drawn is a tab of 1440 cents.
 const TAB_CENTS = 120 * 12;
 
-let p: PaymentsApp;
-let crew: Crew;
-let lead: SignedInAgent;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-
-beforeEach(async () => {
-  p = await startPaymentsApp();
-  crew = await p.t.addCrew();
-  lead = await p.t.signIn('lead@example.org');
-  qm = await p.t.signIn('qm@example.org');
-  member = await p.t.signIn('member@example.org');
-});
-afterEach(() => p.close());
-
-const put = (who: SignedInAgent, body: unknown) => who.agent.put('/api/payments/settings').set('X-CSRF-Token', who.csrf).send(body as object);
-const rows = () => p.t.db.select().from(onlinePayments).orderBy(onlinePayments.id).all();
 const balanceOf = async (who: SignedInAgent) => (await who.agent.get('/api/stock/tab')).body.balanceCents as number;
 
-/** An event about a checkout, signed as the provider signs it, delivered to the webhook. */
-async function deliverEvent(type: 'checkout.session.completed' | 'checkout.session.expired', eventId: string, session: object) {
-  const payload = JSON.stringify({ id: eventId, object: 'event', type, created: Math.floor(Date.now() / 1000), data: { object: session } });
-  const signature = p.setup.provider.webhooks.generateTestHeaderString({ payload, secret: p.fake.webhookSecret });
-  const res = await request(p.t.app).post('/api/payments/webhook').set('content-type', 'application/json').set('stripe-signature', signature).send(payload);
-  expect(res.status).toBe(200);
-}
+paymentsTest.override('t', ({ payments }) => payments.t);
+
+const put = (who: SignedInAgent, body: unknown) => who.agent.put('/api/payments/settings').set('X-CSRF-Token', who.csrf).send(body as object);
+
+const test = paymentsTest
+  .extend('rows', ({ t }) => () => t.db.select().from(onlinePayments).orderBy(onlinePayments.id).all())
+  /** An event about a checkout, signed as the provider signs it, delivered to the webhook. */
+  .extend('deliverEvent', ({ payments: p }) => async (type: 'checkout.session.completed' | 'checkout.session.expired', eventId: string, session: object) => {
+    const payload = JSON.stringify({ id: eventId, object: 'event', type, created: Math.floor(Date.now() / 1000), data: { object: session } });
+    const signature = p.setup.provider.webhooks.generateTestHeaderString({ payload, secret: p.fake.webhookSecret });
+    const res = await request(p.t.app).post('/api/payments/webhook').set('content-type', 'application/json').set('stripe-signature', signature).send(payload);
+    expect(res.status).toBe(200);
+  });
+
+/** The fake provider's webhooks go to a closed port, as when its delivery is delayed. */
+const lostWebhooksTest = test.extend('paymentsOptions', { webhooksLost: true });
 
 describe('GET /api/payments/settings', () => {
-  it('tells any signed-in person that payments are offered in US dollars through the local stand-in, with no key in the answer', async () => {
+  test('tells any signed-in person that payments are offered in US dollars through the local stand-in, with no key in the answer', async ({ payments: p, member }) => {
     const res = await member.agent.get('/api/payments/settings');
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/json/);
@@ -49,11 +42,11 @@ describe('GET /api/payments/settings', () => {
     expect(text).not.toMatch(/sk_|whsec_|secret|key/i);
   });
 
-  it('answers 401 when signed out', async () => {
+  test('answers 401 when signed out', async ({ payments: p }) => {
     expect((await (await p.t.anonymous()).agent.get('/api/payments/settings')).status).toBe(401);
   });
 
-  it('says online payment is off when the app has no provider at all', async () => {
+  test('says online payment is off when the app has no provider at all', async () => {
     const bare = await buildTestApp();
     try {
       await bare.addCrew();
@@ -66,14 +59,14 @@ describe('GET /api/payments/settings', () => {
 });
 
 describe('PUT /api/payments/settings', () => {
-  it('lets the lead turn online payment off and choose a currency; everyone reads the change', async () => {
+  test('lets the lead turn online payment off and choose a currency; everyone reads the change', async ({ lead, member }) => {
     const res = await put(lead, { offered: false, currency: 'cad' });
     expect(res.status).toBe(200);
     expect(res.body).toEqual({ offered: false, currency: 'cad', minimumCents: 50, provider: 'local-fake' });
     expect((await member.agent.get('/api/payments/settings')).body).toMatchObject({ offered: false, currency: 'cad' });
   });
 
-  it('answers 400 naming the currency when it is not one of the list', async () => {
+  test('answers 400 naming the currency when it is not one of the list', async ({ lead, member }) => {
     const res = await put(lead, { offered: true, currency: 'XYZ' });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('VALIDATION_FAILED');
@@ -81,7 +74,7 @@ describe('PUT /api/payments/settings', () => {
     expect((await member.agent.get('/api/payments/settings')).body.currency).toBe('usd');
   });
 
-  it('answers 400 naming offered when it is not true or false, and refuses an unknown field', async () => {
+  test('answers 400 naming offered when it is not true or false, and refuses an unknown field', async ({ lead }) => {
     const res = await put(lead, { offered: 'yes', currency: 'usd' });
     expect(res.status).toBe(400);
     expect(res.body.error.issues).toEqual([{ path: 'offered', message: 'Say whether online payment is offered: true or false.' }]);
@@ -90,13 +83,13 @@ describe('PUT /api/payments/settings', () => {
     expect(key.body.error.issues).toEqual([{ path: 'secretKey', message: 'Unknown field "secretKey".' }]);
   });
 
-  it('answers 403 to a quartermaster or a member and changes nothing', async () => {
+  test('answers 403 to a quartermaster or a member and changes nothing', async ({ qm, member }) => {
     expect((await put(qm, { offered: false, currency: 'eur' })).status).toBe(403);
     expect((await put(member, { offered: false, currency: 'eur' })).status).toBe(403);
     expect((await member.agent.get('/api/payments/settings')).body).toMatchObject({ offered: true, currency: 'usd' });
   });
 
-  it('asks the next checkout in the chosen currency', async () => {
+  test('asks the next checkout in the chosen currency', async ({ payments: p, lead, qm, member }) => {
     await drawOnTab(qm, member, 120);
     expect((await put(lead, { offered: true, currency: 'eur' })).status).toBe(200);
     const url = await checkout(member);
@@ -106,7 +99,7 @@ describe('PUT /api/payments/settings', () => {
 });
 
 describe('POST /api/payments/checkout when the chapter does not offer online payment', () => {
-  it('answers 409 ONLINE_PAYMENT_OFF pointing to cash, and opens nothing at the provider', async () => {
+  test('answers 409 ONLINE_PAYMENT_OFF pointing to cash, and opens nothing at the provider', async ({ lead, qm, member, rows }) => {
     await drawOnTab(qm, member, 120);
     await put(lead, { offered: false, currency: 'usd' });
     const res = await post(member, '/api/payments/checkout', {});
@@ -117,7 +110,7 @@ describe('POST /api/payments/checkout when the chapter does not offer online pay
 });
 
 describe('coming back from the hosted page', () => {
-  it('the success URL carries the placeholder, and the fake puts the session id in its place when sending the payer back', async () => {
+  test('the success URL carries the placeholder, and the fake puts the session id in its place when sending the payer back', async ({ payments: p, qm, member }) => {
     await drawOnTab(qm, member, 120);
     const url = await checkout(member);
     const id = sessionIdOf(url);
@@ -126,7 +119,7 @@ describe('coming back from the hosted page', () => {
     expect(await press(url, 'pay')).toBe(`http://gripline.test/tab?payment=paid&checkout=${id}`);
   });
 
-  it('GET /api/payments/checkouts/:sessionId says open, then paid, with the amount and currency', async () => {
+  test('GET /api/payments/checkouts/:sessionId says open, then paid, with the amount and currency', async ({ qm, member }) => {
     await drawOnTab(qm, member, 120);
     const url = await checkout(member, { amountCents: 1000 });
     const id = sessionIdOf(url);
@@ -137,7 +130,7 @@ describe('coming back from the hosted page', () => {
     expect((await member.agent.get(`/api/payments/checkouts/${id}`)).body).toEqual({ state: 'paid', amountCents: 1000, currency: 'usd' });
   });
 
-  it('answers 404 for another member’s checkout, the same as for one that does not exist', async () => {
+  test('answers 404 for another member’s checkout, the same as for one that does not exist', async ({ payments: p, qm, member }) => {
     await p.t.addUser({ email: 'other@example.org', name: 'Otto Other' });
     const other = await p.t.signIn('other@example.org');
     await drawOnTab(qm, other, 120);
@@ -151,7 +144,7 @@ describe('coming back from the hosted page', () => {
     expect(none.body).toEqual(res.body);
   });
 
-  it('answers 400 for an id that cannot be a checkout, and 401 when signed out', async () => {
+  test('answers 400 for an id that cannot be a checkout, and 401 when signed out', async ({ payments: p, member }) => {
     const bad = await member.agent.get('/api/payments/checkouts/not%20an%20id');
     expect(bad.status).toBe(400);
     expect(bad.body.error.issues).toEqual([{ path: 'sessionId', message: 'That is not a checkout id.' }]);
@@ -160,7 +153,7 @@ describe('coming back from the hosted page', () => {
 });
 
 describe('several open checkouts', () => {
-  it('a new checkout expires the member’s earlier open one at the provider; its page says so and offers the way back', async () => {
+  test('a new checkout expires the member’s earlier open one at the provider; its page says so and offers the way back', async ({ payments: p, qm, member, rows }) => {
     await drawOnTab(qm, member, 120);
     const first = await checkout(member);
     const second = await checkout(member, { amountCents: 500 });
@@ -177,7 +170,7 @@ describe('several open checkouts', () => {
     expect((await member.agent.get(`/api/payments/checkouts/${sessionIdOf(first)}`)).body.state).toBe('expired');
   });
 
-  it('Pay on a page left open on the expired checkout charges nothing and shows it expired', async () => {
+  test('Pay on a page left open on the expired checkout charges nothing and shows it expired', async ({ payments: p, qm, member }) => {
     await drawOnTab(qm, member, 120);
     const first = await checkout(member);
     await checkout(member);
@@ -186,7 +179,7 @@ describe('several open checkouts', () => {
     expect(p.t.db.select().from(memberPayments).all()).toEqual([]);
   });
 
-  it('leaves other members’ open checkouts alone', async () => {
+  test('leaves other members’ open checkouts alone', async ({ payments: p, qm, member }) => {
     await p.t.addUser({ email: 'other@example.org', name: 'Otto Other' });
     const other = await p.t.signIn('other@example.org');
     await drawOnTab(qm, other, 120);
@@ -196,7 +189,7 @@ describe('several open checkouts', () => {
     expect((await other.agent.get(`/api/payments/checkouts/${sessionIdOf(theirs)}`)).body.state).toBe('open');
   });
 
-  it('a completion for an expired checkout records no payment and is logged for the lead', async () => {
+  test('a completion for an expired checkout records no payment and is logged for the lead', async ({ payments: p, crew, qm, member, rows, deliverEvent }) => {
     await drawOnTab(qm, member, 120);
     const first = sessionIdOf(await checkout(member));
     await checkout(member);
@@ -210,7 +203,7 @@ describe('several open checkouts', () => {
     expect(warning).toMatchObject({ sessionId: first, eventId: 'evt_test_late', userId: crew.member.id });
   });
 
-  it('an expiry the provider sends on its own (the checkout lapsed) closes the open checkout', async () => {
+  test('an expiry the provider sends on its own (the checkout lapsed) closes the open checkout', async ({ payments: p, qm, member, rows, deliverEvent }) => {
     await drawOnTab(qm, member, 120);
     const id = sessionIdOf(await checkout(member));
     const session = await p.setup.provider.checkout.sessions.retrieve(id);
@@ -218,12 +211,7 @@ describe('several open checkouts', () => {
     expect(rows()).toMatchObject([{ state: 'expired', eventId: 'evt_test_lapsed' }]);
   });
 
-  it('leaves open a checkout the provider will not expire (paid, its completion still on the way), and records that completion when it comes', async () => {
-    await p.close();
-    p = await startPaymentsApp({ webhooksLost: true });
-    crew = await p.t.addCrew();
-    qm = await p.t.signIn('qm@example.org');
-    member = await p.t.signIn('member@example.org');
+  lostWebhooksTest('leaves open a checkout the provider will not expire (paid, its completion still on the way), and records that completion when it comes', async ({ payments: p, qm, member, rows, deliverEvent }) => {
     await drawOnTab(qm, member, 120);
     const first = await checkout(member, { amountCents: 1000 });
     // Paid at the provider; its webhook does not reach Gripline this time.

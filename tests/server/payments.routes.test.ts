@@ -1,39 +1,16 @@
 import request from 'supertest';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect } from 'vitest';
 import { refusedCheckoutListSchema } from '@shared/schemas/payments';
 import { outboxMail } from '../../server/db/schema/mail';
 import { onlinePayments } from '../../server/db/schema/payments';
 import { memberPayments } from '../../server/db/schema/stock';
-import type { FakeProvider } from '../../server/payments/fake-provider';
-import type { PaymentsSetup } from '../../server/payments/payments-client';
-import { checkout, drawOnTab as drawQuantity, sessionIdOf, startPaymentsApp, type PaymentsApp } from '../helpers/payments-app';
+import { paymentsTest } from '../helpers/crew-test';
+import { checkout, drawOnTab as drawQuantity, sessionIdOf } from '../helpers/payments-app';
 import { post } from '../helpers/crib';
-import type { Crew, SignedInAgent, TestApp } from '../helpers/test-app';
+import type { SignedInAgent } from '../helpers/test-app';
 
 // blindRivetBin costs $0.12 a rivet: 120 drawn is a tab of 120 × 12 = 1440 cents.
 const TAB_CENTS = 120 * 12;
-
-let p: PaymentsApp;
-let fake: FakeProvider;
-let setup: PaymentsSetup;
-let t: TestApp;
-let crew: Crew;
-let qm: SignedInAgent;
-let member: SignedInAgent;
-/** What the app logged at warn and above, one JSON line each. */
-let logged: string[];
-
-/** The app listens for real: the fake provider sends its webhook to it over loopback, as in production. */
-beforeEach(async () => {
-  p = await startPaymentsApp();
-  ({ t, fake, setup, logged } = p);
-  crew = await t.addCrew();
-  qm = await t.signIn('qm@example.org');
-  member = await t.signIn('member@example.org');
-});
-afterEach(() => p.close());
-
-const drawOnTab = (who: SignedInAgent, quantity: number) => drawQuantity(qm, who, quantity);
 
 const balanceOf = async (who: SignedInAgent) => (await who.agent.get('/api/stock/tab')).body.balanceCents as number;
 
@@ -46,23 +23,30 @@ async function press(url: string, choice: 'pay' | 'cancel'): Promise<string> {
   return res.headers.get('location')!;
 }
 
-/** A completion event as the provider sends it, for a session the SDK retrieves from the fake. */
-async function completionEvent(sessionId: string, eventId: string, change: Record<string, unknown> = {}): Promise<string> {
-  const session = await setup.provider.checkout.sessions.retrieve(sessionId);
-  return JSON.stringify({ id: eventId, object: 'event', type: 'checkout.session.completed', created: Math.floor(Date.now() / 1000), data: { object: { ...session, payment_status: 'paid', status: 'complete', ...change } } });
-}
+/** The app listens for real: the fake provider sends its webhook to it over loopback, as in production. */
+paymentsTest.override('t', ({ payments }) => payments.t);
 
-function deliver(payload: string, signature?: string) {
-  const req = request(t.app).post('/api/payments/webhook').set('content-type', 'application/json');
-  return (signature === undefined ? req : req.set('stripe-signature', signature)).send(payload);
-}
-const signed = (payload: string, opts: { secret?: string; timestamp?: number } = {}) =>
-  setup.provider.webhooks.generateTestHeaderString({ payload, secret: opts.secret ?? fake.webhookSecret, timestamp: opts.timestamp });
-
-const paymentCount = () => t.db.select().from(memberPayments).all().length;
+const test = paymentsTest
+  .extend('fake', ({ payments }) => payments.fake)
+  .extend('setup', ({ payments }) => payments.setup)
+  /** What the app logged at warn and above, one JSON line each. */
+  .extend('logged', ({ payments }) => payments.logged)
+  .extend('drawOnTab', ({ qm }) => (who: SignedInAgent, quantity: number) => drawQuantity(qm, who, quantity))
+  /** A completion event as the provider sends it, for a session the SDK retrieves from the fake. */
+  .extend('completionEvent', ({ setup }) => async (sessionId: string, eventId: string, change: Record<string, unknown> = {}): Promise<string> => {
+    const session = await setup.provider.checkout.sessions.retrieve(sessionId);
+    return JSON.stringify({ id: eventId, object: 'event', type: 'checkout.session.completed', created: Math.floor(Date.now() / 1000), data: { object: { ...session, payment_status: 'paid', status: 'complete', ...change } } });
+  })
+  .extend('deliver', ({ t }) => (payload: string, signature?: string) => {
+    const req = request(t.app).post('/api/payments/webhook').set('content-type', 'application/json');
+    return (signature === undefined ? req : req.set('stripe-signature', signature)).send(payload);
+  })
+  .extend('signed', ({ setup, fake }) => (payload: string, opts: { secret?: string; timestamp?: number } = {}) =>
+    setup.provider.webhooks.generateTestHeaderString({ payload, secret: opts.secret ?? fake.webhookSecret, timestamp: opts.timestamp }))
+  .extend('paymentCount', ({ t }) => () => t.db.select().from(memberPayments).all().length);
 
 describe('POST /api/payments/checkout', () => {
-  it('opens a hosted checkout for the whole of the member’s own balance', async () => {
+  test('opens a hosted checkout for the whole of the member’s own balance', async ({ t, crew, member, fake, setup, drawOnTab }) => {
     await drawOnTab(member, 120);
     const url = await checkout(member);
     expect(url).toMatch(new RegExp(`^http://127\\.0\\.0\\.1:${fake.port}/pay/cs_test_`));
@@ -81,7 +65,7 @@ describe('POST /api/payments/checkout', () => {
     expect(t.db.select().from(onlinePayments).all()).toMatchObject([{ sessionId: session.id, userId: crew.member.id, amountCents: TAB_CENTS, state: 'open', eventId: null }]);
   });
 
-  it('takes a part of the balance, but never more than the member owes nor less than the minimum', async () => {
+  test('takes a part of the balance, but never more than the member owes nor less than the minimum', async ({ member, setup, drawOnTab }) => {
     await drawOnTab(member, 120);
     const part = await checkout(member, { amountCents: 500 });
     expect((await setup.provider.checkout.sessions.retrieve(sessionIdOf(part))).amount_total).toBe(500);
@@ -94,7 +78,7 @@ describe('POST /api/payments/checkout', () => {
     expect(tiny.body.error.message).toContain('Online payments are at least $0.50.');
   });
 
-  it('pays only the signed-in member’s own tab: another member’s balance cannot be reached', async () => {
+  test('pays only the signed-in member’s own tab: another member’s balance cannot be reached', async ({ t, crew, member, drawOnTab }) => {
     await t.addUser({ email: 'other@example.org', name: 'Otto Other' });
     const other = await t.signIn('other@example.org');
     await drawOnTab(other, 300);
@@ -108,14 +92,14 @@ describe('POST /api/payments/checkout', () => {
     expect(otherSum.body.error.code).toBe('ABOVE_BALANCE');
   });
 
-  it('answers 400 with a message when nothing is owed', async () => {
+  test('answers 400 with a message when nothing is owed', async ({ t, member }) => {
     const res = await post(member, '/api/payments/checkout', {});
     expect(res.status).toBe(400);
     expect(res.body.error).toMatchObject({ code: 'NOTHING_OWED', message: 'Your tab is settled: there is nothing to pay.' });
     expect(t.db.select().from(onlinePayments).all()).toEqual([]);
   });
 
-  it('answers 400 when the member has paid ahead', async () => {
+  test('answers 400 when the member has paid ahead', async ({ crew, qm, member, drawOnTab }) => {
     await drawOnTab(member, 10);
     expect((await post(qm, '/api/stock/payments', { userId: crew.member.id, amountCents: 500 })).status).toBe(201);
     expect(await balanceOf(member)).toBe(10 * 12 - 500);
@@ -124,21 +108,21 @@ describe('POST /api/payments/checkout', () => {
     expect(res.body.error.code).toBe('NOTHING_OWED');
   });
 
-  it('answers 400 when the balance is under the online minimum', async () => {
+  test('answers 400 when the balance is under the online minimum', async ({ member, drawOnTab }) => {
     await drawOnTab(member, 3);
     const res = await post(member, '/api/payments/checkout', {});
     expect(res.status).toBe(400);
     expect(res.body.error).toMatchObject({ code: 'BELOW_MINIMUM', message: 'Your tab is $0.36, under the $0.50 online minimum. Pay it in cash to the quartermaster.' });
   });
 
-  it('answers 401 when signed out', async () => {
+  test('answers 401 when signed out', async ({ t }) => {
     const anon = await t.anonymous();
     expect((await post(anon, '/api/payments/checkout', {})).status).toBe(401);
   });
 });
 
 describe('the hosted page and the signed webhook', () => {
-  it('Pay completes the payment through the webhook: the balance drops by the amount and a receipt is mailed', async () => {
+  test('Pay completes the payment through the webhook: the balance drops by the amount and a receipt is mailed', async ({ t, crew, member, drawOnTab }) => {
     await drawOnTab(member, 120);
     const url = await checkout(member, { amountCents: 1000 });
     expect(await press(url, 'pay')).toBe(`http://gripline.test/tab?payment=paid&checkout=${sessionIdOf(url)}`);
@@ -153,7 +137,7 @@ describe('the hosted page and the signed webhook', () => {
     expect(receipt?.text).toContain('You still owe $4.40.');
   });
 
-  it('Cancel sends the member back and records nothing', async () => {
+  test('Cancel sends the member back and records nothing', async ({ t, member, drawOnTab }) => {
     await drawOnTab(member, 120);
     const url = await checkout(member);
     expect(await press(url, 'cancel')).toBe('http://gripline.test/tab?payment=cancelled');
@@ -161,7 +145,7 @@ describe('the hosted page and the signed webhook', () => {
     expect(t.db.select().from(onlinePayments).all()).toMatchObject([{ state: 'open' }]);
   });
 
-  it('records the same event delivered twice once, and a later duplicate completion not at all', async () => {
+  test('records the same event delivered twice once, and a later duplicate completion not at all', async ({ t, member, drawOnTab, completionEvent, deliver, signed, paymentCount }) => {
     await drawOnTab(member, 120);
     const id = sessionIdOf(await checkout(member));
     const payload = await completionEvent(id, 'evt_test_once');
@@ -175,7 +159,7 @@ describe('the hosted page and the signed webhook', () => {
     expect(t.db.select().from(onlinePayments).all()).toMatchObject([{ state: 'paid', eventId: 'evt_test_once' }]);
   });
 
-  it('refuses a forged, missing or stale signature with 400 and changes nothing', async () => {
+  test('refuses a forged, missing or stale signature with 400 and changes nothing', async ({ t, member, drawOnTab, completionEvent, deliver, signed, paymentCount }) => {
     await drawOnTab(member, 120);
     const payload = await completionEvent(sessionIdOf(await checkout(member)), 'evt_test_forged');
     const forged = await deliver(payload, signed(payload, { secret: 'whsec_not_the_chapters' }));
@@ -192,7 +176,7 @@ describe('the hosted page and the signed webhook', () => {
     expect(t.db.select().from(onlinePayments).all()).toMatchObject([{ state: 'open', eventId: null }]);
   });
 
-  it('refuses a completion whose amount is not the checkout’s: nothing comes off the tab', async () => {
+  test('refuses a completion whose amount is not the checkout’s: nothing comes off the tab', async ({ t, crew, member, fake, logged, drawOnTab, completionEvent, deliver, signed, paymentCount }) => {
     await drawOnTab(member, 120);
     const payload = await completionEvent(sessionIdOf(await checkout(member)), 'evt_test_short', { amount_total: 100 });
     expect((await deliver(payload, signed(payload))).status).toBe(200);
@@ -205,7 +189,7 @@ describe('the hosted page and the signed webhook', () => {
     expect(logged.join('')).not.toContain(fake.secretKey);
   });
 
-  it('keeps what the provider reported on a refused completion, mails the lead and lists it for the lead and the quartermaster', async () => {
+  test('keeps what the provider reported on a refused completion, mails the lead and lists it for the lead and the quartermaster', async ({ t, crew, qm, member, drawOnTab, completionEvent, deliver, signed }) => {
     await drawOnTab(member, 120);
     const sessionId = sessionIdOf(await checkout(member));
     const payload = await completionEvent(sessionId, 'evt_test_euros', { amount_total: 900, currency: 'eur' });
@@ -230,7 +214,7 @@ describe('the hosted page and the signed webhook', () => {
     }
   });
 
-  it('lists no refused checkouts when every completion matched', async () => {
+  test('lists no refused checkouts when every completion matched', async ({ payments: p, t, qm, member, drawOnTab }) => {
     await drawOnTab(member, 120);
     await p.payOnline(member);
     const res = await qm.agent.get('/api/payments/refused');
@@ -241,7 +225,7 @@ describe('the hosted page and the signed webhook', () => {
 });
 
 describe('when the provider cannot be reached', () => {
-  it('answers 502 with a message, and opens no checkout', async () => {
+  test('answers 502 with a message, and opens no checkout', async ({ t, member, fake, drawOnTab }) => {
     await drawOnTab(member, 120);
     await fake.close();
     const res = await post(member, '/api/payments/checkout', {});

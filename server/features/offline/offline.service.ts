@@ -1,31 +1,26 @@
-import type { Catalogue, CatalogueBin, CatalogueTool } from '@shared/schemas/offline';
+import type { Catalogue } from '@shared/schemas/offline';
 import type { ServiceContext } from '../../context';
-import type { Database, Executor } from '../../db/client';
 import type { UserRow } from '../../db/schema/users';
-
-/** What the catalogue copy is made of; each part comes from the feature that owns its tables (the app wires them). */
-export interface CatalogueSources {
-  tools(db: Database): CatalogueTool[];
-  signoffIds(db: Executor, userId: number): number[];
-  bins(db: Executor, memberId: number): CatalogueBin[];
-  assemblies(db: Executor, ownerId: number): Catalogue['yourAssemblies'];
-}
+import { openAssembliesOf } from '../planning/planning.reads';
+import { catalogueBins } from '../stock/stock.reads';
+import { catalogueTools, signoffIdsOf } from '../tools/tools.reads';
 
 /**
  * The copy of the catalogue a phone keeps to recognise a scan offline, for one member: read in one
- * transaction, so tools, bins and the member's own loans are from the same moment.
+ * transaction, so tools, bins and the member's own loans are from the same moment. Each part is the
+ * read model of the feature that owns its tables.
  */
-export function takeCatalogue(ctx: ServiceContext, user: UserRow, sources: CatalogueSources): Catalogue {
+export function takeCatalogue(ctx: ServiceContext, user: UserRow): Catalogue {
   return ctx.db.$client.transaction((): Catalogue => {
-    const tools = sources.tools(ctx.db);
+    const tools = catalogueTools(ctx.db);
     return {
       takenAt: ctx.now().toISOString(),
       you: { id: user.id, name: user.name, role: user.role },
       tools,
-      bins: sources.bins(ctx.db, user.id),
+      bins: catalogueBins(ctx.db, user.id),
       yourLoans: tools.filter((t) => t.status === 'on_loan' && t.holder?.id === user.id).map((t) => ({ code: t.code, dueAt: t.dueAt! })),
-      yourSignoffs: sources.signoffIds(ctx.db, user.id),
-      yourAssemblies: sources.assemblies(ctx.db, user.id),
+      yourSignoffs: signoffIdsOf(ctx.db, user.id),
+      yourAssemblies: openAssembliesOf(ctx.db, user.id),
     };
   })();
 }

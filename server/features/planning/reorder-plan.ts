@@ -55,8 +55,3 @@ export function reorderPlan(ctx: ServiceContext): ReorderPlan {
   return { run, orders };
 }
 
-/** The part stock shows on each bin (handed to the stock feature by the app). */
-export function binReorders(ctx: ServiceContext): Map<number, BinReorder> {
-  const orders = reorderPlan(ctx).orders;
-  return new Map([...orders].map(([id, o]) => [id, { low: o.low, toOrder: o.toOrder, onOrder: o.onOrder, reorderAt: o.reorderAt, orderCostCents: o.orderCostCents }]));
-}

@@ -1,17 +1,12 @@
 import type { AssemblyName } from '@shared/schemas/bins';
 import type { Executor } from '../../db/client';
-
-/**
- * Assemblies belong to the planning feature: the app hands stock this way to name them
- * (ids that name no assembly are missing from the answer).
- */
-export type NameAssemblies = (db: Executor, ids: readonly number[]) => Map<number, AssemblyName>;
+import { assemblyNames } from '../planning/planning.reads';
 
 type Named<T> = T & { assembly: AssemblyName | null };
 
-/** The names of every assembly the lists mention, in one query. */
-export function namesFor(db: Executor, nameAssemblies: NameAssemblies, ...lists: { assemblyId: number | null }[][]): Map<number, AssemblyName> {
-  return nameAssemblies(
+/** The names of every assembly the lists mention, in one query (assemblies belong to planning; ids that name no assembly are absent). */
+export function namesFor(db: Executor, ...lists: { assemblyId: number | null }[][]): Map<number, AssemblyName> {
+  return assemblyNames(
     db,
     lists.flatMap((list) => list.flatMap((e) => (e.assemblyId === null ? [] : [e.assemblyId]))),
   );
@@ -22,6 +17,6 @@ export function withNames<T extends { assemblyId: number | null }>(entries: T[],
   return entries.map((e) => ({ ...e, assembly: e.assemblyId === null ? null : (names.get(e.assemblyId) ?? null) }));
 }
 
-export function withAssemblyNames<T extends { assemblyId: number | null }>(db: Executor, nameAssemblies: NameAssemblies, entries: T[]): Named<T>[] {
-  return withNames(entries, namesFor(db, nameAssemblies, entries));
+export function withAssemblyNames<T extends { assemblyId: number | null }>(db: Executor, entries: T[]): Named<T>[] {
+  return withNames(entries, namesFor(db, entries));
 }

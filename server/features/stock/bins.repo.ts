@@ -1,6 +1,7 @@
-import { and, asc, count, eq, inArray, like, max, ne, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, eq, inArray, like, max, ne, or, sql, type SQL } from 'drizzle-orm';
 import type { BinListQuery } from '@shared/schemas/bins';
 import type { Database, Executor } from '../../db/client';
+import { pageOf } from '../../db/page-of';
 import { insertRows, updateRowsById } from '../../db/bulk-write';
 import { preparedPerDatabase } from '../../db/prepared';
 import { bins, stockMovements, type BinRow } from '../../db/schema/stock';
@@ -88,17 +89,7 @@ function listFilter(q: BinListQuery, lowIds?: readonly number[]): SQL | undefine
 
 /** A page of bins; `lowIds`, when given, keeps only those bins (the ones the reorder rule calls low). */
 export function listBins(db: Executor, q: BinListQuery, lowIds?: readonly number[]): { rows: BinRow[]; total: number } {
-  const where = listFilter(q, lowIds);
-  const total = db.select({ n: count() }).from(bins).where(where).get()?.n ?? 0;
-  const rows = db
-    .select()
-    .from(bins)
-    .where(where)
-    .orderBy(asc(bins.code))
-    .limit(q.pageSize)
-    .offset((q.page - 1) * q.pageSize)
-    .all();
-  return { rows, total };
+  return pageOf(db, bins, listFilter(q, lowIds), asc(bins.code), q);
 }
 
 /** Every bin by supplier and code: the Restock list's order. */

@@ -25,34 +25,30 @@ import { parseInput } from '../../lib/validate';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { createBin, editBin, getBinForYou, getBinReorder, listBinPage, restockList } from './bins.service';
 import { count, draw, ledgerFor, move, receive, returnUnused, reverse, writeOff } from './ledger.service';
-import type { NameAssemblies } from './assembly-names';
-import type { ReordersOf } from './bin-reorders';
 import { readSlip, SLIP_UPLOAD, storeSlip } from './slips.service';
 
 const slipUpload = singleUpload(SLIP_UPLOAD);
 
 /**
  * /api/bins: the bins, their ledger, and the movements members and the quartermaster make by scan.
- * `runQueuedAction` (from the app) lets a phone replay a draw or return queued offline;
- * `nameAssemblies` (from the planning feature) names the assembly each ledger entry was for;
- * `reordersOf` (from the planning feature too) is the one reorder computation: what to order now.
+ * `runQueuedAction` (from the app) lets a phone replay a draw or return queued offline.
  */
-export function binsRouter({ runQueuedAction, nameAssemblies, reordersOf }: { runQueuedAction: RunQueuedAction; nameAssemblies: NameAssemblies; reordersOf: ReordersOf }) {
+export function binsRouter({ runQueuedAction }: { runQueuedAction: RunQueuedAction }) {
   const router = Router();
   const quartermaster = requireRole('quartermaster');
   const code = (params: unknown) => parseInput(binCodeParams, params, 'path').code;
   router.use(requireRole('member'));
 
   router.get('/', (req, res) => {
-    res.json(listBinPage(req.ctx, reordersOf, parseInput(binListQuerySchema, req.query, 'query')));
+    res.json(listBinPage(req.ctx, parseInput(binListQuerySchema, req.query, 'query')));
   });
 
   router.post('/', quartermaster, (req, res) => {
-    res.status(201).json(createBin(req.ctx, reordersOf, requireUser(req), parseInput(createBinBodySchema, req.body)));
+    res.status(201).json(createBin(req.ctx, requireUser(req), parseInput(createBinBodySchema, req.body)));
   });
 
   router.get('/restock', quartermaster, (req, res) => {
-    res.json({ data: restockList(req.ctx, reordersOf) });
+    res.json({ data: restockList(req.ctx) });
   });
 
   router.post('/slips', quartermaster, slipUpload.receive, (req, res) => {
@@ -71,11 +67,11 @@ export function binsRouter({ runQueuedAction, nameAssemblies, reordersOf }: { ru
   });
 
   router.get('/:code/reorder', (req, res) => {
-    res.json(getBinReorder(req.ctx, reordersOf, code(req.params)));
+    res.json(getBinReorder(req.ctx, code(req.params)));
   });
 
   router.patch('/:code', quartermaster, (req, res) => {
-    res.json(editBin(req.ctx, reordersOf, code(req.params), parseInput(updateBinBodySchema, req.body)));
+    res.json(editBin(req.ctx, code(req.params), parseInput(updateBinBodySchema, req.body)));
   });
 
   router.get('/:code/ledger', (req, res) => {
@@ -83,7 +79,7 @@ export function binsRouter({ runQueuedAction, nameAssemblies, reordersOf }: { ru
     const zone = readChapterTimeZone(req.ctx.db);
     const from = q.from ? startOfDayNamed(q.from, zone) : undefined;
     const to = q.to ? chapterDaySpan(q.to, q.to, zone).end : undefined;
-    res.json({ data: ledgerFor(req.ctx, nameAssemblies, requireUser(req), code(req.params), from, to, q.limit) });
+    res.json({ data: ledgerFor(req.ctx, requireUser(req), code(req.params), from, to, q.limit) });
   });
 
   router.post('/:code/draw', (req, res) =>

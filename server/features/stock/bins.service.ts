@@ -8,7 +8,8 @@ import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { parseInput } from '../../lib/validate';
 import { toBinDto, toBinFields } from './bin-dto';
-import { nothingToOrder, type ReordersOf } from './bin-reorders';
+import { binReorders } from '../planning/planning.reads';
+import { nothingToOrder } from './bin-reorders';
 import { allBinsBySupplier, findBinByCode, insertBins, lastCountedAt, listBins, nextBinCode, sameSpecBins, updateBin, updateBins, type NewBinRow } from './bins.repo';
 import { binOrThrow } from './ledger.service';
 import { insertMovements, netDrawnBy } from './ledger.repo';
@@ -21,21 +22,21 @@ function withCounts(ctx: ServiceContext, reorders: ReadonlyMap<number, BinReorde
 }
 
 /** A page of bins; "low only" means what the reorder rule calls low, as on Restock. */
-export function listBinPage(ctx: ServiceContext, reordersOf: ReordersOf, query: BinListQuery): BinList {
-  const reorders = reordersOf(ctx);
+export function listBinPage(ctx: ServiceContext, query: BinListQuery): BinList {
+  const reorders = binReorders(ctx);
   const lowIds = query.low ? [...reorders].filter(([, r]) => r.low).map(([id]) => id) : undefined;
   const { rows, total } = listBins(ctx.db, query, lowIds);
   return { data: withCounts(ctx, reorders, rows), meta: { total, page: query.page, pageSize: query.pageSize } };
 }
 
-export function getBin(ctx: ServiceContext, reordersOf: ReordersOf, code: string): Bin {
-  return withCounts(ctx, reordersOf(ctx), [binOrThrow(ctx.db, code)])[0]!;
+export function getBin(ctx: ServiceContext, code: string): Bin {
+  return withCounts(ctx, binReorders(ctx), [binOrThrow(ctx.db, code)])[0]!;
 }
 
 /** What the one reorder rule says of one bin now (the bin page reads it beside the scan answer). */
-export function getBinReorder(ctx: ServiceContext, reordersOf: ReordersOf, code: string): BinReorder {
+export function getBinReorder(ctx: ServiceContext, code: string): BinReorder {
   const bin = binOrThrow(ctx.db, code);
-  return reordersOf(ctx).get(bin.id) ?? nothingToOrder(bin.reorderPoint);
+  return binReorders(ctx).get(bin.id) ?? nothingToOrder(bin.reorderPoint);
 }
 
 /** The scan answer: hot, so it reads the bin's own row and the person's part only, never the forecast. */
@@ -68,8 +69,8 @@ const codeTaken = (code: string) =>
   new HttpError(409, 'BIN_CODE_TAKEN', `The code ${code} is already on another bin. Leave the code empty to get the next free one.`, [{ path: 'code', message: `${code} is taken.` }]);
 
 /** A new bin; opening stock becomes its first ledger entry, so on hand is the ledger's sum from the start. */
-export function createBin(ctx: ServiceContext, reordersOf: ReordersOf, actor: UserRow, input: CreateBinInput): Bin {
-  return getBin(ctx, reordersOf, insertNewBin(ctx, actor, input).code);
+export function createBin(ctx: ServiceContext, actor: UserRow, input: CreateBinInput): Bin {
+  return getBin(ctx, insertNewBin(ctx, actor, input).code);
 }
 
 /** Writes a new bin and its opening stock, and answers the bin as written. */
@@ -116,22 +117,22 @@ export function writeBinFields(ctx: ServiceContext, changes: readonly { id: numb
 }
 
 /** Changes the fields sent; on hand changes only through the ledger. The result must still be a valid bin of its kind. */
-export function editBin(ctx: ServiceContext, reordersOf: ReordersOf, code: string, change: UpdateBinBody): Bin {
+export function editBin(ctx: ServiceContext, code: string, change: UpdateBinBody): Bin {
   const bin = binOrThrow(ctx.db, code);
   const values = rowValues(change);
   const edited = { ...bin, ...values, ...gripRangeAfterEdit(bin, change) };
   parseInput(wholeBin, edited);
   const { gripMin, gripMax } = withGripRange(edited);
   updateBin(ctx.db, bin.id, { ...values, gripMin, gripMax, updatedAt: ctx.now() });
-  return getBin(ctx, reordersOf, code);
+  return getBin(ctx, code);
 }
 
 /** An edited bin must still be a valid bin of its kind (a rivet keeps its spec, a screw its name). */
 const wholeBin = z.looseObject({}).superRefine((b, ctx) => binKindRules(b, ctx));
 
 /** The quartermaster's Restock list: what the one reorder rule orders now, in whole packs, by supplier. */
-export function restockList(ctx: ServiceContext, reordersOf: ReordersOf): RestockItem[] {
-  const reorders = reordersOf(ctx);
+export function restockList(ctx: ServiceContext): RestockItem[] {
+  const reorders = binReorders(ctx);
   const rows = allBinsBySupplier(ctx.db).filter((b) => (reorders.get(b.id)?.toOrder ?? 0) > 0);
   return withCounts(ctx, reorders, rows).map((bin) => ({ ...bin, packsToOrder: bin.toOrder / bin.packSize }));
 }

@@ -12,7 +12,7 @@ import { findMovement, findPairedWith, findReversalOf, insertMovement, listMovem
 import { assemblyOwnerId } from '../planning/planning.reads';
 import { dollarsToE4, e4ToDollars, valueCents } from '@shared/stock/money';
 import { slipExists } from './slips.repo';
-import { withAssemblyNames, type NameAssemblies } from './assembly-names';
+import { withAssemblyNames } from './assembly-names';
 import { publish } from '../../events/domain-events';
 
 export function binOrThrow(db: Database, code: string): BinRow {
@@ -284,12 +284,12 @@ function masked(m: Movement): LedgerEntry {
 }
 
 /** A bin's ledger, newest first; a member sees others' entries masked (see ledgerEntrySchema). */
-export function ledgerFor(ctx: ServiceContext, nameAssemblies: NameAssemblies, viewer: UserRow, code: string, from?: Date, to?: Date, limit?: number): LedgerEntry[] {
+export function ledgerFor(ctx: ServiceContext, viewer: UserRow, code: string, from?: Date, to?: Date, limit?: number): LedgerEntry[] {
   const bin = binOrThrow(ctx.db, code);
   const entries = listMovements(ctx.db, { binId: bin.id, from, to, limit }).map(movementDto);
   const seesAll = hasRole(viewer.role, 'quartermaster');
   const shown = seesAll ? entries : entries.filter((m) => isOwnEntry(m, viewer));
-  const names = withAssemblyNames(ctx.db, nameAssemblies, shown);
+  const names = withAssemblyNames(ctx.db, shown);
   const full = new Map(names.map((e) => [e.id, { ...e, masked: false }]));
   return entries.map((m) => full.get(m.id) ?? masked(m));
 }

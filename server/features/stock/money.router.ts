@@ -2,14 +2,12 @@ import { Router } from 'express';
 import { recordPaymentBodySchema, spendQuerySchema, tabUserParams } from '@shared/schemas/stock-money';
 import { parseInput } from '../../lib/validate';
 import { requireRole, requireUser } from '../../middleware/auth';
-import type { NameAssemblies } from './assembly-names';
 import { chapterSpend, listTabs, readTab, recordPayment } from './money.service';
 
 /**
  * /api/stock: members' tabs for what they drew, their payments, and the chapter's consumable spend.
- * `nameAssemblies` (from the planning feature) names the assemblies on a tab.
  */
-export function stockMoneyRouter({ nameAssemblies }: { nameAssemblies: NameAssemblies }) {
+export function stockMoneyRouter() {
   const router = Router();
   // Guards sit on each route, not on the router: other routers share the /stock prefix.
   const member = requireRole('member');
@@ -17,7 +15,7 @@ export function stockMoneyRouter({ nameAssemblies }: { nameAssemblies: NameAssem
 
   router.get('/tab', member, (req, res) => {
     const me = requireUser(req);
-    res.json(readTab(req.ctx, nameAssemblies, me, me.id));
+    res.json(readTab(req.ctx, me, me.id));
   });
 
   router.get('/tabs', quartermaster, (req, res) => {
@@ -25,7 +23,7 @@ export function stockMoneyRouter({ nameAssemblies }: { nameAssemblies: NameAssem
   });
 
   router.get('/tabs/:userId', member, (req, res) => {
-    res.json(readTab(req.ctx, nameAssemblies, requireUser(req), parseInput(tabUserParams, req.params, 'path').userId));
+    res.json(readTab(req.ctx, requireUser(req), parseInput(tabUserParams, req.params, 'path').userId));
   });
 
   router.post('/payments', quartermaster, (req, res) => {

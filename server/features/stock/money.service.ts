@@ -12,7 +12,7 @@ import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { binDesignation } from '@shared/stock/fasteners';
 import { e4ToDollars, valueCents } from '@shared/stock/money';
 import { chapterMonth, chapterMonthStarts } from '@shared/time/chapter-time';
-import { namesFor, withNames, type NameAssemblies } from './assembly-names';
+import { namesFor, withNames } from './assembly-names';
 import {
   claimRefund,
   insertPayment,
@@ -80,7 +80,7 @@ function entryDto(r: TabEntryRow): Omit<TabEntry, 'assembly'> {
 }
 
 /** A member reads their own tab; the quartermaster and the lead read anyone's. */
-export function readTab(ctx: ServiceContext, nameAssemblies: NameAssemblies, viewer: UserRow, userId: number): Tab {
+export function readTab(ctx: ServiceContext, viewer: UserRow, userId: number): Tab {
   if (viewer.id !== userId && !hasRole(viewer.role, 'quartermaster')) {
     throw new HttpError(403, 'FORBIDDEN', 'You can read your own tab only. The quartermaster or the chapter lead can read anyone’s.');
   }
@@ -112,7 +112,7 @@ export function readTab(ctx: ServiceContext, nameAssemblies: NameAssemblies, vie
     .sort(([a], [b]) => (a ?? Infinity) - (b ?? Infinity))
     .map(([assemblyId, v]) => ({ assemblyId, ...v }));
   const recent = entries.slice(-RECENT_ENTRIES).reverse().map(entryDto);
-  const names = namesFor(ctx.db, nameAssemblies, byAssembly, recent);
+  const names = namesFor(ctx.db, byAssembly, recent);
 
   return {
     member: { id: member.id, name: member.name },

@@ -9,7 +9,6 @@ import { parseInput } from '../../lib/validate';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { commitImport, previewImport } from './bin-import.service';
 import { binsCsv, ledgerCsv, templateCsv } from './stock-export.service';
-import type { NameAssemblies } from './assembly-names';
 
 /** JSON-escaped quotes and line breaks make the body larger than the 2 MB of CSV it carries. */
 const IMPORT_BODY_LIMIT = '5mb';
@@ -47,7 +46,7 @@ function csvOf(req: Request): string {
  * /api/bins CSV import and export, mounted before the bins router (whose /:code would take
  * /export.csv). Every route guards itself: paths not matched here fall through to the bins router.
  */
-export function binCsvRouter({ nameAssemblies }: { nameAssemblies: NameAssemblies }) {
+export function binCsvRouter() {
   const router = Router();
   const quartermaster = requireRole('quartermaster');
 
@@ -69,7 +68,7 @@ export function binCsvRouter({ nameAssemblies }: { nameAssemblies: NameAssemblie
 
   router.get('/ledger.csv', quartermaster, (req, res) => {
     const range = parseInput(ledgerExportQuerySchema, req.query, 'query');
-    sendCsv(res, `gripline-ledger-${range.from}-to-${range.to}.csv`, ledgerCsv(req.ctx, nameAssemblies, range));
+    sendCsv(res, `gripline-ledger-${range.from}-to-${range.to}.csv`, ledgerCsv(req.ctx, range));
   });
 
   return router;

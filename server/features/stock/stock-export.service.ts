@@ -11,7 +11,7 @@ import { BIN_COLUMNS, binCell } from './bin-csv';
 import { ALL_BINS } from './bin-import-check';
 import { listBins } from './bins.repo';
 import { listMovements } from './ledger.repo';
-import type { NameAssemblies } from './assembly-names';
+import { assemblyNames } from '../planning/planning.reads';
 import { e4ToDollars, valueCents } from '@shared/stock/money';
 
 /** The export's columns are the import's, so a file exported from one chapter imports into another. */
@@ -32,14 +32,14 @@ const LEDGER_FIELDS = ['id', 'at', 'bin_code', 'designation', 'kind', 'quantity'
 const LEDGER_EXPORT_LIMIT = 500_000;
 
 /** Every ledger entry from the first day to the last, whole chapter days, oldest first. */
-export function ledgerCsv(ctx: ServiceContext, nameAssemblies: NameAssemblies, range: LedgerExportQuery): string {
+export function ledgerCsv(ctx: ServiceContext, range: LedgerExportQuery): string {
   const { start: from, end: to } = chapterDaySpan(range.from, range.to, readChapterTimeZone(ctx.db));
   const entries = listMovements(ctx.db, { from, to, limit: LEDGER_EXPORT_LIMIT + 1 });
   if (entries.length > LEDGER_EXPORT_LIMIT) {
     throw new HttpError(400, 'RANGE_TOO_LARGE', `More than ${LEDGER_EXPORT_LIMIT} ledger entries fall in that range. Export a shorter range.`);
   }
   const designations = new Map(listBins(ctx.db, ALL_BINS).rows.map((b) => [b.code, binDesignation(b)]));
-  const assemblies = nameAssemblies(
+  const assemblies = assemblyNames(
     ctx.db,
     entries.flatMap(({ m }) => (m.assemblyId === null ? [] : [m.assemblyId])),
   );

@@ -5,9 +5,12 @@
  */
 import { and, asc, count, eq, gte, inArray, lt, max, or, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
+import type { CatalogueBin } from '@shared/schemas/offline';
+import { binDesignation } from '@shared/stock/fasteners';
 import { RIVET_KINDS } from '@shared/stock/kinds';
 import type { Executor } from '../../db/client';
 import { bins, stockMovements, type BinRow } from '../../db/schema/stock';
+import { netDrawnPerBin } from './ledger.repo';
 import { refundByProviderId } from './money.repo';
 
 /** A bin as stock keeps it; other features read it, only stock writes it. */
@@ -111,6 +114,22 @@ export function weeklyConsumption(db: Executor, from: Date, to: Date, weekMs: nu
     )
     .groupBy(stockMovements.binId, week)
     .all();
+}
+
+// ---- for offline ----
+
+/** Every bin, as a phone keeps it for offline use, with what this member may return unused to each: two queries. */
+export function catalogueBins(db: Executor, memberId: number): CatalogueBin[] {
+  const drawn = netDrawnPerBin(db, memberId);
+  return allBins(db).map((bin) => ({
+    code: bin.code,
+    kind: bin.kind,
+    designation: binDesignation(bin),
+    location: bin.location,
+    unit: bin.unit,
+    onHand: bin.onHand,
+    drawnByYou: drawn.get(bin.id) ?? 0,
+  }));
 }
 
 // ---- for the demo seed ----

@@ -3,10 +3,15 @@
  * loans, holds, tool events, photos, sign-offs and their requests, missing accessories, loan
  * reminders). Another feature imports this file and nothing else of tools.
  */
-import { and, eq, inArray, notInArray } from 'drizzle-orm';
+import { and, asc, eq, inArray, ne, notInArray } from 'drizzle-orm';
+import type { CatalogueTool } from '@shared/schemas/offline';
 import type { ToolCategory } from '@shared/tools/categories';
-import type { Executor } from '../../db/client';
+import type { Database, Executor } from '../../db/client';
 import { holds, tools } from '../../db/schema/tools';
+import { accessoryList } from './missing-accessories';
+import { listActiveGrants } from './signoffs.repo';
+import { effectiveLoanDays, toolIdentity } from './tool-dto';
+import { loadToolExtras } from './tools.repo';
 
 // for planning
 
@@ -54,4 +59,33 @@ export function toolNamesByCode(db: Executor, codes: readonly string[]): Map<str
   if (unique.length === 0) return new Map();
   const rows = db.select({ code: tools.code, name: tools.name }).from(tools).where(inArray(tools.code, unique)).all();
   return new Map(rows.map((r) => [r.code, r.name]));
+}
+
+// for offline
+
+/** Every tool a scan may find (all but retired ones), as a phone keeps it for offline use: four queries in all (no photo ids). */
+export function catalogueTools(db: Database): CatalogueTool[] {
+  const rows = db.select().from(tools).where(ne(tools.status, 'retired')).orderBy(asc(tools.code)).all();
+  const extras = loadToolExtras(db, rows, { withPhotos: false });
+  return rows.map((row) => {
+    const loan = extras.loans.get(row.id);
+    return {
+      ...toolIdentity(row),
+      accessories: JSON.parse(row.accessories) as string[],
+      loanDays: effectiveLoanDays(row),
+      requiredSignoffId: row.requiredSignoffId,
+      requiredSignoffName: row.requiredSignoffId !== null ? (extras.signoffNames.get(row.requiredSignoffId) ?? null) : null,
+      holder: loan ? { id: loan.holderId, name: loan.holderName } : null,
+      dueAt: loan ? loan.dueAt.toISOString() : null,
+      accessoriesOut: loan ? accessoryList(loan.accessoriesOut) : null,
+      heldFor: row.status === 'held' ? (extras.holds.get(row.id)?.offeredTo ?? null) : null,
+      traySize: row.traySize,
+      trayCapacity: row.trayCapacity,
+    };
+  });
+}
+
+/** The sign-offs a person holds now (not revoked). */
+export function signoffIdsOf(db: Executor, userId: number): number[] {
+  return listActiveGrants(db, { userId }).map((g) => g.signoffId);
 }

@@ -1,6 +1,7 @@
 import { and, asc, count, eq, inArray, isNull, like, lte, or, sql, type SQL } from 'drizzle-orm';
 import type { ToolListQuery } from '@shared/schemas/tools';
 import type { Database, Executor } from '../../db/client';
+import { pageOf } from '../../db/page-of';
 import { preparedPerDatabase } from '../../db/prepared';
 import { signoffs } from '../../db/schema/signoffs';
 import { holds, loans, photos, tools } from '../../db/schema/tools';
@@ -53,17 +54,7 @@ function listFilter(q: ToolListQuery): SQL | undefined {
 }
 
 export function listTools(db: Executor, q: ToolListQuery): { rows: ToolRow[]; total: number } {
-  const where = listFilter(q);
-  const total = db.select({ n: count() }).from(tools).where(where).get()?.n ?? 0;
-  const rows = db
-    .select()
-    .from(tools)
-    .where(where)
-    .orderBy(asc(tools.code))
-    .limit(q.pageSize)
-    .offset((q.page - 1) * q.pageSize)
-    .all();
-  return { rows, total };
+  return pageOf(db, tools, listFilter(q), asc(tools.code), q);
 }
 
 export interface ToolExtras {

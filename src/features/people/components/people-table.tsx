@@ -1,9 +1,9 @@
 import { useMemo } from 'react';
 import { ROLE_LABELS, ROLES } from '@shared/roles';
 import type { Person } from '@shared/schemas/people';
-import { DataTable } from '@/components/ui/data-table';
 import { SelectField, TextField } from '@/components/ui/field';
 import { filterOptions } from '@/components/ui/filter-options';
+import { FilteredTable } from '@/components/ui/filtered-list';
 import { useListTable } from '@/components/ui/use-list-table';
 import { peopleColumns } from './people-columns';
 
@@ -27,10 +27,7 @@ export function PeopleTable({ people, selfId }: { people: Person[]; selfId: numb
         <SelectField label="Role" options={ROLE_FILTER} value={filterValue('role')} onChange={(e) => setFilter('role', e.target.value)} />
         <SelectField label="Status" options={STATUS_FILTER} value={filterValue('status')} onChange={(e) => setFilter('status', e.target.value)} />
       </div>
-      <p className="text-sm text-steel" aria-live="polite">
-        Showing {list.shown} of {people.length} people
-      </p>
-      <DataTable table={list.table} caption="People of the chapter" empty="Nobody matches these filters." />
+      <FilteredTable list={list} total={people.length} noun="people" caption="People of the chapter" empty="Nobody matches these filters." />
     </div>
   );
 }

@@ -2,9 +2,9 @@ import { useMemo } from 'react';
 import type { Bin } from '@shared/schemas/bins';
 import { BLIND_GRIP_RANGES } from '@shared/stock/fasteners';
 import { BIN_KIND_LABELS, BIN_KINDS } from '@shared/stock/kinds';
-import { DataTable } from '@/components/ui/data-table';
 import { SelectField, TextField } from '@/components/ui/field';
 import { distinctOptions, filterOptions } from '@/components/ui/filter-options';
+import { FilteredTable, FilterPanel } from '@/components/ui/filtered-list';
 import { useListTable } from '@/components/ui/use-list-table';
 import { diameterText, gripDashText } from '../utils/format';
 import { binColumns, type SpecFilter } from './bin-columns';
@@ -37,22 +37,14 @@ export function BinTable({ bins }: { bins: Bin[] }) {
         <input type="checkbox" className="size-5 accent-ink" checked={lowOnly} onChange={(e) => setFilter('onHand', e.target.checked ? 'low' : '')} />
         Low stock only
       </label>
-      <details className="rounded-lg border border-rule bg-card px-3" open={activeFilters > 0 || undefined}>
-        <summary className="flex min-h-12 cursor-pointer items-center font-semibold">
-          Filter by kind, size, material or shelf{activeFilters > 0 ? ` (${activeFilters} on)` : ''}
-        </summary>
-        <div className="grid gap-3 pb-3 sm:grid-cols-3">
-          <SelectField label="Kind" options={KIND_FILTER} value={filterValue('kind')} onChange={(e) => setFilter('kind', e.target.value)} />
-          <SelectField label="Diameter" options={DIAMETER_FILTER} value={spec.diameter32 ?? ''} onChange={(e) => setSpec('diameter32', e.target.value)} />
-          <SelectField label="Grip dash" hint="Blind rivets only." options={GRIP_FILTER} value={spec.grip16 ?? ''} onChange={(e) => setSpec('grip16', e.target.value)} />
-          <SelectField label="Material" options={materials} value={spec.material ?? ''} onChange={(e) => setSpec('material', e.target.value)} />
-          <SelectField label="Shelf" options={locations} value={filterValue('location')} onChange={(e) => setFilter('location', e.target.value)} />
-        </div>
-      </details>
-      <p className="text-sm text-steel" aria-live="polite">
-        Showing {list.shown} of {bins.length} bins
-      </p>
-      <DataTable table={list.table} caption="Bins on the shelves" empty="No bin matches these filters." />
+      <FilterPanel summary="Filter by kind, size, material or shelf" active={activeFilters}>
+        <SelectField label="Kind" options={KIND_FILTER} value={filterValue('kind')} onChange={(e) => setFilter('kind', e.target.value)} />
+        <SelectField label="Diameter" options={DIAMETER_FILTER} value={spec.diameter32 ?? ''} onChange={(e) => setSpec('diameter32', e.target.value)} />
+        <SelectField label="Grip dash" hint="Blind rivets only." options={GRIP_FILTER} value={spec.grip16 ?? ''} onChange={(e) => setSpec('grip16', e.target.value)} />
+        <SelectField label="Material" options={materials} value={spec.material ?? ''} onChange={(e) => setSpec('material', e.target.value)} />
+        <SelectField label="Shelf" options={locations} value={filterValue('location')} onChange={(e) => setFilter('location', e.target.value)} />
+      </FilterPanel>
+      <FilteredTable list={list} total={bins.length} noun="bins" caption="Bins on the shelves" empty="No bin matches these filters." />
     </div>
   );
 }

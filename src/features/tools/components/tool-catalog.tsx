@@ -1,9 +1,9 @@
 import { useMemo } from 'react';
 import { CATEGORY_LABELS, STATUS_LABELS, TOOL_CATEGORIES, TOOL_STATUSES } from '@shared/tools/categories';
 import type { Tool } from '@shared/schemas/tools';
-import { DataTable } from '@/components/ui/data-table';
 import { SelectField, TextField } from '@/components/ui/field';
 import { distinctOptions, filterOptions } from '@/components/ui/filter-options';
+import { FilteredTable, FilterPanel } from '@/components/ui/filtered-list';
 import { useListTable } from '@/components/ui/use-list-table';
 import { toolColumns } from './tool-columns';
 
@@ -21,20 +21,12 @@ export function ToolCatalog({ tools }: { tools: Tool[] }) {
   return (
     <div className="flex flex-col gap-3">
       <TextField label="Search code or name" {...list.searchProps} />
-      <details className="rounded-lg border border-rule bg-card px-3" open={activeFilters > 0 || undefined}>
-        <summary className="flex min-h-12 cursor-pointer items-center font-semibold">
-          Filter by kind, state or place{activeFilters > 0 ? ` (${activeFilters} on)` : ''}
-        </summary>
-        <div className="grid gap-3 pb-3 sm:grid-cols-3">
-          <SelectField label="Kind" options={CATEGORY_FILTER} value={filterValue('category')} onChange={(e) => setFilter('category', e.target.value)} />
-          <SelectField label="State" options={STATUS_FILTER} value={filterValue('status')} onChange={(e) => setFilter('status', e.target.value)} />
-          <SelectField label="Place" options={locations} value={filterValue('location')} onChange={(e) => setFilter('location', e.target.value)} />
-        </div>
-      </details>
-      <p className="text-sm text-steel" aria-live="polite">
-        Showing {list.shown} of {tools.length} tools
-      </p>
-      <DataTable table={list.table} caption="Tools in the crib" empty="No tool matches these filters." />
+      <FilterPanel summary="Filter by kind, state or place" active={activeFilters}>
+        <SelectField label="Kind" options={CATEGORY_FILTER} value={filterValue('category')} onChange={(e) => setFilter('category', e.target.value)} />
+        <SelectField label="State" options={STATUS_FILTER} value={filterValue('status')} onChange={(e) => setFilter('status', e.target.value)} />
+        <SelectField label="Place" options={locations} value={filterValue('location')} onChange={(e) => setFilter('location', e.target.value)} />
+      </FilterPanel>
+      <FilteredTable list={list} total={tools.length} noun="tools" caption="Tools in the crib" empty="No tool matches these filters." />
     </div>
   );
 }

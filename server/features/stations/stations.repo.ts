@@ -1,4 +1,5 @@
 import { and, asc, eq, gte, isNull } from 'drizzle-orm';
+import { users } from '../../db/schema/users';
 import type { Executor } from '../../db/client';
 import { stationPinFailures, stations, type StationRow } from '../../db/schema/stations';
 
@@ -6,9 +7,14 @@ export function insertStation(db: Executor, values: { name: string; tokenHash: s
   return db.insert(stations).values({ name: values.name, tokenHash: values.tokenHash, enrolledById: values.enrolledById, enrolledAt: values.at }).returning().get();
 }
 
-/** Every station, enrolled first first, revoked ones included (the page shows them as revoked). */
-export function listStations(db: Executor): StationRow[] {
-  return db.select().from(stations).orderBy(asc(stations.enrolledAt), asc(stations.id)).all();
+/** Every station, enrolled first first, revoked ones included (the page shows them as revoked), with who enrolled it. */
+export function listStations(db: Executor): { station: StationRow; enrolledBy: string }[] {
+  return db
+    .select({ station: stations, enrolledBy: users.name })
+    .from(stations)
+    .innerJoin(users, eq(users.id, stations.enrolledById))
+    .orderBy(asc(stations.enrolledAt), asc(stations.id))
+    .all();
 }
 
 export function findStation(db: Executor, id: number): StationRow | undefined {

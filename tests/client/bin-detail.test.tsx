@@ -50,6 +50,7 @@ const entry = (over: Partial<LedgerEntry> & Pick<LedgerEntry, 'id' | 'kind' | 'q
   reversedById: null,
   otherBinCode: null,
   slipId: null,
+  station: null,
   masked: false,
   ...over,
 });

@@ -69,7 +69,9 @@ describe('signing in at a station', () => {
     const events = (await qm.agent.get(`/api/tools/${tool.code}/events`).expect(200)).body.data as { action: string; station: string | null }[];
     expect(events.find((e) => e.action === 'checked_out')?.station).toBe('Crib door');
     expect(events.find((e) => e.action === 'added')?.station).toBeNull();
-    await door.browser.post(`/api/tools/${tool.code}/return`).expect(200);
+    await door.browser.post(`/api/tools/${tool.code}/return`, { condition: 'ok' }).expect(200);
+    const after = (await qm.agent.get(`/api/tools/${tool.code}/events`).expect(200)).body.data as { action: string; station: string | null }[];
+    expect(after.find((e) => e.action === 'returned')?.station).toBe('Crib door');
   });
 
   test('a draw at the station records the station on the ledger line', async ({ door, qm }) => {

@@ -152,6 +152,19 @@ describe('wrong PINs', () => {
   });
 });
 
+describe('wrong PINs sent at once', () => {
+  test('are checked one after another, so a burst cannot try more than five', async ({ t, door, crew }) => {
+    await door.browser.signIn(door.badge, '0000');
+    const burst = await Promise.all(['1111', '2222', '3333', '4444', '5555', '6666', '7777'].map((pin) => door.browser.post('/api/station/sign-in', { badge: door.badge, pin })));
+    const codes = burst.map((r) => (r.body as { error?: { code: string } }).error?.code ?? String(r.status));
+    expect(codes.filter((c) => c === 'WRONG_PIN')).toHaveLength(3);
+    expect(codes.filter((c) => c === 'BADGE_LOCKED')).toHaveLength(4);
+    const failures = t.db.$client.prepare('select count(*) as n from station_pin_failures where badge_id = (select id from badges where user_id = ?)').get(crew.member.id) as { n: number };
+    expect(failures.n).toBe(5);
+    expect((await door.browser.signIn(door.badge, '4827')).status).toBe(429);
+  });
+});
+
 describe('the station session ends', () => {
   test('after 60 s without a request, by the app clock', async ({ door, advance }) => {
     await door.browser.signIn(door.badge, '4827');

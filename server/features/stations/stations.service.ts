@@ -7,6 +7,7 @@ import type { ServiceContext } from '../../context';
 import type { StationRow } from '../../db/schema/stations';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
+import { oneAtATime } from '../../lib/one-at-a-time';
 import { findStation, findWorkingStation, insertStation, listStations, pinFailuresSince, recordPinFailure, revokeStation } from './stations.repo';
 
 const LOCK_MS = STATION_LOCK_MINUTES * 60_000;
@@ -77,6 +78,8 @@ const locked = (until: Date, now: Date) => {
   );
 };
 
+const pinChecks = oneAtATime();
+
 /**
  * Checks a badge and PIN at a station. Wrong PINs are counted per badge per station; the lock
  * touches nothing else (the person's own sign-in, or the badge at another station).
@@ -86,17 +89,20 @@ export async function checkStationSignIn(ctx: ServiceContext, token: string | un
   const found = findWorkingBadge(ctx.db, hashLinkToken(badgeToken));
   if (!found) throw new HttpError(401, 'BADGE_NOT_RECOGNISED', 'This badge is not recognised: it may have been reprinted. Ask a quartermaster for a new one.');
   const { badge, user } = found;
-  const until = lockedUntil(ctx, station.id, badge.id, ctx.now());
-  if (until) throw locked(until, ctx.now());
-  if (user.pinHash === null) throw new HttpError(401, 'NO_PIN', 'You have no PIN yet: set one on your profile, then scan your badge again.');
-  if (await verifyPin(user, pin)) return { station, user };
+  // Attempts for one badge at one station are checked in turn: a burst cannot try more PINs than the lock allows.
+  return pinChecks(`${station.id}:${badge.id}`, async () => {
+    const until = lockedUntil(ctx, station.id, badge.id, ctx.now());
+    if (until) throw locked(until, ctx.now());
+    if (user.pinHash === null) throw new HttpError(401, 'NO_PIN', 'You have no PIN yet: set one on your profile, then scan your badge again.');
+    if (await verifyPin(user, pin)) return { station, user };
 
-  const now = ctx.now();
-  recordPinFailure(ctx.db, station.id, badge.id, now);
-  const lockNow = lockedUntil(ctx, station.id, badge.id, now);
-  if (lockNow) throw locked(lockNow, now);
-  const left = STATION_PIN_TRIES - pinFailuresSince(ctx.db, station.id, badge.id, new Date(now.getTime() - LOCK_MS)).count;
-  throw new HttpError(401, 'WRONG_PIN', `That PIN is not right: ${left} ${left === 1 ? 'try' : 'tries'} left before this badge is locked here for ${STATION_LOCK_MINUTES} minutes.`);
+    const now = ctx.now();
+    recordPinFailure(ctx.db, station.id, badge.id, now);
+    const lockNow = lockedUntil(ctx, station.id, badge.id, now);
+    if (lockNow) throw locked(lockNow, now);
+    const left = STATION_PIN_TRIES - pinFailuresSince(ctx.db, station.id, badge.id, new Date(now.getTime() - LOCK_MS)).count;
+    throw new HttpError(401, 'WRONG_PIN', `That PIN is not right: ${left} ${left === 1 ? 'try' : 'tries'} left before this badge is locked here for ${STATION_LOCK_MINUTES} minutes.`);
+  });
 }
 
 export type StationCheck = { ok: true; station: StationRow } | { ok: false; error: HttpError };

@@ -83,6 +83,24 @@ describe('signing in at a station', () => {
     expect(ledger.find((e) => e.kind !== 'draw')?.station).toBeNull();
   });
 
+  test('the next badge scanned replaces the person at the station', async ({ t, door, crew }) => {
+    const leadBadge = await issueBadge(t, crew.lead.id, crew.quartermaster.id, '99887766');
+    await door.browser.signIn(door.badge, '4827');
+    const next = await door.browser.signIn(leadBadge, '99887766');
+    expect(next.status).toBe(200);
+    expect(stationSessionSchema.parse((await door.browser.get('/api/station/session').expect(200)).body).user.email).toBe('lead@example.org');
+    // Still a station session: the lead's own powers stay on the lead's own device.
+    expect((await door.browser.get('/api/users')).body.error.code).toBe('STATION_SCOPE');
+  });
+
+  test('names an unknown field and a PIN that is not 4 to 8 digits', async ({ door }) => {
+    const extra = await door.browser.signIn(door.badge, '4827').then(() => door.browser.post('/api/station/sign-in', { badge: door.badge, pin: '4827', remember: true }));
+    expect(extra.status).toBe(400);
+    expect(extra.body.error.issues).toEqual([{ path: 'remember', message: 'Unknown field "remember".' }]);
+    const short = await door.browser.post('/api/station/sign-in', { badge: door.badge, pin: '12' });
+    expect(short.body.error.issues).toEqual([{ path: 'pin', message: 'A PIN is 4 to 8 digits.' }]);
+  });
+
   test('refuses an unknown or missing station token, and a badge nobody holds', async ({ t, door }) => {
     const stranger = stationBrowser(t, 'not-a-station-token');
     expect((await stranger.signIn(door.badge, '4827')).body.error.code).toBe('STATION_NOT_ENROLLED');

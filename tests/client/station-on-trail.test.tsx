@@ -4,6 +4,7 @@ import type { LedgerEntry } from '@shared/schemas/bins';
 import type { ToolEvent } from '@shared/schemas/tools';
 import { LedgerList } from '@/features/stock/components/ledger-list';
 import { ToolHistory } from '@/features/tools/components/tool-history';
+import { ledgerEntryFixture } from '../helpers/bin-fixture';
 import { fakeFetch, renderWithProviders } from '../helpers/render';
 
 const MEMBER = { id: 2, name: 'Ruth Lindqvist' };
@@ -19,27 +20,8 @@ const event = (id: number, station: string | null): ToolEvent => ({
   station,
 });
 
-const drawn = (id: number, station: string | null): LedgerEntry => ({
-  id,
-  binCode: 'B-0107',
-  at: '2026-11-20T15:00:00.000Z',
-  kind: 'draw',
-  quantity: -20,
-  balanceAfter: 100,
-  unitCost: 0.13,
-  valueCents: -260,
-  actor: MEMBER,
-  station,
-  member: MEMBER,
-  assemblyId: null,
-  assembly: null,
-  note: '',
-  reversesId: null,
-  reversedById: null,
-  otherBinCode: null,
-  slipId: null,
-  masked: false,
-});
+const drawn = (id: number, station: string | null): LedgerEntry =>
+  ledgerEntryFixture(MEMBER, { id, kind: 'draw', quantity: -20, balanceAfter: 100, member: MEMBER, station });
 
 describe('what was done at a crib station', () => {
   it('the tool history says at which station, and nothing for an entry made elsewhere', async () => {

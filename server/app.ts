@@ -29,6 +29,7 @@ import { overdueRouter } from './features/tools/overdue.router';
 import { serviceDueRouter } from './features/tools/service-due.router';
 import { photosRouter, toolPhotosRouter } from './features/tools/photos.router';
 import { signoffsRouter } from './features/tools/signoffs.router';
+import { stationSessionRouter, stationsRouter } from './features/stations/stations.router';
 import { toolsRouter } from './features/tools/tools.router';
 import { certificateRouter } from './lan/certificate.router';
 import { todayRouter } from './today/today.router';
@@ -39,6 +40,7 @@ import { compressJson } from './middleware/compress-json';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { signInLimiters } from './middleware/rate-limit';
 import { sessionMiddleware } from './middleware/session';
+import { stationSession } from './middleware/station-session';
 import { wellFormedPath } from './middleware/well-formed-path';
 import { clientStatic } from './static/client-static';
 import { installReactions } from './events/reactions';
@@ -96,6 +98,8 @@ export function createApp(config: AppConfig) {
   api.use('/health', healthRouter());
   api.use(session);
   api.use(loadUser(config.db));
+  // A station session answers only the station's own list of requests.
+  api.use(stationSession);
   // CSV imports may be large: only a signed-in quartermaster's body is read past the usual limit.
   api.use('/bins/import', requireRole('quartermaster'), binImportBodyParsers());
   api.use(express.json({ limit: '100kb' }));
@@ -104,6 +108,8 @@ export function createApp(config: AppConfig) {
   api.use('/auth/password-reset', passwordResetRouter());
   api.use('/invitations', invitationsRouter());
   api.use('/users', peopleRouter());
+  api.use('/stations', stationsRouter());
+  api.use('/station', stationSessionRouter());
   api.use('/mail', mailRouter(config.catchingMail));
   api.use('/reference', referenceRouter());
   api.use('/tools', toolPhotosRouter());

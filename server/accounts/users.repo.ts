@@ -50,6 +50,11 @@ export function setPasswordHash(db: Executor, id: number, passwordHash: string):
   db.update(users).set({ passwordHash }).where(eq(users.id, id)).run();
 }
 
+/** The person's crib station PIN, as an argon2id hash; null clears it. */
+export function setPinHash(db: Executor, id: number, pinHash: string | null): void {
+  db.update(users).set({ pinHash }).where(eq(users.id, id)).run();
+}
+
 /** The length unit a person types rivet lines in. */
 export function setPreferredUnit(db: Executor, id: number, preferredUnit: UserRow['preferredUnit']): UserRow | undefined {
   return db.update(users).set({ preferredUnit }).where(eq(users.id, id)).returning().get();

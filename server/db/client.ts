@@ -6,6 +6,7 @@ import { drizzle, type BetterSQLite3Database } from 'drizzle-orm/better-sqlite3'
 import { migrate } from 'drizzle-orm/better-sqlite3/migrator';
 import type { BaseSQLiteDatabase } from 'drizzle-orm/sqlite-core';
 import * as accountTokens from './schema/account-tokens';
+import * as badges from './schema/badges';
 import * as builds from './schema/builds';
 import * as cribJobs from './schema/crib-jobs';
 import * as idempotency from './schema/idempotency';
@@ -14,11 +15,12 @@ import * as payments from './schema/payments';
 import * as sessions from './schema/sessions';
 import * as signoffRequests from './schema/signoff-requests';
 import * as signoffs from './schema/signoffs';
+import * as stations from './schema/stations';
 import * as stock from './schema/stock';
 import * as tools from './schema/tools';
 import * as users from './schema/users';
 
-export const schema = { ...users, ...accountTokens, ...sessions, ...mail, ...signoffs, ...tools, ...signoffRequests, ...cribJobs, ...stock, ...builds, ...idempotency, ...payments };
+export const schema = { ...users, ...accountTokens, ...sessions, ...mail, ...signoffs, ...tools, ...signoffRequests, ...cribJobs, ...stock, ...builds, ...idempotency, ...payments, ...badges, ...stations };
 export type Database = BetterSQLite3Database<typeof schema> & { $client: BetterSqlite3.Database };
 /** The database or a transaction on it: what repositories take. */
 export type Executor = BaseSQLiteDatabase<'sync', BetterSqlite3.RunResult, typeof schema>;

@@ -7,6 +7,8 @@ export class HttpError extends Error {
     readonly code: string,
     message: string,
     readonly issues?: ErrorIssue[],
+    /** Headers the answer carries too (Retry-After on a lock). */
+    readonly headers?: Record<string, string>,
   ) {
     super(message);
     this.name = 'HttpError';

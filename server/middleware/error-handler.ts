@@ -24,6 +24,7 @@ interface ParserError {
 /** The one error handler, registered last: known errors keep their status; anything else is a logged 500. */
 export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next) => {
   if (err instanceof HttpError) {
+    if (err.headers) res.set(err.headers);
     res.status(err.status).json(httpErrorBody(err));
     return;
   }

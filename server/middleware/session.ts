@@ -5,6 +5,9 @@ import { SqliteSessionStore } from '../session/sqlite-store';
 declare module 'express-session' {
   interface SessionData {
     userId?: number;
+    /** Set for a station session: the station it was opened at, and its last request (epoch ms). */
+    stationId?: number;
+    stationActiveAt?: number;
   }
 }
 

@@ -385,6 +385,8 @@ export const movementSchema = z.object({
   unitCost: z.number(),
   valueCents: z.number(),
   actor: person,
+  /** The crib station it was done at ("at Crib door"), or null. */
+  station: z.string().nullable(),
   /** Draws and returns: whose tab it goes on. */
   member: person.nullable(),
   assemblyId: z.number().nullable(),

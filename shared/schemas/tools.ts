@@ -237,6 +237,8 @@ export const toolEventSchema = z.object({
   fromStatus: z.string().nullable(),
   toStatus: z.string().nullable(),
   detail: z.string(),
+  /** The crib station it was done at ("at Crib door"), or null. */
+  station: z.string().nullable(),
 });
 export type ToolEvent = z.infer<typeof toolEventSchema>;
 

@@ -8,7 +8,7 @@ import { ScanRoute } from '@/app/routes/app/scan';
 import { authKeys } from '@/features/auth/api/keys';
 import { setCsrfToken } from '@/lib/api-client';
 import { assemblyFixture } from '../helpers/assembly-fixture';
-import { binFixture } from '../helpers/bin-fixture';
+import { binFixture, ledgerEntryFixture } from '../helpers/bin-fixture';
 import { fakeFetch, renderRoutes, testQueryClient, type FakeCall } from '../helpers/render';
 
 type Role = 'member' | 'quartermaster';
@@ -36,23 +36,7 @@ function binFor(role: Role, over: Partial<BinForYou['forYou']> = {}, onHand = 12
   };
 }
 
-const entry = (over: Partial<LedgerEntry> & Pick<LedgerEntry, 'id' | 'kind' | 'quantity' | 'balanceAfter'>): LedgerEntry => ({
-  binCode: 'B-0107',
-  at: '2026-11-20T15:00:00.000Z',
-  unitCost: 0.13,
-  valueCents: Math.round(over.quantity * 13),
-  actor: PEOPLE.quartermaster,
-  member: null,
-  assemblyId: null,
-  assembly: null,
-  note: '',
-  reversesId: null,
-  reversedById: null,
-  otherBinCode: null,
-  slipId: null,
-  masked: false,
-  ...over,
-});
+const entry = (over: Partial<LedgerEntry> & Pick<LedgerEntry, 'id' | 'kind' | 'quantity' | 'balanceAfter'>): LedgerEntry => ledgerEntryFixture(PEOPLE.quartermaster, over);
 
 /** Newest first, as the server sends it. */
 const LEDGER: LedgerEntry[] = [

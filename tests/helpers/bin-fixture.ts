@@ -1,4 +1,4 @@
-import type { Bin, RestockItem } from '@shared/schemas/bins';
+import type { Bin, LedgerEntry, RestockItem } from '@shared/schemas/bins';
 import { binGripRange, fastenerDesignation } from '@shared/stock/fasteners';
 
 let nextId = 1;
@@ -50,4 +50,26 @@ export function binFixture(code: string, over: Partial<Bin> = {}): Bin {
 /** A Restock line: the numbers the server works out are given, so a test reads them as data. */
 export function restockFixture(code: string, over: Partial<RestockItem> & Pick<RestockItem, 'toOrder' | 'packsToOrder' | 'orderCostCents'>): RestockItem {
   return { ...binFixture(code, { onHand: 20, reorderPoint: 100, ...over }), ...over };
+}
+
+/** A ledger entry on B-0107 at $0.13 each, as GET /api/bins/:code/ledger sends it, made by `actor`, at no station. */
+export function ledgerEntryFixture(actor: { id: number; name: string }, over: Partial<LedgerEntry> & Pick<LedgerEntry, 'id' | 'kind' | 'quantity' | 'balanceAfter'>): LedgerEntry {
+  return {
+    binCode: 'B-0107',
+    at: '2026-11-20T15:00:00.000Z',
+    unitCost: 0.13,
+    valueCents: Math.round(over.quantity * 13),
+    actor,
+    member: null,
+    assemblyId: null,
+    assembly: null,
+    note: '',
+    reversesId: null,
+    reversedById: null,
+    otherBinCode: null,
+    slipId: null,
+    station: null,
+    masked: false,
+    ...over,
+  };
 }

@@ -47,6 +47,8 @@ const GETS = (): string[] => [
   '/api/invitations',
   `/api/invitations/by-token/${'x'.repeat(43)}`,
   '/api/users',
+  '/api/stations',
+  '/api/station/session',
   '/api/mail',
   '/api/mail/mine',
   '/api/reference/drills',

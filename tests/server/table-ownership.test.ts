@@ -16,6 +16,7 @@ const SCHEMA_DIR = 'server/db/schema';
 const TABLE_OWNERS: Record<string, string> = {
   users: 'server/accounts',
   accountTokens: 'server/accounts',
+  badges: 'server/accounts',
   tools: 'server/features/tools',
   loans: 'server/features/tools',
   holds: 'server/features/tools',
@@ -41,6 +42,8 @@ const TABLE_OWNERS: Record<string, string> = {
   jobRuns: 'server/jobs',
   idempotencyKeys: 'server/features/idempotency',
   sessions: 'server/session',
+  stations: 'server/features/stations',
+  stationPinFailures: 'server/features/stations',
 };
 
 /** Tables any server file may import to read (names on lists); writes stay in the owner. */

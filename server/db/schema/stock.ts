@@ -2,6 +2,7 @@ import { sql } from 'drizzle-orm';
 import { blob, check, index, integer, real, sqliteTable, text, uniqueIndex, type AnySQLiteColumn } from 'drizzle-orm/sqlite-core';
 import { BIN_KINDS, MOVEMENT_KINDS, RIVET_HEADS } from '@shared/stock/kinds';
 import { PAYMENT_METHODS } from '@shared/schemas/payment-methods';
+import { stations } from './stations';
 import { users } from './users';
 
 const nowMs = sql`(cast(unixepoch('subsec') * 1000 as integer))`;
@@ -97,6 +98,8 @@ export const stockMovements = sqliteTable(
     /** Transfers: the entry on the other bin. */
     pairedId: integer(),
     slipId: integer().references(() => stockSlips.id),
+    /** Made at a crib station (by `actorId`, signed in there with badge and PIN); null elsewhere. */
+    stationId: integer().references(() => stations.id),
   },
   (t) => [
     index('stock_movements_bin_idx').on(t.binId, t.at),

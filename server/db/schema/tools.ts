@@ -2,6 +2,7 @@ import { sql } from 'drizzle-orm';
 import { blob, check, index, integer, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
 import { RIVET_SIZED_CATEGORIES, TOOL_CATEGORIES, TOOL_STATUSES } from '@shared/tools/categories';
 import { signoffs } from './signoffs';
+import { stations } from './stations';
 import { users } from './users';
 
 const nowMs = sql`(cast(unixepoch('subsec') * 1000 as integer))`;
@@ -131,6 +132,8 @@ export const toolEvents = sqliteTable(
     fromStatus: text(),
     toStatus: text(),
     detail: text().notNull().default(''),
+    /** Taken at a crib station (by `actorId`, signed in there with badge and PIN); null elsewhere. */
+    stationId: integer().references(() => stations.id),
   },
   (t) => [index('tool_events_tool_idx').on(t.toolId, t.at)],
 );

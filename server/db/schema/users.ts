@@ -12,6 +12,8 @@ export const users = sqliteTable(
     phone: text(),
     /** How this person types rivet line lengths: inches or millimetres. */
     preferredUnit: text({ enum: ['in', 'mm'] }).notNull().default('in'),
+    /** The crib station PIN (4–8 digits), as an argon2id hash like the password; null when none is set. */
+    pinHash: text(),
     /** Set when the lead deactivates the person; they keep their history but cannot sign in. */
     deactivatedAt: integer({ mode: 'timestamp_ms' }),
     createdAt: integer({ mode: 'timestamp_ms' })

@@ -6,6 +6,7 @@ import { insertRows } from '../../db/bulk-write';
 import { preparedPerDatabase } from '../../db/prepared';
 import { bins, stockMovements, type MovementRow } from '../../db/schema/stock';
 import { users } from '../../db/schema/users';
+import { stationNames } from '../stations/stations.reads';
 
 export type NewMovementRow = typeof stockMovements.$inferInsert;
 
@@ -90,7 +91,7 @@ export interface LedgerFilter {
 
 /** Ledger entries with the names around them, newest first. */
 export function listMovements(db: Executor, f: LedgerFilter) {
-  return db
+  const rows = db
     .select({
       m: stockMovements,
       binCode: bins.code,
@@ -116,5 +117,7 @@ export function listMovements(db: Executor, f: LedgerFilter) {
     .orderBy(desc(stockMovements.at), desc(stockMovements.id))
     .limit(f.limit ?? 500)
     .all();
+  const stations = stationNames(db, rows.map((r) => r.m.stationId));
+  return rows.map((r) => ({ ...r, stationName: r.m.stationId !== null ? (stations.get(r.m.stationId) ?? null) : null }));
 }
 export type LedgerRow = ReturnType<typeof listMovements>[number];

@@ -44,7 +44,8 @@ interface Entry {
  * The one way stock changes: appends an entry and moves the bin's balance with it, in the caller's
  * transaction. A change that would leave the bin below zero is refused before anything is written.
  */
-function post(db: Executor, bin: BinRow, e: Entry, refusal: string): MovementRow {
+function post(ctx: ServiceContext, bin: BinRow, e: Entry, refusal: string): MovementRow {
+  const db = ctx.db;
   const balanceAfter = bin.onHand + e.quantity;
   if (balanceAfter < 0) throw insufficient(bin, -e.quantity, refusal);
   const row = insertMovement(db, {
@@ -56,6 +57,8 @@ function post(db: Executor, bin: BinRow, e: Entry, refusal: string): MovementRow
     at: e.at,
     arrivedAt: e.arrivedAt ?? e.at,
     actorId: e.actor.id,
+    // The crib station the person acted at, if any.
+    stationId: ctx.station?.id ?? null,
     memberId: e.memberId ?? null,
     assemblyId: e.assemblyId ?? null,
     note: e.note ?? '',
@@ -93,6 +96,7 @@ export function movementDto(r: LedgerRow): Movement {
     reversedById: r.reversedById,
     otherBinCode: r.otherBinCode,
     slipId: m.slipId,
+    station: r.stationName,
   };
 }
 
@@ -125,7 +129,7 @@ export function draw(ctx: ServiceContext, actor: UserRow, code: string, body: Dr
     const bin = binOrThrow(ctx.db, code);
     checkOwnAssembly(ctx.db, actor, body.assemblyId);
     const times = memberTimes(ctx, performedAt);
-    return post(ctx.db, bin, { kind: 'draw', quantity: -body.quantity, actor, ...times, memberId: actor.id, assemblyId: body.assemblyId, note: body.note }, 'draw').id;
+    return post(ctx, bin, { kind: 'draw', quantity: -body.quantity, actor, ...times, memberId: actor.id, assemblyId: body.assemblyId, note: body.note }, 'draw').id;
   });
   return loadMovement(ctx, id);
 }
@@ -140,7 +144,7 @@ export function returnUnused(ctx: ServiceContext, actor: UserRow, code: string, 
       throw new HttpError(409, 'RETURN_EXCEEDS_DRAWN', `You can return at most ${drawn} to ${bin.code}: that is what you drew from it and have not returned.`);
     }
     const times = memberTimes(ctx, performedAt);
-    return post(ctx.db, bin, { kind: 'return_unused', quantity: body.quantity, actor, ...times, memberId: actor.id, assemblyId: body.assemblyId, note: body.note }, 'return').id;
+    return post(ctx, bin, { kind: 'return_unused', quantity: body.quantity, actor, ...times, memberId: actor.id, assemblyId: body.assemblyId, note: body.note }, 'return').id;
   });
   return loadMovement(ctx, id);
 }
@@ -158,7 +162,7 @@ export function receive(ctx: ServiceContext, actor: UserRow, code: string, body:
     const at = ctx.now();
     const unitCostE4 = body.unitCost !== undefined ? dollarsToE4(body.unitCost) : bin.unitCostE4;
     if (unitCostE4 !== bin.unitCostE4) Object.assign(bin, updateBin(ctx.db, bin.id, { unitCostE4, updatedAt: at }));
-    const row = post(ctx.db, bin, { kind: 'receive', quantity: body.quantity, actor, at, unitCostE4, note: body.note, slipId: body.slipId }, 'receive');
+    const row = post(ctx, bin, { kind: 'receive', quantity: body.quantity, actor, at, unitCostE4, note: body.note, slipId: body.slipId }, 'receive');
     publish(ctx, { type: 'stock.received', binId: bin.id, quantity: body.quantity, movementId: row.id, at });
     return row.id;
   });
@@ -171,7 +175,7 @@ export function count(ctx: ServiceContext, actor: UserRow, code: string, body: C
     const bin = binOrThrow(ctx.db, code);
     const before = bin.onHand;
     const variance = body.counted - before;
-    const row = post(ctx.db, bin, { kind: 'count', quantity: variance, actor, at: ctx.now(), note: body.note }, 'count');
+    const row = post(ctx, bin, { kind: 'count', quantity: variance, actor, at: ctx.now(), note: body.note }, 'count');
     return { id: row.id, before, variance, unitCostE4: row.unitCostE4 };
   });
   return {
@@ -194,8 +198,8 @@ export function move(ctx: ServiceContext, actor: UserRow, code: string, body: Mo
     }
     const at = ctx.now();
     const note = body.note ?? '';
-    const out = post(ctx.db, from, { kind: 'transfer_out', quantity: -body.quantity, actor, at, note }, 'move');
-    post(ctx.db, to, { kind: 'transfer_in', quantity: body.quantity, actor, at, note, unitCostE4: from.unitCostE4, pairedId: out.id }, 'move');
+    const out = post(ctx, from, { kind: 'transfer_out', quantity: -body.quantity, actor, at, note }, 'move');
+    post(ctx, to, { kind: 'transfer_in', quantity: body.quantity, actor, at, note, unitCostE4: from.unitCostE4, pairedId: out.id }, 'move');
     return out.id;
   });
   return loadMovement(ctx, id);
@@ -205,7 +209,7 @@ export function move(ctx: ServiceContext, actor: UserRow, code: string, body: Mo
 export function writeOff(ctx: ServiceContext, actor: UserRow, code: string, body: WriteOffBody): Movement {
   const id = inTransaction(ctx, () => {
     const bin = binOrThrow(ctx.db, code);
-    return post(ctx.db, bin, { kind: 'write_off', quantity: -body.quantity, actor, at: ctx.now(), note: body.note }, 'write off').id;
+    return post(ctx, bin, { kind: 'write_off', quantity: -body.quantity, actor, at: ctx.now(), note: body.note }, 'write off').id;
   });
   return loadMovement(ctx, id);
 }
@@ -227,7 +231,7 @@ export function reverse(ctx: ServiceContext, actor: UserRow, code: string, entry
       if (findReversalOf(ctx.db, target.id)) throw new HttpError(409, 'ALREADY_REVERSED', `Entry ${target.id} has already been reversed.`);
       checkNoReturnAgainst(ctx.db, target);
       return post(
-        ctx.db,
+        ctx,
         targetBin,
         { kind: 'reversal', quantity: -target.quantity, actor, at, unitCostE4: target.unitCostE4, memberId: target.memberId, assemblyId: target.assemblyId, note: body.note, reversesId: target.id },
         'reverse',

@@ -19,7 +19,7 @@ import {
   withdrawOffer,
 } from './holds.repo';
 import { refuseWithoutSignoff } from './signoffs.service';
-import { recordToolEvent } from './tool-events.repo';
+import { actedBy, recordToolEvent } from './tool-events.repo';
 import { moveTool, type ToolStateEvent } from './tool-state';
 import { findActiveHold, findToolByCode, findToolById, openLoanHolderId, queuePosition, type ToolRow } from './tools.repo';
 
@@ -76,7 +76,7 @@ export function placeHold(ctx: ServiceContext, user: UserRow, code: string, opti
     if (tool.status === 'available' && !from) return setAside(ctx, tool, user, now);
     const hold = insertHold(ctx.db, { toolId: tool.id, userId: user.id, createdAt: now, startsAt: from ?? null });
     const when = from ? ` from ${dayInWords(from, readChapterTimeZone(ctx.db), now)}` : '';
-    recordToolEvent(ctx.db, { toolId: tool.id, actorId: user.id, at: now, action: 'hold_placed', detail: `${user.name} joined the queue${when}` });
+    recordToolEvent(ctx.db, { toolId: tool.id, ...actedBy(ctx, user), at: now, action: 'hold_placed', detail: `${user.name} joined the queue${when}` });
     return { id: hold.id, code: tool.code, status: hold.status, position: queuePosition(ctx.db, tool.id, hold.id), startsAt: from?.toISOString() ?? null };
   });
 }
@@ -84,7 +84,7 @@ export function placeHold(ctx: ServiceContext, user: UserRow, code: string, opti
 function setAside(ctx: ServiceContext, tool: ToolRow, user: UserRow, now: Date) {
   const until = offerEnds(ctx, now);
   const hold = insertHold(ctx.db, { toolId: tool.id, userId: user.id, createdAt: now, status: 'offered', offeredAt: now, offerExpiresAt: until });
-  moveTool(ctx.db, tool, 'offer', { actorId: user.id, at: now, detail: `Set aside for ${user.name} until ${momentInWords(until, readChapterTimeZone(ctx.db))}` });
+  moveTool(ctx.db, tool, 'offer', { ...actedBy(ctx, user), at: now, detail: `Set aside for ${user.name} until ${momentInWords(until, readChapterTimeZone(ctx.db))}` });
   return { id: hold.id, code: tool.code, status: hold.status, position: 1, startsAt: null };
 }
 
@@ -96,7 +96,7 @@ export function cancelHold(ctx: ServiceContext, user: UserRow, code: string): vo
     const hold = findActiveHold(ctx.db, tool.id, user.id);
     if (!hold) throw new HttpError(404, 'HOLD_NOT_FOUND', `You have no hold on ${tool.code}.`);
     closeHold(ctx.db, hold.id, 'cancelled', now);
-    recordToolEvent(ctx.db, { toolId: tool.id, actorId: user.id, at: now, action: 'hold_cancelled', detail: `${user.name} left the queue` });
+    recordToolEvent(ctx.db, { toolId: tool.id, ...actedBy(ctx, user), at: now, action: 'hold_cancelled', detail: `${user.name} left the queue` });
     if (hold.status === 'offered') releaseHeldTool(ctx, tool.id, now);
   });
 }

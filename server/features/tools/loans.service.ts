@@ -1,4 +1,5 @@
 import type { CheckoutBody, Loan, ReturnBody } from '@shared/schemas/tools';
+import { actedBy } from './tool-events.repo';
 import { hasRole } from '@shared/roles';
 import { dayInWords, loanDueAt } from '@shared/time/chapter-time';
 import { DAY_MS } from '@shared/time/durations';
@@ -94,7 +95,7 @@ export function checkOut(ctx: ServiceContext, user: UserRow, code: string, body:
       throw err;
     }
     moveTool(ctx.db, tool, 'check_out', {
-      actorId: user.id,
+      ...actedBy(ctx, user),
       at,
       now,
       detail: `Due ${dayInWords(due, zone, at)}`,
@@ -219,9 +220,9 @@ export function returnTool(ctx: ServiceContext, user: UserRow, code: string, bod
     let status: ToolRow['status'];
     let offeredTo: ReturnResult['offeredTo'] = null;
     if (body.condition === 'needs_attention') {
-      status = moveTool(ctx.db, tool, 'return_needs_attention', { actorId: user.id, at, now, detail, note: body.note ?? 'Needs attention' }).status;
+      status = moveTool(ctx.db, tool, 'return_needs_attention', { ...actedBy(ctx, user), at, now, detail, note: body.note ?? 'Needs attention' }).status;
     } else {
-      const back = moveTool(ctx.db, tool, 'return', { actorId: user.id, at, now, detail });
+      const back = moveTool(ctx.db, tool, 'return', { ...actedBy(ctx, user), at, now, detail });
       const offer = s.anyoneWaiting.get({ toolId: tool.id }) ? offerToNextInQueue(ctx, { ...tool, status: back.status }, now) : undefined;
       status = offer ? 'held' : back.status;
       offeredTo = offer ? { id: offer.userId, name: offer.name } : null;

@@ -6,7 +6,7 @@ import { preparedPerDatabase } from '../../db/prepared';
 import { loans, missingAccessories, tools } from '../../db/schema/tools';
 import { users, type UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
-import { recordToolEvent } from './tool-events.repo';
+import { actedBy, recordToolEvent } from './tool-events.repo';
 import { loanStatements } from './loans.repo';
 
 /**
@@ -105,7 +105,7 @@ export function resolveMissingAccessory(ctx: ServiceContext, actor: UserRow, cod
     }
     recordToolEvent(ctx.db, {
       toolId: tool.id,
-      actorId: actor.id,
+      ...actedBy(ctx, actor),
       at: now,
       action: body.resolution === 'found' ? 'accessory_found' : 'accessory_replaced',
       detail: `${body.accessory} ${body.resolution === 'found' ? 'found' : 'replaced'}`,

@@ -6,7 +6,7 @@ import { HttpError } from '../../lib/http-error';
 import type { UploadedFile, UploadRules } from '../../lib/upload-rules';
 import { processPhoto } from './photo-image';
 import { deletePhotoRow, findPhotoBytes, findPhotoInfo, insertPhoto } from './photos.repo';
-import { recordToolEvent } from './tool-events.repo';
+import { actedBy, recordToolEvent } from './tool-events.repo';
 import { findToolByCode, openLoanHolderId, type ToolRow } from './tools.repo';
 
 /**
@@ -51,7 +51,7 @@ export async function addPhoto(ctx: ServiceContext, user: UserRow, code: string,
     const { id } = insertPhoto(ctx.db, { toolId: tool.id, uploadedById: user.id, createdAt: now, ...processed });
     recordToolEvent(ctx.db, {
       toolId: tool.id,
-      actorId: user.id,
+      ...actedBy(ctx, user),
       at: now,
       action: 'photo_added',
       detail: purpose === 'on_loan' ? `Photo ${id} added by ${user.name} while on loan` : `Photo ${id} added`,
@@ -72,7 +72,7 @@ export function removePhoto(ctx: ServiceContext, user: UserRow, id: number): voi
     const photo = findPhotoInfo(ctx.db, id);
     if (!photo) throw new HttpError(404, 'PHOTO_NOT_FOUND', `There is no photo ${id}; it may have been removed already.`);
     deletePhotoRow(ctx.db, id);
-    recordToolEvent(ctx.db, { toolId: photo.toolId, actorId: user.id, at: now, action: 'photo_removed', detail: `Photo ${id} removed` });
+    recordToolEvent(ctx.db, { toolId: photo.toolId, ...actedBy(ctx, user), at: now, action: 'photo_removed', detail: `Photo ${id} removed` });
   });
 }
 

@@ -73,6 +73,8 @@ export interface ToolInState {
 
 export interface ToolMove {
   actorId: number | null;
+  /** The crib station the person acted at, if any. */
+  stationId?: number | null;
   /** When it happened (a queued offline action: when it was done). */
   at: Date;
   /** When it is recorded; the tool's updatedAt. Defaults to `at`. */
@@ -95,7 +97,7 @@ const statements = preparedPerDatabase((db: Database) => ({
     .prepare(),
   insertEvent: db
     .insert(toolEvents)
-    .values({ toolId: p('toolId'), actorId: p('actorId'), at: p('at'), action: p('action'), fromStatus: p('fromStatus'), toStatus: p('toStatus'), detail: p('detail') })
+    .values({ toolId: p('toolId'), actorId: p('actorId'), stationId: p('stationId'), at: p('at'), action: p('action'), fromStatus: p('fromStatus'), toStatus: p('toStatus'), detail: p('detail') })
     .prepare(),
 }));
 
@@ -126,6 +128,6 @@ export function moveTool(db: Database, tool: ToolInState, event: ToolStateEvent,
     updatedAt: (move.now ?? move.at).getTime(),
   });
   if (changed.changes !== 1) throw new HttpError(409, 'WRONG_STATE', `${tool.code} changed meanwhile; look again and retry.`);
-  s.insertEvent.run({ toolId: tool.id, actorId: move.actorId, at: move.at, action: rule.action, fromStatus: tool.status, toStatus: rule.to, detail: move.detail });
+  s.insertEvent.run({ toolId: tool.id, actorId: move.actorId, stationId: move.stationId ?? null, at: move.at, action: rule.action, fromStatus: tool.status, toStatus: rule.to, detail: move.detail });
   return { ...tool, status: rule.to };
 }

@@ -3,7 +3,7 @@ import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { endHoldsForToolOutOfUse, offerToNextInQueue } from './holds.service';
 import { closeLoanOfLostTool } from './loans.repo';
-import { recordToolEvent } from './tool-events.repo';
+import { actedBy, recordToolEvent } from './tool-events.repo';
 import { moveTool, refusalOf, type ToolStateEvent } from './tool-state';
 import { findToolByCode, updateTool } from './tools.repo';
 
@@ -35,10 +35,10 @@ export function changeToolStatus(ctx: ServiceContext, actor: UserRow, code: stri
     if (refusal) throw new HttpError(409, 'WRONG_STATE', refusal);
     if (event === 'mark_lost' && tool.status === 'on_loan') closeLoanOfLostTool(ctx.db, tool.id, now, actor.id, note);
     if (event === 'take_out_of_service' || event === 'mark_lost' || event === 'retire') endHoldsForToolOutOfUse(ctx, tool, event, now);
-    const moved = moveTool(ctx.db, tool, event, { actorId: actor.id, at: now, detail: note });
+    const moved = moveTool(ctx.db, tool, event, { ...actedBy(ctx, actor), at: now, detail: note });
     if (serviced) {
       updateTool(ctx.db, tool.id, { lastServiceAt: now });
-      recordToolEvent(ctx.db, { toolId: tool.id, actorId: actor.id, at: now, action: 'serviced', detail: note });
+      recordToolEvent(ctx.db, { toolId: tool.id, ...actedBy(ctx, actor), at: now, action: 'serviced', detail: note });
     }
     const offer = moved.status === 'available' ? offerToNextInQueue(ctx, { ...tool, status: moved.status }, now) : undefined;
     return { toolCode: tool.code, status: offer ? 'held' : moved.status };

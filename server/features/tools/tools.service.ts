@@ -8,7 +8,7 @@ import { HttpError } from '../../lib/http-error';
 import { readChapterTimeZone } from '../../settings/chapter-time-zone';
 import { loanStatements } from './loans.repo';
 import { signOffAdvice } from './signoffs.service';
-import { listToolEvents, recordToolEvent } from './tool-events.repo';
+import { listToolEvents, actedBy, recordToolEvent } from './tool-events.repo';
 import { toTool } from './tool-dto';
 import { heldWords, loanWords } from '@shared/tools/tool-words';
 import {
@@ -139,7 +139,7 @@ export function createTool(ctx: ServiceContext, actor: UserRow, input: CreateToo
       createdAt: now,
       updatedAt: now,
     });
-    recordToolEvent(ctx.db, { toolId: created.id, actorId: actor.id, at: now, action: 'added', toStatus: 'available', detail: `Added as ${created.name}` });
+    recordToolEvent(ctx.db, { toolId: created.id, ...actedBy(ctx, actor), at: now, action: 'added', toStatus: 'available', detail: `Added as ${created.name}` });
     return created;
   });
   return getTool(ctx, row.code);
@@ -164,7 +164,7 @@ export function editTool(ctx: ServiceContext, actor: UserRow, code: string, chan
       throw new HttpError(400, 'VALIDATION_FAILED', `The tool would not be valid: ${issues.map((i) => i.message).join(' ')}`, issues);
     }
     updateTool(ctx.db, row.id, { ...toRowValues(change), updatedAt: now });
-    recordToolEvent(ctx.db, { toolId: row.id, actorId: actor.id, at: now, action: 'edited', detail: `Changed ${Object.keys(change).join(', ')}` });
+    recordToolEvent(ctx.db, { toolId: row.id, ...actedBy(ctx, actor), at: now, action: 'edited', detail: `Changed ${Object.keys(change).join(', ')}` });
   });
   return getTool(ctx, code);
 }

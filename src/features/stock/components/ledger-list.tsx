@@ -102,6 +102,7 @@ function LedgerItem({ code, entry: m, isQuartermaster }: { code: string; entry: 
       </div>
       <p className="text-sm text-steel">
         #{m.id} · {formatDateTime(m.at)} · {whoWords(m)}
+        {m.station && ` at ${m.station}`}
         {m.assembly && ` for ${formatAssembly(m.assembly)}`}
         {m.unitCost !== null && ` · at ${formatUnitCost(m.unitCost)}`}
       </p>

@@ -49,6 +49,7 @@ export function ToolHistory({ code }: { code: string }) {
             </p>
             <p className="text-sm text-steel">
               {formatDateTime(e.at)} · {e.actor?.name ?? 'Gripline'}
+              {e.station && ` at ${e.station}`}
             </p>
             {e.detail && <p className="text-sm">{e.detail}</p>}
           </li>

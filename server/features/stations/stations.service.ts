@@ -1,0 +1,126 @@
+import type { EnrolledStation, EnrolStationBody, Station } from '@shared/schemas/stations';
+import { STATION_IDLE_SECONDS, STATION_LOCK_MINUTES, STATION_PIN_TRIES } from '@shared/schemas/stations';
+import { findWorkingBadge } from '../../accounts/badges.repo';
+import { hashLinkToken, newLinkToken } from '../../accounts/link-tokens';
+import { verifyPin } from '../../accounts/pins';
+import type { ServiceContext } from '../../context';
+import type { StationRow } from '../../db/schema/stations';
+import type { UserRow } from '../../db/schema/users';
+import { HttpError } from '../../lib/http-error';
+import { oneAtATime } from '../../lib/one-at-a-time';
+import { findStation, findWorkingStation, insertStation, listStations, pinFailuresSince, recordPinFailure, revokeStation } from './stations.repo';
+
+const LOCK_MS = STATION_LOCK_MINUTES * 60_000;
+const IDLE_MS = STATION_IDLE_SECONDS * 1000;
+
+const toStation = (row: StationRow, enrolledBy: string): Station => ({
+  id: row.id,
+  name: row.name,
+  enrolledAt: row.enrolledAt.toISOString(),
+  enrolledBy,
+  revokedAt: row.revokedAt?.toISOString() ?? null,
+});
+
+/** Enrols a device as a station; its token is answered once and only its hash is kept. */
+export function enrolStation(ctx: ServiceContext, actor: UserRow, body: EnrolStationBody): EnrolledStation {
+  const stationToken = newLinkToken();
+  const row = insertStation(ctx.db, { name: body.name, tokenHash: hashLinkToken(stationToken), enrolledById: actor.id, at: ctx.now() });
+  return { id: row.id, name: row.name, stationToken };
+}
+
+export function stationList(ctx: ServiceContext): Station[] {
+  return listStations(ctx.db).map((r) => toStation(r.station, r.enrolledBy));
+}
+
+export function revokeStationById(ctx: ServiceContext, actor: UserRow, id: number): Station {
+  const revoked = ctx.db.transaction((tx) => {
+    const existing = findStation(tx, id);
+    if (!existing) throw new HttpError(404, 'STATION_NOT_FOUND', `There is no station ${id}.`);
+    const row = revokeStation(tx, id, actor.id, ctx.now());
+    if (!row) throw new HttpError(409, 'STATION_REVOKED', `${existing.name} was already revoked.`);
+    return row;
+  });
+  return stationList(ctx).find((s) => s.id === revoked.id)!;
+}
+
+const notEnrolled = () =>
+  new HttpError(401, 'STATION_NOT_ENROLLED', 'This device is not an enrolled station (or it was revoked). Ask a quartermaster to enrol it.');
+
+/** The working station holding this token; 401 STATION_NOT_ENROLLED when missing, unknown or revoked. */
+export function stationOfToken(ctx: ServiceContext, token: string | undefined): StationRow {
+  const station = token ? findWorkingStation(ctx.db, hashLinkToken(token)) : undefined;
+  if (!station) throw notEnrolled();
+  return station;
+}
+
+/**
+ * When the badge's lock at this station ends, or null when it is not locked: STATION_PIN_TRIES wrong
+ * PINs within STATION_LOCK_MINUTES lock it for STATION_LOCK_MINUTES from the last of them.
+ */
+function lockedUntil(ctx: ServiceContext, stationId: number, badgeId: number, now: Date): Date | null {
+  const recent = pinFailuresSince(ctx.db, stationId, badgeId, new Date(now.getTime() - LOCK_MS));
+  if (recent.latest === null) return null;
+  const run = pinFailuresSince(ctx.db, stationId, badgeId, new Date(recent.latest.getTime() - LOCK_MS));
+  if (run.count < STATION_PIN_TRIES) return null;
+  const until = new Date(recent.latest.getTime() + LOCK_MS);
+  return until > now ? until : null;
+}
+
+const locked = (until: Date, now: Date) => {
+  const seconds = Math.max(1, Math.ceil((until.getTime() - now.getTime()) / 1000));
+  const minutes = Math.ceil(seconds / 60);
+  return new HttpError(
+    429,
+    'BADGE_LOCKED',
+    `Too many wrong PINs: this badge is locked at this station for ${minutes} more minute${minutes === 1 ? '' : 's'}. Your own sign-in elsewhere still works.`,
+    undefined,
+    { 'Retry-After': String(seconds) },
+  );
+};
+
+const pinChecks = oneAtATime();
+
+/**
+ * Checks a badge and PIN at a station. Wrong PINs are counted per badge per station; the lock
+ * touches nothing else (the person's own sign-in, or the badge at another station).
+ */
+export async function checkStationSignIn(ctx: ServiceContext, token: string | undefined, badgeToken: string, pin: string): Promise<{ station: StationRow; user: UserRow }> {
+  const station = stationOfToken(ctx, token);
+  const found = findWorkingBadge(ctx.db, hashLinkToken(badgeToken));
+  if (!found) throw new HttpError(401, 'BADGE_NOT_RECOGNISED', 'This badge is not recognised: it may have been reprinted. Ask a quartermaster for a new one.');
+  const { badge, user } = found;
+  // Attempts for one badge at one station are checked in turn: a burst cannot try more PINs than the lock allows.
+  return pinChecks(`${station.id}:${badge.id}`, async () => {
+    const until = lockedUntil(ctx, station.id, badge.id, ctx.now());
+    if (until) throw locked(until, ctx.now());
+    if (user.pinHash === null) throw new HttpError(401, 'NO_PIN', 'You have no PIN yet: set one on your profile, then scan your badge again.');
+    if (await verifyPin(user, pin)) return { station, user };
+
+    const now = ctx.now();
+    recordPinFailure(ctx.db, station.id, badge.id, now);
+    const lockNow = lockedUntil(ctx, station.id, badge.id, now);
+    if (lockNow) throw locked(lockNow, now);
+    const left = STATION_PIN_TRIES - pinFailuresSince(ctx.db, station.id, badge.id, new Date(now.getTime() - LOCK_MS)).count;
+    throw new HttpError(401, 'WRONG_PIN', `That PIN is not right: ${left} ${left === 1 ? 'try' : 'tries'} left before this badge is locked here for ${STATION_LOCK_MINUTES} minutes.`);
+  });
+}
+
+export type StationCheck = { ok: true; station: StationRow } | { ok: false; error: HttpError };
+
+/**
+ * Whether a station session may go on with this request: its station token must be the station's
+ * own and still enrolled, and it must not have been idle for STATION_IDLE_SECONDS.
+ */
+export function checkStationSession(ctx: ServiceContext, session: { stationId: number; activeAt: number }, token: string | undefined): StationCheck {
+  const station = token ? findWorkingStation(ctx.db, hashLinkToken(token)) : undefined;
+  if (!station || station.id !== session.stationId) return { ok: false, error: notEnrolled() };
+  if (idleSecondsLeft(ctx, session.activeAt) <= 0) return { ok: false, error: sessionEnded() };
+  return { ok: true, station };
+}
+
+/** Seconds before an idle station session ends, counted from its last request. */
+export function idleSecondsLeft(ctx: ServiceContext, activeAt: number): number {
+  return Math.ceil((activeAt + IDLE_MS - ctx.now().getTime()) / 1000);
+}
+
+export const sessionEnded = () => new HttpError(401, 'STATION_SESSION_ENDED', 'The station session has ended. Scan your badge to start again.');

@@ -1,45 +1,33 @@
 import { valuesOf } from '../words/labelled-values';
 
-/** What a tool is, with its words. */
-export const CATEGORY_LABELS = {
-  hand_rivet_puller: 'Hand rivet puller',
-  pneumatic_rivet_puller: 'Pneumatic rivet puller',
-  air_drill: 'Air drill',
-  rivet_gun: 'Rivet gun',
-  bucking_bar: 'Bucking bar',
-  drill_bit: 'Drill bit',
-  countersink_cutter: '100° countersink cutter',
-  dimple_dies: '100° dimple dies',
-  temporary_fastener_tray: 'Temporary fastener tray',
-  deburring_tool: 'Deburring tool',
-  spacing_fan: 'Rivet spacing fan',
-  torque_wrench: 'Torque wrench',
-  measuring: 'Measuring tool',
-  other: 'Other',
-} as const;
-export type ToolCategory = keyof typeof CATEGORY_LABELS;
-export const TOOL_CATEGORIES = valuesOf(CATEGORY_LABELS);
-
 /**
- * Default loan period in days per category (chapter practice, editable per tool): powered and
- * calibrated tools come back sooner so others can use them; bits and hand tools follow a project.
+ * Every tool category, one row each: its words, and its default loan period in days (chapter practice,
+ * editable per tool): powered and calibrated tools come back sooner so others can use them; bits and
+ * hand tools follow a project.
  */
-export const DEFAULT_LOAN_DAYS: Record<ToolCategory, number> = {
-  hand_rivet_puller: 14,
-  pneumatic_rivet_puller: 7,
-  air_drill: 7,
-  rivet_gun: 7,
-  bucking_bar: 14,
-  drill_bit: 14,
-  countersink_cutter: 14,
-  dimple_dies: 14,
-  temporary_fastener_tray: 14,
-  deburring_tool: 14,
-  spacing_fan: 14,
-  torque_wrench: 3,
-  measuring: 7,
-  other: 7,
-};
+const CATEGORIES = {
+  hand_rivet_puller: { label: 'Hand rivet puller', loanDays: 14 },
+  pneumatic_rivet_puller: { label: 'Pneumatic rivet puller', loanDays: 7 },
+  air_drill: { label: 'Air drill', loanDays: 7 },
+  rivet_gun: { label: 'Rivet gun', loanDays: 7 },
+  bucking_bar: { label: 'Bucking bar', loanDays: 14 },
+  drill_bit: { label: 'Drill bit', loanDays: 14 },
+  countersink_cutter: { label: '100° countersink cutter', loanDays: 14 },
+  dimple_dies: { label: '100° dimple dies', loanDays: 14 },
+  temporary_fastener_tray: { label: 'Temporary fastener tray', loanDays: 14 },
+  deburring_tool: { label: 'Deburring tool', loanDays: 14 },
+  spacing_fan: { label: 'Rivet spacing fan', loanDays: 14 },
+  torque_wrench: { label: 'Torque wrench', loanDays: 3 },
+  measuring: { label: 'Measuring tool', loanDays: 7 },
+  other: { label: 'Other', loanDays: 7 },
+} as const satisfies Record<string, { label: string; loanDays: number }>;
+export type ToolCategory = keyof typeof CATEGORIES;
+export const TOOL_CATEGORIES = valuesOf(CATEGORIES);
+
+const column = <K extends 'label' | 'loanDays'>(key: K) =>
+  Object.fromEntries(TOOL_CATEGORIES.map((c) => [c, CATEGORIES[c][key]])) as Record<ToolCategory, (typeof CATEGORIES)[ToolCategory][K]>;
+export const CATEGORY_LABELS: Record<ToolCategory, string> = column('label');
+export const DEFAULT_LOAN_DAYS: Record<ToolCategory, number> = column('loanDays');
 
 /** Categories made for one rivet size: the tool records the size (a countersink cutter also its pilot drill). */
 export const RIVET_SIZED_CATEGORIES = ['countersink_cutter', 'dimple_dies'] as const satisfies readonly ToolCategory[];

@@ -45,6 +45,12 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
       lazy: async () => ({ Component: (await import('./routes/auth/reset-password')).ResetPasswordConfirmRoute }),
     },
     {
+      // The crib station: full screen, outside the signed-in app, loaded only on a station.
+      path: '/station',
+      ErrorBoundary: RouteError,
+      lazy: async () => ({ Component: (await import('./routes/station')).StationRoute }),
+    },
+    {
       path: '/invite/:token',
       lazy: async () => ({ Component: (await import('./routes/auth/accept-invitation')).AcceptInvitationRoute }),
     },

@@ -1,12 +1,12 @@
 import { useQuery, useQueryClient } from '@tanstack/react-query';
-import { useCallback, useEffect, useState } from 'react';
+import { useCallback, useEffect, useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { toast } from 'sonner';
 import { STATION_IDLE_SECONDS } from '@shared/schemas/stations';
 import { useOffline } from '@/features/offline/connection';
 import { forgetStation, readKeptStation, type KeptStation } from '@/features/stations/api/kept-station';
 import { endStationSession, endsStationSession, useStationSignIn } from '@/features/stations/api/station-session';
-import { BadgeEntry } from '@/features/stations/components/badge-entry';
+import { ScanEntry } from '@/features/stations/components/scan-entry';
 import { IdleCountdown } from '@/features/stations/components/idle-countdown';
 import { PinPad } from '@/features/stations/components/pin-pad';
 import { afterRefusedSignIn, NO_LABEL_YET, type StationStep } from '@/features/stations/hooks/station-steps';
@@ -15,9 +15,8 @@ import { binQueryOptions } from '@/features/stock/api/get-bins';
 import { BinActionsPanel } from '@/features/stock/components/bin-actions-panel';
 import { toolQueryOptions } from '@/features/tools/api/get-tool';
 import { CameraScanner } from '@/features/tools/components/camera-scanner';
-import { CodeEntry } from '@/features/tools/components/code-entry';
 import { ToolActionsPanel } from '@/features/tools/components/tool-actions-panel';
-import { labelPath, notALabelWords } from '@/features/tools/utils/label-path';
+import { labelPath } from '@/features/tools/utils/label-path';
 import { Button } from '@/components/ui/button';
 import { PageHeading } from '@/components/ui/page';
 import { setStationToken } from '@/lib/api-client';
@@ -162,7 +161,7 @@ function StationScreen({ station, onRevoked }: { station: KeptStation; onRevoked
                 else setStep({ kind: 'badge', notice: NO_LABEL_YET });
               }}
             />
-            <BadgeEntry onBadge={takeBadge} />
+            <ScanEntry label="Badge scanner" onCode={takeBadge} />
           </>
         )}
         {step.kind === 'pin' && (
@@ -200,7 +199,7 @@ function StationNotice({ children }: { children: string }) {
 
 interface SignedInProps {
   name: string;
-  countdown: React.ReactNode;
+  countdown: ReactNode;
   onScan: () => void;
   onBadge: (badge: string) => void;
   onDone: () => void;
@@ -213,12 +212,7 @@ function SignedIn({ name, countdown, onScan, onBadge, onDone }: SignedInProps) {
   const scan = (raw: string) => {
     onScan();
     const scanned = readScan(raw);
-    if (scanned.kind === 'badge') {
-      // A code typed by hand that is no label is not a badge either: only say so.
-      if (/\s/.test(raw.trim())) setResult(notALabelWords(raw));
-      else onBadge(scanned.badge);
-      return;
-    }
+    if (scanned.kind === 'badge') return onBadge(scanned.badge);
     setResult(undefined);
     setItem(scanned);
   };
@@ -252,9 +246,7 @@ function SignedIn({ name, countdown, onScan, onBadge, onDone }: SignedInProps) {
         <>
           <h2 className="text-3xl font-bold">Scan a tool or bin</h2>
           <CameraScanner onCode={scan} />
-          <div className="rounded-xl bg-card p-4 text-ink">
-            <CodeEntry onCode={scan} autoFocus />
-          </div>
+          <ScanEntry label="Scanner, or type a tool or bin code" onCode={scan} />
         </>
       )}
     </>

@@ -1,27 +1,29 @@
-import { useRef, useState } from 'react';
+import { useId, useRef, useState } from 'react';
 
 /**
- * Where a USB scanner in keyboard mode types a badge (the code, then Enter). Focus stays here
- * unless the person moves it on purpose; what is typed is masked, so a badge's token is never shown.
+ * Where a USB scanner in keyboard mode types a code (then Enter): a badge, or a tool or bin label.
+ * Focus stays here unless the person moves it on purpose; what is typed is masked, so a badge's
+ * token is never shown. The code is handed over as typed: a badge's token is case-sensitive.
  */
-export function BadgeEntry({ onBadge }: { onBadge: (badge: string) => void }) {
+export function ScanEntry({ label, onCode }: { label: string; onCode: (code: string) => void }) {
   const [value, setValue] = useState('');
   const input = useRef<HTMLInputElement>(null);
+  const id = useId();
   return (
     <form
       className="flex flex-col gap-2"
       onSubmit={(e) => {
         e.preventDefault();
-        const badge = value.trim();
+        const code = value.trim();
         setValue('');
-        if (badge) onBadge(badge);
+        if (code) onCode(code);
       }}
     >
-      <label htmlFor="station-badge" className="text-lg font-semibold">
-        Badge scanner
+      <label htmlFor={id} className="text-lg font-semibold">
+        {label}
       </label>
       <input
-        id="station-badge"
+        id={id}
         ref={input}
         type="password"
         value={value}

@@ -1,0 +1,152 @@
+import { act, screen } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import type { StationSession } from '@shared/schemas/stations';
+import { StationRoute } from '@/app/routes/station';
+import { KEPT_STATION_KEY } from '@/features/stations/api/kept-station';
+import { fakeFetch, renderWithProviders, type FakeCall } from '../helpers/render';
+
+const BADGE = 'bdg-7Qx2LmP9';
+const OTHER_BADGE = 'bdg-Zr4Kw81c';
+const PIN = '2468';
+
+const session = (name: string, id: number): StationSession => ({
+  user: { id, name, email: `${name.split(' ')[0]!.toLowerCase()}@example.test`, role: 'member' },
+  station: { id: 4, name: 'Crib door tablet' },
+  idleSeconds: 60,
+});
+
+/** The station's side of the contract: the right badge and PIN sign in, anything else is refused in words. */
+function fakeStationServer() {
+  return fakeFetch((call: FakeCall) => {
+    if (call.path === '/api/auth/csrf') return { status: 200, body: { token: 'csrf' } };
+    if (call.path === '/api/station/done') return { status: 204 };
+    if (call.path === '/api/station/sign-in') {
+      const { badge, pin } = call.body as { badge: string; pin: string };
+      if (pin !== PIN) return { status: 401, body: { error: { code: 'WRONG_PIN', message: 'That PIN is not right. 4 more tries before this badge is locked here.' } } };
+      if (badge === BADGE) return { status: 200, body: session('Marco Bellweather', 3) };
+      if (badge === OTHER_BADGE) return { status: 200, body: session('Ines Okafor', 5) };
+    }
+    return undefined;
+  });
+}
+
+async function scanBadge(user: ReturnType<typeof userEvent.setup>, badge: string) {
+  await user.type(await screen.findByLabelText('Badge scanner'), `${badge}{Enter}`);
+}
+
+async function typePin(user: ReturnType<typeof userEvent.setup>, pin: string) {
+  await screen.findByRole('heading', { name: 'Type your PIN' });
+  for (const digit of pin) await user.click(screen.getByRole('button', { name: digit }));
+  await user.click(screen.getByRole('button', { name: 'OK' }));
+}
+
+beforeEach(() => {
+  localStorage.setItem(KEPT_STATION_KEY, JSON.stringify({ token: 'stn-token-1', id: 4, name: 'Crib door tablet' }));
+});
+
+afterEach(() => {
+  vi.useRealTimers();
+  localStorage.clear();
+});
+
+describe('the crib station', () => {
+  it('says a device without a kept station is not one, with a way to sign in', async () => {
+    localStorage.clear();
+    fakeStationServer();
+    renderWithProviders(<StationRoute />, '/station');
+    expect(await screen.findByRole('heading', { name: 'This device is not a station' })).toBeTruthy();
+    expect(screen.getByRole('link', { name: 'Sign in' }).getAttribute('href')).toContain('/sign-in');
+  });
+
+  it('signs a person in with badge and PIN, sending the station token, and never shows the badge', async () => {
+    const calls = fakeStationServer();
+    const user = userEvent.setup();
+    renderWithProviders(<StationRoute />, '/station');
+    expect(await screen.findByRole('heading', { name: 'Scan your badge' })).toBeTruthy();
+    await scanBadge(user, BADGE);
+    await typePin(user, PIN);
+    expect(await screen.findByRole('heading', { name: 'Hello, Marco Bellweather' })).toBeTruthy();
+    expect(screen.getByRole('heading', { name: 'Scan a tool or bin' })).toBeTruthy();
+    const signIn = calls.find((c) => c.path === '/api/station/sign-in')!;
+    expect(signIn.body).toEqual({ badge: BADGE, pin: PIN });
+    expect(signIn.headers['X-Station-Token']).toBe('stn-token-1');
+    expect(document.body.innerHTML).not.toContain(BADGE);
+  });
+
+  it('keeps the PIN step and says the server’s words after a wrong PIN', async () => {
+    fakeStationServer();
+    const user = userEvent.setup();
+    renderWithProviders(<StationRoute />, '/station');
+    await scanBadge(user, BADGE);
+    await typePin(user, '1111');
+    expect(await screen.findByText('That PIN is not right. 4 more tries before this badge is locked here.')).toBeTruthy();
+    expect(screen.getByRole('heading', { name: 'Type your PIN' })).toBeTruthy();
+    expect(screen.queryByText(/Hello,/)).toBeNull();
+  });
+
+  it('counts down in the last 10 seconds and goes back to the badge after a minute without a tap', async () => {
+    vi.useFakeTimers({ shouldAdvanceTime: true });
+    const calls = fakeStationServer();
+    const user = userEvent.setup({ advanceTimers: (ms) => vi.advanceTimersByTime(ms) });
+    renderWithProviders(<StationRoute />, '/station');
+    await scanBadge(user, BADGE);
+    await typePin(user, PIN);
+    await screen.findByRole('heading', { name: 'Hello, Marco Bellweather' });
+
+    await act(() => vi.advanceTimersByTimeAsync(45_000));
+    expect(screen.queryByText(/Signing out in/)).toBeNull();
+    await act(() => vi.advanceTimersByTimeAsync(5_000));
+    expect(screen.getByText('Signing out in 10 s. Tap anywhere to stay.')).toBeTruthy();
+    await act(() => vi.advanceTimersByTimeAsync(10_000));
+    expect(await screen.findByRole('heading', { name: 'Scan your badge' })).toBeTruthy();
+    expect(document.body.textContent).not.toContain('Marco');
+    expect(calls.some((c) => c.path === '/api/station/done')).toBe(true);
+  });
+
+  it('starts the minute over on a tap', async () => {
+    vi.useFakeTimers({ shouldAdvanceTime: true });
+    fakeStationServer();
+    const user = userEvent.setup({ advanceTimers: (ms) => vi.advanceTimersByTime(ms) });
+    renderWithProviders(<StationRoute />, '/station');
+    await scanBadge(user, BADGE);
+    await typePin(user, PIN);
+    await screen.findByRole('heading', { name: 'Hello, Marco Bellweather' });
+    await act(() => vi.advanceTimersByTimeAsync(55_000));
+    expect(screen.getByText(/Signing out in/)).toBeTruthy();
+    await user.click(screen.getByRole('heading', { name: 'Scan a tool or bin' }));
+    await act(() => vi.advanceTimersByTimeAsync(1_000));
+    expect(screen.queryByText(/Signing out in/)).toBeNull();
+    await act(() => vi.advanceTimersByTimeAsync(30_000));
+    expect(screen.getByRole('heading', { name: 'Hello, Marco Bellweather' })).toBeTruthy();
+  });
+
+  it('Done ends the session and leaves nothing of the person on screen or in the cache', async () => {
+    const calls = fakeStationServer();
+    const user = userEvent.setup();
+    const { queryClient } = renderWithProviders(<StationRoute />, '/station');
+    await scanBadge(user, BADGE);
+    await typePin(user, PIN);
+    await screen.findByRole('heading', { name: 'Hello, Marco Bellweather' });
+    await user.click(screen.getByRole('button', { name: 'Done' }));
+    expect(await screen.findByRole('heading', { name: 'Scan your badge' })).toBeTruthy();
+    expect(document.body.textContent).not.toContain('Marco Bellweather');
+    expect(queryClient.getQueryCache().getAll()).toEqual([]);
+    expect(calls.filter((c) => c.path === '/api/station/done')).toHaveLength(1);
+  });
+
+  it('a new badge scanned while someone is signed in ends their session and asks for the new PIN', async () => {
+    const calls = fakeStationServer();
+    const user = userEvent.setup();
+    renderWithProviders(<StationRoute />, '/station');
+    await scanBadge(user, BADGE);
+    await typePin(user, PIN);
+    await screen.findByRole('heading', { name: 'Hello, Marco Bellweather' });
+    await user.type(screen.getByLabelText('Scanner, or type a tool or bin code'), `${OTHER_BADGE}{Enter}`);
+    expect(await screen.findByRole('heading', { name: 'Type your PIN' })).toBeTruthy();
+    expect(document.body.textContent).not.toContain('Marco');
+    expect(calls.some((c) => c.path === '/api/station/done')).toBe(true);
+    await typePin(user, PIN);
+    expect(await screen.findByRole('heading', { name: 'Hello, Ines Okafor' })).toBeTruthy();
+  });
+});

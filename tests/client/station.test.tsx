@@ -1,49 +1,11 @@
 import { act, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import type { StationSession } from '@shared/schemas/stations';
 import { StationRoute } from '@/app/routes/station';
-import { KEPT_STATION_KEY } from '@/features/stations/api/kept-station';
-import { fakeFetch, renderWithProviders, type FakeCall } from '../helpers/render';
+import { renderWithProviders } from '../helpers/render';
+import { BADGE, fakeStationServer, keepTestStation, OTHER_BADGE, PIN, scanBadge, STATION_TOKEN, typePin } from '../helpers/station-screen';
 
-const BADGE = 'bdg-7Qx2LmP9';
-const OTHER_BADGE = 'bdg-Zr4Kw81c';
-const PIN = '2468';
-
-const session = (name: string, id: number): StationSession => ({
-  user: { id, name, email: `${name.split(' ')[0]!.toLowerCase()}@example.test`, role: 'member' },
-  station: { id: 4, name: 'Crib door tablet' },
-  idleSeconds: 60,
-});
-
-/** The station's side of the contract: the right badge and PIN sign in, anything else is refused in words. */
-function fakeStationServer() {
-  return fakeFetch((call: FakeCall) => {
-    if (call.path === '/api/auth/csrf') return { status: 200, body: { token: 'csrf' } };
-    if (call.path === '/api/station/done') return { status: 204 };
-    if (call.path === '/api/station/sign-in') {
-      const { badge, pin } = call.body as { badge: string; pin: string };
-      if (pin !== PIN) return { status: 401, body: { error: { code: 'WRONG_PIN', message: 'That PIN is not right. 4 more tries before this badge is locked here.' } } };
-      if (badge === BADGE) return { status: 200, body: session('Marco Bellweather', 3) };
-      if (badge === OTHER_BADGE) return { status: 200, body: session('Ines Okafor', 5) };
-    }
-    return undefined;
-  });
-}
-
-async function scanBadge(user: ReturnType<typeof userEvent.setup>, badge: string) {
-  await user.type(await screen.findByLabelText('Badge scanner'), `${badge}{Enter}`);
-}
-
-async function typePin(user: ReturnType<typeof userEvent.setup>, pin: string) {
-  await screen.findByRole('heading', { name: 'Type your PIN' });
-  for (const digit of pin) await user.click(screen.getByRole('button', { name: digit }));
-  await user.click(screen.getByRole('button', { name: 'OK' }));
-}
-
-beforeEach(() => {
-  localStorage.setItem(KEPT_STATION_KEY, JSON.stringify({ token: 'stn-token-1', id: 4, name: 'Crib door tablet' }));
-});
+beforeEach(keepTestStation);
 
 afterEach(() => {
   vi.useRealTimers();
@@ -70,7 +32,7 @@ describe('the crib station', () => {
     expect(screen.getByRole('heading', { name: 'Scan a tool or bin' })).toBeTruthy();
     const signIn = calls.find((c) => c.path === '/api/station/sign-in')!;
     expect(signIn.body).toEqual({ badge: BADGE, pin: PIN });
-    expect(signIn.headers['X-Station-Token']).toBe('stn-token-1');
+    expect(signIn.headers['X-Station-Token']).toBe(STATION_TOKEN);
     expect(document.body.innerHTML).not.toContain(BADGE);
   });
 

@@ -51,7 +51,7 @@ export function StationRoute() {
         <div className="mx-auto flex max-w-xl flex-col gap-4">
           <PageHeading title="This device is not a station" tabTitle="Station" className="text-4xl" />
           <p className="text-xl">A quartermaster makes a device a station on the Stations page.</p>
-          <Link to="/sign-in?next=%2Fstations" className="text-xl font-semibold text-brass underline underline-offset-4">
+          <Link to="/sign-in?next=%2Fstations" className="inline-flex min-h-12 items-center self-start text-xl font-semibold text-brass underline underline-offset-4">
             Sign in
           </Link>
         </div>

@@ -111,4 +111,16 @@ describe('the crib station', () => {
     await typePin(user, PIN);
     expect(await screen.findByRole('heading', { name: 'Hello, Ines Okafor' })).toBeTruthy();
   });
+
+  it('starts a person’s session with nothing cached from whoever used the browser before', async () => {
+    fakeStationServer();
+    const user = userEvent.setup();
+    const { queryClient } = renderWithProviders(<StationRoute />, '/station');
+    // The quartermaster who enrolled this tablet was signed in on it a moment ago.
+    queryClient.setQueryData(['auth', 'me'], { id: 1, name: 'Ruth Calloway', email: 'ruth@example.test', role: 'quartermaster' });
+    await scanBadge(user, BADGE);
+    await typePin(user, PIN);
+    await screen.findByRole('heading', { name: 'Hello, Marco Bellweather' });
+    expect(queryClient.getQueryData(['auth', 'me'])).toBeUndefined();
+  });
 });

@@ -123,7 +123,8 @@ function StationScreen({ station, onRevoked }: { station: KeptStation; onRevoked
     signIn.mutate(
       { badge, pin },
       {
-        onSuccess: (session) => setStep({ kind: 'signed-in', session }),
+        // Nothing cached before (the person who enrolled the tablet, the last one here) shows for this one.
+        onSuccess: (session) => clearPerson({ kind: 'signed-in', session }),
         onError: (err) => {
           const next = afterRefusedSignIn(err, badge);
           if (next === 'not-enrolled') onRevoked();

@@ -66,9 +66,9 @@ describe('the crib station', () => {
     expect(calls.some((c) => c.path === '/api/station/done')).toBe(true);
   });
 
-  it('starts the minute over on a tap', async () => {
+  it('starts the minute over on a tap, and tells the server so it does not end the session first', async () => {
     vi.useFakeTimers({ shouldAdvanceTime: true });
-    fakeStationServer();
+    const calls = fakeStationServer((call) => (call.path === '/api/auth/me' ? { status: 200, body: { id: 3, name: 'Marco Bellweather', email: 'marco@example.test', role: 'member' } } : undefined));
     const user = userEvent.setup({ advanceTimers: (ms) => vi.advanceTimersByTime(ms) });
     renderWithProviders(<StationRoute />, '/station');
     await scanBadge(user, BADGE);
@@ -79,6 +79,9 @@ describe('the crib station', () => {
     await user.click(screen.getByRole('heading', { name: 'Scan a tool or bin' }));
     await act(() => vi.advanceTimersByTimeAsync(1_000));
     expect(screen.queryByText(/Signing out in/)).toBeNull();
+    const keptAlive = calls.filter((c) => c.path === '/api/auth/me');
+    expect(keptAlive).toHaveLength(1);
+    expect(keptAlive[0]!.headers['X-Station-Token']).toBe(STATION_TOKEN);
     await act(() => vi.advanceTimersByTimeAsync(30_000));
     expect(screen.getByRole('heading', { name: 'Hello, Marco Bellweather' })).toBeTruthy();
   });

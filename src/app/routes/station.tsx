@@ -1,11 +1,11 @@
 import { useQuery, useQueryClient } from '@tanstack/react-query';
-import { useCallback, useEffect, useState, type ReactNode } from 'react';
+import { useCallback, useEffect, useRef, useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { toast } from 'sonner';
 import { STATION_IDLE_SECONDS } from '@shared/schemas/stations';
 import { useOffline } from '@/features/offline/connection';
 import { forgetStation, readKeptStation, type KeptStation } from '@/features/stations/api/kept-station';
-import { endStationSession, endsStationSession, useStationSignIn } from '@/features/stations/api/station-session';
+import { endStationSession, endsStationSession, KEEP_ALIVE_EVERY_MS, keepStationSessionAlive, useStationSignIn } from '@/features/stations/api/station-session';
 import { ScanEntry } from '@/features/stations/components/scan-entry';
 import { IdleCountdown } from '@/features/stations/components/idle-countdown';
 import { PinPad } from '@/features/stations/components/pin-pad';
@@ -97,25 +97,37 @@ function StationScreen({ station, onRevoked }: { station: KeptStation; onRevoked
     done({ kind: 'badge', notice: 'Signed out after a minute without a scan or tap.' }),
   );
 
-  // Any answer saying the session is over (idle on the server, station revoked) ends it here too.
-  useEffect(() => {
-    if (!signedIn) return;
-    const check = (err: unknown) => {
+  /** An answer saying the session is over (idle on the server, station revoked) ends it here too. */
+  const endedBy = useCallback(
+    (err: unknown) => {
       const ended = endsStationSession(err);
       if (ended === 'not-enrolled') onRevoked();
       else if (ended === 'ended') clearPerson({ kind: 'badge', notice: 'The station signed you out. Scan your badge to go on.' });
-    };
+    },
+    [onRevoked, clearPerson],
+  );
+  useEffect(() => {
+    if (!signedIn) return;
     const offQueries = queryClient.getQueryCache().subscribe((e) => {
-      if (e.type === 'updated' && e.action.type === 'error') check(e.action.error);
+      if (e.type === 'updated' && e.action.type === 'error') endedBy(e.action.error);
     });
     const offMutations = queryClient.getMutationCache().subscribe((e) => {
-      if (e.type === 'updated' && e.action.type === 'error') check(e.action.error);
+      if (e.type === 'updated' && e.action.type === 'error') endedBy(e.action.error);
     });
     return () => {
       offQueries();
       offMutations();
     };
-  }, [signedIn, queryClient, clearPerson, onRevoked]);
+  }, [signedIn, queryClient, endedBy]);
+
+  /** A scan or tap: the minute starts over here, and the server hears of it now and then. */
+  const lastToldServer = useRef(0);
+  const activity = () => {
+    idle.touch();
+    if (Date.now() - lastToldServer.current < KEEP_ALIVE_EVERY_MS) return;
+    lastToldServer.current = Date.now();
+    keepStationSessionAlive().catch(endedBy);
+  };
 
   const takeBadge = (badge: string) => setStep({ kind: 'pin', badge });
 
@@ -124,7 +136,10 @@ function StationScreen({ station, onRevoked }: { station: KeptStation; onRevoked
       { badge, pin },
       {
         // Nothing cached before (the person who enrolled the tablet, the last one here) shows for this one.
-        onSuccess: (session) => clearPerson({ kind: 'signed-in', session }),
+        onSuccess: (session) => {
+          lastToldServer.current = Date.now();
+          clearPerson({ kind: 'signed-in', session });
+        },
         onError: (err) => {
           const next = afterRefusedSignIn(err, badge);
           if (next === 'not-enrolled') onRevoked();
@@ -145,8 +160,8 @@ function StationScreen({ station, onRevoked }: { station: KeptStation; onRevoked
   return (
     <main
       className={screenClass}
-      onPointerDown={signedIn ? idle.touch : undefined}
-      onKeyDown={signedIn ? idle.touch : undefined}
+      onPointerDown={signedIn ? activity : undefined}
+      onKeyDown={signedIn ? activity : undefined}
       data-station-step={step.kind}
     >
       <div className="mx-auto flex max-w-2xl flex-col gap-6">
@@ -180,7 +195,7 @@ function StationScreen({ station, onRevoked }: { station: KeptStation; onRevoked
             key={step.session.user.id}
             name={step.session.user.name}
             countdown={<IdleCountdown secondsLeft={idle.secondsLeft} />}
-            onScan={idle.touch}
+            onScan={activity}
             onBadge={(badge) => done({ kind: 'pin', badge })}
             onDone={() => done()}
           />

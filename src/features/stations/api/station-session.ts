@@ -31,3 +31,14 @@ export function endsStationSession(err: unknown): 'ended' | 'not-enrolled' | und
   if (err.code === 'STATION_NOT_ENROLLED') return 'not-enrolled';
   return undefined;
 }
+
+/**
+ * The server ends a station session a minute after its last request; a tap counts as activity at
+ * the station too, so taps tell the server now and then (at most every this often).
+ */
+export const KEEP_ALIVE_EVERY_MS = 15_000;
+
+/** A request in the station's allow-list that keeps the session going and answers who is signed in. */
+export function keepStationSessionAlive(): Promise<unknown> {
+  return api.get('/api/auth/me');
+}

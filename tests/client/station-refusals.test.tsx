@@ -1,6 +1,6 @@
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { afterEach, describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import { StationRoute } from '@/app/routes/station';
 import { readKeptStation } from '@/features/stations/api/kept-station';
 import { afterRefusedSignIn } from '@/features/stations/hooks/station-steps';
@@ -54,5 +54,17 @@ describe('when the server ends a station session', () => {
     await user.type(screen.getByLabelText('Scanner, or type a tool or bin code'), 'T-0042{Enter}');
     expect(await screen.findByRole('heading', { name: 'This device is not a station' })).toBeTruthy();
     expect(readKeptStation()).toBeUndefined();
+  });
+});
+
+describe('a station without a connection', () => {
+  it('says it needs one instead of taking a badge (the offline queue is not used at the station)', async () => {
+    keepTestStation();
+    vi.spyOn(navigator, 'onLine', 'get').mockReturnValue(false);
+    const calls = fakeStationServer();
+    renderWithProviders(<StationRoute />, '/station');
+    expect(await screen.findByRole('heading', { name: 'The station needs a connection' })).toBeTruthy();
+    expect(screen.queryByLabelText('Badge scanner')).toBeNull();
+    expect(calls).toEqual([]);
   });
 });

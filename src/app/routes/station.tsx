@@ -170,7 +170,7 @@ function StationScreen({ station, onRevoked }: { station: KeptStation; onRevoked
           <>
             <PageHeading title="Scan your badge" tabTitle="Station" className="text-4xl" />
             {step.notice && <StationNotice>{step.notice}</StationNotice>}
-            <CameraScanner
+            <StationCamera
               onCode={(raw) => {
                 const scanned = readScan(raw);
                 if (scanned.kind === 'badge') takeBadge(scanned.badge);
@@ -202,6 +202,15 @@ function StationScreen({ station, onRevoked }: { station: KeptStation; onRevoked
         )}
       </div>
     </main>
+  );
+}
+
+/** The tools' camera, its notices in their own dark text on the station's dark screen. */
+function StationCamera({ onCode }: { onCode: (code: string) => void }) {
+  return (
+    <div className="text-ink">
+      <CameraScanner onCode={onCode} />
+    </div>
   );
 }
 
@@ -261,7 +270,7 @@ function SignedIn({ name, countdown, onScan, onBadge, onDone }: SignedInProps) {
       ) : (
         <>
           <h2 className="text-3xl font-bold">Scan a tool or bin</h2>
-          <CameraScanner onCode={scan} />
+          <StationCamera onCode={scan} />
           <ScanEntry label="Scanner, or type a tool or bin code" onCode={scan} />
         </>
       )}

@@ -11,7 +11,8 @@ export function PinPad({ onPin, busy }: { onPin: (pin: string) => void; busy: bo
   const press = (digit: string) => setPin((p) => (p.length < MAX_DIGITS ? p + digit : p));
   return (
     <div className="flex flex-col items-center gap-5">
-      <p aria-live="polite" aria-label={`${pin.length} of 4 to 8 digits typed`} className="flex h-10 items-center gap-3">
+      <p aria-live="polite" className="flex h-10 items-center gap-3">
+        <span className="sr-only">{`${pin.length} of 4 to 8 digits typed`}</span>
         {Array.from({ length: Math.max(4, pin.length) }, (_, i) => (
           <span key={i} aria-hidden className={`size-6 rounded-full border-4 border-brass ${i < pin.length ? 'bg-brass' : ''}`} />
         ))}

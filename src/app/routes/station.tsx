@@ -185,7 +185,7 @@ function StationScreen({ station, onRevoked }: { station: KeptStation; onRevoked
             <PageHeading title="Type your PIN" tabTitle="Station" className="text-4xl" />
             {step.notice && <StationNotice>{step.notice}</StationNotice>}
             <PinPad busy={signIn.isPending} onPin={(pin) => sendPin(step.badge, pin)} />
-            <Button variant="secondary" className="min-h-16 text-xl" onClick={() => setStep({ kind: 'badge' })}>
+            <Button variant="secondary" className="min-h-16 text-xl!" onClick={() => setStep({ kind: 'badge' })}>
               Cancel
             </Button>
           </>
@@ -250,7 +250,7 @@ function SignedIn({ name, countdown, onScan, onBadge, onDone }: SignedInProps) {
     <>
       <div className="flex flex-wrap items-center justify-between gap-4">
         <PageHeading title={`Hello, ${name}`} tabTitle="Station" className="text-4xl" />
-        <Button variant="secondary" className="min-h-16 px-10 text-2xl" onClick={onDone}>
+        <Button variant="secondary" className="min-h-16 px-10 text-2xl!" onClick={onDone}>
           Done
         </Button>
       </div>
@@ -263,7 +263,7 @@ function SignedIn({ name, countdown, onScan, onBadge, onDone }: SignedInProps) {
       {item ? (
         <div className="flex flex-col gap-3 text-ink">
           {item.kind === 'tool' ? <StationTool code={item.code} onDone={() => finished(item.code)} /> : <StationBin code={item.code} onDone={() => finished(item.code)} />}
-          <Button variant="secondary" className="min-h-16 text-xl" onClick={() => setItem(undefined)}>
+          <Button variant="secondary" className="min-h-16 text-xl!" onClick={() => setItem(undefined)}>
             Scan a tool or bin
           </Button>
         </div>

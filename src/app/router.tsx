@@ -45,6 +45,12 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
       lazy: async () => ({ Component: (await import('./routes/auth/reset-password')).ResetPasswordConfirmRoute }),
     },
     {
+      // The crib station: full screen, outside the signed-in app, loaded only on a station.
+      path: '/station',
+      ErrorBoundary: RouteError,
+      lazy: async () => ({ Component: (await import('./routes/station')).StationRoute }),
+    },
+    {
       path: '/invite/:token',
       lazy: async () => ({ Component: (await import('./routes/auth/accept-invitation')).AcceptInvitationRoute }),
     },
@@ -79,6 +85,7 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
         page('overdue', () => import('./routes/app/overdue').then((m) => ({ Component: m.OverdueRoute, loader: m.overdueLoader }))),
         page('service', () => import('./routes/app/service').then((m) => ({ Component: m.ServiceRoute, loader: m.serviceLoader }))),
         page('signoffs', () => import('./routes/app/signoffs').then((m) => ({ Component: m.SignoffsRoute, loader: m.signoffsLoader }))),
+        page('stations', () => import('./routes/app/stations').then((m) => ({ Component: m.StationsRoute, loader: m.stationsLoader }))),
         page('labels', () => import('./routes/app/labels').then((m) => ({ Component: m.LabelsRoute, loader: m.labelsLoader }))),
         page('alerts', () => import('./routes/app/alerts').then((m) => ({ Component: m.AlertsRoute, loader: m.alertsLoader }))),
         page('forecast', () => import('./routes/app/forecast').then((m) => ({ Component: m.ForecastRoute, loader: m.forecastLoader }))),

@@ -1,5 +1,6 @@
 import type { ErrorIssue } from '@shared/schemas/errors';
 import { errorEnvelopeSchema } from '@shared/schemas/errors';
+import { STATION_TOKEN_HEADER } from '@shared/schemas/stations';
 
 /** An API failure with the server's code and a sentence to show. `status` 0 means no connection. */
 export class ApiError extends Error {
@@ -8,6 +9,8 @@ export class ApiError extends Error {
     readonly code: string,
     message: string,
     readonly issues: ErrorIssue[] = [],
+    /** The server's Retry-After, in seconds, when it said one (a badge locked at a station). */
+    readonly retryAfterSeconds?: number,
   ) {
     super(message);
     this.name = 'ApiError';
@@ -46,6 +49,12 @@ function reportReachability(answered: boolean): void {
 }
 
 let csrfToken: string | undefined;
+let stationToken: string | undefined;
+
+/** On an enrolled station every request carries its token; undefined on any other screen. */
+export function setStationToken(token: string | undefined): void {
+  stationToken = token;
+}
 let sessionChanges = 0;
 
 /** Sign-in and invitation acceptance start a new session and hand back its token; sign-out drops it. */
@@ -73,6 +82,7 @@ async function send<T>(method: string, path: string, body?: unknown, token?: str
   const isForm = body instanceof FormData;
   if (body !== undefined && !isForm) headers['Content-Type'] = 'application/json';
   if (token) headers['X-CSRF-Token'] = token;
+  if (stationToken) headers[STATION_TOKEN_HEADER] = stationToken;
   const timeoutMs = options.timeoutMs ?? 0;
   let res: Response;
   try {
@@ -98,7 +108,8 @@ async function send<T>(method: string, path: string, body?: unknown, token?: str
   const parsed = errorEnvelopeSchema.safeParse(json);
   if (parsed.success) {
     const e = parsed.data.error;
-    throw new ApiError(res.status, e.code, e.message, e.issues);
+    const retryAfter = Number(res.headers.get('Retry-After') ?? NaN);
+    throw new ApiError(res.status, e.code, e.message, e.issues, Number.isFinite(retryAfter) ? retryAfter : undefined);
   }
   throw new ApiError(res.status, 'HTTP_' + res.status, `The server answered ${res.status}. Try again in a moment.`);
 }

@@ -146,6 +146,13 @@ export const labelKeys = {
   bins: () => ['labels', 'bins'] as const,
 };
 
+/** The enrolled stations (quartermaster and lead), and the person signed in at this station. */
+export const stationKeys = {
+  all: ['stations'] as const,
+  list: () => ['stations', 'list'] as const,
+  session: () => ['stations', 'session'] as const,
+};
+
 /** Home's "today" answers, one per role. Home refetches them whenever it is opened. */
 export const todayKeys = {
   all: ['today'] as const,
@@ -192,6 +199,8 @@ export const shownOn = {
   invitations: [peopleKeys.invitations(), mailKeys.all],
   mail: [mailKeys.all],
   /** The chapter's time zone or hold time: every day the server counted (due, late, by month) and the holds' ends. */
+  /** A station enrolled or revoked: the Stations list. */
+  stations: [stationKeys.list()],
   chapterSettings: [toolKeys.all, overdueKeys.all, serviceKeys.all, stockMoneyKeys.all, todayKeys.all],
 } satisfies Record<string, readonly QueryKey[]>;
 

@@ -89,6 +89,7 @@ function pagesOf(role: Role, ids: DemoIds): string[] {
     '/restock',
     '/service',
     '/labels',
+    '/stations',
     '/alerts',
     '/forecast',
     '/payments',
@@ -101,7 +102,7 @@ function pagesOf(role: Role, ids: DemoIds): string[] {
 
 /** An address that matches no route, and one whose tool does not exist. */
 const NOT_FOUND_PAGES = ['/no-such-page', '/tools/NO-SUCH-TOOL'];
-const SIGNED_OUT_PAGES = ['/sign-in', '/reset-password', '/reset-password/not-a-real-token', '/invite/not-a-real-token', '/no-such-page'];
+const SIGNED_OUT_PAGES = ['/sign-in', '/reset-password', '/reset-password/not-a-real-token', '/invite/not-a-real-token', '/station', '/no-such-page'];
 const isNotFound = (path: string) => NOT_FOUND_PAGES.includes(path);
 
 interface Finding {

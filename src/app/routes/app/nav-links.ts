@@ -35,6 +35,7 @@ export const NAV_LINKS: readonly NavLinkEntry[] = [
   { to: '/overdue', label: 'Overdue', role: 'lead', group: 'crib' },
   { to: '/service', label: 'Service', role: 'quartermaster', group: 'crib' },
   { to: '/labels', label: 'Labels', role: 'quartermaster', group: 'crib' },
+  { to: '/stations', label: 'Stations', role: 'quartermaster', group: 'crib' },
   { to: '/bins', label: 'Bins', role: 'member', group: 'stock' },
   { to: '/restock', label: 'Restock', role: 'quartermaster', group: 'stock' },
   { to: '/alerts', label: 'Reorder alerts', role: 'quartermaster', group: 'stock' },

@@ -2,7 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import { toast } from 'sonner';
 import type { z } from 'zod';
-import { labelSheetBodySchema, MAX_LABELS_PER_REQUEST, type SheetLayoutDto } from '@shared/schemas/labels';
+import { labelSheetFieldsSchema, MAX_LABELS_PER_REQUEST, type SheetLayoutDto } from '@shared/schemas/labels';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
@@ -10,7 +10,7 @@ import { applyServerErrors } from '@/lib/errors';
 import { useDownloadLabelSheet } from '../api/download-label-sheet';
 import { describeSheet } from '../utils/sheet-summary';
 
-const sheetOptionsSchema = labelSheetBodySchema.pick({ layoutId: true, skip: true });
+const sheetOptionsSchema = labelSheetFieldsSchema.pick({ layoutId: true, skip: true });
 type Input = z.input<typeof sheetOptionsSchema>;
 type Output = z.output<typeof sheetOptionsSchema>;
 

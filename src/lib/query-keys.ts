@@ -144,6 +144,7 @@ export const labelKeys = {
   layouts: () => ['labels', 'layouts'] as const,
   tools: () => ['labels', 'tools'] as const,
   bins: () => ['labels', 'bins'] as const,
+  people: () => ['labels', 'people'] as const,
 };
 
 /** Home's "today" answers, one per role. Home refetches them whenever it is opened. */
@@ -188,6 +189,8 @@ export const shownOn = {
   reminder: [overdueKeys.all, todayKeys.all, mailKeys.all],
   /** A person's role or standing changed: the people list, and their loans and holds if they lost them. */
   person: [peopleKeys.all, toolKeys.all, todayKeys.all],
+  /** A label sheet printed: badges on it were issued anew, so who has a badge changed. */
+  labelSheet: [peopleKeys.all, labelKeys.people()],
   /** An invitation sent or withdrawn: the pending list and its mail. */
   invitations: [peopleKeys.invitations(), mailKeys.all],
   mail: [mailKeys.all],

@@ -5,7 +5,6 @@ import { CATEGORY_LABELS, STATUS_LABELS } from '@shared/tools/categories';
 import { ItemPicker } from '@/components/ui/item-picker';
 import { codesInListOrder } from '@/components/ui/item-picking';
 import { Card } from '@/components/ui/page';
-import { Notice } from '@/components/ui/notice';
 import { BIN_FACETS, binSearchText, type PickableBin } from '../utils/bin-selection';
 import { PERSON_FACETS, personCode, personSearchText, pickedPersonIds, type PickablePerson } from '../utils/person-selection';
 import { TOOL_FACETS, toolSearchText, type PickableTool } from '../utils/tool-selection';
@@ -50,20 +49,17 @@ export function LabelSheetBuilder({ tools, bins, people, initialPeople = [], lay
           </div>
         )}
         {people && source === 'people' ? (
-          <div className="flex flex-col gap-3">
-            <Notice tone="warn">Printing a badge replaces that person’s old one.</Notice>
-            <ItemPicker
-              key="people"
-              items={people}
-              selected={peoplePicked}
-              onChange={setPeoplePicked}
-              noun={{ one: 'person', many: 'people' }}
-              searchLabel="Search name"
-              searchIn={personSearchText}
-              facets={PERSON_FACETS}
-              describe={describePerson}
-            />
-          </div>
+          <ItemPicker
+            key="people"
+            items={people}
+            selected={peoplePicked}
+            onChange={setPeoplePicked}
+            noun={{ one: 'person', many: 'people' }}
+            searchLabel="Search name"
+            searchIn={personSearchText}
+            facets={PERSON_FACETS}
+            describe={describePerson}
+          />
         ) : bins && source === 'bins' ? (
           <ItemPicker
             key="bins"

@@ -94,6 +94,7 @@ export function LabelSheetForm({ layouts, codes, people = [], nothingPicked }: L
         Print the PDF at 100 % (not “fit to page”), or the labels drift off the sheet. Try a first page on plain paper and hold it
         against a label sheet to the light.
       </Notice>
+      {people.length > 0 && <Notice tone="warn">Printing a badge replaces that person’s old one.</Notice>}
       <FormFooter submit="Download label sheet (PDF)" busy={download.isPending} disabled={count === 0 || tooMany} />
     </form>
   );

@@ -6,6 +6,7 @@ import { SHEET_LAYOUTS } from '../../labels/layouts';
 import { LabelSheetBuilder } from '@/features/labels/components/label-sheet-builder';
 import { pickablePeople } from '@/features/labels/utils/person-selection';
 import { setCsrfToken } from '@/lib/api-client';
+import { stubPdfDownload } from '../helpers/pdf-download';
 import { renderWithProviders } from '../helpers/render';
 
 const LAYOUTS: SheetLayoutDto[] = SHEET_LAYOUTS.map((l) => ({ ...l }));
@@ -19,17 +20,7 @@ afterEach(() => vi.unstubAllGlobals());
 
 describe('Labels: people’s badges', () => {
   it('opens on People with the person from the link chosen, warns that the old badge stops working, and sends their id', async () => {
-    const bodies: unknown[] = [];
-    vi.stubGlobal(
-      'fetch',
-      vi.fn((_path: string, init: RequestInit) => {
-        bodies.push(JSON.parse(init.body as string));
-        return Promise.resolve(new Response(new Blob(['%PDF-1.3 fake']), { status: 200, headers: { 'Content-Type': 'application/pdf' } }));
-      }),
-    );
-    vi.spyOn(URL, 'createObjectURL').mockReturnValue('blob:labels');
-    vi.spyOn(URL, 'revokeObjectURL').mockImplementation(() => undefined);
-    vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(() => undefined);
+    const bodies = stubPdfDownload();
 
     renderWithProviders(<LabelSheetBuilder tools={[]} bins={[]} people={PEOPLE} initialPeople={[5]} layouts={LAYOUTS} />);
     const switcher = screen.getByRole('group', { name: 'What to label' });

@@ -1,19 +1,20 @@
 import { useState } from 'react';
-import { Link } from 'react-router';
 import { toast } from 'sonner';
 import type { Person } from '@shared/schemas/people';
+import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
+import { LinkButton } from '@/components/ui/link-button';
 import { messageOf } from '@/lib/errors';
 import { useClearPin } from '../api/clear-pin';
 
-const chip = (on: boolean) => `rounded px-2 py-0.5 text-sm font-medium ${on ? 'bg-ok-soft text-ok' : 'bg-paper text-steel'}`;
+const looks = (on: boolean) => (on ? 'bg-ok-soft text-ok' : 'bg-paper text-steel');
 
 /** Whether the person can sign in at the crib station: a working badge and a PIN. */
 export function StationState({ person }: { person: Person }) {
   return (
     <div className="flex flex-wrap gap-1">
-      <span className={chip(person.hasBadge)}>{person.hasBadge ? 'Badge' : 'No badge'}</span>
-      <span className={chip(person.hasPin)}>{person.hasPin ? 'PIN set' : 'No PIN'}</span>
+      <Badge className={looks(person.hasBadge)}>{person.hasBadge ? 'Badge' : 'No badge'}</Badge>
+      <Badge className={looks(person.hasPin)}>{person.hasPin ? 'PIN set' : 'No PIN'}</Badge>
     </div>
   );
 }
@@ -34,13 +35,9 @@ export function StationActions({ person }: { person: Person }) {
   return (
     <div className="flex flex-wrap items-center gap-2">
       {person.active && (
-        <Link
-          to={`/labels?person=${person.id}`}
-          aria-label={`Print badge for ${person.name}`}
-          className="inline-flex min-h-12 items-center justify-center rounded-lg border-2 border-ink bg-card px-4 font-semibold hover:bg-paper"
-        >
+        <LinkButton variant="secondary" to={`/labels?person=${person.id}`} aria-label={`Print badge for ${person.name}`}>
           Print badge
-        </Link>
+        </LinkButton>
       )}
       {person.hasPin &&
         (confirming ? (

@@ -21,7 +21,7 @@ import { paymentSettingsRouter } from './features/payments/payment-settings.rout
 import { paymentsRouter, paymentsWebhookRouter } from './features/payments/payments.router';
 import { mailRouter } from './features/mail/mail.router';
 import { passwordResetRouter } from './features/password-reset/password-reset.router';
-import { peopleRouter } from './features/people/people.router';
+import { myPinRouter, peopleRouter } from './features/people/people.router';
 import { referenceRouter } from './features/reference/reference.router';
 import { cribSettingsRouter } from './features/tools/crib-settings.router';
 import { loansRouter } from './features/tools/loans.router';
@@ -133,6 +133,7 @@ export function createApp(config: AppConfig) {
   // Holds belong to the crib: the app hands its rule to the planning feature.
   api.use('/assemblies', assembliesRouter({ placeHold }));
   api.use('/me', preferencesRouter());
+  api.use('/me', myPinRouter());
   api.use('/forecast', forecastRouter());
   api.use('/alerts', alertsRouter());
   api.use('/waste', wasteRouter());

@@ -33,3 +33,9 @@ export function workingBadgeOf(db: Executor, userId: number): BadgeRow | undefin
     .where(and(eq(badges.userId, userId), isNull(badges.revokedAt)))
     .get();
 }
+
+/** The ids of everyone holding a working badge. */
+export function badgeHolderIds(db: Executor): Set<number> {
+  const rows = db.select({ userId: badges.userId }).from(badges).where(isNull(badges.revokedAt)).all();
+  return new Set(rows.map((r) => r.userId));
+}

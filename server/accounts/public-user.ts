@@ -6,11 +6,14 @@ export function toUser(row: UserRow): User {
   return { id: row.id, email: row.email, name: row.name, role: row.role };
 }
 
-export function toPerson(row: UserRow): Person {
+/** A person as a lead sees them; `hasBadge` comes from the badges table (see badgeHolderIds). */
+export function toPerson(row: UserRow, hasBadge: boolean): Person {
   return {
     ...toUser(row),
     active: row.deactivatedAt === null,
     createdAt: row.createdAt.toISOString(),
     deactivatedAt: row.deactivatedAt?.toISOString() ?? null,
+    hasBadge,
+    hasPin: row.pinHash !== null,
   };
 }

@@ -10,6 +10,9 @@ export const personSchema = z.strictObject({
   active: z.boolean(),
   createdAt: z.string(),
   deactivatedAt: z.string().nullable(),
+  /** A working crib-station badge and a station PIN; never the token or the hash. */
+  hasBadge: z.boolean(),
+  hasPin: z.boolean(),
 });
 export type Person = z.infer<typeof personSchema>;
 

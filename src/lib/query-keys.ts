@@ -144,6 +144,7 @@ export const labelKeys = {
   layouts: () => ['labels', 'layouts'] as const,
   tools: () => ['labels', 'tools'] as const,
   bins: () => ['labels', 'bins'] as const,
+  people: () => ['labels', 'people'] as const,
 };
 
 /** The enrolled stations (quartermaster and lead), and the person signed in at this station. */
@@ -195,6 +196,8 @@ export const shownOn = {
   reminder: [overdueKeys.all, todayKeys.all, mailKeys.all],
   /** A person's role or standing changed: the people list, and their loans and holds if they lost them. */
   person: [peopleKeys.all, toolKeys.all, todayKeys.all],
+  /** A label sheet printed: badges on it were issued anew, so who has a badge changed. */
+  labelSheet: [peopleKeys.all, labelKeys.people()],
   /** An invitation sent or withdrawn: the pending list and its mail. */
   invitations: [peopleKeys.invitations(), mailKeys.all],
   mail: [mailKeys.all],

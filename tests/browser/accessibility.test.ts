@@ -34,6 +34,8 @@ interface DemoIds {
   binCode: string;
   buildId: number;
   assemblyId: number;
+  /** The demo member: Labels opened from People's "Print badge" has them chosen on the People tab. */
+  memberId: number;
 }
 
 function demoIds(app: BuiltApp): DemoIds {
@@ -49,7 +51,8 @@ function demoIds(app: BuiltApp): DemoIds {
          join users u on u.id = b.owner_id where u.email = 'member@example.org' order by a.id limit 1`,
       )
       .get() as { assemblyId: number; buildId: number };
-    return { toolCode: tool.code, signoffToolCode: signoffTool.code, drillBitCode: drillBit.code, binCode: bin.code, ...assembly };
+    const member = db.prepare("select id from users where email = 'member@example.org'").get() as { id: number };
+    return { memberId: member.id, toolCode: tool.code, signoffToolCode: signoffTool.code, drillBitCode: drillBit.code, binCode: bin.code, ...assembly };
   } finally {
     db.close();
   }
@@ -93,6 +96,8 @@ function pagesOf(role: Role, ids: DemoIds): string[] {
     '/alerts',
     '/forecast',
     '/payments',
+    // Not right after /labels: the same page with another query keeps its heading, and each check waits for a new one.
+    `/labels?person=${ids.memberId}`,
   ];
   const lead = ['/people', '/mail', '/overdue', '/spend', '/overview', '/signoffs'];
   if (role === 'member') return [...member, ...ownerOnly];

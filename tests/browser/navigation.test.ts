@@ -11,7 +11,7 @@ const SHOTS = 'test-results';
 const ERROR_HEADINGS = /^(Page not found|Something went wrong|Not for your role|Error \d+)$/;
 
 /** What each role finds in the navigation, by group: written out here, not read from the app's table. */
-const MEMBER = { '': ['Home'], Crib: ['Scan', 'Tools'], Stock: ['Bins'], Builds: ['My builds'], Mine: ['My loans', 'My tab', 'My mail'] };
+const MEMBER = { '': ['Home'], Crib: ['Scan', 'Tools'], Stock: ['Bins'], Builds: ['My builds'], Chapter: ['Settings'], Mine: ['My loans', 'My tab', 'My mail'] };
 const QUARTERMASTER = {
   '': ['Home'],
   Crib: ['Scan', 'Tools', 'Service', 'Labels'],

@@ -9,6 +9,7 @@ import { filterBins, NO_BIN_FILTER, type PickableBin } from '@/features/labels/u
 import { describeSheet } from '@/features/labels/utils/sheet-summary';
 import { filterTools, NO_FILTER, type PickableTool } from '@/features/labels/utils/tool-selection';
 import { setCsrfToken } from '@/lib/api-client';
+import { stubPdfDownload } from '../helpers/pdf-download';
 import { renderWithProviders } from '../helpers/render';
 
 const tool = (code: string, name: string, category: PickableTool['category'], status: PickableTool['status'] = 'available', location = ''): PickableTool => ({
@@ -135,17 +136,7 @@ describe('LabelSheetBuilder with bins', () => {
   beforeEach(() => setCsrfToken('token-1'));
 
   it('switches between tools and bins, keeps both picks, and sends tool codes then bin codes', async () => {
-    const bodies: unknown[] = [];
-    vi.stubGlobal(
-      'fetch',
-      vi.fn((_path: string, init: RequestInit) => {
-        bodies.push(JSON.parse(init.body as string));
-        return Promise.resolve(new Response(new Blob(['%PDF-1.3 fake']), { status: 200, headers: { 'Content-Type': 'application/pdf' } }));
-      }),
-    );
-    vi.spyOn(URL, 'createObjectURL').mockReturnValue('blob:labels');
-    vi.spyOn(URL, 'revokeObjectURL').mockImplementation(() => undefined);
-    vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(() => undefined);
+    const bodies = stubPdfDownload();
 
     renderWithProviders(<LabelSheetBuilder tools={TOOLS} bins={BINS} layouts={LAYOUTS} />);
     expect(screen.getByText('No tools or bins picked yet.')).toBeTruthy();

@@ -20,14 +20,15 @@ describe('the navigation table', () => {
     const member = linksFor('member').map((link) => link.label);
     expect(member).not.toContain('Restock');
     expect(member).not.toContain('People');
-    expect(member).not.toContain('Settings');
+    // Settings holds everyone's own station PIN; the chapter's figures there stay read-only for a member.
+    expect(member).toContain('Settings');
     expect(linksFor('quartermaster').map((link) => link.label)).toContain('Settings');
     expect(linksFor('quartermaster').map((link) => link.label)).not.toContain('Sign-offs');
     expect(linksFor('lead')).toHaveLength(NAV_LINKS.length);
   });
 
   it('leaves out a group with nothing in it for the role', () => {
-    expect(sectionsOf(linksFor('member')).map((s) => s.label)).toEqual(['Crib', 'Stock', 'Builds', 'Mine']);
+    expect(sectionsOf(linksFor('member')).map((s) => s.label)).toEqual(['Crib', 'Stock', 'Builds', 'Chapter', 'Mine']);
     expect(sectionsOf(linksFor('lead')).map((s) => s.label)).toEqual(['Crib', 'Stock', 'Builds', 'Chapter', 'Mine']);
   });
 

@@ -13,6 +13,8 @@ const person = (id: number, name: string, role: Person['role'], active = true): 
   active,
   createdAt: `2026-0${id}-01T00:00:00.000Z`,
   deactivatedAt: active ? null : '2026-11-01T00:00:00.000Z',
+  hasBadge: false,
+  hasPin: false,
 });
 
 const PEOPLE = [

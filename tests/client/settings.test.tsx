@@ -89,13 +89,13 @@ describe('Settings', () => {
     expect(screen.getByLabelText<HTMLInputElement>('Hours a returned tool waits').value).toBe('48');
   });
 
-  it.each(['member', 'quartermaster'] as const)('shows a %s the settings without a form and does not ask for measured waste', async (role) => {
+  it.each(['member', 'quartermaster'] as const)('shows a %s the chapter settings without a form (only their own PIN) and does not ask for measured waste', async (role) => {
     const calls = renderSettings(role);
     expect(await screen.findByRole('heading', { name: 'Settings', level: 1 })).toBeTruthy();
-    expect(screen.queryByRole('form')).toBeNull();
+    expect(screen.getAllByRole('form').map((f) => f.getAttribute('aria-label'))).toEqual(['Station PIN']);
     expect(screen.queryByRole('spinbutton')).toBeNull();
     expect(screen.queryByRole('combobox')).toBeNull();
-    expect(screen.queryByRole('button')).toBeNull();
+    expect(screen.getAllByRole('button').map((b) => b.textContent)).toEqual(['Save PIN']);
     expect(screen.getByText(/Only the chapter lead changes them\.$/)).toBeTruthy();
     expect(screen.getByText('48 hours (2 days)')).toBeTruthy();
     expect(screen.getByText('America/Chicago', { selector: 'strong' })).toBeTruthy();

@@ -1,4 +1,3 @@
-import type { Response } from 'superagent';
 import { describe, expect } from 'vitest';
 import { sheetLayoutListSchema } from '@shared/schemas/labels';
 import { findSheetLayout } from '../../labels/layouts';
@@ -8,7 +7,7 @@ import { addBinAs, blindRivetBin } from '../helpers/crib';
 import { pdfPageCount, pdfRects, pdfStreams, shownText } from '../helpers/pdf-read';
 import { decodeQrPng, rectsToPng } from '../helpers/qr-raster';
 import { crewTest } from '../helpers/crew-test';
-import type { SignedInAgent } from '../helpers/test-app';
+import { postSheet } from '../helpers/label-sheet';
 
 const code = (n: number) => `T-${String(n).padStart(4, '0')}`;
 
@@ -18,19 +17,6 @@ const test = crewTest.extend('addTools', ({ t }) => (count: number, name = (n: n
     .values(Array.from({ length: count }, (_, i) => ({ code: code(i + 1), name: name(i + 1), category: 'hand_rivet_puller' as const })))
     .run();
 });
-
-/** Collects a PDF answer as bytes; a JSON answer (an error) is parsed as usual. */
-function bytesOrJson(res: Response, done: (err: Error | null, body: unknown) => void) {
-  const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => {
-    const body = Buffer.concat(chunks);
-    done(null, String(res.headers['content-type']).startsWith('application/json') ? JSON.parse(body.toString('utf8')) : body);
-  });
-}
-
-const postSheet = (who: SignedInAgent, body: unknown) =>
-  who.agent.post('/api/labels/sheet').set('X-CSRF-Token', who.csrf).send(body as object).buffer(true).parse(bytesOrJson);
 
 const textOf = (pdf: Buffer) => pdfStreams(pdf).flatMap(shownText);
 

@@ -22,6 +22,8 @@ describe('GET /api/users', () => {
       active: true,
       createdAt: expect.any(String),
       deactivatedAt: null,
+      hasBadge: false,
+      hasPin: false,
     });
     // No password hash leaves the server.
     expect(JSON.stringify(res.body)).not.toMatch(/argon2|passwordHash/);

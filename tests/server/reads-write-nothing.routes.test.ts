@@ -69,6 +69,7 @@ const GETS = (): string[] => [
   '/api/settings/planning',
   '/api/settings/crib',
   '/api/labels/layouts',
+  '/api/labels/people',
   '/api/bins',
   '/api/bins/restock',
   `/api/bins/slips/${ids.slip}`,

@@ -8,10 +8,12 @@ import { darkRuns, qrMatrix } from './qr-matrix';
 
 /**
  * One label: the code the QR carries and prints large, a title (a tool's or a bin's name) and, for
- * some bins, a short caution printed whole below it.
+ * some bins, a short caution printed whole below it. A badge's QR holds its secret token instead,
+ * which is never printed as text (`qr`).
  */
 export interface LabelItem {
   code: string;
+  qr?: string;
   title: string;
   caution?: string;
 }
@@ -66,7 +68,7 @@ export async function renderLabelSheet(layout: SheetLayout, items: readonly Labe
 
 function drawLabel(doc: PDFKit.PDFDocument, box: Box, item: LabelItem): void {
   const t = arrangeLabel(box, item.code.length);
-  drawQr(doc, t.qr, item.code);
+  drawQr(doc, t.qr, item.qr ?? item.code);
 
   doc.fillColor('black').font(CODE_FONT).fontSize(t.code.fontSize);
   doc.text(item.code, t.code.x, t.code.y, { lineBreak: false });

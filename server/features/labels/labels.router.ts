@@ -1,10 +1,11 @@
 import { Router } from 'express';
 import { labelSheetBodySchema } from '@shared/schemas/labels';
-import { requireRole } from '../../middleware/auth';
+import { badgeCandidates } from '../../accounts/badge.service';
+import { requireRole, requireUser } from '../../middleware/auth';
 import { parseInput } from '../../lib/validate';
 import { buildLabelSheet, listLayouts } from './labels.service';
 
-/** Label sheets for the quartermaster (and the lead): the layouts, and a PDF of labels for tools and bins. */
+/** Label sheets for the quartermaster (and the lead): the layouts, and a PDF of labels for tools, bins and people's badges. */
 export function labelsRouter() {
   const router = Router();
   router.use(requireRole('quartermaster'));
@@ -13,8 +14,12 @@ export function labelsRouter() {
     res.json({ data: listLayouts() });
   });
 
+  router.get('/people', (req, res) => {
+    res.json({ data: badgeCandidates(req.ctx) });
+  });
+
   router.post('/sheet', async (req, res) => {
-    const { filename, pdf } = await buildLabelSheet(req.ctx, parseInput(labelSheetBodySchema, req.body));
+    const { filename, pdf } = await buildLabelSheet(req.ctx, requireUser(req), parseInput(labelSheetBodySchema, req.body));
     res.setHeader('Content-Type', 'application/pdf');
     res.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
     res.send(pdf);

@@ -1,8 +1,10 @@
-import type { LabelSheetInput } from '@shared/schemas/labels';
+import { BADGE_LABEL_WORD, type LabelSheetInput } from '@shared/schemas/labels';
 import { TOOL_CODE_PATTERN } from '@shared/schemas/tools';
 import { BIN_CODE_PATTERN } from '@shared/stock/kinds';
 import { findSheetLayout, labelsPerPage, SHEET_LAYOUTS, type SheetLayout } from '../../../labels/layouts';
+import { issueBadges } from '../../accounts/badge.service';
 import type { ServiceContext } from '../../context';
+import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { renderLabelSheet, type LabelItem } from './label-sheet.renderer';
 import { toolNamesByCode } from '../tools/tools.reads';
@@ -17,8 +19,11 @@ export interface LabelSheetFile {
   pdf: Buffer;
 }
 
-/** A PDF of tool and bin labels, one per code in the order given (a code may repeat for a second label). */
-export async function buildLabelSheet(ctx: ServiceContext, input: LabelSheetInput): Promise<LabelSheetFile> {
+/**
+ * A PDF of tool and bin labels, one per code in the order given (a code may repeat for a second label),
+ * then a badge for each person: printing a badge issues it, so that person's old badge stops working.
+ */
+export async function buildLabelSheet(ctx: ServiceContext, actor: UserRow, input: LabelSheetInput): Promise<LabelSheetFile> {
   const layout = layoutFor(input.layoutId, input.skip);
   const toolLabels = [...toolNamesByCode(ctx.db, input.codes.filter(isToolCode))].map(([code, name]): [string, LabelText] => [code, { title: name }]);
   const titles = new Map([...toolLabels, ...findBinLabels(ctx.db, input.codes.filter(isBinCode))]);
@@ -31,7 +36,8 @@ export async function buildLabelSheet(ctx: ServiceContext, input: LabelSheetInpu
       input.codes.flatMap((code, i) => (titles.has(code) ? [] : [{ path: `codes.${i}`, message: `${noOneHas([code])} the code ${code}.` }])),
     );
   }
-  const items: LabelItem[] = input.codes.map((code) => ({ code, ...titles.get(code)! }));
+  const badges = issueBadges(ctx, actor, input.people).map(({ name, badge }): LabelItem => ({ code: BADGE_LABEL_WORD, qr: badge, title: name }));
+  const items: LabelItem[] = [...input.codes.map((code) => ({ code, ...titles.get(code)! })), ...badges];
   const pdf = await renderLabelSheet(layout, items, { skip: input.skip, createdAt: ctx.now() });
   return { filename: `gripline-labels-${layout.id}.pdf`, pdf };
 }

@@ -1,4 +1,5 @@
 import type { Person, UpdatePersonBody } from '@shared/schemas/people';
+import { badgeHolderIds, workingBadgeOf } from '../../accounts/badges.repo';
 import { toPerson } from '../../accounts/public-user';
 import { changeAccess, countActiveLeads, findUserById, listUsers } from '../../accounts/users.repo';
 import type { ServiceContext } from '../../context';
@@ -8,7 +9,8 @@ import { HttpError } from '../../lib/http-error';
 import { endSessionsOf } from '../../session/sessions-of';
 
 export function listPeople(ctx: ServiceContext): Person[] {
-  return listUsers(ctx.db).map(toPerson);
+  const holders = badgeHolderIds(ctx.db);
+  return listUsers(ctx.db).map((row) => toPerson(row, holders.has(row.id)));
 }
 
 /**
@@ -34,6 +36,6 @@ export function updatePerson(ctx: ServiceContext, actor: UserRow, id: number, ch
     });
     if (deactivating) endSessionsOf(ctx.db, id);
     if (deactivating) publish(ctx, { type: 'person.deactivated', userId: id, at: ctx.now() });
-    return toPerson(updated ?? person);
+    return toPerson(updated ?? person, workingBadgeOf(db, id) !== undefined);
   });
 }

@@ -47,7 +47,7 @@ export const NAV_LINKS: readonly NavLinkEntry[] = [
   { to: '/people', label: 'People', role: 'lead', group: 'chapter' },
   { to: '/signoffs', label: 'Sign-offs', role: 'lead', group: 'chapter' },
   { to: '/mail', label: 'Sent mail', role: 'lead', group: 'chapter' },
-  { to: '/settings', label: 'Settings', role: 'quartermaster', group: 'chapter' },
+  { to: '/settings', label: 'Settings', role: 'member', group: 'chapter' },
   { to: '/loans', label: 'My loans', role: 'member', group: 'mine', bar: 2 },
   { to: '/tab', label: 'My tab', role: 'member', group: 'mine' },
   { to: '/my-mail', label: 'My mail', role: 'member', group: 'mine' },

@@ -3,6 +3,7 @@ import { useSuspenseQuery } from '@tanstack/react-query';
 import { redirect, type LoaderFunctionArgs } from 'react-router';
 import { hasRole } from '@shared/roles';
 import { meQueryOptions } from '@/features/auth/api/get-me';
+import { StationPinCard } from '@/features/auth/components/station-pin-card';
 import { actualWasteQueryOptions, planningSettingsQueryOptions } from '@/features/forecast/api/planning-settings';
 import { WasteByMember } from '@/features/forecast/components/measured-waste';
 import { PlanningSettingsForm } from '@/features/forecast/components/planning-settings-form';
@@ -82,6 +83,7 @@ export function SettingsRoute() {
         <HoldTimeCard holdHours={crib.holdHours} canChange={isLead} />
         <TimeZoneCard timeZone={crib.timeZone} canChange={isLead} />
         <PaymentSettingsCard settings={payments} canChange={isLead} />
+        <StationPinCard />
       </div>
     </>
   );

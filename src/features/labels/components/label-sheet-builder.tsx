@@ -6,34 +6,61 @@ import { ItemPicker } from '@/components/ui/item-picker';
 import { codesInListOrder } from '@/components/ui/item-picking';
 import { Card } from '@/components/ui/page';
 import { BIN_FACETS, binSearchText, type PickableBin } from '../utils/bin-selection';
+import { PERSON_FACETS, personCode, personSearchText, pickedPersonIds, type PickablePerson } from '../utils/person-selection';
 import { TOOL_FACETS, toolSearchText, type PickableTool } from '../utils/tool-selection';
 import { LabelSheetForm } from './label-sheet-form';
 
-type Source = 'tools' | 'bins';
+type Source = 'tools' | 'bins' | 'people';
 
 interface LabelSheetBuilderProps {
   tools: readonly PickableTool[];
   /** Stock bins to label too; without them the builder picks tools only. */
   bins?: readonly PickableBin[];
+  /** People to print badges for (quartermaster and lead); printing one issues it anew. */
+  people?: readonly PickablePerson[];
+  /** People already chosen when the page opens (People's "Print badge" link); the builder then opens on People. */
+  initialPeople?: readonly number[];
   layouts: readonly SheetLayoutDto[];
 }
 
-/** Pick tools (and bins), choose the sheet, download the PDF. Tool labels come first, then bins, each in list order. */
-export function LabelSheetBuilder({ tools, bins, layouts }: LabelSheetBuilderProps) {
-  const [source, setSource] = useState<Source>('tools');
+/**
+ * Pick tools (and bins, and people's badges), choose the sheet, download the PDF. Tool labels come
+ * first, then bins, then badges, each in list order.
+ */
+export function LabelSheetBuilder({ tools, bins, people, initialPeople = [], layouts }: LabelSheetBuilderProps) {
+  const [source, setSource] = useState<Source>(people && initialPeople.length > 0 ? 'people' : 'tools');
   const [toolsPicked, setToolsPicked] = useState<Set<string>>(() => new Set());
   const [binsPicked, setBinsPicked] = useState<Set<string>>(() => new Set());
+  const [peoplePicked, setPeoplePicked] = useState<Set<string>>(() => new Set(initialPeople.map(personCode)));
   const codes = [...codesInListOrder(tools, toolsPicked), ...(bins ? codesInListOrder(bins, binsPicked) : [])];
+  const personIds = people ? pickedPersonIds(people, peoplePicked) : [];
   return (
     <div className="flex flex-col gap-4">
-      <Card title={bins ? '1. Pick tools and bins' : '1. Pick the tools'}>
+      <Card title={people ? '1. Pick tools, bins and people' : bins ? '1. Pick tools and bins' : '1. Pick the tools'}>
         {bins && (
-          <div role="group" aria-label="What to label" className="mb-4 grid grid-cols-2 gap-1 rounded-lg border-2 border-ink p-1 sm:inline-grid sm:w-96">
+          <div
+            role="group"
+            aria-label="What to label"
+            className={`mb-4 grid gap-1 rounded-lg border-2 border-ink p-1 sm:inline-grid ${people ? 'grid-cols-3 sm:w-[36rem]' : 'grid-cols-2 sm:w-96'}`}
+          >
             <SourceButton active={source === 'tools'} onClick={() => setSource('tools')} label="Tools" picked={toolsPicked.size} />
             <SourceButton active={source === 'bins'} onClick={() => setSource('bins')} label="Bins" picked={binsPicked.size} />
+            {people && <SourceButton active={source === 'people'} onClick={() => setSource('people')} label="People" picked={peoplePicked.size} />}
           </div>
         )}
-        {bins && source === 'bins' ? (
+        {people && source === 'people' ? (
+          <ItemPicker
+            key="people"
+            items={people}
+            selected={peoplePicked}
+            onChange={setPeoplePicked}
+            noun={{ one: 'person', many: 'people' }}
+            searchLabel="Search name"
+            searchIn={personSearchText}
+            facets={PERSON_FACETS}
+            describe={describePerson}
+          />
+        ) : bins && source === 'bins' ? (
           <ItemPicker
             key="bins"
             items={bins}
@@ -60,7 +87,12 @@ export function LabelSheetBuilder({ tools, bins, layouts }: LabelSheetBuilderPro
         )}
       </Card>
       <Card title="2. Choose the sheet and download">
-        <LabelSheetForm layouts={layouts} codes={codes} nothingPicked={bins ? 'No tools or bins picked yet.' : undefined} />
+        <LabelSheetForm
+          layouts={layouts}
+          codes={codes}
+          people={personIds}
+          nothingPicked={people ? 'No tools, bins or people picked yet.' : bins ? 'No tools or bins picked yet.' : undefined}
+        />
       </Card>
     </div>
   );
@@ -72,6 +104,13 @@ const describeTool = (tool: PickableTool) => (
     <span className="block text-sm text-steel">
       {CATEGORY_LABELS[tool.category]} · {STATUS_LABELS[tool.status]}
     </span>
+  </>
+);
+
+const describePerson = (person: PickablePerson) => (
+  <>
+    <span className="block break-words">{person.name}</span>
+    <span className="block text-sm text-steel">{person.hasBadge ? 'Has a badge' : 'No badge yet'}</span>
   </>
 );
 

@@ -2,7 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import { toast } from 'sonner';
 import type { z } from 'zod';
-import { labelSheetBodySchema, MAX_LABELS_PER_REQUEST, type SheetLayoutDto } from '@shared/schemas/labels';
+import { labelSheetFieldsSchema, MAX_LABELS_PER_REQUEST, type SheetLayoutDto } from '@shared/schemas/labels';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
@@ -10,7 +10,7 @@ import { applyServerErrors } from '@/lib/errors';
 import { useDownloadLabelSheet } from '../api/download-label-sheet';
 import { describeSheet } from '../utils/sheet-summary';
 
-const sheetOptionsSchema = labelSheetBodySchema.pick({ layoutId: true, skip: true });
+const sheetOptionsSchema = labelSheetFieldsSchema.pick({ layoutId: true, skip: true });
 type Input = z.input<typeof sheetOptionsSchema>;
 type Output = z.output<typeof sheetOptionsSchema>;
 
@@ -19,12 +19,14 @@ const perPageOf = (layout: SheetLayoutDto | undefined) => (layout ? layout.colum
 interface LabelSheetFormProps {
   layouts: readonly SheetLayoutDto[];
   codes: readonly string[];
+  /** People whose badges print after the codes' labels (each is issued anew). */
+  people?: readonly number[];
   /** What the summary says before anything is picked. */
   nothingPicked?: string;
 }
 
 /** The sheet layout, the labels already used on the first sheet, and the download. */
-export function LabelSheetForm({ layouts, codes, nothingPicked }: LabelSheetFormProps) {
+export function LabelSheetForm({ layouts, codes, people = [], nothingPicked }: LabelSheetFormProps) {
   const download = useDownloadLabelSheet();
   const form = useForm<Input, unknown, Output>({
     resolver: zodResolver(sheetOptionsSchema),
@@ -35,17 +37,18 @@ export function LabelSheetForm({ layouts, codes, nothingPicked }: LabelSheetForm
   const layout = layouts.find((l) => l.id === layoutId);
   const perPage = perPageOf(layout);
   const skipShown = perPage > 1 && Number.isInteger(skipValue) && skipValue! >= 0 && skipValue! < perPage ? skipValue! : 0;
-  const tooMany = codes.length > MAX_LABELS_PER_REQUEST;
+  const count = codes.length + people.length;
+  const tooMany = count > MAX_LABELS_PER_REQUEST;
 
   const submit = form.handleSubmit(async (options) => {
     const skip = perPage > 1 ? options.skip : 0;
-    if (codes.length === 0) return form.setError('root', { message: 'Pick at least one tool or bin to label.' });
+    if (count === 0) return form.setError('root', { message: 'Pick at least one tool, bin or person to label.' });
     if (skip >= perPage) {
       return form.setError('skip', { message: `A page of this layout has ${perPage} labels, so at most ${perPage - 1} can be already used.` });
     }
     try {
-      await download.mutateAsync({ layoutId: options.layoutId, codes: [...codes], skip });
-      toast.success(`Label sheet downloaded: ${describeSheet(codes.length, skip, perPage)}`);
+      await download.mutateAsync({ layoutId: options.layoutId, codes: [...codes], ...(people.length > 0 && { people: [...people] }), skip });
+      toast.success(`Label sheet downloaded: ${describeSheet(count, skip, perPage)}`);
     } catch (err) {
       form.setError('root', { message: applyServerErrors(err, form.setError, ['layoutId', 'skip']) });
     }
@@ -80,18 +83,19 @@ export function LabelSheetForm({ layouts, codes, nothingPicked }: LabelSheetForm
         )}
       </div>
       <p className="font-medium" aria-live="polite">
-        {describeSheet(codes.length, skipShown, perPage, nothingPicked)}
+        {describeSheet(count, skipShown, perPage, nothingPicked)}
       </p>
       {tooMany && (
         <Notice tone="warn">
-          Print at most {MAX_LABELS_PER_REQUEST} labels at a time: take {codes.length - MAX_LABELS_PER_REQUEST} off the list.
+          Print at most {MAX_LABELS_PER_REQUEST} labels at a time: take {count - MAX_LABELS_PER_REQUEST} off the list.
         </Notice>
       )}
       <Notice title="Print at actual size">
         Print the PDF at 100 % (not “fit to page”), or the labels drift off the sheet. Try a first page on plain paper and hold it
         against a label sheet to the light.
       </Notice>
-      <FormFooter submit="Download label sheet (PDF)" busy={download.isPending} disabled={codes.length === 0 || tooMany} />
+      {people.length > 0 && <Notice tone="warn">Printing a badge replaces that person’s old one.</Notice>}
+      <FormFooter submit="Download label sheet (PDF)" busy={download.isPending} disabled={count === 0 || tooMany} />
     </form>
   );
 }

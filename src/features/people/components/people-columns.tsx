@@ -5,6 +5,7 @@ import type { ListFeatures } from '@/components/ui/data-table';
 import { Code } from '@/components/ui/page';
 import { formatDate } from '@/lib/format';
 import { PersonActions } from './person-actions';
+import { StationActions, StationState } from './station-access';
 
 const helper = createColumnHelper<ListFeatures, Person>();
 
@@ -40,6 +41,16 @@ export function peopleColumns(selfId: number) {
         ) : (
           <span className="rounded bg-bad-soft px-2 py-0.5 text-sm font-medium text-bad">Deactivated</span>
         ),
+    }),
+    helper.display({
+      id: 'station',
+      header: 'Crib station',
+      cell: ({ row }) => (
+        <div className="flex flex-col gap-2">
+          <StationState person={row.original} />
+          <StationActions person={row.original} />
+        </div>
+      ),
     }),
     helper.accessor('createdAt', {
       header: 'Joined',

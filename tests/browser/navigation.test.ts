@@ -14,7 +14,7 @@ const ERROR_HEADINGS = /^(Page not found|Something went wrong|Not for your role|
 const MEMBER = { '': ['Home'], Crib: ['Scan', 'Tools'], Stock: ['Bins'], Builds: ['My builds'], Chapter: ['Settings'], Mine: ['My loans', 'My tab', 'My mail'] };
 const QUARTERMASTER = {
   '': ['Home'],
-  Crib: ['Scan', 'Tools', 'Service', 'Labels'],
+  Crib: ['Scan', 'Tools', 'Service', 'Labels', 'Stations'],
   Stock: ['Bins', 'Restock', 'Reorder alerts', 'Forecast', 'Payments'],
   Builds: ['My builds'],
   Chapter: ['Settings'],
@@ -22,7 +22,7 @@ const QUARTERMASTER = {
 };
 const LEAD = {
   '': ['Home'],
-  Crib: ['Scan', 'Tools', 'Overdue', 'Service', 'Labels'],
+  Crib: ['Scan', 'Tools', 'Overdue', 'Service', 'Labels', 'Stations'],
   Stock: ['Bins', 'Restock', 'Reorder alerts', 'Forecast', 'Consumables', 'Payments'],
   Builds: ['My builds'],
   Chapter: ['Overview', 'People', 'Sign-offs', 'Sent mail', 'Settings'],

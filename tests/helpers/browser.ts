@@ -83,6 +83,14 @@ export function demoToolCode(app: BuiltApp, name: string): string {
 export async function launchWithCameraOn(dir: string, code: string, extraArgs: string[] = []): Promise<Browser> {
   const video = join(dir, `${code}.y4m`);
   writeQrVideo(video, code);
+  return launchWithCameraFile(video, extraArgs);
+}
+
+/**
+ * Chromium whose fake camera plays `video`. Chromium opens the file each time a page starts the
+ * camera, so a test may write another picture there while no page has the camera running.
+ */
+export function launchWithCameraFile(video: string, extraArgs: string[] = []): Promise<Browser> {
   return launchChromium([
     '--use-fake-ui-for-media-stream',
     '--use-fake-device-for-media-stream',

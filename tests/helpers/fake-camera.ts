@@ -22,6 +22,16 @@ export function writeQrVideo(path: string, text: string, { width = 640, height =
       for (let dy = 0; dy < module; dy++) y.fill(16, (y0 + dy) * width + x0, (y0 + dy) * width + x0 + module);
     }
   }
+  writeGreyVideo(path, y, { width, height, frames });
+}
+
+/** A Y4M video of a plain light picture with no code in it: a camera pointed at nothing. */
+export function writeBlankVideo(path: string, { width = 640, height = 480, frames = 10 } = {}): void {
+  writeGreyVideo(path, Buffer.alloc(width * height, 235), { width, height, frames });
+}
+
+/** `frames` copies of the brightness plane `y`, with no colour. */
+function writeGreyVideo(path: string, y: Buffer, { width, height, frames }: { width: number; height: number; frames: number }): void {
   const chroma = Buffer.alloc((width / 2) * (height / 2), 128);
   const frame = Buffer.concat([Buffer.from('FRAME\n'), y, chroma, chroma]);
   const header = Buffer.from(`YUV4MPEG2 W${width} H${height} F10:1 Ip A1:1 C420jpeg\n`);

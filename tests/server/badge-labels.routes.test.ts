@@ -1,22 +1,14 @@
 import { describe, expect } from 'vitest';
-import { findSheetLayout } from '../../labels/layouts';
-import { pageSizeInPoints } from '../../labels/sheet-geometry';
 import { findWorkingBadge } from '../../server/accounts/badges.repo';
 import { hashLinkToken } from '../../server/accounts/link-tokens';
 import { crewTest } from '../helpers/crew-test';
-import { postSheet } from '../helpers/label-sheet';
-import { pdfRects, pdfStreams, shownText } from '../helpers/pdf-read';
-import { decodeQrPng, rectsToPng } from '../helpers/qr-raster';
+import { postSheet, qrTextsOnSheet } from '../helpers/label-sheet';
+import { pdfStreams, shownText } from '../helpers/pdf-read';
 
 const LAYOUT = 'thermal-1x1-2x1in';
 
 /** The badge tokens the QR codes of a one-label-a-page sheet hold, page by page. */
-function qrTokens(pdf: Buffer): (string | null)[] {
-  const page = pageSizeInPoints(findSheetLayout(LAYOUT)!);
-  return pdfStreams(pdf)
-    .filter((s) => pdfRects(s).length > 0)
-    .map((content) => decodeQrPng(rectsToPng(page.width, page.height, pdfRects(content), 8)));
-}
+const qrTokens = (pdf: Buffer) => qrTextsOnSheet(pdf, LAYOUT);
 
 describe('POST /api/labels/sheet with people', () => {
   crewTest('prints a badge: the QR holds a token that signs in at a station, the name under it, and the old badge stops working', async ({ t, crew, qm }) => {

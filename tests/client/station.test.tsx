@@ -115,6 +115,19 @@ describe('the crib station', () => {
     expect(await screen.findByRole('heading', { name: 'Hello, Ines Okafor' })).toBeTruthy();
   });
 
+  it('keeps the person signed in when their own badge is read again (held up to the camera while they typed the PIN)', async () => {
+    const calls = fakeStationServer();
+    const user = userEvent.setup();
+    renderWithProviders(<StationRoute />, '/station');
+    await scanBadge(user, BADGE);
+    await typePin(user, PIN);
+    await screen.findByRole('heading', { name: 'Hello, Marco Bellweather' });
+    await user.type(screen.getByLabelText('Scanner, or type a tool or bin code'), `${BADGE}{Enter}`);
+    expect(screen.getByRole('heading', { name: 'Hello, Marco Bellweather' })).toBeTruthy();
+    expect(screen.queryByRole('heading', { name: 'Type your PIN' })).toBeNull();
+    expect(calls.some((c) => c.path === '/api/station/done')).toBe(false);
+  });
+
   it('starts a person’s session with nothing cached from whoever used the browser before', async () => {
     fakeStationServer();
     const user = userEvent.setup();

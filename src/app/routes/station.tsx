@@ -138,7 +138,7 @@ function StationScreen({ station, onRevoked }: { station: KeptStation; onRevoked
         // Nothing cached before (the person who enrolled the tablet, the last one here) shows for this one.
         onSuccess: (session) => {
           lastToldServer.current = Date.now();
-          clearPerson({ kind: 'signed-in', session });
+          clearPerson({ kind: 'signed-in', session, badge });
         },
         onError: (err) => {
           const next = afterRefusedSignIn(err, badge);
@@ -196,7 +196,7 @@ function StationScreen({ station, onRevoked }: { station: KeptStation; onRevoked
             name={step.session.user.name}
             countdown={<IdleCountdown secondsLeft={idle.secondsLeft} />}
             onScan={activity}
-            onBadge={(badge) => done({ kind: 'pin', badge })}
+            onBadge={(badge) => badge !== step.badge && done({ kind: 'pin', badge })}
             onDone={() => done()}
           />
         )}

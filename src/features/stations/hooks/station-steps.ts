@@ -6,7 +6,8 @@ import { formatQuantity } from '@/lib/format';
 export type StationStep =
   | { kind: 'badge'; notice?: string }
   | { kind: 'pin'; badge: string; notice?: string }
-  | { kind: 'signed-in'; session: StationSession };
+  /** `badge` is the one they signed in with: read again (still held up to the camera) it changes nothing. */
+  | { kind: 'signed-in'; session: StationSession; badge: string };
 
 export const NO_LABEL_YET = 'That is a tool or bin label. Scan your badge first.';
 

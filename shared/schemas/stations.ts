@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { userSchema } from './auth';
+import { catalogueBinSchema, catalogueToolSchema } from './offline';
 
 /**
  * The crib station: a shared tablet at the crib door where a member signs in with a badge and a PIN.
@@ -60,3 +61,54 @@ export type EnrolledStation = z.infer<typeof enrolledStationSchema>;
 export type Station = z.infer<typeof stationSchema>;
 export type StationSignInBody = z.infer<typeof stationSignInBodySchema>;
 export type StationSession = z.infer<typeof stationSessionSchema>;
+
+/**
+ * A badge's token as printed in its QR code: 43 characters of base64url (256 random bits). A scan
+ * that is neither a label nor this shape is refused at once, before any PIN is asked for.
+ */
+export const BADGE_TOKEN_PATTERN = /^[A-Za-z0-9_-]{43}$/;
+
+/** A SHA-256 in hex: how the station's copy names a badge (the token itself is only on the badge). */
+export const sha256HexField = z.string().regex(/^[0-9a-f]{64}$/);
+
+/**
+ * One person in the station's copy: a working badge (by its token's SHA-256), the PIN's argon2id hash
+ * (PHC string, null when none is set), and what their offline checks need: their loans, sign-offs,
+ * open assemblies and what they have drawn from each bin and not returned.
+ */
+export const stationCopyPersonSchema = z.strictObject({
+  id: z.number().int(),
+  name: z.string(),
+  role: userSchema.shape.role,
+  badgeHash: sha256HexField,
+  pinHash: z.string().nullable(),
+  loans: z.array(z.object({ code: z.string(), dueAt: z.string() })),
+  signoffs: z.array(z.number()),
+  assemblies: z.array(z.object({ id: z.number(), name: z.string(), buildName: z.string() })),
+  /** Bin code → amount drawn by this person and not returned; bins at zero are left out. */
+  drawn: z.record(z.string(), z.number()),
+});
+
+/**
+ * GET /api/station/copy (with the station token header; no person need be signed in): what a station
+ * keeps to go on without the network. Tools and bins as in the phone's catalogue (a bin's `drawnByYou`
+ * is 0 here: each person's is in `drawn`); people who hold a working badge, active ones only.
+ */
+export const stationCopySchema = z.strictObject({
+  takenAt: z.string(),
+  station: z.strictObject({ id: z.number().int(), name: z.string() }),
+  tools: z.array(catalogueToolSchema),
+  bins: z.array(catalogueBinSchema),
+  people: z.array(stationCopyPersonSchema),
+});
+
+/**
+ * POST /api/station/replay-sign-in (with the station token header): a session for the badge's holder
+ * that may only send actions the station queued while offline (their PIN was checked against the
+ * copy then). Answers as sign-in does; a revoked or unknown badge is 401 BADGE_NOT_RECOGNISED.
+ */
+export const stationReplaySignInBodySchema = z.strictObject({ badge: z.string().trim().min(1, { error: 'Scan a badge.' }) });
+
+export type StationCopyPerson = z.infer<typeof stationCopyPersonSchema>;
+export type StationCopy = z.infer<typeof stationCopySchema>;
+export type StationReplaySignInBody = z.infer<typeof stationReplaySignInBodySchema>;

@@ -1,4 +1,4 @@
-import { and, eq, isNull } from 'drizzle-orm';
+import { and, asc, eq, isNull } from 'drizzle-orm';
 import type { Executor } from '../db/client';
 import { badges, type BadgeRow } from '../db/schema/badges';
 import { users, type UserRow } from '../db/schema/users';
@@ -38,4 +38,24 @@ export function workingBadgeOf(db: Executor, userId: number): BadgeRow | undefin
 export function badgeHolderIds(db: Executor): Set<number> {
   const rows = db.select({ userId: badges.userId }).from(badges).where(isNull(badges.revokedAt)).all();
   return new Set(rows.map((r) => r.userId));
+}
+
+/** A person holding a working badge, as a station's offline copy keeps them (no e-mail). */
+export interface BadgeHolder {
+  userId: number;
+  name: string;
+  role: UserRow['role'];
+  badgeHash: string;
+  pinHash: string | null;
+}
+
+/** Every active person with a working badge, by name: one query. */
+export function workingBadgeHolders(db: Executor): BadgeHolder[] {
+  return db
+    .select({ userId: users.id, name: users.name, role: users.role, badgeHash: badges.tokenHash, pinHash: users.pinHash })
+    .from(badges)
+    .innerJoin(users, eq(users.id, badges.userId))
+    .where(and(isNull(badges.revokedAt), isNull(users.deactivatedAt)))
+    .orderBy(asc(users.name), asc(users.id))
+    .all();
 }

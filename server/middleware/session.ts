@@ -8,6 +8,11 @@ declare module 'express-session' {
     /** Set for a station session: the station it was opened at, and its last request (epoch ms). */
     stationId?: number;
     stationActiveAt?: number;
+    /**
+     * A replay session (POST /api/station/replay-sign-in): opened with the station token and a badge,
+     * no PIN, to send what the station queued offline; it may make only the queued actions.
+     */
+    stationReplay?: boolean;
   }
 }
 

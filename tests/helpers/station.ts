@@ -30,6 +30,8 @@ export interface StationBrowser {
   post(path: string, body?: unknown): request.Test;
   del(path: string): request.Test;
   signIn(badge: string, pin: string): Promise<request.Response>;
+  /** Opens a replay session for the badge (no PIN), as the station does once it is back online. */
+  replaySignIn(badge: string): Promise<request.Response>;
 }
 
 export function stationBrowser(t: TestApp, stationToken: string): StationBrowser {
@@ -44,6 +46,12 @@ export function stationBrowser(t: TestApp, stationToken: string): StationBrowser
       browser.csrf = ((await browser.get('/api/auth/csrf')).body as { token: string }).token;
       const res = await browser.post('/api/station/sign-in', { badge, pin });
       if (res.status === 200) browser.csrf = ((await browser.get('/api/auth/csrf')).body as { token: string }).token;
+      return res;
+    },
+    async replaySignIn(badge) {
+      browser.csrf = ((await browser.get('/api/auth/csrf')).body as { token: string }).token;
+      const res = await browser.post('/api/station/replay-sign-in', { badge });
+      if (res.status === 200) browser.csrf = res.headers['x-csrf-token'] as string;
       return res;
     },
   };

@@ -49,6 +49,7 @@ const GETS = (): string[] => [
   '/api/users',
   '/api/stations',
   '/api/station/session',
+  '/api/station/copy',
   '/api/mail',
   '/api/mail/mine',
   '/api/reference/drills',

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { stationMayRequest } from '../../server/features/stations/station-scope';
+import { replayMayRequest, stationMayRequest } from '../../server/features/stations/station-scope';
 
 describe('the station allow-list', () => {
   it.each([
@@ -13,6 +13,8 @@ describe('the station allow-list', () => {
     ['POST', '/bins/B-0107/return'],
     ['GET', '/assemblies'],
     ['GET', '/photos/12/thumbnail'],
+    ['GET', '/station/copy'],
+    ['POST', '/station/replay-sign-in'],
   ])('lets %s %s through', (method, path) => {
     expect(stationMayRequest(method, path)).toBe(true);
   });
@@ -33,5 +35,41 @@ describe('the station allow-list', () => {
     ['GET', '/photos/abc'],
   ])('refuses %s %s', (method, path) => {
     expect(stationMayRequest(method, path)).toBe(false);
+  });
+});
+
+describe('the replay allow-list', () => {
+  it.each([
+    ['POST', '/tools/T-0042/checkout'],
+    ['POST', '/tools/T-0042/return'],
+    ['POST', '/bins/B-0107/draw'],
+    ['POST', '/bins/B-0107/return'],
+  ])('lets the queued %s %s through with both queue headers only', (method, path) => {
+    expect(replayMayRequest(method, path, true)).toBe(true);
+    expect(replayMayRequest(method, path, false)).toBe(false);
+  });
+
+  it.each([
+    ['GET', '/auth/me'],
+    ['GET', '/auth/csrf'],
+    ['POST', '/station/done'],
+    ['POST', '/station/replay-sign-in'],
+  ])('lets %s %s through without them', (method, path) => {
+    expect(replayMayRequest(method, path, false)).toBe(true);
+  });
+
+  it.each([
+    ['GET', '/tools/T-0042'],
+    ['GET', '/station/session'],
+    ['GET', '/station/copy'],
+    ['POST', '/station/sign-in'],
+    ['POST', '/tools/T-0042/holds'],
+    ['DELETE', '/tools/T-0042/holds/mine'],
+    ['POST', '/tools/T-0042/photos'],
+    ['GET', '/users'],
+    ['POST', '/bins/B-0107/receive'],
+    ['GET', '/tools/T-0042/checkout'],
+  ])('refuses %s %s even with the queue headers', (method, path) => {
+    expect(replayMayRequest(method, path, true)).toBe(false);
   });
 });

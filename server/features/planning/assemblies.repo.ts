@@ -38,8 +38,12 @@ export function findAssembly(db: Executor, id: number): AssemblyInBuild | undefi
   return joined(db, eq(assemblies.id, id)).get();
 }
 
-export function listAssemblies(db: Executor, f: { ownerId?: number; status?: AssemblyStatus }): AssemblyInBuild[] {
-  const where = and(f.ownerId === undefined ? undefined : eq(builds.ownerId, f.ownerId), f.status ? eq(assemblies.status, f.status) : undefined);
+export function listAssemblies(db: Executor, f: { ownerId?: number; ownerIds?: readonly number[]; status?: AssemblyStatus }): AssemblyInBuild[] {
+  const where = and(
+    f.ownerId === undefined ? undefined : eq(builds.ownerId, f.ownerId),
+    f.ownerIds === undefined ? undefined : inArray(builds.ownerId, [...f.ownerIds]),
+    f.status ? eq(assemblies.status, f.status) : undefined,
+  );
   return joined(db, where)
     .orderBy(asc(assemblies.plannedStart), asc(assemblies.id))
     .all()

@@ -33,7 +33,19 @@ export function binReorders(ctx: ServiceContext): Map<number, BinReorder> {
 
 /** The assemblies a member may draw for: their own, not done. */
 export function openAssembliesOf(db: Executor, ownerId: number): Catalogue['yourAssemblies'] {
-  return listAssemblies(db, { ownerId })
-    .filter((a) => a.assembly.status !== 'done')
-    .map((a) => ({ id: a.assembly.id, name: a.assembly.name, buildName: a.build.name }));
+  return openAssembliesByOwner(db, [ownerId]).get(ownerId) ?? [];
+}
+
+/** openAssembliesOf for each of these people, by person, in one query; someone with none is absent. */
+export function openAssembliesByOwner(db: Executor, ownerIds: readonly number[]): Map<number, Catalogue['yourAssemblies']> {
+  const byOwner = new Map<number, Catalogue['yourAssemblies']>();
+  if (ownerIds.length === 0) return byOwner;
+  for (const a of listAssemblies(db, { ownerIds })) {
+    if (a.assembly.status === 'done') continue;
+    const open = { id: a.assembly.id, name: a.assembly.name, buildName: a.build.name };
+    const list = byOwner.get(a.build.ownerId);
+    if (list) list.push(open);
+    else byOwner.set(a.build.ownerId, [open]);
+  }
+  return byOwner;
 }

@@ -1,13 +1,14 @@
-import { Router } from 'express';
+import { Router, type Request, type Response } from 'express';
 import { idParam, noFieldsBodySchema } from '@shared/schemas/fields';
-import { enrolStationBodySchema, STATION_IDLE_SECONDS, STATION_TOKEN_HEADER, stationSignInBodySchema, type StationSession } from '@shared/schemas/stations';
+import { enrolStationBodySchema, STATION_IDLE_SECONDS, STATION_TOKEN_HEADER, stationReplaySignInBodySchema, stationSignInBodySchema, type StationSession } from '@shared/schemas/stations';
 import { z } from 'zod';
 import { toUser } from '../../accounts/public-user';
 import { requireRole, requireUser } from '../../middleware/auth';
 import { SESSION_COOKIE } from '../../middleware/session';
 import { endSession, signInSession } from '../../lib/session-helpers';
 import { parseInput } from '../../lib/validate';
-import { checkStationSignIn, enrolStation, idleSecondsLeft, revokeStationById, sessionEnded, stationList } from './stations.service';
+import { takeStationCopy } from './station-copy.service';
+import { checkReplaySignIn, checkStationSignIn, enrolStation, type StationSignIn, idleSecondsLeft, revokeStationById, sessionEnded, stationList } from './stations.service';
 
 const idParams = z.object({ id: idParam });
 
@@ -37,14 +38,29 @@ export function stationsRouter() {
 export function stationSessionRouter() {
   const router = Router();
 
-  router.post('/sign-in', async (req, res) => {
-    const body = parseInput(stationSignInBodySchema, req.body);
-    const { station, user } = await checkStationSignIn(req.ctx, req.get(STATION_TOKEN_HEADER), body.badge, body.pin);
-    const csrfToken = await signInSession(req, user.id, { stationId: station.id, stationActiveAt: req.ctx.now().getTime() });
+  /** Starts a station session (a new session id) and answers it, with the new CSRF token in X-CSRF-Token. */
+  async function startSession(req: Request, res: Response, { station, user }: StationSignIn, replay: boolean) {
+    const csrfToken = await signInSession(req, user.id, { stationId: station.id, stationActiveAt: req.ctx.now().getTime(), ...(replay ? { stationReplay: true } : {}) });
     // The regenerated session has a new CSRF token; GET /api/auth/csrf answers it as well.
     res.set('X-CSRF-Token', csrfToken);
     const session: StationSession = { user: toUser(user), station: { id: station.id, name: station.name }, idleSeconds: STATION_IDLE_SECONDS };
     res.json(session);
+  }
+
+  router.post('/sign-in', async (req, res) => {
+    const body = parseInput(stationSignInBodySchema, req.body);
+    await startSession(req, res, await checkStationSignIn(req.ctx, req.get(STATION_TOKEN_HEADER), body.badge, body.pin), false);
+  });
+
+  // Back online: a session that may only send what the station queued for this badge's holder.
+  router.post('/replay-sign-in', async (req, res) => {
+    const body = parseInput(stationReplaySignInBodySchema, req.body);
+    await startSession(req, res, checkReplaySignIn(req.ctx, req.get(STATION_TOKEN_HEADER), body.badge), true);
+  });
+
+  // What the station keeps to go on offline; no person need be signed in.
+  router.get('/copy', (req, res) => {
+    res.json(takeStationCopy(req.ctx, req.get(STATION_TOKEN_HEADER)));
   });
 
   router.get('/session', (req, res) => {

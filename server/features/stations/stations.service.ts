@@ -78,16 +78,25 @@ const locked = (until: Date, now: Date) => {
   );
 };
 
+const badgeNotRecognised = () =>
+  new HttpError(401, 'BADGE_NOT_RECOGNISED', 'This badge is not recognised: it may have been reprinted. Ask a quartermaster for a new one.');
+
 const pinChecks = oneAtATime();
+
+/** A station and the person a badge (and PIN) signed in there. */
+export interface StationSignIn {
+  station: StationRow;
+  user: UserRow;
+}
 
 /**
  * Checks a badge and PIN at a station. Wrong PINs are counted per badge per station; the lock
  * touches nothing else (the person's own sign-in, or the badge at another station).
  */
-export async function checkStationSignIn(ctx: ServiceContext, token: string | undefined, badgeToken: string, pin: string): Promise<{ station: StationRow; user: UserRow }> {
+export async function checkStationSignIn(ctx: ServiceContext, token: string | undefined, badgeToken: string, pin: string): Promise<StationSignIn> {
   const station = stationOfToken(ctx, token);
   const found = findWorkingBadge(ctx.db, hashLinkToken(badgeToken));
-  if (!found) throw new HttpError(401, 'BADGE_NOT_RECOGNISED', 'This badge is not recognised: it may have been reprinted. Ask a quartermaster for a new one.');
+  if (!found) throw badgeNotRecognised();
   const { badge, user } = found;
   // Attempts for one badge at one station are checked in turn: a burst cannot try more PINs than the lock allows.
   return pinChecks(`${station.id}:${badge.id}`, async () => {
@@ -103,6 +112,21 @@ export async function checkStationSignIn(ctx: ServiceContext, token: string | un
     const left = STATION_PIN_TRIES - pinFailuresSince(ctx.db, station.id, badge.id, new Date(now.getTime() - LOCK_MS)).count;
     throw new HttpError(401, 'WRONG_PIN', `That PIN is not right: ${left} ${left === 1 ? 'try' : 'tries'} left before this badge is locked here for ${STATION_LOCK_MINUTES} minutes.`);
   });
+}
+
+/**
+ * Checks a badge for a replay session (the actions a station queued offline, sent once it is online
+ * again). No PIN is asked, so wrong PINs are neither counted nor a lock: the station checked the PIN
+ * against its copy (the argon2id hash in GET /api/station/copy) when the person was at it. The server
+ * trusts an enrolled station for that, as it trusts it to read the badge; what it still checks is
+ * that the station is enrolled and the badge works for an active person now. The PIN as it is now
+ * plays no part: one changed or cleared by a lead since the actions were queued still lets them through.
+ */
+export function checkReplaySignIn(ctx: ServiceContext, token: string | undefined, badgeToken: string): StationSignIn {
+  const station = stationOfToken(ctx, token);
+  const found = findWorkingBadge(ctx.db, hashLinkToken(badgeToken));
+  if (!found) throw badgeNotRecognised();
+  return { station, user: found.user };
 }
 
 export type StationCheck = { ok: true; station: StationRow } | { ok: false; error: HttpError };

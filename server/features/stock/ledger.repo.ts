@@ -1,4 +1,4 @@
-import { and, desc, eq, gte, lt, sql } from 'drizzle-orm';
+import { and, desc, eq, gte, inArray, lt, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
 import type { MovementKind } from '@shared/stock/kinds';
 import type { Database, Executor } from '../../db/client';
@@ -63,13 +63,23 @@ export function netDrawnBy(db: Database, binId: number, memberId: number): numbe
 
 /** netDrawnBy for every bin the member has taken from, in one query (bins with nothing to return are left out). */
 export function netDrawnPerBin(db: Executor, memberId: number): Map<number, number> {
+  return new Map(netDrawnPerMemberAndBin(db, [memberId]).map((r) => [r.binId, r.n]));
+}
+
+/**
+ * netDrawnPerBin for each of these members, in one query: a row per member and bin they have
+ * something to return to (with the bin's code), nothing for the rest.
+ */
+export function netDrawnPerMemberAndBin(db: Executor, memberIds: readonly number[]): { memberId: number; binId: number; binCode: string; n: number }[] {
+  if (memberIds.length === 0) return [];
   const rows = db
-    .select({ binId: stockMovements.binId, n: netDrawn })
+    .select({ memberId: stockMovements.memberId, binId: stockMovements.binId, binCode: bins.code, n: netDrawn })
     .from(stockMovements)
-    .where(eq(stockMovements.memberId, memberId))
-    .groupBy(stockMovements.binId)
+    .innerJoin(bins, eq(bins.id, stockMovements.binId))
+    .where(inArray(stockMovements.memberId, [...memberIds]))
+    .groupBy(stockMovements.memberId, stockMovements.binId)
     .all();
-  return new Map(rows.filter((r) => r.n > 0).map((r) => [r.binId, r.n]));
+  return rows.flatMap((r) => (r.memberId !== null && r.n > 0 ? [{ memberId: r.memberId, binId: r.binId, binCode: r.binCode, n: r.n }] : []));
 }
 
 const actor = alias(users, 'actor');

@@ -28,7 +28,7 @@ export function binsCsv(ctx: ServiceContext): string {
   return toCsv(BIN_EXPORT_FIELDS, bins.map(binCells));
 }
 
-const LEDGER_FIELDS = ['id', 'at', 'bin_code', 'designation', 'kind', 'quantity', 'balance_after', 'unit_cost', 'value', 'by', 'for_member', 'assembly_id', 'assembly', 'build', 'note', 'reverses_id'];
+const LEDGER_FIELDS = ['id', 'at', 'bin_code', 'designation', 'kind', 'quantity', 'balance_after', 'unit_cost', 'value', 'by', 'for_member', 'assembly_id', 'assembly', 'build', 'note', 'reverses_id', 'station'];
 const LEDGER_EXPORT_LIMIT = 500_000;
 
 /** Every ledger entry from the first day to the last, whole chapter days, oldest first. */
@@ -44,7 +44,7 @@ export function ledgerCsv(ctx: ServiceContext, range: LedgerExportQuery): string
     entries.flatMap(({ m }) => (m.assemblyId === null ? [] : [m.assemblyId])),
   );
   // listMovements answers newest first (at, then id); the reverse is oldest first.
-  const rows = entries.reverse().map(({ m, binCode, actorName, memberName }): Cell[] => [
+  const rows = entries.reverse().map(({ m, binCode, actorName, memberName, stationName }): Cell[] => [
     m.id,
     m.at.toISOString(),
     text(binCode),
@@ -61,6 +61,8 @@ export function ledgerCsv(ctx: ServiceContext, range: LedgerExportQuery): string
     text(m.assemblyId === null ? null : assemblies.get(m.assemblyId)?.buildName),
     text(m.note),
     m.reversesId,
+    // The station's name (through stations.reads, as on the ledger screen); empty when made on a person's own device.
+    text(stationName),
   ]);
   return toCsv(LEDGER_FIELDS, rows);
 }

@@ -10,7 +10,7 @@ import { binDesignation } from '@shared/stock/fasteners';
 import { RIVET_KINDS } from '@shared/stock/kinds';
 import type { Executor } from '../../db/client';
 import { bins, stockMovements, type BinRow } from '../../db/schema/stock';
-import { netDrawnPerBin } from './ledger.repo';
+import { netDrawnPerBin, netDrawnPerMemberAndBin } from './ledger.repo';
 import { refundByProviderId } from './money.repo';
 
 /** A bin as stock keeps it; other features read it, only stock writes it. */
@@ -118,9 +118,8 @@ export function weeklyConsumption(db: Executor, from: Date, to: Date, weekMs: nu
 
 // ---- for offline ----
 
-/** Every bin, as a phone keeps it for offline use, with what this member may return unused to each: two queries. */
-export function catalogueBins(db: Executor, memberId: number): CatalogueBin[] {
-  const drawn = netDrawnPerBin(db, memberId);
+/** Every bin as an offline copy keeps it, `drawnByYou` from the map (bin id → units) or 0: one query. */
+function catalogueBinsWith(db: Executor, drawn: ReadonlyMap<number, number>): CatalogueBin[] {
   return allBins(db).map((bin) => ({
     code: bin.code,
     kind: bin.kind,
@@ -130,6 +129,30 @@ export function catalogueBins(db: Executor, memberId: number): CatalogueBin[] {
     onHand: bin.onHand,
     drawnByYou: drawn.get(bin.id) ?? 0,
   }));
+}
+
+/** Every bin, as a phone keeps it for offline use, with what this member may return unused to each: two queries. */
+export function catalogueBins(db: Executor, memberId: number): CatalogueBin[] {
+  return catalogueBinsWith(db, netDrawnPerBin(db, memberId));
+}
+
+/** Every bin, as a station keeps it for offline use: nobody's `drawnByYou` (0; each person's is in `drawnByPerson`). One query. */
+export function stationCatalogueBins(db: Executor): CatalogueBin[] {
+  return catalogueBinsWith(db, new Map());
+}
+
+/**
+ * What each of these people may return unused, by person: bin code → units drawn and not returned
+ * (the very rule behind `drawnByYou`), bins at zero left out. One query; someone with nothing is absent.
+ */
+export function drawnByPerson(db: Executor, personIds: readonly number[]): Map<number, Record<string, number>> {
+  const byPerson = new Map<number, Record<string, number>>();
+  for (const r of netDrawnPerMemberAndBin(db, personIds)) {
+    const drawn = byPerson.get(r.memberId) ?? {};
+    drawn[r.binCode] = r.n;
+    byPerson.set(r.memberId, drawn);
+  }
+  return byPerson;
 }
 
 // ---- for the demo seed ----

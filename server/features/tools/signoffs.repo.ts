@@ -1,4 +1,4 @@
-import { and, asc, count, eq, isNull, ne, sql } from 'drizzle-orm';
+import { and, asc, count, eq, inArray, isNull, ne, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
 import type { Database, Executor } from '../../db/client';
 import { preparedPerDatabase } from '../../db/prepared';
@@ -43,8 +43,8 @@ export function countToolsPerSignoff(db: Executor): Map<number, number> {
   return new Map(rows.map((r) => [r.id!, r.n]));
 }
 
-/** Grants not revoked, with the holder's and the granter's names. */
-export function listActiveGrants(db: Executor, filter: { userId?: number } = {}) {
+/** Grants not revoked, with the holder's and the granter's names (of one person, or of several, when asked). */
+export function listActiveGrants(db: Executor, filter: { userId?: number; userIds?: readonly number[] } = {}) {
   return db
     .select({
       grantId: memberSignoffs.id,
@@ -59,7 +59,13 @@ export function listActiveGrants(db: Executor, filter: { userId?: number } = {})
     .from(memberSignoffs)
     .innerJoin(users, eq(users.id, memberSignoffs.userId))
     .innerJoin(granter, eq(granter.id, memberSignoffs.grantedById))
-    .where(and(isNull(memberSignoffs.revokedAt), filter.userId !== undefined ? eq(memberSignoffs.userId, filter.userId) : undefined))
+    .where(
+      and(
+        isNull(memberSignoffs.revokedAt),
+        filter.userId !== undefined ? eq(memberSignoffs.userId, filter.userId) : undefined,
+        filter.userIds !== undefined ? inArray(memberSignoffs.userId, [...filter.userIds]) : undefined,
+      ),
+    )
     .orderBy(asc(users.name), asc(memberSignoffs.id))
     .all();
 }

@@ -89,3 +89,15 @@ export function catalogueTools(db: Database): CatalogueTool[] {
 export function signoffIdsOf(db: Executor, userId: number): number[] {
   return listActiveGrants(db, { userId }).map((g) => g.signoffId);
 }
+
+/** The sign-offs each of these people holds now (not revoked), by person: one query; someone holding none is absent. */
+export function signoffIdsByPerson(db: Executor, userIds: readonly number[]): Map<number, number[]> {
+  const byPerson = new Map<number, number[]>();
+  if (userIds.length === 0) return byPerson;
+  for (const g of listActiveGrants(db, { userIds })) {
+    const held = byPerson.get(g.userId);
+    if (held) held.push(g.signoffId);
+    else byPerson.set(g.userId, [g.signoffId]);
+  }
+  return byPerson;
+}

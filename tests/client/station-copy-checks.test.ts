@@ -90,8 +90,9 @@ describe('a badge scanned while the station sends its queue', () => {
         return new Response(JSON.stringify({ token: 'token-1' }), { status: 200, headers: { 'Content-Type': 'application/json' } });
       }),
     );
-    const endSession = vi.fn(async () => {
+    const endSession = vi.fn(() => {
       order.push('end session');
+      return Promise.resolve();
     });
 
     const replay = replayStationQueue(4, endSession);

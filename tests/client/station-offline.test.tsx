@@ -116,6 +116,19 @@ describe('the PIN pad and a USB keypad', () => {
     expect(calls.find((c) => c.path === '/api/station/sign-in')?.body).toEqual({ badge: BADGE, pin: PIN });
   });
 
+  it('leaves Enter on the Cancel button to that button', async () => {
+    const calls = fakeStationServer();
+    const user = userEvent.setup();
+    renderWithProviders(<StationRoute />, '/station');
+    await scanBadge(user, BADGE);
+    await screen.findByRole('heading', { name: 'Type your PIN' });
+    await user.keyboard('2468');
+    act(() => screen.getByRole('button', { name: 'Cancel' }).focus());
+    await user.keyboard('{Enter}');
+    expect(await screen.findByRole('heading', { name: 'Scan your badge' })).toBeTruthy();
+    expect(calls.filter((c) => c.path === '/api/station/sign-in')).toEqual([]);
+  });
+
   it('does not send fewer than 4 digits on Enter', async () => {
     const calls = fakeStationServer();
     const user = userEvent.setup();

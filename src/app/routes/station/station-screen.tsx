@@ -212,7 +212,15 @@ export function StationScreen({ station, onRevoked }: { station: KeptStation; on
               {busy ? 'Checking…' : ''}
             </p>
             <PinPad busy={busy} onPin={(pin) => void sendPin(step.badge, pin, step.name)} />
-            <Button variant="secondary" className="min-h-16 text-xl!" onClick={() => setStep({ kind: 'badge' })}>
+            <Button
+              variant="secondary"
+              className="min-h-16 text-xl!"
+              onClick={() => {
+                setStep({ kind: 'badge' });
+                // A replay the badge stopped goes on.
+                void sync.sync();
+              }}
+            >
               Cancel
             </Button>
           </>

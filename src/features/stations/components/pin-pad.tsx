@@ -24,6 +24,7 @@ export function PinPad({ onPin, busy }: { onPin: (pin: string) => void; busy: bo
     setPin('');
   };
 
+  const pad = useRef<HTMLDivElement>(null);
   const keys = useRef({ ready, submit });
   useEffect(() => {
     keys.current = { ready, submit };
@@ -37,8 +38,8 @@ export function PinPad({ onPin, busy }: { onPin: (pin: string) => void; busy: bo
       } else if (e.key === 'Backspace') {
         e.preventDefault();
         setPin((p) => p.slice(0, -1));
-      } else if (e.key === 'Enter') {
-        // Also on a focused key of the pad: Enter means OK, never "press the key again".
+      } else if (e.key === 'Enter' && (e.target === document.body || (e.target instanceof Node && pad.current?.contains(e.target)))) {
+        // Also on a focused key of the pad: Enter means OK, never "press the key again". On another button it is that button's.
         e.preventDefault();
         if (keys.current.ready) keys.current.submit();
       }
@@ -48,7 +49,7 @@ export function PinPad({ onPin, busy }: { onPin: (pin: string) => void; busy: bo
   }, []);
 
   return (
-    <div className="flex flex-col items-center gap-5">
+    <div ref={pad} className="flex flex-col items-center gap-5">
       <p aria-live="polite" className="flex h-10 items-center gap-3">
         <span className="sr-only">{`${pin.length} of 4 to 8 digits typed`}</span>
         {Array.from({ length: Math.max(MIN_DIGITS, pin.length) }, (_, i) => (

@@ -102,6 +102,21 @@ describe('the badge screen refuses what is not a badge at once', () => {
   });
 });
 
+describe('a scan while someone is signed in', () => {
+  it('says a code of no label or badge is not ours, and keeps the person signed in', async () => {
+    const calls = fakeStationServer();
+    const user = userEvent.setup();
+    renderWithProviders(<StationRoute />, '/station');
+    await scanBadge(user, BADGE);
+    await typePin(user, PIN);
+    await screen.findByRole('heading', { name: 'Hello, Marco Bellweather' });
+    await user.type(screen.getByLabelText('Scanner, or type a tool or bin code'), 'lunch-menu{Enter}');
+    expect(await screen.findByText('That code is not a Gripline label or badge. Scan a tool or bin label.')).toBeTruthy();
+    expect(screen.getByRole('heading', { name: 'Hello, Marco Bellweather' })).toBeTruthy();
+    expect(calls.some((c) => c.path === '/api/station/done')).toBe(false);
+  });
+});
+
 describe('the PIN pad and a USB keypad', () => {
   it('takes digits, Backspace and Enter from the keyboard as from the buttons', async () => {
     const calls = fakeStationServer();
@@ -326,6 +341,40 @@ describe('a station without the network, with its copy', () => {
     expect(document.body.textContent).not.toContain('Marco');
     await typePin(user, PIN);
     expect(await screen.findByRole('heading', { name: 'Hello, Ines Okafor' }, SLOW)).toBeTruthy();
+  });
+
+  it('Done ends an offline session as online, with nothing sent', async () => {
+    await keepCopy();
+    const fetchSpy = noNetwork();
+    const user = userEvent.setup();
+    renderWithProviders(<StationRoute />, '/station');
+    await scanBadge(user, BADGE);
+    await typePin(user, PIN);
+    await screen.findByRole('heading', { name: 'Hello, Marco Bellweather' }, SLOW);
+    await user.click(screen.getByRole('button', { name: 'Done' }));
+    expect(await screen.findByRole('heading', { name: 'Scan your badge' })).toBeTruthy();
+    expect(document.body.textContent).not.toContain('Marco');
+    expect(fetchSpy).not.toHaveBeenCalled();
+  });
+
+  it('counts down and ends an offline session after the idle minute, as online', async () => {
+    vi.useFakeTimers({ shouldAdvanceTime: true });
+    try {
+      await keepCopy();
+      noNetwork();
+      const user = userEvent.setup({ advanceTimers: (ms) => vi.advanceTimersByTime(ms) });
+      renderWithProviders(<StationRoute />, '/station');
+      await scanBadge(user, OTHER_BADGE);
+      await typePin(user, PIN);
+      await screen.findByRole('heading', { name: 'Hello, Ines Okafor' }, SLOW);
+      await act(() => vi.advanceTimersByTimeAsync(50_000));
+      expect(screen.getByText('Signing out in 10 s. Tap anywhere to stay.')).toBeTruthy();
+      await act(() => vi.advanceTimersByTimeAsync(10_000));
+      expect(await screen.findByText('Signed out after a minute without a scan or tap.')).toBeTruthy();
+      expect(document.body.textContent).not.toContain('Ines');
+    } finally {
+      vi.useRealTimers();
+    }
   });
 
   it('says how many actions wait to be sent', async () => {

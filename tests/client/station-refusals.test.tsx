@@ -1,3 +1,4 @@
+import 'fake-indexeddb/auto';
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
@@ -5,7 +6,7 @@ import { StationRoute } from '@/app/routes/station';
 import { readKeptStation } from '@/features/stations/api/kept-station';
 import { afterRefusedSignIn } from '@/features/stations/hooks/station-steps';
 import { ApiError } from '@/lib/api-client';
-import { renderWithProviders } from '../helpers/render';
+import { renderWithProviders, type FakeCall } from '../helpers/render';
 import { fakeStationServer, keepTestStation, signInAtStation } from '../helpers/station-screen';
 
 describe('what a refused station sign-in says', () => {
@@ -30,7 +31,8 @@ describe('what a refused station sign-in says', () => {
 
 afterEach(() => localStorage.clear());
 
-const refusedWith = (code: string) => () => ({ status: 401, body: { error: { code, message: 'Refused.' } } });
+/** The server's answer to a scanned tool: the session or the station is over. */
+const refusedWith = (code: string) => (call: FakeCall) => (call.path.startsWith('/api/tools/') ? { status: 401, body: { error: { code, message: 'Refused.' } } } : undefined);
 
 describe('when the server ends a station session', () => {
   it('goes back to the badge step with nothing of the person when a request says the session ended', async () => {

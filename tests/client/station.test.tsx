@@ -1,3 +1,4 @@
+import 'fake-indexeddb/auto';
 import { act, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';

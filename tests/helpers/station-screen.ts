@@ -1,3 +1,5 @@
+// The station keeps its copy and queue in IndexedDB.
+import 'fake-indexeddb/auto';
 import { screen } from '@testing-library/react';
 import type userEvent from '@testing-library/user-event';
 import type { StationSession } from '@shared/schemas/stations';
@@ -5,8 +7,9 @@ import { KEPT_STATION_KEY } from '@/features/stations/api/kept-station';
 import { fakeFetch, type FakeCall } from './render';
 
 /** The station screen's side of the contract, for client tests with a fake API. */
-export const BADGE = 'bdg-7Qx2LmP9';
-export const OTHER_BADGE = 'bdg-Zr4Kw81c';
+/** Badge tokens as printed: 43 characters of base64url (invented). */
+export const BADGE = 'Qm7xL2pV9cTz4RkW8nYb1HsD6fJq3GaE5uXo0iNwKtM';
+export const OTHER_BADGE = 'Zr4Kw81cPe6TnB2vYx9LqH3sMd7GfU0jRa5oWiCk_-A';
 export const PIN = '2468';
 export const STATION_TOKEN = 'stn-token-1';
 

@@ -2,7 +2,9 @@ import { liveQuery } from 'dexie';
 import { useEffect, useState } from 'react';
 import { readCatalogue } from './api/catalogue';
 import { refusedOf, waitingOf } from './api/queue';
-import type { QueuedAction, StoredCatalogue } from './db';
+import { readStationCopy } from './api/station-copy';
+import { stationRefusedOf, stationWaitingOf } from './api/station-queue';
+import type { QueuedAction, StoredCatalogue, StoredStationCopy } from './db';
 
 /** The answer of a query on the phone's store, kept current as the store changes; undefined while it loads. */
 function useLive<A, T>(query: (arg: A) => Promise<T>, arg: A): T | undefined {
@@ -23,6 +25,13 @@ const catalogueOrNull = async (memberId: number): Promise<StoredCatalogue | null
 export const useCatalogueCopy = (memberId: number): StoredCatalogue | null | undefined => useLive(catalogueOrNull, memberId);
 export const useWaiting = (memberId: number): QueuedAction[] | undefined => useLive(waitingOf, memberId);
 export const useRefused = (memberId: number): QueuedAction[] | undefined => useLive(refusedOf, memberId);
+
+const stationCopyOrNull = async (stationId: number): Promise<StoredStationCopy | null> => (await readStationCopy(stationId)) ?? null;
+
+/** The crib station's copy; null when it has none, undefined while it is read. */
+export const useStationCopy = (stationId: number): StoredStationCopy | null | undefined => useLive(stationCopyOrNull, stationId);
+export const useStationWaiting = (stationId: number): QueuedAction[] | undefined => useLive(stationWaitingOf, stationId);
+export const useStationRefused = (stationId: number): QueuedAction[] | undefined => useLive(stationRefusedOf, stationId);
 
 /** The time now, moving on every half minute, so "10 min ago" stays true while the page is open. */
 export function useNow(): Date {

@@ -1,5 +1,5 @@
 import type { QueuedActionKind } from '@shared/schemas/offline';
-import { offlineDb, type QueuedAction, type QueuedBody, type Refusal } from '../db';
+import { offlineDb, type QueuedAction, type QueuedBody, type Refusal, type StationMark } from '../db';
 
 export interface NewQueuedAction {
   memberId: number;
@@ -8,6 +8,8 @@ export interface NewQueuedAction {
   what: string;
   body: QueuedBody;
   catalogueAt: string;
+  /** Only for an action done at a crib station. */
+  station?: StationMark;
 }
 
 /**
@@ -30,9 +32,9 @@ export async function enqueue(action: NewQueuedAction, now: Date = new Date()): 
   return { ...entry, seq };
 }
 
-/** One member's entries in one state, oldest first. */
+/** One member's entries in one state, oldest first: the phone's own, never a station's. */
 export async function entriesOf(memberId: number, state: QueuedAction['state']): Promise<QueuedAction[]> {
-  return offlineDb.actions.where({ memberId, state }).sortBy('seq');
+  return (await offlineDb.actions.where({ memberId, state }).sortBy('seq')).filter((a) => a.station === undefined);
 }
 
 export const waitingOf = (memberId: number) => entriesOf(memberId, 'waiting');
@@ -55,6 +57,6 @@ export async function markRefused(seq: number, refusal: Refusal): Promise<void> 
 export async function dismissRefused(seq: number, memberId: number): Promise<void> {
   await offlineDb.transaction('rw', offlineDb.actions, async () => {
     const entry = await offlineDb.actions.get(seq);
-    if (entry?.memberId === memberId && entry.state === 'refused') await offlineDb.actions.delete(seq);
+    if (entry?.memberId === memberId && entry.station === undefined && entry.state === 'refused') await offlineDb.actions.delete(seq);
   });
 }

@@ -1,7 +1,7 @@
 import { ApiError, api, isNoConnection, sessionGeneration } from '@/lib/api-client';
 import type { MeResponse } from '@shared/schemas/auth';
 import type { QueuedAction } from '../db';
-import { nextStepFor } from '../utils/next-step';
+import { isRefusal, refusalOf } from '../utils/refusal';
 import { markRefused, markSent, nextWaiting } from './queue';
 import { sendQueued } from './send-queued';
 
@@ -10,19 +10,6 @@ export interface ReplayResult {
   refused: QueuedAction[];
   /** True when entries were left waiting: no answer, or the session is not this member's. */
   stopped: boolean;
-}
-
-/** Answers that say "not now" rather than "no": a lapsed session, a stale token, the same key still being handled. */
-const TRY_AGAIN_STATUSES = [401, 408, 429];
-const TRY_AGAIN_CODES = ['CSRF_TOKEN_INVALID', 'IDEMPOTENCY_KEY_IN_USE'];
-
-/**
- * A refusal is the server's final word on that action: it goes to the Not sent list. No answer, a
- * server hiccup or a "not now" says nothing about the action: keep it and stop, so nothing after it
- * goes ahead of it.
- */
-function isRefusal(err: unknown): err is ApiError {
-  return err instanceof ApiError && err.status >= 400 && err.status < 500 && !TRY_AGAIN_STATUSES.includes(err.status) && !TRY_AGAIN_CODES.includes(err.code);
 }
 
 /** The server applies an action to whoever the session belongs to: send only when that is this member. */
@@ -52,13 +39,7 @@ async function replay(memberId: number, onSettled: (entry: QueuedAction) => void
         result.stopped = true;
         return result;
       }
-      await markRefused(entry.seq, {
-        status: err.status,
-        code: err.code,
-        message: err.message,
-        nextStep: nextStepFor(entry.kind, err.code),
-        at: new Date().toISOString(),
-      });
+      await markRefused(entry.seq, refusalOf(entry, err));
       result.refused.push(entry);
       onSettled(entry);
       continue;

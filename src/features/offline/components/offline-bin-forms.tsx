@@ -7,14 +7,14 @@ import { Notice } from '@/components/ui/notice';
 import { QuantityField } from '@/components/ui/quantity-field';
 import { formatAssembly, formatQuantity } from '@/lib/format';
 import { queueFromCopy } from '../api/queue-from-copy';
-import type { StoredCatalogue } from '../db';
+import type { CopyInUse } from '../db';
 import type { OfflineBin } from '../utils/offline-state';
 
 /**
  * Draw (optionally for one of the member's assemblies) or return unused, from the copy. The most
  * allowed is what the copy and the member's waiting actions leave; the server checks again on replay.
  */
-export function OfflineBinForm({ copy, state, kind }: { copy: StoredCatalogue; state: OfflineBin; kind: Extract<QueuedActionKind, 'draw' | 'return_unused'> }) {
+export function OfflineBinForm({ copy, state, kind }: { copy: CopyInUse; state: OfflineBin; kind: Extract<QueuedActionKind, 'draw' | 'return_unused'> }) {
   const { bin } = state;
   const isDraw = kind === 'draw';
   const most = isDraw ? state.onHand : state.drawnByYou;

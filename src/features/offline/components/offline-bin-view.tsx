@@ -3,13 +3,13 @@ import { BIN_KIND_LABELS } from '@shared/stock/kinds';
 import { formatQuantity } from '@/lib/format';
 import { offlineBin } from '../utils/offline-state';
 import { OfflineBinForm } from './offline-bin-forms';
-import { FromOfflineCopy, OfflineItemPage } from './offline-item';
+import { FromOfflineCopy, OfflineItemPage, type CopySource } from './offline-item';
 
 /** A scanned bin opened from the phone's copy: draw and return unused are queued. */
-export function OfflineBinView({ memberId, code }: { memberId: number; code: string }) {
+export function OfflineBinView({ code, ...source }: { code: string } & CopySource) {
   const [picked, setPicked] = useState<'draw' | 'return_unused'>('draw');
   return (
-    <FromOfflineCopy memberId={memberId} code={code} kind="bin" find={offlineBin}>
+    <FromOfflineCopy source={source} code={code} kind="bin" find={offlineBin}>
       {(copy, state) => {
         const { bin } = state;
         const kinds = [...(state.onHand > 0 ? (['draw'] as const) : []), ...(state.drawnByYou > 0 ? (['return_unused'] as const) : [])];

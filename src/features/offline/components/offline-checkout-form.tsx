@@ -7,10 +7,10 @@ import { ToolCautions } from '@/components/ui/tool-cautions';
 import { chapterTimeZone } from '@/lib/chapter-zone';
 import { formatDueDay } from '@/lib/format';
 import { queueFromCopy } from '../api/queue-from-copy';
-import type { StoredCatalogue } from '../db';
+import type { CopyInUse } from '../db';
 
 /** Check out from the copy: the loan period's due date, and the accessories taken along, ticked so the loan records them. */
-export function OfflineCheckoutForm({ copy, tool }: { copy: StoredCatalogue; tool: CatalogueTool }) {
+export function OfflineCheckoutForm({ copy, tool }: { copy: CopyInUse; tool: CatalogueTool }) {
   const [busy, setBusy] = useState(false);
   // The loan period counts from now, when the member takes it off the shelf, by the server's one rule.
   const [due] = useState(() => loanDueAt(new Date(), tool.loanDays, chapterTimeZone()));

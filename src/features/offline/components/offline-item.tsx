@@ -1,30 +1,43 @@
 import type { ReactNode } from 'react';
 import type { Catalogue } from '@shared/schemas/offline';
 import { Card, PageHeading } from '@/components/ui/page';
-import type { QueuedAction, StoredCatalogue } from '../db';
+import type { CopyInUse, QueuedAction } from '../db';
 import { useCatalogueCopy, useWaiting } from '../hooks';
 import { NeedsConnection, NoOfflineCopy, NotInOfflineCopy, OfflineCopyNote } from './offline-copy-note';
 import { WaitingHere } from './waiting-here';
 
+/** Where a scanned code is looked up: the member's copy on the phone, or a copy made for them (at a crib station). */
+export type CopySource = { memberId: number } | { copy: CopyInUse; waiting: QueuedAction[] | undefined };
+
+interface FindProps<State> {
+  code: string;
+  kind: 'tool' | 'bin';
+  find: (catalogue: Catalogue, code: string, waiting: QueuedAction[]) => State | undefined;
+  children: (copy: CopyInUse, state: State) => ReactNode;
+}
+
 /**
- * Finds a scanned code in the member's copy, moved on by their waiting actions, and hands it to
- * `children`; says so while the copy opens, when the phone has none, or when the code is not in it.
+ * Finds a scanned code in the copy, moved on by the member's waiting actions, and hands it to
+ * `children`; says so while the copy opens, when there is none, or when the code is not in it.
  */
-export function FromOfflineCopy<State>({
-  memberId,
+export function FromOfflineCopy<State>({ source, ...props }: FindProps<State> & { source: CopySource }) {
+  return 'memberId' in source ? <FromPhoneCopy memberId={source.memberId} {...props} /> : <FoundInCopy copy={source.copy} waiting={source.waiting} {...props} />;
+}
+
+function FromPhoneCopy<State>({ memberId, ...props }: FindProps<State> & { memberId: number }) {
+  const copy = useCatalogueCopy(memberId);
+  const waiting = useWaiting(memberId);
+  return <FoundInCopy copy={copy} waiting={waiting} {...props} />;
+}
+
+function FoundInCopy<State>({
+  copy,
+  waiting,
   code,
   kind,
   find,
   children,
-}: {
-  memberId: number;
-  code: string;
-  kind: 'tool' | 'bin';
-  find: (catalogue: Catalogue, code: string, waiting: QueuedAction[]) => State | undefined;
-  children: (copy: StoredCatalogue, state: State) => ReactNode;
-}) {
-  const copy = useCatalogueCopy(memberId);
-  const waiting = useWaiting(memberId);
+}: FindProps<State> & { copy: CopyInUse | null | undefined; waiting: QueuedAction[] | undefined }) {
   if (copy === undefined || waiting === undefined) return <p role="status">Opening the offline copy…</p>;
   if (copy === null) return <NoOfflineCopy code={code} />;
   const state = find(copy.catalogue, code, waiting);

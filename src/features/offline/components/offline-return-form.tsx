@@ -4,10 +4,10 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { ReturnFields, returnBodyFrom, useReturnFieldValues } from '@/components/ui/return-fields';
 import { queueFromCopy } from '../api/queue-from-copy';
-import type { StoredCatalogue } from '../db';
+import type { CopyInUse } from '../db';
 
 /** Return from the copy: ok or needs attention (with a note), and the count for a temporary fastener tray. */
-export function OfflineReturnForm({ copy, tool }: { copy: StoredCatalogue; tool: CatalogueTool }) {
+export function OfflineReturnForm({ copy, tool }: { copy: CopyInUse; tool: CatalogueTool }) {
   const [fields, setFields] = useReturnFieldValues(tool);
   const [problem, setProblem] = useState<string>();
   const [busy, setBusy] = useState(false);

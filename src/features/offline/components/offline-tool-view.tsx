@@ -3,13 +3,13 @@ import { Notice } from '@/components/ui/notice';
 import { formatDate } from '@/lib/format';
 import { offlineTool } from '../utils/offline-state';
 import { OfflineCheckoutForm } from './offline-checkout-form';
-import { FromOfflineCopy, OfflineItemPage } from './offline-item';
+import { FromOfflineCopy, OfflineItemPage, type CopySource } from './offline-item';
 import { OfflineReturnForm } from './offline-return-form';
 
 /** A scanned tool opened from the phone's copy: check out and return are queued, the rest waits for the connection. */
-export function OfflineToolView({ memberId, code }: { memberId: number; code: string }) {
+export function OfflineToolView({ code, ...source }: { code: string } & CopySource) {
   return (
-    <FromOfflineCopy memberId={memberId} code={code} kind="tool" find={offlineTool}>
+    <FromOfflineCopy source={source} code={code} kind="tool" find={offlineTool}>
       {(copy, state) => {
         const { tool } = state;
         return (

@@ -45,12 +45,11 @@ export function recordPinFailure(db: Executor, stationId: number, badgeId: numbe
 }
 
 /** Wrong PINs typed for this badge at this station since `since`. */
-export function pinFailuresSince(db: Executor, stationId: number, badgeId: number, since: Date): { count: number; latest: Date | null } {
-  const rows = db
+export function pinFailureTimesSince(db: Executor, stationId: number, badgeId: number, since: Date): Date[] {
+  return db
     .select({ at: stationPinFailures.at })
     .from(stationPinFailures)
     .where(and(eq(stationPinFailures.stationId, stationId), eq(stationPinFailures.badgeId, badgeId), gte(stationPinFailures.at, since)))
-    .all();
-  const latest = rows.reduce<Date | null>((m, r) => (m === null || r.at > m ? r.at : m), null);
-  return { count: rows.length, latest };
+    .all()
+    .map((r) => r.at);
 }

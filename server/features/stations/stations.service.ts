@@ -1,5 +1,6 @@
 import type { EnrolledStation, EnrolStationBody, Station } from '@shared/schemas/stations';
-import { STATION_IDLE_SECONDS, STATION_LOCK_MINUTES, STATION_PIN_TRIES } from '@shared/schemas/stations';
+import { STATION_IDLE_SECONDS, STATION_LOCK_MINUTES } from '@shared/schemas/stations';
+import { pinLockedUntil, pinTriesLeft, stationSignInWords } from '@shared/stations/station-sign-in-rules';
 import { findWorkingBadge } from '../../accounts/badges.repo';
 import { hashLinkToken, newLinkToken } from '../../accounts/link-tokens';
 import { verifyPin } from '../../accounts/pins';
@@ -8,7 +9,7 @@ import type { StationRow } from '../../db/schema/stations';
 import type { UserRow } from '../../db/schema/users';
 import { HttpError } from '../../lib/http-error';
 import { oneAtATime } from '../../lib/one-at-a-time';
-import { findStation, findWorkingStation, insertStation, listStations, pinFailuresSince, recordPinFailure, revokeStation } from './stations.repo';
+import { findStation, findWorkingStation, insertStation, listStations, pinFailureTimesSince, recordPinFailure, revokeStation } from './stations.repo';
 
 const LOCK_MS = STATION_LOCK_MINUTES * 60_000;
 const IDLE_MS = STATION_IDLE_SECONDS * 1000;
@@ -53,33 +54,21 @@ export function stationOfToken(ctx: ServiceContext, token: string | undefined): 
   return station;
 }
 
-/**
- * When the badge's lock at this station ends, or null when it is not locked: STATION_PIN_TRIES wrong
- * PINs within STATION_LOCK_MINUTES lock it for STATION_LOCK_MINUTES from the last of them.
- */
+/** Wrong PINs for this badge at this station that can still count toward a lock (the shared rule reads back two windows). */
+const failuresFor = (ctx: ServiceContext, stationId: number, badgeId: number, now: Date) =>
+  pinFailureTimesSince(ctx.db, stationId, badgeId, new Date(now.getTime() - 2 * LOCK_MS));
+
 function lockedUntil(ctx: ServiceContext, stationId: number, badgeId: number, now: Date): Date | null {
-  const recent = pinFailuresSince(ctx.db, stationId, badgeId, new Date(now.getTime() - LOCK_MS));
-  if (recent.latest === null) return null;
-  const run = pinFailuresSince(ctx.db, stationId, badgeId, new Date(recent.latest.getTime() - LOCK_MS));
-  if (run.count < STATION_PIN_TRIES) return null;
-  const until = new Date(recent.latest.getTime() + LOCK_MS);
-  return until > now ? until : null;
+  const until = pinLockedUntil(failuresFor(ctx, stationId, badgeId, now), now);
+  return until && until > now ? until : null;
 }
 
 const locked = (until: Date, now: Date) => {
   const seconds = Math.max(1, Math.ceil((until.getTime() - now.getTime()) / 1000));
-  const minutes = Math.ceil(seconds / 60);
-  return new HttpError(
-    429,
-    'BADGE_LOCKED',
-    `Too many wrong PINs: this badge is locked at this station for ${minutes} more minute${minutes === 1 ? '' : 's'}. Your own sign-in elsewhere still works.`,
-    undefined,
-    { 'Retry-After': String(seconds) },
-  );
+  return new HttpError(429, 'BADGE_LOCKED', stationSignInWords.badgeLocked(Math.ceil(seconds / 60)), undefined, { 'Retry-After': String(seconds) });
 };
 
-const badgeNotRecognised = () =>
-  new HttpError(401, 'BADGE_NOT_RECOGNISED', 'This badge is not recognised: it may have been reprinted. Ask a quartermaster for a new one.');
+const badgeNotRecognised = () => new HttpError(401, 'BADGE_NOT_RECOGNISED', stationSignInWords.badgeNotRecognised);
 
 const pinChecks = oneAtATime();
 
@@ -102,15 +91,14 @@ export async function checkStationSignIn(ctx: ServiceContext, token: string | un
   return pinChecks(`${station.id}:${badge.id}`, async () => {
     const until = lockedUntil(ctx, station.id, badge.id, ctx.now());
     if (until) throw locked(until, ctx.now());
-    if (user.pinHash === null) throw new HttpError(401, 'NO_PIN', 'You have no PIN yet: set one on your profile, then scan your badge again.');
+    if (user.pinHash === null) throw new HttpError(401, 'NO_PIN', stationSignInWords.noPin);
     if (await verifyPin(user, pin)) return { station, user };
 
     const now = ctx.now();
     recordPinFailure(ctx.db, station.id, badge.id, now);
     const lockNow = lockedUntil(ctx, station.id, badge.id, now);
     if (lockNow) throw locked(lockNow, now);
-    const left = STATION_PIN_TRIES - pinFailuresSince(ctx.db, station.id, badge.id, new Date(now.getTime() - LOCK_MS)).count;
-    throw new HttpError(401, 'WRONG_PIN', `That PIN is not right: ${left} ${left === 1 ? 'try' : 'tries'} left before this badge is locked here for ${STATION_LOCK_MINUTES} minutes.`);
+    throw new HttpError(401, 'WRONG_PIN', stationSignInWords.wrongPin(pinTriesLeft(failuresFor(ctx, station.id, badge.id, now), now)));
   });
 }
 

@@ -59,6 +59,8 @@ export function createApp(config: AppConfig) {
     helmet({
       contentSecurityPolicy: {
         directives: {
+          // The station checks a badge and PIN against its copy with WebAssembly (SHA-256, argon2id); no other eval.
+          'script-src': ["'self'", "'wasm-unsafe-eval'"],
           'img-src': ["'self'", 'data:', 'blob:'],
           'media-src': ["'self'", 'blob:'],
           'upgrade-insecure-requests': config.secureCookies ? [] : null,

@@ -27,14 +27,17 @@ afterAll(async () => {
   await app?.close();
 });
 
-function memberId(email: string): number {
+/** One row from the running app's database, read-only: what reached the server. */
+function row<T>(sql: string, ...params: unknown[]): T {
   const db = new BetterSqlite3(join(app.dir, 'gripline.db'), { readonly: true });
   try {
-    return (db.prepare('select id from users where email = ?').get(email) as { id: number }).id;
+    return db.prepare(sql).get(...params) as T;
   } finally {
     db.close();
   }
 }
+
+const memberId = (email: string): number => row<{ id: number }>('select id from users where email = ?', email).id;
 
 /** A JSON-or-PDF call on the page's own session, with its CSRF token. */
 async function send(page: Page, method: 'PUT' | 'POST', path: string, data: unknown) {
@@ -95,4 +98,90 @@ describe('the crib station', () => {
     await mine.waitFor();
     expect(await mine.isVisible()).toBe(true);
   }, 60_000);
+
+  it('goes on without the network from its copy: badge and PIN checked there, a checkout and a draw queued, both sent for each person once it is back', async () => {
+    const tool = row<{ code: string; name: string }>(
+      "select code, name from tools where status = 'available' and required_signoff_id is null and category <> 'temporary_fastener_tray' and name <> ? order by code limit 1",
+      TOOL,
+    );
+    const bin = row<{ code: string; onHand: number }>('select code, on_hand as onHand from bins where on_hand >= 50 order by code limit 1');
+    const people = [
+      { email: 'member@example.org', name: 'Marco Bellweather' },
+      { email: 'ines.parra@example.org', name: row<{ name: string }>("select name from users where email = 'ines.parra@example.org'").name },
+    ];
+
+    // Both set a PIN on their own phone; a quartermaster prints both badges and enrols a second tablet.
+    for (const person of people) {
+      const phone = await signedInPhone(browser, app.url, person.email, DEMO_PASSWORD);
+      expect((await send(phone, 'PUT', '/api/me/pin', { pin: PIN })).status()).toBe(204);
+      await phone.context().close();
+    }
+    const tablet = await signedInPhone(browser, app.url, 'quartermaster@example.org', DEMO_PASSWORD, {
+      context: { viewport: { width: 800, height: 1100 } },
+    });
+    const sheet = await send(tablet, 'POST', '/api/labels/sheet', { layoutId: LAYOUT, people: people.map((p) => memberId(p.email)) });
+    const [marcoBadge, inesBadge] = qrTextsOnSheet(await sheet.body(), LAYOUT);
+    await tablet.goto(`${app.url}/stations`);
+    await tablet.getByLabel('Station name').fill('Hangar B tablet');
+    await tablet.getByRole('button', { name: 'Use this device as a station' }).click();
+    await tablet.getByText(/^Ready without the network: copy from/).waitFor({ timeout: 15_000 });
+
+    const scanner = (label: RegExp, code: string) => tablet.getByLabel(label).fill(code).then(() => tablet.getByLabel(label).press('Enter'));
+    const pin = async (digits: string) => {
+      for (const digit of digits) await tablet.getByRole('button', { name: digit, exact: true }).click();
+      await tablet.getByRole('button', { name: 'OK' }).click();
+    };
+
+    // The Wi-Fi drops. A stranger's QR is refused at once; Marco's badge and PIN are checked against the copy.
+    await tablet.context().setOffline(true);
+    await scanner(/badge scanner/i, 'https://example.com/not-a-badge');
+    await tablet.getByText(/not a Gripline badge/).waitFor();
+    expect(await tablet.locator('main').getAttribute('data-station-step')).toBe('badge');
+    await scanner(/badge scanner/i, marcoBadge!);
+    await tablet.locator('main[data-station-step="pin"]').waitFor();
+    await pin('1357');
+    await tablet.getByText(/That PIN is not right: 4 tries left/).waitFor();
+    await pin(PIN);
+    await tablet.getByRole('heading', { name: 'Hello, Marco Bellweather' }).waitFor();
+    await tablet.getByText('No connection: what you do here is sent when it is back.').waitFor();
+    await scanner(/scanner, or type a tool or bin code/i, tool.code);
+    await tablet.getByRole('button', { name: `Check out ${tool.code}` }).click();
+    await tablet.getByRole('status').filter({ hasText: `Done: ${tool.code}.` }).waitFor();
+    await tablet.getByRole('button', { name: 'Done', exact: true }).click();
+
+    // Ines next: she draws five from a bin.
+    await tablet.locator('main[data-station-step="badge"]').waitFor();
+    await scanner(/badge scanner/i, inesBadge!);
+    await pin(PIN);
+    await tablet.getByRole('heading', { name: `Hello, ${people[1]!.name}` }).waitFor();
+    await scanner(/scanner, or type a tool or bin code/i, bin.code);
+    await tablet.getByLabel('Quantity to draw').fill('5');
+    await tablet.getByRole('button', { name: `Draw from ${bin.code}` }).click();
+    await tablet.getByRole('status').filter({ hasText: `Done: ${bin.code}.` }).waitFor();
+    await tablet.getByRole('button', { name: 'Done', exact: true }).click();
+    await tablet.getByText('2 actions wait to be sent.').waitFor();
+    await tablet.screenshot({ path: 'test-results/crib-station-offline-waiting.png', fullPage: true });
+    expect(row<{ n: number }>("select count(*) as n from loans where returned_at is null and tool_id = (select id from tools where code = ?)", tool.code).n).toBe(0);
+
+    // The Wi-Fi is back: each person's action reaches the server as theirs, made at this station.
+    await tablet.context().setOffline(false);
+    await tablet.getByText(/actions? wait to be sent/).waitFor({ state: 'detached', timeout: 30_000 });
+    const loan = row<{ holder: string }>(
+      'select u.email as holder from loans l join users u on u.id = l.user_id where l.returned_at is null and l.tool_id = (select id from tools where code = ?)',
+      tool.code,
+    );
+    expect(loan.holder).toBe('member@example.org');
+    const draw = row<{ who: string; station: string; quantity: number }>(
+      "select u.email as who, s.name as station, abs(m.quantity) as quantity from stock_movements m join users u on u.id = m.member_id join stations s on s.id = m.station_id where m.kind = 'draw' and m.bin_id = (select id from bins where code = ?) order by m.id desc limit 1",
+      bin.code,
+    );
+    expect(draw).toEqual({ who: 'ines.parra@example.org', station: 'Hangar B tablet', quantity: 5 });
+    const event = row<{ station: string }>(
+      'select s.name as station from tool_events e join stations s on s.id = e.station_id where e.tool_id = (select id from tools where code = ?) order by e.id desc limit 1',
+      tool.code,
+    );
+    expect(event.station).toBe('Hangar B tablet');
+    expect(row<{ onHand: number }>('select on_hand as onHand from bins where code = ?', bin.code).onHand).toBe(bin.onHand - 5);
+    await tablet.context().close();
+  }, 90_000);
 });

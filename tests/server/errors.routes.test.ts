@@ -113,6 +113,8 @@ describe('security headers', () => {
     expect(res.headers['x-content-type-options']).toBe('nosniff');
     expect(res.headers['content-security-policy']).toMatch(/default-src 'self'/);
     expect(res.headers['content-security-policy']).toMatch(/img-src 'self' data: blob:/);
+    // WebAssembly only (the station's badge and PIN checks), never eval of script text.
+    expect(res.headers['content-security-policy']).toMatch(/script-src 'self' 'wasm-unsafe-eval'(;|$)/);
     expect(res.headers['x-frame-options']).toBe('SAMEORIGIN');
     expect(res.headers['x-powered-by']).toBeUndefined();
   });

@@ -134,6 +134,7 @@ describe('the crib station', () => {
 
     // The Wi-Fi drops. A stranger's QR is refused at once; Marco's badge and PIN are checked against the copy.
     await tablet.context().setOffline(true);
+    await tablet.getByText(/^No connection: badges and PINs are checked against the copy/).waitFor();
     await scanner(/badge scanner/i, 'https://example.com/not-a-badge');
     await tablet.getByText(/not a Gripline badge/).waitFor();
     expect(await tablet.locator('main').getAttribute('data-station-step')).toBe('badge');
@@ -146,7 +147,7 @@ describe('the crib station', () => {
     await tablet.getByText('No connection: what you do here is sent when it is back.').waitFor();
     await scanner(/scanner, or type a tool or bin code/i, tool.code);
     await tablet.getByRole('button', { name: `Check out ${tool.code}` }).click();
-    await tablet.getByRole('status').filter({ hasText: `Done: ${tool.code}.` }).waitFor();
+    await tablet.getByRole('status').filter({ hasText: `Waiting to send: ${tool.code}.` }).waitFor();
     await tablet.getByRole('button', { name: 'Done', exact: true }).click();
 
     // Ines next: she draws five from a bin.
@@ -157,7 +158,7 @@ describe('the crib station', () => {
     await scanner(/scanner, or type a tool or bin code/i, bin.code);
     await tablet.getByLabel('Quantity to draw').fill('5');
     await tablet.getByRole('button', { name: `Draw from ${bin.code}` }).click();
-    await tablet.getByRole('status').filter({ hasText: `Done: ${bin.code}.` }).waitFor();
+    await tablet.getByRole('status').filter({ hasText: `Waiting to send: ${bin.code}.` }).waitFor();
     await tablet.getByRole('button', { name: 'Done', exact: true }).click();
     await tablet.getByText('2 actions wait to be sent.').waitFor();
     await tablet.screenshot({ path: 'test-results/crib-station-offline-waiting.png', fullPage: true });
@@ -165,7 +166,7 @@ describe('the crib station', () => {
 
     // The Wi-Fi is back: each person's action reaches the server as theirs, made at this station.
     await tablet.context().setOffline(false);
-    await tablet.getByText(/actions? wait to be sent/).waitFor({ state: 'detached', timeout: 30_000 });
+    await tablet.getByText(/waits? to be sent./).waitFor({ state: 'detached', timeout: 30_000 });
     const loan = row<{ holder: string }>(
       'select u.email as holder from loans l join users u on u.id = l.user_id where l.returned_at is null and l.tool_id = (select id from tools where code = ?)',
       tool.code,

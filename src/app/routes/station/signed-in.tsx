@@ -58,6 +58,10 @@ export function SignedIn({ who, badge, offlineCopy, countdown, onScan, onBadge, 
     setItem(undefined);
     setResult(`Done: ${code}. Scan the next tool or bin, or tap Done.`);
   };
+  const queued = (code: string) => {
+    setItem(undefined);
+    setResult(`Waiting to send: ${code}. It goes when the connection is back. Scan the next tool or bin, or tap Done.`);
+  };
 
   return (
     <>
@@ -77,7 +81,7 @@ export function SignedIn({ who, badge, offlineCopy, countdown, onScan, onBadge, 
       {item ? (
         <div className="flex flex-col gap-3 text-ink">
           {offlineCopy ? (
-            <StationOfflineItem stored={offlineCopy} person={who} badge={badge} item={item} />
+            <StationOfflineItem stored={offlineCopy} person={who} badge={badge} item={item} onQueued={() => queued(item.code)} />
           ) : item.kind === 'tool' ? (
             <StationTool code={item.code} onDone={() => finished(item.code)} />
           ) : (

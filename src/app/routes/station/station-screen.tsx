@@ -200,7 +200,7 @@ export function StationScreen({ station, onRevoked }: { station: KeptStation; on
             <StationCamera onCode={scanAtBadge} />
             <ScanEntry label="Badge scanner" onCode={scanAtBadge} />
             <StationQueuePanel stationId={station.id} />
-            <StationCopyStatus copy={sync.copy} />
+            <StationCopyStatus copy={sync.copy} offline={offline} />
           </>
         )}
         {step.kind === 'pin' && (

@@ -12,9 +12,9 @@ interface Part {
 }
 
 const PARTS: Part[] = [
-  { code: 'P-0001', name: 'Cleco pliers', shelf: 'top' },
+  { code: 'P-0001', name: 'Temporary fastener pliers', shelf: 'top' },
   { code: 'P-0002', name: 'Deburring wheel', shelf: 'low' },
-  { code: 'P-0003', name: 'Cleco side grip', shelf: 'low' },
+  { code: 'P-0003', name: 'Temporary fastener side grip', shelf: 'low' },
 ];
 
 const SHELF: PickerFacet<Part, 'shelf'>[] = [
@@ -67,7 +67,7 @@ describe('ItemPicker', () => {
     expect(shownCodes()).toEqual(['P-0002']);
 
     await userEvent.clear(search);
-    await userEvent.type(search, 'CLECO');
+    await userEvent.type(search, 'TEMPORARY');
     expect(shownCodes()).toEqual(['P-0001', 'P-0003']);
 
     await userEvent.selectOptions(screen.getByLabelText('Shelf'), 'low');

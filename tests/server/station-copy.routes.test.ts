@@ -191,7 +191,7 @@ describe('the copy’s queries', () => {
         await issueBadge(t, person.id, crew.quartermaster.id, null);
         await post(lead, `/api/signoffs/${signoff.id}/holders`, { userId: person.id }).expect(201);
         giveAssemblies(t.db, person.id, [assemblyId]);
-        const tool = await addToolAs(qm, { name: `Cleco pliers ${assemblyId}`, category: 'other' });
+        const tool = await addToolAs(qm, { name: `Temporary fastener pliers ${assemblyId}`, category: 'other' });
         const agent = await t.signIn(person.email);
         await post(agent, `/api/tools/${tool.code}/checkout`).expect(201);
         await post(agent, `/api/bins/${bin.code}/draw`, { quantity: 2 }).expect(201);

@@ -194,7 +194,7 @@ describe('a replay session', () => {
   });
 
   test('ends after 60 s without a request, and without its station token', async ({ door, advance, qm, clock }) => {
-    const tool = await addToolAs(qm, { name: 'Cleco pliers', category: 'other' });
+    const tool = await addToolAs(qm, { name: 'Temporary fastener pliers', category: 'other' });
     await door.browser.replaySignIn(door.badge);
     advance(61 * SECOND);
     const idle = await queued(door.browser, `/api/tools/${tool.code}/checkout`, {}, 'station-queue-0030', new Date(clock.now.getTime() - MINUTE));

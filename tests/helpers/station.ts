@@ -5,6 +5,7 @@ import { hashLinkToken, newLinkToken } from '../../server/accounts/link-tokens';
 import { hashPassword } from '../../server/accounts/passwords';
 import { setPinHash } from '../../server/accounts/users.repo';
 import { post } from './crib';
+import { crewTest } from './crew-test';
 import type { SignedInAgent, TestApp } from './test-app';
 
 /** Gives a person a badge and (unless `pin` is null) a PIN, straight through the accounts repositories. */
@@ -57,3 +58,17 @@ export function stationBrowser(t: TestApp, stationToken: string): StationBrowser
   };
   return browser;
 }
+
+/**
+ * The crew fixture with a station: `advance(ms)` moves the app clock on, and `door` is a station named
+ * Crib door, enrolled by the quartermaster, with the member's badge (PIN 4827) and a browser for it.
+ */
+export const stationTest = crewTest
+  .extend('advance', ({ clock }) => (ms: number) => {
+    clock.now = new Date(clock.now.getTime() + ms);
+  })
+  .extend('door', async ({ t, qm, crew }) => {
+    const station = await enrolStation(qm, 'Crib door');
+    const badge = await issueBadge(t, crew.member.id, crew.quartermaster.id);
+    return { station, badge, browser: stationBrowser(t, station.stationToken) };
+  });

@@ -2,8 +2,7 @@ import Papa from 'papaparse';
 import { describe, expect } from 'vitest';
 import { stationSessionSchema } from '@shared/schemas/stations';
 import { addBinAs, addToolAs, blindRivetBin, patch, post } from '../helpers/crib';
-import { crewTest } from '../helpers/crew-test';
-import { enrolStation, issueBadge, stationBrowser, type StationBrowser } from '../helpers/station';
+import { issueBadge, type StationBrowser, stationBrowser, stationTest } from '../helpers/station';
 
 const SECOND = 1000;
 const MINUTE = 60 * SECOND;
@@ -16,16 +15,7 @@ const queued = (browser: StationBrowser, path: string, body: object, key: string
   return req;
 };
 
-const test = crewTest
-  .extend('advance', ({ clock }) => (ms: number) => {
-    clock.now = new Date(clock.now.getTime() + ms);
-  })
-  /** A station named Crib door, enrolled by the quartermaster, and the member's badge (PIN 4827). */
-  .extend('door', async ({ t, qm, crew }) => {
-    const station = await enrolStation(qm, 'Crib door');
-    const badge = await issueBadge(t, crew.member.id, crew.quartermaster.id);
-    return { station, badge, browser: stationBrowser(t, station.stationToken) };
-  });
+const test = stationTest;
 
 describe('POST /api/station/replay-sign-in', () => {
   test('opens a session for the badge’s holder with no PIN, answered like sign-in with its CSRF token', async ({ door }) => {

@@ -1,22 +1,12 @@
 import { describe, expect } from 'vitest';
 import { stationListSchema, stationSessionSchema } from '@shared/schemas/stations';
 import { addBinAs, addToolAs, blindRivetBin, post } from '../helpers/crib';
-import { crewTest } from '../helpers/crew-test';
-import { enrolStation, issueBadge, stationBrowser } from '../helpers/station';
+import { enrolStation, issueBadge, stationBrowser, stationTest } from '../helpers/station';
 
 const SECOND = 1000;
 const MINUTE = 60 * SECOND;
 
-const test = crewTest
-  .extend('advance', ({ clock }) => (ms: number) => {
-    clock.now = new Date(clock.now.getTime() + ms);
-  })
-  /** A station named Crib door, enrolled by the quartermaster, and the member's badge (PIN 4827). */
-  .extend('door', async ({ t, qm, crew }) => {
-    const station = await enrolStation(qm, 'Crib door');
-    const badge = await issueBadge(t, crew.member.id, crew.quartermaster.id);
-    return { station, badge, browser: stationBrowser(t, station.stationToken) };
-  });
+const test = stationTest;
 
 describe('enrolling stations', () => {
   test('a quartermaster enrols, lists and revokes a station; the token is shown once', async ({ qm, lead }) => {

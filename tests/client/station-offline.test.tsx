@@ -74,6 +74,18 @@ const stationEntry = (who: StationCopyPerson, badge: string, action: Omit<NewQue
   station: { stationId: STATION_ID, badge, personName: who.name },
 });
 
+/** The station with its copy and no network, Marco signed in there by badge and PIN. */
+async function marcoSignedInOffline() {
+  await keepCopy();
+  noNetwork();
+  const user = userEvent.setup();
+  renderWithProviders(<StationRoute />, '/station');
+  await scanBadge(user, BADGE);
+  await typePin(user, PIN);
+  await screen.findByRole('heading', { name: 'Hello, Marco Bellweather' }, SLOW);
+  return user;
+}
+
 const copyReady = () => screen.findByText(/^Ready without the network/);
 
 describe('the badge screen refuses what is not a badge at once', () => {
@@ -298,13 +310,7 @@ describe('a station without the network, with its copy', () => {
   });
 
   it('queues a check out with the person, their badge and the station; the phone’s queue does not list it', async () => {
-    await keepCopy();
-    noNetwork();
-    const user = userEvent.setup();
-    renderWithProviders(<StationRoute />, '/station');
-    await scanBadge(user, BADGE);
-    await typePin(user, PIN);
-    await screen.findByRole('heading', { name: 'Hello, Marco Bellweather' }, SLOW);
+    const user = await marcoSignedInOffline();
     await user.type(screen.getByLabelText('Scanner, or type a tool or bin code'), 'T-0042{Enter}');
     await user.click(await screen.findByRole('button', { name: 'Check out T-0042' }));
 
@@ -316,26 +322,14 @@ describe('a station without the network, with its copy', () => {
   });
 
   it('offers return unused up to what the person drew by the copy', async () => {
-    await keepCopy();
-    noNetwork();
-    const user = userEvent.setup();
-    renderWithProviders(<StationRoute />, '/station');
-    await scanBadge(user, BADGE);
-    await typePin(user, PIN);
-    await screen.findByRole('heading', { name: 'Hello, Marco Bellweather' }, SLOW);
+    const user = await marcoSignedInOffline();
     await user.type(screen.getByLabelText('Scanner, or type a tool or bin code'), 'B-0107{Enter}');
     await user.click(await screen.findByRole('radio', { name: 'Return unused' }));
     expect(screen.getByText('You drew 12 each and have not returned them.')).toBeTruthy();
   });
 
   it('takes the next badge as online: the person goes, the next one’s PIN is asked', async () => {
-    await keepCopy();
-    noNetwork();
-    const user = userEvent.setup();
-    renderWithProviders(<StationRoute />, '/station');
-    await scanBadge(user, BADGE);
-    await typePin(user, PIN);
-    await screen.findByRole('heading', { name: 'Hello, Marco Bellweather' }, SLOW);
+    const user = await marcoSignedInOffline();
     await user.type(screen.getByLabelText('Scanner, or type a tool or bin code'), `${OTHER_BADGE}{Enter}`);
     expect(await screen.findByText('Hello, Ines Okafor.')).toBeTruthy();
     expect(document.body.textContent).not.toContain('Marco');

@@ -55,6 +55,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'server',
+          sequence: { groupOrder: 0 },
           environment: 'node',
           include: ['tests/server/**/*.test.ts', 'tests/shared/**/*.test.ts'],
         },
@@ -63,6 +64,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'build',
+          sequence: { groupOrder: 0 },
           environment: 'node',
           include: ['tests/build/**/*.test.ts'],
         },
@@ -71,6 +73,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'client',
+          sequence: { groupOrder: 0 },
           environment: 'happy-dom',
           include: ['tests/client/**/*.test.{ts,tsx}'],
           setupFiles: ['tests/helpers/client-setup.ts'],
@@ -80,11 +83,26 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'browser',
+          sequence: { groupOrder: 0 },
           environment: 'node',
           include: ['tests/browser/**/*.test.ts'],
           testTimeout: 60_000,
           hookTimeout: 60_000,
           fileParallelism: false,
+        },
+      },
+      {
+        // Tests that a busy CPU makes unreliable in the browser itself (the service worker's hand-over to a
+        // new version): they run one at a time after every other project has finished.
+        extends: true,
+        test: {
+          name: 'browser-alone',
+          environment: 'node',
+          include: ['tests/browser-alone/**/*.test.ts'],
+          testTimeout: 60_000,
+          hookTimeout: 60_000,
+          fileParallelism: false,
+          sequence: { groupOrder: 1 },
         },
       },
     ],

@@ -1,14 +1,8 @@
-import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { createServer } from 'node:http';
-import type { AddressInfo } from 'node:net';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import type { Page, Response } from 'playwright-core';
+import type { Response } from 'playwright-core';
 import sharp from 'sharp';
 import { describe, expect, it } from 'vitest';
-import { CLIENT_DIR } from '../../server/main';
 import { builtAppWithChromium } from '../helpers/browser-suite';
-import { buildTestApp } from '../helpers/test-app';
+import { serviceWorkerActive } from '../helpers/service-worker';
 
 const suite = builtAppWithChromium();
 
@@ -33,18 +27,6 @@ async function pngLook(path: string) {
   const { width, height } = await image.metadata();
   const { data } = await image.ensureAlpha().raw().toBuffer({ resolveWithObject: true });
   return { size: `${width}x${height}`, cornerAlpha: data[3] };
-}
-
-/** Waits until this page's service worker has finished installing (precache filled) and is active. */
-async function serviceWorkerActive(page: Page): Promise<string> {
-  return page.evaluate(async () => {
-    const registration = await navigator.serviceWorker.ready;
-    const worker = registration.active!;
-    if (worker.state !== 'activated') {
-      await new Promise<void>((resolve) => worker.addEventListener('statechange', () => worker.state === 'activated' && resolve()));
-    }
-    return registration.scope;
-  });
 }
 
 describe('Gripline as an installable app', () => {
@@ -130,72 +112,5 @@ describe('Gripline as an installable app', () => {
     const decoderChunk = cached.find((url) => url.includes('zxing-qr-decoder'))!;
     expect(await page.evaluate(async (url) => (await fetch(url)).ok, decoderChunk)).toBe(true);
     await context.close();
-  });
-});
-
-/** The built client copied aside and served, so a test can publish a new version of it. */
-async function serveClientCopy() {
-  const clientDir = mkdtempSync(join(tmpdir(), 'gripline-client-'));
-  cpSync(CLIENT_DIR, clientDir, { recursive: true });
-  const test = await buildTestApp({ clientDir });
-  const server = createServer(test.app);
-  await new Promise<void>((ok) => server.listen(0, '127.0.0.1', ok));
-  return {
-    url: `http://localhost:${(server.address() as AddressInfo).port}`,
-    /** What a new release does to the service worker: its precache list changes. */
-    publishNewVersion() {
-      const sw = join(clientDir, 'sw.js');
-      const before = readFileSync(sw, 'utf8');
-      const after = before.replace(/url:"index.html",revision:"[0-9a-f]+"/, 'url:"index.html",revision:"00000000000000000000000000000000"');
-      if (after === before) throw new Error('sw.js has no revision for index.html to change');
-      writeFileSync(sw, after);
-    },
-    async close() {
-      await new Promise<void>((ok) => {
-        server.close(() => ok());
-        server.closeAllConnections();
-      });
-      await test.close();
-      rmSync(clientDir, { recursive: true, force: true });
-    },
-  };
-}
-
-describe('a new version of the installed app', () => {
-  // retry: with the CPU saturated (three busy loops on two cores) the reload after the tap timed out in
-  // about one run in three. Traced with the DevTools protocol: the tap's SKIP_WAITING reaches the new
-  // worker, Chromium stops the old one, then restarts it before marking it redundant, and the new one
-  // stays "installed" past 30 s. Sending SKIP_WAITING again each second and waiting for the network to
-  // go idle before the tap did not change it, so the stall is in the browser's hand-over, not in the
-  // notice; a member's second tap or next launch takes the update. The assertions are unchanged.
-  it('says "Update ready", keeps a half-filled form, and reloads only on the tap', { retry: 2 }, async () => {
-    const served = await serveClientCopy();
-    const context = await suite.browser.newContext({ serviceWorkers: 'allow', viewport: { width: 360, height: 780 } });
-    try {
-      const page = await context.newPage();
-      await page.goto(`${served.url}/sign-in`);
-      await serviceWorkerActive(page);
-      await page.reload();
-      await page.getByLabel('E-mail').fill('member@example.org');
-
-      served.publishNewVersion();
-      await page.evaluate(async () => (await navigator.serviceWorker.ready).update());
-      await page.getByText('Update ready — finish or leave this form first.').waitFor();
-      expect(await page.getByRole('button', { name: 'Reload now' }).count()).toBe(0);
-      expect(await page.getByLabel('E-mail').inputValue()).toBe('member@example.org');
-
-      await page.evaluate(() => Object.assign(window, { beforeUpdate: true }));
-      await page.getByRole('link', { name: 'Forgot your password?' }).click();
-      await page.getByRole('button', { name: 'Reload now' }).waitFor();
-      await page.screenshot({ path: 'test-results/update-ready-phone.png' });
-      await Promise.all([page.waitForEvent('load'), page.getByRole('button', { name: 'Reload now' }).click()]);
-      expect(await page.evaluate(() => 'beforeUpdate' in window)).toBe(false);
-      expect(await page.evaluate(() => navigator.serviceWorker.controller?.state)).toBe('activated');
-      expect(await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())?.waiting ?? null)).toBeNull();
-      expect(await page.getByText(/Update ready/).count()).toBe(0);
-    } finally {
-      await context.close();
-      await served.close();
-    }
   });
 });

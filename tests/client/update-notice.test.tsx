@@ -38,6 +38,9 @@ describe('UpdateNotice', () => {
     expect(onUpdate).not.toHaveBeenCalled();
     await userEvent.click(screen.getByRole('button', { name: 'Reload now' }));
     expect(onUpdate).toHaveBeenCalledOnce();
+    // The reload may wait for the page's fetches to settle: the tap is answered at once, and not offered twice.
+    expect(screen.getByRole('status').textContent).toBe('Updating…');
+    expect(screen.queryByRole('button', { name: 'Reload now' })).toBeNull();
   });
 
   it('holds the reload while a form is half filled in, and offers it once the form is sent', async () => {

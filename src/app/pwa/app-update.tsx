@@ -1,4 +1,5 @@
 import { useRegisterSW } from 'virtual:pwa-register/react';
+import { networkQuiet } from './network-quiet';
 import { UpdateNotice } from './update-notice';
 
 /** An installed app kept open all day at the bench still hears of a new version within the hour. */
@@ -17,5 +18,5 @@ export function AppUpdate() {
       console.warn('Gripline could not install its offline copy:', error);
     },
   });
-  return <UpdateNotice needRefresh={needRefresh} onUpdate={() => void updateServiceWorker()} />;
+  return <UpdateNotice needRefresh={needRefresh} onUpdate={() => void networkQuiet().then(() => updateServiceWorker())} />;
 }

@@ -80,6 +80,12 @@ export const catalogueBinSchema = z.object({
 });
 export type CatalogueBin = z.infer<typeof catalogueBinSchema>;
 
+/** A tool a person has out now, and when it is due back (ISO 8601). */
+export const offlineLoanSchema = z.object({ code: z.string(), dueAt: z.string() });
+export type OfflineLoan = z.infer<typeof offlineLoanSchema>;
+/** An assembly a person may draw for: their own, not done. */
+export const offlineAssemblySchema = z.object({ id: z.number(), name: z.string(), buildName: z.string() });
+
 /** GET /api/offline/catalogue: everything a scan needs, for the signed-in member. */
 export const catalogueSchema = z.object({
   /** When the server took this copy (ISO 8601). */
@@ -88,11 +94,11 @@ export const catalogueSchema = z.object({
   tools: z.array(catalogueToolSchema),
   bins: z.array(catalogueBinSchema),
   /** Codes of the tools the member has out now. */
-  yourLoans: z.array(z.object({ code: z.string(), dueAt: z.string() })),
+  yourLoans: z.array(offlineLoanSchema),
   /** Sign-off ids the member holds now. */
   yourSignoffs: z.array(z.number()),
   /** Assemblies the member may draw for (their own, not done). */
-  yourAssemblies: z.array(z.object({ id: z.number(), name: z.string(), buildName: z.string() })),
+  yourAssemblies: z.array(offlineAssemblySchema),
 });
 export type Catalogue = z.infer<typeof catalogueSchema>;
 

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { userSchema } from './auth';
-import { catalogueBinSchema, catalogueToolSchema } from './offline';
+import { catalogueBinSchema, catalogueToolSchema, offlineAssemblySchema, offlineLoanSchema } from './offline';
 
 /**
  * The crib station: a shared tablet at the crib door where a member signs in with a badge and a PIN.
@@ -82,9 +82,9 @@ export const stationCopyPersonSchema = z.strictObject({
   role: userSchema.shape.role,
   badgeHash: sha256HexField,
   pinHash: z.string().nullable(),
-  loans: z.array(z.object({ code: z.string(), dueAt: z.string() })),
+  loans: z.array(offlineLoanSchema),
   signoffs: z.array(z.number()),
-  assemblies: z.array(z.object({ id: z.number(), name: z.string(), buildName: z.string() })),
+  assemblies: z.array(offlineAssemblySchema),
   /** Bin code → amount drawn by this person and not returned; bins at zero are left out. */
   drawn: z.record(z.string(), z.number()),
 });

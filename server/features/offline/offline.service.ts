@@ -3,7 +3,7 @@ import type { ServiceContext } from '../../context';
 import type { UserRow } from '../../db/schema/users';
 import { openAssembliesOf } from '../planning/planning.reads';
 import { catalogueBins } from '../stock/stock.reads';
-import { catalogueTools, signoffIdsOf } from '../tools/tools.reads';
+import { catalogueTools, loansByHolder, signoffIdsOf } from '../tools/tools.reads';
 
 /**
  * The copy of the catalogue a phone keeps to recognise a scan offline, for one member: read in one
@@ -18,7 +18,7 @@ export function takeCatalogue(ctx: ServiceContext, user: UserRow): Catalogue {
       you: { id: user.id, name: user.name, role: user.role },
       tools,
       bins: catalogueBins(ctx.db, user.id),
-      yourLoans: tools.filter((t) => t.status === 'on_loan' && t.holder?.id === user.id).map((t) => ({ code: t.code, dueAt: t.dueAt! })),
+      yourLoans: loansByHolder(tools).get(user.id) ?? [],
       yourSignoffs: signoffIdsOf(ctx.db, user.id),
       yourAssemblies: openAssembliesOf(ctx.db, user.id),
     };

@@ -3,7 +3,7 @@ import { workingBadgeHolders } from '../../accounts/badges.repo';
 import type { ServiceContext } from '../../context';
 import { openAssembliesByOwner } from '../planning/planning.reads';
 import { drawnByPerson, stationCatalogueBins } from '../stock/stock.reads';
-import { catalogueTools, signoffIdsByPerson } from '../tools/tools.reads';
+import { catalogueTools, loansByHolder, signoffIdsByPerson } from '../tools/tools.reads';
 import { stationOfToken } from './stations.service';
 
 /**
@@ -22,13 +22,7 @@ export function takeStationCopy(ctx: ServiceContext, stationToken: string | unde
     const signoffs = signoffIdsByPerson(ctx.db, ids);
     const assemblies = openAssembliesByOwner(ctx.db, ids);
     const drawn = drawnByPerson(ctx.db, ids);
-    const loans = new Map<number, StationCopy['people'][number]['loans']>();
-    for (const tool of tools) {
-      if (tool.status !== 'on_loan' || !tool.holder) continue;
-      const held = loans.get(tool.holder.id) ?? [];
-      held.push({ code: tool.code, dueAt: tool.dueAt! });
-      loans.set(tool.holder.id, held);
-    }
+    const loans = loansByHolder(tools);
     return {
       takenAt: ctx.now().toISOString(),
       station: { id: station.id, name: station.name },

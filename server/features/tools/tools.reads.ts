@@ -4,7 +4,7 @@
  * reminders). Another feature imports this file and nothing else of tools.
  */
 import { and, asc, eq, inArray, ne, notInArray } from 'drizzle-orm';
-import type { CatalogueTool } from '@shared/schemas/offline';
+import type { CatalogueTool, OfflineLoan } from '@shared/schemas/offline';
 import type { ToolCategory } from '@shared/tools/categories';
 import type { Database, Executor } from '../../db/client';
 import { holds, tools } from '../../db/schema/tools';
@@ -62,6 +62,21 @@ export function toolNamesByCode(db: Executor, codes: readonly string[]): Map<str
 }
 
 // for offline
+
+/**
+ * Who has which tool out, from the catalogue's own tools: one rule for the phone's copy (the member's
+ * loans) and the station's (each badge holder's), so the two copies always agree.
+ */
+export function loansByHolder(catalogue: CatalogueTool[]): Map<number, OfflineLoan[]> {
+  const loans = new Map<number, OfflineLoan[]>();
+  for (const tool of catalogue) {
+    if (tool.status !== 'on_loan' || !tool.holder || !tool.dueAt) continue;
+    const held = loans.get(tool.holder.id) ?? [];
+    held.push({ code: tool.code, dueAt: tool.dueAt });
+    loans.set(tool.holder.id, held);
+  }
+  return loans;
+}
 
 /** Every tool a scan may find (all but retired ones), as a phone keeps it for offline use: four queries in all (no photo ids). */
 export function catalogueTools(db: Database): CatalogueTool[] {

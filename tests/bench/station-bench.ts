@@ -95,7 +95,7 @@ async function stationCheckout(tablet: Page, badge: string, code: string): Promi
   );
   times['checked out'] = await timed(
     () => tablet.getByRole('button', { name: `Check out ${code}` }).click(),
-    () => tablet.getByRole('status').filter({ hasText: `Done: ${code}.` }).waitFor(),
+    () => tablet.locator('main').getByRole('status').filter({ hasText: `${code} is yours until ` }).waitFor(),
   );
   times['cleared (Done)'] = await timed(
     () => tablet.getByRole('button', { name: 'Done', exact: true }).click(),

@@ -82,7 +82,10 @@ describe('the crib station', () => {
     await tablet.getByRole('heading', { name: `${code} · ${TOOL}` }).waitFor({ timeout: 15_000 });
     writeBlankVideo(video);
     await tablet.getByRole('button', { name: `Check out ${code}` }).click();
-    await tablet.getByRole('status').filter({ hasText: `Done: ${code}.` }).waitFor();
+    // The large type says what the toast says: whose it is and until when, so the member can read it from a step away.
+    const said = tablet.locator('main').getByRole('status').filter({ hasText: `${code} is yours until ` });
+    await said.waitFor();
+    expect(await said.innerText()).toMatch(new RegExp(`^${code} is yours until \\w+day, \\w+ \\d{1,2}\\. Scan the next tool or bin, or tap Done\\.$`));
     await tablet.screenshot({ path: 'test-results/crib-station-checked-out.png', fullPage: true });
 
     // Done: back to the badge screen, nothing of the member left on it.

@@ -54,9 +54,10 @@ export function SignedIn({ who, badge, offlineCopy, countdown, onScan, onBadge, 
     setResult(undefined);
     setItem(scanned);
   };
-  const finished = (code: string) => {
+  /** What was done, in the words that confirmed it (the due date, the tab), large enough to read from a step away. */
+  const finished = (said: string) => {
     setItem(undefined);
-    setResult(`Done: ${code}. Scan the next tool or bin, or tap Done.`);
+    setResult(`${said} Scan the next tool or bin, or tap Done.`);
   };
   const queued = (code: string) => {
     setItem(undefined);
@@ -83,9 +84,9 @@ export function SignedIn({ who, badge, offlineCopy, countdown, onScan, onBadge, 
           {offlineCopy ? (
             <StationOfflineItem stored={offlineCopy} person={who} badge={badge} item={item} onQueued={() => queued(item.code)} />
           ) : item.kind === 'tool' ? (
-            <StationTool code={item.code} onDone={() => finished(item.code)} />
+            <StationTool code={item.code} onDone={finished} />
           ) : (
-            <StationBin code={item.code} onDone={() => finished(item.code)} />
+            <StationBin code={item.code} onDone={finished} />
           )}
           <Button variant="secondary" className="min-h-16 text-xl!" onClick={() => setItem(undefined)}>
             Scan a tool or bin
@@ -102,7 +103,7 @@ export function SignedIn({ who, badge, offlineCopy, countdown, onScan, onBadge, 
   );
 }
 
-function StationTool({ code, onDone }: { code: string; onDone: () => void }) {
+function StationTool({ code, onDone }: { code: string; onDone: (said: string) => void }) {
   const tool = useQuery(toolQueryOptions(code));
   if (tool.isPending) return <p className="text-2xl text-card">Opening {code}…</p>;
   if (tool.isError) return <StationNotice>{messageOf(tool.error)}</StationNotice>;
@@ -119,7 +120,7 @@ function StationTool({ code, onDone }: { code: string; onDone: () => void }) {
 /** Only draw and return unused at the station; the rest is a quartermaster's job at their own device. */
 const STATION_BIN_ACTIONS = new Set(['draw', 'return_unused']);
 
-function StationBin({ code, onDone }: { code: string; onDone: () => void }) {
+function StationBin({ code, onDone }: { code: string; onDone: (said: string) => void }) {
   const bin = useQuery(binQueryOptions(code));
   if (bin.isPending) return <p className="text-2xl text-card">Opening {code}…</p>;
   if (bin.isError) return <StationNotice>{messageOf(bin.error)}</StationNotice>;

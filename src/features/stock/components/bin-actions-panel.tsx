@@ -8,7 +8,8 @@ import { ReceiveForm } from './receive-form';
 import { ReturnUnusedForm } from './return-unused-form';
 import { WriteOffForm } from './write-off-form';
 
-type ActionFormProps = { bin: BinForYou; onDone?: () => void };
+/** `said`: the sentence that confirmed the action (also in the toast), for a screen that shows it larger. */
+type ActionFormProps = { bin: BinForYou; onDone?: (said: string) => void };
 
 const ACTIONS: Record<BinAction, { label: string; Form: ComponentType<ActionFormProps> }> = {
   draw: { label: 'Draw', Form: DrawForm },
@@ -23,7 +24,7 @@ const ACTIONS: Record<BinAction, { label: string; Form: ComponentType<ActionForm
  * What the signed-in person may do with this bin, exactly as the server's `forYou` says. With
  * more than one action, big choice buttons pick the form; only that form is on screen.
  */
-export function BinActionsPanel({ bin, onDone }: { bin: BinForYou; onDone?: () => void }) {
+export function BinActionsPanel({ bin, onDone }: ActionFormProps) {
   const { actions } = bin.forYou;
   const [picked, setPicked] = useState<BinAction>();
   // The server may withdraw an action (the bin ran empty): fall back to the first still offered.

@@ -17,7 +17,7 @@ export const adjustmentWords = (variance: number, valueCents: number) => `Adjust
  * A count sets the bin to what is really on the shelf. The adjustment and its value are shown
  * before saving, so a miscount is caught before it reaches the ledger.
  */
-export function CountForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void }) {
+export function CountForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: string) => void }) {
   const count = useCount();
   const form = useForm<z.input<typeof countBodySchema>, unknown, CountBody>({ resolver: zodResolver(countBodySchema), defaultValues: { note: '' } });
   const counted = useWatch({ control: form.control, name: 'counted' });
@@ -26,13 +26,13 @@ export function CountForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void
   const submit = form.handleSubmit(async (body) => {
     try {
       const result = await count.mutateAsync({ code: bin.code, body });
-      toast.success(
+      const said =
         result.variance === 0
-          ? `Count saved: ${bin.code} matches its ledger.`
-          : `Count saved: ${adjustmentWords(result.variance, result.varianceValueCents).toLowerCase()}.`,
-      );
+        ? `Count saved: ${bin.code} matches its ledger.`
+        : `Count saved: ${adjustmentWords(result.variance, result.varianceValueCents).toLowerCase()}.`;
+      toast.success(said);
       form.reset({ note: '' });
-      onDone?.();
+      onDone?.(said);
     } catch (err) {
       form.setError('root', { message: applyServerErrors(err, form.setError, ['counted', 'note']) });
     }

@@ -19,7 +19,7 @@ import { ActionForm, Preview, QuantityInput } from './action-form';
  * A member takes stock for their work; it goes on their tab at today's unit cost. Naming one of
  * their open assemblies is optional; it puts the draw beside that assembly's estimate.
  */
-export function DrawForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void }) {
+export function DrawForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: string) => void }) {
   const draw = useDraw();
   // Said while typing and again on Draw, so a quantity the bin cannot give is never sent.
   const tooMany =
@@ -36,9 +36,10 @@ export function DrawForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void 
   const submit = form.handleSubmit(async (body) => {
     try {
       const entry = await draw.mutateAsync({ code: bin.code, body });
-      toast.success(`You drew ${formatQuantity(-entry.quantity, bin.unit)} from ${bin.code}: ${formatCents(-entry.valueCents)} on your tab.`);
+      const said = `You drew ${formatQuantity(-entry.quantity, bin.unit)} from ${bin.code}: ${formatCents(-entry.valueCents)} on your tab.`;
+      toast.success(said);
       form.reset({ note: '', assemblyId: body.assemblyId });
-      onDone?.();
+      onDone?.(said);
     } catch (err) {
       form.setError('root', { message: applyServerErrors(err, form.setError, ['quantity', 'note']) });
     }

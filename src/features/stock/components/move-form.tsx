@@ -10,7 +10,7 @@ import { formatCount, formatQuantity } from '../utils/format';
 import { ActionForm, QuantityInput } from './action-form';
 
 /** Moves stock to another bin of the same spec (the server offers only those). */
-export function MoveForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void }) {
+export function MoveForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: string) => void }) {
   const move = useMove();
   const targets = bin.forYou.sameSpecBins;
   const form = useForm<z.input<typeof moveBodySchema>, unknown, MoveBody>({
@@ -21,9 +21,10 @@ export function MoveForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void 
   const submit = form.handleSubmit(async (body) => {
     try {
       await move.mutateAsync({ code: bin.code, body });
-      toast.success(`Moved ${formatQuantity(body.quantity, bin.unit)} from ${bin.code} to ${body.to}.`);
+      const said = `Moved ${formatQuantity(body.quantity, bin.unit)} from ${bin.code} to ${body.to}.`;
+      toast.success(said);
       form.reset({ to: body.to, note: '' });
-      onDone?.();
+      onDone?.(said);
     } catch (err) {
       form.setError('root', { message: applyServerErrors(err, form.setError, ['to', 'quantity', 'note']) });
     }

@@ -25,7 +25,7 @@ type ReceiveInput = z.input<typeof receiveFormSchema>;
 type ReceiveValues = z.output<typeof receiveFormSchema>;
 
 /** Books an order in: quantity (or packs), the unit cost it came at, a note and the packing slip. */
-export function ReceiveForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void }) {
+export function ReceiveForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: string) => void }) {
   const receive = useReceive();
   const upload = useUploadSlip();
   const [slip, setSlip] = useState<Slip>();
@@ -48,10 +48,11 @@ export function ReceiveForm({ bin, onDone }: { bin: BinForYou; onDone?: () => vo
     const quantity = inPacks ? v.amount * bin.packSize : v.amount;
     try {
       await receive.mutateAsync({ code: bin.code, body: { quantity, unitCost: v.unitCost, note: v.note, ...(slip && { slipId: slip.id }) } });
-      toast.success(`${formatQuantity(quantity, bin.unit)} received into ${bin.code}.`);
+      const said = `${formatQuantity(quantity, bin.unit)} received into ${bin.code}.`;
+      toast.success(said);
       form.reset({ countIn: v.countIn, unitCost: v.unitCost, note: '' });
       setSlip(undefined);
-      onDone?.();
+      onDone?.(said);
     } catch (err) {
       form.setError('root', { message: applyServerErrors(err, form.setError, ['unitCost', 'note']) });
     }

@@ -11,7 +11,7 @@ import { formatCents, formatQuantity } from '../utils/format';
 import { ActionForm, QuantityInput } from './action-form';
 
 /** Unused stock goes back in the bin and off the member's tab: at most what they drew and kept. */
-export function ReturnUnusedForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void }) {
+export function ReturnUnusedForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: string) => void }) {
   const returnUnused = useReturnUnused();
   const most = bin.forYou.yourNetDrawn;
   const schema = useMemo(
@@ -26,9 +26,10 @@ export function ReturnUnusedForm({ bin, onDone }: { bin: BinForYou; onDone?: () 
   const submit = form.handleSubmit(async (body) => {
     try {
       const entry = await returnUnused.mutateAsync({ code: bin.code, body });
-      toast.success(`${formatQuantity(entry.quantity, bin.unit)} back in ${bin.code}: ${formatCents(entry.valueCents)} off your tab.`);
+      const said = `${formatQuantity(entry.quantity, bin.unit)} back in ${bin.code}: ${formatCents(entry.valueCents)} off your tab.`;
+      toast.success(said);
       form.reset({ note: '' });
-      onDone?.();
+      onDone?.(said);
     } catch (err) {
       form.setError('root', { message: applyServerErrors(err, form.setError, ['quantity', 'note']) });
     }

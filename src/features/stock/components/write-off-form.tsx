@@ -11,7 +11,7 @@ import { valueAtCost } from '../utils/value';
 import { ActionForm, Preview, QuantityInput } from './action-form';
 
 /** Damaged, dropped, out of date: stock leaves the bin with a reason on the ledger. */
-export function WriteOffForm({ bin, onDone }: { bin: BinForYou; onDone?: () => void }) {
+export function WriteOffForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: string) => void }) {
   const writeOff = useWriteOff();
   const form = useForm<z.input<typeof writeOffBodySchema>, unknown, WriteOffBody>({ resolver: zodResolver(writeOffBodySchema), defaultValues: { note: '' } });
   const quantity = useWatch({ control: form.control, name: 'quantity' });
@@ -20,9 +20,10 @@ export function WriteOffForm({ bin, onDone }: { bin: BinForYou; onDone?: () => v
   const submit = form.handleSubmit(async (body) => {
     try {
       const entry = await writeOff.mutateAsync({ code: bin.code, body });
-      toast.success(`${formatQuantity(-entry.quantity, bin.unit)} written off from ${bin.code}.`);
+      const said = `${formatQuantity(-entry.quantity, bin.unit)} written off from ${bin.code}.`;
+      toast.success(said);
       form.reset({ note: '' });
-      onDone?.();
+      onDone?.(said);
     } catch (err) {
       form.setError('root', { message: applyServerErrors(err, form.setError, ['quantity', 'note']) });
     }

@@ -16,7 +16,7 @@ import { useCheckOut } from '../api/tool-actions';
 const toDateInput = (at: string | Date) => chapterDay(new Date(at), chapterTimeZone());
 
 /** Check out with the loan period's due date (editable) and the accessories listed so nothing stays behind. */
-export function CheckoutForm({ tool, onDone }: { tool: ToolForYou; onDone?: () => void }) {
+export function CheckoutForm({ tool, onDone }: { tool: ToolForYou; onDone?: (said: string) => void }) {
   const checkOut = useCheckOut();
   const [due, setDue] = useState(toDateInput(tool.forYou.defaultDueAt));
   const [ticked, setTicked] = useState<string[]>([]);
@@ -33,8 +33,9 @@ export function CheckoutForm({ tool, onDone }: { tool: ToolForYou; onDone?: () =
       { code: tool.code, body: { ...(dueAt && { dueAt }), ...(takeable.length > 0 && { accessories: ticked }) } },
       {
         onSuccess: (loan) => {
-          toast.success(`${tool.code} is yours until ${formatDueDay(loan.dueAt)}.`);
-          onDone?.();
+          const said = `${tool.code} is yours until ${formatDueDay(loan.dueAt)}.`;
+          toast.success(said);
+          onDone?.(said);
         },
         onError: (err) => setProblem(messageOf(err)),
       },

@@ -13,7 +13,7 @@ export type PhotoSlot = (onUploaded: (photoId: number | undefined) => void) => R
  * Return: did it come back ok or does it need attention (with a note, and a photo if the route
  * offers one)? A temporary fastener tray asks how many came back, so a short tray is recorded.
  */
-export function ReturnForm({ tool, photoSlot, onDone }: { tool: ToolForYou; photoSlot?: PhotoSlot; onDone?: () => void }) {
+export function ReturnForm({ tool, photoSlot, onDone }: { tool: ToolForYou; photoSlot?: PhotoSlot; onDone?: (said: string) => void }) {
   const giveBack = useReturnTool();
   const returned = { category: tool.category, trayCapacity: tool.trayCapacity, accessoriesOut: tool.loan?.accessoriesOut ?? null };
   const [fields, setFields] = useReturnFieldValues(returned);
@@ -33,8 +33,9 @@ export function ReturnForm({ tool, photoSlot, onDone }: { tool: ToolForYou; phot
           if (r.shortfall) parts.push(`${r.shortfall} temporary fasteners short: noted for the quartermaster.`);
           if (r.accessoriesMissing.length > 0) parts.push(`Not back: ${r.accessoriesMissing.join(', ')}; noted for the quartermaster.`);
           if (r.offeredTo) parts.push(`It is now held for ${r.offeredTo.name}.`);
-          toast.success(parts.join(' '));
-          onDone?.();
+          const said = parts.join(' ');
+          toast.success(said);
+          onDone?.(said);
         },
         onError: (err) => setProblem(messageOf(err)),
       },

@@ -10,7 +10,7 @@ import { CheckoutForm } from './checkout-form';
 import { ReturnForm, type PhotoSlot } from './return-form';
 
 /** The one or two things the signed-in person may do with this tool now, or why not. */
-export function ToolActionsPanel({ tool, photoSlot, onDone }: { tool: ToolForYou; photoSlot?: PhotoSlot; onDone?: () => void }) {
+export function ToolActionsPanel({ tool, photoSlot, onDone }: { tool: ToolForYou; photoSlot?: PhotoSlot; onDone?: (said: string) => void }) {
   const { actions, reason, yourHold } = tool.forYou;
   const placeHold = usePlaceHold();
   const cancelHold = useCancelHold();

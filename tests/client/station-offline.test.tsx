@@ -321,6 +321,17 @@ describe('a station without the network, with its copy', () => {
     expect(await refusedOf(marco.id)).toEqual([]);
   });
 
+  it('opens a scanned tool under the station’s greeting, in the station’s words, leaving the tab’s title alone', async () => {
+    const user = await marcoSignedInOffline();
+    const title = document.title;
+    await user.type(screen.getByLabelText('Scanner, or type a tool or bin code'), 'T-0042{Enter}');
+    await screen.findByRole('button', { name: 'Check out T-0042' });
+    expect(screen.getByText(/What you do here waits on this station and is sent when the connection is back\./)).toBeTruthy();
+    expect(screen.queryByText(/this phone/)).toBeNull();
+    expect(screen.getAllByRole('heading', { level: 1 }).map((h) => h.textContent)).toEqual(['Hello, Marco Bellweather']);
+    expect(document.title).toBe(title);
+  });
+
   it('offers return unused up to what the person drew by the copy', async () => {
     const user = await marcoSignedInOffline();
     await user.type(screen.getByLabelText('Scanner, or type a tool or bin code'), 'B-0107{Enter}');

@@ -16,7 +16,7 @@ export function OfflineBinView({ code, ...source }: { code: string } & CopySourc
         const chosen = kinds.includes(picked) ? picked : kinds[0];
         return (
           <OfflineItemPage
-            takenAt={copy.catalogue.takenAt}
+            copy={copy}
             code={bin.code}
             title={bin.designation}
             subtitle={BIN_KIND_LABELS[bin.kind]}

@@ -2,12 +2,12 @@ import { Notice } from '@/components/ui/notice';
 import { formatTimeAgo } from '@/lib/format';
 import { useNow } from '../hooks';
 
-/** Says plainly that the page shows the phone's copy, and how old it is. */
-export function OfflineCopyNote({ takenAt }: { takenAt: string }) {
+/** Says plainly that the page shows the device's copy (the phone's, or a crib station's), and how old it is. */
+export function OfflineCopyNote({ takenAt, device = 'phone' }: { takenAt: string; device?: 'phone' | 'station' }) {
   const now = useNow();
   return (
     <Notice tone="warn" title={`Offline copy from ${formatTimeAgo(takenAt, now)}`}>
-      No connection to Gripline. What you do here waits on this phone and is sent when the connection is back.
+      No connection to Gripline. What you do here waits on this {device} and is sent when the connection is back.
     </Notice>
   );
 }

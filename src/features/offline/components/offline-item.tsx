@@ -49,10 +49,12 @@ function FoundInCopy<State>({
 
 /**
  * A tool or bin page from the copy: the copy's age, a card with what it is and where it lives
- * (`facts` add to the list), then what can be done offline and what needs the connection.
+ * (`facts` add to the list), then what can be done offline and what needs the connection. At a crib
+ * station it sits under the station's own greeting: a second-level heading that leaves the tab's title
+ * and the focus alone, and words about the station rather than a phone.
  */
 export function OfflineItemPage({
-  takenAt,
+  copy,
   code,
   title,
   subtitle,
@@ -62,7 +64,7 @@ export function OfflineItemPage({
   needsConnection,
   children,
 }: {
-  takenAt: string;
+  copy: CopyInUse;
   code: string;
   title: string;
   subtitle: string;
@@ -72,12 +74,17 @@ export function OfflineItemPage({
   needsConnection: string;
   children: ReactNode;
 }) {
+  const atStation = copy.station !== undefined;
   return (
     <div className="flex flex-col gap-4">
-      <OfflineCopyNote takenAt={takenAt} />
+      <OfflineCopyNote takenAt={copy.catalogue.takenAt} device={atStation ? 'station' : 'phone'} />
       <Card>
         <p className="font-mono text-lg font-medium text-brass-deep">{code}</p>
-        <PageHeading title={title} tabTitle={`${code} ${title}`} className="leading-tight" />
+        {atStation ? (
+          <h2 className="text-2xl leading-tight font-bold">{title}</h2>
+        ) : (
+          <PageHeading title={title} tabTitle={`${code} ${title}`} className="leading-tight" />
+        )}
         <p className="text-steel">{subtitle}</p>
         <dl className="mt-3 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1.5">
           <dt className="text-steel">Lives at</dt>

@@ -14,7 +14,7 @@ export function OfflineToolView({ code, ...source }: { code: string } & CopySour
         const { tool } = state;
         return (
           <OfflineItemPage
-            takenAt={copy.catalogue.takenAt}
+            copy={copy}
             code={tool.code}
             title={tool.name}
             subtitle={CATEGORY_LABELS[tool.category]}

@@ -31,4 +31,21 @@ describe("the member's home on a phone", () => {
     await page.getByRole('heading', { name: 'Hand rivet squeezer', level: 1 }).waitFor();
     await page.context().close();
   });
+
+  it('keeps each tool code on one line in My loans’ long Returned list at 360 px', async () => {
+    const page = await signedInPhone(suite.browser, suite.app.url, 'member@example.org', DEMO_PASSWORD);
+    await page.goto(`${suite.app.url}/loans`);
+    const returned = page.locator('section, div').filter({ has: page.getByRole('heading', { name: 'Returned', level: 2 }) }).last();
+    await returned.getByRole('link').first().waitFor();
+    // A code broken at its hyphen ("T-" above "0051") is two lines tall; one line is at most its line height.
+    const codes = await returned.getByRole('link').evaluateAll((links) =>
+      links.map((link) => {
+        const code = link.querySelector('.font-mono')!;
+        return { code: code.textContent, height: code.getBoundingClientRect().height, line: parseFloat(getComputedStyle(code).lineHeight) };
+      }),
+    );
+    expect(codes.length).toBeGreaterThan(5);
+    expect(codes.filter((c) => c.height > c.line * 1.5)).toEqual([]);
+    await page.context().close();
+  });
 });

@@ -47,3 +47,8 @@ export function Card({ title, children, className = '' }: { title?: string; chil
 export function Code({ children }: { children: ReactNode }) {
   return <span className="font-mono text-[0.95em]">{children}</span>;
 }
+
+/** A tool's or bin's code in running text: never broken at its hyphen ("T-" above "0051") on a narrow phone. */
+export function ItemCode({ code, className = '' }: { code: string; className?: string }) {
+  return <span className={`font-mono whitespace-nowrap ${className}`}>{code}</span>;
+}

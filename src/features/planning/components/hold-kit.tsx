@@ -4,6 +4,7 @@ import { Notice } from '@/components/ui/notice';
 import { messageOf } from '@/lib/errors';
 import { formatDay } from '@/lib/format';
 import { useHoldKit } from '../api/hold-kit';
+import { ItemCode } from '@/components/ui/page';
 
 /**
  * One tap asks the crib to hold every tool of the kit from the assembly's planned start; what could
@@ -32,7 +33,7 @@ export function HoldKit({ assemblyId, plannedStart, onHeld }: { assemblyId: numb
               <ul className="mt-1 list-disc pl-5">
                 {result.placed.map((t) => (
                   <li key={t.code}>
-                    <span className="font-mono">{t.code}</span> {t.name}
+                    <ItemCode code={t.code} /> {t.name}
                   </li>
                 ))}
               </ul>
@@ -46,7 +47,7 @@ export function HoldKit({ assemblyId, plannedStart, onHeld }: { assemblyId: numb
               <ul className="mt-1 list-disc pl-5">
                 {result.skipped.map((t) => (
                   <li key={t.code}>
-                    <span className="font-mono">{t.code}</span>: {t.reason}
+                    <ItemCode code={t.code} />: {t.reason}
                   </li>
                 ))}
               </ul>

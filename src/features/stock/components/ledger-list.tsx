@@ -6,7 +6,7 @@ import { MOVEMENT_LABELS } from '@shared/stock/kinds';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
-import { Card } from '@/components/ui/page';
+import { Card, ItemCode } from '@/components/ui/page';
 import { messageOf } from '@/lib/errors';
 import { useReverse } from '../api/bin-actions';
 import { ledgerQueryOptions } from '../api/get-ledger';
@@ -91,7 +91,7 @@ function LedgerItem({ code, entry: m, isQuartermaster }: { code: string; entry: 
           {m.otherBinCode && (
             <span className="font-normal text-steel">
               {' '}
-              {m.kind === 'transfer_out' ? 'to' : 'from'} <span className="font-mono">{m.otherBinCode}</span>
+              {m.kind === 'transfer_out' ? 'to' : 'from'} <ItemCode code={m.otherBinCode} />
             </span>
           )}
         </p>

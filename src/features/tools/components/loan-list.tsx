@@ -2,6 +2,7 @@ import { Link } from 'react-router';
 import type { Loan } from '@shared/schemas/tools';
 import { formatDate, formatDateTime, formatDueDay } from '@/lib/format';
 import { DueBadge } from './due-badge';
+import { ItemCode } from '@/components/ui/page';
 
 /** Open loans, soonest due first, each with due words (and colour) and the accessories that went out with it, to bring back. */
 export function OpenLoanList({ loans, showHolder = false, empty }: { loans: Loan[]; showHolder?: boolean; empty: string }) {
@@ -11,7 +12,7 @@ export function OpenLoanList({ loans, showHolder = false, empty }: { loans: Loan
       {loans.map((l) => (
         <li key={l.id} className="rounded-lg border border-rule bg-card p-3">
           <Link to={`/tools/${l.tool.code}`} className="flex min-h-11 flex-col">
-            <span className="font-mono text-sm font-medium text-brass-deep">{l.tool.code}</span>
+            <ItemCode code={l.tool.code} className="text-sm font-medium text-brass-deep" />
             <span className="font-semibold underline-offset-4 hover:underline">{l.tool.name}</span>
           </Link>
           <div className="mt-1 flex flex-wrap items-center gap-2 text-sm">
@@ -33,7 +34,7 @@ export function LoanHistoryList({ loans }: { loans: Loan[] }) {
       {loans.map((l) => (
         <li key={l.id} className="py-2">
           <Link to={`/tools/${l.tool.code}`} className="inline-flex min-h-11 items-center gap-1 font-medium underline-offset-4 hover:underline">
-            <span className="font-mono">{l.tool.code}</span> {l.tool.name}
+            <ItemCode code={l.tool.code} /> {l.tool.name}
           </Link>
           <p className="text-sm text-steel">
             {formatDate(l.checkedOutAt)} – {l.returnedAt ? formatDateTime(l.returnedAt) : ''}

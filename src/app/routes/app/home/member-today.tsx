@@ -4,7 +4,7 @@ import { Link } from 'react-router';
 import type { MemberToday as Today, MemberTodayAssembly, MemberTodayHold } from '@shared/schemas/today-member';
 import { memberTodayQueryOptions } from '@/features/today/api/get-member-today';
 import { DueStateBadge } from '@/features/tools/components/due-badge';
-import { Card } from '@/components/ui/page';
+import { Card, ItemCode } from '@/components/ui/page';
 import { formatAssembly, formatCents, formatCount, formatDateTime } from '@/lib/format';
 
 const ITEM_LINK = 'inline-flex min-h-11 items-center gap-2 font-semibold underline underline-offset-4';
@@ -33,7 +33,7 @@ function Section({ title, total, shown, all, children }: { title: string; total:
 function ToolLink({ tool }: { tool: { code: string; name: string } }) {
   return (
     <Link to={`/tools/${tool.code}`} className={ITEM_LINK}>
-      <span className="font-mono whitespace-nowrap text-brass-deep">{tool.code}</span>
+      <ItemCode code={tool.code} className="text-brass-deep" />
       <span>{tool.name}</span>
     </Link>
   );

@@ -3,7 +3,7 @@ import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import type { QuartermasterToday as Today } from '@shared/schemas/today-quartermaster';
 import { quartermasterTodayQueryOptions } from '@/features/today/api/get-quartermaster-today';
-import { Card } from '@/components/ui/page';
+import { Card, ItemCode } from '@/components/ui/page';
 import { formatCents, formatCount, formatDate, formatDateTime, formatDay, formatQuantity } from '@/lib/format';
 
 /** A line of a home list: the whole line is the link to where it is dealt with (44 px or more to tap). */
@@ -35,7 +35,7 @@ function Line({ code, title, detail }: { code: string; title: string; detail: Re
   return (
     <>
       <span className="font-medium">
-        <span className="font-mono">{code}</span> · {title}
+        <ItemCode code={code} /> · {title}
       </span>
       <span className="text-sm text-ink-soft">{detail}</span>
     </>

@@ -16,9 +16,15 @@ function cameraProblem(err: unknown): string {
 }
 
 /**
+ * How long a code must be out of sight before the camera reports it again: held in front of the lens
+ * it is reported once, taken away and shown again it is reported anew (a badge refused and tried again).
+ */
+export const CODE_GONE_MS = 1_000;
+
+/**
  * The rear camera in the returned video element, its frames decoded until the screen closes. Each
- * code is reported once until the camera sees a different one. The time from the stream playing to
- * the first code read is kept (and logged) with the decoder that read it.
+ * code is reported once while it stays in sight (see `CODE_GONE_MS`). The time from the stream playing
+ * to the first code read is kept (and logged) with the decoder that read it.
  */
 export function useQrCamera(onCode: (code: string) => void): [CameraState, RefObject<HTMLVideoElement | null>] {
   const video = useRef<HTMLVideoElement>(null);
@@ -48,16 +54,18 @@ export function useQrCamera(onCode: (code: string) => void): [CameraState, RefOb
         const path = qr.path;
         if (cancelled) return;
         setState({ kind: 'scanning', path });
-        let last = '';
+        const sighting = codeSighting();
+        let readOnce = false;
         stopFrames = everyVideoFrame(element, async () => {
           const text = (await qr.read(element))?.trim();
-          if (cancelled || !text || text === last) return;
-          if (!last) {
+          const fresh = sighting.isNew(text, performance.now());
+          if (cancelled || !text || !fresh) return;
+          if (!readOnce) {
+            readOnce = true;
             const firstDecodeMs = Math.round(performance.now() - playingAt);
             console.debug(`Gripline scanner: first code after ${firstDecodeMs} ms (path ${path})`);
             setState({ kind: 'scanning', path, firstDecodeMs });
           }
-          last = text;
           onCodeRef.current(text);
         });
       } catch (err) {
@@ -72,4 +80,25 @@ export function useQrCamera(onCode: (code: string) => void): [CameraState, RefOb
   }, []);
 
   return [state, video];
+}
+
+/**
+ * Which frame's code is new: a different code, or the same one after it has been out of sight for
+ * `goneMs`. Frames where nothing is read count as out of sight.
+ */
+export function codeSighting(goneMs = CODE_GONE_MS) {
+  let last = '';
+  let seenAt = 0;
+  return {
+    isNew(text: string | undefined, now: number): boolean {
+      if (!text) {
+        if (last && now - seenAt >= goneMs) last = '';
+        return false;
+      }
+      const fresh = text !== last;
+      last = text;
+      seenAt = now;
+      return fresh;
+    },
+  };
 }

@@ -6,6 +6,7 @@ import { IDEMPOTENCY_KEY_HEADER, PERFORMED_AT_HEADER } from '@shared/schemas/off
 import type { StationCopy, StationCopyPerson } from '@shared/schemas/stations';
 import { stationSignInWords } from '@shared/stations/station-sign-in-rules';
 import { StationRoute } from '@/app/routes/station';
+import { SAME_LABEL_QUIET_MS } from '@/app/routes/station/signed-in';
 import { enqueue, refusedOf, waitingOf, type NewQueuedAction } from '@/features/offline/api/queue';
 import { stationRefusedOf, stationWaitingOf } from '@/features/offline/api/station-queue';
 import { offlineDb } from '@/features/offline/db';
@@ -330,6 +331,34 @@ describe('a station without the network, with its copy', () => {
     expect(screen.queryByText(/this phone/)).toBeNull();
     expect(screen.getAllByRole('heading', { level: 1 }).map((h) => h.textContent)).toEqual(['Hello, Marco Bellweather']);
     expect(document.title).toBe(title);
+  });
+
+  it('takes the label still in front of the camera after a checkout for that, not for a new scan; typed, the code opens at once', async () => {
+    const user = await marcoSignedInOffline();
+    // An item is open when its "Scan a tool or bin" way back is on screen instead of the scan list.
+    const itemOpen = () => screen.queryByRole('button', { name: 'Scan a tool or bin' }) !== null;
+    await user.type(screen.getByLabelText('Scanner, or type a tool or bin code'), 'T-0042{Enter}');
+    await user.click(await screen.findByRole('button', { name: 'Check out T-0042' }));
+    const waiting = await screen.findByText(/^Waiting to send: T-0042\./, undefined, SLOW);
+
+    // The scan list's camera starts afresh and reads the label the member still holds up.
+    act(() => camera.read!('T-0042'));
+    expect(itemOpen()).toBe(false);
+    expect(waiting.isConnected).toBe(true);
+
+    // Shown again once the moment has passed, it opens.
+    const later = Date.now() + SAME_LABEL_QUIET_MS;
+    vi.spyOn(Date, 'now').mockReturnValue(later);
+    act(() => camera.read!('T-0042'));
+    await waitFor(() => expect(itemOpen()).toBe(true));
+    vi.mocked(Date.now).mockRestore();
+
+    // Left with "Scan a tool or bin", the same holds; typed, it opens at once.
+    await user.click(screen.getByRole('button', { name: 'Scan a tool or bin' }));
+    act(() => camera.read!('T-0042'));
+    expect(itemOpen()).toBe(false);
+    await user.type(screen.getByLabelText('Scanner, or type a tool or bin code'), 'T-0042{Enter}');
+    await waitFor(() => expect(itemOpen()).toBe(true));
   });
 
   it('offers return unused up to what the person drew by the copy', async () => {

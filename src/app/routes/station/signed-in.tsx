@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import { useState, type ReactNode } from 'react';
+import { useRef, useState, type ReactNode } from 'react';
 import type { StoredStationCopy } from '@/features/offline/db';
 import { StationOfflineItem } from '@/features/offline/components/station-offline-item';
 import { NOT_OURS } from '@/features/stations/hooks/station-steps';
@@ -42,10 +42,18 @@ interface SignedInProps {
   onDone: () => void;
 }
 
+/**
+ * After an action, how long the camera's read of that same code is taken for its label still held in
+ * front of the lens (the camera starts afresh with the scan list), not for a new scan. Typed or from a
+ * USB scanner, the code opens at once.
+ */
+export const SAME_LABEL_QUIET_MS = 5_000;
+
 /** One person at the station: scan a tool or bin, do what they may, and see what happened in large type. */
 export function SignedIn({ who, badge, offlineCopy, countdown, onScan, onBadge, onDone }: SignedInProps) {
   const [item, setItem] = useState<{ kind: 'tool' | 'bin'; code: string }>();
   const [result, setResult] = useState<string>();
+  const dealtWith = useRef<{ code: string; at: number }>(undefined);
   const scan = (raw: string) => {
     onScan();
     const scanned = readScan(raw);
@@ -54,15 +62,23 @@ export function SignedIn({ who, badge, offlineCopy, countdown, onScan, onBadge, 
     setResult(undefined);
     setItem(scanned);
   };
+  const scanByCamera = (raw: string) => {
+    const scanned = readScan(raw);
+    const last = dealtWith.current;
+    if ('code' in scanned && last?.code === scanned.code && Date.now() - last.at < SAME_LABEL_QUIET_MS) return;
+    scan(raw);
+  };
+  /** Back to the scan list, the label of the item just left perhaps still in front of the camera. */
+  const leaveItem = (code: string) => {
+    dealtWith.current = { code, at: Date.now() };
+    setItem(undefined);
+  };
   /** What was done, in the words that confirmed it (the due date, the tab), large enough to read from a step away. */
-  const finished = (said: string) => {
-    setItem(undefined);
-    setResult(`${said} Scan the next tool or bin, or tap Done.`);
+  const backToScan = (code: string, words: string) => {
+    leaveItem(code);
+    setResult(`${words} Scan the next tool or bin, or tap Done.`);
   };
-  const queued = (code: string) => {
-    setItem(undefined);
-    setResult(`Waiting to send: ${code}. It goes when the connection is back. Scan the next tool or bin, or tap Done.`);
-  };
+  const queued = (code: string) => backToScan(code, `Waiting to send: ${code}. It goes when the connection is back.`);
 
   return (
     <>
@@ -84,18 +100,18 @@ export function SignedIn({ who, badge, offlineCopy, countdown, onScan, onBadge, 
           {offlineCopy ? (
             <StationOfflineItem stored={offlineCopy} person={who} badge={badge} item={item} onQueued={() => queued(item.code)} />
           ) : item.kind === 'tool' ? (
-            <StationTool code={item.code} onDone={finished} />
+            <StationTool code={item.code} onDone={(said) => backToScan(item.code, said)} />
           ) : (
-            <StationBin code={item.code} onDone={finished} />
+            <StationBin code={item.code} onDone={(said) => backToScan(item.code, said)} />
           )}
-          <Button variant="secondary" className="min-h-16 text-xl!" onClick={() => setItem(undefined)}>
+          <Button variant="secondary" className="min-h-16 text-xl!" onClick={() => leaveItem(item.code)}>
             Scan a tool or bin
           </Button>
         </div>
       ) : (
         <>
           <h2 className="text-3xl font-bold">Scan a tool or bin</h2>
-          <StationCamera onCode={scan} />
+          <StationCamera onCode={scanByCamera} />
           <ScanEntry label="Scanner, or type a tool or bin code" onCode={scan} />
         </>
       )}

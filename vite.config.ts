@@ -93,7 +93,9 @@ export default defineConfig({
       },
       {
         // Tests that a busy CPU makes unreliable in the browser itself (the service worker's hand-over to a
-        // new version): they run one at a time after every other project has finished.
+        // new version): they run one at a time with nothing else beside them. Vitest runs the groups in turn:
+        // server, build and client together (groupOrder 0), then this one (1), then the browser project's
+        // one-at-a-time files (fileParallelism: false puts them in a group of their own, last).
         extends: true,
         test: {
           name: 'browser-alone',

@@ -45,8 +45,8 @@ describe('a new version of the installed app', () => {
   // (more than 100 s, in about one run in two even on an idle machine: a later skipWaiting() from the
   // page or the worker itself did not restart the hand-over, only the DevTools protocol's did). The app
   // now asks for the hand-over once the page has fetched nothing for 2 s (`networkQuiet`), and this test
-  // passed 14 runs in 14 with it, 6 of them beside three busy loops. It runs alone after the other projects
-  // (`browser-alone` in vite.config.ts) so a busy machine does not stretch those 2 s; one retry is for a
+  // passed 14 runs in 14 with it, 6 of them beside three busy loops. It runs with nothing beside it (the
+  // `browser-alone` project in vite.config.ts) so a busy machine does not stretch those 2 s; one retry is for a
   // shared machine busy with something else.
   it('says "Update ready", keeps a half-filled form, and reloads only on the tap', { retry: 1, timeout: 120_000 }, async () => {
     const served = await serveClientCopy();

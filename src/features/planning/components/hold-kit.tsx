@@ -1,10 +1,10 @@
 import type { KitHoldsResult } from '@shared/schemas/builds';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { ItemCode } from '@/components/ui/page';
 import { messageOf } from '@/lib/errors';
 import { formatDay } from '@/lib/format';
 import { useHoldKit } from '../api/hold-kit';
-import { ItemCode } from '@/components/ui/page';
 
 /**
  * One tap asks the crib to hold every tool of the kit from the assembly's planned start; what could

@@ -7,9 +7,9 @@ import { MoveForm } from './move-form';
 import { ReceiveForm } from './receive-form';
 import { ReturnUnusedForm } from './return-unused-form';
 import { WriteOffForm } from './write-off-form';
+import type { ActionDone } from '@/lib/action-done';
 
-/** `said`: the sentence that confirmed the action (also in the toast), for a screen that shows it larger. */
-type ActionFormProps = { bin: BinForYou; onDone?: (said: string) => void };
+type ActionFormProps = { bin: BinForYou; onDone?: ActionDone };
 
 const ACTIONS: Record<BinAction, { label: string; Form: ComponentType<ActionFormProps> }> = {
   draw: { label: 'Draw', Form: DrawForm },

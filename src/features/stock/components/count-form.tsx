@@ -1,10 +1,10 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
-import { toast } from 'sonner';
 import type { z } from 'zod';
 import { countBodySchema, type BinForYou, type CountBody } from '@shared/schemas/bins';
 import { TextField } from '@/components/ui/field';
 import { applyServerErrors } from '@/lib/errors';
+import { confirmDone, type ActionDone } from '@/lib/action-done';
 import { useCount } from '../api/bin-actions';
 import { formatCount, formatQuantity, formatSigned, formatUnitCost } from '../utils/format';
 import { formatSignedCents, valueAtCost } from '../utils/value';
@@ -17,7 +17,7 @@ export const adjustmentWords = (variance: number, valueCents: number) => `Adjust
  * A count sets the bin to what is really on the shelf. The adjustment and its value are shown
  * before saving, so a miscount is caught before it reaches the ledger.
  */
-export function CountForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: string) => void }) {
+export function CountForm({ bin, onDone }: { bin: BinForYou; onDone?: ActionDone }) {
   const count = useCount();
   const form = useForm<z.input<typeof countBodySchema>, unknown, CountBody>({ resolver: zodResolver(countBodySchema), defaultValues: { note: '' } });
   const counted = useWatch({ control: form.control, name: 'counted' });
@@ -28,11 +28,10 @@ export function CountForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: str
       const result = await count.mutateAsync({ code: bin.code, body });
       const said =
         result.variance === 0
-        ? `Count saved: ${bin.code} matches its ledger.`
-        : `Count saved: ${adjustmentWords(result.variance, result.varianceValueCents).toLowerCase()}.`;
-      toast.success(said);
+          ? `Count saved: ${bin.code} matches its ledger.`
+          : `Count saved: ${adjustmentWords(result.variance, result.varianceValueCents).toLowerCase()}.`;
       form.reset({ note: '' });
-      onDone?.(said);
+      confirmDone(said, onDone);
     } catch (err) {
       form.setError('root', { message: applyServerErrors(err, form.setError, ['counted', 'note']) });
     }

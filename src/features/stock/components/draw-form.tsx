@@ -2,7 +2,6 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
 import { useMemo } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { toast } from 'sonner';
 import type { z } from 'zod';
 import { drawBodySchema, type BinForYou, type DrawBody } from '@shared/schemas/bins';
 import { SelectField, TextField } from '@/components/ui/field';
@@ -11,6 +10,7 @@ import { applyServerErrors } from '@/lib/errors';
 import { useDraw } from '../api/bin-actions';
 import { myAssembliesQueryOptions } from '../api/get-my-assemblies';
 import { formatAssembly } from '@/lib/format';
+import { confirmDone, type ActionDone } from '@/lib/action-done';
 import { formatCents, formatCount, formatQuantity, formatUnitCost } from '../utils/format';
 import { valueAtCost } from '../utils/value';
 import { ActionForm, Preview, QuantityInput } from './action-form';
@@ -19,7 +19,7 @@ import { ActionForm, Preview, QuantityInput } from './action-form';
  * A member takes stock for their work; it goes on their tab at today's unit cost. Naming one of
  * their open assemblies is optional; it puts the draw beside that assembly's estimate.
  */
-export function DrawForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: string) => void }) {
+export function DrawForm({ bin, onDone }: { bin: BinForYou; onDone?: ActionDone }) {
   const draw = useDraw();
   // Said while typing and again on Draw, so a quantity the bin cannot give is never sent.
   const tooMany =
@@ -37,9 +37,8 @@ export function DrawForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: stri
     try {
       const entry = await draw.mutateAsync({ code: bin.code, body });
       const said = `You drew ${formatQuantity(-entry.quantity, bin.unit)} from ${bin.code}: ${formatCents(-entry.valueCents)} on your tab.`;
-      toast.success(said);
       form.reset({ note: '', assemblyId: body.assemblyId });
-      onDone?.(said);
+      confirmDone(said, onDone);
     } catch (err) {
       form.setError('root', { message: applyServerErrors(err, form.setError, ['quantity', 'note']) });
     }

@@ -1,16 +1,16 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { toast } from 'sonner';
 import type { z } from 'zod';
 import { moveBodySchema, type BinForYou, type MoveBody } from '@shared/schemas/bins';
 import { SelectField, TextField } from '@/components/ui/field';
 import { applyServerErrors } from '@/lib/errors';
+import { confirmDone, type ActionDone } from '@/lib/action-done';
 import { useMove } from '../api/bin-actions';
 import { formatCount, formatQuantity } from '../utils/format';
 import { ActionForm, QuantityInput } from './action-form';
 
 /** Moves stock to another bin of the same spec (the server offers only those). */
-export function MoveForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: string) => void }) {
+export function MoveForm({ bin, onDone }: { bin: BinForYou; onDone?: ActionDone }) {
   const move = useMove();
   const targets = bin.forYou.sameSpecBins;
   const form = useForm<z.input<typeof moveBodySchema>, unknown, MoveBody>({
@@ -22,9 +22,8 @@ export function MoveForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: stri
     try {
       await move.mutateAsync({ code: bin.code, body });
       const said = `Moved ${formatQuantity(body.quantity, bin.unit)} from ${bin.code} to ${body.to}.`;
-      toast.success(said);
       form.reset({ to: body.to, note: '' });
-      onDone?.(said);
+      confirmDone(said, onDone);
     } catch (err) {
       form.setError('root', { message: applyServerErrors(err, form.setError, ['to', 'quantity', 'note']) });
     }

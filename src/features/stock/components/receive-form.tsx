@@ -1,13 +1,13 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { toast } from 'sonner';
 import { z } from 'zod';
 import { receiveBodySchema, unitCostField, type BinForYou, type Slip } from '@shared/schemas/bins';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { applyServerErrors, messageOf } from '@/lib/errors';
+import { confirmDone, type ActionDone } from '@/lib/action-done';
 import { useReceive } from '../api/bin-actions';
 import { useUploadSlip } from '../api/upload-slip';
 import { formatCents, formatCount, formatQuantity } from '../utils/format';
@@ -25,7 +25,7 @@ type ReceiveInput = z.input<typeof receiveFormSchema>;
 type ReceiveValues = z.output<typeof receiveFormSchema>;
 
 /** Books an order in: quantity (or packs), the unit cost it came at, a note and the packing slip. */
-export function ReceiveForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: string) => void }) {
+export function ReceiveForm({ bin, onDone }: { bin: BinForYou; onDone?: ActionDone }) {
   const receive = useReceive();
   const upload = useUploadSlip();
   const [slip, setSlip] = useState<Slip>();
@@ -49,10 +49,9 @@ export function ReceiveForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: s
     try {
       await receive.mutateAsync({ code: bin.code, body: { quantity, unitCost: v.unitCost, note: v.note, ...(slip && { slipId: slip.id }) } });
       const said = `${formatQuantity(quantity, bin.unit)} received into ${bin.code}.`;
-      toast.success(said);
       form.reset({ countIn: v.countIn, unitCost: v.unitCost, note: '' });
       setSlip(undefined);
-      onDone?.(said);
+      confirmDone(said, onDone);
     } catch (err) {
       form.setError('root', { message: applyServerErrors(err, form.setError, ['unitCost', 'note']) });
     }

@@ -1,17 +1,17 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMemo } from 'react';
 import { useForm } from 'react-hook-form';
-import { toast } from 'sonner';
 import type { z } from 'zod';
 import { returnUnusedBodySchema, type BinForYou, type ReturnUnusedBody } from '@shared/schemas/bins';
 import { TextField } from '@/components/ui/field';
 import { applyServerErrors } from '@/lib/errors';
+import { confirmDone, type ActionDone } from '@/lib/action-done';
 import { useReturnUnused } from '../api/bin-actions';
 import { formatCents, formatQuantity } from '../utils/format';
 import { ActionForm, QuantityInput } from './action-form';
 
 /** Unused stock goes back in the bin and off the member's tab: at most what they drew and kept. */
-export function ReturnUnusedForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: string) => void }) {
+export function ReturnUnusedForm({ bin, onDone }: { bin: BinForYou; onDone?: ActionDone }) {
   const returnUnused = useReturnUnused();
   const most = bin.forYou.yourNetDrawn;
   const schema = useMemo(
@@ -27,9 +27,8 @@ export function ReturnUnusedForm({ bin, onDone }: { bin: BinForYou; onDone?: (sa
     try {
       const entry = await returnUnused.mutateAsync({ code: bin.code, body });
       const said = `${formatQuantity(entry.quantity, bin.unit)} back in ${bin.code}: ${formatCents(entry.valueCents)} off your tab.`;
-      toast.success(said);
       form.reset({ note: '' });
-      onDone?.(said);
+      confirmDone(said, onDone);
     } catch (err) {
       form.setError('root', { message: applyServerErrors(err, form.setError, ['quantity', 'note']) });
     }

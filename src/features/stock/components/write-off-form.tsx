@@ -1,17 +1,17 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
-import { toast } from 'sonner';
 import type { z } from 'zod';
 import { writeOffBodySchema, type BinForYou, type WriteOffBody } from '@shared/schemas/bins';
 import { TextField } from '@/components/ui/field';
 import { applyServerErrors } from '@/lib/errors';
+import { confirmDone, type ActionDone } from '@/lib/action-done';
 import { useWriteOff } from '../api/bin-actions';
 import { formatCents, formatQuantity } from '../utils/format';
 import { valueAtCost } from '../utils/value';
 import { ActionForm, Preview, QuantityInput } from './action-form';
 
 /** Damaged, dropped, out of date: stock leaves the bin with a reason on the ledger. */
-export function WriteOffForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: string) => void }) {
+export function WriteOffForm({ bin, onDone }: { bin: BinForYou; onDone?: ActionDone }) {
   const writeOff = useWriteOff();
   const form = useForm<z.input<typeof writeOffBodySchema>, unknown, WriteOffBody>({ resolver: zodResolver(writeOffBodySchema), defaultValues: { note: '' } });
   const quantity = useWatch({ control: form.control, name: 'quantity' });
@@ -21,9 +21,8 @@ export function WriteOffForm({ bin, onDone }: { bin: BinForYou; onDone?: (said: 
     try {
       const entry = await writeOff.mutateAsync({ code: bin.code, body });
       const said = `${formatQuantity(-entry.quantity, bin.unit)} written off from ${bin.code}.`;
-      toast.success(said);
       form.reset({ note: '' });
-      onDone?.(said);
+      confirmDone(said, onDone);
     } catch (err) {
       form.setError('root', { message: applyServerErrors(err, form.setError, ['quantity', 'note']) });
     }

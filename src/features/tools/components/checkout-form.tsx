@@ -1,5 +1,4 @@
 import { useState } from 'react';
-import { toast } from 'sonner';
 import type { ToolForYou } from '@shared/schemas/tools';
 import { AccessoryChecklist } from '@/components/ui/accessory-checklist';
 import { chapterDay, endOfChapterDay, startOfDayNamed } from '@shared/time/chapter-time';
@@ -10,13 +9,14 @@ import { ToolCautions } from '@/components/ui/tool-cautions';
 import { messageOf } from '@/lib/errors';
 import { chapterTimeZone } from '@/lib/chapter-zone';
 import { formatDueDay } from '@/lib/format';
+import { confirmDone, type ActionDone } from '@/lib/action-done';
 import { useCheckOut } from '../api/tool-actions';
 
 /** The chapter day a moment falls on, as a date field holds it. */
 const toDateInput = (at: string | Date) => chapterDay(new Date(at), chapterTimeZone());
 
 /** Check out with the loan period's due date (editable) and the accessories listed so nothing stays behind. */
-export function CheckoutForm({ tool, onDone }: { tool: ToolForYou; onDone?: (said: string) => void }) {
+export function CheckoutForm({ tool, onDone }: { tool: ToolForYou; onDone?: ActionDone }) {
   const checkOut = useCheckOut();
   const [due, setDue] = useState(toDateInput(tool.forYou.defaultDueAt));
   const [ticked, setTicked] = useState<string[]>([]);
@@ -34,8 +34,7 @@ export function CheckoutForm({ tool, onDone }: { tool: ToolForYou; onDone?: (sai
       {
         onSuccess: (loan) => {
           const said = `${tool.code} is yours until ${formatDueDay(loan.dueAt)}.`;
-          toast.success(said);
-          onDone?.(said);
+          confirmDone(said, onDone);
         },
         onError: (err) => setProblem(messageOf(err)),
       },

@@ -1,10 +1,10 @@
 import { useState, type ReactNode } from 'react';
-import { toast } from 'sonner';
 import type { ToolForYou } from '@shared/schemas/tools';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { ReturnFields, returnBodyFrom, useReturnFieldValues } from '@/components/ui/return-fields';
 import { messageOf } from '@/lib/errors';
+import { confirmDone, type ActionDone } from '@/lib/action-done';
 import { useReturnTool } from '../api/tool-actions';
 
 export type PhotoSlot = (onUploaded: (photoId: number | undefined) => void) => ReactNode;
@@ -13,7 +13,7 @@ export type PhotoSlot = (onUploaded: (photoId: number | undefined) => void) => R
  * Return: did it come back ok or does it need attention (with a note, and a photo if the route
  * offers one)? A temporary fastener tray asks how many came back, so a short tray is recorded.
  */
-export function ReturnForm({ tool, photoSlot, onDone }: { tool: ToolForYou; photoSlot?: PhotoSlot; onDone?: (said: string) => void }) {
+export function ReturnForm({ tool, photoSlot, onDone }: { tool: ToolForYou; photoSlot?: PhotoSlot; onDone?: ActionDone }) {
   const giveBack = useReturnTool();
   const returned = { category: tool.category, trayCapacity: tool.trayCapacity, accessoriesOut: tool.loan?.accessoriesOut ?? null };
   const [fields, setFields] = useReturnFieldValues(returned);
@@ -34,8 +34,7 @@ export function ReturnForm({ tool, photoSlot, onDone }: { tool: ToolForYou; phot
           if (r.accessoriesMissing.length > 0) parts.push(`Not back: ${r.accessoriesMissing.join(', ')}; noted for the quartermaster.`);
           if (r.offeredTo) parts.push(`It is now held for ${r.offeredTo.name}.`);
           const said = parts.join(' ');
-          toast.success(said);
-          onDone?.(said);
+          confirmDone(said, onDone);
         },
         onError: (err) => setProblem(messageOf(err)),
       },

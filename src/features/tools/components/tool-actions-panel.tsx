@@ -8,9 +8,10 @@ import { formatDate } from '@/lib/format';
 import { useCancelHold, usePlaceHold } from '../api/tool-actions';
 import { CheckoutForm } from './checkout-form';
 import { ReturnForm, type PhotoSlot } from './return-form';
+import type { ActionDone } from '@/lib/action-done';
 
 /** The one or two things the signed-in person may do with this tool now, or why not. */
-export function ToolActionsPanel({ tool, photoSlot, onDone }: { tool: ToolForYou; photoSlot?: PhotoSlot; onDone?: (said: string) => void }) {
+export function ToolActionsPanel({ tool, photoSlot, onDone }: { tool: ToolForYou; photoSlot?: PhotoSlot; onDone?: ActionDone }) {
   const { actions, reason, yourHold } = tool.forYou;
   const placeHold = usePlaceHold();
   const cancelHold = useCancelHold();

@@ -6,7 +6,7 @@ import { IDEMPOTENCY_KEY_HEADER, PERFORMED_AT_HEADER } from '@shared/schemas/off
 import type { StationCopy, StationCopyPerson } from '@shared/schemas/stations';
 import { stationSignInWords } from '@shared/stations/station-sign-in-rules';
 import { StationRoute } from '@/app/routes/station';
-import { SAME_LABEL_QUIET_MS } from '@/app/routes/station/signed-in';
+import { SAME_LABEL_QUIET_MS } from '@/app/routes/station/just-left';
 import { enqueue, refusedOf, waitingOf, type NewQueuedAction } from '@/features/offline/api/queue';
 import { stationRefusedOf, stationWaitingOf } from '@/features/offline/api/station-queue';
 import { offlineDb } from '@/features/offline/db';
@@ -375,6 +375,33 @@ describe('a station without the network, with its copy', () => {
     expect(document.body.textContent).not.toContain('Marco');
     await typePin(user, PIN);
     expect(await screen.findByRole('heading', { name: 'Hello, Ines Okafor' }, SLOW)).toBeTruthy();
+  });
+
+  it('after Done, takes the badge still in front of the camera for that, not for signing in again', async () => {
+    const user = await marcoSignedInOffline();
+    await user.click(screen.getByRole('button', { name: 'Done' }));
+    await screen.findByRole('heading', { name: 'Scan your badge' });
+
+    // The badge screen's camera starts afresh and reads the badge the member still holds.
+    act(() => camera.read!(BADGE));
+    // The badge is checked against the copy by hashing (asynchronous): give that its time before saying no.
+    await expect(screen.findByRole('heading', { name: 'Type your PIN' }, { timeout: 1_500 })).rejects.toThrow();
+    expect(document.body.textContent).not.toContain('Marco');
+
+    // Shown again once the moment has passed, it asks for the PIN.
+    const later = Date.now() + SAME_LABEL_QUIET_MS;
+    vi.spyOn(Date, 'now').mockReturnValue(later);
+    act(() => camera.read!(BADGE));
+    expect(await screen.findByRole('heading', { name: 'Type your PIN' })).toBeTruthy();
+    vi.mocked(Date.now).mockRestore();
+  });
+
+  it('after Done, a badge typed into the badge scanner is taken at once', async () => {
+    const user = await marcoSignedInOffline();
+    await user.click(screen.getByRole('button', { name: 'Done' }));
+    await screen.findByRole('heading', { name: 'Scan your badge' });
+    await scanBadge(user, BADGE);
+    expect(await screen.findByRole('heading', { name: 'Type your PIN' })).toBeTruthy();
   });
 
   it('Done ends an offline session as online, with nothing sent', async () => {

@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import { useRef, useState, type ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import type { StoredStationCopy } from '@/features/offline/db';
 import { StationOfflineItem } from '@/features/offline/components/station-offline-item';
 import { NOT_OURS } from '@/features/stations/hooks/station-steps';
@@ -12,6 +12,7 @@ import { ScanEntry } from '@/features/stations/components/scan-entry';
 import { Button } from '@/components/ui/button';
 import { PageHeading } from '@/components/ui/page';
 import { messageOf } from '@/lib/errors';
+import { useJustLeft } from './just-left';
 import { readScan } from './read-scan';
 
 /** The tools' camera, its notices in their own dark text on the station's dark screen. */
@@ -42,18 +43,11 @@ interface SignedInProps {
   onDone: () => void;
 }
 
-/**
- * After an action, how long the camera's read of that same code is taken for its label still held in
- * front of the lens (the camera starts afresh with the scan list), not for a new scan. Typed or from a
- * USB scanner, the code opens at once.
- */
-export const SAME_LABEL_QUIET_MS = 5_000;
-
 /** One person at the station: scan a tool or bin, do what they may, and see what happened in large type. */
 export function SignedIn({ who, badge, offlineCopy, countdown, onScan, onBadge, onDone }: SignedInProps) {
   const [item, setItem] = useState<{ kind: 'tool' | 'bin'; code: string }>();
   const [result, setResult] = useState<string>();
-  const dealtWith = useRef<{ code: string; at: number }>(undefined);
+  const justLeft = useJustLeft();
   const scan = (raw: string) => {
     onScan();
     const scanned = readScan(raw);
@@ -64,13 +58,12 @@ export function SignedIn({ who, badge, offlineCopy, countdown, onScan, onBadge, 
   };
   const scanByCamera = (raw: string) => {
     const scanned = readScan(raw);
-    const last = dealtWith.current;
-    if ('code' in scanned && last?.code === scanned.code && Date.now() - last.at < SAME_LABEL_QUIET_MS) return;
+    if ('code' in scanned && justLeft.isLeftover(scanned.code)) return;
     scan(raw);
   };
   /** Back to the scan list, the label of the item just left perhaps still in front of the camera. */
   const leaveItem = (code: string) => {
-    dealtWith.current = { code, at: Date.now() };
+    justLeft.mark(code);
     setItem(undefined);
   };
   /** What was done, in the words that confirmed it (the due date, the tab), large enough to read from a step away. */

@@ -21,6 +21,7 @@ import { useIdleCountdown } from '@/features/stations/hooks/use-idle-countdown';
 import { Button } from '@/components/ui/button';
 import { PageHeading } from '@/components/ui/page';
 import { isNoConnection } from '@/lib/api-client';
+import { useJustLeft } from './just-left';
 import { readScan } from './read-scan';
 import { SignedIn, StationCamera, StationNotice } from './signed-in';
 
@@ -58,15 +59,17 @@ export function StationScreen({ station, onRevoked }: { station: KeptStation; on
     },
     [queryClient],
   );
+  const justLeft = useJustLeft();
   /** A session ends (Done, idle, the next badge): the server's is ended, then a fresh copy, then the queue. */
   const done = useCallback(
     (next: StationStep = { kind: 'badge' }) => {
       const ending = current.current;
+      if (ending.kind === 'signed-in') justLeft.mark(ending.badge);
       clearPerson(next);
       const ended = ending.kind === 'signed-in' && !ending.offline ? endStationSession() : Promise.resolve();
       void ended.then(sync.sync);
     },
-    [clearPerson, sync.sync],
+    [clearPerson, sync.sync, justLeft],
   );
 
   const idle = useIdleCountdown(signedIn, signedIn ? step.idleSeconds : STATION_IDLE_SECONDS, () =>
@@ -127,6 +130,12 @@ export function StationScreen({ station, onRevoked }: { station: KeptStation; on
     const scanned = readScan(raw);
     if (scanned.kind === 'badge') void takeBadge(scanned.badge);
     else setStep({ kind: 'badge', notice: scanned.kind === 'unknown' ? NOT_A_BADGE : NO_LABEL_YET });
+  };
+  /** The camera's read at the badge screen: the badge of the session just ended, still held up, is not a new sign-in. */
+  const cameraAtBadge = (raw: string) => {
+    const scanned = readScan(raw);
+    if (scanned.kind === 'badge' && justLeft.isLeftover(scanned.badge)) return;
+    scanAtBadge(raw);
   };
   const nextBadge = (badge: string) => {
     done({ kind: 'badge' });
@@ -197,7 +206,7 @@ export function StationScreen({ station, onRevoked }: { station: KeptStation; on
           <>
             <PageHeading title="Scan your badge" tabTitle="Station" className="text-4xl" />
             {step.notice && <StationNotice>{step.notice}</StationNotice>}
-            <StationCamera onCode={scanAtBadge} />
+            <StationCamera onCode={cameraAtBadge} />
             <ScanEntry label="Badge scanner" onCode={scanAtBadge} />
             <StationQueuePanel stationId={station.id} />
             <StationCopyStatus copy={sync.copy} offline={offline} />
